@@ -1,0 +1,18 @@
+/**
+ * Shared foundations: the {@link InputError} type, the validation helpers every module uses,
+ * and the caution and validity records that result objects carry.
+ *
+ * @module core
+ */
+export { InputError } from "./input-error.js";
+export {
+  requireFinite,
+  requirePositive,
+  requireNonNegative,
+  requireInRange,
+  requireInteger,
+  requireOneOf,
+  requireObject,
+} from "./validate.js";
+export { DEFER_TO_CODES } from "./caution.js";
+export type { Caution, CautionSeverity, ValidityNote } from "./caution.js";

@@ -1,0 +1,7 @@
+/**
+ * Special functions and numerical kernels: complete elliptic integrals, Bessel and Kelvin
+ * functions, complex arithmetic, quadrature, root finding and ODE integration.
+ *
+ * @module special
+ */
+export * from "./ode.js";

@@ -1,0 +1,6 @@
+/**
+ * Adaptive ODE integration (placeholder until the integrator lands).
+ *
+ * @packageDocumentation
+ */
+export {};

@@ -1,0 +1,6 @@
+/**
+ * Heat-up of the part: lumped and 1-D conduction models, time to temperature.
+ *
+ * @module thermal
+ */
+export {};

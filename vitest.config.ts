@@ -1,0 +1,11 @@
+import { defineConfig } from "vitest/config";
+
+export default defineConfig({
+  test: {
+    include: ["test/**/*.test.ts"],
+    reporters: ["default", "./test/summary-reporter.ts"],
+    testTimeout: 60_000,
+    coverage: { provider: "v8", include: ["src/**"] },
+    benchmark: { include: ["test/bench/**/*.bench.ts"] },
+  },
+});
