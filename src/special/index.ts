@@ -4,4 +4,5 @@
  *
  * @module special
  */
+export { ellipticK, ellipticE, ellipticKFromComplement, ellipticEFromComplement } from "./elliptic.js";
 export * from "./ode.js";
