@@ -1,6 +1,45 @@
 /**
- * Conductor, workpiece and core material property sets, each value sourced, with temperature-dependent resistivity and permeability.
+ * Conductor, workpiece and core material property sets, each value sourced, with
+ * temperature-dependent resistivity, specific heat, thermal conductivity and permeability
+ * (Curie transition and saturation).
+ *
+ * Every {@link ConductiveMaterial} carries `resistivity20` [Ω·m], `temperatureCoefficient`
+ * [1/K], `density` [kg/m³], `specificHeat20` [J/(kg·K)], `thermalConductivity` [W/(m·K)],
+ * `emissivity` (`min`/`max`/`typical`), `meltingTemperature` [K], `temperatureRange` [K],
+ * `magnetic`, and for magnetic ones `curieTemperature` [K] and a `permeability` model. Read
+ * temperature-dependent values with {@link resistivityAt}, {@link specificHeatAt},
+ * {@link thermalConductivityAt}, {@link relativePermeabilityAt} and
+ * {@link saturationFluxDensityAt}.
  *
  * @module materials
  */
-export {};
+export type {
+  ConductiveMaterial,
+  CoreMaterial,
+  EmissivityRange,
+  PermeabilityModel,
+  QuantityRange,
+  ResistivityModel,
+  SpecificHeatModel,
+  SteinmetzCoefficients,
+  SteinmetzTemperatureTerm,
+  TemperatureRange,
+  TemperatureTable,
+} from "./types.js";
+export { copper, aluminium, silver } from "./conductors.js";
+export {
+  lowCarbonSteel,
+  mediumCarbonSteel,
+  austeniticStainless,
+  ferriticStainless,
+  aluminiumAlloy,
+  brass,
+  titaniumAlloy,
+} from "./workpieces.js";
+export { conductiveMaterials } from "./catalogue.js";
+export { inventedExampleFerrite, inventedExampleIronPowder } from "./core-materials.js";
+export { resistivityAt } from "./resistivity.js";
+export { specificHeatAt } from "./specific-heat.js";
+export { thermalConductivityAt } from "./thermal-conductivity.js";
+export { relativePermeabilityAt, saturationFluxDensityAt } from "./permeability.js";
+export type { PermeabilityConditions } from "./permeability.js";

@@ -1,0 +1,134 @@
+/**
+ * Coil conductor metals: annealed copper, hard-drawn aluminium and silver.
+ *
+ * @packageDocumentation
+ */
+import { ANNEALED_COPPER_RESISTIVITY, ANNEALED_COPPER_TEMPERATURE_COEFFICIENT } from "../units/index.js";
+import { interpolateTemperatureTable } from "./interpolate.js";
+import type { ConductiveMaterial, TemperatureTable } from "./types.js";
+
+const INCROPERA = "F. P. Incropera, D. P. DeWitt et al., Fundamentals of Heat and Mass Transfer, Table A.1";
+
+/** A frozen table in kelvin. */
+function kelvinTable(temperatures: readonly number[], values: readonly number[], source: string): TemperatureTable {
+  return Object.freeze({ temperatures: Object.freeze([...temperatures]), values: Object.freeze([...values]), source });
+}
+
+const copperSpecificHeat = kelvinTable([200, 300, 400, 600, 800, 1000, 1200], [356, 385, 397, 417, 433, 451, 480], `${INCROPERA} (pure copper; from memory)`);
+const copperConductivity = kelvinTable([200, 300, 400, 600, 800, 1000, 1200], [413, 401, 393, 379, 366, 352, 339], `${INCROPERA} (pure copper; from memory)`);
+
+/**
+ * Annealed copper to IEC 60028: resistivity 1/58 µΩ·m ≈ 1.7241 × 10⁻⁸ Ω·m at 20 °C
+ * (58 MS/m, 100 % IACS), temperature coefficient 0.00393 /K, density 8890 kg/m³; the
+ * resistivity follows the standard's linear law over 200–1300 K. Thermal data are those of
+ * pure copper (Incropera & DeWitt, Table A.1, from memory); emissivity 0.02 (polished) to
+ * 0.78 (heavily oxidised), typical 0.1 (from memory). Melting point 1357.77 K (ITS-90
+ * fixed point). Use it for windings and for copper workpieces alike.
+ *
+ * @see IEC 60028:1925, International standard of resistance for copper.
+ * @example
+ * ```ts
+ * import { copper } from "fluxwright";
+ * console.log(copper.resistivity20.toPrecision(5)); // 1.7241e-8
+ * ```
+ * @category Materials
+ */
+export const copper: ConductiveMaterial = Object.freeze({
+  name: "annealed copper (IEC 60028)",
+  id: "copper",
+  resistivity20: ANNEALED_COPPER_RESISTIVITY,
+  temperatureCoefficient: ANNEALED_COPPER_TEMPERATURE_COEFFICIENT,
+  resistivity: Object.freeze({ kind: "linear", source: "IEC 60028:1925 (58 MS/m at 20 °C, 0.00393 /K)" }),
+  density: 8890,
+  specificHeat20: interpolateTemperatureTable(copperSpecificHeat, 293.15),
+  specificHeat: Object.freeze({ kind: "table", table: copperSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(copperConductivity, 293.15),
+  thermalConductivityTable: copperConductivity,
+  emissivity: Object.freeze({ min: 0.02, max: 0.78, typical: 0.1, source: "typical, from memory (polished to heavily oxidised)" }),
+  meltingTemperature: 1357.77,
+  temperatureRange: Object.freeze({ min: 200, max: 1300 }),
+  magnetic: false,
+  sources: Object.freeze([
+    "resistivity, temperature coefficient and density: IEC 60028:1925",
+    `specific heat and thermal conductivity: ${INCROPERA} (pure copper; from memory)`,
+    "melting point: ITS-90 fixed point of copper, 1084.62 °C",
+  ]),
+} as const);
+
+const aluminiumSpecificHeat = kelvinTable([200, 300, 400, 600, 800, 933], [798, 903, 949, 1033, 1146, 1200], `${INCROPERA} (pure aluminium; 933 K entry extrapolated; from memory)`);
+const aluminiumConductivity = kelvinTable([200, 300, 400, 600, 800], [237, 237, 240, 231, 218], `${INCROPERA} (pure aluminium; from memory)`);
+
+/**
+ * Hard-drawn aluminium to IEC 60889: resistivity 0.028264 µΩ·m = 2.8264 × 10⁻⁸ Ω·m at
+ * 20 °C (61 % IACS), temperature coefficient 0.00403 /K, density 2703 kg/m³; linear law
+ * over 200–900 K. Thermal data of pure aluminium (Incropera & DeWitt, Table A.1, from memory);
+ * emissivity 0.03–0.3, typical 0.09 (from memory). Melting point 933.473 K (ITS-90).
+ *
+ * @see IEC 60889:1987, Hard-drawn aluminium wire for overhead line conductors.
+ * @example
+ * ```ts
+ * import { aluminium } from "fluxwright";
+ * console.log(aluminium.resistivity20); // 2.8264e-8
+ * ```
+ * @category Materials
+ */
+export const aluminium: ConductiveMaterial = Object.freeze({
+  name: "hard-drawn aluminium (IEC 60889)",
+  id: "aluminium",
+  resistivity20: 2.8264e-8,
+  temperatureCoefficient: 0.00403,
+  resistivity: Object.freeze({ kind: "linear", source: "IEC 60889:1987 (0.028264 Ω·mm²/m at 20 °C, 0.00403 /K)" }),
+  density: 2703,
+  specificHeat20: interpolateTemperatureTable(aluminiumSpecificHeat, 293.15),
+  specificHeat: Object.freeze({ kind: "table", table: aluminiumSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(aluminiumConductivity, 293.15),
+  thermalConductivityTable: aluminiumConductivity,
+  emissivity: Object.freeze({ min: 0.03, max: 0.3, typical: 0.09, source: "typical, from memory (polished to oxidised, not anodised)" }),
+  meltingTemperature: 933.473,
+  temperatureRange: Object.freeze({ min: 200, max: 900 }),
+  magnetic: false,
+  sources: Object.freeze([
+    "resistivity, temperature coefficient and density: IEC 60889:1987",
+    `specific heat and thermal conductivity: ${INCROPERA} (pure aluminium; from memory)`,
+    "melting point: ITS-90 fixed point of aluminium, 660.323 °C",
+  ]),
+} as const);
+
+const silverSpecificHeat = kelvinTable([200, 300, 400, 600, 800, 1000], [225, 235, 239, 250, 262, 277], `${INCROPERA} (pure silver; from memory)`);
+const silverConductivity = kelvinTable([200, 300, 400, 600, 800, 1000], [430, 429, 425, 412, 396, 379], `${INCROPERA} (pure silver; from memory)`);
+
+/**
+ * Pure silver: resistivity 1.587 × 10⁻⁸ Ω·m at 20 °C and temperature coefficient
+ * 0.0038 /K (CRC Handbook of Chemistry and Physics, from memory), density 10 490 kg/m³;
+ * linear law over 200–1200 K. Thermal data from Incropera & DeWitt, Table A.1 (from memory);
+ * emissivity 0.02–0.1, typical 0.03 (from memory). Melting point 1234.93 K (ITS-90).
+ *
+ * @see CRC Handbook of Chemistry and Physics, "Electrical resistivity of pure metals" (from memory).
+ * @example
+ * ```ts
+ * import { silver } from "fluxwright";
+ * console.log(silver.resistivity20); // 1.587e-8
+ * ```
+ * @category Materials
+ */
+export const silver: ConductiveMaterial = Object.freeze({
+  name: "silver",
+  id: "silver",
+  resistivity20: 1.587e-8,
+  temperatureCoefficient: 0.0038,
+  resistivity: Object.freeze({ kind: "linear", source: "CRC Handbook of Chemistry and Physics (from memory)" }),
+  density: 10490,
+  specificHeat20: interpolateTemperatureTable(silverSpecificHeat, 293.15),
+  specificHeat: Object.freeze({ kind: "table", table: silverSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(silverConductivity, 293.15),
+  thermalConductivityTable: silverConductivity,
+  emissivity: Object.freeze({ min: 0.02, max: 0.1, typical: 0.03, source: "typical, from memory" }),
+  meltingTemperature: 1234.93,
+  temperatureRange: Object.freeze({ min: 200, max: 1200 }),
+  magnetic: false,
+  sources: Object.freeze([
+    "resistivity, temperature coefficient and density: CRC Handbook of Chemistry and Physics (from memory)",
+    `specific heat and thermal conductivity: ${INCROPERA} (pure silver; from memory)`,
+    "melting point: ITS-90 fixed point of silver, 961.78 °C",
+  ]),
+} as const);

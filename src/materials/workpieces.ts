@@ -1,0 +1,421 @@
+/**
+ * Workpiece metals: carbon steels, stainless steels, an aluminium alloy, brass and a
+ * titanium alloy (copper workpieces use {@link copper}).
+ *
+ * @packageDocumentation
+ */
+import { ANNEALED_COPPER_RESISTIVITY } from "../units/index.js";
+import { interpolateTemperatureTable, tableFromCelsius } from "./interpolate.js";
+import { carbonSteelSpecificHeatEn1993 } from "./specific-heat.js";
+import type { ConductiveMaterial, PermeabilityModel, TemperatureTable } from "./types.js";
+
+const T20 = 293.15;
+const INCROPERA = "F. P. Incropera, D. P. DeWitt et al., Fundamentals of Heat and Mass Transfer, Table A.1";
+const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.1.3 eq. (3.3) (thermal conductivity)";
+const KUZMIN_IRON = "magnetisation curve: M. D. Kuz'min, Phys. Rev. Lett. 94, 107204 (2005), s = 0.35, p = 4 for iron (from memory)";
+
+/** Slope of a table near 20 °C divided by its 20 °C value: α₂₀ [1/K] (derived, not typed in). */
+function coefficientNear20(table: TemperatureTable): number {
+  const r20 = interpolateTemperatureTable(table, T20);
+  const r100 = interpolateTemperatureTable(table, T20 + 80);
+  return (r100 - r20) / (80 * r20);
+}
+
+/** Freezes a permeability model. */
+function permeabilityModel(model: PermeabilityModel): PermeabilityModel {
+  return Object.freeze({ ...model });
+}
+
+// ---------------------------------------------------------------- low-carbon steel
+const lowCarbonResistivity = tableFromCelsius(
+  [20, 100, 200, 300, 400, 500, 600, 700, 750, 800, 850, 900, 1000, 1100, 1200, 1300],
+  [0.142, 0.19, 0.263, 0.349, 0.451, 0.571, 0.717, 0.887, 0.99, 1.077, 1.1, 1.116, 1.15, 1.178, 1.206, 1.23],
+  1e6,
+  "typical for a 0.1 % C steel, of the form of the BISRA (1953) elevated-temperature tables reproduced in the ASM Metals Handbook; typical, from memory",
+);
+const lowCarbonConductivity: TemperatureTable = Object.freeze({
+  temperatures: Object.freeze([300, 400, 600, 800, 1000, 1200, 1500]),
+  values: Object.freeze([63.9, 58.7, 48.8, 39.2, 31.3, 28.0, 30.0]),
+  source: `${INCROPERA} (AISI 1010, 300–1000 K; from memory); 1200 and 1500 K typical austenite values, from memory`,
+});
+
+/**
+ * Low-carbon steel (about 0.1 % C, AISI 1010 class). Resistivity 0.142 µΩ·m at 20 °C,
+ * rising about eightfold to 1.15 µΩ·m at 1000 °C (table, typical, from memory);
+ * density 7870 kg/m³; specific heat from EN 1993-1-2 with its peak at 735 °C; thermal
+ * conductivity 63.9 W/(m·K) at 300 K (Incropera, AISI 1010); emissivity 0.1–0.95, typical
+ * 0.8 (mill scale, from memory). Ferromagnetic: Curie temperature 1041 K (768 °C, the A2
+ * point of iron, common practice), low-field relative permeability 1000, saturation 2.0 T at
+ * 20 °C (typical, from memory), transition width 40 K. Documented range 293–1573 K.
+ *
+ * @see EN 1993-1-2:2005 (specific heat); Incropera & DeWitt Table A.1 (conductivity).
+ * @example
+ * ```ts
+ * import { lowCarbonSteel } from "fluxwright";
+ * console.log(lowCarbonSteel.curieTemperature); // 1041.15
+ * ```
+ * @category Materials
+ */
+export const lowCarbonSteel: ConductiveMaterial = Object.freeze({
+  name: "low-carbon steel (about 0.1 % C)",
+  id: "lowCarbonSteel",
+  resistivity20: interpolateTemperatureTable(lowCarbonResistivity, T20),
+  temperatureCoefficient: coefficientNear20(lowCarbonResistivity),
+  resistivity: Object.freeze({ kind: "table", table: lowCarbonResistivity }),
+  density: 7870,
+  specificHeat20: carbonSteelSpecificHeatEn1993(20),
+  specificHeat: Object.freeze({ kind: "en1993-carbon-steel", source: EN1993 }),
+  thermalConductivity: interpolateTemperatureTable(lowCarbonConductivity, T20),
+  thermalConductivityTable: lowCarbonConductivity,
+  emissivity: Object.freeze({ min: 0.1, max: 0.95, typical: 0.8, source: "typical, from memory (polished to heavily scaled)" }),
+  meltingTemperature: 1773,
+  temperatureRange: Object.freeze({ min: 293.15, max: 1573.15 }),
+  magnetic: true,
+  curieTemperature: 1041.15,
+  permeability: permeabilityModel({
+    initialRelativePermeability: 1000,
+    saturationFluxDensity: 2.0,
+    transitionWidth: 40,
+    magnetisationShape: 0.35,
+    magnetisationExponent: 4,
+    source: `μi and Bs typical, from memory; ${KUZMIN_IRON}`,
+  }),
+  sources: Object.freeze([
+    `resistivity: ${lowCarbonResistivity.source}`,
+    "density: typical, from memory",
+    `specific heat: ${EN1993}`,
+    `thermal conductivity: ${lowCarbonConductivity.source}`,
+    "Curie temperature 768 °C (A2 of iron): common practice; solidus about 1500 °C: common practice",
+  ]),
+});
+
+// ---------------------------------------------------------------- medium-carbon steel
+const mediumCarbonResistivity = tableFromCelsius(
+  [20, 100, 200, 300, 400, 500, 600, 700, 800, 900, 1000, 1100, 1200],
+  [0.16, 0.221, 0.296, 0.385, 0.49, 0.614, 0.761, 0.935, 1.111, 1.156, 1.179, 1.21, 1.235],
+  1e6,
+  "typical for a 0.4 % C steel, of the form of the BISRA (1953) elevated-temperature tables reproduced in the ASM Metals Handbook; typical, from memory",
+);
+/** EN 1993-1-2 eq. (3.3): λ = 54 − 3.33 × 10⁻² θ for 20 ≤ θ < 800 °C, 27.3 W/(m·K) above. */
+const en1993Conductivity = (theta: number): number => (theta < 800 ? 54 - 3.33e-2 * theta : 27.3);
+const mediumCarbonConductivity = tableFromCelsius(
+  [20, 799.999, 800, 1200],
+  [en1993Conductivity(20), en1993Conductivity(799.999), en1993Conductivity(800), en1993Conductivity(1200)],
+  1,
+  "EN 1993-1-2:2005, §3.4.1.3 eq. (3.3) (carbon steel)",
+);
+
+/**
+ * Medium-carbon steel (about 0.4–0.45 % C, AISI 1040/1045 class). Resistivity
+ * 0.160 µΩ·m at 20 °C to 1.18 µΩ·m at 1000 °C (table, typical, from memory); density
+ * 7850 kg/m³; specific heat (with its peak at 735 °C) and thermal conductivity from
+ * EN 1993-1-2; emissivity 0.1–0.95, typical 0.8 (from memory). Ferromagnetic: Curie
+ * temperature 1041 K (768 °C, common practice), low-field relative permeability 600,
+ * saturation 1.9 T at 20 °C (typical, from memory), transition width 40 K (covers the
+ * ferrite loss between A1 = 727 °C and A2). Documented range 293–1473 K.
+ *
+ * @see EN 1993-1-2:2005 (specific heat, thermal conductivity).
+ * @example
+ * ```ts
+ * import { mediumCarbonSteel } from "fluxwright";
+ * console.log(mediumCarbonSteel.magnetic); // true
+ * ```
+ * @category Materials
+ */
+export const mediumCarbonSteel: ConductiveMaterial = Object.freeze({
+  name: "medium-carbon steel (about 0.45 % C)",
+  id: "mediumCarbonSteel",
+  resistivity20: interpolateTemperatureTable(mediumCarbonResistivity, T20),
+  temperatureCoefficient: coefficientNear20(mediumCarbonResistivity),
+  resistivity: Object.freeze({ kind: "table", table: mediumCarbonResistivity }),
+  density: 7850,
+  specificHeat20: carbonSteelSpecificHeatEn1993(20),
+  specificHeat: Object.freeze({ kind: "en1993-carbon-steel", source: EN1993 }),
+  thermalConductivity: interpolateTemperatureTable(mediumCarbonConductivity, T20),
+  thermalConductivityTable: mediumCarbonConductivity,
+  emissivity: Object.freeze({ min: 0.1, max: 0.95, typical: 0.8, source: "typical, from memory (polished to heavily scaled)" }),
+  meltingTemperature: 1733,
+  temperatureRange: Object.freeze({ min: 293.15, max: 1473.15 }),
+  magnetic: true,
+  curieTemperature: 1041.15,
+  permeability: permeabilityModel({
+    initialRelativePermeability: 600,
+    saturationFluxDensity: 1.9,
+    transitionWidth: 40,
+    magnetisationShape: 0.35,
+    magnetisationExponent: 4,
+    source: `μi and Bs typical, from memory; ${KUZMIN_IRON}`,
+  }),
+  sources: Object.freeze([
+    `resistivity: ${mediumCarbonResistivity.source}`,
+    "density: typical, from memory",
+    `specific heat and thermal conductivity: ${EN1993}`,
+    "Curie temperature 768 °C (A2): common practice; solidus about 1460 °C: common practice",
+  ]),
+});
+
+// ---------------------------------------------------------------- austenitic stainless
+const austeniticResistivity = tableFromCelsius(
+  [20, 100, 200, 300, 400, 500, 600, 700, 800, 900, 1000, 1200],
+  [0.72, 0.78, 0.86, 0.92, 0.98, 1.03, 1.08, 1.12, 1.16, 1.19, 1.22, 1.27],
+  1e6,
+  "typical for AISI 304 class, typical, from memory",
+);
+const austeniticSpecificHeat: TemperatureTable = Object.freeze({
+  temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
+  values: Object.freeze([402, 477, 515, 557, 582, 611, 640, 682]),
+  source: `${INCROPERA} (AISI 304; from memory)`,
+});
+const austeniticConductivity: TemperatureTable = Object.freeze({
+  temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
+  values: Object.freeze([12.6, 14.9, 16.6, 19.8, 22.6, 25.4, 28.0, 31.7]),
+  source: `${INCROPERA} (AISI 304; from memory)`,
+});
+
+/**
+ * Austenitic stainless steel (18Cr–8Ni, AISI 304 class), non-magnetic. Resistivity
+ * 0.72 µΩ·m at 20 °C, 1.22 µΩ·m at 1000 °C (typical, from memory); density 7900 kg/m³;
+ * specific heat and thermal conductivity of AISI 304 from Incropera & DeWitt Table A.1
+ * (from memory); emissivity 0.1–0.85, typical 0.4 (from memory). Documented range
+ * 200–1500 K.
+ *
+ * @see Incropera & DeWitt, Table A.1 (AISI 304).
+ * @example
+ * ```ts
+ * import { austeniticStainless } from "fluxwright";
+ * console.log(austeniticStainless.magnetic); // false
+ * ```
+ * @category Materials
+ */
+export const austeniticStainless: ConductiveMaterial = Object.freeze({
+  name: "austenitic stainless steel (18Cr-8Ni)",
+  id: "austeniticStainless",
+  resistivity20: interpolateTemperatureTable(austeniticResistivity, T20),
+  temperatureCoefficient: coefficientNear20(austeniticResistivity),
+  resistivity: Object.freeze({ kind: "table", table: austeniticResistivity }),
+  density: 7900,
+  specificHeat20: interpolateTemperatureTable(austeniticSpecificHeat, T20),
+  specificHeat: Object.freeze({ kind: "table", table: austeniticSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(austeniticConductivity, T20),
+  thermalConductivityTable: austeniticConductivity,
+  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: "typical, from memory" }),
+  meltingTemperature: 1673,
+  temperatureRange: Object.freeze({ min: 200, max: 1500 }),
+  magnetic: false,
+  sources: Object.freeze([
+    `resistivity: ${austeniticResistivity.source}`,
+    "density: typical, from memory",
+    `specific heat and thermal conductivity: ${INCROPERA} (AISI 304; from memory)`,
+    "solidus about 1400 °C: common practice",
+  ]),
+});
+
+// ---------------------------------------------------------------- ferritic stainless
+const ferriticResistivity = tableFromCelsius(
+  [20, 100, 200, 400, 600, 700, 800, 1000, 1200],
+  [0.6, 0.66, 0.74, 0.88, 1.0, 1.05, 1.09, 1.15, 1.2],
+  1e6,
+  "typical for AISI 430 class, typical, from memory",
+);
+const ferriticSpecificHeat = tableFromCelsius(
+  [20, 200, 400, 600, 800, 1000],
+  [460, 530, 590, 680, 650, 660],
+  1,
+  "typical for AISI 430 class, from memory; the anomaly at the Curie temperature is not resolved",
+);
+const ferriticConductivity = tableFromCelsius(
+  [20, 100, 500, 800, 1000],
+  [25.0, 26.1, 26.3, 26.5, 27.5],
+  1,
+  "typical for AISI 430 class, from memory",
+);
+
+/**
+ * Ferritic stainless steel (17Cr, AISI 430 class), ferromagnetic (martensitic grades behave
+ * alike for heating purposes). Resistivity 0.60 µΩ·m at 20 °C (typical, from memory);
+ * density 7750 kg/m³; specific heat and conductivity typical, from memory (the Curie anomaly
+ * of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4. Curie
+ * temperature 943 K (670 °C, from memory), low-field relative permeability 750, saturation
+ * 1.5 T at 20 °C (typical, from memory), transition width 40 K. Documented range
+ * 293–1473 K.
+ *
+ * @see ASM Metals Handbook, Vol. 1, properties of wrought stainless steels (typical values, from memory).
+ * @example
+ * ```ts
+ * import { ferriticStainless } from "fluxwright";
+ * console.log(ferriticStainless.curieTemperature); // 943.15
+ * ```
+ * @category Materials
+ */
+export const ferriticStainless: ConductiveMaterial = Object.freeze({
+  name: "ferritic stainless steel (17Cr)",
+  id: "ferriticStainless",
+  resistivity20: interpolateTemperatureTable(ferriticResistivity, T20),
+  temperatureCoefficient: coefficientNear20(ferriticResistivity),
+  resistivity: Object.freeze({ kind: "table", table: ferriticResistivity }),
+  density: 7750,
+  specificHeat20: interpolateTemperatureTable(ferriticSpecificHeat, T20),
+  specificHeat: Object.freeze({ kind: "table", table: ferriticSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(ferriticConductivity, T20),
+  thermalConductivityTable: ferriticConductivity,
+  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: "typical, from memory" }),
+  meltingTemperature: 1698,
+  temperatureRange: Object.freeze({ min: 293.15, max: 1473.15 }),
+  magnetic: true,
+  curieTemperature: 943.15,
+  permeability: permeabilityModel({
+    initialRelativePermeability: 750,
+    saturationFluxDensity: 1.5,
+    transitionWidth: 40,
+    magnetisationShape: 0.35,
+    magnetisationExponent: 4,
+    source: `μi, Bs and Curie temperature typical, from memory; ${KUZMIN_IRON}`,
+  }),
+  sources: Object.freeze([
+    `resistivity: ${ferriticResistivity.source}`,
+    "density: typical, from memory",
+    `specific heat: ${ferriticSpecificHeat.source}`,
+    `thermal conductivity: ${ferriticConductivity.source}`,
+    "Curie temperature about 670 °C: from memory; solidus about 1425 °C: common practice",
+  ]),
+});
+
+// ---------------------------------------------------------------- aluminium alloy
+/** 6061-T6 class: 43 % IACS (typical, from memory). */
+const alloyResistivity20 = ANNEALED_COPPER_RESISTIVITY / 0.43;
+/** Matthiessen's rule: the same dρ/dT as IEC 60889 aluminium, 2.8264e-8 × 0.00403 Ω·m/K. */
+const alloyCoefficient = (2.8264e-8 * 0.00403) / alloyResistivity20;
+const alloySpecificHeat = tableFromCelsius([20, 100, 200, 300, 400, 500], [896, 945, 985, 1030, 1080, 1130], 1, "typical for 6061 class, from memory");
+const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 177, 186, 190, 192, 190], 1, "typical for 6061-T6 class, from memory");
+
+/**
+ * Wrought aluminium alloy (Al–Mg–Si, 6061-T6 class). Resistivity 43 % IACS
+ * (≈ 4.01 × 10⁻⁸ Ω·m at 20 °C, typical, from memory) with the temperature slope of pure
+ * aluminium (Matthiessen's rule: dρ/dT of IEC 60889 aluminium, so α₂₀ ≈ 0.00284 /K);
+ * density 2700 kg/m³; specific heat 896 J/(kg·K) and conductivity 167 W/(m·K) at 20 °C
+ * (typical, from memory); emissivity 0.03–0.3, typical 0.1; solidus 855 K. Documented range
+ * 200–850 K.
+ *
+ * @see A. Matthiessen, C. Vogt, Ann. Phys. 198 (1864) 19 (Matthiessen's rule).
+ * @example
+ * ```ts
+ * import { aluminiumAlloy } from "fluxwright";
+ * console.log(aluminiumAlloy.temperatureCoefficient.toFixed(5)); // 0.00284
+ * ```
+ * @category Materials
+ */
+export const aluminiumAlloy: ConductiveMaterial = Object.freeze({
+  name: "wrought aluminium alloy (Al-Mg-Si, 43 % IACS)",
+  id: "aluminiumAlloy",
+  resistivity20: alloyResistivity20,
+  temperatureCoefficient: alloyCoefficient,
+  resistivity: Object.freeze({ kind: "linear", source: "43 % IACS typical (from memory); slope by Matthiessen's rule from IEC 60889 aluminium" }),
+  density: 2700,
+  specificHeat20: interpolateTemperatureTable(alloySpecificHeat, T20),
+  specificHeat: Object.freeze({ kind: "table", table: alloySpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(alloyConductivity, T20),
+  thermalConductivityTable: alloyConductivity,
+  emissivity: Object.freeze({ min: 0.03, max: 0.3, typical: 0.1, source: "typical, from memory" }),
+  meltingTemperature: 855,
+  temperatureRange: Object.freeze({ min: 200, max: 850 }),
+  magnetic: false,
+  sources: Object.freeze([
+    "resistivity: 43 % IACS, typical, from memory; slope by Matthiessen's rule",
+    "density, specific heat, conductivity, solidus: typical, from memory",
+  ]),
+});
+
+// ---------------------------------------------------------------- brass
+const brassSpecificHeat: TemperatureTable = Object.freeze({
+  temperatures: Object.freeze([300, 400, 600, 800]),
+  values: Object.freeze([380, 395, 425, 440]),
+  source: `${INCROPERA} (cartridge brass 70Cu-30Zn, 300–600 K; 800 K extrapolated; from memory)`,
+});
+const brassConductivity: TemperatureTable = Object.freeze({
+  temperatures: Object.freeze([300, 400, 600, 800]),
+  values: Object.freeze([110, 133, 143, 146]),
+  source: `${INCROPERA} (cartridge brass 70Cu-30Zn; from memory)`,
+});
+
+/**
+ * Brass (70Cu–30Zn cartridge brass class). Resistivity 28 % IACS ≈ 6.16 × 10⁻⁸ Ω·m at
+ * 20 °C, temperature coefficient 0.0015 /K (typical, from memory), linear; density
+ * 8530 kg/m³; specific heat and conductivity from Incropera & DeWitt, Table A.1 (from memory);
+ * emissivity 0.03–0.6, typical 0.2; solidus 1188 K. Documented range 293–1100 K.
+ *
+ * @see Incropera & DeWitt, Table A.1 (cartridge brass).
+ * @example
+ * ```ts
+ * import { brass } from "fluxwright";
+ * console.log(brass.density); // 8530
+ * ```
+ * @category Materials
+ */
+export const brass: ConductiveMaterial = Object.freeze({
+  name: "brass (70Cu-30Zn)",
+  id: "brass",
+  resistivity20: ANNEALED_COPPER_RESISTIVITY / 0.28,
+  temperatureCoefficient: 0.0015,
+  resistivity: Object.freeze({ kind: "linear", source: "28 % IACS and 0.0015 /K, typical, from memory" }),
+  density: 8530,
+  specificHeat20: interpolateTemperatureTable(brassSpecificHeat, T20),
+  specificHeat: Object.freeze({ kind: "table", table: brassSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(brassConductivity, T20),
+  thermalConductivityTable: brassConductivity,
+  emissivity: Object.freeze({ min: 0.03, max: 0.6, typical: 0.2, source: "typical, from memory" }),
+  meltingTemperature: 1188,
+  temperatureRange: Object.freeze({ min: 293.15, max: 1100 }),
+  magnetic: false,
+  sources: Object.freeze([
+    "resistivity and temperature coefficient: typical, from memory",
+    `density, specific heat, conductivity: ${INCROPERA} (cartridge brass; from memory)`,
+    "solidus about 915 °C: common practice",
+  ]),
+});
+
+// ---------------------------------------------------------------- titanium alloy
+const titaniumResistivity = tableFromCelsius(
+  [20, 200, 400, 600, 800, 1000],
+  [1.7, 1.8, 1.9, 1.98, 2.04, 2.06],
+  1e6,
+  "typical for Ti-6Al-4V class, typical, from memory",
+);
+const titaniumSpecificHeat = tableFromCelsius([20, 200, 400, 600, 800, 1000], [526, 570, 610, 650, 690, 720], 1, "typical for Ti-6Al-4V class, from memory");
+const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6.7, 8.8, 11.5, 14.0, 17.0, 20.0], 1, "typical for Ti-6Al-4V class, from memory");
+
+/**
+ * Titanium alloy (Ti–6Al–4V class), non-magnetic. Resistivity 1.70 µΩ·m at 20 °C,
+ * rising slowly to 2.06 µΩ·m at 1000 °C; density 4430 kg/m³; specific heat 526 J/(kg·K)
+ * and conductivity 6.7 W/(m·K) at 20 °C; emissivity 0.2–0.8, typical 0.5; solidus 1877 K
+ * (all typical, from memory). Documented range 293–1273 K.
+ *
+ * @see ASM Materials Properties Handbook: Titanium Alloys (typical values, from memory).
+ * @example
+ * ```ts
+ * import { titaniumAlloy } from "fluxwright";
+ * console.log(titaniumAlloy.density); // 4430
+ * ```
+ * @category Materials
+ */
+export const titaniumAlloy: ConductiveMaterial = Object.freeze({
+  name: "titanium alloy (Ti-6Al-4V)",
+  id: "titaniumAlloy",
+  resistivity20: interpolateTemperatureTable(titaniumResistivity, T20),
+  temperatureCoefficient: coefficientNear20(titaniumResistivity),
+  resistivity: Object.freeze({ kind: "table", table: titaniumResistivity }),
+  density: 4430,
+  specificHeat20: interpolateTemperatureTable(titaniumSpecificHeat, T20),
+  specificHeat: Object.freeze({ kind: "table", table: titaniumSpecificHeat }),
+  thermalConductivity: interpolateTemperatureTable(titaniumConductivity, T20),
+  thermalConductivityTable: titaniumConductivity,
+  emissivity: Object.freeze({ min: 0.2, max: 0.8, typical: 0.5, source: "typical, from memory" }),
+  meltingTemperature: 1877,
+  temperatureRange: Object.freeze({ min: 293.15, max: 1273.15 }),
+  magnetic: false,
+  sources: Object.freeze([
+    `resistivity: ${titaniumResistivity.source}`,
+    "density, solidus: typical, from memory",
+    `specific heat: ${titaniumSpecificHeat.source}`,
+    `thermal conductivity: ${titaniumConductivity.source}`,
+  ]),
+});

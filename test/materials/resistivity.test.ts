@@ -1,0 +1,46 @@
+import { describe, expect, it } from "vitest";
+import { InputError, celsius } from "../../src/index.js";
+import { aluminium, copper, lowCarbonSteel, resistivityAt, austeniticStainless } from "../../src/materials/index.js";
+import data from "../fixtures/materials/resistivity-linear.json" with { type: "json" };
+
+const sets = { copper, aluminium } as const;
+
+describe("resistivityAt", () => {
+  it("gives annealed copper 1/58 µΩ·m at 20 °C (IEC 60028)", () => {
+    expect(resistivityAt(copper, celsius(20))).toBeCloseTo(1.7241e-8, 12); // IEC 60028
+    expect(copper.temperatureCoefficient).toBe(0.00393); // IEC 60028
+  });
+
+  it("gives hard-drawn aluminium 0.028264 µΩ·m at 20 °C (IEC 60889)", () => {
+    expect(resistivityAt(aluminium, celsius(20))).toBe(2.8264e-8); // IEC 60889
+  });
+
+  it("matches the IEC linear laws (fixture from mpmath, generate.py)", () => {
+    for (const c of data.cases) {
+      const got = resistivityAt(sets[c.material as keyof typeof sets], c.temperature);
+      expect(Math.abs(got - c.resistivity) / c.resistivity).toBeLessThanOrEqual(data.meta.rtol);
+    }
+  });
+
+  it("reads tabulated steel data exactly at the table points (typical, from memory)", () => {
+    expect(resistivityAt(lowCarbonSteel, celsius(1000))).toBeCloseTo(1.15e-6, 15);
+    expect(resistivityAt(austeniticStainless, celsius(20))).toBeCloseTo(0.72e-6, 15);
+  });
+
+  it("holds end values outside the documented range", () => {
+    expect(resistivityAt(copper, 10)).toBe(resistivityAt(copper, copper.temperatureRange.min));
+    expect(resistivityAt(lowCarbonSteel, 3000)).toBe(resistivityAt(lowCarbonSteel, celsius(1300)));
+  });
+
+  it("prints the documented example", () => {
+    expect(resistivityAt(copper, celsius(100))).toBeCloseTo(2.2662e-8, 12);
+  });
+
+  it("throws InputError for bad temperature or material", () => {
+    expect(() => resistivityAt(copper, 0)).toThrow(InputError);
+    expect(() => resistivityAt(copper, -5)).toThrow(InputError);
+    expect(() => resistivityAt(copper, Number.NaN)).toThrow(InputError);
+    expect(() => resistivityAt(copper, Infinity)).toThrow(/temperature/);
+    expect(() => resistivityAt(null as never, 300)).toThrow(InputError);
+  });
+});

@@ -1,0 +1,53 @@
+import { describe, expect, it } from "vitest";
+import { InputError, celsius } from "../../src/index.js";
+import { copper, lowCarbonSteel, mediumCarbonSteel, specificHeatAt, austeniticStainless } from "../../src/materials/index.js";
+import data from "../fixtures/materials/specific-heat-en1993.json" with { type: "json" };
+
+describe("specificHeatAt", () => {
+  it("follows EN 1993-1-2 eq. (3.2) for carbon steel (fixture from mpmath, generate.py)", () => {
+    for (const c of data.cases) {
+      for (const steel of [lowCarbonSteel, mediumCarbonSteel]) {
+        const got = specificHeatAt(steel, c.temperature);
+        expect(Math.abs(got - c.specificHeat) / c.specificHeat).toBeLessThanOrEqual(data.meta.rtol);
+      }
+    }
+  });
+
+  it("peaks at 5000 J/(kg·K) at 735 °C for carbon steel (EN 1993-1-2 §3.4.1.2)", () => {
+    expect(specificHeatAt(lowCarbonSteel, celsius(735))).toBeCloseTo(5000, 9);
+    expect(specificHeatAt(lowCarbonSteel, celsius(700))).toBeLessThan(5000);
+    expect(specificHeatAt(lowCarbonSteel, celsius(760))).toBeLessThan(5000);
+  });
+
+  it("gives 650 J/(kg·K) for carbon steel above 900 °C (EN 1993-1-2)", () => {
+    expect(specificHeatAt(mediumCarbonSteel, celsius(1100))).toBe(650);
+  });
+
+  it("gives pure copper 385 J/(kg·K) at 300 K (Incropera Table A.1, from memory)", () => {
+    expect(specificHeatAt(copper, 300)).toBe(385);
+  });
+
+  it("gives AISI 304 557 J/(kg·K) at 600 K (Incropera Table A.1, from memory)", () => {
+    expect(specificHeatAt(austeniticStainless, 600)).toBe(557);
+  });
+
+  it("the carbon-steel peak adds about 101 kJ/kg above a 650 J/(kg·K) baseline over 600–900 °C", () => {
+    // trapezoid integral of (c − smooth baseline 650) on a fine grid
+    let excess = 0;
+    const n = 30000;
+    const a = celsius(600);
+    const b = celsius(900);
+    const h = (b - a) / n;
+    for (let i = 0; i < n; i++) {
+      const t0 = a + i * h;
+      excess += 0.5 * h * (specificHeatAt(lowCarbonSteel, t0) + specificHeatAt(lowCarbonSteel, t0 + h) - 2 * 650);
+    }
+    // mpmath quad of EN 1993-1-2 eq. (3.2) minus 650 over [600, 735, 900] °C: 101326.025 J/kg
+    expect(Math.abs(excess - 101326.025) / 101326.025).toBeLessThan(1e-4);
+  });
+
+  it("throws InputError for a non-positive temperature", () => {
+    expect(() => specificHeatAt(copper, 0)).toThrow(InputError);
+    expect(() => specificHeatAt(undefined as never, 300)).toThrow(InputError);
+  });
+});
