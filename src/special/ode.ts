@@ -400,7 +400,7 @@ export function solveOde(
     if (attempts >= maxSteps) return finish("max-steps", t, y, null, null);
     attempts++;
     const remaining = (t1 - t) * direction;
-    const minStep = 16 * Number.EPSILON * Math.max(Math.abs(t), Math.abs(t1), Number.MIN_VALUE);
+    const minStep = 16 * Number.EPSILON * Math.max(Math.abs(t), Number.MIN_VALUE);
     let last = false;
     if (h >= remaining || remaining - h <= minStep) {
       h = remaining;

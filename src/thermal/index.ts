@@ -3,4 +3,7 @@
  *
  * @module thermal
  */
-export {};
+export { lumpedHeatUp } from "./lumped-heat-up.js";
+export type { LumpedHeatUpOptions, LumpedHeatUpResult, LumpedEnergyBalance } from "./lumped-heat-up.js";
+export { steadyStateTemperature } from "./steady-state.js";
+export type { SteadyStateTemperatureOptions } from "./steady-state.js";
