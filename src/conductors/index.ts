@@ -3,4 +3,7 @@
  *
  * @module conductors
  */
-export {};
+export * from "./skin-depth.js";
+export * from "./dc-resistance.js";
+export { dowellFactor } from "./dowell.js";
+export type { DowellFactorOptions } from "./dowell.js";
