@@ -7,3 +7,10 @@
 export * from "./constants.js";
 export * from "./quantities.js";
 export * from "./temperature.js";
+export * from "./length.js";
+export * from "./wire-gauge.js";
+export { SI_PREFIXES } from "./prefixes.js";
+export type { SiPrefix } from "./prefixes.js";
+export { parseQuantity } from "./parse.js";
+export { formatQuantity } from "./format.js";
+export type { FormatQuantityOptions } from "./format.js";

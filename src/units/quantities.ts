@@ -9,8 +9,22 @@
  * @packageDocumentation
  */
 
-/** A number tagged with a unit symbol at the type level only. @category Unit types */
-export type Quantity<U extends string> = number & { readonly unit: U };
+/**
+ * A number tagged with a unit symbol at the type level only.
+ * @typeParam U - the unit symbol, e.g. `"H"`
+ * @category Unit types
+ */
+export type Quantity<U extends string> = number & UnitTag<U>;
+
+/**
+ * The type-level tag carried by a {@link Quantity}; it never exists at run time.
+ * @typeParam U - the unit symbol
+ * @category Unit types
+ */
+export interface UnitTag<U extends string> {
+  /** The unit symbol (type level only). */
+  readonly unit: U;
+}
 
 /** Length [m]. @category Unit types */
 export type Metres = Quantity<"m">;
