@@ -4,8 +4,8 @@
  * @packageDocumentation
  */
 import { requireObject, requirePositive } from "../core/index.js";
-import { resistivityAt } from "../materials/resistivity.js";
-import type { ConductiveMaterial } from "../materials/types.js";
+import { resistivityAt } from "../materials/index.js";
+import type { ConductiveMaterial } from "../materials/index.js";
 
 /** Options of {@link wireDcResistance}. @category Conductors */
 export interface WireDcResistanceOptions {
@@ -78,7 +78,7 @@ export interface WireDcResistanceAtOptions {
  * ```ts
  * import { wireDcResistanceAt, copper, celsius } from "fluxwright";
  * // 10 m of 1 mm copper at 100 °C
- * console.log(wireDcResistanceAt({ material: copper, temperature: celsius(100), length: 10, diameter: 1e-3 })); // ≈ 0.28853
+ * console.log(wireDcResistanceAt({ material: copper, temperature: celsius(100), length: 10, diameter: 1e-3 })); // ≈ 0.28854
  * ```
  * @category Conductors
  */
