@@ -3,4 +3,9 @@
  *
  * @module tank
  */
-export {};
+export * from "./network.js";
+export * from "./series-tank.js";
+export * from "./parallel-tank.js";
+export * from "./tank-stresses.js";
+export * from "./current-fed-inverter.js";
+export * from "./series-inverter.js";
