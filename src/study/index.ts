@@ -3,4 +3,42 @@
  *
  * @module study
  */
-export {};
+export type {
+  QuantityInput,
+  HeaterSupply,
+  CurrentFedParallelInverterDescription,
+  SeriesInverterDescription,
+  HeaterInverter,
+  SolidConductorDescription,
+  LitzConductorDescription,
+  TubeConductorDescription,
+  HeaterConductor,
+  SolenoidCoilDescription,
+  PancakeCoilDescription,
+  HeaterCoil,
+  HeaterCapacitorBank,
+  HeaterConcentrator,
+  PartCommon,
+  BarPartDescription,
+  TubePartDescription,
+  RingPartDescription,
+  PlatePartDescription,
+  HeaterPart,
+  HeaterEnvironment,
+  HeaterDescription,
+} from "./description.js";
+export { readHeaterDescription, HeaterDescriptionError } from "./read-description.js";
+export type {
+  ResolvedSupply,
+  ResolvedCurrentFedInverter,
+  ResolvedSeriesInverter,
+  ResolvedInverter,
+  ResolvedConductor,
+  ResolvedCoil,
+  ResolvedCapacitorBank,
+  ResolvedConcentrator,
+  ResolvedPartCommon,
+  ResolvedPart,
+  ResolvedEnvironment,
+  ResolvedHeaterDescription,
+} from "./read-description.js";

@@ -1,0 +1,336 @@
+/**
+ * The heater description: everything a study needs to know about one induction-heater design
+ * (supply, inverter, coil and its conductor, capacitor bank, optional flux concentrator, the
+ * part to heat and its surroundings). Quantities are SI numbers; study files may also give
+ * them as text with units (`"30 mm"`, `"4.7 µF"`, `"20 °C"`), see {@link readHeaterDescription}.
+ *
+ * @packageDocumentation
+ */
+
+/**
+ * A quantity as written in a study file: an SI number, or text with a unit that
+ * `parseQuantity` reads (`"4.7 µF"`, `"30 mm"`, `"850 °C"`).
+ *
+ * @category Heater study
+ */
+export type QuantityInput = number | string;
+
+/**
+ * The DC source feeding the inverter.
+ *
+ * @category Heater study
+ */
+export interface HeaterSupply {
+  /** `"battery"` (a pack, whose internal resistance matters) or `"dc-bus"` (a rectified or bench supply). */
+  readonly kind: "battery" | "dc-bus";
+  /** Open-circuit (no-load) voltage [V], > 0. */
+  readonly voltage: QuantityInput;
+  /** Internal (source) resistance [Ω], ≥ 0; default 0. */
+  readonly internalResistance?: QuantityInput;
+  /** Largest current the source may deliver [A], > 0; exceeding it raises a caution. Optional. */
+  readonly currentLimit?: QuantityInput;
+}
+
+/**
+ * The self-oscillating, choke-fed push-pull inverter driving a parallel tank at its zero-phase
+ * frequency (the common small-heater topology).
+ *
+ * @category Heater study
+ */
+export interface CurrentFedParallelInverterDescription {
+  /** Topology tag. */
+  readonly kind: "current-fed-parallel";
+  /** Inductance of the feed choke [H], > 0. */
+  readonly chokeInductance: QuantityInput;
+  /** On-state resistance of each switch [Ω], ≥ 0 (MOSFET R_DS(on) at working temperature). */
+  readonly switchOnResistance: QuantityInput;
+  /** Voltage rating of the switches [V], > 0; a caution is raised when the peak exceeds 80 % of it. Optional. */
+  readonly switchVoltageRating?: QuantityInput;
+}
+
+/**
+ * A voltage-fed half or full bridge driving a series tank at a fixed switching frequency, or at
+ * the frequency (above resonance, zero-voltage switching side) that delivers a target power.
+ *
+ * @category Heater study
+ */
+export interface SeriesInverterDescription {
+  /** Topology tag. */
+  readonly kind: "voltage-fed-series";
+  /** `"half"` or `"full"` bridge. */
+  readonly bridge: "half" | "full";
+  /** `"fixed"`: run at `frequency`; `"power-tracking"`: find the frequency delivering `targetPower`. */
+  readonly control: "fixed" | "power-tracking";
+  /** Switching frequency [Hz], > 0; required when `control` is `"fixed"`. */
+  readonly frequency?: QuantityInput;
+  /** Power into the tank [W], > 0; required when `control` is `"power-tracking"`. */
+  readonly targetPower?: QuantityInput;
+  /** On-state resistance of each switch [Ω], ≥ 0. */
+  readonly switchOnResistance: QuantityInput;
+  /** Voltage rating of the switches [V], > 0. Optional. */
+  readonly switchVoltageRating?: QuantityInput;
+}
+
+/**
+ * The inverter topology and its switches.
+ *
+ * @category Heater study
+ */
+export type HeaterInverter = CurrentFedParallelInverterDescription | SeriesInverterDescription;
+
+/**
+ * A solid round wire.
+ *
+ * @category Heater study
+ */
+export interface SolidConductorDescription {
+  /** Conductor type tag. */
+  readonly kind: "solid";
+  /** Wire diameter [m], > 0. */
+  readonly diameter: QuantityInput;
+  /** Conductor material id from the materials catalogue (`"copper"`, `"aluminium"`, `"silver"`); default `"copper"`. */
+  readonly material?: string;
+}
+
+/**
+ * A litz wire of equal round strands.
+ *
+ * @category Heater study
+ */
+export interface LitzConductorDescription {
+  /** Conductor type tag. */
+  readonly kind: "litz";
+  /** Number of strands, integer ≥ 1. */
+  readonly strands: number;
+  /** Diameter of one strand (bare copper) [m], > 0. */
+  readonly strandDiameter: QuantityInput;
+  /** Outer diameter of the bundle [m], > 0; default from a packing factor of 0.5 (common practice). */
+  readonly outerDiameter?: QuantityInput;
+  /** Conductor material id; default `"copper"`. */
+  readonly material?: string;
+}
+
+/**
+ * A hollow round tube (water-cooled work coils).
+ *
+ * @category Heater study
+ */
+export interface TubeConductorDescription {
+  /** Conductor type tag. */
+  readonly kind: "tube";
+  /** Outer diameter of the tube [m], > 0. */
+  readonly outerDiameter: QuantityInput;
+  /** Wall thickness [m], > 0 and less than half the outer diameter. */
+  readonly wallThickness: QuantityInput;
+  /** Conductor material id; default `"copper"`. */
+  readonly material?: string;
+}
+
+/**
+ * The conductor a coil is wound from.
+ *
+ * @category Heater study
+ */
+export type HeaterConductor = SolidConductorDescription | LitzConductorDescription | TubeConductorDescription;
+
+/**
+ * A single-layer solenoid (helical work coil) around the part.
+ *
+ * @category Heater study
+ */
+export interface SolenoidCoilDescription {
+  /** Coil shape tag. */
+  readonly shape: "solenoid";
+  /** Radius to the conductor centres [m], > 0. */
+  readonly radius: QuantityInput;
+  /** Winding length = turns × pitch [m], > 0. */
+  readonly length: QuantityInput;
+  /** Number of turns, integer ≥ 1. */
+  readonly turns: number;
+  /** The conductor. */
+  readonly conductor: HeaterConductor;
+  /** Length of the leads between coil and capacitor bank (both together) [m], ≥ 0; default 0. */
+  readonly leadLength?: QuantityInput;
+  /** Working temperature of the conductor [K], > 0; default 40 °C (common practice for a cooled coil). */
+  readonly temperature?: QuantityInput;
+}
+
+/**
+ * A flat spiral (pancake) coil under or over a plate.
+ *
+ * @category Heater study
+ */
+export interface PancakeCoilDescription {
+  /** Coil shape tag. */
+  readonly shape: "pancake";
+  /** Radius of the innermost turn's conductor centre [m], > 0. */
+  readonly innerRadius: QuantityInput;
+  /** Radius of the outermost turn's conductor centre [m], > innerRadius. */
+  readonly outerRadius: QuantityInput;
+  /** Number of turns, integer ≥ 1. */
+  readonly turns: number;
+  /** Gap from the conductor's face to the part's surface [m], ≥ 0. */
+  readonly liftOff: QuantityInput;
+  /** The conductor. */
+  readonly conductor: HeaterConductor;
+  /** Length of the leads [m], ≥ 0; default 0. */
+  readonly leadLength?: QuantityInput;
+  /** Working temperature of the conductor [K], > 0; default 40 °C. */
+  readonly temperature?: QuantityInput;
+}
+
+/**
+ * The work coil.
+ *
+ * @category Heater study
+ */
+export type HeaterCoil = SolenoidCoilDescription | PancakeCoilDescription;
+
+/**
+ * The resonant capacitor bank, as one equivalent capacitor.
+ *
+ * @category Heater study
+ */
+export interface HeaterCapacitorBank {
+  /** Total capacitance [F], > 0. */
+  readonly capacitance: QuantityInput;
+  /** Dissipation factor tan δ at the working frequency, in [0, 0.1]; default 0.0005 (polypropylene film, common practice). */
+  readonly dissipationFactor?: number;
+  /** RMS voltage rating of the bank [V], > 0. Optional; checked when given. */
+  readonly voltageRatingRms?: QuantityInput;
+  /** RMS current rating of the bank [A], > 0. Optional; checked when given. */
+  readonly currentRatingRms?: QuantityInput;
+}
+
+/**
+ * A ferrite or powder-core flux concentrator behind a pancake coil. Its loss is estimated with
+ * the core-loss module from the flux it carries; its effect on inductance and coupling is not
+ * modelled (a validity note says so).
+ *
+ * @category Heater study
+ */
+export interface HeaterConcentrator {
+  /** Core material id: `"inventedExampleFerrite"` or `"inventedExampleIronPowder"` (invented example sets). */
+  readonly material: string;
+  /** Cross-section the coil's flux passes through [m²], > 0. */
+  readonly crossSectionArea: QuantityInput;
+  /** Volume of magnetic material [m³], > 0. */
+  readonly volume: QuantityInput;
+}
+
+/** Fields shared by every part shape. @category Heater study */
+export interface PartCommon {
+  /** Material id from the materials catalogue (`"lowCarbonSteel"`, `"mediumCarbonSteel"`, `"austeniticStainless"`, …). */
+  readonly material: string;
+  /** Temperature at the start of heating [K], > 0; default the ambient temperature. */
+  readonly startTemperature?: QuantityInput;
+  /** Temperature to reach [K], > start temperature. */
+  readonly targetTemperature: QuantityInput;
+  /** Surface emissivity in (0, 1]; default the material's typical value. */
+  readonly emissivity?: number;
+}
+
+/**
+ * A solid round bar, coaxial inside a solenoid.
+ *
+ * @category Heater study
+ */
+export interface BarPartDescription extends PartCommon {
+  /** Part shape tag. */
+  readonly shape: "bar";
+  /** Bar radius [m], > 0. */
+  readonly radius: QuantityInput;
+  /** Bar length [m], > 0. */
+  readonly length: QuantityInput;
+}
+
+/**
+ * A tube, coaxial inside a solenoid.
+ *
+ * @category Heater study
+ */
+export interface TubePartDescription extends PartCommon {
+  /** Part shape tag. */
+  readonly shape: "tube";
+  /** Outer radius [m], > 0. */
+  readonly outerRadius: QuantityInput;
+  /** Wall thickness [m], > 0 and < outerRadius. */
+  readonly wallThickness: QuantityInput;
+  /** Tube length [m], > 0. */
+  readonly length: QuantityInput;
+}
+
+/**
+ * A ring (short tube, e.g. a bearing race), coaxial inside a solenoid.
+ *
+ * @category Heater study
+ */
+export interface RingPartDescription extends PartCommon {
+  /** Part shape tag. */
+  readonly shape: "ring";
+  /** Outer radius [m], > 0. */
+  readonly outerRadius: QuantityInput;
+  /** Inner (bore) radius [m], > 0 and < outerRadius. */
+  readonly innerRadius: QuantityInput;
+  /** Axial height (width) of the ring [m], > 0. */
+  readonly height: QuantityInput;
+}
+
+/**
+ * A flat rectangular plate, under a pancake coil.
+ *
+ * @category Heater study
+ */
+export interface PlatePartDescription extends PartCommon {
+  /** Part shape tag. */
+  readonly shape: "plate";
+  /** Plate length [m], > 0. */
+  readonly length: QuantityInput;
+  /** Plate width [m], > 0. */
+  readonly width: QuantityInput;
+  /** Plate thickness [m], > 0. */
+  readonly thickness: QuantityInput;
+}
+
+/**
+ * The part to heat.
+ *
+ * @category Heater study
+ */
+export type HeaterPart = BarPartDescription | TubePartDescription | RingPartDescription | PlatePartDescription;
+
+/**
+ * The surroundings of the part.
+ *
+ * @category Heater study
+ */
+export interface HeaterEnvironment {
+  /** Ambient air temperature [K], > 0; default 20 °C. */
+  readonly ambientTemperature?: QuantityInput;
+  /** Convection coefficient [W/(m²·K)], ≥ 0; default 10 (still air, common practice). */
+  readonly convectionCoefficient?: QuantityInput;
+}
+
+/**
+ * One induction-heater design, as passed to {@link studyHeater} or written in a study file.
+ *
+ * @category Heater study
+ */
+export interface HeaterDescription {
+  /** A name for reports. */
+  readonly title?: string;
+  /** The DC source. */
+  readonly supply: HeaterSupply;
+  /** The inverter. */
+  readonly inverter: HeaterInverter;
+  /** The work coil. */
+  readonly coil: HeaterCoil;
+  /** The capacitor bank. */
+  readonly capacitor: HeaterCapacitorBank;
+  /** An optional flux concentrator (pancake coils). */
+  readonly concentrator?: HeaterConcentrator;
+  /** The part to heat. */
+  readonly part: HeaterPart;
+  /** Surroundings; defaults apply when absent. */
+  readonly environment?: HeaterEnvironment;
+}

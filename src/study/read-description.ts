@@ -1,0 +1,572 @@
+/**
+ * Reading and validating heater descriptions (study files): text quantities through the units
+ * module, defaults filled in, every problem reported with its field path.
+ *
+ * @packageDocumentation
+ */
+import { InputError } from "../core/index.js";
+import { conductiveMaterials, inventedExampleFerrite, inventedExampleIronPowder } from "../materials/index.js";
+import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
+import { celsius, parseQuantity } from "../units/index.js";
+
+const WHERE = "readHeaterDescription";
+
+/** The supply with every field resolved to SI numbers. @category Heater study */
+export interface ResolvedSupply {
+  /** Source kind. */
+  readonly kind: "battery" | "dc-bus";
+  /** Open-circuit voltage [V]. */
+  readonly voltage: number;
+  /** Internal resistance [Ω]. */
+  readonly internalResistance: number;
+  /** Current limit [A], `null` when none was given. */
+  readonly currentLimit: number | null;
+}
+
+/** A resolved current-fed parallel inverter. @category Heater study */
+export interface ResolvedCurrentFedInverter {
+  /** Topology tag. */
+  readonly kind: "current-fed-parallel";
+  /** Choke inductance [H]. */
+  readonly chokeInductance: number;
+  /** Switch on-resistance [Ω]. */
+  readonly switchOnResistance: number;
+  /** Switch voltage rating [V], `null` when not given. */
+  readonly switchVoltageRating: number | null;
+}
+
+/** A resolved voltage-fed series inverter. @category Heater study */
+export interface ResolvedSeriesInverter {
+  /** Topology tag. */
+  readonly kind: "voltage-fed-series";
+  /** Bridge type. */
+  readonly bridge: "half" | "full";
+  /** Frequency control. */
+  readonly control: "fixed" | "power-tracking";
+  /** Fixed switching frequency [Hz] (`null` with power tracking). */
+  readonly frequency: number | null;
+  /** Target power [W] (`null` at fixed frequency). */
+  readonly targetPower: number | null;
+  /** Switch on-resistance [Ω]. */
+  readonly switchOnResistance: number;
+  /** Switch voltage rating [V], `null` when not given. */
+  readonly switchVoltageRating: number | null;
+}
+
+/** A resolved inverter. @category Heater study */
+export type ResolvedInverter = ResolvedCurrentFedInverter | ResolvedSeriesInverter;
+
+/** A resolved conductor. @category Heater study */
+export type ResolvedConductor =
+  | { readonly kind: "solid"; readonly diameter: number; readonly material: ConductiveMaterial }
+  | {
+      readonly kind: "litz";
+      readonly strands: number;
+      readonly strandDiameter: number;
+      readonly outerDiameter: number;
+      readonly material: ConductiveMaterial;
+    }
+  | { readonly kind: "tube"; readonly outerDiameter: number; readonly wallThickness: number; readonly material: ConductiveMaterial };
+
+/** A resolved coil. @category Heater study */
+export type ResolvedCoil =
+  | {
+      readonly shape: "solenoid";
+      readonly radius: number;
+      readonly length: number;
+      readonly turns: number;
+      readonly conductor: ResolvedConductor;
+      readonly leadLength: number;
+      readonly temperature: number;
+    }
+  | {
+      readonly shape: "pancake";
+      readonly innerRadius: number;
+      readonly outerRadius: number;
+      readonly turns: number;
+      readonly liftOff: number;
+      readonly conductor: ResolvedConductor;
+      readonly leadLength: number;
+      readonly temperature: number;
+    };
+
+/** A resolved capacitor bank. @category Heater study */
+export interface ResolvedCapacitorBank {
+  /** Capacitance [F]. */
+  readonly capacitance: number;
+  /** Dissipation factor tan δ. */
+  readonly dissipationFactor: number;
+  /** RMS voltage rating [V] or `null`. */
+  readonly voltageRatingRms: number | null;
+  /** RMS current rating [A] or `null`. */
+  readonly currentRatingRms: number | null;
+}
+
+/** A resolved concentrator. @category Heater study */
+export interface ResolvedConcentrator {
+  /** Core material (with its id). */
+  readonly material: CoreMaterial;
+  /** The material id as written. */
+  readonly materialId: string;
+  /** Flux cross-section [m²]. */
+  readonly crossSectionArea: number;
+  /** Volume [m³]. */
+  readonly volume: number;
+}
+
+/** Fields every resolved part has. @category Heater study */
+export interface ResolvedPartCommon {
+  /** The material set. */
+  readonly material: ConductiveMaterial;
+  /** Start temperature [K]. */
+  readonly startTemperature: number;
+  /** Target temperature [K]. */
+  readonly targetTemperature: number;
+  /** Emissivity. */
+  readonly emissivity: number;
+}
+
+/** A resolved part. @category Heater study */
+export type ResolvedPart = ResolvedPartCommon &
+  (
+    | { readonly shape: "bar"; readonly radius: number; readonly length: number }
+    | { readonly shape: "tube"; readonly outerRadius: number; readonly wallThickness: number; readonly length: number }
+    | { readonly shape: "ring"; readonly outerRadius: number; readonly innerRadius: number; readonly height: number }
+    | { readonly shape: "plate"; readonly length: number; readonly width: number; readonly thickness: number }
+  );
+
+/** Resolved surroundings. @category Heater study */
+export interface ResolvedEnvironment {
+  /** Ambient temperature [K]. */
+  readonly ambientTemperature: number;
+  /** Convection coefficient [W/(m²·K)]. */
+  readonly convectionCoefficient: number;
+}
+
+/**
+ * A heater description with every quantity an SI number, every default filled in and every
+ * material id replaced by its property set: what {@link readHeaterDescription} returns.
+ *
+ * @category Heater study
+ */
+export interface ResolvedHeaterDescription {
+  /** Title for reports. */
+  readonly title: string;
+  /** Supply. */
+  readonly supply: ResolvedSupply;
+  /** Inverter. */
+  readonly inverter: ResolvedInverter;
+  /** Coil. */
+  readonly coil: ResolvedCoil;
+  /** Capacitor bank. */
+  readonly capacitor: ResolvedCapacitorBank;
+  /** Concentrator or `null`. */
+  readonly concentrator: ResolvedConcentrator | null;
+  /** Part. */
+  readonly part: ResolvedPart;
+  /** Environment. */
+  readonly environment: ResolvedEnvironment;
+}
+
+/**
+ * Thrown by {@link readHeaterDescription} when a description has problems: an
+ * {@link InputError} for the first problem (its `parameter` is the field path, e.g.
+ * `"coil.turns"`), carrying all of them in `problems`.
+ *
+ * @category Heater study
+ */
+export class HeaterDescriptionError extends InputError {
+  /** Every problem found, in document order (the first is this error's own). */
+  readonly problems: readonly InputError[];
+
+  /**
+   * @param problems - the problems found (at least one)
+   */
+  constructor(problems: readonly InputError[]) {
+    const first = problems[0] as InputError;
+    super(first.where, first.parameter, first.value, first.unit, first.expected);
+    this.name = "HeaterDescriptionError";
+    this.problems = problems;
+  }
+}
+
+/** Material ids accepted for parts and conductors (the materials catalogue). */
+const MATERIAL_IDS = conductiveMaterials.map((m) => m.id);
+const CONDUCTOR_IDS = ["copper", "aluminium", "silver"];
+const CORE_MATERIALS: Readonly<Record<string, CoreMaterial>> = {
+  inventedExampleFerrite,
+  inventedExampleIronPowder,
+};
+
+/** The reader: converts and checks fields, recording problems instead of stopping at the first. */
+class Reader {
+  readonly problems: InputError[] = [];
+
+  fail(path: string, value: unknown, unit: string, expected: string): number {
+    this.problems.push(new InputError(WHERE, path, value, unit, expected));
+    return Number.NaN;
+  }
+
+  object(path: string, value: unknown, known: readonly string[]): Record<string, unknown> | undefined {
+    if (typeof value !== "object" || value === null || Array.isArray(value)) {
+      this.fail(path, value, "", "an object");
+      return undefined;
+    }
+    const record = value as Record<string, unknown>;
+    for (const key of Object.keys(record)) {
+      if (!known.includes(key)) {
+        this.fail(`${path === "" ? "" : `${path}.`}${key}`, record[key], "", `absent (not a field here; known fields: ${known.join(", ")})`);
+      }
+    }
+    return record;
+  }
+
+  oneOf<const T extends string>(path: string, value: unknown, allowed: readonly T[]): T | undefined {
+    if (typeof value !== "string" || !(allowed as readonly string[]).includes(value)) {
+      this.fail(path, value, "", `one of ${allowed.map((a) => JSON.stringify(a)).join(", ")}`);
+      return undefined;
+    }
+    return value as T;
+  }
+
+  /** A quantity: a number in SI, or text in `unit` (parsed by parseQuantity). NaN after a problem. */
+  quantity(path: string, value: unknown, unit: string, check: "positive" | "non-negative", required = true): number {
+    if (value === undefined) {
+      return required ? this.fail(path, value, unit, check === "positive" ? "a finite number > 0" : "a finite number ≥ 0") : Number.NaN;
+    }
+    let v: number;
+    if (typeof value === "number") {
+      v = value;
+    } else if (typeof value === "string") {
+      try {
+        v = parseQuantity(value, unit);
+      } catch (e) {
+        if (!(e instanceof InputError)) throw e;
+        const example = { m: "30 mm", F: "4.7 µF", H: "200 µH", V: "24 V", Ω: "10 mΩ", A: "50 A", Hz: "25 kHz", W: "1.5 kW", K: "20 °C", "m²": "1e-4 m²", "m³": "2e-6 m³", "": "0.5" }[unit] ?? "1";
+        return this.fail(path, value, "", unit === "" ? `a number, e.g. "${example}"` : `a quantity in ${unit}, e.g. "${example}"`);
+      }
+    } else {
+      return this.fail(path, value, unit, unit === "" ? "a number" : "a number (SI) or a quantity text");
+    }
+    if (!Number.isFinite(v)) return this.fail(path, value, unit, "a finite number");
+    if (check === "positive" && !(v > 0)) return this.fail(path, value, unit, "a finite number > 0");
+    if (check === "non-negative" && !(v >= 0)) return this.fail(path, value, unit, "a finite number ≥ 0");
+    return v;
+  }
+
+  optional(path: string, value: unknown, unit: string, check: "positive" | "non-negative", fallback: number): number {
+    return value === undefined ? fallback : this.quantity(path, value, unit, check);
+  }
+
+  optionalOrNull(path: string, value: unknown, unit: string): number | null {
+    return value === undefined ? null : this.quantity(path, value, unit, "positive");
+  }
+
+  /** A plain non-negative number (no text form), e.g. a convection coefficient. */
+  plainNumber(path: string, value: unknown, unit: string, fallback: number): number {
+    if (value === undefined) return fallback;
+    if (typeof value !== "number" || !Number.isFinite(value) || value < 0) return this.fail(path, value, unit, "a finite number ≥ 0");
+    return value;
+  }
+
+  integer(path: string, value: unknown, min: number): number {
+    if (typeof value !== "number" || !Number.isInteger(value) || value < min) return this.fail(path, value, "", `an integer ≥ ${min}`);
+    return value;
+  }
+
+  ratio(path: string, value: unknown, min: number, max: number, openLow: boolean, fallback: number): number {
+    if (value === undefined) return fallback;
+    const v = value;
+    if (typeof v !== "number" || !Number.isFinite(v) || (openLow ? !(v > min) : !(v >= min)) || !(v <= max)) {
+      return this.fail(path, value, "", `a number in ${openLow ? "(" : "["}${min}, ${max}]`);
+    }
+    return v;
+  }
+
+  material(path: string, value: unknown, allowed: readonly string[]): ConductiveMaterial | undefined {
+    const id = this.oneOf(path, value, allowed);
+    return id === undefined ? undefined : conductiveMaterials.find((m) => m.id === id);
+  }
+}
+
+function readConductor(rd: Reader, path: string, value: unknown): ResolvedConductor | undefined {
+  const o = rd.object(path, value, ["kind", "diameter", "strands", "strandDiameter", "outerDiameter", "wallThickness", "material"]);
+  if (o === undefined) return undefined;
+  const kind = rd.oneOf(`${path}.kind`, o.kind, ["solid", "litz", "tube"] as const);
+  const material = o.material === undefined ? conductiveMaterials.find((m) => m.id === "copper") : rd.material(`${path}.material`, o.material, CONDUCTOR_IDS);
+  const extra = (allowed: readonly string[]): void => {
+    for (const key of ["diameter", "strands", "strandDiameter", "outerDiameter", "wallThickness"]) {
+      if (!allowed.includes(key) && o[key] !== undefined) rd.fail(`${path}.${key}`, o[key], "", `absent for a ${String(kind)} conductor`);
+    }
+  };
+  if (kind === "solid") {
+    extra(["diameter"]);
+    const diameter = rd.quantity(`${path}.diameter`, o.diameter, "m", "positive");
+    return material === undefined ? undefined : { kind, diameter, material };
+  }
+  if (kind === "litz") {
+    extra(["strands", "strandDiameter", "outerDiameter"]);
+    const strands = rd.integer(`${path}.strands`, o.strands, 1);
+    const strandDiameter = rd.quantity(`${path}.strandDiameter`, o.strandDiameter, "m", "positive");
+    // default bundle diameter: copper area over a packing factor of 0.5 (common practice for served litz)
+    const packed = strandDiameter * Math.sqrt(strands / 0.5);
+    const outerDiameter = rd.optional(`${path}.outerDiameter`, o.outerDiameter, "m", "positive", packed);
+    if (outerDiameter < strandDiameter * Math.sqrt(strands)) {
+      rd.fail(`${path}.outerDiameter`, o.outerDiameter, "m", `≥ strandDiameter × √strands = ${strandDiameter * Math.sqrt(strands)}`);
+    }
+    return material === undefined ? undefined : { kind, strands, strandDiameter, outerDiameter, material };
+  }
+  if (kind === "tube") {
+    extra(["outerDiameter", "wallThickness"]);
+    const outerDiameter = rd.quantity(`${path}.outerDiameter`, o.outerDiameter, "m", "positive");
+    const wallThickness = rd.quantity(`${path}.wallThickness`, o.wallThickness, "m", "positive");
+    if (wallThickness * 2 >= outerDiameter) rd.fail(`${path}.wallThickness`, o.wallThickness, "m", `< outerDiameter / 2 = ${outerDiameter / 2}`);
+    return material === undefined ? undefined : { kind, outerDiameter, wallThickness, material };
+  }
+  return undefined;
+}
+
+/** Outer diameter of a resolved conductor [m]. */
+export function conductorOuterDiameter(conductor: ResolvedConductor): number {
+  return conductor.kind === "solid" ? conductor.diameter : conductor.outerDiameter;
+}
+
+function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
+  const o = rd.object("coil", value, ["shape", "radius", "length", "turns", "innerRadius", "outerRadius", "liftOff", "conductor", "leadLength", "temperature"]);
+  if (o === undefined) return undefined;
+  const shape = rd.oneOf("coil.shape", o.shape, ["solenoid", "pancake"] as const);
+  const turns = rd.integer("coil.turns", o.turns, 1);
+  const conductor = readConductor(rd, "coil.conductor", o.conductor);
+  const leadLength = rd.optional("coil.leadLength", o.leadLength, "m", "non-negative", 0);
+  const temperature = rd.optional("coil.temperature", o.temperature, "K", "positive", celsius(40));
+  const d = conductor === undefined ? Number.NaN : conductorOuterDiameter(conductor);
+  const forbid = (keys: readonly string[]): void => {
+    for (const key of keys) if (o[key] !== undefined) rd.fail(`coil.${key}`, o[key], "", `absent for a ${String(shape)} coil`);
+  };
+  if (shape === "solenoid") {
+    forbid(["innerRadius", "outerRadius", "liftOff"]);
+    const radius = rd.quantity("coil.radius", o.radius, "m", "positive");
+    const length = rd.quantity("coil.length", o.length, "m", "positive");
+    if (length / turns < d * (1 - 1e-12)) rd.fail("coil.length", o.length, "m", `≥ turns × conductor diameter = ${turns * d} (turns would overlap)`);
+    if (radius < d / 2) rd.fail("coil.radius", o.radius, "m", `≥ half the conductor diameter = ${d / 2}`);
+    return conductor === undefined ? undefined : { shape, radius, length, turns, conductor, leadLength, temperature };
+  }
+  if (shape === "pancake") {
+    forbid(["radius", "length"]);
+    const innerRadius = rd.quantity("coil.innerRadius", o.innerRadius, "m", "positive");
+    const outerRadius = rd.quantity("coil.outerRadius", o.outerRadius, "m", "positive");
+    const liftOff = rd.quantity("coil.liftOff", o.liftOff, "m", "non-negative");
+    if (turns > 1 && !(outerRadius > innerRadius)) rd.fail("coil.outerRadius", o.outerRadius, "m", `> coil.innerRadius = ${innerRadius}`);
+    if (turns > 1 && (outerRadius - innerRadius) / (turns - 1) < d * (1 - 1e-12)) {
+      rd.fail("coil.outerRadius", o.outerRadius, "m", `≥ innerRadius + (turns − 1) × conductor diameter = ${innerRadius + (turns - 1) * d} (turns would overlap)`);
+    }
+    if (innerRadius < d / 2) rd.fail("coil.innerRadius", o.innerRadius, "m", `≥ half the conductor diameter = ${d / 2}`);
+    return conductor === undefined ? undefined : { shape, innerRadius, outerRadius, turns, liftOff, conductor, leadLength, temperature };
+  }
+  return undefined;
+}
+
+function readInverter(rd: Reader, value: unknown): ResolvedInverter | undefined {
+  const o = rd.object("inverter", value, ["kind", "chokeInductance", "switchOnResistance", "switchVoltageRating", "bridge", "control", "frequency", "targetPower"]);
+  if (o === undefined) return undefined;
+  const kind = rd.oneOf("inverter.kind", o.kind, ["current-fed-parallel", "voltage-fed-series"] as const);
+  const switchOnResistance = rd.quantity("inverter.switchOnResistance", o.switchOnResistance, "Ω", "non-negative");
+  const switchVoltageRating = rd.optionalOrNull("inverter.switchVoltageRating", o.switchVoltageRating, "V");
+  if (kind === "current-fed-parallel") {
+    for (const key of ["bridge", "control", "frequency", "targetPower"]) {
+      if (o[key] !== undefined) rd.fail(`inverter.${key}`, o[key], "", "absent for a current-fed-parallel inverter (it runs at the tank's own frequency)");
+    }
+    const chokeInductance = rd.quantity("inverter.chokeInductance", o.chokeInductance, "H", "positive");
+    return { kind, chokeInductance, switchOnResistance, switchVoltageRating };
+  }
+  if (kind === "voltage-fed-series") {
+    if (o.chokeInductance !== undefined) rd.fail("inverter.chokeInductance", o.chokeInductance, "", "absent for a voltage-fed-series inverter");
+    const bridge = rd.oneOf("inverter.bridge", o.bridge, ["half", "full"] as const);
+    const control = rd.oneOf("inverter.control", o.control, ["fixed", "power-tracking"] as const);
+    let frequency: number | null = null;
+    let targetPower: number | null = null;
+    if (control === "fixed") {
+      frequency = rd.quantity("inverter.frequency", o.frequency, "Hz", "positive");
+      if (o.targetPower !== undefined) rd.fail("inverter.targetPower", o.targetPower, "", "absent with fixed-frequency control");
+    } else if (control === "power-tracking") {
+      targetPower = rd.quantity("inverter.targetPower", o.targetPower, "W", "positive");
+      if (o.frequency !== undefined) rd.fail("inverter.frequency", o.frequency, "", "absent with power-tracking control (the study finds it)");
+    }
+    if (bridge === undefined || control === undefined) return undefined;
+    return { kind, bridge, control, frequency, targetPower, switchOnResistance, switchVoltageRating };
+  }
+  return undefined;
+}
+
+function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | undefined {
+  const o = rd.object("part", value, [
+    "shape", "material", "startTemperature", "targetTemperature", "emissivity",
+    "radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness",
+  ]);
+  if (o === undefined) return undefined;
+  const shape = rd.oneOf("part.shape", o.shape, ["bar", "tube", "ring", "plate"] as const);
+  const material = rd.material("part.material", o.material, MATERIAL_IDS);
+  const startTemperature = rd.optional("part.startTemperature", o.startTemperature, "K", "positive", ambient);
+  const targetTemperature = rd.quantity("part.targetTemperature", o.targetTemperature, "K", "positive");
+  if (targetTemperature <= startTemperature) rd.fail("part.targetTemperature", o.targetTemperature, "K", `> part.startTemperature = ${startTemperature}`);
+  if (material !== undefined && targetTemperature >= material.meltingTemperature) {
+    rd.fail("part.targetTemperature", o.targetTemperature, "K", `< the melting temperature of ${material.name} = ${material.meltingTemperature}`);
+  }
+  const emissivity = rd.ratio("part.emissivity", o.emissivity, 0, 1, true, material?.emissivity.typical ?? 0.5);
+  const fields: Record<string, readonly string[]> = {
+    bar: ["radius", "length"],
+    tube: ["outerRadius", "wallThickness", "length"],
+    ring: ["outerRadius", "innerRadius", "height"],
+    plate: ["length", "width", "thickness"],
+  };
+  if (shape !== undefined) {
+    const mine = fields[shape] ?? [];
+    for (const key of ["radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness"]) {
+      if (!mine.includes(key) && o[key] !== undefined) rd.fail(`part.${key}`, o[key], "", `absent for a ${shape} part`);
+    }
+  }
+  const dim = (key: string): number => rd.quantity(`part.${key}`, o[key], "m", "positive");
+  if (material === undefined || shape === undefined) {
+    if (shape !== undefined) for (const key of fields[shape] ?? []) dim(key);
+    return undefined;
+  }
+  const common = { material, startTemperature, targetTemperature, emissivity };
+  switch (shape) {
+    case "bar":
+      return { ...common, shape, radius: dim("radius"), length: dim("length") };
+    case "tube": {
+      const outerRadius = dim("outerRadius");
+      const wallThickness = dim("wallThickness");
+      if (wallThickness >= outerRadius) rd.fail("part.wallThickness", o.wallThickness, "m", `< part.outerRadius = ${outerRadius}`);
+      return { ...common, shape, outerRadius, wallThickness, length: dim("length") };
+    }
+    case "ring": {
+      const outerRadius = dim("outerRadius");
+      const innerRadius = dim("innerRadius");
+      if (innerRadius >= outerRadius) rd.fail("part.innerRadius", o.innerRadius, "m", `< part.outerRadius = ${outerRadius}`);
+      return { ...common, shape, outerRadius, innerRadius, height: dim("height") };
+    }
+    case "plate":
+      return { ...common, shape, length: dim("length"), width: dim("width"), thickness: dim("thickness") };
+  }
+}
+
+/**
+ * Reads a heater description (a parsed study file, or an object built in code) and returns it
+ * resolved: quantities as SI numbers (text such as `"30 mm"`, `"4.7 µF"` or `"20 °C"` is read
+ * with `parseQuantity` in the field's unit), defaults filled in, material ids replaced by their
+ * property sets. Every field is checked, and nothing is returned from a half-valid description:
+ * all problems are collected and thrown together.
+ *
+ * Checks, each reported with the field's path (`coil.turns`, `part.targetTemperature`): missing
+ * required fields, wrong types, text in the wrong unit (`"30 mF"` for a length), values out of
+ * range (negative, zero where > 0 is needed, non-integer turns), unknown fields (a typo such as
+ * `coil.turn`), fields that do not belong to the chosen variant (a `frequency` for a
+ * self-oscillating inverter), and consistency (overlapping turns, a part that does not fit in
+ * the coil, a target at or below the start temperature or at or above the melting point, a
+ * coil shape that cannot heat the part shape: a solenoid takes bars, tubes and rings; a
+ * pancake coil takes plates).
+ *
+ * @param input - the description (e.g. `JSON.parse` of a study file)
+ * @returns the resolved description
+ * @throws {@link HeaterDescriptionError} (an {@link InputError} whose `parameter` is the field
+ * path of the first problem and whose `problems` lists them all), e.g.
+ * `readHeaterDescription: coil.turns must be an integer ≥ 1, got 0`
+ * @example
+ * ```ts
+ * import { readHeaterDescription } from "fluxwright";
+ * try {
+ *   readHeaterDescription({ supply: { kind: "battery", voltage: "24 V" } });
+ * } catch (e) {
+ *   console.log((e as Error).message); // readHeaterDescription: inverter must be an object, got undefined
+ * }
+ * ```
+ * @category Heater study
+ */
+export function readHeaterDescription(input: unknown): ResolvedHeaterDescription {
+  const rd = new Reader();
+  const top = rd.object("", input, ["$schema", "title", "notes", "supply", "inverter", "coil", "capacitor", "concentrator", "part", "environment"]);
+  if (top === undefined) throw new HeaterDescriptionError([new InputError(WHERE, "description", input, "", "an object")]);
+  if (top.title !== undefined && typeof top.title !== "string") rd.fail("title", top.title, "", "a string");
+  if (top.notes !== undefined && typeof top.notes !== "string") rd.fail("notes", top.notes, "", "a string");
+
+  // supply
+  const so = rd.object("supply", top.supply, ["kind", "voltage", "internalResistance", "currentLimit"]);
+  let supply: ResolvedSupply | undefined;
+  if (so !== undefined) {
+    const kind = rd.oneOf("supply.kind", so.kind, ["battery", "dc-bus"] as const);
+    const voltage = rd.quantity("supply.voltage", so.voltage, "V", "positive");
+    const internalResistance = rd.optional("supply.internalResistance", so.internalResistance, "Ω", "non-negative", 0);
+    const currentLimit = rd.optionalOrNull("supply.currentLimit", so.currentLimit, "A");
+    if (kind !== undefined) supply = { kind, voltage, internalResistance, currentLimit };
+  }
+  const inverter = readInverter(rd, top.inverter);
+  const coil = readCoil(rd, top.coil);
+
+  // capacitor bank
+  const co = rd.object("capacitor", top.capacitor, ["capacitance", "dissipationFactor", "voltageRatingRms", "currentRatingRms"]);
+  let capacitor: ResolvedCapacitorBank | undefined;
+  if (co !== undefined) {
+    capacitor = {
+      capacitance: rd.quantity("capacitor.capacitance", co.capacitance, "F", "positive"),
+      // 5e-4: polypropylene film capacitors at tens of kHz (common practice)
+      dissipationFactor: rd.ratio("capacitor.dissipationFactor", co.dissipationFactor, 0, 0.1, false, 5e-4),
+      voltageRatingRms: rd.optionalOrNull("capacitor.voltageRatingRms", co.voltageRatingRms, "V"),
+      currentRatingRms: rd.optionalOrNull("capacitor.currentRatingRms", co.currentRatingRms, "A"),
+    };
+  }
+
+  // concentrator
+  let concentrator: ResolvedConcentrator | null = null;
+  if (top.concentrator !== undefined) {
+    const cc = rd.object("concentrator", top.concentrator, ["material", "crossSectionArea", "volume"]);
+    if (cc !== undefined) {
+      const id = rd.oneOf("concentrator.material", cc.material, Object.keys(CORE_MATERIALS));
+      const crossSectionArea = rd.quantity("concentrator.crossSectionArea", cc.crossSectionArea, "m²", "positive");
+      const volume = rd.quantity("concentrator.volume", cc.volume, "m³", "positive");
+      const material = id === undefined ? undefined : CORE_MATERIALS[id];
+      if (material !== undefined && id !== undefined) concentrator = { material, materialId: id, crossSectionArea, volume };
+    }
+    if (coil !== undefined && coil.shape !== "pancake") rd.fail("concentrator", top.concentrator, "", "absent for a solenoid coil (concentrators are modelled behind pancake coils only)");
+  }
+
+  // environment (read before the part: the start temperature defaults to the ambient)
+  let environment: ResolvedEnvironment = { ambientTemperature: celsius(20), convectionCoefficient: 10 };
+  if (top.environment !== undefined) {
+    const eo = rd.object("environment", top.environment, ["ambientTemperature", "convectionCoefficient"]);
+    if (eo !== undefined) {
+      environment = {
+        ambientTemperature: rd.optional("environment.ambientTemperature", eo.ambientTemperature, "K", "positive", celsius(20)),
+        convectionCoefficient: rd.plainNumber("environment.convectionCoefficient", eo.convectionCoefficient, "W/(m²·K)", 10),
+      };
+    }
+  }
+  const part = readPart(rd, top.part, environment.ambientTemperature);
+
+  // coil and part together
+  if (coil !== undefined && part !== undefined) {
+    if (coil.shape === "solenoid" && part.shape === "plate") rd.fail("part.shape", part.shape, "", `"bar", "tube" or "ring" inside a solenoid coil`);
+    if (coil.shape === "pancake" && part.shape !== "plate") rd.fail("part.shape", part.shape, "", `"plate" under a pancake coil`);
+    if (coil.shape === "solenoid" && part.shape !== "plate") {
+      const outer = part.shape === "bar" ? part.radius : part.outerRadius;
+      const bore = coil.radius - conductorOuterDiameter(coil.conductor) / 2;
+      if (outer >= bore) rd.fail(part.shape === "bar" ? "part.radius" : "part.outerRadius", outer, "m", `< the coil's bore radius (coil.radius − conductor diameter / 2) = ${bore}`);
+    }
+  }
+
+  if (rd.problems.length > 0) throw new HeaterDescriptionError(rd.problems);
+  if (supply === undefined || inverter === undefined || coil === undefined || capacitor === undefined || part === undefined) {
+    // unreachable: a missing piece always records a problem
+    throw new HeaterDescriptionError([new InputError(WHERE, "description", input, "", "a complete heater description")]);
+  }
+  return {
+    title: typeof top.title === "string" ? top.title : "heater study",
+    supply,
+    inverter,
+    coil,
+    capacitor,
+    concentrator,
+    part,
+    environment,
+  };
+}
