@@ -7,3 +7,7 @@ export * from "./skin-depth.js";
 export * from "./dc-resistance.js";
 export { dowellFactor } from "./dowell.js";
 export type { DowellFactorOptions } from "./dowell.js";
+export { roundWireWindingAcRatio } from "./round-wire-winding.js";
+export type { RoundWireWindingOptions } from "./round-wire-winding.js";
+export * from "./litz-sullivan.js";
+export * from "./work-coil.js";
