@@ -19,11 +19,7 @@ export interface DowellFactorOptions {
 // Series in t = Δ⁴ for Δ ≤ 1 (coefficients from the Taylor series of sinh, sin, cosh, cos):
 //   Δ·ς1(Δ) = P1(t)/Q1(t),  P1 = Σ 16^k t^k/(4k+1)!,  Q1 = Σ 2·16^k t^k/(4k+2)!
 //   Δ·ς2(Δ) = t·R2(t)/S2(t), R2 = Σ t^k/(4k+3)!,       S2 = Σ t^k/(4k)!
-// Truncated where the next term is below 1e-18 relative at t = 1.
-const P1 = [1, 0.13333333333333333, 7.054673721340388e-4, 6.577784355562133e-7, 1.8425166262078805e-10, 2.0523716248486555e-14, 1.0816187746237974e-18];
-const Q1 = [1, 0.044444444444444446, 1.4109347442680776e-4, 9.39683479366019e-8, 2.047240695786534e-11, 1.8657923862260505e-15, 8.320144420183057e-20];
-const R2 = [0.16666666666666666, 1.984126984126984e-4, 2.505210838544172e-8, 7.647163731819816e-13, 8.22063524662433e-18];
-const S2 = [1, 0.041666666666666664, 2.48015873015873e-5, 2.08767569878681e-9, 4.779477332387385e-14, 4.110317623312165e-19];
+// Truncated where the next term is below 1e-18 relative at t = 1; coefficients inlined below.
 
 /**
  * Dowell's AC-to-DC resistance ratio $F_R$ of a winding portion of m foil layers, each of
@@ -89,10 +85,10 @@ export function dowellFactorKernel(delta: number, layers: number): number {
   const proximityWeight = (2 * (layers * layers - 1)) / 3;
   if (delta <= 1) {
     const t = delta * delta * delta * delta;
-    const p1 = P1[0]! + t * (P1[1]! + t * (P1[2]! + t * (P1[3]! + t * (P1[4]! + t * (P1[5]! + t * P1[6]!)))));
-    const q1 = Q1[0]! + t * (Q1[1]! + t * (Q1[2]! + t * (Q1[3]! + t * (Q1[4]! + t * (Q1[5]! + t * Q1[6]!)))));
-    const r2 = R2[0]! + t * (R2[1]! + t * (R2[2]! + t * (R2[3]! + t * R2[4]!)));
-    const s2 = S2[0]! + t * (S2[1]! + t * (S2[2]! + t * (S2[3]! + t * (S2[4]! + t * S2[5]!))));
+    const p1 = 1 + t * (0.13333333333333333 + t * (7.054673721340388e-4 + t * (6.577784355562133e-7 + t * (1.8425166262078805e-10 + t * (2.0523716248486555e-14 + t * (1.0816187746237974e-18))))));
+    const q1 = 1 + t * (0.044444444444444446 + t * (1.4109347442680776e-4 + t * (9.39683479366019e-8 + t * (2.047240695786534e-11 + t * (1.8657923862260505e-15 + t * (8.320144420183057e-20))))));
+    const r2 = 0.16666666666666666 + t * (1.984126984126984e-4 + t * (2.505210838544172e-8 + t * (7.647163731819816e-13 + t * (8.22063524662433e-18))));
+    const s2 = 1 + t * (0.041666666666666664 + t * (2.48015873015873e-5 + t * (2.08767569878681e-9 + t * (4.779477332387385e-14 + t * (4.110317623312165e-19)))));
     return p1 / q1 + proximityWeight * ((t * r2) / s2);
   }
   if (delta > 40) return delta * (1 + proximityWeight);
