@@ -9,3 +9,6 @@ export * from "./parallel-tank.js";
 export * from "./tank-stresses.js";
 export * from "./current-fed-inverter.js";
 export * from "./series-inverter.js";
+export * from "./e-series.js";
+export * from "./capacitor-bank.js";
+export * from "./tolerance-analysis.js";

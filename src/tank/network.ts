@@ -5,11 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireNonNegative, requirePositive } from "../core/index.js";
-/** Until the special module exports its Complex type (same shape). */
-interface Complex {
-  re: number;
-  im: number;
-}
+import type { Complex } from "../special/index.js";
 
 /**
  * A resistor, built by {@link resistorElement}.

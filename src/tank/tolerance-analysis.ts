@@ -1,0 +1,384 @@
+/**
+ * Monte Carlo analysis of a tank's resonant frequency and current under component tolerances
+ * and temperature coefficients, with a seeded, reproducible generator.
+ *
+ * @packageDocumentation
+ */
+import {
+  InputError,
+  requireFinite,
+  requireInRange,
+  requireInteger,
+  requireObject,
+  requireOneOf,
+  requirePositive,
+} from "../core/index.js";
+
+/**
+ * Options of {@link tankToleranceAnalysis}. Tolerances are relative (0.05 = ±5 %); temperature
+ * coefficients are relative per kelvin (e.g. −150e-6 for a capacitor losing 150 ppm/K).
+ *
+ * @category Tolerances
+ */
+export interface TankToleranceOptions {
+  /** `"series"` (voltage-driven at a fixed frequency) or `"parallel"` (self-oscillating at its zero-phase frequency). Default `"series"`. */
+  readonly topology?: "series" | "parallel";
+  /** Nominal inductance [H], > 0. */
+  readonly inductance: number;
+  /** Nominal capacitance [F], > 0. */
+  readonly capacitance: number;
+  /** Nominal series resistance (coil branch for the parallel tank) [Ω], > 0. */
+  readonly resistance: number;
+  /** Relative inductance tolerance, in [0, 1). */
+  readonly inductanceTolerance: number;
+  /** Relative capacitance tolerance, in [0, 1). */
+  readonly capacitanceTolerance: number;
+  /** Relative resistance tolerance, in [0, 1) (default 0). */
+  readonly resistanceTolerance?: number;
+  /** Inductance temperature coefficient [1/K] (default 0). */
+  readonly inductanceTemperatureCoefficient?: number;
+  /** Capacitance temperature coefficient [1/K] (default 0). */
+  readonly capacitanceTemperatureCoefficient?: number;
+  /** Resistance temperature coefficient [1/K] (default 0; annealed copper ≈ 0.00393). */
+  readonly resistanceTemperatureCoefficient?: number;
+  /** Lowest temperature change from the reference at which values are nominal [K] (default 0). */
+  readonly temperatureChangeMin?: number;
+  /** Highest temperature change from the reference [K] (default 0), ≥ temperatureChangeMin. */
+  readonly temperatureChangeMax?: number;
+  /**
+   * Drive: for `"series"` the RMS voltage across the tank, for `"parallel"` the RMS tank voltage
+   * [V], > 0 (default 1, so currents read per volt).
+   */
+  readonly driveVoltageRms?: number;
+  /** For `"series"`: the fixed drive frequency [Hz], > 0 (default: the nominal resonant frequency). */
+  readonly driveFrequency?: number;
+  /** `"uniform"` within ±tolerance (default) or `"normal"` with the tolerance taken as 3σ. */
+  readonly distribution?: "uniform" | "normal";
+  /** Number of samples, integer in [1, 1e7] (default 100 000). */
+  readonly samples?: number;
+  /** Seed of the generator, an integer (default 1); equal seeds give identical results. */
+  readonly seed?: number;
+}
+
+/**
+ * Summary statistics of one Monte Carlo output (percentiles by linear interpolation between
+ * order statistics, the "type 7" rule).
+ *
+ * @category Tolerances
+ */
+export interface ToleranceStatistics {
+  /** Mean. */
+  readonly mean: number;
+  /** Sample standard deviation. */
+  readonly standardDeviation: number;
+  /** Smallest sample. */
+  readonly min: number;
+  /** 1st percentile. */
+  readonly p1: number;
+  /** 5th percentile. */
+  readonly p5: number;
+  /** Median. */
+  readonly p50: number;
+  /** 95th percentile. */
+  readonly p95: number;
+  /** 99th percentile. */
+  readonly p99: number;
+  /** Largest sample. */
+  readonly max: number;
+}
+
+/**
+ * Result of {@link tankToleranceAnalysis}.
+ *
+ * @category Tolerances
+ */
+export interface TankToleranceAnalysis {
+  /** Samples drawn. */
+  readonly samples: number;
+  /** Samples that had a resonance and enter the statistics (all, for the series tank). */
+  readonly resonantSamples: number;
+  /** Resonant frequency at nominal values [Hz]. */
+  readonly nominalFrequency: number;
+  /** Tank current at nominal values [A]. */
+  readonly nominalTankCurrentRms: number;
+  /** Statistics of the resonant frequency [Hz]: undamped for the series tank, zero-phase for the parallel tank. */
+  readonly frequency: ToleranceStatistics;
+  /**
+   * Statistics of the tank current [A]: for the series tank the RMS current at the fixed drive
+   * voltage and frequency; for the parallel tank the RMS capacitor (circulating) current at the
+   * tank voltage and its own zero-phase frequency.
+   */
+  readonly tankCurrentRms: ToleranceStatistics;
+}
+
+/** splitmix32: scrambles a 32-bit state; used to seed the main generator. */
+function splitmix32(state: number): number {
+  let z = (state + 0x9e3779b9) | 0;
+  z = Math.imul(z ^ (z >>> 16), 0x85ebca6b);
+  z = Math.imul(z ^ (z >>> 13), 0xc2b2ae35);
+  return (z ^ (z >>> 16)) >>> 0;
+}
+
+/**
+ * xoshiro128** (Blackman & Vigna 2018) with 32-bit words; returns a function giving doubles in
+ * [0, 1) with 32 random bits.
+ */
+function makeUniform(seed: number): () => number {
+  let s0 = splitmix32(seed);
+  let s1 = splitmix32(s0 ^ 0x6a09e667);
+  let s2 = splitmix32(s1 ^ 0xbb67ae85);
+  let s3 = splitmix32(s2 ^ 0x3c6ef372);
+  if ((s0 | s1 | s2 | s3) === 0) s0 = 1;
+  return () => {
+    const result = Math.imul(rotl(Math.imul(s1, 5), 7), 9) >>> 0;
+    const t = s1 << 9;
+    s2 ^= s0;
+    s3 ^= s1;
+    s1 ^= s2;
+    s0 ^= s3;
+    s2 ^= t;
+    s3 = rotl(s3, 11);
+    return result / 4294967296;
+  };
+}
+
+function rotl(x: number, k: number): number {
+  return (x << k) | (x >>> (32 - k));
+}
+
+/**
+ * Rearranges a[lo..hi] so that a[k] holds the value it would have in sorted order, with no larger
+ * value before it and no smaller value after it (Hoare's selection with median-of-three pivots).
+ */
+function select(a: Float64Array, lo: number, hi: number, k: number): void {
+  while (hi > lo) {
+    const mid = (lo + hi) >>> 1;
+    // Median of three to a[mid].
+    if ((a[mid] as number) < (a[lo] as number)) swap(a, mid, lo);
+    if ((a[hi] as number) < (a[lo] as number)) swap(a, hi, lo);
+    if ((a[hi] as number) < (a[mid] as number)) swap(a, hi, mid);
+    const pivot = a[mid] as number;
+    let i = lo;
+    let j = hi;
+    while (i <= j) {
+      while ((a[i] as number) < pivot) i++;
+      while ((a[j] as number) > pivot) j--;
+      if (i <= j) {
+        swap(a, i, j);
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) hi = j;
+    else if (k >= i) lo = i;
+    else return;
+  }
+}
+
+function swap(a: Float64Array, i: number, j: number): void {
+  const t = a[i] as number;
+  a[i] = a[j] as number;
+  a[j] = t;
+}
+
+function minOf(a: Float64Array, from: number, to: number): number {
+  let m = Infinity;
+  for (let i = from; i <= to; i++) if ((a[i] as number) < m) m = a[i] as number;
+  return m;
+}
+
+/**
+ * Percentiles 1, 5, 50, 95, 99 by the type-7 rule (linear interpolation between the order
+ * statistics at p·(n − 1)), found by selection rather than a full sort.
+ */
+function summarise(values: Float64Array, n: number): ToleranceStatistics {
+  const a = values.subarray(0, n);
+  let sum = 0;
+  let min = Infinity;
+  let max = -Infinity;
+  for (let k = 0; k < n; k++) {
+    const v = a[k] as number;
+    sum += v;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  const mean = sum / n;
+  let ss = 0;
+  for (let k = 0; k < n; k++) {
+    const d = (a[k] as number) - mean;
+    ss += d * d;
+  }
+  const levels = [0.01, 0.05, 0.5, 0.95, 0.99];
+  const index = levels.map((p) => Math.floor(p * (n - 1)));
+  // Select the median first, then the lower and upper levels inside their halves.
+  const order = [2, 1, 0, 3, 4];
+  const bounds: [number, number][] = [
+    [0, n - 1],
+    [0, (index[2] as number) - 1],
+    [0, (index[1] as number) - 1],
+    [(index[2] as number) + 1, n - 1],
+    [(index[3] as number) + 1, n - 1],
+  ];
+  for (let q = 0; q < order.length; q++) {
+    const [lo, hi] = bounds[q] as [number, number];
+    const k = index[order[q] as number] as number;
+    if (k >= lo && k <= hi) select(a, lo, hi, k);
+  }
+  // The next order statistic after index[i] is the smallest value between it and the next selected index.
+  const nextLimit = [index[1] as number, index[2] as number, index[3] as number, index[4] as number, n - 1];
+  const out = levels.map((p, i) => {
+    const k = index[i] as number;
+    const frac = p * (n - 1) - k;
+    const v = a[k] as number;
+    if (frac === 0 || k + 1 >= n) return v;
+    const limit = Math.max(k + 1, nextLimit[i] as number);
+    return v + frac * (minOf(a, k + 1, limit) - v);
+  });
+  return {
+    mean,
+    standardDeviation: n > 1 ? Math.sqrt(ss / (n - 1)) : 0,
+    min,
+    p1: out[0] as number,
+    p5: out[1] as number,
+    p50: out[2] as number,
+    p95: out[3] as number,
+    p99: out[4] as number,
+    max,
+  };
+}
+
+/**
+ * Monte Carlo of a tank's resonant frequency and current with component tolerances and
+ * temperature coefficients. Each sample draws independent relative deviations $\delta_L,
+ * \delta_C, \delta_R$ (uniform in ±tolerance, or normal with σ = tolerance/3) and one common
+ * temperature change $\Delta T$ (uniform in [min, max]):
+ *
+ * $$
+ * L = L_0(1 + \delta_L)(1 + \alpha_L\Delta T),\quad C = C_0(1 + \delta_C)(1 + \alpha_C\Delta T),\quad
+ * R = R_0(1 + \delta_R)(1 + \alpha_R\Delta T)
+ * $$
+ *
+ * Series tank: $f = 1/(2\pi\sqrt{LC})$, $I = V/|R + j(\omega L - 1/(\omega C))|$ at the fixed drive
+ * frequency. Parallel tank: $f = f_0\sqrt{1 - R^2C/L}$ (samples with $R^2C/L \ge 1$ have no
+ * resonance and are left out, counted in `resonantSamples`), $I_C = \omega C V$.
+ * The generator is xoshiro128** seeded through splitmix32: the same seed gives the same result
+ * on every platform.
+ *
+ * @param options - see {@link TankToleranceOptions}
+ * @returns the {@link TankToleranceAnalysis} (Hz, A)
+ * @throws {@link InputError} when a value is out of its domain, or (parallel tank) when no sample
+ * has a zero-phase resonance.
+ * Validity: independent component deviations, one common temperature; linear temperature
+ * coefficients.
+ * Accuracy: sampling error of a percentile ≈ √(p(1−p)/n)/density; with the uniform
+ * distribution and zero tolerance on R the frequency percentiles match the exact distribution
+ * of $1/\sqrt{(1+\delta_L)(1+\delta_C)}$ within 0.2 % at 1e5 samples (tested).
+ * 1e6 samples take about 0.2 s.
+ * @see D. Blackman and S. Vigna, "Scrambled linear pseudorandom number generators", ACM Trans.
+ * Math. Software 47(4), 2021 (xoshiro128**); R. J. Hyndman and Y. Fan, "Sample quantiles in
+ * statistical packages", The American Statistician 50(4), 1996 (definition 7).
+ * @example
+ * ```ts
+ * import { tankToleranceAnalysis } from "fluxwright";
+ * const mc = tankToleranceAnalysis({ inductance: 10e-6, capacitance: 1e-6, resistance: 0.1, inductanceTolerance: 0.05, capacitanceTolerance: 0.1, samples: 20000, seed: 7 });
+ * console.log(mc.frequency.p5 < mc.nominalFrequency && mc.nominalFrequency < mc.frequency.p95); // true
+ * ```
+ * @category Tolerances
+ */
+export function tankToleranceAnalysis(options: TankToleranceOptions): TankToleranceAnalysis {
+  const where = "tankToleranceAnalysis";
+  requireObject(where, "options", options);
+  const topology = options.topology === undefined ? "series" : requireOneOf(where, "topology", options.topology, ["series", "parallel"] as const);
+  const L0 = requirePositive(where, "inductance", options.inductance, "H");
+  const C0 = requirePositive(where, "capacitance", options.capacitance, "F");
+  const R0 = requirePositive(where, "resistance", options.resistance, "Ω");
+  const tolL = requireInRange(where, "inductanceTolerance", options.inductanceTolerance, "", 0, 1, "[)");
+  const tolC = requireInRange(where, "capacitanceTolerance", options.capacitanceTolerance, "", 0, 1, "[)");
+  const tolR = options.resistanceTolerance === undefined ? 0 : requireInRange(where, "resistanceTolerance", options.resistanceTolerance, "", 0, 1, "[)");
+  const aL = options.inductanceTemperatureCoefficient === undefined ? 0 : requireFinite(where, "inductanceTemperatureCoefficient", options.inductanceTemperatureCoefficient, "1/K");
+  const aC = options.capacitanceTemperatureCoefficient === undefined ? 0 : requireFinite(where, "capacitanceTemperatureCoefficient", options.capacitanceTemperatureCoefficient, "1/K");
+  const aR = options.resistanceTemperatureCoefficient === undefined ? 0 : requireFinite(where, "resistanceTemperatureCoefficient", options.resistanceTemperatureCoefficient, "1/K");
+  const tMin = options.temperatureChangeMin === undefined ? 0 : requireFinite(where, "temperatureChangeMin", options.temperatureChangeMin, "K");
+  const tMax = options.temperatureChangeMax === undefined ? tMin : requireFinite(where, "temperatureChangeMax", options.temperatureChangeMax, "K");
+  if (tMax < tMin) throw new InputError(where, "temperatureChangeMax", tMax, "K", `a finite number ≥ temperatureChangeMin (${tMin})`);
+  for (const [name, alpha] of [["inductanceTemperatureCoefficient", aL], ["capacitanceTemperatureCoefficient", aC], ["resistanceTemperatureCoefficient", aR]] as const) {
+    if (!(1 + alpha * tMin > 0 && 1 + alpha * tMax > 0)) {
+      throw new InputError(where, name, alpha, "1/K", "small enough that 1 + α·ΔT > 0 over the temperature range");
+    }
+  }
+  const voltage = options.driveVoltageRms === undefined ? 1 : requirePositive(where, "driveVoltageRms", options.driveVoltageRms, "V");
+  const nominalOmega0 = 1 / Math.sqrt(L0 * C0);
+  const driveOmega =
+    options.driveFrequency === undefined ? nominalOmega0 : 2 * Math.PI * requirePositive(where, "driveFrequency", options.driveFrequency, "Hz");
+  const distribution = options.distribution === undefined ? "uniform" : requireOneOf(where, "distribution", options.distribution, ["uniform", "normal"] as const);
+  const n = options.samples === undefined ? 100_000 : requireInteger(where, "samples", options.samples, 1);
+  if (n > 1e7) throw new InputError(where, "samples", n, "", "an integer ≤ 10000000");
+  const seedValue = options.seed === undefined ? 1 : options.seed;
+  if (typeof seedValue !== "number" || !Number.isInteger(seedValue)) throw new InputError(where, "seed", seedValue, "", "an integer");
+
+  const twoPi = 2 * Math.PI;
+  let nominalFrequency: number;
+  let nominalCurrent: number;
+  if (topology === "series") {
+    nominalFrequency = nominalOmega0 / twoPi;
+    nominalCurrent = voltage / Math.hypot(R0, driveOmega * L0 - 1 / (driveOmega * C0));
+  } else {
+    const x = 1 - (R0 * R0 * C0) / L0;
+    if (!(x > 0)) throw new InputError(where, "resistance", R0, "Ω", `a finite number < √(L/C) = ${Math.sqrt(L0 / C0)} for a parallel tank to resonate`);
+    const w = nominalOmega0 * Math.sqrt(x);
+    nominalFrequency = w / twoPi;
+    nominalCurrent = w * C0 * voltage;
+  }
+
+  const uniform = makeUniform(seedValue | 0);
+  const normal = distribution === "normal";
+  let spare = 0;
+  let hasSpare = false;
+  const deviate = (tol: number): number => {
+    if (tol === 0) return 0;
+    if (!normal) return tol * (2 * uniform() - 1);
+    if (hasSpare) {
+      hasSpare = false;
+      return (tol / 3) * spare;
+    }
+    // Box–Muller; 1 − u avoids log(0).
+    const r = Math.sqrt(-2 * Math.log(1 - uniform()));
+    const theta = twoPi * uniform();
+    spare = r * Math.sin(theta);
+    hasSpare = true;
+    return (tol / 3) * r * Math.cos(theta);
+  };
+  const frequencies = new Float64Array(n);
+  const currents = new Float64Array(n);
+  const span = tMax - tMin;
+  let kept = 0;
+  for (let k = 0; k < n; k++) {
+    const dT = span === 0 ? tMin : tMin + span * uniform();
+    // A normal deviate beyond −100 % is clipped to a tiny positive value (physically meaningless tails).
+    const L = L0 * Math.max(1e-9, 1 + deviate(tolL)) * (1 + aL * dT);
+    const C = C0 * Math.max(1e-9, 1 + deviate(tolC)) * (1 + aC * dT);
+    const R = R0 * Math.max(1e-9, 1 + deviate(tolR)) * (1 + aR * dT);
+    if (topology === "series") {
+      frequencies[kept] = 1 / (twoPi * Math.sqrt(L * C));
+      currents[kept] = voltage / Math.hypot(R, driveOmega * L - 1 / (driveOmega * C));
+      kept++;
+    } else {
+      const x = 1 - (R * R * C) / L;
+      if (x > 0) {
+        const w = Math.sqrt(x / (L * C));
+        frequencies[kept] = w / twoPi;
+        currents[kept] = w * C * voltage;
+        kept++;
+      }
+    }
+  }
+  if (kept === 0) throw new InputError(where, "resistance", R0, "Ω", "small enough that some samples resonate");
+  return {
+    samples: n,
+    resonantSamples: kept,
+    nominalFrequency,
+    nominalTankCurrentRms: nominalCurrent,
+    frequency: summarise(frequencies, kept),
+    tankCurrentRms: summarise(currents, kept),
+  };
+}
