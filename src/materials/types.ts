@@ -61,8 +61,18 @@ export interface EmissivityRange {
  * @category Materials
  */
 export type ResistivityModel =
-  | { readonly kind: "linear"; readonly source: string }
-  | { readonly kind: "table"; readonly table: TemperatureTable };
+  | {
+      /** The linear law about 20 °C. */
+      readonly kind: "linear";
+      /** Where the 20 °C value and coefficient come from. */
+      readonly source: string;
+    }
+  | {
+      /** Interpolation in a table. */
+      readonly kind: "table";
+      /** Resistivity [Ω·m] against temperature [K]. */
+      readonly table: TemperatureTable;
+    };
 
 /**
  * How specific heat capacity varies with temperature.
@@ -75,8 +85,18 @@ export type ResistivityModel =
  * @category Materials
  */
 export type SpecificHeatModel =
-  | { readonly kind: "table"; readonly table: TemperatureTable }
-  | { readonly kind: "en1993-carbon-steel"; readonly source: string };
+  | {
+      /** Interpolation in a table. */
+      readonly kind: "table";
+      /** Specific heat [J/(kg·K)] against temperature [K]. */
+      readonly table: TemperatureTable;
+    }
+  | {
+      /** The EN 1993-1-2 closed form for carbon steel. */
+      readonly kind: "en1993-carbon-steel";
+      /** The standard and clause. */
+      readonly source: string;
+    };
 
 /**
  * Parameters of the relative-permeability model of a ferromagnetic metal, read by

@@ -7,6 +7,7 @@ import {
   specificHeatAt,
   thermalConductivityAt,
 } from "../../src/materials/index.js";
+import type { ConductiveMaterial, PermeabilityModel } from "../../src/materials/index.js";
 
 const materialIndex = fc.integer({ min: 0, max: conductiveMaterials.length - 1 });
 const unit = fc.double({ min: 0, max: 1, noNaN: true, noDefaultInfinity: true });
@@ -18,7 +19,7 @@ describe("material property invariants", () => {
   it("resistivity does not fall as temperature rises, for every metal", () => {
     fc.assert(
       fc.property(materialIndex, unit, unit, (i, u1, u2) => {
-        const m = conductiveMaterials[i]!;
+        const m = (conductiveMaterials[i] as ConductiveMaterial);
         const { min, max } = m.temperatureRange;
         const t1 = min + (max - min) * Math.min(u1, u2);
         const t2 = min + (max - min) * Math.max(u1, u2);
@@ -37,7 +38,7 @@ describe("material property invariants", () => {
   it("all properties are positive and finite over the documented range", () => {
     fc.assert(
       fc.property(materialIndex, unit, logField, (i, u, h) => {
-        const m = conductiveMaterials[i]!;
+        const m = (conductiveMaterials[i] as ConductiveMaterial);
         const t = m.temperatureRange.min + (m.temperatureRange.max - m.temperatureRange.min) * u;
         const values = [
           resistivityAt(m, t),
@@ -54,8 +55,8 @@ describe("material property invariants", () => {
   it("permeability is exactly 1 above the Curie temperature, at any field", () => {
     fc.assert(
       fc.property(magneticIndex, fc.double({ min: 0, max: 2000, noNaN: true, noDefaultInfinity: true }), logField, (i, dt, h) => {
-        const m = magnetic[i]!;
-        return relativePermeabilityAt(m, { temperature: m.curieTemperature! + dt, fieldStrength: h }) === 1;
+        const m = (magnetic[i] as ConductiveMaterial);
+        return relativePermeabilityAt(m, { temperature: (m.curieTemperature as number) + dt, fieldStrength: h }) === 1;
       }),
       { seed: 1, numRuns: 200 },
     );
@@ -64,13 +65,13 @@ describe("material property invariants", () => {
   it("permeability lies between 1 and its low-field bound and does not rise with field or temperature", () => {
     fc.assert(
       fc.property(magneticIndex, unit, unit, logField, logField, (i, u1, u2, h1, h2) => {
-        const m = magnetic[i]!;
-        const tc = m.curieTemperature!;
+        const m = (magnetic[i] as ConductiveMaterial);
+        const tc = (m.curieTemperature as number);
         const t1 = 250 + (tc + 50 - 250) * Math.min(u1, u2);
         const t2 = 250 + (tc + 50 - 250) * Math.max(u1, u2);
         const hl = Math.min(h1, h2);
         const hh = Math.max(h1, h2);
-        const bound = m.permeability!.initialRelativePermeability;
+        const bound = (m.permeability as PermeabilityModel).initialRelativePermeability;
         const a = relativePermeabilityAt(m, { temperature: t1, fieldStrength: hl });
         const b = relativePermeabilityAt(m, { temperature: t1, fieldStrength: hh });
         const c = relativePermeabilityAt(m, { temperature: t2, fieldStrength: hl });
@@ -82,7 +83,7 @@ describe("material property invariants", () => {
 
   it("permeability is continuous through the start of the Curie transition", () => {
     for (const m of magnetic) {
-      const start = m.curieTemperature! - m.permeability!.transitionWidth;
+      const start = (m.curieTemperature as number) - (m.permeability as PermeabilityModel).transitionWidth;
       const below = relativePermeabilityAt(m, { temperature: start - 1e-6, fieldStrength: 1e4 });
       const above = relativePermeabilityAt(m, { temperature: start + 1e-6, fieldStrength: 1e4 });
       expect(Math.abs(below - above) / below).toBeLessThan(1e-6);
