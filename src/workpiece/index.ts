@@ -1,6 +1,38 @@
 /**
  * Workpiece coupling: eddy-current power in the part and the impedance the coil terminals see.
+ * Baker's functions, a bar or tube in a long coil, a slab in a tangential field, a finite coil
+ * around a rod (Dodd, Deeds & Luquire), a coil above a layered plate (Dodd & Deeds), coil
+ * efficiency, and coupling re-evaluated at the part's temperature.
  *
  * @module workpiece
  */
-export {};
+export { bakerFunctions, bakerFunctionsAsymptotic } from "./baker.js";
+export type { BakerFunctions } from "./baker.js";
+export { barInLongCoil, tubeInLongCoil } from "./long-coil.js";
+export type {
+  BarInLongCoilOptions,
+  LongCoil,
+  LongCoilCouplingResult,
+  RoundBar,
+  RoundTube,
+  TubeInLongCoilOptions,
+} from "./long-coil.js";
+export { slabInTangentialField } from "./slab.js";
+export type { SlabInTangentialFieldOptions, SlabInTangentialFieldResult } from "./slab.js";
+export { coilOverPlate } from "./coil-over-plate.js";
+export type { CoilAbovePlate, CoilOverPlateOptions, CoilOverPlateResult, PlateLayer } from "./coil-over-plate.js";
+export { encirclingCoilOverRod } from "./encircling-coil.js";
+export type {
+  EncirclingCoil,
+  EncirclingCoilOverRodOptions,
+  EncirclingCoilOverRodResult,
+  LongRod,
+} from "./encircling-coil.js";
+export { coilEfficiency, powerInPart } from "./efficiency.js";
+export type { CoilEfficiencyOptions, PowerInPartOptions } from "./efficiency.js";
+export { workpieceCouplingAtTemperature } from "./temperature.js";
+export type {
+  HeatedPart,
+  WorkpieceCouplingAtTemperatureOptions,
+  WorkpieceCouplingAtTemperatureResult,
+} from "./temperature.js";

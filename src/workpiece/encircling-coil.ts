@@ -1,0 +1,302 @@
+/**
+ * Finite coil of rectangular winding cross-section around an infinitely long rod or tube:
+ * the Dodd, Deeds & Luquire (1969) integral solution.
+ *
+ * @packageDocumentation
+ */
+import { InputError, requireInteger, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import type { ValidityNote } from "../core/index.js";
+import {
+  besselI0ComplexScaled,
+  besselI0Scaled,
+  besselI1ComplexScaled,
+  besselI1OverI0Complex,
+  besselI1Scaled,
+  besselK0ComplexScaled,
+  besselK0Scaled,
+  besselK1ComplexScaled,
+  besselK1Scaled,
+} from "../special/index.js";
+import { MU_0 } from "../units/index.js";
+import { gaussLegendreRule } from "./kernels.js";
+
+/**
+ * A coaxial coil of rectangular winding cross-section around a rod, with uniform current
+ * density over the winding cross-section.
+ *
+ * @category Workpiece
+ */
+export interface EncirclingCoil {
+  /** Inner radius of the winding [m], > rod radius. */
+  readonly innerRadius: number;
+  /** Outer radius of the winding [m], > innerRadius. */
+  readonly outerRadius: number;
+  /** Axial length of the winding [m], > 0. */
+  readonly length: number;
+  /** Number of turns, an integer ≥ 1. */
+  readonly turns: number;
+}
+
+/**
+ * An infinitely long round rod, or a tube when `innerRadius` > 0.
+ *
+ * @category Workpiece
+ */
+export interface LongRod {
+  /** Outer radius [m], > 0 and < coil innerRadius. */
+  readonly radius: number;
+  /** Bore radius of a tube [m], ≥ 0 and < radius; omitted or 0 for a solid rod. */
+  readonly innerRadius?: number;
+  /** Resistivity [Ω·m], > 0. */
+  readonly resistivity: number;
+  /** Relative permeability [-], ≥ 1 (constant). */
+  readonly relativePermeability: number;
+}
+
+/**
+ * Options of {@link encirclingCoilOverRod}.
+ *
+ * @category Workpiece
+ */
+export interface EncirclingCoilOverRodOptions {
+  /** The coil, see {@link EncirclingCoil}. */
+  readonly coil: EncirclingCoil;
+  /** The rod or tube, see {@link LongRod}. */
+  readonly rod: LongRod;
+  /** Frequency [Hz], > 0. */
+  readonly frequency: number;
+}
+
+/**
+ * Result of {@link encirclingCoilOverRod}.
+ *
+ * @category Workpiece
+ */
+export interface EncirclingCoilOverRodResult {
+  /** Resistance reflected into the coil by the rod, $\Delta R$ [Ω], ≥ 0. */
+  readonly resistanceChange: number;
+  /** Reactance change $\Delta X$ [Ω]. */
+  readonly reactanceChange: number;
+  /** Inductance change $\Delta X/\omega$ [H]. */
+  readonly inductanceChange: number;
+  /** Skin depth in the rod [m]. */
+  readonly skinDepth: number;
+  /** Where the model's assumptions may not hold. */
+  readonly validity: readonly ValidityNote[];
+}
+
+const RULE = gaussLegendreRule(20);
+
+/**
+ * $e^{x}\int_x^\infty tK_1(t)\,dt$ for x > 0, from
+ * $\int_x^\infty tK_1 = \int_0^\infty e^{-x\cosh u}\,(x\cosh u + 1)/\cosh u\,du$ by the trapezoid
+ * rule (even analytic integrand: exponential convergence), ≤ 1e-14 relative.
+ */
+function kMomentTailScaled(x: number): number {
+  const h = Math.min(0.25, 0.7 / Math.sqrt(x));
+  let sum = 0.5 * (x + 1);
+  for (let k = 1; k < 2000; k++) {
+    const u = k * h;
+    const c = Math.cosh(u);
+    const e = Math.exp(-x * (c - 1));
+    const term = (e * (x * c + 1)) / c;
+    sum += term;
+    if (term < 1e-17 * sum) break;
+  }
+  return sum * h;
+}
+
+/**
+ * Impedance change of a finite coil of rectangular winding cross-section encircling an
+ * infinitely long rod or tube (coaxial), by the Dodd, Deeds & Luquire (1969) integral.
+ *
+ * With $n = N/((r_2 - r_1)\ell)$, rod radius $a$, $\kappa(\alpha) = \int_{\alpha r_1}^{\alpha r_2} xK_1(x)\,dx$
+ * and $\beta = \sqrt{\alpha^2 + j\omega\mu_0\mu_r/\rho}$:
+ *
+ * $$
+ * \Delta Z = 8j\omega\mu_0 n^2 \int_0^\infty C(\alpha)\,\frac{\kappa(\alpha)^2\sin^2(\alpha\ell/2)}{\alpha^6}\,d\alpha,\qquad
+ * C = \frac{\alpha I_0(\alpha a) - R\,I_1(\alpha a)}{\alpha K_0(\alpha a) + R\,K_1(\alpha a)},
+ * $$
+ *
+ * where $R = \beta I_0(\beta a)/(\mu_r I_1(\beta a))$ for a solid rod; for a tube the wall
+ * solution $D_1 I_1(\beta r) + D_2 K_1(\beta r)$ is matched to the air bore. Evaluated with
+ * exponentially scaled Bessel functions and 20-point Gauss–Legendre panels up to
+ * $\alpha = 20/(r_1 - a)$, where the integrand has fallen by $e^{-40}$.
+ *
+ * Hard domain (throws {@link InputError}): 0 < rod radius < coil innerRadius < outerRadius,
+ * length > 0, turns an integer ≥ 1, 0 ≤ rod innerRadius < rod radius, resistivity > 0,
+ * relativePermeability ≥ 1, frequency > 0.
+ * Validity: rod much longer than the coil (both ends well outside it), linear material of
+ * constant permeability, uniform winding current density.
+ *
+ * Accuracy: ≤ 1e-7 relative to |ΔZ| vs an independent scipy evaluation of the same integral
+ * (fixture `test/fixtures/workpiece/rod.json`); it tends to {@link barInLongCoil} as the
+ * coil becomes long.
+ *
+ * @param options - coil, rod and frequency, see {@link EncirclingCoilOverRodOptions}
+ * @returns resistance and reactance change [Ω], inductance change [H]
+ * @throws {@link InputError} for values outside the hard domain
+ * @see C. V. Dodd, W. E. Deeds and J. W. Luquire, "Integral solutions to some eddy current
+ *   problems", Int. J. Nondestructive Testing 1 (1969) 29–90 (coil encircling a rod and tube).
+ * @example
+ * ```ts
+ * import { encirclingCoilOverRod } from "fluxwright";
+ * const r = encirclingCoilOverRod({
+ *   coil: { innerRadius: 0.02, outerRadius: 0.025, length: 0.05, turns: 10 },
+ *   rod: { radius: 0.015, resistivity: 3e-8, relativePermeability: 1 },
+ *   frequency: 1e3,
+ * });
+ * console.log(r.resistanceChange > 0, r.inductanceChange < 0); // true true
+ * ```
+ * @category Workpiece
+ */
+export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): EncirclingCoilOverRodResult {
+  const where = "encirclingCoilOverRod";
+  requireObject(where, "options", options);
+  const c = requireObject(where, "coil", options.coil);
+  const r1 = requirePositive(where, "coil.innerRadius", c["innerRadius"], "m");
+  const r2 = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
+  if (!(r2 > r1)) throw new InputError(where, "coil.outerRadius", r2, "m", `a finite number > coil.innerRadius (${r1})`);
+  const len = requirePositive(where, "coil.length", c["length"], "m");
+  const turns = requireInteger(where, "coil.turns", c["turns"], 1);
+  const rod = requireObject(where, "rod", options.rod);
+  const a = requirePositive(where, "rod.radius", rod["radius"], "m");
+  if (!(a < r1)) throw new InputError(where, "rod.radius", a, "m", `a finite number > 0 and < coil.innerRadius (${r1})`);
+  const a1 = rod["innerRadius"] === undefined ? 0 : requireNonNegative(where, "rod.innerRadius", rod["innerRadius"], "m");
+  if (!(a1 < a)) throw new InputError(where, "rod.innerRadius", a1, "m", `a finite number ≥ 0 and < rod.radius (${a})`);
+  const rho = requirePositive(where, "rod.resistivity", rod["resistivity"], "Ω·m");
+  const mur = rod["relativePermeability"];
+  if (typeof mur !== "number" || !Number.isFinite(mur) || mur < 1) {
+    throw new InputError(where, "rod.relativePermeability", mur, "", "a finite number ≥ 1");
+  }
+  const f = requirePositive(where, "frequency", options.frequency, "Hz");
+
+  const omega = 2 * Math.PI * f;
+  const kk = (omega * MU_0 * mur) / rho;
+  const gap = r1 - a;
+
+  // R(α): (1/μr)(1/r) d(rA)/dr / A at the rod surface
+  const surfaceRatio = (alpha: number): [number, number] => {
+    const b2 = alpha * alpha;
+    const rr = Math.hypot(b2, kk);
+    const bRe = Math.sqrt(0.5 * (rr + b2));
+    const bIm = kk / (2 * bRe);
+    if (a1 === 0) {
+      const w = besselI1OverI0Complex({ re: bRe * a, im: bIm * a });
+      // β / (μr w)
+      const ww = w.re * w.re + w.im * w.im;
+      return [(bRe * w.re + bIm * w.im) / (ww * mur), (bIm * w.re - bRe * w.im) / (ww * mur)];
+    }
+    // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
+    const x1 = alpha * a1;
+    const rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
+    const z1 = { re: bRe * a1, im: bIm * a1 };
+    const i0 = besselI0ComplexScaled(z1);
+    const i1 = besselI1ComplexScaled(z1);
+    const k0 = besselK0ComplexScaled(z1);
+    const k1 = besselK1ComplexScaled(z1);
+    // num = β I0/μr − rAir I1 ; den = β K0/μr + rAir K1
+    const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
+    const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
+    const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
+    const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
+    const dd = dRe * dRe + dIm * dIm;
+    let sRe = (nRe * dRe + nIm * dIm) / dd;
+    let sIm = (nIm * dRe - nRe * dIm) / dd;
+    // scale factor e^{Re z1 + z1 − z2 − Re z2}, z = β r
+    const mag = Math.exp(2 * bRe * (a1 - a));
+    const ph = bIm * (a1 - a);
+    const eRe = mag * Math.cos(ph);
+    const eIm = mag * Math.sin(ph);
+    const tRe = sRe * eRe - sIm * eIm;
+    sIm = sRe * eIm + sIm * eRe;
+    sRe = tRe;
+    const z2 = { re: bRe * a, im: bIm * a };
+    const j0 = besselI0ComplexScaled(z2);
+    const j1 = besselI1ComplexScaled(z2);
+    const m0 = besselK0ComplexScaled(z2);
+    const m1 = besselK1ComplexScaled(z2);
+    // R = β (I0 − s K0) / (μr (I1 + s K1))
+    const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
+    const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
+    const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
+    const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
+    const pRe = bRe * uRe - bIm * uIm;
+    const pIm = bRe * uIm + bIm * uRe;
+    const vv = vRe * vRe + vIm * vIm;
+    return [(pRe * vRe + pIm * vIm) / vv, (pIm * vRe - pRe * vIm) / vv];
+  };
+
+  let sumRe = 0;
+  let sumIm = 0;
+  const panel = (lo: number, hi: number): void => {
+    const half = 0.5 * (hi - lo);
+    const mid = 0.5 * (hi + lo);
+    for (let i = 0; i < 20; i++) {
+      const alpha = mid + half * RULE.nodes[i]!;
+      const wt = half * RULE.weights[i]!;
+      const x = alpha * a;
+      const [rRe, rIm] = surfaceRatio(alpha);
+      const i0 = besselI0Scaled(x);
+      const i1 = besselI1Scaled(x);
+      const k0 = besselK0Scaled(x);
+      const k1 = besselK1Scaled(x);
+      // C̃ = (α I0 − R I1)/(α K0 + R K1) (scaled; true C = e^{2x} C̃)
+      const nRe = alpha * i0 - rRe * i1;
+      const nIm = -rIm * i1;
+      const dRe = alpha * k0 + rRe * k1;
+      const dIm = rIm * k1;
+      const dd = dRe * dRe + dIm * dIm;
+      const cRe = (nRe * dRe + nIm * dIm) / dd;
+      const cIm = (nIm * dRe - nRe * dIm) / dd;
+      // κ e^{α r1} = Gs(α r1) − e^{−α (r2 − r1)} Gs(α r2)
+      const kap = kMomentTailScaled(alpha * r1) - Math.exp(-alpha * (r2 - r1)) * kMomentTailScaled(alpha * r2);
+      const s = Math.sin(0.5 * alpha * len);
+      const q = kap / (alpha * alpha * alpha);
+      const fac = wt * Math.exp(-2 * alpha * gap) * q * q * s * s;
+      sumRe += fac * cRe;
+      sumIm += fac * cIm;
+    }
+  };
+
+  // material scales near α = 0 need graded panels; the oscillation of sin² needs width ≤ π/ℓ
+  const w = Math.min(Math.PI / len, 2 / gap, Math.PI / r2);
+  const aMax = 20 / gap;
+  let scale = Math.min(Math.sqrt(kk) / mur, 1 / (mur * a), 1 / r2);
+  if (a1 > 0) scale = Math.min(scale, (kk * (a - a1)) / (2 * mur), 1 / (mur * (a - a1)));
+  let lo = w;
+  let levels = 0;
+  while (lo / 2 > scale / 8 && levels < 40) {
+    panel(lo / 2, lo);
+    lo /= 2;
+    levels++;
+  }
+  panel(0, lo);
+  let x = w;
+  while (x < aMax) {
+    const hi = Math.min(x + w, aMax);
+    panel(x, hi);
+    x = hi;
+  }
+  const n = turns / ((r2 - r1) * len);
+  const coef = 8 * omega * MU_0 * n * n;
+  const dR = -coef * sumIm;
+  const dX = coef * sumRe;
+  const validity: ValidityNote[] = [];
+  if (mur > 1) {
+    validity.push({
+      code: "constant-permeability",
+      message:
+        "A constant relative permeability is assumed; magnetic steel saturates in strong fields, so use the permeability at the surface field strength.",
+      value: mur,
+      limit: 1,
+    });
+  }
+  return {
+    resistanceChange: dR,
+    reactanceChange: dX,
+    inductanceChange: dX / omega,
+    skinDepth: Math.sqrt((2 * rho) / (omega * MU_0 * mur)),
+    validity,
+  };
+}

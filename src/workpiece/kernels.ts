@@ -1,0 +1,170 @@
+/**
+ * Private numerical kernels of the workpiece module (not exported from the package):
+ * Gauss–Legendre rules and the radial coil integral $\int_0^x t J_1(t)\,dt$.
+ *
+ * @packageDocumentation
+ */
+import { besselJ0, besselJ1 } from "../special/index.js";
+
+/** Nodes and weights of an n-point Gauss–Legendre rule on [-1, 1] (Newton on P_n; ≤ 1e-15). */
+export function gaussLegendreRule(n: number): { nodes: Float64Array; weights: Float64Array } {
+  const nodes = new Float64Array(n);
+  const weights = new Float64Array(n);
+  const m = (n + 1) >> 1;
+  for (let i = 0; i < m; i++) {
+    let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
+    let dp = 0;
+    for (let iter = 0; iter < 100; iter++) {
+      let p0 = 1;
+      let p1 = x;
+      for (let k = 2; k <= n; k++) {
+        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
+        p0 = p1;
+        p1 = p2;
+      }
+      dp = (n * (x * p1 - p0)) / (x * x - 1);
+      const dx = p1 / dp;
+      x -= dx;
+      if (Math.abs(dx) < 1e-16) break;
+    }
+    // recompute derivative at the converged node for the weight
+    let p0 = 1;
+    let p1 = x;
+    for (let k = 2; k <= n; k++) {
+      const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
+      p0 = p1;
+      p1 = p2;
+    }
+    dp = (n * (x * p1 - p0)) / (x * x - 1);
+    const w = 2 / ((1 - x * x) * dp * dp);
+    nodes[i] = -x;
+    nodes[n - 1 - i] = x;
+    weights[i] = w;
+    weights[n - 1 - i] = w;
+  }
+  return { nodes, weights };
+}
+
+const STRUVE_RULE = gaussLegendreRule(20);
+
+/**
+ * $\int_0^x t J_1(t)\,dt$ for x ≥ 0, ≤ 2e-14 absolute (times max(1, √x)).
+ *
+ * x ≤ 10: the power series $\sum_k (-1)^k x^{2k+3}/(2^{2k+1}k!(k+1)!(2k+3))$.
+ * x > 10 (asymptotic series of the same integrals from x = 30): $1 + \tfrac{\pi x}{2}[J_1(x)S_0(x) - J_0(x)S_1(x)]$ with $S_\nu = \mathbf{H}_\nu - Y_\nu$
+ * (Struve minus Neumann; the Wronskian removes $Y$), from their Laplace integrals
+ * $S_0 = \tfrac{2}{\pi}\int_0^\infty e^{-x\sinh u}du$, $S_1 = \tfrac{2x}{\pi}\int_0^\infty e^{-x\sinh u}\cosh^2u\,du$
+ * by 20-point Gauss–Legendre on $[0, \operatorname{asinh}(40/x)]$, tabulated once as Chebyshev series on [10, 30].
+ */
+export function besselJ1Moment(x: number): number {
+  if (x <= 10) {
+    const x2 = x * x;
+    // term_k = (-1)^k x^(2k+3) / (2^(2k+1) k! (k+1)!), divided by (2k+3) when summed
+    let t = (x2 * x) / 2;
+    let sum = t / 3;
+    for (let k = 1; k < 60; k++) {
+      t *= -x2 / (4 * k * (k + 1));
+      const add = t / (2 * k + 3);
+      sum += add;
+      if (Math.abs(add) < 1e-17 * Math.abs(sum) && k > 3) break;
+    }
+    return sum;
+  }
+  if (x >= 30) {
+    // asymptotic series of the Laplace integrals: terms ((2k-1)!!)^2 / x^(2k+1) and
+    // (2k-3)!!(2k-1)!! / x^(2k+1), alternating; 13 terms reach 1e-14 at x = 30
+    const inv2 = 1 / (x * x);
+    let a0 = 1 / x; // k = 0 term of the S0 sum
+    let a1 = 1 / x; // k = 0 term of the S1 sum
+    let sum0 = a0;
+    let sum1 = a1;
+    for (let k = 1; k <= 13; k++) {
+      a0 *= -((2 * k - 1) * (2 * k - 1)) * inv2;
+      a1 *= k === 1 ? inv2 : -((2 * k - 3) * (2 * k - 1)) * inv2;
+      sum0 += a0;
+      sum1 += a1;
+    }
+    const s0 = (2 / Math.PI) * sum0;
+    const s1 = ((2 * x) / Math.PI) * sum1;
+    return 1 + ((Math.PI * x) / 2) * (besselJ1(x) * s0 - besselJ0(x) * s1);
+  }
+  // 10 < x < 30: Chebyshev interpolants of x·S0(x) and S1(x) (built once from the Laplace
+  // integrals by Gauss–Legendre quadrature, see struveLaplace)
+  const y = (x - 20) / 10;
+  const s0 = chebyshevValue(CHEB_S0, y) / x;
+  const s1 = chebyshevValue(CHEB_S1, y);
+  return 1 + ((Math.PI * x) / 2) * (besselJ1(x) * s0 - besselJ0(x) * s1);
+}
+
+/** x·S0(x) and S1(x), S_ν = H_ν − Y_ν, from their Laplace integrals by 20-point Gauss–Legendre (x ≥ 10: ≤ 1e-13). */
+function struveLaplace(x: number): [number, number] {
+  const upper = Math.asinh(40 / x);
+  const half = upper / 2;
+  const nodes = STRUVE_RULE.nodes;
+  const weights = STRUVE_RULE.weights;
+  let s0 = 0;
+  let s1 = 0;
+  for (let i = 0; i < 20; i++) {
+    const u = half * (nodes[i]! + 1);
+    const e = Math.exp(-x * Math.sinh(u)) * weights[i]!;
+    const c = Math.cosh(u);
+    s0 += e;
+    s1 += e * c * c;
+  }
+  return [((2 * x) / Math.PI) * half * s0, ((2 * x) / Math.PI) * half * s1];
+}
+
+const CHEB_DEGREE = 28;
+
+/** Chebyshev coefficients on [10, 30] of one component of struveLaplace. */
+function chebyshevFit(component: 0 | 1): Float64Array {
+  const n = CHEB_DEGREE + 1;
+  const values = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const y = Math.cos((Math.PI * (k + 0.5)) / n);
+    values[k] = struveLaplace(20 + 10 * y)[component];
+  }
+  const c = new Float64Array(n);
+  for (let j = 0; j < n; j++) {
+    let sum = 0;
+    for (let k = 0; k < n; k++) sum += values[k]! * Math.cos((Math.PI * j * (k + 0.5)) / n);
+    c[j] = ((j === 0 ? 1 : 2) / n) * sum;
+  }
+  return c;
+}
+
+/** Clenshaw evaluation of a Chebyshev series at y in [-1, 1]. */
+function chebyshevValue(c: Float64Array, y: number): number {
+  let b1 = 0;
+  let b2 = 0;
+  const y2 = 2 * y;
+  for (let j = c.length - 1; j >= 1; j--) {
+    const b0 = y2 * b1 - b2 + c[j]!;
+    b2 = b1;
+    b1 = b0;
+  }
+  return y * b1 - b2 + c[0]!;
+}
+
+const CHEB_S0 = chebyshevFit(0);
+const CHEB_S1 = chebyshevFit(1);
+
+/**
+ * $\int_0^x t J_1(t)\,dt / x^3$, finite at x = 0 (value 1/6); used where the coil integral is
+ * divided by powers of the separation constant.
+ */
+export function besselJ1MomentOverCube(x: number): number {
+  if (x < 1) {
+    const x2 = x * x;
+    let t = 0.5;
+    let sum = t / 3;
+    for (let k = 1; k < 30; k++) {
+      t *= -x2 / (4 * k * (k + 1));
+      const add = t / (2 * k + 3);
+      sum += add;
+      if (Math.abs(add) < 1e-17 * Math.abs(sum)) break;
+    }
+    return sum;
+  }
+  return besselJ1Moment(x) / (x * x * x);
+}
