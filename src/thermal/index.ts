@@ -7,3 +7,5 @@ export { lumpedHeatUp } from "./lumped-heat-up.js";
 export type { LumpedHeatUpOptions, LumpedHeatUpResult, LumpedEnergyBalance } from "./lumped-heat-up.js";
 export { steadyStateTemperature } from "./steady-state.js";
 export type { SteadyStateTemperatureOptions } from "./steady-state.js";
+export { radialHeatUp } from "./radial-heat-up.js";
+export type { RadialHeatUpOptions, RadialHeatUpResult, RadialEnergyBalance } from "./radial-heat-up.js";
