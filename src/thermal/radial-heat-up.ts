@@ -267,7 +267,9 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   const ambient4 = ambient ** 4;
 
   // Work arrays.
-  const T = new Float64Array(n + 1).fill(initial);
+  // Temperatures are stored as offsets from the initial temperature, so rounding scales with the
+  // temperature change rather than with the absolute temperature.
+  const T = new Float64Array(n + 1);
   const capacity = new Float64Array(n + 1);
   const conductance = new Float64Array(n);
   const full = new Float64Array(n + 1);
@@ -280,17 +282,20 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   const work = new Float64Array(n + 1);
 
   const setProperties = (temps: Float64Array): void => {
-    for (let i = 0; i <= n; i++) capacity[i] = density * cAt(temps[i]!) * volume[i]!;
+    for (let i = 0; i <= n; i++) capacity[i] = density * cAt(initial + temps[i]!) * volume[i]!;
     for (let i = 0; i < n; i++) {
-      conductance[i] = (kAt(0.5 * (temps[i]! + temps[i + 1]!)) * faceArea[i]!) / (x[i + 1]! - x[i]!);
+      conductance[i] = (kAt(initial + 0.5 * (temps[i]! + temps[i + 1]!)) * faceArea[i]!) / (x[i + 1]! - x[i]!);
     }
   };
-  // One implicit Euler step of size tau from `from` into `to`, radiation linearised about `star`.
-  // Returns the surface loss per unit area over the step [J/m²].
+  // One implicit Euler step of size tau from `from` into `to` (offsets from `initial`), radiation
+  // linearised about the absolute temperature `star`: the surface loss per unit area is
+  // lossConstant + lossSlope·θ_N. Returns the surface loss over the step [J/m²].
   const implicitStep = (from: Float64Array, to: Float64Array, tau: number, star: number): number => {
     const star3 = star * star * star;
     const radiationSlope = 4 * sigmaEps * star3;
-    const radiationOffset = sigmaEps * (star3 * star - ambient4) - radiationSlope * star;
+    const lossSlope = convection + radiationSlope;
+    const lossConstant =
+      convection * (initial - ambient) + sigmaEps * (star3 * star - ambient4) + radiationSlope * (initial - star);
     for (let i = 0; i <= n; i++) {
       const gl = i > 0 ? conductance[i - 1]! : 0;
       const gr = i < n ? conductance[i]! : 0;
@@ -299,11 +304,10 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       diag[i] = capacity[i]! / tau + gl + gr;
       rhs[i] = (capacity[i]! / tau) * from[i]! + source[i]!;
     }
-    diag[n] = diag[n]! + convection + radiationSlope;
-    rhs[n] = rhs[n]! + convection * ambient - radiationOffset;
+    diag[n] = diag[n]! + lossSlope;
+    rhs[n] = rhs[n]! - lossConstant;
     solveTridiagonal(lower, diag, upper, rhs, to, work, n + 1);
-    const tn = to[n]!;
-    return tau * (convection * (tn - ambient) + radiationOffset + radiationSlope * tn);
+    return tau * (lossConstant + lossSlope * to[n]!);
   };
 
   const times: number[] = [0];
@@ -332,12 +336,12 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     }
     // Predictor: a full step with properties and radiation at the start of the step.
     setProperties(T);
-    let star = T[n]!;
+    let star = initial + T[n]!;
     if (variable || sigmaEps > 0) {
       implicitStep(T, full, tau, star);
       for (let i = 0; i <= n; i++) mid[i] = 0.5 * (T[i]! + full[i]!);
       if (variable) setProperties(mid);
-      star = mid[n]!;
+      star = initial + mid[n]!;
     }
     const lossFull = implicitStep(T, full, tau, star);
     const lossHalf1 = implicitStep(T, mid, 0.5 * tau, star);
@@ -369,12 +373,14 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     time = last ? duration : time + tau;
     accepted++;
     times.push(time);
-    surfaceTemperatures.push(T[n]!);
-    coreTemperatures.push(T[0]!);
-    if (Math.abs(T[n]! - ambient) > Math.abs(hottest - ambient)) hottest = T[n]!;
+    const surfaceNow = initial + T[n]!;
+    const coreNow = initial + T[0]!;
+    surfaceTemperatures.push(surfaceNow);
+    coreTemperatures.push(coreNow);
+    if (Math.abs(surfaceNow - ambient) > Math.abs(hottest - ambient)) hottest = surfaceNow;
     if (target !== null) {
-      if (timeToSurfaceTarget === null) timeToSurfaceTarget = crossing(previousTime, time, previousSurface, T[n]!, target, initial);
-      if (timeToCoreTarget === null) timeToCoreTarget = crossing(previousTime, time, previousCore, T[0]!, target, initial);
+      if (timeToSurfaceTarget === null) timeToSurfaceTarget = crossing(previousTime, time, previousSurface, surfaceNow, target, initial);
+      if (timeToCoreTarget === null) timeToCoreTarget = crossing(previousTime, time, previousCore, coreNow, target, initial);
     }
     const factor = err > 0 ? Math.min(3, Math.max(0.2, 0.9 * Math.sqrt(tolerance / err))) : 3;
     tau = Math.min(maxStep, tau * factor);
@@ -418,9 +424,9 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     surfaceTemperatures,
     coreTemperatures,
     positions: x,
-    finalTemperatures: Float64Array.from(T),
-    finalSurfaceTemperature: T[n]!,
-    finalCoreTemperature: T[0]!,
+    finalTemperatures: Float64Array.from(T, (v) => initial + v),
+    finalSurfaceTemperature: initial + T[n]!,
+    finalCoreTemperature: initial + T[0]!,
     timeToSurfaceTarget,
     timeToCoreTarget,
     energy: { input, stored: storedTotal, lost, imbalance: input - storedTotal - lost },

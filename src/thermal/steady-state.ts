@@ -121,7 +121,9 @@ export function findEquilibrium(
     if (convection > 0) upper = ambient + p / (convection * area);
     if (emissivity > 0) upper = Math.min(upper, Math.pow(ambient ** 4 + p / (emissivity * STEFAN_BOLTZMANN * area), 0.25));
     if (convection === 0 || emissivity === 0) return upper; // a single mechanism: closed form
-    return bracketedRoot(net, ambient, upper, net(ambient), net(upper), 1e-13 * upper);
+    const atUpper = net(upper);
+    if (atUpper >= 0) return upper; // the other mechanism is negligible at this temperature
+    return bracketedRoot(net, ambient, upper, net(ambient), atUpper, 1e-13 * upper);
   }
   const n0 = net(start);
   if (n0 === 0) return start;

@@ -51,6 +51,7 @@ export function bracketedRoot(
 ): number {
   if (fa === 0) return a;
   if (fb === 0) return b;
+  if (fa > 0 === fb > 0) return Math.abs(fa) < Math.abs(fb) ? a : b; // no sign change: best end
   let side = 0;
   for (let iteration = 0; iteration < 400; iteration++) {
     const width = Math.abs(b - a);
