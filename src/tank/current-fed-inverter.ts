@@ -142,7 +142,7 @@ const HARMONIC_SUM = (Math.PI * Math.PI) / 48 + 1 / 16;
  * import { currentFedParallelInverter } from "fluxwright";
  * const op = currentFedParallelInverter({ supplyVoltage: 24, inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 });
  * console.log(op.tankVoltagePeak); // ≈ 75.398
- * console.log(op.supplyCurrent); // ≈ 56.85
+ * console.log(op.supplyCurrent); // ≈ 2.3687
  * console.log(op.cautions[0]?.code); // tank-voltage-above-elv
  * ```
  * @category Inverters

@@ -119,8 +119,8 @@ export interface ParallelTank {
  * ```ts
  * import { parallelTank } from "fluxwright";
  * const tank = parallelTank({ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 });
- * console.log(tank.undampedFrequency); // ≈ 112539
- * console.log(tank.zeroPhaseFrequency); // ≈ 112511
+ * console.log(tank.undampedFrequency); // ≈ 112539.5
+ * console.log(tank.zeroPhaseFrequency); // ≈ 112528.3
  * console.log(tank.dynamicResistance); // ≈ 50
  * ```
  * @category Tanks

@@ -98,17 +98,18 @@ function fundamentalPeak(bridge: "half" | "full", supplyVoltage: number): number
  * Accuracy (FHA error): power within 1 % and RMS current within 0.5 % of a time-domain
  * simulation of the ideal half bridge for Q ≥ 3 and 0.8 ≤ f/f0 ≤ 1.5 (tested; FHA reads low, the
  * harmonics carry the rest). The switched current is cruder: the drive harmonics add a current
- * that helps ZVS even at resonance, so the full waveform differs from $\hat I\sin\varphi$ by up to
- * $0.3\,V_1/Z_0$ (tested); treat it as an indicator.
+ * that helps ZVS even at resonance, about $(V_1/Z_0)\sum_{n\,\mathrm{odd}\ge3} r/(n^2r^2-1)$ with
+ * $r = f/f_0$ (0.25 $V_1/Z_0$ at resonance), so the full waveform differs from $\hat I\sin\varphi$
+ * by up to $0.35\,V_1/Z_0$ there (tested); treat it as a conservative indicator.
  * @see R. W. Erickson and D. Maksimović, Fundamentals of Power Electronics, 2nd ed., Kluwer 2001,
  * Ch. 19 "Resonant conversion", §19.1 sinusoidal approximation and §19.4 zero-voltage switching
  * (from memory, no page).
  * @example
  * ```ts
  * import { seriesInverter } from "fluxwright";
- * const op = seriesInverter({ supplyVoltage: 325, bridge: "half", inductance: 20e-6, capacitance: 1e-6, resistance: 1, switchingFrequency: 38e3 });
+ * const op = seriesInverter({ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, switchingFrequency: 38e3 });
  * console.log(op.zeroVoltageSwitching); // true
- * console.log(op.power); // ≈ 1735
+ * console.log(op.power); // ≈ 3479
  * ```
  * @category Inverters
  */
@@ -215,7 +216,7 @@ export interface FrequencyForPowerOptions {
  * @example
  * ```ts
  * import { frequencyForPower, seriesInverter } from "fluxwright";
- * const tank = { supplyVoltage: 325, bridge: "half", inductance: 20e-6, capacitance: 1e-6, resistance: 1 } as const;
+ * const tank = { supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4 } as const;
  * const f = frequencyForPower({ ...tank, power: 2000 });
  * console.log(seriesInverter({ ...tank, switchingFrequency: f }).power); // ≈ 2000
  * ```
