@@ -4,7 +4,7 @@
  * @packageDocumentation
  */
 import { requireFinite, InputError } from "../core/index.js";
-import { besselI1OverI0Complex } from "../special/index.js";
+import { bakerPQ } from "./kernels.js";
 
 /**
  * Baker's power-transfer functions of a solid round bar: active (`p`) and reactive (`q`)
@@ -45,9 +45,12 @@ export interface BakerFunctions {
  *
  * Hard domain (throws {@link InputError}): ratio a finite number ≥ 0. ratio = 0 gives p = q = 0.
  *
- * Accuracy: ≤ 1e-13 relative vs mpmath modified Bessel functions of complex argument
- * (fixture `test/fixtures/workpiece/baker.json`, cross-checked there against mpmath's
- * Kelvin functions) for 1e-3 ≤ ratio ≤ 1e3.
+ * Evaluated by a Taylor series (ratio ≤ 0.3, so that P keeps its digits), the continued
+ * fraction of $I_1/I_0$ (0.3 < ratio < 20) and 19 terms of its asymptotic series (ratio ≥ 20).
+ *
+ * Accuracy: ≤ 1e-15 relative to |P + jQ| and ≤ 5e-15 relative in P vs mpmath modified Bessel
+ * functions of complex argument (fixture `test/fixtures/workpiece/baker.json`, cross-checked
+ * there against mpmath's Kelvin functions) for 1e-3 ≤ ratio ≤ 1e3.
  *
  * @param ratio - bar radius over skin depth a/δ [-], ≥ 0 (NOT √2·a/δ)
  * @returns the functions `p` and `q` [-]
@@ -67,8 +70,7 @@ export function bakerFunctions(ratio: number): BakerFunctions {
   const u = requireFinite("bakerFunctions", "ratio", ratio, "");
   if (u < 0) throw new InputError("bakerFunctions", "ratio", ratio, "", "a finite number ≥ 0");
   if (u === 0) return { p: 0, q: 0 };
-  const w = besselI1OverI0Complex({ re: u, im: u });
-  return { p: w.re - w.im, q: w.re + w.im };
+  return bakerPQ(u);
 }
 
 /**

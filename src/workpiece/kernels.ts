@@ -168,3 +168,98 @@ export function besselJ1MomentOverCube(x: number): number {
   }
   return besselJ1Moment(x) / (x * x * x);
 }
+
+/** Coefficients c_n of I1(z)/I0(z) ~ Σ c_n z^(−n) (from y' = 1 − y/z − y²: c_{n+1} = ((n−1)c_n − Σ_{i=1}^{n} c_i c_{n+1−i})/2). */
+const RATIO_ASYMPTOTIC = ((): Float64Array => {
+  const c = new Float64Array(19);
+  c[0] = 1;
+  for (let n = 0; n < 18; n++) {
+    let s = 0;
+    for (let i = 1; i <= n; i++) s += c[i]! * c[n + 1 - i]!;
+    c[n + 1] = ((n - 1) * c[n]! - s) / 2;
+  }
+  return c;
+})();
+
+/** Taylor coefficients b_m (odd m = 2k+1) of I1(z)/I0(z) (from (m+1) b_m = −Σ_{i+j=m−1} b_i b_j). */
+const RATIO_SERIES = ((): Float64Array => {
+  const b = new Float64Array(48); // b[m], odd m used
+  b[1] = 0.5;
+  for (let m = 3; m < 48; m += 2) {
+    let s = 0;
+    for (let i = 1; i <= m - 2; i += 2) s += b[i]! * b[m - 1 - i]!;
+    b[m] = -s / (m + 1);
+  }
+  return b;
+})();
+
+/** Continued-fraction start beyond |z| (measured: 14 already reaches 2e-16). */
+const TAIL = 20;
+
+/**
+ * Baker's p + jq = (1+j) I1(z)/I0(z) at z = (1+j)u, u ≥ 0 (radius over skin depth), ≤ 5e-16
+ * relative to |p + jq|, and p without cancellation for small u.
+ *
+ * u ≤ 0.3: Taylor series, with (1+j) z^(2k+1) = (2j)^(k+1) u^(2k+1) split into p and q;
+ * 0.3 < u < 30: backward recurrence of the continued fraction r_n = 1/(2n/z + r_{n+1}),
+ * 2n/z = (n/u)(1 − j), from n = |z| + 20; u ≥ 20: 19 terms of the asymptotic series
+ * (the second exponential is e^(−2u) < 1e-17 relative there).
+ */
+export function bakerPQ(u: number): { p: number; q: number } {
+  if (u <= 0.3) {
+    // (2j)^(k+1): k = 0 → 2j, 1 → −4, 2 → −8j, 3 → 16, ...
+    const u2 = u * u;
+    let p = 0;
+    let q = 0;
+    let pow = u; // u^(2k+1)
+    let mag = 2; // |(2j)^(k+1)|
+    for (let k = 0; k < 23; k++) {
+      const term = RATIO_SERIES[2 * k + 1]! * mag * pow;
+      switch (k & 3) {
+        case 0:
+          q += term;
+          break;
+        case 1:
+          p -= term;
+          break;
+        case 2:
+          q -= term;
+          break;
+        default:
+          p += term;
+      }
+      pow *= u2;
+      mag *= 2;
+      if (Math.abs(term) < 1e-18 * q) break;
+    }
+    return { p, q };
+  }
+  let rRe: number;
+  let rIm: number;
+  if (u < 20) {
+    rRe = 0;
+    rIm = 0;
+    const top = Math.ceil(1.4142135623730951 * u) + TAIL;
+    const inv = 1 / u;
+    for (let n = top; n >= 1; n--) {
+      const dRe = n * inv + rRe;
+      const dIm = -n * inv + rIm;
+      const d2 = dRe * dRe + dIm * dIm;
+      rRe = dRe / d2;
+      rIm = -dIm / d2;
+    }
+  } else {
+    // w = 1/z = (1 − j)/(2u); Horner in w
+    const wRe = 0.5 / u;
+    const wIm = -0.5 / u;
+    rRe = 0;
+    rIm = 0;
+    for (let n = 18; n >= 0; n--) {
+      const tRe = rRe * wRe - rIm * wIm + RATIO_ASYMPTOTIC[n]!;
+      rIm = rRe * wIm + rIm * wRe;
+      rRe = tRe;
+    }
+  }
+  // (1 + j) r
+  return { p: rRe - rIm, q: rRe + rIm };
+}

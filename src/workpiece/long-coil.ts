@@ -8,11 +8,11 @@ import type { ValidityNote } from "../core/index.js";
 import {
   besselI0ComplexScaled,
   besselI1ComplexScaled,
-  besselI1OverI0Complex,
   besselK0ComplexScaled,
   besselK1ComplexScaled,
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
+import { bakerPQ } from "./kernels.js";
 
 /**
  * A long solenoid coil around the part (the long-coil idealisation: uniform axial field
@@ -181,21 +181,37 @@ function longCoilResult(
       limit: 1,
     });
   }
-  const base = {
+  const inductanceChange = reactanceChange / omega;
+  const emptyCoilInductance = MU_0 * Math.PI * coil.innerRadius * coil.innerRadius * nn;
+  const ratio = radius / delta;
+  if (coilResistance === undefined) {
+    return {
+      reflectedResistance,
+      reactanceChange,
+      inductanceChange,
+      emptyCoilInductance,
+      powerPerAmpereSquared: reflectedResistance,
+      skinDepth: delta,
+      ratio,
+      p,
+      q,
+      validity,
+    };
+  }
+  const total = reflectedResistance + coilResistance;
+  return {
     reflectedResistance,
     reactanceChange,
-    inductanceChange: reactanceChange / omega,
-    emptyCoilInductance: MU_0 * Math.PI * coil.innerRadius * coil.innerRadius * nn,
+    inductanceChange,
+    emptyCoilInductance,
     powerPerAmpereSquared: reflectedResistance,
+    efficiency: total > 0 ? reflectedResistance / total : 0,
     skinDepth: delta,
-    ratio: radius / delta,
+    ratio,
     p,
     q,
     validity,
   };
-  if (coilResistance === undefined) return base;
-  const total = reflectedResistance + coilResistance;
-  return { ...base, efficiency: total > 0 ? reflectedResistance / total : 0 };
 }
 
 /**
@@ -272,9 +288,8 @@ export function barCoupling(
 ): LongCoilCouplingResult {
   const omega = 2 * Math.PI * f;
   const delta = Math.sqrt((2 * rho) / (omega * MU_0 * mur));
-  const u = radius / delta;
-  const w = besselI1OverI0Complex({ re: u, im: u });
-  return longCoilResult(coil, radius, rho, mur, omega, delta, w.re - w.im, w.re + w.im, coilResistance);
+  const { p, q } = bakerPQ(radius / delta);
+  return longCoilResult(coil, radius, rho, mur, omega, delta, p, q, coilResistance);
 }
 
 /**

@@ -126,8 +126,8 @@ export function slabFactors(u: number): { p: number; q: number } {
  * // a 10 mm aluminium-alloy plate in a 10 kA/m field at 10 kHz
  * const r = slabInTangentialField({ thickness: 0.01, resistivity: 3e-8, relativePermeability: 1,
  *   frequency: 1e4, fieldStrengthRms: 1e4 });
- * console.log(r.skinDepth.toPrecision(4)); // 8.717e-4
- * console.log(r.powerPerArea.toPrecision(4)); // 3.441e+3
+ * console.log(r.skinDepth.toExponential(3)); // 8.717e-4
+ * console.log(r.powerPerArea.toPrecision(4)); // 3441
  * ```
  * @category Workpiece
  */
