@@ -367,7 +367,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  *   plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
  *   frequency: 2e4,
  * });
- * console.log(r.resistanceChange.toPrecision(4)); // ≈ 0.08066
+ * console.log(r.resistanceChange.toPrecision(4)); // 0.02157
  * console.log(r.inductanceChange < 0); // true
  * ```
  * @category Workpiece

@@ -198,22 +198,24 @@ const TAIL = 20;
 
 /**
  * Baker's p + jq = (1+j) I1(z)/I0(z) at z = (1+j)u, u ≥ 0 (radius over skin depth), ≤ 5e-16
- * relative to |p + jq|, and p without cancellation for small u.
+ * relative to |p + jq|, and p and q − u (`qExcess`) without cancellation for small u.
  *
  * u ≤ 0.3: Taylor series, with (1+j) z^(2k+1) = (2j)^(k+1) u^(2k+1) split into p and q;
  * 0.3 < u < 30: backward recurrence of the continued fraction r_n = 1/(2n/z + r_{n+1}),
  * 2n/z = (n/u)(1 − j), from n = |z| + 20; u ≥ 20: 19 terms of the asymptotic series
  * (the second exponential is e^(−2u) < 1e-17 relative there).
  */
-export function bakerPQ(u: number): { p: number; q: number } {
+export function bakerPQ(u: number): { p: number; q: number; qExcess: number } {
   if (u <= 0.3) {
     // (2j)^(k+1): k = 0 → 2j, 1 → −4, 2 → −8j, 3 → 16, ...
     const u2 = u * u;
     let p = 0;
-    let q = 0;
-    let pow = u; // u^(2k+1)
-    let mag = 2; // |(2j)^(k+1)|
-    for (let k = 0; k < 23; k++) {
+    let q = 0; // all q terms but the first, which is exactly u
+    let pow = u * u * u * u * u; // u^(2k+1), from k = 2
+    let mag = 8; // |(2j)^(k+1)|, from k = 2
+    // k = 1 term: p = −4 b_3 u³ = u³/4
+    p = -4 * RATIO_SERIES[3]! * u * u * u;
+    for (let k = 2; k < 23; k++) {
       const term = RATIO_SERIES[2 * k + 1]! * mag * pow;
       switch (k & 3) {
         case 0:
@@ -230,9 +232,9 @@ export function bakerPQ(u: number): { p: number; q: number } {
       }
       pow *= u2;
       mag *= 2;
-      if (Math.abs(term) < 1e-18 * q) break;
+      if (Math.abs(term) < 1e-18 * u) break;
     }
-    return { p, q };
+    return { p, q: u + q, qExcess: q };
   }
   let rRe: number;
   let rIm: number;
@@ -261,5 +263,6 @@ export function bakerPQ(u: number): { p: number; q: number } {
     }
   }
   // (1 + j) r
-  return { p: rRe - rIm, q: rRe + rIm };
+  const q = rRe + rIm;
+  return { p: rRe - rIm, q, qExcess: q - u };
 }

@@ -77,11 +77,12 @@ describe("coilOverPlate properties", () => {
     );
   });
 
-  it("as frequency → 0 a non-magnetic plate disappears (ΔL → 0)", () => {
+  it("as frequency → 0 a non-magnetic plate disappears (ΔL → 0 once the skin depth is 1e4 coil radii)", () => {
     fc.assert(
       fc.property(cases, (c) => {
-        const r = run({ ...c, relativePermeability: 1 }, { frequency: 1e-4 });
-        return Math.abs(r.inductanceChange) < 1e-6 * r.airCoreInductance;
+        const f = c.resistivity / (Math.PI * 4e-7 * Math.PI * (1e4 * c.outerRadius) ** 2);
+        const r = run({ ...c, relativePermeability: 1 }, { frequency: f });
+        return Math.abs(r.inductanceChange) < 1e-6 * r.airCoreInductance && r.resistanceChange < 1e-6 * 2 * Math.PI * f * r.airCoreInductance;
       }),
       { seed: 1, numRuns: 100 },
     );
