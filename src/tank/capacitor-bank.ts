@@ -88,24 +88,38 @@ function resolveSeries(where: string, series: unknown): readonly number[] {
   throw new InputError(where, "series", series, "", `"E12", "E24", "E96" or a non-empty array of mantissas in [1, 10)`);
 }
 
-/** The standard value nearest (in ratio) to `ideal`, restricted to [lo, hi]; 0 when none. */
+/** A mantissa times a power of ten, rounded to 12 significant digits (6.8 × 1e-7 → 6.8e-7 exactly). */
+function standardValue(mantissa: number, decade: number): number {
+  return Number((mantissa * Math.pow(10, decade)).toPrecision(12));
+}
+
+/**
+ * The standard value nearest (in ratio) to `ideal` among those in [lo, hi]; 0 when none lies
+ * there. `mantissas` is sorted ascending in [1, 10).
+ */
 function nearestStandard(mantissas: readonly number[], ideal: number, lo: number, hi: number): number {
-  const decade = Math.floor(Math.log10(ideal));
-  let best = 0;
-  let bestDistance = Infinity;
-  for (let d = decade - 1; d <= decade + 1; d++) {
-    const scale = Math.pow(10, d);
-    for (const m of mantissas) {
-      const value = Number((m * scale).toPrecision(12));
-      if (value < lo * (1 - 1e-12) || value > hi * (1 + 1e-12)) continue;
-      const distance = Math.abs(Math.log(value / ideal));
-      if (distance < bestDistance) {
-        bestDistance = distance;
-        best = value;
-      }
-    }
+  const target = Math.min(Math.max(ideal, lo), hi);
+  let decade = Math.floor(Math.log10(target));
+  let m = target / Math.pow(10, decade);
+  if (m >= 10) {
+    m /= 10;
+    decade += 1;
+  } else if (m < 1) {
+    m *= 10;
+    decade -= 1;
   }
-  return best;
+  // Neighbours: largest mantissa ≤ m and smallest ≥ m (wrapping into the next decades).
+  let k = 0;
+  while (k < mantissas.length && (mantissas[k] as number) <= m) k++;
+  const below = k > 0 ? standardValue(mantissas[k - 1] as number, decade) : standardValue(mantissas[mantissas.length - 1] as number, decade - 1);
+  const above = k < mantissas.length ? standardValue(mantissas[k] as number, decade) : standardValue(mantissas[0] as number, decade + 1);
+  const inRange = (v: number): boolean => v >= lo * (1 - 1e-12) && v <= hi * (1 + 1e-12);
+  const okBelow = inRange(below);
+  const okAbove = inRange(above);
+  if (okBelow && okAbove) return Math.abs(Math.log(below / ideal)) <= Math.abs(Math.log(above / ideal)) ? below : above;
+  if (okBelow) return below;
+  if (okAbove) return above;
+  return 0;
 }
 
 /**
