@@ -19,8 +19,14 @@ export type {
 } from "./long-coil.js";
 export { slabInTangentialField } from "./slab.js";
 export type { SlabInTangentialFieldOptions, SlabInTangentialFieldResult } from "./slab.js";
-export { coilOverPlate } from "./coil-over-plate.js";
-export type { CoilAbovePlate, CoilOverPlateOptions, CoilOverPlateResult, PlateLayer } from "./coil-over-plate.js";
+export { coilOverPlate, coilOverPlateTruncatedRegion } from "./coil-over-plate.js";
+export type {
+  CoilAbovePlate,
+  CoilOverPlateOptions,
+  CoilOverPlateResult,
+  CoilOverPlateTruncatedRegionOptions,
+  PlateLayer,
+} from "./coil-over-plate.js";
 export { encirclingCoilOverRod } from "./encircling-coil.js";
 export type {
   EncirclingCoil,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import * as lib from "../../src/index.js";
-import { brentRoot, coilOverPlate, InputError } from "../../src/index.js";
+import { brentRoot, coilOverPlate, coilOverPlateTruncatedRegion, InputError } from "../../src/index.js";
 import plate from "../fixtures/workpiece/plate.json" with { type: "json" };
 
 type Layer = { thickness: number | string; resistivity: number; relativePermeability: number };
@@ -115,5 +115,28 @@ describe("coilOverPlate", () => {
       { ...ok, coil: undefined },
     ];
     for (const b of bad) expect(() => coilOverPlate(b as never)).toThrow(InputError);
+  });
+});
+
+describe("coilOverPlateTruncatedRegion", () => {
+  it("agrees with coilOverPlate (two methods: eigenvalue series vs quadrature) to 3e-6 of |ΔZ| and 1e-6 of L0 over the fixture cases", () => {
+    for (const c of plate.cases) {
+      const o = { coil: c.coil, plate: layersOf(c.layers), frequency: c.frequency };
+      const a = coilOverPlate(o);
+      const b = coilOverPlateTruncatedRegion(o);
+      const scale = Math.hypot(a.resistanceChange, a.reactanceChange);
+      expect(Math.hypot(b.resistanceChange - a.resistanceChange, b.reactanceChange - a.reactanceChange)).toBeLessThanOrEqual(3e-6 * scale);
+      expect(Math.abs(b.airCoreInductance / a.airCoreInductance - 1)).toBeLessThanOrEqual(1e-6);
+    }
+  });
+
+  it("prints the documented example", () => {
+    const options = { coil, plate: aluminium, frequency: 2e4 };
+    expect(Math.abs(coilOverPlateTruncatedRegion(options).resistanceChange / coilOverPlate(options).resistanceChange - 1) < 1e-6).toBe(true);
+  });
+
+  it("throws InputError for a domain radius inside the coil and other bad input", () => {
+    expect(() => coilOverPlateTruncatedRegion({ coil, plate: aluminium, frequency: 1e3, domainRadius: 0.02 })).toThrow(InputError);
+    expect(() => coilOverPlateTruncatedRegion({ coil, plate: aluminium, frequency: -1 })).toThrow(InputError);
   });
 });
