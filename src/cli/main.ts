@@ -1,12 +1,13 @@
 /**
- * The `fluxwright` command line. Subcommands arrive with the heater study.
+ * The `fluxwright` command line: `fluxwright study FILE [--json] [--html OUT]`, `sweep`,
+ * `optimise`, `help`. See `fluxwright --help`.
  */
-import { formatQuantity } from "../units/index.js";
+import { readFileSync, writeFileSync } from "node:fs";
+import { runCli } from "./commands.js";
 
-const args = process.argv.slice(2);
-if (args.length === 0 || args[0] === "--help" || args[0] === "-h") {
-  process.stdout.write("usage: fluxwright <command> [options]\n");
-  process.exit(0);
-}
-process.stderr.write(`fluxwright: unknown command ${JSON.stringify(args[0])} (${formatQuantity(0, "V")})\n`);
-process.exit(2);
+process.exitCode = runCli(process.argv.slice(2), {
+  stdout: (text) => process.stdout.write(text),
+  stderr: (text) => process.stderr.write(text),
+  readFile: (path) => readFileSync(path, "utf8"),
+  writeFile: (path, text) => writeFileSync(path, text, "utf8"),
+});

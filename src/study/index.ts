@@ -42,3 +42,25 @@ export type {
   ResolvedEnvironment,
   ResolvedHeaterDescription,
 } from "./read-description.js";
+export { studyHeater } from "./study-heater.js";
+export type {
+  StudyHeaterOptions,
+  HeaterPartFacts,
+  HeaterHeatUp,
+  HeaterTemperatureScan,
+  HeaterImpedanceSweep,
+  HeaterStudy,
+} from "./study-heater.js";
+export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
+export { sweepHeater } from "./sweep-heater.js";
+export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep } from "./sweep-heater.js";
+export { optimizeHeater } from "./optimize-heater.js";
+export type {
+  HeaterLimits,
+  HeaterSearchSpace,
+  HeaterGoal,
+  HeaterCandidate,
+  HeaterRejection,
+  HeaterOptimization,
+} from "./optimize-heater.js";
+export type { HeaterSummary } from "./summary.js";

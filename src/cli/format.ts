@@ -1,0 +1,94 @@
+/**
+ * Number formatting for reports: engineering units through `formatQuantity`, temperatures in
+ * °C, durations in minutes and seconds, and aligned text tables.
+ */
+import { formatQuantity, ZERO_CELSIUS } from "../units/index.js";
+
+/** A quantity with SI prefix and unit (`12.5 kHz`); `—` for null or non-finite values. */
+export function q(value: number | null | undefined, unit: string, digits = 4): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  return formatQuantity(value, unit, { digits });
+}
+
+/** A temperature given in kelvin, printed in °C (`120 °C`). */
+export function celsiusText(kelvin: number | null | undefined, digits = 4): string {
+  if (kelvin === null || kelvin === undefined || !Number.isFinite(kelvin)) return "—";
+  const c = kelvin - ZERO_CELSIUS;
+  const rounded = Number(c.toPrecision(digits));
+  return `${Math.abs(rounded) < 1e-9 ? 0 : Number(rounded.toFixed(1))} °C`;
+}
+
+/** An area in m² without prefix (a prefix on a squared unit reads ambiguously): `0.0147 m²`. */
+export function area(value: number | null | undefined): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  return `${Number(value.toPrecision(3))} m²`;
+}
+
+/** A percentage with one decimal (`87.3 %`). */
+export function percent(fraction: number | null | undefined): string {
+  if (fraction === null || fraction === undefined || !Number.isFinite(fraction)) return "—";
+  return `${(100 * fraction).toFixed(1)} %`;
+}
+
+/** A duration: seconds below two minutes, else minutes and seconds, else hours and minutes. */
+export function duration(seconds: number | null | undefined): string {
+  if (seconds === null || seconds === undefined || !Number.isFinite(seconds)) return "—";
+  if (seconds < 120) return `${Number(seconds.toPrecision(3))} s`;
+  if (seconds < 7200) {
+    const m = Math.floor(seconds / 60);
+    return `${m} min ${Math.round(seconds - 60 * m)} s`;
+  }
+  const h = Math.floor(seconds / 3600);
+  return `${h} h ${Math.round((seconds - 3600 * h) / 60)} min`;
+}
+
+/** Display width of a string (code points; the report uses no wide characters). */
+function width(text: string): number {
+  return [...text].length;
+}
+
+/**
+ * Lays out rows as an aligned text table: first column left-aligned, the others right-aligned,
+ * two spaces between columns, an optional header underlined with dashes.
+ */
+export function textTable(rows: readonly (readonly string[])[], header?: readonly string[], indent = "  ", leftColumns = 1): string {
+  const all = header === undefined ? rows : [header, ...rows];
+  const columns = Math.max(...all.map((r) => r.length));
+  const widths: number[] = [];
+  for (let c = 0; c < columns; c++) widths.push(Math.max(...all.map((r) => width(r[c] ?? ""))));
+  const line = (r: readonly string[]): string =>
+    indent +
+    r
+      .map((cell, c) => {
+        const pad = " ".repeat((widths[c] ?? 0) - width(cell));
+        return c < leftColumns ? cell + pad : pad + cell;
+      })
+      .join("  ")
+      .trimEnd();
+  const out: string[] = [];
+  if (header !== undefined) {
+    out.push(line(header));
+    out.push(indent + widths.map((w) => "-".repeat(w)).join("  "));
+  }
+  for (const r of rows) out.push(line(r));
+  return out.join("\n");
+}
+
+/** Wraps text at `columns`, indenting continuation lines. */
+export function wrap(text: string, columns = 96, indent = "    "): string {
+  const lead = /^\s*/.exec(text)?.[0] ?? "";
+  const words = text.trim().split(/\s+/);
+  words[0] = lead + (words[0] ?? "");
+  const lines: string[] = [];
+  let line = "";
+  for (const w of words) {
+    if (line !== "" && width(line) + 1 + width(w) > columns) {
+      lines.push(line);
+      line = indent + w;
+    } else {
+      line = line === "" ? w : `${line} ${w}`;
+    }
+  }
+  if (line !== "") lines.push(line);
+  return lines.join("\n");
+}

@@ -1,0 +1,195 @@
+/**
+ * The plain-text report of a heater study: cautions first, then the operating points, losses,
+ * heat-up and the validity notes, in aligned tables with engineering units.
+ */
+import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterOperatingPoint } from "../study/index.js";
+import { area, celsiusText, duration, percent, q, textTable, wrap } from "./format.js";
+
+/** Rows comparing operating points side by side. */
+export function operatingRows(points: readonly HeaterOperatingPoint[]): string[][] {
+  const row = (label: string, f: (p: HeaterOperatingPoint) => string): string[] => [label, ...points.map(f)];
+  return [
+    row("frequency", (p) => q(p.frequency, "Hz")),
+    row("inductance at terminals", (p) => q(p.inductance, "H")),
+    row("coil resistance (AC)", (p) => q(p.coilResistance, "Ω")),
+    row("reflected resistance", (p) => (p.withPart ? q(p.reflectedResistance, "Ω") : "—")),
+    row("part permeability μr", (p) => (p.withPart ? p.partRelativePermeability.toPrecision(3) : "—")),
+    row("quality factor Q", (p) => p.qualityFactor.toPrecision(3)),
+    row("tank voltage (peak)", (p) => q(p.tankVoltagePeak, "V")),
+    row("coil current (RMS)", (p) => q(p.coilCurrentRms, "A")),
+    row("capacitor voltage (RMS)", (p) => q(p.capacitorVoltageRms, "V")),
+    row("capacitor current (RMS)", (p) => q(p.capacitorCurrentRms, "A")),
+    row("capacitor reactive power", (p) => q(p.capacitorReactivePower, "var")),
+    row("switch voltage (peak)", (p) => q(p.switchVoltagePeak, "V")),
+    row("switch current (peak)", (p) => q(p.switchCurrentPeak, "A")),
+    row("supply current", (p) => q(p.supplyCurrent, "A")),
+    row("supply terminal voltage", (p) => q(p.supplyTerminalVoltage, "V")),
+    row("input power", (p) => q(p.inputPower, "W")),
+    row("power into part", (p) => (p.withPart ? q(p.losses.part, "W") : "—")),
+    row("efficiency (part / input)", (p) => (p.withPart ? percent(p.efficiency) : "—")),
+    row("coil efficiency", (p) => (p.withPart ? percent(p.coilEfficiency) : "—")),
+  ];
+}
+
+/** The loss breakdown as [place, power] pairs. */
+export function lossEntries(p: HeaterOperatingPoint): [string, number][] {
+  return [
+    ["part (useful heat)", p.losses.part],
+    ["coil and leads", p.losses.coil],
+    ["switches (conduction)", p.losses.switches],
+    ["supply internal resistance", p.losses.supply],
+    ["capacitor bank", p.losses.capacitors],
+    ["concentrator core", p.losses.core],
+  ];
+}
+
+/**
+ * Renders a study as a readable text report (UTF-8, ≤ 100 columns).
+ *
+ * @param study - the study
+ * @param source - where it came from (file name), printed under the title
+ */
+export function studyTextReport(study: HeaterStudy, source?: string): string {
+  const d = study.description;
+  const out: string[] = [];
+  out.push(`fluxwright heater study: ${study.title}`);
+  if (source !== undefined) out.push(`study file: ${source}`);
+  out.push("");
+  if (study.cautions.length > 0) {
+    out.push(`CAUTIONS (${study.cautions.length})`);
+    for (const c of study.cautions) out.push(wrap(`  [${c.severity}] ${c.code}: ${c.message}`));
+    out.push("");
+  }
+  out.push("DESIGN");
+  const coil = d.coil;
+  const coilText =
+    coil.shape === "solenoid"
+      ? `solenoid, ${coil.turns} turns, radius ${q(coil.radius, "m")}, length ${q(coil.length, "m")}`
+      : `pancake, ${coil.turns} turns, radii ${q(coil.innerRadius, "m")} to ${q(coil.outerRadius, "m")}, lift-off ${q(coil.liftOff, "m")}`;
+  const c = coil.conductor;
+  const conductorText =
+    c.kind === "tube"
+      ? `${c.material.name} tube ${q(c.outerDiameter, "m")} × ${q(c.wallThickness, "m")} wall`
+      : c.kind === "litz"
+        ? `${c.material.name} litz ${c.strands} × ${q(c.strandDiameter, "m")}`
+        : `${c.material.name} wire ${q(c.diameter, "m")}`;
+  const p = d.part;
+  const partText =
+    p.shape === "ring"
+      ? `ring ${q(2 * p.outerRadius, "m")} OD × ${q(2 * p.innerRadius, "m")} ID × ${q(p.height, "m")}`
+      : p.shape === "bar"
+        ? `bar ${q(2 * p.radius, "m")} diameter × ${q(p.length, "m")}`
+        : p.shape === "tube"
+          ? `tube ${q(2 * p.outerRadius, "m")} OD, wall ${q(p.wallThickness, "m")}, ${q(p.length, "m")} long`
+          : `plate ${q(p.length, "m")} × ${q(p.width, "m")} × ${q(p.thickness, "m")}`;
+  out.push(
+    textTable([
+      ["supply", `${d.supply.kind}, ${q(d.supply.voltage, "V")}, internal ${q(d.supply.internalResistance, "Ω")}`],
+      ["inverter", d.inverter.kind === "current-fed-parallel" ? "current-fed parallel (self-oscillating push-pull)" : `voltage-fed series, ${d.inverter.bridge} bridge, ${d.inverter.control === "fixed" ? `fixed ${q(d.inverter.frequency, "Hz")}` : `tracking ${q(d.inverter.targetPower, "W")}`}`],
+      ["coil", coilText],
+      ["conductor", conductorText],
+      ["coil inductance (empty)", q(study.coil.inductance, "H")],
+      ["conductor length, DC resistance", `${q(study.coil.conductorLength, "m")}, ${q(study.coil.dcResistance, "Ω")}`],
+      ["capacitor bank", `${q(d.capacitor.capacitance, "F")}, tan δ ${d.capacitor.dissipationFactor}`],
+      ["part", `${p.material.name}, ${partText}`],
+      ["part mass, surface", `${q(study.part.mass, "kg")}, ${area(study.part.surfaceArea)}`],
+      ["heat", `${celsiusText(p.startTemperature)} → ${celsiusText(p.targetTemperature)}${study.part.curieTemperature === null ? "" : ` (Curie point ${celsiusText(study.part.curieTemperature)})`}`],
+    ], undefined, "  ", 2),
+  );
+  out.push("");
+  out.push("OPERATING POINTS");
+  out.push(
+    textTable(operatingRows(study.atTarget === null ? [study.emptyCoil, study.operating] : [study.emptyCoil, study.operating, study.atTarget]), [
+      "",
+      "empty coil",
+      `part at ${celsiusText(study.operating.partTemperature)}`,
+      ...(study.atTarget === null ? [] : [`part at ${celsiusText(study.atTarget.partTemperature)}`]),
+    ]),
+  );
+  out.push(`  frequency shift by the part: ${q(study.frequencyShift, "Hz")}; drift during heat-up: ${q(study.frequencyDrift, "Hz")}`);
+  out.push("");
+  out.push(`WHERE THE POWER GOES (part at ${celsiusText(study.operating.partTemperature)})`);
+  const entries = lossEntries(study.operating);
+  const total = study.operating.inputPower;
+  out.push(
+    textTable(
+      [...entries.map(([label, w]) => [label, q(w, "W"), percent(total > 0 ? w / total : null)]), ["total = input power", q(total, "W"), percent(total > 0 ? 1 : null)]],
+      ["place", "power", "share"],
+    ),
+  );
+  out.push("");
+  if (study.heatUp !== null) {
+    const h = study.heatUp;
+    out.push("HEAT-UP");
+    out.push(
+      textTable([
+        [`time to ${celsiusText(p.targetTemperature)}`, h.reachable ? duration(h.timeToTarget) : "not reached"],
+        ["temperature the part would settle at", celsiusText(h.steadyStateTemperature)],
+        ["Curie point crossed at", h.curieCrossingTime === null ? "—" : duration(h.curieCrossingTime)],
+        ["energy from the supply", q(h.supplyEnergy, "J")],
+        ["charge from the supply", `${q(h.supplyCharge, "C")} (${(h.supplyCharge / 3600).toPrecision(3)} A·h)`],
+        ["heat into the part", q(h.energy.input, "J")],
+        ["heat lost (convection + radiation)", q(h.energy.convection + h.energy.radiation, "J")],
+        ["Biot number", h.biotNumber === null ? "—" : h.biotNumber.toPrecision(3)],
+      ]),
+    );
+    out.push("");
+  }
+  if (study.validity.length > 0) {
+    out.push(`VALIDITY NOTES (${study.validity.length})`);
+    for (const v of study.validity) out.push(wrap(`  - ${v.code}: ${v.message}`));
+    out.push("");
+  }
+  return out.join("\n");
+}
+
+/** Renders a sweep as a text table. */
+export function sweepTextReport(sweep: HeaterSweep): string {
+  const rows = sweep.rows.map((r) =>
+    r.summary === null
+      ? [String(r.value), r.problem ?? "invalid", "", "", "", "", "", ""]
+      : [
+          String(r.value),
+          q(r.summary.frequency, "Hz"),
+          q(r.summary.partPower, "W"),
+          percent(r.summary.efficiency),
+          q(r.summary.tankVoltagePeak, "V"),
+          q(r.summary.coilCurrentRms, "A"),
+          q(r.summary.supplyCurrent, "A"),
+          duration(r.summary.timeToTarget),
+        ],
+  );
+  return [`sweep of ${sweep.field}`, textTable(rows, [sweep.field, "frequency", "part power", "efficiency", "tank V peak", "coil I rms", "supply I", "time to target"]), ""].join("\n");
+}
+
+/** Renders an optimisation result as text. */
+export function optimisationTextReport(r: HeaterOptimization): string {
+  const out: string[] = [];
+  out.push(`candidates evaluated: ${r.evaluated}, within limits: ${r.feasible}`);
+  out.push("");
+  out.push("BEST DESIGNS");
+  out.push(
+    textTable(
+      r.best.map((b, i) => [
+        String(i + 1),
+        String(b.turns),
+        q(b.capacitance, "F"),
+        b.conductor.kind,
+        q(b.summary.frequency, "Hz"),
+        q(b.summary.partPower, "W"),
+        percent(b.summary.efficiency),
+        q(b.summary.tankVoltagePeak, "V"),
+        duration(b.summary.timeToTarget),
+        b.score.toPrecision(3),
+      ]),
+      ["#", "turns", "capacitance", "conductor", "frequency", "part power", "efficiency", "tank V peak", "time", "miss"],
+    ),
+  );
+  out.push("");
+  if (r.rejected.length > 0) {
+    out.push("WHY OTHERS FAILED");
+    out.push(textTable(r.rejected.map((x) => [x.reason, String(x.count)]), ["reason", "candidates"]));
+    out.push("");
+  }
+  return out.join("\n");
+}

@@ -1,0 +1,324 @@
+/**
+ * Searching turns, capacitance, conductor and frequency for a design that meets a power or
+ * heat-up-time goal within limits.
+ *
+ * @packageDocumentation
+ */
+import { InputError } from "../core/index.js";
+import { specificHeatAt } from "../materials/index.js";
+import { parseQuantity } from "../units/index.js";
+import { E12, E24 } from "../tank/index.js";
+import type { HeaterConductor, HeaterDescription, QuantityInput } from "./description.js";
+import { coilProperties, heaterOperatingPoint } from "./operating-point.js";
+import type { HeaterOperatingPoint } from "./operating-point.js";
+import { readHeaterDescription } from "./read-description.js";
+import { studyHeater } from "./study-heater.js";
+import { summarise } from "./summary.js";
+import type { HeaterSummary } from "./summary.js";
+
+const WHERE = "optimizeHeater";
+
+/**
+ * Upper (and for frequency, lower) limits a design must respect. All optional.
+ *
+ * @category Heater study
+ */
+export interface HeaterLimits {
+  /** Largest peak tank (coil) voltage [V]. */
+  readonly tankVoltagePeak?: QuantityInput;
+  /** Largest RMS coil current [A]. */
+  readonly coilCurrentRms?: QuantityInput;
+  /** Largest DC supply current [A]. */
+  readonly supplyCurrent?: QuantityInput;
+  /** Largest RMS capacitor-bank voltage [V]. */
+  readonly capacitorVoltageRms?: QuantityInput;
+  /** Largest RMS capacitor-bank current [A]. */
+  readonly capacitorCurrentRms?: QuantityInput;
+  /** Largest peak switch voltage [V]. */
+  readonly switchVoltagePeak?: QuantityInput;
+  /** Lowest operating frequency [Hz] (e.g. 20 kHz to stay above hearing). */
+  readonly minFrequency?: QuantityInput;
+  /** Highest operating frequency [Hz]. */
+  readonly maxFrequency?: QuantityInput;
+}
+
+/**
+ * Where {@link optimizeHeater} looks. Each list replaces the base description's value; absent
+ * lists get a default range around it.
+ *
+ * @category Heater study
+ */
+export interface HeaterSearchSpace {
+  /** Turn counts to try (integers ≥ 1); default from half to twice the base turns. */
+  readonly turns?: readonly number[];
+  /** IEC 60063 series for the capacitance: `"E12"` (default) or `"E24"`. */
+  readonly capacitanceSeries?: "E12" | "E24";
+  /** Smallest capacitance [F]; default a quarter of the base. */
+  readonly minCapacitance?: QuantityInput;
+  /** Largest capacitance [F]; default four times the base. */
+  readonly maxCapacitance?: QuantityInput;
+  /** Conductors to try; default the base conductor only. */
+  readonly conductors?: readonly HeaterConductor[];
+  /** Switching frequencies to try [Hz] (fixed-frequency series inverters only); default the base frequency. */
+  readonly frequencies?: readonly QuantityInput[];
+}
+
+/**
+ * What {@link optimizeHeater} aims for: exactly one of `targetPower` or `targetTime`.
+ *
+ * @category Heater study
+ */
+export interface HeaterGoal {
+  /** Power into the cold part [W]. */
+  readonly targetPower?: QuantityInput;
+  /** Heat-up time from start to target temperature [s]. */
+  readonly targetTime?: QuantityInput;
+  /** Limits every reported design respects. */
+  readonly limits?: HeaterLimits;
+  /** The search space. */
+  readonly search?: HeaterSearchSpace;
+  /** How many of the best designs to return, 1 … 50 (default 5). */
+  readonly keep?: number;
+}
+
+/**
+ * One design found by {@link optimizeHeater}.
+ *
+ * @category Heater study
+ */
+export interface HeaterCandidate {
+  /** Turns. */
+  readonly turns: number;
+  /** Capacitance [F]. */
+  readonly capacitance: number;
+  /** The conductor. */
+  readonly conductor: HeaterConductor;
+  /** Switching frequency [Hz] for fixed-frequency series inverters, else `null`. */
+  readonly switchingFrequency: number | null;
+  /** Headline numbers (time to target for the finalists of a time goal). */
+  readonly summary: HeaterSummary;
+  /** Distance from the goal, |ln(achieved / target)| (0 is a perfect hit). */
+  readonly score: number;
+  /** The complete description of this design, ready for {@link studyHeater}. */
+  readonly description: HeaterDescription;
+}
+
+/**
+ * Why candidates were rejected: one entry per reason, with a count.
+ *
+ * @category Heater study
+ */
+export interface HeaterRejection {
+  /** The reason, e.g. `"tank voltage above limit"` or the description problem. */
+  readonly reason: string;
+  /** How many candidates failed for it (a candidate may count under several limits). */
+  readonly count: number;
+}
+
+/**
+ * The result of {@link optimizeHeater}.
+ *
+ * @category Heater study
+ */
+export interface HeaterOptimization {
+  /** Candidates evaluated. */
+  readonly evaluated: number;
+  /** Candidates within every limit. */
+  readonly feasible: number;
+  /** The best designs, closest to the goal first. */
+  readonly best: readonly HeaterCandidate[];
+  /** Why the others failed, most common first. */
+  readonly rejected: readonly HeaterRejection[];
+}
+
+function quantity(path: string, value: QuantityInput | undefined, unit: string): number | null {
+  if (value === undefined) return null;
+  const v = typeof value === "string" ? parseQuantity(value, unit) : value;
+  if (typeof v !== "number" || !(v > 0) || !Number.isFinite(v)) throw new InputError(WHERE, path, value, unit, "a finite number > 0 or a quantity text");
+  return v;
+}
+
+/** E-series values between min and max. */
+function seriesValues(series: readonly number[], min: number, max: number): number[] {
+  const out: number[] = [];
+  for (let decade = Math.floor(Math.log10(min)) - 1; decade <= Math.ceil(Math.log10(max)); decade++) {
+    for (const m of series) {
+      const v = Number((m * 10 ** decade).toPrecision(3));
+      if (v >= min * (1 - 1e-9) && v <= max * (1 + 1e-9)) out.push(v);
+    }
+  }
+  return out;
+}
+
+/** The limit checks: [reason, value of the operating point, limit]. */
+const LIMIT_CHECKS: readonly [keyof HeaterLimits, string, string, (p: HeaterOperatingPoint) => number, "max" | "min"][] = [
+  ["tankVoltagePeak", "V", "tank voltage above limit", (p) => p.tankVoltagePeak, "max"],
+  ["coilCurrentRms", "A", "coil current above limit", (p) => p.coilCurrentRms, "max"],
+  ["supplyCurrent", "A", "supply current above limit", (p) => p.supplyCurrent, "max"],
+  ["capacitorVoltageRms", "V", "capacitor voltage above limit", (p) => p.capacitorVoltageRms, "max"],
+  ["capacitorCurrentRms", "A", "capacitor current above limit", (p) => p.capacitorCurrentRms, "max"],
+  ["switchVoltagePeak", "V", "switch voltage above limit", (p) => p.switchVoltagePeak, "max"],
+  ["minFrequency", "Hz", "frequency below limit", (p) => p.frequency, "min"],
+  ["maxFrequency", "Hz", "frequency above limit", (p) => p.frequency, "max"],
+];
+
+/**
+ * Searches turns, capacitance (IEC 60063 E12/E24 values), conductor and (for a fixed-frequency
+ * series inverter) switching frequency for designs that come closest to a target part power or
+ * heat-up time while respecting voltage, current and frequency limits. Every candidate is a full
+ * operating point of {@link studyHeater}'s model (same composition of modules); for a time goal
+ * the candidates are ranked by an energy estimate first and the best are then run through the
+ * full electro-thermal heat-up. Returns the best few designs and, for the others, why they
+ * failed (counts per reason).
+ *
+ * Performance: about 10⁴ candidates in a few seconds for solenoid coils (one core); pancake
+ * coils cost more per candidate (the Dodd–Deeds integral at each fixed-point step).
+ *
+ * @param description - the base design
+ * @param goal - target, limits, search space and how many designs to keep
+ * @returns the best designs and the rejection counts
+ * @throws {@link InputError} when the base description is invalid, the goal has neither or both
+ * targets, or a limit or search value is malformed
+ * @example
+ * ```ts
+ * import { optimizeHeater } from "fluxwright";
+ * const base = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const r = optimizeHeater(base, { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 });
+ * console.log(r.best.length <= 3, r.evaluated > 0); // true true
+ * ```
+ * @category Heater study
+ */
+export function optimizeHeater(description: unknown, goal: HeaterGoal): HeaterOptimization {
+  const base = readHeaterDescription(description);
+  if (typeof goal !== "object" || goal === null) throw new InputError(WHERE, "goal", goal, "", "an object");
+  const targetPower = quantity("goal.targetPower", goal.targetPower, "W");
+  const targetTime = quantity("goal.targetTime", goal.targetTime, "s");
+  if ((targetPower === null) === (targetTime === null)) {
+    throw new InputError(WHERE, "goal", goal, "", "an object with exactly one of targetPower or targetTime");
+  }
+  const keep = goal.keep ?? 5;
+  if (!Number.isInteger(keep) || keep < 1 || keep > 50) throw new InputError(WHERE, "goal.keep", keep, "", "an integer in [1, 50]");
+  const limits = new Map<string, number>();
+  for (const [key, unit] of LIMIT_CHECKS.map((c) => [c[0], c[1]] as const)) {
+    const v = quantity(`goal.limits.${key}`, goal.limits?.[key], unit);
+    if (v !== null) limits.set(key, v);
+  }
+  const search = goal.search ?? {};
+  const raw = structuredClone(description) as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
+  const turnsList = search.turns ?? Array.from({ length: 2 * base.coil.turns - Math.max(1, Math.round(base.coil.turns / 2)) + 1 }, (_, i) => Math.max(1, Math.round(base.coil.turns / 2)) + i);
+  turnsList.forEach((t, i) => {
+    if (!Number.isInteger(t) || t < 1) throw new InputError(WHERE, `goal.search.turns[${i}]`, t, "", "an integer ≥ 1");
+  });
+  const cMin = quantity("goal.search.minCapacitance", search.minCapacitance, "F") ?? base.capacitor.capacitance / 4;
+  const cMax = quantity("goal.search.maxCapacitance", search.maxCapacitance, "F") ?? base.capacitor.capacitance * 4;
+  if (!(cMax >= cMin)) throw new InputError(WHERE, "goal.search.maxCapacitance", search.maxCapacitance, "F", `≥ minCapacitance = ${cMin}`);
+  const capacitances = seriesValues(search.capacitanceSeries === "E24" ? E24 : E12, cMin, cMax);
+  const conductors: readonly HeaterConductor[] = search.conductors ?? [raw.coil.conductor as HeaterConductor];
+  const fixedSeries = base.inverter.kind === "voltage-fed-series" && base.inverter.control === "fixed";
+  const frequencies: (number | null)[] = fixedSeries
+    ? (search.frequencies ?? [base.inverter.kind === "voltage-fed-series" ? (base.inverter.frequency ?? 0) : 0]).map((f, i) => quantity(`goal.search.frequencies[${i}]`, f, "Hz") as number)
+    : [null];
+
+  const rejections = new Map<string, number>();
+  const reject = (reason: string): void => {
+    rejections.set(reason, (rejections.get(reason) ?? 0) + 1);
+  };
+  interface Feasible {
+    turns: number;
+    capacitance: number;
+    conductor: HeaterConductor;
+    frequency: number | null;
+    point: HeaterOperatingPoint;
+    empty: HeaterOperatingPoint | null;
+    variant: HeaterDescription;
+  }
+  const feasible: Feasible[] = [];
+  let evaluated = 0;
+  // the heat-up-time estimate: energy to heat the part over the cold part power (losses ignored)
+  const cMid = specificHeatAt(base.part.material, (base.part.startTemperature + base.part.targetTemperature) / 2);
+  const energyEstimate = (mass: number): number => mass * cMid * (base.part.targetTemperature - base.part.startTemperature);
+
+  for (const conductor of conductors) {
+    for (const turns of turnsList) {
+      for (const frequency of frequencies) {
+        // the capacitance does not change the coil: read the coil once per (conductor, turns, frequency)
+        const coilVariant = { ...raw, coil: { ...raw.coil, turns, conductor } } as Record<string, unknown>;
+        if (frequency !== null) coilVariant.inverter = { ...raw.inverter, frequency };
+        let props;
+        try {
+          props = coilProperties(readHeaterDescription(coilVariant));
+        } catch (e) {
+          if (!(e instanceof InputError)) throw e;
+          for (let k = 0; k < capacitances.length; k++) reject(`invalid design: ${e.message.replace(/^readHeaterDescription: /, "")}`);
+          evaluated += capacitances.length;
+          continue;
+        }
+        for (const capacitance of capacitances) {
+          evaluated++;
+          const variant = { ...coilVariant, capacitor: { ...raw.capacitor, capacitance } } as unknown as HeaterDescription;
+          let point: HeaterOperatingPoint;
+          try {
+            const d = readHeaterDescription(variant);
+            point = heaterOperatingPoint(d, d.part.startTemperature, true, props);
+          } catch (e) {
+            if (!(e instanceof InputError)) throw e;
+            reject(`no operating point: ${e.message}`);
+            continue;
+          }
+          let ok = true;
+          for (const [key, , reason, value, kind] of LIMIT_CHECKS) {
+            const limit = limits.get(key);
+            if (limit === undefined) continue;
+            const v = value(point);
+            if (kind === "max" ? v > limit : v < limit) {
+              reject(reason);
+              ok = false;
+            }
+          }
+          if (ok) feasible.push({ turns, capacitance, conductor, frequency, point, empty: null, variant });
+        }
+      }
+    }
+  }
+
+  // rank: Float64Array of scores
+  const scores = new Float64Array(feasible.length);
+  const mass = studyHeater(description, { heatUp: false, temperatureScan: false, impedanceSweep: false }).part.mass;
+  for (let i = 0; i < feasible.length; i++) {
+    const p = (feasible[i] as Feasible).point.losses.part;
+    scores[i] = targetPower !== null ? Math.abs(Math.log(Math.max(p, 1e-300) / targetPower)) : Math.abs(Math.log(energyEstimate(mass) / Math.max(p, 1e-300) / (targetTime as number)));
+  }
+  const order = Array.from(scores.keys()).sort((a, b) => (scores[a] as number) - (scores[b] as number));
+  let chosen: { f: Feasible; score: number; timeToTarget: number | null; empty: HeaterOperatingPoint }[] = [];
+  const finalists = order.slice(0, targetTime !== null ? Math.max(4 * keep, 20) : keep);
+  for (const i of finalists) {
+    const f = feasible[i] as Feasible;
+    const s = studyHeater(f.variant, { heatUp: targetTime !== null, temperatureScan: false, impedanceSweep: false });
+    const t = s.heatUp?.timeToTarget ?? null;
+    const score = targetTime !== null ? (t === null ? Infinity : Math.abs(Math.log(t / targetTime))) : (scores[i] as number);
+    chosen.push({ f, score, timeToTarget: t, empty: s.emptyCoil });
+  }
+  if (targetTime !== null) {
+    for (const c of chosen) if (c.timeToTarget === null) reject("target temperature not reached");
+    chosen = chosen.filter((c) => c.timeToTarget !== null).sort((a, b) => a.score - b.score);
+  }
+  const best: HeaterCandidate[] = chosen.slice(0, keep).map(({ f, score, timeToTarget, empty }) => ({
+    turns: f.turns,
+    capacitance: f.capacitance,
+    conductor: f.conductor,
+    switchingFrequency: f.frequency,
+    summary: summarise(f.point, empty, timeToTarget),
+    score,
+    description: f.variant,
+  }));
+  const rejected = [...rejections.entries()].map(([reason, count]) => ({ reason, count })).sort((a, b) => b.count - a.count);
+  return { evaluated, feasible: feasible.length, best, rejected };
+}

@@ -1,0 +1,126 @@
+/**
+ * Sweeping one field of a heater description.
+ *
+ * @packageDocumentation
+ */
+import { InputError } from "../core/index.js";
+import type { QuantityInput } from "./description.js";
+import { studyHeater } from "./study-heater.js";
+import { summarise } from "./summary.js";
+import type { HeaterSummary } from "./summary.js";
+
+/**
+ * What {@link sweepHeater} varies.
+ *
+ * @category Heater study
+ */
+export interface HeaterSweepSpec {
+  /** Dotted path of a numeric field of the description, e.g. `"coil.turns"`, `"capacitor.capacitance"`, `"supply.voltage"`. */
+  readonly field: string;
+  /** The values to give it: SI numbers or text quantities (`"3.3 µF"`), at least one. */
+  readonly values: readonly QuantityInput[];
+  /** Also run the electro-thermal heat-up for each value (default `true`). */
+  readonly heatUp?: boolean;
+}
+
+/**
+ * One row of a sweep table.
+ *
+ * @category Heater study
+ */
+export interface HeaterSweepRow {
+  /** The value given to the field, as written. */
+  readonly value: QuantityInput;
+  /** The headline numbers, or `null` when the description was invalid with this value. */
+  readonly summary: HeaterSummary | null;
+  /** Number of cautions the study raised (0 when invalid). */
+  readonly cautionCount: number;
+  /** Why the row has no result (the description's problem, with field path), else `null`. */
+  readonly problem: string | null;
+}
+
+/**
+ * The result of {@link sweepHeater}.
+ *
+ * @category Heater study
+ */
+export interface HeaterSweep {
+  /** The swept field's path. */
+  readonly field: string;
+  /** One row per value, in the order given. */
+  readonly rows: readonly HeaterSweepRow[];
+}
+
+/** Whether the path names a field whose parent object exists in the description. */
+function setField(root: unknown, path: string, value: unknown): unknown {
+  const copy = structuredClone(root) as Record<string, unknown>;
+  const keys = path.split(".");
+  let node: Record<string, unknown> = copy;
+  for (const key of keys.slice(0, -1)) {
+    const next = node[key];
+    if (typeof next !== "object" || next === null || Array.isArray(next)) {
+      throw new InputError("sweepHeater", "field", path, "", "the dotted path of a field of the description (its parent objects must exist)");
+    }
+    node = next as Record<string, unknown>;
+  }
+  const last = keys[keys.length - 1] as string;
+  const current = node[last];
+  if (current !== undefined && typeof current !== "number" && typeof current !== "string") {
+    throw new InputError("sweepHeater", "field", path, "", "a numeric field (number or quantity text), not an object");
+  }
+  node[last] = value;
+  return copy;
+}
+
+/**
+ * Sweeps one numeric field of a heater description over a list of values and studies each
+ * variant with {@link studyHeater}: a table of headline numbers per value. A value that makes
+ * the description invalid gives a row with its `problem` (field path and reason) instead of
+ * stopping the sweep.
+ *
+ * @param description - the base design (see {@link HeaterDescription})
+ * @param sweep - `field` (dotted path) and `values`
+ * @returns the table
+ * @throws {@link InputError} when the base description is invalid, `field` is not a dotted path
+ * to a numeric field, or `values` is empty or holds something other than numbers and strings
+ * @example
+ * ```ts
+ * import { sweepHeater } from "fluxwright";
+ * const base = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const table = sweepHeater(base, { field: "coil.turns", values: [5, 6, 0], heatUp: false });
+ * console.log(table.rows.length, table.rows[2]?.problem !== null); // 3 true
+ * ```
+ * @category Heater study
+ */
+export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): HeaterSweep {
+  const where = "sweepHeater";
+  if (typeof sweep !== "object" || sweep === null) throw new InputError(where, "sweep", sweep, "", "an object { field, values }");
+  if (typeof sweep.field !== "string" || !/^[A-Za-z]\w*(\.[A-Za-z]\w*)*$/.test(sweep.field)) {
+    throw new InputError(where, "field", sweep.field, "", "a dotted field path such as \"coil.turns\"");
+  }
+  if (!Array.isArray(sweep.values) || sweep.values.length === 0) throw new InputError(where, "values", sweep.values, "", "a non-empty array");
+  sweep.values.forEach((v, i) => {
+    if (typeof v !== "number" && typeof v !== "string") throw new InputError(where, `values[${i}]`, v, "", "a number or a quantity text");
+  });
+  // the base must be valid (otherwise every row would carry the same problem)
+  studyHeater(description, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+  const rows: HeaterSweepRow[] = sweep.values.map((value) => {
+    const variant = setField(description, sweep.field, value);
+    try {
+      const s = studyHeater(variant, { heatUp: sweep.heatUp !== false, temperatureScan: false, impedanceSweep: false });
+      return { value, summary: summarise(s.operating, s.emptyCoil, s.heatUp?.timeToTarget ?? null), cautionCount: s.cautions.length, problem: null };
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      return { value, summary: null, cautionCount: 0, problem: e.message };
+    }
+  });
+  return { field: sweep.field, rows };
+}
