@@ -36,7 +36,7 @@ describe("coilOverPlate", () => {
     | ((o: { innerRadius: number; outerRadius: number; length: number; turns: number }) => number)
     | undefined;
   it.skipIf(multilayer === undefined)("in the air-core limit equals multilayerCoilInductance of the inductance module to 1e-6", () => {
-    for (const a of plate.airCore) {
+    for (const a of plate.airCore.filter((c) => c.innerRadius > 0)) {
       const far = coilOverPlate({
         coil: { innerRadius: a.innerRadius, outerRadius: a.outerRadius, height: a.height, turns: a.turns, liftOff: 0.01 },
         plate: { thickness: 0.001, resistivity: 1e6, relativePermeability: 1 },
