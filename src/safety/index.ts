@@ -3,4 +3,31 @@
  *
  * @module safety
  */
-export {};
+export { fieldOnAxis, fieldNearCoil } from "./coil-field.js";
+export type {
+  FieldCoil,
+  FieldLoop,
+  FieldSolenoid,
+  FieldSpiral,
+  FieldComponents,
+  FieldPoint,
+} from "./coil-field.js";
+export { exposureCheck, icnirpReferenceLevel } from "./exposure.js";
+export type { ExposureCheckOptions, ExposureCheckResult, ExposurePopulation } from "./exposure.js";
+export {
+  EXTRA_LOW_VOLTAGE_LIMITS,
+  voltageCaution,
+  storedEnergyCaution,
+  contactBurnThreshold,
+  surfaceTemperatureCaution,
+  audibleFrequencyCaution,
+  exposureCaution,
+  safetyCautions,
+} from "./cautions.js";
+export type {
+  VoltageCautionOptions,
+  StoredEnergyCautionOptions,
+  SurfaceTemperatureCautionOptions,
+  ExposureCautionOptions,
+  SafetyCautionsOptions,
+} from "./cautions.js";
