@@ -152,70 +152,61 @@ export function igseLoss(options: IgseLossOptions): number {
   if (n < 2) throw new InputError(WHERE, "flux", n, "", "at least 2 points; number of points");
   if (b.length !== n) throw new InputError(WHERE, "flux.fluxDensity.length", b.length, "", `equal to flux.time.length (${n})`);
 
-  // validate, find extremes, count direction changes
+  // one pass: validate, find extremes, count direction reversals (flat segments ignored) and
+  // accumulate Σ |ΔB_j| |ΔB_j/Δt_j|^(α−1) for the single-loop case
   const tolT = 1e-9 * period;
   const t0 = time[0] as number;
   if (typeof t0 !== "number" || !(Math.abs(t0) <= tolT)) throw new InputError(WHERE, "flux.time[0]", t0, "s", "0");
-  let bMax = -Infinity;
-  let bMin = Infinity;
+  const bFirst = b[0] as number;
+  if (typeof bFirst !== "number" || !Number.isFinite(bFirst)) throw new InputError(WHERE, "flux.fluxDensity[0]", bFirst, "T", "a finite number");
+  const am1 = options.alpha - 1;
+  let bMax = bFirst;
+  let bMin = bFirst;
   let iMax = 0;
   let prevT = t0;
-  for (let i = 0; i < n; i++) {
+  let prevB = bFirst;
+  let firstDir = 0;
+  let lastDir = 0;
+  let reversals = 0;
+  let sum = 0;
+  for (let i = 1; i < n; i++) {
     const bi = b[i] as number;
+    const ti = time[i] as number;
     if (typeof bi !== "number" || !Number.isFinite(bi)) throw new InputError(WHERE, `flux.fluxDensity[${i}]`, bi, "T", "a finite number");
+    if (typeof ti !== "number" || !Number.isFinite(ti) || !(ti > prevT)) {
+      throw new InputError(WHERE, `flux.time[${i}]`, ti, "s", `a finite number > flux.time[${i - 1}] (${prevT})`);
+    }
     if (bi > bMax) {
       bMax = bi;
       iMax = i;
+    } else if (bi < bMin) bMin = bi;
+    const end = i === n - 1 ? bFirst : bi;
+    const d = end - prevB;
+    if (d !== 0) {
+      const dir = d > 0 ? 1 : -1;
+      if (firstDir === 0) firstDir = dir;
+      else if (dir !== lastDir) reversals++;
+      lastDir = dir;
+      const ad = d > 0 ? d : -d;
+      sum += ad * Math.pow(ad / (ti - prevT), am1);
     }
-    if (bi < bMin) bMin = bi;
-    if (i > 0) {
-      const ti = time[i] as number;
-      if (typeof ti !== "number" || !Number.isFinite(ti) || !(ti > prevT)) {
-        throw new InputError(WHERE, `flux.time[${i}]`, ti, "s", `a finite number > flux.time[${i - 1}] (${prevT})`);
-      }
-      prevT = ti;
-    }
+    prevT = ti;
+    prevB = bi;
   }
+  if (lastDir !== firstDir) reversals++;
   if (!(Math.abs(prevT - period) <= tolT)) throw new InputError(WHERE, `flux.time[${n - 1}]`, prevT, "s", `equal to period (${period})`);
-  const bFirst = b[0] as number;
-  const bLast = b[n - 1] as number;
+  const bLast = prevB;
   const tolB = 1e-9 * Math.max(Math.abs(bMax), Math.abs(bMin));
   if (!(Math.abs(bLast - bFirst) <= tolB)) {
     throw new InputError(WHERE, `flux.fluxDensity[${n - 1}]`, bLast, "T", `equal to flux.fluxDensity[0] (${bFirst}) so that the waveform closes`);
   }
   const swing = bMax - bMin;
   if (!(swing > 0)) return 0;
-
   const alpha = options.alpha;
   const beta = options.beta;
   const ki = igseCoefficientUnchecked(options.k, alpha, beta);
-  const segments = n - 1;
-
-  // count direction reversals around the cycle (flat segments ignored)
-  let firstDir = 0;
-  let lastDir = 0;
-  let reversals = 0;
-  for (let j = 0; j < segments; j++) {
-    const d = (j === segments - 1 ? bFirst : (b[j + 1] as number)) - (b[j] as number);
-    if (d === 0) continue;
-    const dir = d > 0 ? 1 : -1;
-    if (firstDir === 0) firstDir = dir;
-    else if (dir !== lastDir) reversals++;
-    lastDir = dir;
-  }
-  if (lastDir !== firstDir) reversals++;
-
-  if (reversals <= 2) {
-    // one loop: the whole waveform with ΔB = peak-to-peak
-    let sum = 0;
-    for (let j = 0; j < segments; j++) {
-      const d = Math.abs((j === segments - 1 ? bFirst : (b[j + 1] as number)) - (b[j] as number));
-      if (d === 0) continue;
-      const dt = (time[j + 1] as number) - (time[j] as number);
-      sum += Math.pow(d, alpha) * Math.pow(dt, 1 - alpha);
-    }
-    return (ki * Math.pow(swing, beta - alpha) * sum) / period;
-  }
+  // one loop: the whole waveform with ΔB = peak-to-peak
+  if (reversals <= 2) return (ki * Math.pow(swing, beta - alpha) * sum) / period;
   return (ki * minorLoopSum(time, b, bFirst, iMax, alpha, beta)) / period;
 }
 
