@@ -173,9 +173,13 @@ function studyCommand(args: readonly string[], io: CliIo): number {
   try {
     study = studyHeater(input);
   } catch (e) {
-    if (e instanceof InputError) {
+    if (e instanceof HeaterDescriptionError) {
       reportInputError(io, file, e);
       return EXIT_USAGE;
+    }
+    if (e instanceof InputError) {
+      io.stderr(`fluxwright study: ${file}: the design cannot be studied: ${e.expected}\n`);
+      return EXIT_FAILURE;
     }
     throw e;
   }

@@ -6,9 +6,13 @@
  */
 import { DEFER_TO_CODES } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
-import * as safety from "../safety/index.js";
+import { exposureCaution, fieldOnAxis, safetyCautions } from "../safety/index.js";
 import type { HeaterOperatingPoint } from "./operating-point.js";
+import { conductorOuterDiameter } from "./read-description.js";
 import type { ResolvedHeaterDescription } from "./read-description.js";
+
+/** Where a person is assumed to stand for the field-exposure check: 300 mm from the coil centre on its axis (an operator's reach, common practice). */
+const EXPOSURE_DISTANCE = 0.3;
 
 /** Part facts the cautions need. */
 interface PartFacts {
@@ -29,13 +33,6 @@ function ratingCaution(code: string, what: string, value: number, limit: number,
   };
 }
 
-type SafetyFunction = (...args: never[]) => unknown;
-
-/** A safety-module function by name, when this build has it. */
-function safetyFunction(name: string): SafetyFunction | undefined {
-  const f = (safety as Record<string, unknown>)[name];
-  return typeof f === "function" ? (f as SafetyFunction) : undefined;
-}
 
 /**
  * Collects the cautions of a study. `points` are every operating point solved (empty coil,
@@ -70,25 +67,43 @@ export function heaterCautions(
     out.push(ratingCaution("supply-current-above-limit", "The current drawn from the supply", supplyI, d.supply.currentLimit, "A", "the description's supply.currentLimit"));
   }
 
-  // the safety module's hazard checks, through the functions this build provides
-  const used: string[] = [];
-  const call = (name: string, args: unknown): void => {
-    const f = safetyFunction(name);
-    if (f === undefined) return;
-    const r = (f as (a: unknown) => unknown)(args);
-    const list = Array.isArray(r) ? (r as Caution[]) : r !== null && typeof r === "object" && "code" in r ? [r as Caution] : [];
-    out.push(...list);
-    used.push(name);
-  };
-  void min;
-  void facts;
-  void hottestPartTemperature;
-  void call;
-  if (used.length === 0) {
-    validity.push({
-      code: "safety-checks-limited",
-      message: "This build's safety module provides no hazard checks; cautions come from the tank models and the description's ratings only.",
-    });
+  // the safety module's hazard checks on the worst numbers of the study
+  const coil = d.coil;
+  const fieldCoil =
+    coil.shape === "solenoid"
+      ? ({ kind: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns } as const)
+      : ({
+          kind: "spiral",
+          innerRadius: Math.max(0, coil.innerRadius - conductorOuterDiameter(coil.conductor) / 2),
+          outerRadius: coil.outerRadius + conductorOuterDiameter(coil.conductor) / 2,
+          turns: coil.turns,
+        } as const);
+  const coilCurrent = max((p) => p.coilCurrentRms);
+  const fastest = points.reduce((a, p) => (p.coilCurrentRms > a.coilCurrentRms ? p : a));
+  // RMS flux density on the coil axis at the exposure distance from the coil's centre
+  const fluxDensityRms = Math.abs(fieldOnAxis(fieldCoil, coilCurrent, EXPOSURE_DISTANCE));
+  out.push(
+    ...safetyCautions({
+      tankVoltageRms: max((p) => Math.max(p.coilVoltageRms, p.capacitorVoltageRms)),
+      supplyVoltageDc: d.supply.voltage,
+      capacitance: d.capacitor.capacitance,
+      capacitorVoltagePeak: max((p) => Math.SQRT2 * p.capacitorVoltageRms),
+      surfaceTemperature: hottestPartTemperature,
+      frequency: min((p) => p.frequency),
+      fluxDensityRms,
+      population: "general-public",
+    }),
+  );
+  // the exposure check at the frequency of the strongest field, when it differs
+  if (fastest.frequency !== min((p) => p.frequency)) {
+    const c = exposureCaution({ fluxDensityRms, frequency: fastest.frequency, population: "general-public" });
+    if (c !== null) out.push(c);
   }
+  validity.push({
+    code: "exposure-distance",
+    message: `Field exposure checked on the coil axis ${EXPOSURE_DISTANCE * 1000} mm from the coil centre at the largest coil current, against the ICNIRP 2010 general-public reference levels; the part's screening is ignored (conservative).`,
+    value: fluxDensityRms,
+  });
+  void facts;
   return out;
 }

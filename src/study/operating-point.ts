@@ -273,7 +273,20 @@ function partCoupling(d: ResolvedHeaterDescription, props: CoilProperties, frequ
         limit: 1,
       });
     }
-    return { reflectedResistance: r.reflectedResistance * fill, inductanceChange: r.inductanceChange * fill, skinDepth: r.skinDepth, validity };
+    // short-coil correction: the long-coil field N·I/ℓ overstates a short coil's field; scale the
+    // coupling by the ratio of the exact empty-coil inductance to the long-coil one (Nagaoka's
+    // coefficient for a current sheet), so the loaded inductance stays L₀(1 + ΔL_long/L_long) > 0
+    const shortCoil = Math.min(1, props.inductance / r.emptyCoilInductance);
+    if (shortCoil < 0.95) {
+      validity.push({
+        code: "short-coil-correction",
+        message: "Short coil: the long-coil coupling (reflected resistance and inductance change) was scaled by the ratio of the exact empty-coil inductance to the long-coil one, i.e. by the coil's mean field relative to N·I/ℓ; expect ±20 % on the part power (common practice).",
+        value: shortCoil,
+        limit: 0.95,
+      });
+    }
+    const k = fill * shortCoil;
+    return { reflectedResistance: r.reflectedResistance * k, inductanceChange: r.inductanceChange * k, skinDepth: r.skinDepth, validity };
   }
   if (part.shape !== "plate") throw new RangeError("unreachable: pancake coil over a non-plate part");
   const dCond = props.conductorDiameter;
@@ -301,6 +314,7 @@ function surfaceField(d: ResolvedHeaterDescription, props: CoilProperties, coilC
   const span = coil.shape === "solenoid" ? coil.length : coil.outerRadius - coil.innerRadius + props.conductorDiameter;
   return (coil.turns * Math.SQRT2 * coilCurrentRms) / span;
 }
+
 
 /**
  * Solves one operating point of the heater at a part temperature. Iterates frequency and the

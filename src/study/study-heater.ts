@@ -462,7 +462,11 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
     });
   }
   const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity);
-  for (const p of allPoints) cautions.push(...p.cautions);
+  // the tank models' own voltage cautions repeat the safety module's; keep their other ones
+  const fromSafety = new Set(cautions.map((c) => c.code));
+  for (const p of allPoints) {
+    for (const c of p.cautions) if (!(c.code === "tank-voltage-above-elv" && fromSafety.has("voltage-above-extra-low"))) cautions.push(c);
+  }
   return {
     title: d.title,
     description: d,

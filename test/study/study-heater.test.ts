@@ -1,0 +1,247 @@
+import { describe, it, expect } from "vitest";
+import fc from "fast-check";
+import {
+  coilEfficiency,
+  coilOverPlate,
+  currentFedParallelInverter,
+  InputError,
+  relativePermeabilityAt,
+  resistivityAt,
+  seriesInverter,
+  solenoidInductance,
+  spiralCoilInductance,
+  studyHeater,
+  tubeInLongCoil,
+  workCoilResistanceCurrentSheet,
+  celsius,
+} from "../../src/index.js";
+import type { HeaterOperatingPoint, HeaterStudy } from "../../src/index.js";
+import { loadExample, mutate } from "./cases.js";
+
+const race = loadExample("study-bearing-race.json");
+const plate = loadExample("study-plate-warmer.json");
+const raceStudy = studyHeater(race);
+const plateStudy = studyHeater(plate);
+
+const sumLosses = (p: HeaterOperatingPoint): number =>
+  p.losses.supply + p.losses.switches + p.losses.coil + p.losses.capacitors + p.losses.core + p.losses.part;
+
+const closeRel = (a: number, b: number, tol: number): void => {
+  expect(Math.abs(a - b)).toBeLessThanOrEqual(tol * Math.max(Math.abs(a), Math.abs(b)));
+};
+
+describe("studyHeater: every number equals the module-level call it came from", () => {
+  it("bearing race (solenoid, tube conductor, ring, current-fed inverter)", () => {
+    const s = raceStudy;
+    const d = s.description;
+    if (d.coil.shape !== "solenoid" || d.coil.conductor.kind !== "tube" || d.part.shape !== "ring" || d.inverter.kind !== "current-fed-parallel") throw new Error("fixture");
+    const coil = d.coil;
+    const tube = coil.conductor;
+    const op = s.operating;
+    expect(s.coil.inductance).toBe(solenoidInductance({ radius: coil.radius, length: coil.length, turns: coil.turns, wireDiameter: tube.outerDiameter }));
+    expect(op.partResistivity).toBe(resistivityAt(d.part.material, d.part.startTemperature));
+    expect(op.partRelativePermeability).toBe(relativePermeabilityAt(d.part.material, { temperature: d.part.startTemperature, fieldStrength: op.surfaceFieldStrengthPeak }));
+    // the inverter: exactly the module's numbers for the reported inputs
+    const inv = currentFedParallelInverter({
+      supplyVoltage: op.inverterInputVoltage,
+      inductance: op.inductance,
+      capacitance: d.capacitor.capacitance,
+      coilResistance: op.tankResistance,
+      chokeInductance: d.inverter.chokeInductance,
+    });
+    expect(op.frequency).toBe(inv.frequency);
+    expect(op.supplyCurrent).toBe(inv.supplyCurrent);
+    expect(op.tankVoltagePeak).toBe(inv.tankVoltagePeak);
+    expect(op.coilCurrentRms).toBe(inv.coilCurrentRms);
+    expect(op.switchVoltagePeak).toBe(inv.switchVoltagePeak);
+    expect(op.coilEfficiency).toBe(coilEfficiency({ coilResistance: op.coilResistance, reflectedResistance: op.reflectedResistance }));
+    // coupling and coil resistance were evaluated at the previous fixed-point iterate (within 1e-10 in frequency)
+    const coupling = tubeInLongCoil({
+      coil: { innerRadius: coil.radius - tube.outerDiameter / 2, length: coil.length, turns: coil.turns },
+      tube: { outerRadius: d.part.outerRadius, innerRadius: d.part.innerRadius, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
+      frequency: op.frequency,
+    });
+    const k = (d.part.height / coil.length) * (s.coil.inductance / coupling.emptyCoilInductance);
+    closeRel(op.reflectedResistance, coupling.reflectedResistance * k, 1e-8);
+    closeRel(op.inductanceChange, coupling.inductanceChange * k, 1e-8);
+    const sheet = workCoilResistanceCurrentSheet({
+      innerDiameter: 2 * coil.radius - tube.outerDiameter,
+      coilLength: coil.length,
+      turns: coil.turns,
+      spaceFactor: (coil.turns * tube.outerDiameter) / coil.length,
+      frequency: op.frequency,
+      resistivity: resistivityAt(tube.material, coil.temperature),
+    });
+    expect(op.coilResistance).toBeGreaterThan(sheet); // plus the leads
+    closeRel(op.losses.part, op.coilCurrentRms ** 2 * op.reflectedResistance, 1e-15);
+  });
+
+  it("plate warmer (pancake, litz, plate, power-tracking series inverter)", () => {
+    const s = plateStudy;
+    const d = s.description;
+    if (d.coil.shape !== "pancake" || d.part.shape !== "plate" || d.inverter.kind !== "voltage-fed-series") throw new Error("fixture");
+    const coil = d.coil;
+    const op = s.operating;
+    const dc = coil.conductor.kind === "litz" ? coil.conductor.outerDiameter : 0;
+    expect(s.coil.inductance).toBe(spiralCoilInductance({ innerRadius: coil.innerRadius, outerRadius: coil.outerRadius, turns: coil.turns, wireDiameter: dc }));
+    const inv = seriesInverter({
+      supplyVoltage: op.inverterInputVoltage,
+      bridge: d.inverter.bridge,
+      inductance: op.inductance,
+      capacitance: d.capacitor.capacitance,
+      resistance: op.tankResistance,
+      switchingFrequency: op.frequency,
+    });
+    expect(op.coilCurrentRms).toBe(inv.currentRms);
+    expect(op.supplyCurrent).toBe(inv.supplyCurrent);
+    expect(op.capacitorVoltageRms).toBe(inv.capacitorVoltageRms);
+    // power tracking reaches the target power in the tank (frequencyForPower)
+    closeRel(inv.power, d.inverter.targetPower ?? 0, 1e-6);
+    const c = coilOverPlate({
+      coil: { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, height: dc, turns: coil.turns },
+      plate: { thickness: d.part.thickness, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
+      frequency: op.frequency,
+    });
+    closeRel(op.reflectedResistance, c.resistanceChange, 1e-7);
+    closeRel(op.inductanceChange, c.inductanceChange, 1e-7);
+  });
+});
+
+describe("studyHeater: energy balance", () => {
+  it("losses by place add up to the input power to 1e-9 at every solved point of both demos", () => {
+    for (const s of [raceStudy, plateStudy]) {
+      for (const p of [s.emptyCoil, s.operating, s.atTarget]) {
+        if (p === null) continue;
+        closeRel(sumLosses(p), p.inputPower, 1e-9);
+      }
+    }
+  });
+
+  it("the balance holds for varied supplies, turns and capacitors (property)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 12, max: 96, noNaN: true }),
+        fc.integer({ min: 3, max: 8 }),
+        fc.double({ min: 1e-6, max: 1e-5, noNaN: true }),
+        fc.double({ min: 0, max: 0.2, noNaN: true }),
+        (voltage, turns, capacitance, internal) => {
+          let v = mutate(race, "supply.voltage", voltage);
+          v = mutate(v, "coil.turns", turns);
+          v = mutate(v, "capacitor.capacitance", capacitance);
+          v = mutate(v, "supply.internalResistance", internal);
+          let s: HeaterStudy;
+          try {
+            s = studyHeater(v, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+          } catch (e) {
+            return e instanceof InputError; // a design that cannot oscillate is reported, never NaN
+          }
+          const p = s.operating;
+          return Math.abs(sumLosses(p) - p.inputPower) <= 1e-9 * p.inputPower && p.efficiency > 0 && p.efficiency < 1;
+        },
+      ),
+      { seed: 1, numRuns: 30 },
+    );
+  });
+
+  it("the heat-up's energy into the part matches the thermal module's own balance", () => {
+    const h = raceStudy.heatUp;
+    expect(h).not.toBeNull();
+    if (h === null) return;
+    const e = h.energy;
+    closeRel(e.input, e.stored + e.convection + e.radiation, 1e-6);
+    expect(h.supplyEnergy).toBeGreaterThan(e.input);
+  });
+});
+
+describe("studyHeater: the frequency shift of a ferromagnetic part and its reversal past Curie", () => {
+  // a slim steel bar in a long coil at a few kHz: magnetisation outweighs eddy-current shielding
+  // below Curie (radius / skin depth < μr), so the inductance rises and the frequency drops;
+  // past Curie only the shielding is left and the frequency rises above the empty coil's (common practice)
+  const bar = {
+    supply: { kind: "dc-bus", voltage: "24 V" },
+    inverter: { kind: "current-fed-parallel", chokeInductance: "1 mH", switchOnResistance: "10 mΩ" },
+    coil: { shape: "solenoid", radius: "20 mm", length: "200 mm", turns: 40, conductor: { kind: "solid", diameter: "2 mm" } },
+    capacitor: { capacitance: "10 µF" },
+    part: { shape: "bar", material: "lowCarbonSteel", radius: "4 mm", length: "200 mm", targetTemperature: "900 °C" },
+  };
+  const s = studyHeater(bar, { heatUp: false, impedanceSweep: false });
+
+  it("a magnetic bar below Curie lowers the frequency; above Curie it raises it above the empty coil's", () => {
+    expect(s.operating.frequency).toBeLessThan(s.emptyCoil.frequency);
+    expect(s.operating.inductanceChange).toBeGreaterThan(0);
+    expect(s.atTarget).not.toBeNull();
+    expect(s.atTarget?.frequency ?? 0).toBeGreaterThan(s.emptyCoil.frequency);
+    expect(s.atTarget?.partRelativePermeability).toBe(1);
+  });
+
+  it("the temperature scan shows the drop below Curie and the reversal past it", () => {
+    const scan = s.temperatureScan;
+    if (scan === null) throw new Error("scan");
+    const curie = s.part.curieTemperature ?? 0;
+    const below = scan.frequencies.filter((_, i) => (scan.temperatures[i] ?? 0) < curie - 100);
+    const above = scan.frequencies.filter((_, i) => (scan.temperatures[i] ?? 0) > curie);
+    for (const f of below) expect(f).toBeLessThan(s.emptyCoil.frequency);
+    for (const f of above) expect(f).toBeGreaterThan(s.emptyCoil.frequency);
+    expect(above.length).toBeGreaterThan(0);
+  });
+
+  it("a non-magnetic part (austenitic stainless) always raises the frequency", () => {
+    const st = studyHeater(mutate(bar, "part.material", "austeniticStainless"), { heatUp: false, impedanceSweep: false });
+    expect(st.operating.frequency).toBeGreaterThan(st.emptyCoil.frequency);
+    for (const f of st.temperatureScan?.frequencies ?? []) expect(f).toBeGreaterThan(st.emptyCoil.frequency);
+  });
+});
+
+describe("studyHeater: plausibility of the 1 kg steel-ring shrink-fit demo (common practice)", () => {
+  const s = raceStudy;
+  it("the ring weighs about 1 kg", () => {
+    expect(s.part.mass).toBeGreaterThan(0.9);
+    expect(s.part.mass).toBeLessThan(1.1);
+  });
+  it("a few hundred watts to a few kilowatts go into the ring", () => {
+    expect(s.operating.losses.part).toBeGreaterThan(300);
+    expect(s.operating.losses.part).toBeLessThan(5000);
+  });
+  it("efficiency is above 0.7 below Curie with a copper-tube coil", () => {
+    expect(s.operating.efficiency).toBeGreaterThan(0.7);
+    expect(s.atTarget?.efficiency ?? 0).toBeGreaterThan(0.7);
+  });
+  it("runs at tens of kHz, heats to 120 °C in a minute or two, and raises the hazards a designer expects", () => {
+    expect(s.operating.frequency).toBeGreaterThan(10e3);
+    expect(s.operating.frequency).toBeLessThan(100e3);
+    const t = s.heatUp?.timeToTarget ?? Infinity;
+    expect(t).toBeGreaterThan(10);
+    expect(t).toBeLessThan(300);
+    const codes = s.cautions.map((c) => c.code);
+    expect(codes).toContain("voltage-above-extra-low"); // π × 48 V peak ≈ 150 V tank
+    expect(codes).toContain("hot-surface-burn");
+    for (const c of s.cautions) expect(c.message.endsWith("Consult local codes and licensed practice.")).toBe(true);
+  });
+  it("lists its approximations, one note per code", () => {
+    const codes = s.validity.map((v) => v.code);
+    expect(new Set(codes).size).toBe(codes.length);
+    expect(codes).toContain("short-coil-correction");
+    expect(codes).toContain("lumped-heat-up");
+  });
+  it("cautions come most serious first", () => {
+    const rank = { danger: 0, warning: 1, info: 2 };
+    const r = s.cautions.map((c) => rank[c.severity]);
+    expect([...r].sort((a, b) => a - b)).toEqual(r);
+  });
+});
+
+describe("studyHeater: input handling", () => {
+  it("throws the reader's InputError, naming the field path, for a bad description", () => {
+    expect(() => studyHeater(mutate(race, "coil.turns", 0))).toThrow(/coil\.turns must be an integer ≥ 1, got 0/);
+    expect(() => studyHeater(mutate(race, "coil.turns", 0))).toThrow(InputError);
+  });
+  it("accepts SI numbers and gives the same result as text quantities", () => {
+    const numeric = mutate(mutate(race, "supply.voltage", 48), "part.targetTemperature", celsius(120));
+    const a = studyHeater(numeric, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+    expect(a.operating.frequency).toBe(raceStudy.operating.frequency);
+  });
+  it("never returns NaN or Infinity in its numbers", () => {
+    const text = JSON.stringify([raceStudy, plateStudy], (_, v) => (typeof v === "number" && !Number.isFinite(v) ? "NONFINITE" : v));
+    expect(text).not.toContain("NONFINITE");
+  });
+});
