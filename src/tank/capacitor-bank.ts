@@ -176,8 +176,12 @@ export function capacitorBank(options: CapacitorBankOptions): CapacitorBank {
   const sMin = Math.max(1, Math.ceil(voltage / unitV - 1e-12));
 
   let best: { s: number; p: number; unit: number; error: number; count: number; within: boolean } | null = null;
-  for (let s = sMin; s <= maxUnits; s++) {
-    for (let p = 1; s * p <= maxUnits; p++) {
+  const pMin = Math.max(1, Math.ceil(current / unitI - 1e-12));
+  for (let s = sMin; s * pMin <= maxUnits; s++) {
+    // Once an array within tolerance is known, larger arrays cannot win.
+    if (best !== null && best.within && s * pMin > best.count) break;
+    for (let p = pMin; s * p <= maxUnits; p++) {
+      if (best !== null && best.within && s * p > best.count) break;
       const unit = nearestStandard(mantissas, (target * s) / p, lo, hi);
       if (unit === 0) continue;
       const achieved = (unit * p) / s;

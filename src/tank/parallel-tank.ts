@@ -5,13 +5,8 @@
  * @packageDocumentation
  */
 import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
-import {
-  capacitorElement,
-  inductorElement,
-  parallelNetwork,
-  resistorElement,
-  type TankNetwork,
-} from "./network.js";
+import type { TankNetwork } from "./network.js";
+import { tankNetworkUnchecked } from "./tank-network-internal.js";
 
 /**
  * Options of {@link parallelTank}.
@@ -177,13 +172,6 @@ export function parallelTank(options: ParallelTankOptions): ParallelTank {
     coilQualityFactor: coilResistance === 0 ? null : z0 / coilResistance,
     qualityFactor: 1 / (r + g),
     resonant: xPhase > 0,
-    network:
-      parallelResistance === null
-        ? parallelNetwork(capacitorElement(capacitance), inductorElement(inductance, coilResistance))
-        : parallelNetwork(
-            capacitorElement(capacitance),
-            inductorElement(inductance, coilResistance),
-            resistorElement(parallelResistance),
-          ),
+    network: tankNetworkUnchecked("parallel", inductance, coilResistance, capacitance, parallelResistance),
   };
 }

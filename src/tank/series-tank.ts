@@ -4,7 +4,8 @@
  * @packageDocumentation
  */
 import { requireObject, requirePositive } from "../core/index.js";
-import { capacitorElement, inductorElement, seriesNetwork, type TankNetwork } from "./network.js";
+import type { TankNetwork } from "./network.js";
+import { tankNetworkUnchecked } from "./tank-network-internal.js";
 
 /**
  * Options of {@link seriesTank}.
@@ -112,6 +113,6 @@ export function seriesTank(options: SeriesTankOptions): SeriesTank {
     lowerHalfPowerFrequency: lower,
     upperHalfPowerFrequency: upper,
     dampedFrequency: dampedSquared > 0 ? (omega0 / twoPi) * Math.sqrt(dampedSquared) : null,
-    network: seriesNetwork(inductorElement(inductance, resistance), capacitorElement(capacitance)),
+    network: tankNetworkUnchecked("series", inductance, resistance, capacitance, null),
   };
 }

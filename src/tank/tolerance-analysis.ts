@@ -121,26 +121,55 @@ function splitmix32(state: number): number {
 }
 
 /**
- * xoshiro128** (Blackman & Vigna 2018) with 32-bit words; returns a function giving doubles in
- * [0, 1) with 32 random bits.
+ * xoshiro128** (Blackman & Vigna 2018) with 32-bit words, seeded through splitmix32; `next()`
+ * gives doubles in [0, 1) with 32 random bits.
  */
-function makeUniform(seed: number): () => number {
-  let s0 = splitmix32(seed);
-  let s1 = splitmix32(s0 ^ 0x6a09e667);
-  let s2 = splitmix32(s1 ^ 0xbb67ae85);
-  let s3 = splitmix32(s2 ^ 0x3c6ef372);
-  if ((s0 | s1 | s2 | s3) === 0) s0 = 1;
-  return () => {
-    const result = Math.imul(rotl(Math.imul(s1, 5), 7), 9) >>> 0;
-    const t = s1 << 9;
-    s2 ^= s0;
-    s3 ^= s1;
-    s1 ^= s2;
-    s0 ^= s3;
-    s2 ^= t;
-    s3 = rotl(s3, 11);
+class Xoshiro128 {
+  private s0: number;
+  private s1: number;
+  private s2: number;
+  private s3: number;
+
+  constructor(seed: number) {
+    this.s0 = splitmix32(seed);
+    this.s1 = splitmix32(this.s0 ^ 0x6a09e667);
+    this.s2 = splitmix32(this.s1 ^ 0xbb67ae85);
+    this.s3 = splitmix32(this.s2 ^ 0x3c6ef372);
+    if ((this.s0 | this.s1 | this.s2 | this.s3) === 0) this.s0 = 1;
+  }
+
+  next(): number {
+    const result = Math.imul(rotl(Math.imul(this.s1, 5), 7), 9) >>> 0;
+    const t = this.s1 << 9;
+    this.s2 ^= this.s0;
+    this.s3 ^= this.s1;
+    this.s1 ^= this.s2;
+    this.s0 ^= this.s3;
+    this.s2 ^= t;
+    this.s3 = rotl(this.s3, 11);
     return result / 4294967296;
-  };
+  }
+}
+
+/** Standard normal deviates by the Box–Muller transform, two per pair of uniforms. */
+class NormalDeviates {
+  private spare = 0;
+  private hasSpare = false;
+
+  constructor(private readonly uniform: Xoshiro128) {}
+
+  next(): number {
+    if (this.hasSpare) {
+      this.hasSpare = false;
+      return this.spare;
+    }
+    // 1 − u avoids log(0).
+    const r = Math.sqrt(-2 * Math.log(1 - this.uniform.next()));
+    const theta = 2 * Math.PI * this.uniform.next();
+    this.spare = r * Math.sin(theta);
+    this.hasSpare = true;
+    return r * Math.cos(theta);
+  }
 }
 
 function rotl(x: number, k: number): number {
@@ -230,37 +259,31 @@ export function tankToleranceAnalysis(options: TankToleranceOptions): TankTolera
     nominalCurrent = w * C0 * voltage;
   }
 
-  const uniform = makeUniform(seedValue | 0);
+  const uniform = new Xoshiro128(seedValue | 0);
+  const gauss = new NormalDeviates(uniform);
   const normal = distribution === "normal";
-  let spare = 0;
-  let hasSpare = false;
-  const deviate = (tol: number): number => {
-    if (tol === 0) return 0;
-    if (!normal) return tol * (2 * uniform() - 1);
-    if (hasSpare) {
-      hasSpare = false;
-      return (tol / 3) * spare;
-    }
-    // Box–Muller; 1 − u avoids log(0).
-    const r = Math.sqrt(-2 * Math.log(1 - uniform()));
-    const theta = twoPi * uniform();
-    spare = r * Math.sin(theta);
-    hasSpare = true;
-    return (tol / 3) * r * Math.cos(theta);
-  };
+  // Uniform: δ = tol·(2u − 1); normal: δ = (tol/3)·z. A component with zero tolerance draws nothing.
+  const scaleL = normal ? tolL / 3 : tolL;
+  const scaleC = normal ? tolC / 3 : tolC;
+  const scaleR = normal ? tolR / 3 : tolR;
   const frequencies = new Float64Array(n);
   const currents = new Float64Array(n);
   const span = tMax - tMin;
+  const isSeries = topology === "series";
   let kept = 0;
   for (let k = 0; k < n; k++) {
-    const dT = span === 0 ? tMin : tMin + span * uniform();
+    const dT = span === 0 ? tMin : tMin + span * uniform.next();
+    const dL = scaleL === 0 ? 0 : scaleL * (normal ? gauss.next() : 2 * uniform.next() - 1);
+    const dC = scaleC === 0 ? 0 : scaleC * (normal ? gauss.next() : 2 * uniform.next() - 1);
+    const dR = scaleR === 0 ? 0 : scaleR * (normal ? gauss.next() : 2 * uniform.next() - 1);
     // A normal deviate beyond −100 % is clipped to a tiny positive value (physically meaningless tails).
-    const L = L0 * Math.max(1e-9, 1 + deviate(tolL)) * (1 + aL * dT);
-    const C = C0 * Math.max(1e-9, 1 + deviate(tolC)) * (1 + aC * dT);
-    const R = R0 * Math.max(1e-9, 1 + deviate(tolR)) * (1 + aR * dT);
-    if (topology === "series") {
+    const L = L0 * Math.max(1e-9, 1 + dL) * (1 + aL * dT);
+    const C = C0 * Math.max(1e-9, 1 + dC) * (1 + aC * dT);
+    const R = R0 * Math.max(1e-9, 1 + dR) * (1 + aR * dT);
+    if (isSeries) {
       frequencies[kept] = 1 / (twoPi * Math.sqrt(L * C));
-      currents[kept] = voltage / Math.hypot(R, driveOmega * L - 1 / (driveOmega * C));
+      const x = driveOmega * L - 1 / (driveOmega * C);
+      currents[kept] = voltage / Math.sqrt(R * R + x * x);
       kept++;
     } else {
       const x = 1 - (R * R * C) / L;
