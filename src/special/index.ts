@@ -31,4 +31,44 @@ export { integrateAdaptive } from "./integrate-adaptive.js";
 export type { IntegrateAdaptiveOptions, IntegrationResult } from "./integrate-adaptive.js";
 export { integrateToInfinity } from "./integrate-to-infinity.js";
 export type { IntegrateToInfinityOptions } from "./integrate-to-infinity.js";
+export {
+  besselJ0,
+  besselJ1,
+  besselY0,
+  besselY1,
+  besselI0,
+  besselI1,
+  besselK0,
+  besselK1,
+  besselI0Scaled,
+  besselI1Scaled,
+  besselK0Scaled,
+  besselK1Scaled,
+} from "./bessel.js";
+export {
+  besselJ0Complex,
+  besselJ1Complex,
+  besselI0Complex,
+  besselI1Complex,
+  besselK0Complex,
+  besselK1Complex,
+  besselI0ComplexScaled,
+  besselI1ComplexScaled,
+  besselK0ComplexScaled,
+  besselK1ComplexScaled,
+  besselI1OverI0Complex,
+} from "./bessel-complex.js";
+export {
+  kelvinBer,
+  kelvinBei,
+  kelvinKer,
+  kelvinKei,
+  kelvinBerPrime,
+  kelvinBeiPrime,
+  kelvinKerPrime,
+  kelvinKeiPrime,
+  kelvinFunctions,
+  kelvinFunctionsScaled,
+} from "./kelvin.js";
+export type { KelvinFunctions } from "./kelvin.js";
 export * from "./ode.js";
