@@ -38,7 +38,10 @@ export { coilEfficiency, powerInPart } from "./efficiency.js";
 export type { CoilEfficiencyOptions, PowerInPartOptions } from "./efficiency.js";
 export { workpieceCouplingAtTemperature } from "./temperature.js";
 export type {
+  HeatedBar,
   HeatedPart,
+  HeatedPlate,
+  HeatedTube,
   WorkpieceCouplingAtTemperatureOptions,
   WorkpieceCouplingAtTemperatureResult,
 } from "./temperature.js";

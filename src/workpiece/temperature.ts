@@ -15,15 +15,57 @@ import type { LongCoil } from "./long-coil.js";
 import { checkPlateLayers } from "./coil-over-plate.js";
 
 /**
- * The heated part for {@link workpieceCouplingAtTemperature}: a solid bar or a tube in a long
- * coil, or a plate (thickness `Infinity` for a half-space) under a pancake coil.
+ * A solid round bar in a long coil, for {@link workpieceCouplingAtTemperature}.
  *
  * @category Workpiece
  */
-export type HeatedPart =
-  | { readonly kind: "bar"; readonly radius: number; readonly coil: LongCoil }
-  | { readonly kind: "tube"; readonly outerRadius: number; readonly innerRadius: number; readonly coil: LongCoil }
-  | { readonly kind: "plate"; readonly thickness: number; readonly coil: CoilAbovePlate };
+export interface HeatedBar {
+  /** Discriminant. */
+  readonly kind: "bar";
+  /** Bar radius [m], > 0 and ≤ coil innerRadius. */
+  readonly radius: number;
+  /** The long coil around it, see {@link LongCoil}. */
+  readonly coil: LongCoil;
+}
+
+/**
+ * A hollow round tube in a long coil, for {@link workpieceCouplingAtTemperature}.
+ *
+ * @category Workpiece
+ */
+export interface HeatedTube {
+  /** Discriminant. */
+  readonly kind: "tube";
+  /** Outer radius [m], > innerRadius and ≤ coil innerRadius. */
+  readonly outerRadius: number;
+  /** Bore radius [m], ≥ 0. */
+  readonly innerRadius: number;
+  /** The long coil around it, see {@link LongCoil}. */
+  readonly coil: LongCoil;
+}
+
+/**
+ * A plate (or half-space, thickness `Infinity`) under a pancake coil, for
+ * {@link workpieceCouplingAtTemperature}.
+ *
+ * @category Workpiece
+ */
+export interface HeatedPlate {
+  /** Discriminant. */
+  readonly kind: "plate";
+  /** Plate thickness [m], > 0 or `Infinity`. */
+  readonly thickness: number;
+  /** The coil above it, see {@link CoilAbovePlate}. */
+  readonly coil: CoilAbovePlate;
+}
+
+/**
+ * The heated part for {@link workpieceCouplingAtTemperature}: a solid bar or a tube in a long
+ * coil, or a plate under a pancake coil.
+ *
+ * @category Workpiece
+ */
+export type HeatedPart = HeatedBar | HeatedTube | HeatedPlate;
 
 /**
  * Options of {@link workpieceCouplingAtTemperature}.
