@@ -239,7 +239,6 @@ function minorLoopSum(time: ArrayLike<number>, b: ArrayLike<number>, bFirst: num
   const stackV = new Float64Array(segments + 2);
   const stackC = new Float64Array(segments + 2);
   stackV[0] = b[start] as number;
-  stackC[0] = 0;
   let sp = 1;
   let prefix = 0;
   let level = stackV[0];
@@ -247,57 +246,61 @@ function minorLoopSum(time: ArrayLike<number>, b: ArrayLike<number>, bFirst: num
   let direction = 0;
   let total = 0;
   let current = stackV[0];
-
-  /** ∫|dB/dt|^α dt of the current run between two flux levels. */
-  const runCost = (runEnd: number, from: number, to: number): number => {
-    const a = from < to ? from : to;
-    const c = from < to ? to : from;
-    let s = 0;
-    for (let r = runStart; r < runEnd; r++) {
-      const l = (lo[r] as number) > a ? (lo[r] as number) : a;
-      const h = (hi[r] as number) < c ? (hi[r] as number) : c;
-      if (h > l) s += (h - l) * (density[r] as number);
+  for (let r = 0; r <= segments; r++) {
+    const final = r === segments;
+    const dir = final ? 0 : (dirs[r] as number);
+    if (!final && (dir === 0 || direction === 0 || dir === direction)) {
+      if (dir !== 0) {
+        direction = dir;
+        current = dir > 0 ? (hi[r] as number) : (lo[r] as number);
+      }
+      continue;
     }
-    return s;
-  };
-
-  /** Ends the current run at turning value p: closes every loop it completes, then pushes p. */
-  const turn = (runEnd: number, p: number, final: boolean): void => {
-    while (sp >= 3) {
+    // the run [runStart, r) ends at turning value p = current: close every loop it completes
+    const p = current;
+    for (;;) {
+      if (sp < 3) break;
       const top = stackV[sp - 1] as number;
       const second = stackV[sp - 2] as number;
       const y = Math.abs(top - second);
       if (Math.abs(p - top) < y) break;
-      const loopCost = (stackC[sp - 1] as number) + prefix + runCost(runEnd, level, second);
-      total += loopCost * Math.pow(y, exponent);
+      // loop between second and top: its stacked half plus the run from `level` to `second`
+      let piece = 0;
+      const a = level < second ? level : second;
+      const c = level < second ? second : level;
+      for (let q = runStart; q < r; q++) {
+        const l = (lo[q] as number) > a ? (lo[q] as number) : a;
+        const h = (hi[q] as number) < c ? (hi[q] as number) : c;
+        if (h > l) piece += (h - l) * (density[q] as number);
+      }
+      total += ((stackC[sp - 1] as number) + prefix + piece) * Math.pow(y, exponent);
       prefix = stackC[sp - 2] as number;
       level = second;
       sp -= 2;
     }
-    const halfCost = prefix + runCost(runEnd, level, p);
+    let half = prefix;
+    {
+      const a = level < p ? level : p;
+      const c = level < p ? p : level;
+      for (let q = runStart; q < r; q++) {
+        const l = (lo[q] as number) > a ? (lo[q] as number) : a;
+        const h = (hi[q] as number) < c ? (hi[q] as number) : c;
+        if (h > l) half += (h - l) * (density[q] as number);
+      }
+    }
     if (final) {
-      // major loop: the one remaining half-loop on the stack plus the closing run
-      const swing = Math.abs((stackV[0] as number) - (stackV[1] as number));
-      total += ((stackC[1] as number) + halfCost) * Math.pow(swing, exponent);
-      return;
+      // major loop: the remaining half-loop on the stack plus the closing run
+      total += ((stackC[1] as number) + half) * Math.pow(Math.abs((stackV[0]) - (stackV[1] as number)), exponent);
+      break;
     }
     stackV[sp] = p;
-    stackC[sp] = halfCost;
+    stackC[sp] = half;
     sp++;
     prefix = 0;
     level = p;
-  };
-
-  for (let r = 0; r < segments; r++) {
-    const dir = dirs[r] as number;
-    if (dir === 0) continue;
-    if (direction !== 0 && dir !== direction) {
-      turn(r, current, false);
-      runStart = r;
-    }
+    runStart = r;
     direction = dir;
     current = dir > 0 ? (hi[r] as number) : (lo[r] as number);
   }
-  turn(segments, current, true);
   return total;
 }
