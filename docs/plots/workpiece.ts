@@ -119,12 +119,12 @@ if (import.meta.url === `file://${process.argv[1]}`) {
     })),
     referenceLines: [
       { axis: "y", value: 0, label: "" },
-      { axis: "x", value: crossover, label: `crossover ${crossover.toPrecision(2)} Hz` },
+      { axis: "x", value: crossover, label: `crossover ${Math.round(crossover)} Hz` },
     ],
   });
   writeFileSync(new URL("workpiece-plate-shift.svg", here), shift);
   for (const c of curves) {
-    console.log(`${c.name}: 90 % of top efficiency at a/δ = ${kneeRatio(c, 0.9).toFixed(2)}, top ${c.efficiency[c.efficiency.length - 1]!.toFixed(3)}`);
+    console.log(`${c.name}: 90 % / 95 % of top efficiency at a/δ = ${kneeRatio(c, 0.9).toFixed(2)} / ${kneeRatio(c, 0.95).toFixed(2)}, efficiency at 2.5: ${c.efficiency[c.ratio.findIndex((u) => u >= 2.5)]!.toFixed(3)}, top ${c.efficiency[c.efficiency.length - 1]!.toFixed(3)}`);
   }
   console.log(`steel plate crossover: ${crossover.toPrecision(3)} Hz`);
 }
