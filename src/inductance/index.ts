@@ -1,6 +1,20 @@
 /**
  * Coil inductance: single-layer solenoids, multilayer coils, flat spirals, circular loops, mutual inductance and coupling.
  *
+ * Exact methods are the defaults (`solenoidInductance`, `multilayerCoilInductance`,
+ * `spiralCoilInductance`, `loopMutualInductance`, `coaxialCoilMutualInductance`); the classic
+ * approximations sit beside them under their authors' names, each with its measured error.
+ *
  * @module inductance
  */
-export {};
+export { nagaokaCoefficient, solenoidInductance, solenoidInductanceWheeler } from "./solenoid.js";
+export type { SolenoidInductanceOptions, SolenoidInductanceWheelerOptions } from "./solenoid.js";
+export { rosaCorrectionA, rosaCorrectionB } from "./rosa.js";
+export { loopInductance, loopMutualInductance } from "./loop.js";
+export type { LoopCurrentDistribution, LoopInductanceOptions, LoopMutualInductanceOptions } from "./loop.js";
+export { multilayerCoilInductance, multilayerCoilInductanceWheeler, brooksCoilInductance } from "./multilayer.js";
+export type { MultilayerCoilOptions, BrooksCoilOptions } from "./multilayer.js";
+export { spiralCoilInductance, spiralCoilInductanceWheeler, spiralCoilInductanceMohan } from "./spiral.js";
+export type { SpiralCoilOptions, SpiralCoilApproximationOptions } from "./spiral.js";
+export { coaxialCoilMutualInductance, couplingCoefficient } from "./coaxial.js";
+export type { CoaxialCoil, CoaxialLoop, CoaxialSolenoid, CoaxialMultilayerCoil, CoaxialSpiralCoil } from "./coaxial.js";
