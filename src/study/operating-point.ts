@@ -345,6 +345,15 @@ export function heaterOperatingPoint(
   let converged = false;
   let result: ReturnType<typeof evaluate> | undefined;
 
+  // concentrator: Steinmetz loss at the flux the coil voltage drives through its section, as a series resistance
+  function evaluateCoreResistance(f: number, current: number, voltagePeak: number): number {
+    if (d.concentrator === null || !(voltagePeak > 0) || !(current > 0)) return 0;
+    const bPeak = voltagePeak / (2 * Math.PI * f * d.coil.turns * d.concentrator.crossSectionArea);
+    const k = d.concentrator.material.steinmetz;
+    const loss = steinmetzLoss({ k: k.k, alpha: k.alpha, beta: k.beta, frequency: f, peakFluxDensity: bPeak }) * d.concentrator.volume;
+    return loss / (current * current);
+  }
+
   function evaluate(f: number, h: number, previousCurrent: number, previousVoltagePeak: number) {
     const notes: ValidityNote[] = [];
     const coilResistance = coilAcResistance(d, props, f, notes);
@@ -357,14 +366,7 @@ export function heaterOperatingPoint(
     // capacitor dielectric loss as a series resistance: exact in a series tank (ESR = tanδ/ωC);
     // in the parallel tank folded into the coil branch as tanδ·ωL (equal at resonance, Q ≫ 1)
     const capacitorResistance = inv.kind === "voltage-fed-series" ? cap.dissipationFactor / (omega * C) : cap.dissipationFactor * omega * L;
-    // concentrator: Steinmetz loss at the flux the coil voltage drives through its section
-    let coreLoss = 0;
-    if (d.concentrator !== null && previousVoltagePeak > 0) {
-      const bPeak = previousVoltagePeak / (omega * d.coil.turns * d.concentrator.crossSectionArea);
-      const s = d.concentrator.material.steinmetz;
-      coreLoss = steinmetzLoss({ k: s.k, alpha: s.alpha, beta: s.beta, frequency: f, peakFluxDensity: bPeak }) * d.concentrator.volume;
-    }
-    const coreResistance = previousCurrent > 0 ? coreLoss / (previousCurrent * previousCurrent) : 0;
+    const coreResistance = evaluateCoreResistance(f, previousCurrent, previousVoltagePeak);
     const switchResistance = inv.kind === "voltage-fed-series" ? (inv.bridge === "full" ? 2 : 1) * inv.switchOnResistance : 0;
     const tankResistance = coilResistance + reflectedResistance + capacitorResistance + coreResistance + switchResistance;
     return { notes, coilResistance, mur, coupling, reflectedResistance, inductanceChange, L, capacitorResistance, coreResistance, switchResistance, tankResistance, f, h };
@@ -456,8 +458,10 @@ export function heaterOperatingPoint(
     const residual = newField - field;
     const df = Math.abs(s.frequency - frequency) / frequency;
     const dh = Math.abs(residual) / Math.max(newField, 1);
-    const dc = d.concentrator === null ? 0 : Math.abs(s.coilCurrentRms - coilCurrent) / Math.max(s.coilCurrentRms, 1e-30) + Math.abs(s.tankVoltagePeak - coilVoltagePeak) / Math.max(s.tankVoltagePeak, 1e-30);
-    if (df < 1e-10 && dh < 1e-9 && dc < 1e-9 && iterations > 1) {
+    // the concentrator's loss resistance lags one iterate: converged when its change no longer matters
+    const nextCore = d.concentrator === null ? 0 : evaluateCoreResistance(s.frequency, s.coilCurrentRms, s.tankVoltagePeak);
+    const dc = Math.abs(nextCore - e.coreResistance) / e.tankResistance;
+    if (df < 1e-9 && dh < 1e-8 && dc < 1e-10 && iterations > 1) {
       converged = true;
       break;
     }

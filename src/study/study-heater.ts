@@ -26,7 +26,7 @@ export interface StudyHeaterOptions {
   readonly temperatureScan?: boolean;
   /** Compute the tank impedance against frequency with and without the part (default `true`). */
   readonly impedanceSweep?: boolean;
-  /** Operating points on the temperature grid of the heat-up, ≥ 4 (default 16). */
+  /** Operating points on the temperature grid of the heat-up, ≥ 4 (default: one per 50 K, 6 … 16, plus a cluster at the Curie transition). */
   readonly heatUpPoints?: number;
 }
 
@@ -334,7 +334,10 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
   let heatUp: HeaterHeatUp | null = null;
   if (options.heatUp !== false) {
     const width = material.permeability?.transitionWidth ?? 0;
-    const grid = temperatureGrid(part.startTemperature, part.targetTemperature, Math.max(4, options.heatUpPoints ?? 16), curie, width);
+    // about one operating point per 50 K (6 … 16), plus a dense cluster at the Curie transition
+    const span = part.targetTemperature - part.startTemperature;
+    const count = options.heatUpPoints ?? Math.min(16, Math.max(6, Math.ceil(span / 50) + 2));
+    const grid = temperatureGrid(part.startTemperature, part.targetTemperature, Math.max(4, count), curie, width);
     const points = grid.map((t) => (t === part.startTemperature ? operating : t === part.targetTemperature ? atTarget : tryPoint(t)));
     for (const p of points) if (p !== null) allPoints.push(p);
     // where the inverter cannot run, no power flows (frequency shown as 0)
@@ -408,7 +411,7 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       material.meltingTemperature - 50,
       Math.max(part.targetTemperature, curie === null ? part.targetTemperature : curie + 150),
     );
-    const grid = temperatureGrid(part.startTemperature, Math.max(top, part.targetTemperature), 24, curie, material.permeability?.transitionWidth ?? 0);
+    const grid = temperatureGrid(part.startTemperature, Math.max(top, part.targetTemperature), 16, curie, material.permeability?.transitionWidth ?? 0);
     const solved = grid.map((t) => ({ t, p: tryPoint(t) }));
     const ok = solved.filter((x): x is { t: number; p: HeaterOperatingPoint } => x.p !== null);
     const points = ok.map((x) => x.p);
@@ -427,7 +430,7 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
   let impedance: HeaterImpedanceSweep | null = null;
   if (options.impedanceSweep !== false) {
     const f0 = emptyCoil.frequency;
-    const count = 61;
+    const count = 41;
     const frequencies: number[] = [];
     for (let i = 0; i < count; i++) frequencies.push(f0 * 10 ** (-0.5 + i / (count - 1)));
     const tank = (L: number, R: number) =>
