@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, requireFinite, requireInRange, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import type { Caution } from "../core/index.js";
 import { exposureCheck } from "./exposure.js";
 import type { ExposurePopulation } from "./exposure.js";
@@ -64,7 +64,7 @@ export function voltageCaution(options: VoltageCautionOptions): Caution | null {
   requireObject(where, "options", options);
   const v = Math.abs(requireFinite(where, "voltage", options.voltage, "V"));
   const waveform = requireOneOf(where, "waveform", options.waveform, ["ac", "dc"] as const);
-  const location = options.location === undefined ? "circuit" : String(options.location);
+  const location = optionalText(where, "location", options.location, "circuit");
   const limit = waveform === "ac" ? EXTRA_LOW_VOLTAGE_LIMITS.acRms : EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc;
   if (v <= limit) return null;
   const kind = waveform === "ac" ? "V AC (RMS)" : "V DC";
@@ -245,7 +245,7 @@ export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOpti
   const temperature = requirePositive(where, "temperature", options.temperature, "K");
   const contactTime =
     options.contactTime === undefined ? 1 : requirePositive(where, "contactTime", options.contactTime, "s");
-  const location = options.location === undefined ? "part" : String(options.location);
+  const location = optionalText(where, "location", options.location, "part");
   const brief = contactBurnThreshold(1);
   const celsiusText = `${round(temperature - 273.15)} °C`;
   if (temperature > brief) {
@@ -449,6 +449,13 @@ export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
   }
   const order = { danger: 0, warning: 1, info: 2 } as const;
   return cautions.filter((c): c is Caution => c !== null).sort((a, b) => order[a.severity] - order[b.severity]);
+}
+
+/** An optional text option: its value, or the fallback when absent; InputError when not a string. */
+function optionalText(where: string, parameter: string, value: unknown, fallback: string): string {
+  if (value === undefined) return fallback;
+  if (typeof value !== "string") throw new InputError(where, parameter, value, "", "a string");
+  return value;
 }
 
 /** Three significant digits, plain notation where sensible. */

@@ -80,7 +80,7 @@ export interface LumpedEnergyBalance {
   /** Heat lost by radiation, $\int \varepsilon\sigma A(T^4 - T_a^4)\,dt$ [J]. */
   readonly radiation: number;
   /**
-   * `input − stored − convection − radiation` [J]: zero but for the integration error
+   * `input − stored − convection − radiation` [J], zero but for the integration error
    * (|imbalance| ≤ 1e-6 of the largest term at the default tolerance).
    */
   readonly imbalance: number;

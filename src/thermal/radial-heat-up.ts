@@ -92,7 +92,7 @@ export interface RadialEnergyBalance {
   readonly stored: number;
   /** Heat lost from the surface by convection and radiation [J/m²]. */
   readonly lost: number;
-  /** `input − stored − lost` [J/m²]: rounding only (the scheme conserves energy exactly). */
+  /** `input − stored − lost` [J/m²], rounding only (the scheme conserves energy exactly). */
   readonly imbalance: number;
 }
 

@@ -131,12 +131,11 @@ export function findEquilibrium(
   let a = start;
   let fa = n0;
   for (let i = 0; i < 200000; i++) {
-    let step = a < 5000 ? Math.min(2, Math.max(0.25, 0.01 * a)) : 0.05 * a;
+    const step = a < 5000 ? Math.min(2, Math.max(0.25, 0.01 * a)) : 0.05 * a;
     let b = a + direction * step;
     if (direction < 0 && b <= 0) {
-      b = 0.5 * a;
-      step = a - b;
       if (a < 1e-6) return null;
+      b = 0.5 * a;
     }
     if (b > 1e6) return null;
     const fb = net(b);
