@@ -4,8 +4,9 @@
  * of this module is built on it.
  *
  * Three regions by |z|:
- * - |z| ≤ 2: power series (A&S 9.6.10, 9.6.11, 9.6.13), no cancellation to speak of there;
- * - 2 < |z| < 19: K₀, K₁ by Steed's continued fraction CF2 (Thompson & Barnett 1987),
+ * - |z| ≤ 1.5, or |z| ≤ 2 with |Im z| ≥ |Re z|: power series (A&S 9.6.10, 9.6.11, 9.6.13),
+ *   which cancel little there;
+ * - elsewhere below |z| = 19: K₀, K₁ by Steed's continued fraction CF2 (Thompson & Barnett 1987),
  *   I₁/I₀ by the continued fraction CF1 (modified Lentz), and I₀ from the Wronskian
  *   I₀K₁ + I₁K₀ = 1/z. No power series is used where it would cancel;
  * - |z| ≥ 19: the Hankel asymptotic expansions (DLMF 10.40.1, 10.40.2, 10.40.5) including
@@ -25,6 +26,8 @@ export const SERIES_RADIUS = 1.5;
 /** From this modulus on: asymptotic expansions. */
 export const ASYMPTOTIC_RADIUS = 19;
 const EPS = 1e-17;
+/** Convergence of the continued fractions: one unit roundoff. */
+const EPS_CF = 1.1102230246251565e-16;
 const TINY = 1e-30;
 
 /**
@@ -49,7 +52,9 @@ export interface ScaledBesselIK {
 export function besselIKScaled(zr: number, zi: number, withK: boolean): ScaledBesselIK {
   const az = Math.abs(zr) + Math.abs(zi);
   const r = az < 1e150 && az > 1e-150 ? Math.sqrt(zr * zr + zi * zi) : Math.hypot(zr, zi);
-  if (r <= SERIES_RADIUS) return seriesRegion(zr, zi, r, withK);
+  // Steed's CF2 converges poorly near the imaginary axis for |z| < 2 (Numerical Recipes uses it
+  // only from x = 2 on the real line of J and Y); there the series cancels little, so use it.
+  if (r <= SERIES_RADIUS || (r <= 2 && Math.abs(zi) >= Math.abs(zr))) return seriesRegion(zr, zi, r, withK);
   if (r < ASYMPTOTIC_RADIUS) return continuedFractionRegion(zr, zi, r);
   return asymptoticRegion(zr, zi, r);
 }
@@ -191,7 +196,7 @@ function continuedFractionRegion(zr: number, zi: number, r: number): ScaledBesse
     const dsi = qr * delhi + qi * delhr;
     sr += dsr;
     si += dsi;
-    if (Math.abs(dsr) + Math.abs(dsi) < EPS * (Math.abs(sr) + Math.abs(si))) break;
+    if (Math.abs(dsr) + Math.abs(dsi) < EPS_CF * (Math.abs(sr) + Math.abs(si))) break;
   }
   hr *= a1;
   hi *= a1;
@@ -244,7 +249,7 @@ function continuedFractionRegion(zr: number, zi: number, r: number): ScaledBesse
     const nf = fr * delr - fi * deli;
     fi = fr * deli + fi * delr;
     fr = nf;
-    if (Math.abs(delr - 1) + Math.abs(deli) < EPS) break;
+    if (Math.abs(delr - 1) + Math.abs(deli) < 2 * EPS_CF) break;
   }
   // e^{−Re z} I0 = e^{i Im z} / (z (K1s + f·K0s))
   const tr = k1r + (fr * k0r - fi * k0i);

@@ -58,7 +58,7 @@ export function besselJ0(x: number): number {
  * @category Bessel functions
  */
 export function besselJ1(x: number): number {
-  const v = -besselIKScaled(0, -Math.abs(x), false).i1i;
+  const v = 0 - besselIKScaled(0, -Math.abs(x), false).i1i;
   return x < 0 ? -v : v;
 }
 
