@@ -8,7 +8,8 @@
  * `emissivity` (`min`/`max`/`typical`), `meltingTemperature` [K], `temperatureRange` [K],
  * `magnetic`, and for magnetic ones `curieTemperature` [K] and a `permeability` model. Read
  * temperature-dependent values with {@link resistivityAt}, {@link specificHeatAt},
- * {@link thermalConductivityAt}, {@link relativePermeabilityAt} and
+ * {@link thermalConductivityAt}, {@link relativePermeabilityAt},
+ * {@link specificEnthalpyChange} and
  * {@link saturationFluxDensityAt}.
  *
  * @module materials
@@ -40,6 +41,8 @@ export { conductiveMaterials } from "./catalogue.js";
 export { inventedExampleFerrite, inventedExampleIronPowder } from "./core-materials.js";
 export { resistivityAt } from "./resistivity.js";
 export { specificHeatAt } from "./specific-heat.js";
+export { specificEnthalpyChange } from "./enthalpy.js";
+export type { EnthalpyChangeInterval } from "./enthalpy.js";
 export { thermalConductivityAt } from "./thermal-conductivity.js";
 export { relativePermeabilityAt, saturationFluxDensityAt } from "./permeability.js";
 export type { PermeabilityConditions } from "./permeability.js";
