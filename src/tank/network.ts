@@ -84,7 +84,32 @@ export type TankNetwork = TankResistor | TankInductor | TankCapacitor | TankSeri
  *
  * @category Networks
  */
-export type TankLike = TankNetwork | { readonly kind: "series-tank" | "parallel-tank"; readonly network: TankNetwork };
+export type TankLike = TankNetwork | TankWithNetwork;
+
+/**
+ * A tank result that carries its network (what {@link seriesTank} and {@link parallelTank} return).
+ *
+ * @category Networks
+ */
+export interface TankWithNetwork {
+  /** `"series-tank"` or `"parallel-tank"`. */
+  readonly kind: "series-tank" | "parallel-tank";
+  /** The tank as a two-terminal network. */
+  readonly network: TankNetwork;
+}
+
+/**
+ * Result of {@link tankImpedanceSweep}: real and imaginary parts of the impedance, one entry per
+ * frequency.
+ *
+ * @category Networks
+ */
+export interface TankImpedanceSweep {
+  /** Resistance (real part) [Ω]. */
+  readonly re: Float64Array;
+  /** Reactance (imaginary part) [Ω]; > 0 inductive. */
+  readonly im: Float64Array;
+}
 
 /**
  * A resistor as a network part.
@@ -463,7 +488,7 @@ export function tankImpedance(network: TankLike, frequency: number): Complex {
 export function tankImpedanceSweep(
   network: TankLike,
   frequencies: ArrayLike<number>,
-): { readonly re: Float64Array; readonly im: Float64Array } {
+): TankImpedanceSweep {
   const where = "tankImpedanceSweep";
   const net = resolveNetwork(where, network);
   if (typeof frequencies !== "object" || frequencies === null || typeof frequencies.length !== "number") {
