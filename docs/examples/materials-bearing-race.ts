@@ -5,7 +5,7 @@
  *
  * Run: npx tsx docs/examples/materials-bearing-race.ts
  */
-import { celsius, mediumCarbonSteel, relativePermeabilityAt, resistivityAt, specificHeatAt } from "../../src/index.js";
+import { celsius, mediumCarbonSteel, relativePermeabilityAt, resistivityAt, specificEnthalpyChange, specificHeatAt } from "../../src/index.js";
 
 function expectClose(name: string, value: number, expected: number, rtol: number): void {
   console.log(`${name} = ${value.toPrecision(6)}`);
@@ -36,3 +36,12 @@ const h = (b - a) / steps;
 for (let i = 0; i < steps; i++) energy += 0.5 * h * mass * (specificHeatAt(steel, a + i * h) + specificHeatAt(steel, a + (i + 1) * h));
 // EN 1993-1-2 cubic integrated in closed form: 2.4 × 88 191.15 J/kg
 expectClose("heat to 200 °C [J]", energy, 2.4 * 88191.1512, 1e-6);
+
+// the same heat from the exact integral of the specific-heat model
+const exact = mass * specificEnthalpyChange(steel, { fromTemperature: a, toTemperature: b });
+expectClose("heat to 200 °C, exact integral [J]", exact, 2.4 * 88191.1512, 1e-12);
+
+// through the Curie range the carbon-steel peak costs extra: 700 → 800 °C
+const throughCurie = specificEnthalpyChange(steel, { fromTemperature: celsius(700), toTemperature: celsius(800) });
+console.log(`heat per kg from 700 °C to 800 °C = ${(throughCurie / 1e3).toFixed(1)} kJ/kg (a flat 650 J/(kg·K) would give 65 kJ/kg)`);
+if (!(throughCurie > 2 * 65e3)) throw new Error("the specific-heat peak should more than double the heat through 700–800 °C");
