@@ -496,19 +496,19 @@ function besselJ1Zeros(n: number): Float64Array {
  * Impedance change of the coil of {@link coilOverPlate} by the truncated-region eigenfunction
  * expansion (TREE) of Theodoulidis & Kriezis: the field is confined to a cylinder of radius
  * $b$ (vector potential zero on it), the integral over the separation constant becomes a
- * series over the discrete eigenvalues $lpha_i = j_{1,i}/b$ ($J_1(lpha_i b) = 0$):
+ * series over the discrete eigenvalues $\alpha_i = j_{1,i}/b$ ($J_1(\alpha_i b) = 0$):
  *
  * $$
- * \Delta Z = j\omega\pi\mu_0 n^2 \sum_i rac{2\,\Gamma(lpha_i)\,\chi(lpha_i)^2
- *   \left(e^{-lpha_i l_1} - e^{-lpha_i l_2}
-ight)^2}{lpha_i^7\, b^2 J_0^2(lpha_i b)},
+ * \Delta Z = j\omega\pi\mu_0 n^2 \sum_i \frac{2\,\Gamma(\alpha_i)\,\chi(\alpha_i)^2
+ *   \left(e^{-\alpha_i l_1} - e^{-\alpha_i l_2}\right)^2}{\alpha_i^7\, b^2 J_0^2(\alpha_i b)},
  * $$
  *
  * with the same reflection coefficient and radial integral as {@link coilOverPlate}, summed
- * to $lpha_i \le 40\pi/r_2$ (and $20/l_1$) with the same tail corrections. It is an
- * independent discretisation of the same field problem, used to cross-check
- * {@link coilOverPlate}; it tends to it as $b 	o \infty$. `airCoreInductance` here is that of
- * the coil inside the truncating cylinder.
+ * to $\alpha_i \le 40\pi/r_2$ (and $20/l_1$) with the same tail corrections. The truncation
+ * error falls as $b^{-3}$, so the sums at $b$ and $2b$ are combined by Richardson
+ * extrapolation, $(8S_{2b} - S_b)/7$. It is an independent discretisation of the same field
+ * problem (a series over eigenvalues instead of a quadrature), used to cross-check
+ * {@link coilOverPlate}. About 10× slower than {@link coilOverPlate}.
  *
  * Hard domain (throws {@link InputError}): as {@link coilOverPlate}, and domainRadius >
  * coil outerRadius when given. Validity: as {@link coilOverPlate}, with the plate and field

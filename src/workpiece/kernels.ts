@@ -13,7 +13,6 @@ export function gaussLegendreRule(n: number): { nodes: Float64Array; weights: Fl
   const m = (n + 1) >> 1;
   for (let i = 0; i < m; i++) {
     let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 0;
     for (let iter = 0; iter < 100; iter++) {
       let p0 = 1;
       let p1 = x;
@@ -22,8 +21,7 @@ export function gaussLegendreRule(n: number): { nodes: Float64Array; weights: Fl
         p0 = p1;
         p1 = p2;
       }
-      dp = (n * (x * p1 - p0)) / (x * x - 1);
-      const dx = p1 / dp;
+      const dx = p1 / ((n * (x * p1 - p0)) / (x * x - 1));
       x -= dx;
       if (Math.abs(dx) < 1e-16) break;
     }
@@ -35,7 +33,7 @@ export function gaussLegendreRule(n: number): { nodes: Float64Array; weights: Fl
       p0 = p1;
       p1 = p2;
     }
-    dp = (n * (x * p1 - p0)) / (x * x - 1);
+    const dp = (n * (x * p1 - p0)) / (x * x - 1);
     const w = 2 / ((1 - x * x) * dp * dp);
     nodes[i] = -x;
     nodes[n - 1 - i] = x;
@@ -209,12 +207,11 @@ export function bakerPQ(u: number): { p: number; q: number; qExcess: number } {
   if (u <= 0.3) {
     // (2j)^(k+1): k = 0 → 2j, 1 → −4, 2 → −8j, 3 → 16, ...
     const u2 = u * u;
-    let p = 0;
     let q = 0; // all q terms but the first, which is exactly u
     let pow = u * u * u * u * u; // u^(2k+1), from k = 2
     let mag = 8; // |(2j)^(k+1)|, from k = 2
     // k = 1 term: p = −4 b_3 u³ = u³/4
-    p = -4 * RATIO_SERIES[3]! * u * u * u;
+    let p = -4 * RATIO_SERIES[3]! * u * u * u;
     for (let k = 2; k < 23; k++) {
       const term = RATIO_SERIES[2 * k + 1]! * mag * pow;
       switch (k & 3) {

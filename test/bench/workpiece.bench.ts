@@ -41,8 +41,16 @@ const check = (x: number) => {
 
 describe("workpiece", () => {
   let i = 0;
-  bench("bakerFunctions", () => check(bakerFunctions(ratios[i++ & (N - 1)]!).p), { time: 300 });
-  bench("barInLongCoil", () => check(barInLongCoil(bars[i++ & (N - 1)]!).reflectedResistance), { time: 300 });
-  bench("slabInTangentialField", () => check(slabInTangentialField(slabs[i++ & (N - 1)]!).powerPerArea), { time: 300 });
-  bench("coilOverPlate (one frequency point)", () => check(coilOverPlate(plates[i++ & 63]!).resistanceChange), { time: 300 });
+  bench("bakerFunctions", () => {
+    check(bakerFunctions(ratios[i++ & (N - 1)]!).p);
+  }, { time: 300 });
+  bench("barInLongCoil", () => {
+    check(barInLongCoil(bars[i++ & (N - 1)]!).reflectedResistance);
+  }, { time: 300 });
+  bench("slabInTangentialField", () => {
+    check(slabInTangentialField(slabs[i++ & (N - 1)]!).powerPerArea);
+  }, { time: 300 });
+  bench("coilOverPlate (one frequency point)", () => {
+    check(coilOverPlate(plates[i++ & 63]!).resistanceChange);
+  }, { time: 300 });
 });

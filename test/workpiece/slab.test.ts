@@ -62,7 +62,7 @@ describe("slabInTangentialField", () => {
       { fieldStrengthRms: "1" },
     ];
     for (const b of bad) {
-      expect(() => slabInTangentialField({ ...base, ...b } as never)).toThrow(InputError);
+      expect(() => slabInTangentialField({ ...base, ...b })).toThrow(InputError);
     }
     expect(() => slabInTangentialField(null as never)).toThrow(InputError);
   });
