@@ -23,7 +23,9 @@ export interface LitzWindingAcRatioOptions {
   readonly resistivity: number;
   /**
    * Field-shape factor k [-] of Sullivan's model, finite and > 0 (default 1: one winding
-   * portion whose field rises linearly from zero to NI/b across the winding build).
+   * portion whose field rises linearly from zero to NI/b across the winding build). For a
+   * trapezoidal field from $B_\mathrm{min}$ to $B_\mathrm{max}$ the mean square gives
+   * $k = 1 + \gamma + \gamma^2$, $\gamma = B_\mathrm{min}/B_\mathrm{max}$.
    */
   readonly fieldFactor?: number;
 }
@@ -62,7 +64,7 @@ function sullivanCoefficient(turns: number, breadth: number, frequency: number, 
  * @param options - {@link LitzWindingAcRatioOptions}
  * @returns $R_\mathrm{ac}/R_\mathrm{dc}$ of the winding [-], ≥ 1
  * @throws {@link InputError} on bad input
- * @see C. R. Sullivan, "Optimal choice for number of strands in a litz-wire transformer winding", IEEE Trans. Power Electron. 14(2), 283–291 (1999), §II (the Fr expression with the field factor k).
+ * @see C. R. Sullivan, "Optimal choice for number of strands in a litz-wire transformer winding", IEEE Trans. Power Electron. 14(2), 283–291 (1999), §II and appendix (the Fr expression from the low-frequency loss of a cylinder in a uniform field and a trapezoidal field distribution; web version at dartmouth.edu/~sullivan/litzwire).
  * @example
  * ```ts
  * import { litzWindingAcRatio } from "fluxwright";

@@ -42,7 +42,7 @@ export interface SkinDepthOptions {
  * ```ts
  * import { skinDepth } from "fluxwright";
  * // annealed copper at 20 °C, 20 kHz
- * console.log(skinDepth({ resistivity: 1.7241e-8, frequency: 20e3 })); // ≈ 4.672e-4
+ * console.log(skinDepth({ resistivity: 1.7241e-8, frequency: 20e3 })); // ≈ 4.673e-4
  * ```
  * @category Conductors
  */
