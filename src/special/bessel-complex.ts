@@ -41,7 +41,8 @@ const nanComplex = (): Complex => ({ re: NaN, im: NaN });
  * ```ts
  * import { besselI0Complex, complex } from "fluxwright";
  * const v = besselI0Complex(complex(1, 1));
- * console.log(v.re, v.im); // ≈ 0.9376084 ≈ 0.4965299
+ * console.log(v.re); // ≈ 0.93760847681
+ * console.log(v.im); // ≈ 0.49652994761
  * ```
  * @category Bessel functions
  */
@@ -200,7 +201,7 @@ function unscaleK(s: Complex, z: Complex): Complex {
  * @example
  * ```ts
  * import { besselK0ComplexScaled, complex } from "fluxwright";
- * console.log(besselK0ComplexScaled(complex(1e6, 0)).re); // ≈ 0.0012533138
+ * console.log(besselK0ComplexScaled(complex(1e6, 0)).re); // ≈ 0.0012533139807
  * ```
  * @category Bessel functions
  */
@@ -226,7 +227,7 @@ export function besselK0ComplexScaled(z: Complex): Complex {
  * @example
  * ```ts
  * import { besselK1ComplexScaled, complex } from "fluxwright";
- * console.log(besselK1ComplexScaled(complex(1e6, 0)).re); // ≈ 0.0012533148
+ * console.log(besselK1ComplexScaled(complex(1e6, 0)).re); // ≈ 0.0012533146073
  * ```
  * @category Bessel functions
  */

@@ -206,7 +206,7 @@ export function besselI0Scaled(x: number): number {
  * @example
  * ```ts
  * import { besselI1Scaled } from "fluxwright";
- * console.log(besselI1Scaled(1)); // ≈ 0.2079104154
+ * console.log(besselI1Scaled(1)); // ≈ 0.2079104153
  * ```
  * @category Bessel functions
  */

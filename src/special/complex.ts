@@ -360,7 +360,7 @@ export function cTanh(a: Complex): Complex {
  * @example
  * ```ts
  * import { cCoth, complex } from "fluxwright";
- * console.log(cCoth(complex(-1000, 2))); // { re: -1, im: -0 }
+ * console.log(cCoth(complex(-1000, 2))); // { re: -1, im: 0 }
  * ```
  * @category Complex arithmetic
  */

@@ -164,7 +164,7 @@ export function ellipticE(m: number): number {
  * @example
  * ```ts
  * import { ellipticKFromComplement } from "fluxwright";
- * console.log(ellipticKFromComplement(1e-20)); // ≈ 24.41271511441
+ * console.log(ellipticKFromComplement(1e-20)); // ≈ 24.412145291060
  * ```
  * @category Elliptic integrals
  */

@@ -150,7 +150,7 @@ export function integrateToInfinity(
   for (let n = 0; n < maxIntervals; n++) {
     positiveSeen = false;
     negativeSeen = false;
-    const piece = integrateGk(watched, x, x + h, rel * 0.1, abs * 0.01, maxSubintervals);
+    const piece = integrateGk(watched, x, x + h, rel * 1e-3, abs * 1e-3, maxSubintervals);
     if (positiveSeen && negativeSeen) oscillating = true;
     evaluations += piece.evaluations;
     if (!Number.isFinite(piece.value)) {

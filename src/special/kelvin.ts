@@ -409,7 +409,7 @@ export function kelvinKer(x: number): number {
  * @example
  * ```ts
  * import { kelvinKei } from "fluxwright";
- * console.log(kelvinKei(1)); // ≈ -0.4949946252
+ * console.log(kelvinKei(1)); // ≈ -0.4949946365
  * ```
  * @category Kelvin functions
  */
@@ -432,7 +432,7 @@ export function kelvinKei(x: number): number {
  * @example
  * ```ts
  * import { kelvinBerPrime } from "fluxwright";
- * console.log(kelvinBerPrime(1)); // ≈ -0.0624457521
+ * console.log(kelvinBerPrime(1)); // ≈ -0.0624457522
  * ```
  * @category Kelvin functions
  */
@@ -455,7 +455,7 @@ export function kelvinBerPrime(x: number): number {
  * @example
  * ```ts
  * import { kelvinBeiPrime } from "fluxwright";
- * console.log(kelvinBeiPrime(1)); // ≈ 0.4973965114
+ * console.log(kelvinBeiPrime(1)); // ≈ 0.4973965115
  * ```
  * @category Kelvin functions
  */
