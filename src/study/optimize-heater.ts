@@ -257,7 +257,9 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal): HeaterOp
           props = coilProperties(readHeaterDescription(coilVariant));
         } catch (e) {
           if (!(e instanceof InputError)) throw e;
-          for (let k = 0; k < capacitances.length; k++) reject(`invalid design: ${e.message.replace(/^readHeaterDescription: /, "")}`);
+          // group by field and rule, without the candidate's own numbers
+          const rule = e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "").replace(/\s+/g, " ");
+          for (let k = 0; k < capacitances.length; k++) reject(`invalid design: ${e.parameter} must be ${rule}`);
           evaluated += capacitances.length;
           continue;
         }
@@ -270,7 +272,7 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal): HeaterOp
             point = heaterOperatingPoint(d, d.part.startTemperature, true, props);
           } catch (e) {
             if (!(e instanceof InputError)) throw e;
-            reject(`no operating point: ${e.message}`);
+            reject(`no operating point: ${e.where}: ${e.parameter} must be ${e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "")}`);
             continue;
           }
           let ok = true;

@@ -1,0 +1,91 @@
+import { describe, it, expect } from "vitest";
+import { InputError, optimizeHeater, studyHeater, sweepHeater } from "../../src/index.js";
+import { loadExample } from "./cases.js";
+
+const race = loadExample("study-bearing-race.json");
+
+describe("sweepHeater", () => {
+  const sweep = sweepHeater(race, { field: "coil.turns", values: [4, 5, 6, 0], heatUp: false });
+
+  it("gives one row per value, in order, each equal to studying that variant", () => {
+    expect(sweep.field).toBe("coil.turns");
+    expect(sweep.rows.map((r) => r.value)).toEqual([4, 5, 6, 0]);
+    const six = studyHeater(race, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+    expect(sweep.rows[2]?.summary?.frequency).toBe(six.operating.frequency);
+    expect(sweep.rows[2]?.summary?.partPower).toBe(six.operating.losses.part);
+  });
+
+  it("records an invalid value as a row problem with the field path instead of stopping", () => {
+    const bad = sweep.rows[3];
+    expect(bad?.summary).toBeNull();
+    expect(bad?.problem).toContain("coil.turns must be an integer ≥ 1, got 0");
+  });
+
+  it("fewer turns on the same capacitor raise the frequency (f ∝ 1/√L, common practice)", () => {
+    const f = sweep.rows.slice(0, 3).map((r) => r.summary?.emptyCoilFrequency ?? 0);
+    expect(f[0]).toBeGreaterThan(f[1] ?? 0);
+    expect(f[1]).toBeGreaterThan(f[2] ?? 0);
+  });
+
+  it("accepts quantity texts and computes the heat-up when asked", () => {
+    const s = sweepHeater(race, { field: "capacitor.capacitance", values: ["3.3 µF", "4.7 µF"] });
+    expect(s.rows.every((r) => r.summary !== null && r.summary.timeToTarget !== null)).toBe(true);
+  });
+
+  it("rejects a malformed sweep with InputError", () => {
+    expect(() => sweepHeater(race, { field: "coil..turns", values: [1] })).toThrow(InputError);
+    expect(() => sweepHeater(race, { field: "coil.turns", values: [] })).toThrow(/values must be a non-empty array/);
+    expect(() => sweepHeater(race, { field: "coil.conductor", values: [1] })).toThrow(/numeric field/);
+    expect(() => sweepHeater(race, { field: "nothing.here", values: [1] })).toThrow(/field must be/);
+    expect(() => sweepHeater({ ...race, coil: 5 }, { field: "supply.voltage", values: [1] })).toThrow(/coil must be an object/);
+  });
+});
+
+describe("optimizeHeater", () => {
+  const goal = {
+    targetPower: "1.5 kW",
+    limits: { minFrequency: "20 kHz", tankVoltagePeak: "200 V" },
+    search: { turns: [3, 4, 5, 6, 7, 8], minCapacitance: "1 µF", maxCapacitance: "22 µF" },
+    keep: 4,
+  };
+  const r = optimizeHeater(race, goal);
+
+  it("evaluates every candidate of the search space (turns × E12 capacitances × conductors)", () => {
+    // E12 values from 1 µF to 22 µF: 1, 1.2, …, 8.2, 10, 12, 15, 18, 22 µF = 17
+    expect(r.evaluated).toBe(6 * 17);
+  });
+
+  it("returns the best designs, closest first, all within the limits, each reproducible with studyHeater", () => {
+    expect(r.best.length).toBe(4);
+    for (let i = 1; i < r.best.length; i++) expect(r.best[i]?.score ?? 0).toBeGreaterThanOrEqual(r.best[i - 1]?.score ?? 0);
+    for (const b of r.best) {
+      expect(b.summary.frequency).toBeGreaterThanOrEqual(20e3);
+      expect(b.summary.tankVoltagePeak).toBeLessThanOrEqual(200);
+      const s = studyHeater(b.description, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+      expect(s.operating.losses.part).toBe(b.summary.partPower);
+      expect(Math.abs(Math.log(b.summary.partPower / 1500))).toBeCloseTo(b.score, 12);
+    }
+    expect(r.best[0]?.score ?? 1).toBeLessThan(0.2);
+  });
+
+  it("says why the others failed, with counts", () => {
+    expect(r.feasible + r.rejected.reduce((a, x) => a + x.count, 0)).toBeGreaterThanOrEqual(r.evaluated);
+    const reasons = r.rejected.map((x) => x.reason).join("\n");
+    expect(reasons).toMatch(/frequency below limit|invalid design|no operating point/);
+  });
+
+  it("optimises for a heat-up time with the full electro-thermal heat-up on the finalists", () => {
+    const t = optimizeHeater(race, { targetTime: "60 s", search: { turns: [5, 6], minCapacitance: "2.2 µF", maxCapacitance: "6.8 µF" }, keep: 2 });
+    expect(t.best.length).toBe(2);
+    for (const b of t.best) expect(b.summary.timeToTarget).not.toBeNull();
+    expect(Math.abs((t.best[0]?.summary.timeToTarget ?? 0) / 60 - 1)).toBeLessThan(0.5);
+  });
+
+  it("rejects a malformed goal with InputError", () => {
+    expect(() => optimizeHeater(race, {})).toThrow(/exactly one of targetPower or targetTime/);
+    expect(() => optimizeHeater(race, { targetPower: 100, targetTime: 10 })).toThrow(InputError);
+    expect(() => optimizeHeater(race, { targetPower: "1 kV" })).toThrow(InputError);
+    expect(() => optimizeHeater(race, { targetPower: 100, keep: 0 })).toThrow(/keep/);
+    expect(() => optimizeHeater(race, { targetPower: 100, search: { turns: [0] } })).toThrow(/turns\[0\]/);
+  });
+});
