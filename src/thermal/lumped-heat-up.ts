@@ -283,11 +283,12 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   };
 
   let timeToTarget: number | null = null;
+  let eventRun: OdeResult | null = null;
   if (target !== null && reachable) {
     if (target === initial) timeToTarget = 0;
     else {
       const horizon = Math.max(1e12, 1e3 * (timeConstant ?? 0));
-      const eventRun = run(horizon, true);
+      eventRun = run(horizon, true);
       if (eventRun.status === "event" && eventRun.eventTime !== null) timeToTarget = eventRun.eventTime;
       else reachable = false;
     }
@@ -300,11 +301,21 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   else {
     throw new InputError(WHERE, "duration", options.duration, "s", "a finite number > 0 (required: no reachable target and no steady state to approach)");
   }
-  // The curve: at least 64 steps over the span, for plotting.
-  const curve = run(end, false);
-
-  const times = curve.times;
-  const temperatures = curve.states.map((s) => s[0]!);
+  // The curve: the run that stopped at the target when the span ends there (its steps merged
+  // with 64 dense samples, for plotting), else a run over the span with at least 64 steps.
+  const curve = eventRun !== null && end === timeToTarget ? eventRun : run(end, false);
+  let times = curve.times;
+  let temperatures = curve.states.map((s) => s[0]!);
+  if (curve === eventRun) {
+    const merged: { t: number; v: number }[] = times.map((t, k) => ({ t, v: temperatures[k]! }));
+    for (let k = 1; k < 64; k++) {
+      const t = (end * k) / 64;
+      merged.push({ t, v: curve.sample!(t)[0]! });
+    }
+    merged.sort((a, b) => a.t - b.t);
+    times = merged.map((p) => p.t);
+    temperatures = merged.map((p) => p.v);
+  }
   const finalState = curve.finalState;
   const finalTemperature = finalState[0]!;
   const sample = curve.sample!;
