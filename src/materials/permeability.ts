@@ -70,10 +70,11 @@ function saturationMagnetisation(model: PermeabilityModel, curie: number, t: num
  *
  * Hard domain (throws {@link InputError}): `material` or `conditions` not an object;
  * `temperature` not a finite number > 0; `fieldStrength` given but not a finite number ≥ 0.
- * Validity: fields from about 1 kA/m to 1 MA/m (the strong fields of induction heating);
- * accuracy: an engineering model, typically within a factor of 1.5 of measured amplitude
- * permeability of the steel families (from memory), exact at its limits (1 above $T_c$,
- * $1 + M_s/H$ for $H \gg M_s/\mu_i$).
+ * Validity: fields from about 1 kA/m to 1 MA/m (the strong fields of induction heating).
+ * Accuracy: the evaluation matches an independent mpmath evaluation of the model to ≤ 1e-12
+ * relative; the model itself is an engineering approximation whose parameters are typical
+ * values (no comparison with measured steel is shipped), exact at its limits (1 at and above
+ * $T_c$, $1 + M_s/H$ for $H \gg M_s/\mu_i$).
  *
  * @param material - the material
  * @param conditions - temperature [K] and optional surface field-strength amplitude [A/m]
