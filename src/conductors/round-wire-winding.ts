@@ -72,11 +72,12 @@ export function checkWinding(where: string, options: RoundWireWindingOptions): C
  * Hard domain (throws {@link InputError}): all inputs finite and > 0, layers and
  * turnsPerLayer integers ≥ 1, windingWidth ≥ turnsPerLayer · wireDiameter. Validity: a
  * one-dimensional field (layers fill the window breadth, e.g. a transformer or an inductor
- * with a gapless core window), closely wound layers; the
- * equivalent-foil step is an approximation: against the exact round-wire solution it
- * overstates the skin part and, for d ≳ 1.5 δ in multilayer windings, errs by tens of percent.
- * Use {@link roundWireWindingAcRatioFerreira} when d is comparable to or larger than δ and
- * the layers are few; both agree within about 10 % for d < δ.
+ * with a gapless core window), closely wound layers, d ≲ 1.5 δ. Against
+ * {@link roundWireWindingAcRatioFerreira} (same inputs, porosity 0.9) it agrees within 4 % for
+ * d ≤ 1.5 δ, differs by 6–7 % at d = 2 δ and by 15–100 % at 3–5 δ in multilayer windings;
+ * beyond about 2 δ neither 1-D model is reliable for closely packed multilayer round-wire
+ * windings (the field around each wire is two-dimensional), and the designer should avoid
+ * that region anyway (use thinner wire or litz).
  *
  * Accuracy: the formula is evaluated to ≤ 1e-14 relative (see {@link dowellFactor}); as a
  * model, see validity.

@@ -2,6 +2,7 @@ import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { litzAcRatio, litzGeometry, litzDcResistance, litzWindingAcRatio, roundWireAcRatio, wireDcResistance, InputError } from "../../src/index.js";
 
+import { wireProximityFactorKernel } from "../../src/conductors/round-wire-kernels.js";
 const rho = 1.7241e-8;
 const logUniform = (lo: number, hi: number) =>
   fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true, noDefaultInfinity: true }).map((e) => 10 ** e);
@@ -73,5 +74,17 @@ describe("litzAcRatio", () => {
     expect(() => litzAcRatio({ construction, frequency: 0, resistivity: rho })).toThrow(/frequency/);
     expect(() => litzAcRatio({ construction, frequency: 1e5, resistivity: rho, turns: 10 })).toThrow(/windowBreadth/);
     expect(() => litzAcRatio({ construction, frequency: 1e5, resistivity: rho, windowBreadth: 0.01 })).toThrow(/turns/);
+  });
+});
+
+describe("Sullivan's low-frequency strand loss against the exact round-wire function", () => {
+  it("is 0.7 % high at d_s = δ and 11 % high at d_s = 2δ (the validity figures in the TSDoc)", () => {
+    // exact transverse-field loss g(q) (Kelvin functions; fixture-checked) vs its first term π q⁴/8
+    const ratio = (dOverDelta: number) => {
+      const q = dOverDelta / Math.SQRT2;
+      return ((Math.PI * q ** 4) / 8) / wireProximityFactorKernel(q);
+    };
+    expect(ratio(1)).toBeCloseTo(1.007, 3);
+    expect(ratio(2)).toBeCloseTo(1.114, 3);
   });
 });
