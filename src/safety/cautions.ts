@@ -13,7 +13,8 @@ import type { ExposurePopulation } from "./exposure.js";
  * Extra-low-voltage limits of IEC 61140 [V]: 50 V AC (RMS) and 120 V ripple-free DC.
  *
  * @see IEC 61140:2016, Protection against electric shock — Common aspects for installation and
- *   equipment, Annex B (voltage bands; ELV limits as in IEC 61201).
+ *   equipment (extra-low voltage: voltage band I of IEC 60449; clause numbers not quoted, the
+ *   limits are the well-known ones).
  * @example
  * ```ts
  * import { EXTRA_LOW_VOLTAGE_LIMITS } from "fluxwright";
@@ -50,7 +51,7 @@ export interface VoltageCautionOptions {
  * @param options - voltage, waveform and where it appears
  * @returns the caution, or `null`
  * @throws {@link InputError} on bad input
- * @see IEC 61140:2016, Annex B; {@link EXTRA_LOW_VOLTAGE_LIMITS}.
+ * @see IEC 61140:2016 (extra-low voltage limits); {@link EXTRA_LOW_VOLTAGE_LIMITS}.
  * @example
  * ```ts
  * import { voltageCaution } from "fluxwright";
@@ -75,7 +76,7 @@ export function voltageCaution(options: VoltageCautionOptions): Caution | null {
     value: v,
     limit,
     unit: "V",
-    source: `IEC 61140:2016, Annex B (extra-low voltage: 50 V AC RMS, 120 V ripple-free DC)`,
+    source: "IEC 61140:2016, extra-low voltage limits (50 V AC RMS, 120 V ripple-free DC; voltage band I of IEC 60449)",
   };
 }
 
