@@ -46,7 +46,7 @@ function igseCoefficientUnchecked(k: number, alpha: number, beta: number): numbe
  * @throws {@link InputError} on bad coefficients
  * @see K. Venkatachalam, C. R. Sullivan, T. Abdallah, H. Tacca, "Accurate prediction of
  * ferrite core loss with nonsinusoidal waveforms using only Steinmetz parameters", IEEE
- * COMPEL 2002, eqs. (9)–(10).
+ * COMPEL 2002: the definition of k_i (equation numbers not cited; from memory).
  * @example
  * ```ts
  * import { igseCoefficient } from "fluxwright";
@@ -112,7 +112,7 @@ const WHERE = "igseLoss";
  * @throws {@link InputError} on bad input
  * @see K. Venkatachalam, C. R. Sullivan, T. Abdallah, H. Tacca, "Accurate prediction of
  * ferrite core loss with nonsinusoidal waveforms using only Steinmetz parameters", IEEE
- * COMPEL 2002, eqs. (9)–(12) and §IV (minor loops).
+ * COMPEL 2002: the iGSE, its piecewise-linear form and the recursive minor-loop splitting.
  * @example
  * ```ts
  * import { igseLoss, triangularFluxWaveform } from "fluxwright";

@@ -62,7 +62,7 @@ describe("igseLoss", () => {
     }
   });
 
-  it("gives the closed form k_i 2^(α+β) f^α B̂^β for a symmetric triangle (Venkatachalam et al. 2002, piecewise-linear form eq. (11))", () => {
+  it("gives the closed form k_i 2^(α+β) f^α B̂^β for a symmetric triangle (Venkatachalam et al. 2002, piecewise-linear form of the iGSE)", () => {
     const o = { k: 2.5, alpha: 1.45, beta: 2.55 };
     const w = triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3 });
     const expected = igseCoefficient(o) * 2 ** (o.alpha + o.beta) * 100e3 ** o.alpha * 0.1 ** o.beta;
