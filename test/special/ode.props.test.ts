@@ -30,7 +30,7 @@ describe("solveOde properties", () => {
         expect(Math.abs(back.finalState[0]! - 1)).toBeLessThan(1e-7);
         expect(Math.abs(back.finalState[1]!) / w).toBeLessThan(1e-7);
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 
@@ -60,7 +60,7 @@ describe("solveOde properties", () => {
           expect(mid).toBeGreaterThanOrEqual(r.states[i]![0]! - 1e-15);
         }
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 });

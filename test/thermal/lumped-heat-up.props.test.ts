@@ -42,7 +42,7 @@ describe("lumpedHeatUp properties", () => {
         expect(r.reachable).toBe(true);
         expect(Math.abs(r.timeToTarget! / timeByQuadrature(o, target) - 1)).toBeLessThan(1e-7);
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 
@@ -54,7 +54,7 @@ describe("lumpedHeatUp properties", () => {
         const fast = lumpedHeatUp({ ...o, power: o.power * factor, ambientTemperature, targetTemperature: target });
         expect(fast.timeToTarget!).toBeLessThan(slow.timeToTarget!);
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 
@@ -66,7 +66,7 @@ describe("lumpedHeatUp properties", () => {
         const far = lumpedHeatUp({ ...o, ambientTemperature, targetTemperature: ambientTemperature + 2 * fraction * span });
         expect(far.timeToTarget!).toBeGreaterThan(near.timeToTarget!);
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 
@@ -87,7 +87,7 @@ describe("lumpedHeatUp properties", () => {
         const r = lumpedHeatUp({ ...o, ambientTemperature, duration });
         expect(Math.abs(r.energy.imbalance)).toBeLessThanOrEqual(1e-6 * r.energy.input);
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 
@@ -98,7 +98,7 @@ describe("lumpedHeatUp properties", () => {
         const b = lumpedHeatUp({ ...o, mass: o.mass * k, power: o.power * k, surfaceArea: o.surfaceArea * k, ambientTemperature, duration: 100 });
         expect(Math.abs(b.finalTemperature - a.finalTemperature)).toBeLessThan(1e-7 * a.finalTemperature);
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 
@@ -112,7 +112,7 @@ describe("lumpedHeatUp properties", () => {
           expect(t).toBeLessThanOrEqual(steady + 1e-6);
         }
       }),
-      { seed: 1, numRuns: 100 },
+      { seed: 1, numRuns: 50 },
     );
   });
 });

@@ -140,6 +140,18 @@ describe("radialHeatUp: skin-layer heating", () => {
     expect(Math.abs(r.finalSurfaceTemperature - l.finalTemperature)).toBeLessThan(5e-4 * rise);
   });
 
+  it("times to target bracket the lumped closed form for a well-conducting rod (surface first, core last, within 0.3 %)", () => {
+    const [radius, length, rho, c, k, h, power, ta, target] = [0.005, 0.05, 8900, 385, 400, 10, 50, 293.15, 393.15];
+    const mass = rho * Math.PI * radius * radius * length;
+    const area = 2 * Math.PI * radius * length;
+    const exact = -((mass * c) / (h * area)) * Math.log(1 - ((target - ta) * h * area) / power); // Incropera eq. 5.25 form
+    const r = radialHeatUp({ geometry: "cylinder", radius, length, power, density: rho, specificHeat: c, thermalConductivity: k, convectionCoefficient: h, emissivity: 0, ambientTemperature: ta, duration: 2 * exact, targetTemperature: target });
+    expect(r.timeToSurfaceTarget!).toBeLessThan(exact);
+    expect(r.timeToCoreTarget!).toBeGreaterThan(exact);
+    expect(Math.abs(r.timeToCoreTarget! / exact - 1)).toBeLessThan(3e-3);
+    expect(Math.abs(r.timeToSurfaceTarget! / exact - 1)).toBeLessThan(3e-3);
+  });
+
   it("notes a grid coarser than the skin layer", () => {
     const r = radialHeatUp({ geometry: "slab", thickness: 0.2, faceArea: 1, power: 1000, skinDepth: 1e-5, density: 7850, specificHeat: 480, thermalConductivity: 45, convectionCoefficient: 10, emissivity: 0, ambientTemperature: 293.15, duration: 1, cells: 8 });
     expect(r.validity.map((v) => v.code)).toContain("grid-coarser-than-skin");
