@@ -7,9 +7,9 @@ const logUniform = (lo: number, hi: number) =>
 const rho = 1.7241e-8;
 
 describe("tubeAcResistance properties", () => {
-  it("Rac ≥ Rdc of the tube and finite over thin to thick walls", () => {
+  it("Rac ≥ Rdc of the tube and finite over thin (1e-9 of the radius) to solid walls", () => {
     fc.assert(
-      fc.property(logUniform(1e-3, 0.1), fc.double({ min: 0.001, max: 1, noNaN: true, noDefaultInfinity: true }), logUniform(1, 1e8), (od, frac, f) => {
+      fc.property(logUniform(1e-3, 0.1), logUniform(1e-9, 1), logUniform(1, 1e8), (od, frac, f) => {
         const b = od / 2;
         const wall = frac * b;
         const a = b - wall;

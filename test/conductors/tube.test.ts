@@ -39,6 +39,22 @@ describe("tubeAcResistance", () => {
     expect(Math.abs(r / flat - 1)).toBeLessThan(1e-4);
   });
 
+  it("tends to the flat-wall formula for walls much thinner than the radius", () => {
+    // thin wall: curvature error ≈ t/b; flat plate with the field on one face (Ramo et al. 1994 ch. 5; Dowell's one-layer factor)
+    for (const frac of [1e-4, 1e-6, 1e-8]) {
+      for (const u of [0.01, 0.5, 2]) {
+        const b = 5e-3;
+        const t = frac * b;
+        const delta = t / u;
+        const f = rho / (Math.PI * MU0 * delta * delta);
+        const rdc = rho / (Math.PI * (b * b - (b - t) ** 2));
+        const flat = u * ((Math.sinh(2 * u) + Math.sin(2 * u)) / (Math.cosh(2 * u) - Math.cos(2 * u)));
+        const r = tubeAcResistance({ outerDiameter: 2 * b, wallThickness: t, frequency: f, resistivity: rho }) / rdc;
+        expect(Math.abs(r / flat - 1)).toBeLessThan(Math.max(2 * frac, 1e-7));
+      }
+    }
+  });
+
   it("prints the TSDoc example value", () => {
     expect(tubeAcResistance({ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: rho }).toPrecision(2)).toBe("0.0020");
   });
