@@ -7,7 +7,7 @@ import { InputError, requireObject, requirePositive, requireFinite } from "../co
 import type { FluxWaveform } from "./waveform-types.js";
 
 /**
- * Options of {@link fluxDensityFromVoltSeconds}.
+ * Options of {@link fluxDensityFromVoltSeconds} with a volt-second product.
  *
  * @category Core loss
  */
@@ -21,18 +21,22 @@ export interface VoltSecondsOptions {
 }
 
 /**
- * Change of flux density produced by a volt-second product (Faraday's law):
+ * Flux-density swing from volt-seconds (Faraday's law), given either the volt-second product
+ * λ or a piecewise-constant winding voltage over one period (see
+ * {@link VoltageWaveformOptions}):
  * $$
- * \Delta B = \frac{\lambda}{N A_e}
+ * \Delta B = \frac{\lambda}{N A_e}, \qquad
+ * \Delta B = \max_t B(t) - \min_t B(t),\ B(t) = \frac{1}{N A_e}\int_0^t v\, d\tau
  * $$
- * For a symmetric waveform this is the peak-to-peak swing; the peak is half of it.
+ * For a symmetric waveform this is the peak-to-peak swing; the peak is half of it. For the
+ * whole waveform (to feed {@link igseLoss}) use {@link fluxWaveformFromVoltage}.
  *
  * Hard domain (throws {@link InputError}): λ < 0 or non-finite; N or $A_e$ not finite and
- * > 0. Accuracy: exact (≤ 1e-15 relative). Validity: uniform flux over $A_e$ (fringing and
- * leakage ignored).
+ * > 0; a voltage waveform rejected by {@link fluxWaveformFromVoltage}. Accuracy: exact
+ * (≤ 1e-15 relative). Validity: uniform flux over $A_e$ (fringing and leakage ignored).
  *
- * @param options - volt-seconds [V·s], turns, core area [m²]
- * @returns flux-density change [T]
+ * @param options - volt-seconds [V·s] or a voltage waveform (times [s], voltages [V]), turns, core area [m²]
+ * @returns flux-density swing [T]
  * @throws {@link InputError} on bad input
  * @see Faraday's law of induction, $v = N A_e\, dB/dt$.
  * @example
@@ -40,13 +44,26 @@ export interface VoltSecondsOptions {
  * import { fluxDensityFromVoltSeconds } from "fluxwright";
  * // 48 V for 5 µs on 6 turns, 1 cm² core
  * console.log(fluxDensityFromVoltSeconds({ voltSeconds: 48 * 5e-6, turns: 6, coreArea: 1e-4 })); // ≈ 0.4
+ * // the same from the voltage of a 100 kHz square wave, ±48 V
+ * const swing = fluxDensityFromVoltSeconds({ time: [0, 5e-6, 10e-6], voltage: [48, -48], turns: 6, coreArea: 1e-4 });
+ * console.log(swing); // ≈ 0.4
  * ```
  * @category Core loss
  */
-export function fluxDensityFromVoltSeconds(options: VoltSecondsOptions): number {
+export function fluxDensityFromVoltSeconds(options: VoltSecondsOptions | VoltageWaveformOptions): number {
   const where = "fluxDensityFromVoltSeconds";
   requireObject(where, "options", options);
-  const lambda = options.voltSeconds;
+  if (!("voltSeconds" in options) && "voltage" in options) {
+    const w = fluxWaveformFromVoltage(options);
+    let max = -Infinity;
+    let min = Infinity;
+    for (const b of w.fluxDensity) {
+      if (b > max) max = b;
+      if (b < min) min = b;
+    }
+    return max - min;
+  }
+  const lambda = (options).voltSeconds;
   if (typeof lambda !== "number" || !(lambda >= 0) || lambda === Infinity) {
     throw new InputError(where, "voltSeconds", lambda, "V·s", "a finite number ≥ 0");
   }

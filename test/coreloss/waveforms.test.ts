@@ -45,6 +45,13 @@ describe("flux density from volt-seconds", () => {
     expect(fluxDensityFromVoltSeconds({ voltSeconds: 2.4e-4, turns: 6, coreArea: 1e-4 })).toBeCloseTo(0.4, 14);
     expect(() => fluxDensityFromVoltSeconds({ voltSeconds: -1, turns: 6, coreArea: 1e-4 })).toThrow(InputError);
     expect(() => fluxDensityFromVoltSeconds({ voltSeconds: 1, turns: 0, coreArea: 1e-4 })).toThrow(/turns/);
+    expect(() => fluxDensityFromVoltSeconds({} as never)).toThrow(/voltSeconds/);
+  });
+
+  it("fluxDensityFromVoltSeconds accepts a voltage waveform and returns the swing of its integral (Faraday's law)", () => {
+    const swing = fluxDensityFromVoltSeconds({ time: [0, 3e-6, 5e-6, 8e-6, 10e-6], voltage: [40, 0, -40, 0], turns: 5, coreArea: 2e-4 });
+    expect(swing).toBeCloseTo((40 * 3e-6) / (5 * 2e-4), 14);
+    expect(() => fluxDensityFromVoltSeconds({ time: [0, 1e-6, 2e-6], voltage: [10, -9], turns: 1, coreArea: 1e-4 })).toThrow(/balanced/);
   });
 
   it("sinusoidalPeakFluxDensity is V/(4.44 f N A) within the rounding of 4.44 (transformer equation, common practice)", () => {
