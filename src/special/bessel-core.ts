@@ -144,7 +144,7 @@ function continuedFractionRegion(zr: number, zi: number, r: number): ScaledBesse
   // ---- CF2 (Steed): e^{z}K0(z) and e^{z}K1(z), here for ν = 0.
   // b = 2(1 + z)
   let br = 2 * (1 + zr);
-  let bi = 2 * zi;
+  const bi = 2 * zi;
   // d = 1/b
   let den = br * br + bi * bi;
   let dr = br / den;
@@ -233,7 +233,7 @@ function continuedFractionRegion(zr: number, zi: number, r: number): ScaledBesse
     const bki = 2 * k * invi;
     // D = 1/(b + D)
     let xr = bkr + Dr;
-    let xi = bki + Di;
+    const xi = bki + Di;
     if (xr === 0 && xi === 0) xr = TINY;
     let xd = xr * xr + xi * xi;
     Dr = xr / xd;

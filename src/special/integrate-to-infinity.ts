@@ -135,8 +135,8 @@ export function integrateToInfinity(
   let sameSign = 0;
   let geometric = false;
   let oscillating = false; // f has changed sign inside some interval
-  let positiveSeen = false;
-  let negativeSeen = false;
+  let positiveSeen: boolean;
+  let negativeSeen: boolean;
   const watched = (t: number): number => {
     const v = f(t);
     if (v > 0) positiveSeen = true;

@@ -35,7 +35,7 @@ function worst(name: string, fn: (z: Complex) => Complex, floor: (r: Row) => num
   for (const r of rows) {
     const ref = r[name];
     if (ref === undefined) continue;
-    w = Math.max(w, err(fn(complex(r.z[0]!, r.z[1]!)), ref, floor(r)));
+    w = Math.max(w, err(fn(complex(r.z[0]!, r.z[1] ?? NaN)), ref, floor(r)));
   }
   return w;
 }
