@@ -29,10 +29,14 @@ export interface CapacitorBankOptions {
   readonly frequency: number;
   /** Standard series of unit values: `"E12"`, `"E24"`, `"E96"`, or an array of mantissas in [1, 10) such as {@link E24}. */
   readonly series: "E12" | "E24" | "E96" | readonly number[];
-  /** RMS voltage rating of one unit at the operating frequency [V], > 0. */
-  readonly unitVoltageRmsRating: number;
-  /** RMS current rating of one unit at the operating frequency [A], > 0. */
-  readonly unitCurrentRmsRating: number;
+  /**
+   * RMS voltage rating of one unit at the operating frequency [V], > 0. Optional: without it no
+   * voltage limit is applied (one unit per string unless the tolerance needs more); check
+   * `unitVoltageRms` of the result against the part you buy.
+   */
+  readonly unitVoltageRmsRating?: number;
+  /** RMS current rating of one unit at the operating frequency [A], > 0. Optional, as the voltage rating. */
+  readonly unitCurrentRmsRating?: number;
   /** Optional reactive-power rating of one unit [var], > 0. */
   readonly unitReactivePowerRating?: number;
   /** Accepted relative capacitance error, in (0, 0.5] (default 0.05). */
@@ -161,8 +165,10 @@ export function capacitorBank(options: CapacitorBankOptions): CapacitorBank {
   const current = requirePositive(where, "currentRms", options.currentRms, "A");
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
   const mantissas = resolveSeries(where, options.series);
-  const unitV = requirePositive(where, "unitVoltageRmsRating", options.unitVoltageRmsRating, "V");
-  const unitI = requirePositive(where, "unitCurrentRmsRating", options.unitCurrentRmsRating, "A");
+  const unitV =
+    options.unitVoltageRmsRating === undefined ? Infinity : requirePositive(where, "unitVoltageRmsRating", options.unitVoltageRmsRating, "V");
+  const unitI =
+    options.unitCurrentRmsRating === undefined ? Infinity : requirePositive(where, "unitCurrentRmsRating", options.unitCurrentRmsRating, "A");
   const unitQ =
     options.unitReactivePowerRating === undefined
       ? Infinity

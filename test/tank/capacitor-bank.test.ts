@@ -69,3 +69,13 @@ describe("capacitorBank", () => {
     expect(() => capacitorBank({ ...base, unitVoltageRmsRating: 1 })).toThrow(/maxUnits/);
   });
 });
+
+describe("capacitorBank without unit ratings", () => {
+  it("applies no rating limit and reports the per-unit stresses to check against a part", () => {
+    const bank = capacitorBank({ capacitance: 4.7e-6, voltageRms: 300, currentRms: 350, frequency: 40e3, series: "E24" });
+    expect(bank.unitCount).toBe(1); // 4.7 µF is an E24 value
+    expect(bank.unitCapacitance).toBe(4.7e-6);
+    expect(bank.capacitanceError).toBeCloseTo(0, 12);
+    expect(bank.unitVoltageRms).toBe(300);
+  });
+});
