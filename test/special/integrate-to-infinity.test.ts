@@ -1,5 +1,5 @@
 import { describe, it, expect } from "vitest";
-import { integrateToInfinity, InputError } from "../../src/index.js";
+import { integrateToInfinity, besselJ0, InputError } from "../../src/index.js";
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 // The default relative tolerance of integrateToInfinity; the TSDoc states the same bound.
@@ -34,6 +34,17 @@ describe("integrateToInfinity (interval-by-interval Gauss–Kronrod with Wynn ε
   it("∫₀^∞ cos x /(1 + x²) dx = π/(2e) (closed form, Fourier transform of the Lorentzian)", () => {
     const r = integrateToInfinity((x) => Math.cos(x) / (1 + x * x), 0);
     expect(rel(r.value, Math.PI / (2 * Math.E))).toBeLessThan(TOL);
+  });
+
+  it("∫₀^∞ J₀(x) dx = 1, an oscillatory integrand decaying only as x^(−1/2) (closed form, DLMF §10.22, from memory)", () => {
+    const r = integrateToInfinity(besselJ0, 0, { intervalLength: Math.PI });
+    expect(rel(r.value, 1)).toBeLessThan(TOL);
+    expect(r.converged).toBe(true);
+  });
+
+  it("reports converged: false when the intervals are far too short for the integrand's scale", () => {
+    const r = integrateToInfinity((x) => Math.sin(0.001 * x) / (1 + 0.001 * x), 0, { intervalLength: 1, maxIntervals: 50 });
+    expect(r.converged).toBe(false);
   });
 
   it("returns converged: false for a non-finite integrand", () => {
