@@ -22,7 +22,12 @@ import type { ExposurePopulation } from "./exposure.js";
  * ```
  * @category Cautions
  */
-export const EXTRA_LOW_VOLTAGE_LIMITS: { readonly acRms: 50; readonly rippleFreeDc: 120 } = Object.freeze({
+export const EXTRA_LOW_VOLTAGE_LIMITS: {
+  /** AC limit, RMS [V]. */
+  readonly acRms: 50;
+  /** Ripple-free DC limit [V]. */
+  readonly rippleFreeDc: 120;
+} = Object.freeze({
   acRms: 50,
   rippleFreeDc: 120,
 });

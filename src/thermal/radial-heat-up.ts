@@ -128,7 +128,12 @@ export interface RadialHeatUpResult {
    */
   readonly biotNumber: number;
   /** Accepted and rejected time steps. */
-  readonly steps: { readonly accepted: number; readonly rejected: number };
+  readonly steps: {
+    /** Time steps accepted. */
+    readonly accepted: number;
+    /** Time steps rejected by the error control and retried smaller. */
+    readonly rejected: number;
+  };
   /** Validity notes (grid coarser than the skin layer, material data range). */
   readonly validity: ValidityNote[];
 }
