@@ -109,7 +109,8 @@ export interface LumpedHeatUpResult {
   readonly finalTemperature: number;
   /**
    * Time to reach `targetTemperature` [s]; `null` when no target was given or it is not
-   * reachable (it lies beyond the steady state, or on the wrong side of the start).
+   * reachable (it lies beyond the steady state, or on the wrong side of the start). It is found
+   * even when it lies beyond a given `duration` (the curve then stops before it).
    */
   readonly timeToTarget: number | null;
   /** `true` when a target was given and is reached in finite time; `false` otherwise. */
