@@ -161,6 +161,19 @@ describe("lumpedHeatUp: reachability", () => {
     expect(r.reachable).toBe(false);
   });
 
+  it("reports the time to target even when it lies beyond the simulated duration", () => {
+    const r = lumpedHeatUp({ ...base, targetTemperature: 333.15, duration: 2 });
+    expect(r.duration).toBe(2);
+    expect(r.times[r.times.length - 1]).toBe(2);
+    expect(Math.abs(r.timeToTarget! / closedFormTime(0.05, 490, 10, 0.003, 200, 293.15, 333.15) - 1)).toBeLessThan(1e-9);
+  });
+
+  it("continues past the target to a longer duration", () => {
+    const r = lumpedHeatUp({ ...base, targetTemperature: 333.15, duration: 20 });
+    expect(r.finalTemperature).toBeGreaterThan(333.15);
+    expect(Math.abs(r.temperatureAt(r.timeToTarget!) - 333.15)).toBeLessThan(1e-6);
+  });
+
   it("a target equal to the start takes zero time", () => {
     const r = lumpedHeatUp({ ...base, targetTemperature: 293.15, duration: 5 });
     expect(r.timeToTarget).toBe(0);
