@@ -324,6 +324,9 @@ export function lccNetwork(options: LccNetworkOptions): TankSeriesConnection {
 
 const MAX_DEPTH = 64;
 
+/** Scratch pair for the impedance kernel; evaluation is synchronous, so one buffer suffices. */
+const SCRATCH = new Float64Array(2);
+
 /** Checks a network's structure and values; throws InputError naming the path of the bad part. */
 function validateNetwork(where: string, path: string, net: unknown, depth: number): void {
   if (depth > MAX_DEPTH) throw new InputError(where, path, net, "", `a network nested at most ${MAX_DEPTH} deep`);
@@ -457,7 +460,7 @@ export function tankImpedance(network: TankLike, frequency: number): Complex {
   const where = "tankImpedance";
   const net = resolveNetwork(where, network);
   const f = requirePositive(where, "frequency", frequency, "Hz");
-  const out = new Float64Array(2);
+  const out = SCRATCH;
   impedanceInto(net, 2 * Math.PI * f, out);
   const re = out[0] as number;
   const im = out[1] as number;
