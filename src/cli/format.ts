@@ -44,7 +44,7 @@ export function duration(seconds: number | null | undefined): string {
 
 /** Display width of a string (code points; the report uses no wide characters). */
 function width(text: string): number {
-  return [...text].length;
+  return Array.from(text).length;
 }
 
 /**

@@ -104,6 +104,5 @@ export function heaterCautions(
     message: `Field exposure checked on the coil axis ${EXPOSURE_DISTANCE * 1000} mm from the coil centre at the largest coil current, against the ICNIRP 2010 general-public reference levels; the part's screening is ignored (conservative).`,
     value: fluxDensityRms,
   });
-  void facts;
   return out;
 }

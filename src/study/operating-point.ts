@@ -341,9 +341,8 @@ export function heaterOperatingPoint(
   let field = 0;
   let coilCurrent = 0;
   let coilVoltagePeak = 0;
-  let iterations = 0;
+  let iterations: number;
   let converged = false;
-  let result: ReturnType<typeof evaluate> | undefined;
 
   // concentrator: Steinmetz loss at the flux the coil voltage drives through its section, as a series resistance
   function evaluateCoreResistance(f: number, current: number, voltagePeak: number): number {
@@ -481,7 +480,7 @@ export function heaterOperatingPoint(
     s = solveInverter(e, false);
   }
   s = solveInverter(e, true);
-  result = e;
+  const result = e;
   const validity: ValidityNote[] = [...result.notes, ...(result.coupling?.validity ?? []), ...s.validity];
   if (!converged) {
     validity.push({ code: "operating-point-not-converged", message: "The frequency/permeability fixed point did not settle to 1e-9 within 60 iterations; numbers are from the last iterate." });

@@ -56,39 +56,81 @@ export interface ResolvedSeriesInverter {
 /** A resolved inverter. @category Heater study */
 export type ResolvedInverter = ResolvedCurrentFedInverter | ResolvedSeriesInverter;
 
+/** A resolved solid round wire. @category Heater study */
+export interface ResolvedSolidConductor {
+  /** Conductor type tag. */
+  readonly kind: "solid";
+  /** Wire diameter [m]. */
+  readonly diameter: number;
+  /** Conductor material. */
+  readonly material: ConductiveMaterial;
+}
+
+/** A resolved litz wire. @category Heater study */
+export interface ResolvedLitzConductor {
+  /** Conductor type tag. */
+  readonly kind: "litz";
+  /** Number of strands. */
+  readonly strands: number;
+  /** Strand diameter [m]. */
+  readonly strandDiameter: number;
+  /** Bundle outer diameter [m]. */
+  readonly outerDiameter: number;
+  /** Conductor material. */
+  readonly material: ConductiveMaterial;
+}
+
+/** A resolved hollow tube. @category Heater study */
+export interface ResolvedTubeConductor {
+  /** Conductor type tag. */
+  readonly kind: "tube";
+  /** Outer diameter [m]. */
+  readonly outerDiameter: number;
+  /** Wall thickness [m]. */
+  readonly wallThickness: number;
+  /** Conductor material. */
+  readonly material: ConductiveMaterial;
+}
+
 /** A resolved conductor. @category Heater study */
-export type ResolvedConductor =
-  | { readonly kind: "solid"; readonly diameter: number; readonly material: ConductiveMaterial }
-  | {
-      readonly kind: "litz";
-      readonly strands: number;
-      readonly strandDiameter: number;
-      readonly outerDiameter: number;
-      readonly material: ConductiveMaterial;
-    }
-  | { readonly kind: "tube"; readonly outerDiameter: number; readonly wallThickness: number; readonly material: ConductiveMaterial };
+export type ResolvedConductor = ResolvedSolidConductor | ResolvedLitzConductor | ResolvedTubeConductor;
+
+/** Fields every resolved coil has. @category Heater study */
+export interface ResolvedCoilCommon {
+  /** Number of turns. */
+  readonly turns: number;
+  /** The conductor. */
+  readonly conductor: ResolvedConductor;
+  /** Lead length [m]. */
+  readonly leadLength: number;
+  /** Conductor working temperature [K]. */
+  readonly temperature: number;
+}
+
+/** A resolved solenoid coil. @category Heater study */
+export interface ResolvedSolenoidCoil extends ResolvedCoilCommon {
+  /** Coil shape tag. */
+  readonly shape: "solenoid";
+  /** Radius to the conductor centres [m]. */
+  readonly radius: number;
+  /** Winding length [m]. */
+  readonly length: number;
+}
+
+/** A resolved pancake coil. @category Heater study */
+export interface ResolvedPancakeCoil extends ResolvedCoilCommon {
+  /** Coil shape tag. */
+  readonly shape: "pancake";
+  /** Radius of the innermost turn's centre [m]. */
+  readonly innerRadius: number;
+  /** Radius of the outermost turn's centre [m]. */
+  readonly outerRadius: number;
+  /** Gap from the conductor face to the part [m]. */
+  readonly liftOff: number;
+}
 
 /** A resolved coil. @category Heater study */
-export type ResolvedCoil =
-  | {
-      readonly shape: "solenoid";
-      readonly radius: number;
-      readonly length: number;
-      readonly turns: number;
-      readonly conductor: ResolvedConductor;
-      readonly leadLength: number;
-      readonly temperature: number;
-    }
-  | {
-      readonly shape: "pancake";
-      readonly innerRadius: number;
-      readonly outerRadius: number;
-      readonly turns: number;
-      readonly liftOff: number;
-      readonly conductor: ResolvedConductor;
-      readonly leadLength: number;
-      readonly temperature: number;
-    };
+export type ResolvedCoil = ResolvedSolenoidCoil | ResolvedPancakeCoil;
 
 /** A resolved capacitor bank. @category Heater study */
 export interface ResolvedCapacitorBank {
@@ -126,14 +168,54 @@ export interface ResolvedPartCommon {
   readonly emissivity: number;
 }
 
+/** A resolved bar. @category Heater study */
+export interface ResolvedBarPart extends ResolvedPartCommon {
+  /** Part shape tag. */
+  readonly shape: "bar";
+  /** Radius [m]. */
+  readonly radius: number;
+  /** Length [m]. */
+  readonly length: number;
+}
+
+/** A resolved tube. @category Heater study */
+export interface ResolvedTubePart extends ResolvedPartCommon {
+  /** Part shape tag. */
+  readonly shape: "tube";
+  /** Outer radius [m]. */
+  readonly outerRadius: number;
+  /** Wall thickness [m]. */
+  readonly wallThickness: number;
+  /** Length [m]. */
+  readonly length: number;
+}
+
+/** A resolved ring. @category Heater study */
+export interface ResolvedRingPart extends ResolvedPartCommon {
+  /** Part shape tag. */
+  readonly shape: "ring";
+  /** Outer radius [m]. */
+  readonly outerRadius: number;
+  /** Inner radius [m]. */
+  readonly innerRadius: number;
+  /** Axial height [m]. */
+  readonly height: number;
+}
+
+/** A resolved plate. @category Heater study */
+export interface ResolvedPlatePart extends ResolvedPartCommon {
+  /** Part shape tag. */
+  readonly shape: "plate";
+  /** Length [m]. */
+  readonly length: number;
+  /** Width [m]. */
+  readonly width: number;
+  /** Thickness [m]. */
+  readonly thickness: number;
+}
+
 /** A resolved part. @category Heater study */
-export type ResolvedPart = ResolvedPartCommon &
-  (
-    | { readonly shape: "bar"; readonly radius: number; readonly length: number }
-    | { readonly shape: "tube"; readonly outerRadius: number; readonly wallThickness: number; readonly length: number }
-    | { readonly shape: "ring"; readonly outerRadius: number; readonly innerRadius: number; readonly height: number }
-    | { readonly shape: "plate"; readonly length: number; readonly width: number; readonly thickness: number }
-  );
+export type ResolvedPart = ResolvedBarPart | ResolvedTubePart | ResolvedRingPart | ResolvedPlatePart;
 
 /** Resolved surroundings. @category Heater study */
 export interface ResolvedEnvironment {

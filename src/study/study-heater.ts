@@ -291,7 +291,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
  *     height: "30 mm", targetTemperature: "120 °C" },
  * }, { heatUp: false, temperatureScan: false, impedanceSweep: false });
- * console.log(study.operating.frequency < study.emptyCoil.frequency); // true
+ * console.log(study.operating.efficiency > 0.7, study.cautions[0]?.code); // true voltage-above-extra-low
  * ```
  * @category Heater study
  */

@@ -106,13 +106,14 @@ export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): Heate
   if (typeof sweep.field !== "string" || !/^[A-Za-z]\w*(\.[A-Za-z]\w*)*$/.test(sweep.field)) {
     throw new InputError(where, "field", sweep.field, "", "a dotted field path such as \"coil.turns\"");
   }
-  if (!Array.isArray(sweep.values) || sweep.values.length === 0) throw new InputError(where, "values", sweep.values, "", "a non-empty array");
-  sweep.values.forEach((v, i) => {
+  const values: readonly QuantityInput[] = sweep.values;
+  if (!Array.isArray(values) || values.length === 0) throw new InputError(where, "values", values, "", "a non-empty array");
+  values.forEach((v, i) => {
     if (typeof v !== "number" && typeof v !== "string") throw new InputError(where, `values[${i}]`, v, "", "a number or a quantity text");
   });
   // the base must be valid (otherwise every row would carry the same problem)
   studyHeater(description, { heatUp: false, temperatureScan: false, impedanceSweep: false });
-  const rows: HeaterSweepRow[] = sweep.values.map((value) => {
+  const rows: HeaterSweepRow[] = values.map((value: QuantityInput): HeaterSweepRow => {
     const variant = setField(description, sweep.field, value);
     try {
       const s = studyHeater(variant, { heatUp: sweep.heatUp !== false, temperatureScan: false, impedanceSweep: false });

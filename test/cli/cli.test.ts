@@ -141,7 +141,7 @@ describe("fluxwright sweep and optimise", () => {
   it("sweep --json parses, and a bad field path exits 2", () => {
     const m = memoryIo({ "race.json": read("study-bearing-race.json") });
     expect(runCli(["sweep", "race.json", "--field", "capacitor.capacitance", "--values", "3.3 µF,4.7 µF", "--no-heat-up", "--json"], m.io)).toBe(0);
-    expect(JSON.parse(m.out()).rows).toHaveLength(2);
+    expect((JSON.parse(m.out()) as { rows: unknown[] }).rows).toHaveLength(2);
     expect(runCli(["sweep", "race.json", "--field", "coil.conductor", "--values", "1"], m.io)).toBe(2);
     expect(runCli(["sweep", "race.json", "--values", "1"], m.io)).toBe(2);
   });

@@ -16,7 +16,7 @@ export function mutate(base: unknown, path: string, value: unknown): Record<stri
   let node = copy;
   for (const k of keys.slice(0, -1)) node = node[k] as Record<string, unknown>;
   const last = keys[keys.length - 1] as string;
-  if (value === undefined) delete node[last];
+  if (value === undefined) Reflect.deleteProperty(node, last);
   else node[last] = value;
   return copy;
 }

@@ -46,7 +46,7 @@ export function checkSchema(root: Schema, value: unknown): string[] {
       const props = (s.properties ?? {}) as Record<string, Schema>;
       for (const r of (s.required ?? []) as string[]) if (!(r in o)) out.push(`${path}.${r}: required`);
       for (const [k, val] of Object.entries(o)) {
-        if (props[k] !== undefined) check(props[k] as Schema, val, `${path}.${k}`, out);
+        if (props[k] !== undefined) check(props[k], val, `${path}.${k}`, out);
         else if (s.additionalProperties === false) out.push(`${path}.${k}: not allowed`);
       }
     }

@@ -242,7 +242,7 @@ describe("studyHeater: input handling", () => {
     expect(a.operating.frequency).toBe(raceStudy.operating.frequency);
   });
   it("never returns NaN or Infinity in its numbers", () => {
-    const text = JSON.stringify([raceStudy, plateStudy], (_, v) => (typeof v === "number" && !Number.isFinite(v) ? "NONFINITE" : v));
+    const text = JSON.stringify([raceStudy, plateStudy], (_, v: unknown) => (typeof v === "number" && !Number.isFinite(v) ? "NONFINITE" : v));
     expect(text).not.toContain("NONFINITE");
   });
 });
