@@ -20,7 +20,7 @@ const duties: number[] = [];
 for (let d = 0.05; d <= 0.951; d += 0.01) duties.push(d);
 
 const svg = lineChart({
-  title: "iGSE loss relative to a sinusoid of the same peak (invented example ferrite, 100 kHz, 0.1 T)",
+  title: "iGSE loss vs a sinusoid of equal peak (invented ferrite)",
   xLabel: "duty cycle D",
   yLabel: "loss / sinusoidal loss",
   series: [
