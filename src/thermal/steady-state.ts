@@ -42,8 +42,9 @@ export interface SteadyStateTemperatureOptions {
  * $$ P(T) = h A\,(T - T_a) + \varepsilon \sigma A\,(T^4 - T_a^4) . $$
  *
  * For a constant power the right side rises strictly with $T$, so the root is unique and lies in
- * the bracket $[T_a,\ \min(T_a + P/(hA),\ (T_a^4 + P/(\varepsilon\sigma A))^{1/4})]$; it is found by a
- * safeguarded regula falsi (Illinois, with bisection) to a few ulp. With `powerAt(T)` the
+ * the bracket $[T_a,\ \min(T_a + P/(hA),\ (T_a^4 + P/(\varepsilon\sigma A))^{1/4})]$; since the net heat
+ * is decreasing and concave in $T$, Newton's method started at the upper end descends
+ * monotonically onto it (to a few ulp), with a bracketed regula falsi as fallback. With `powerAt(T)` the
  * equilibrium reached from `initialTemperature` is bracketed by a scan in steps of at most 2 K
  * (below 5000 K), then refined the same way: an equilibrium narrower than the scan step (power
  * rising and falling back within 2 K) can be missed.
@@ -121,9 +122,21 @@ export function findEquilibrium(
     if (convection > 0) upper = ambient + p / (convection * area);
     if (emissivity > 0) upper = Math.min(upper, Math.pow(ambient ** 4 + p / (emissivity * STEFAN_BOLTZMANN * area), 0.25));
     if (convection === 0 || emissivity === 0) return upper; // a single mechanism: closed form
-    const atUpper = net(upper);
-    if (atUpper >= 0) return upper; // the other mechanism is negligible at this temperature
-    return bracketedRoot(net, ambient, upper, net(ambient), atUpper, 1e-13 * upper);
+    // net(T) is decreasing and concave, so Newton's method from the upper bound descends
+    // monotonically onto the root (each tangent lies above the curve): quadratic and safe.
+    const hA = convection * area;
+    const sigmaA = emissivity * STEFAN_BOLTZMANN * area;
+    let t = upper;
+    for (let iteration = 0; iteration < 100; iteration++) {
+      const value = net(t);
+      if (value >= 0) return t;
+      const slope = -hA - 4 * sigmaA * t * t * t;
+      const next = t - value / slope;
+      if (!(next < t) || next < ambient) break;
+      if (t - next <= 4 * Number.EPSILON * t) return next;
+      t = next;
+    }
+    return bracketedRoot(net, ambient, t, net(ambient), net(t), 1e-13 * t);
   }
   const n0 = net(start);
   if (n0 === 0) return start;
