@@ -221,7 +221,8 @@ function nearFieldRemainder(ra: number, rb: number, x: number, d2: number, c0: n
 /** Density of the axial offset of two uniform windings (trapezoid), at offset x from the centre distance d. */
 function trapezoidWeight(x: number, d: number, inner: number, outer: number, big: number, small: number): number {
   const as = Math.abs(x - d);
-  return as <= inner ? 1 / big : (outer - as) / (big * small);
+  if (small === 0 || as <= inner) return 1 / big;
+  return Math.max(0, outer - as) / (big * small);
 }
 
 /**
@@ -369,7 +370,7 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  * Maxwell's formula). Cost: a loop or spiral pair is a finite sum (µs); a solenoid adds a 1-D
  * integral; a multilayer coil adds one radial integral each (up to tens of ms for two multilayer coils).
  * @see J. C. Maxwell, A Treatise on Electricity and Magnetism (1873), vol. 2, art. 701;
- *   F. W. Grover, Inductance Calculations (1946), ch. 13–16 (coaxial coils).
+ *   F. W. Grover, Inductance Calculations (1946), ch. 11, 12 and 15 (coaxial filaments and coils).
  * @example
  * ```ts
  * import { coaxialCoilMutualInductance } from "fluxwright";
@@ -379,7 +380,7 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  *   { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 },
  *   0.015,
  * );
- * console.log(m.toExponential(4)); // ≈ 4.316e-6
+ * console.log(m.toExponential(4)); // ≈ 1.4050e-6
  * ```
  * @category Inductance
  */
@@ -406,7 +407,7 @@ export function coaxialCoilMutualInductance(coilA: CoaxialCoil, coilB: CoaxialCo
  * @throws {@link InputError} for non-finite input, non-positive self-inductances, or
  *   |M| > √(L₁L₂) (beyond a relative rounding allowance of 1e-12), which no pair of real coils has
  * @remarks Exact (one division and a square root).
- * @see F. W. Grover, Inductance Calculations (1946), ch. 1 (coefficient of coupling).
+ * @see F. W. Grover, Inductance Calculations (1946), ch. 1 (general principles).
  * @example
  * ```ts
  * import { couplingCoefficient } from "fluxwright";

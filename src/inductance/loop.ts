@@ -57,15 +57,15 @@ export function loopSelf(a: number, rho: number, surface: boolean): number {
  * the wire cross-section in the fixture generator); surface, O((ρ/a)² ln(a/ρ)), below 3e-3 for
  * ρ/a ≤ 0.1. Validity: thin wire, ρ/a ≲ 0.1; the surface form assumes skin depth ≪ ρ.
  * @see M. Wien, Ann. Phys. 289, 928 (1894); E. B. Rosa & F. W. Grover, "Formulas and tables for the
- *   calculation of mutual and self-inductance", Bull. Bur. Stand. 8 (1912), eqs. (72)–(73);
- *   F. W. Grover, Inductance Calculations (1946), ch. 13.
+ *   calculation of mutual and self-inductance", Bull. Bur. Stand. 8, 1 (1912) (circular ring of
+ *   circular section; equation numbers from memory).
  * @example
  * ```ts
  * import { loopInductance } from "fluxwright";
  * const dc = loopInductance({ loopRadius: 0.05, wireRadius: 0.001 });
  * const hf = loopInductance({ loopRadius: 0.05, wireRadius: 0.001, currentDistribution: "surface" });
- * console.log(dc.toExponential(4)); // ≈ 2.6662e-7
- * console.log(hf.toExponential(4)); // ≈ 2.5088e-7
+ * console.log(dc.toExponential(4)); // ≈ 2.6652e-7
+ * console.log(hf.toExponential(4)); // ≈ 2.5079e-7
  * ```
  * @category Inductance
  */
@@ -114,12 +114,12 @@ export interface LoopMutualInductanceOptions {
  * @remarks Accuracy ≤ 1e-14 relative vs mpmath and the Neumann integral (fixture loop-mutual.json,
  * gaps from 1e-12 to 1e6 radii); tests use 1e-13.
  * @see J. C. Maxwell, A Treatise on Electricity and Magnetism (1873), vol. 2, art. 701;
- *   F. W. Grover, Inductance Calculations (1946), ch. 13, eq. (1); the AGM and Landen's
+ *   F. W. Grover, Inductance Calculations (1946), ch. 11; the AGM and Landen's
  *   transformation: NIST DLMF §19.8.
  * @example
  * ```ts
  * import { loopMutualInductance } from "fluxwright";
- * console.log(loopMutualInductance({ radius1: 0.1, radius2: 0.1, axialDistance: 0.1 }).toExponential(4)); // ≈ 4.5101e-8
+ * console.log(loopMutualInductance({ radius1: 0.1, radius2: 0.1, axialDistance: 0.1 }).toExponential(4)); // ≈ 4.9408e-8
  * ```
  * @category Inductance
  */

@@ -58,7 +58,9 @@ function refine(
   const left = panel(f, a, mid);
   const right = panel(f, mid, b);
   const both = left + right;
-  if (depth >= 40 || Math.abs(both - whole) <= tolerance || !(mid > a && mid < b)) return both;
+  const diff = Math.abs(both - whole);
+  // (a NaN difference stops the refinement: the caller's result is then NaN, never a hang)
+  if (!(diff > tolerance) || diff <= 1e-15 * Math.abs(both) || depth >= 30 || !(mid > a && mid < b)) return both;
   const t = tolerance;
   return refine(f, a, mid, left, t, depth + 1) + refine(f, mid, b, right, t, depth + 1);
 }

@@ -29,7 +29,7 @@ import { rosaB } from "./rosa.js";
  * @throws {@link InputError} when d/l is not a finite number > 0
  * @remarks Accuracy ≤ 1e-13 relative vs mpmath (fixture solenoid.json, d/l from 1e-6 to 1e9).
  * @see H. Nagaoka, "The inductance coefficients of solenoids", J. Coll. Sci. Imp. Univ. Tokyo 27,
- *   art. 6 (1909); F. W. Grover, Inductance Calculations (1946), ch. 16, Table 36.
+ *   art. 6 (1909); F. W. Grover, Inductance Calculations (1946), ch. 16 (tables of Nagaoka's constant).
  * @example
  * ```ts
  * import { nagaokaCoefficient } from "fluxwright";
@@ -90,8 +90,8 @@ export interface SolenoidInductanceOptions {
  * // 20 turns of 1 mm wire at 1.5 mm pitch on a 25 mm radius (billet-heater coil)
  * const sheet = solenoidInductance({ radius: 0.025, length: 0.03, turns: 20 });
  * const wire = solenoidInductance({ radius: 0.025, length: 0.03, turns: 20, wireDiameter: 0.001 });
- * console.log(sheet.toExponential(4)); // ≈ 2.4904e-5
- * console.log(wire.toExponential(4)); // ≈ 2.4870e-5
+ * console.log(sheet.toExponential(4)); // ≈ 1.8742e-5
+ * console.log(wire.toExponential(4)); // ≈ 1.8461e-5
  * ```
  * @category Inductance
  */
@@ -144,14 +144,14 @@ const INCH = 0.0254;
  * @returns self-inductance [H]
  * @throws {@link InputError} for a non-positive or non-finite dimension or turns < 1
  * @remarks Approximation. Against the exact current sheet ({@link solenoidInductance}) its error
- * is within +0.05 % … −1.1 % for length > 0.8 radius (Wheeler stated "about 1 %"), −4 % at
- * length = 0.4 radius, and it grows without bound for flat coils (measured in the tests and
- * tabulated in the guide).
+ * is within 0 … −0.6 % for length > 0.8 radius (Wheeler stated "about 1 %"; the tests assert
+ * |error| ≤ 1 % there), −4 % at length = 0.4 radius and −19 % at 0.1 radius, growing without
+ * bound for flat coils (tabulated in the guide).
  * @see H. A. Wheeler, "Simple inductance formulas for radio coils", Proc. IRE 16(10), 1398–1400 (1928), eq. (1).
  * @example
  * ```ts
  * import { solenoidInductanceWheeler } from "fluxwright";
- * console.log(solenoidInductanceWheeler({ radius: 0.025, length: 0.03, turns: 20 }).toExponential(3)); // ≈ 2.495e-5
+ * console.log(solenoidInductanceWheeler({ radius: 0.025, length: 0.03, turns: 20 }).toExponential(3)); // ≈ 1.875e-5
  * ```
  * @category Inductance
  */

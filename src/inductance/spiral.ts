@@ -65,13 +65,13 @@ function readSpiral(where: string, options: SpiralCoilOptions, needWire: boolean
  * O((d/r)²) curvature terms); the self terms carry the accuracy of {@link loopInductance}. The
  * spiral's pitch is neglected (turns as concentric rings), as in the published methods.
  * Cost: N(N−1)/2 Maxwell evaluations (30 turns: about 10 µs).
- * @see F. W. Grover, Inductance Calculations (1946), ch. 15 (flat spirals as sums of rings).
+ * @see F. W. Grover, Inductance Calculations (1946), ch. 11 (coaxial circular filaments, summed over the turns).
  * @example
  * ```ts
  * import { spiralCoilInductance } from "fluxwright";
  * // pancake warmer coil: 15 turns of 2 mm wire at 3 mm pitch from 20 mm radius
  * const l = spiralCoilInductance({ innerRadius: 0.02, outerRadius: 0.062, turns: 15, wireDiameter: 0.002 });
- * console.log(l.toExponential(4)); // ≈ 1.8848e-5
+ * console.log(l.toExponential(4)); // ≈ 1.7716e-5
  * ```
  * @category Inductance
  */
@@ -133,7 +133,7 @@ function sheetOf(where: string, options: SpiralCoilApproximationOptions): [numbe
  * ```ts
  * import { spiralCoilInductanceWheeler } from "fluxwright";
  * const l = spiralCoilInductanceWheeler({ innerRadius: 0.02, outerRadius: 0.062, turns: 15 });
- * console.log(l.toExponential(3)); // ≈ 1.950e-5
+ * console.log(l.toExponential(3)); // ≈ 1.809e-5
  * ```
  * @category Inductance
  */
@@ -166,7 +166,7 @@ const INCH = 0.0254;
  * ```ts
  * import { spiralCoilInductanceMohan } from "fluxwright";
  * const l = spiralCoilInductanceMohan({ innerRadius: 0.02, outerRadius: 0.062, turns: 15 });
- * console.log(l.toExponential(3)); // ≈ 1.912e-5
+ * console.log(l.toExponential(3)); // ≈ 1.809e-5
  * ```
  * @category Inductance
  */

@@ -1,0 +1,35 @@
+import { describe, it, expect } from "vitest";
+import fc from "fast-check";
+import { multilayerCoilInductance } from "../../src/inductance/index.js";
+
+const logUniform = (lo: number, hi: number) =>
+  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+// each exact evaluation takes tens of milliseconds: fewer runs than elsewhere keep the suite fast
+const opts = { seed: 1, numRuns: 5 };
+
+describe("multilayer properties", () => {
+  it("scaling all lengths by k scales L by k, and L ∝ turns²", () => {
+    fc.assert(
+      fc.property(logUniform(0.005, 0.1), logUniform(0.1, 1), logUniform(0.2, 3), logUniform(0.1, 10), (r1, depth, length, k) => {
+        const g = { innerRadius: r1, outerRadius: r1 * (1 + depth), length: r1 * length, turns: 10 };
+        const l = multilayerCoilInductance(g);
+        const lk = multilayerCoilInductance({ innerRadius: g.innerRadius * k, outerRadius: g.outerRadius * k, length: g.length * k, turns: 10 });
+        expect(Math.abs(lk / (k * l) - 1)).toBeLessThan(1e-8);
+        expect(Math.abs(multilayerCoilInductance({ ...g, turns: 30 }) / (9 * l) - 1)).toBeLessThan(1e-13);
+      }),
+      opts,
+    );
+  });
+
+  it("L rises with radius and falls with length", () => {
+    fc.assert(
+      fc.property(logUniform(0.005, 0.1), logUniform(0.1, 1), logUniform(0.2, 3), (r1, depth, length) => {
+        const g = { innerRadius: r1, outerRadius: r1 * (1 + depth), length: r1 * length, turns: 10 };
+        const l = multilayerCoilInductance(g);
+        expect(multilayerCoilInductance({ ...g, outerRadius: g.outerRadius * 1.01 })).toBeGreaterThan(l);
+        expect(multilayerCoilInductance({ ...g, length: g.length * 1.01 })).toBeLessThan(l);
+      }),
+      opts,
+    );
+  });
+});
