@@ -15,3 +15,4 @@ export * from "./litz.js";
 export * from "./litz-sullivan.js";
 export * from "./tube.js";
 export * from "./work-coil.js";
+export * from "./validity.js";

@@ -69,8 +69,9 @@ function sullivanCoefficient(turns: number, breadth: number, frequency: number, 
  * ```ts
  * import { litzWindingAcRatio } from "fluxwright";
  * // 20 turns of 100 × 0.1 mm litz in a 20 mm window breadth at 100 kHz
- * console.log(litzWindingAcRatio({ strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3,
- *   frequency: 100e3, resistivity: 1.7241e-8 })); // ≈ 1.2695
+ * const options = { strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3,
+ *   frequency: 100e3, resistivity: 1.7241e-8 };
+ * console.log(litzWindingAcRatio(options)); // ≈ 1.2695
  * ```
  * @category Conductors
  */
@@ -133,8 +134,9 @@ export interface OptimalLitzStrandCountOptions {
  * @example
  * ```ts
  * import { optimalLitzStrandCount } from "fluxwright";
- * console.log(optimalLitzStrandCount({ strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3,
- *   frequency: 100e3, resistivity: 1.7241e-8 })); // 193
+ * const options = { strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3,
+ *   frequency: 100e3, resistivity: 1.7241e-8 };
+ * console.log(optimalLitzStrandCount(options)); // 193
  * ```
  * @category Conductors
  */

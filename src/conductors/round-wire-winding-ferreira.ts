@@ -43,8 +43,9 @@ import type { RoundWireWindingOptions } from "./round-wire-winding.js";
  * @example
  * ```ts
  * import { roundWireWindingAcRatioFerreira } from "fluxwright";
- * console.log(roundWireWindingAcRatioFerreira({ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8,
- *   layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 })); // ≈ 13.15
+ * const options = { wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8,
+ *   layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 };
+ * console.log(roundWireWindingAcRatioFerreira(options)); // ≈ 13.15
  * ```
  * @category Conductors
  */

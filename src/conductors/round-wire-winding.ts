@@ -8,6 +8,9 @@ import { InputError, requireInteger, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
 
+/** (π/4)^{3/4}: the equal-area square's side and porosity folded into one factor. */
+const EQUIVALENT_FOIL_FACTOR = Math.pow(Math.PI / 4, 0.75);
+
 /** Options of {@link roundWireWindingAcRatio} and {@link roundWireWindingAcRatioFerreira}. @category Conductors */
 export interface RoundWireWindingOptions {
   /** Diameter of the bare copper of the wire [m], finite and > 0. */
@@ -91,15 +94,16 @@ export function checkWinding(where: string, options: RoundWireWindingOptions): C
  * ```ts
  * import { roundWireWindingAcRatio } from "fluxwright";
  * // 4 layers of 12 turns of 0.5 mm copper across 8 mm, 100 kHz
- * console.log(roundWireWindingAcRatio({ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8,
- *   layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 })); // ≈ 12.543
+ * const options = { wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8,
+ *   layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 };
+ * console.log(roundWireWindingAcRatio(options)); // ≈ 12.543
  * ```
  * @category Conductors
  */
 export function roundWireWindingAcRatio(options: RoundWireWindingOptions): number {
   const w = checkWinding("roundWireWindingAcRatio", options);
   const delta = Math.sqrt(w.resistivity / (Math.PI * w.frequency * MU_0));
-  const penetration = Math.pow(Math.PI / 4, 0.75) * (w.diameter / delta) * Math.sqrt((w.diameter * w.turnsPerLayer) / w.width);
+  const penetration = EQUIVALENT_FOIL_FACTOR * (w.diameter / delta) * Math.sqrt((w.diameter * w.turnsPerLayer) / w.width);
   return dowellFactorKernel(penetration, w.layers);
 }
 

@@ -55,8 +55,9 @@ export interface WorkCoilResistanceOptions {
  * ```ts
  * import { workCoilResistanceCurrentSheet } from "fluxwright";
  * // 8 turns, 60 mm bore, 80 mm long, 75 % copper face, copper at 40 °C, 20 kHz
- * console.log(workCoilResistanceCurrentSheet({ innerDiameter: 0.06, coilLength: 0.08, turns: 8, spaceFactor: 0.75,
- *   frequency: 20e3, resistivity: 1.86e-8 })); // ≈ 0.0077
+ * const options = { innerDiameter: 0.06, coilLength: 0.08, turns: 8, spaceFactor: 0.75,
+ *   frequency: 20e3, resistivity: 1.86e-8 };
+ * console.log(workCoilResistanceCurrentSheet(options)); // ≈ 0.0077
  * ```
  * @category Conductors
  */
