@@ -123,10 +123,9 @@ function seriesRegion(zr: number, zi: number, r: number, withK: boolean): Scaled
   const gr = lr + EULER_GAMMA;
   const k0r = -(gr * i0r - li * i0i) + kr0;
   const k0i = -(gr * i0i + li * i0r) + ki0;
-  // 1/z
-  const inv = 1 / (r * r);
-  const izr = zr * inv;
-  const izi = -zi * inv;
+  // 1/z, divided by r twice so that r² cannot underflow for tiny |z|
+  const izr = zr / r / r;
+  const izi = -zi / r / r;
   const k1r = izr + (lr * i1r - li * i1i) - 0.25 * (zr * kr1 - zi * ki1);
   const k1i = izi + (lr * i1i + li * i1r) - 0.25 * (zr * ki1 + zi * kr1);
   // e^{z} scaling of K

@@ -189,46 +189,52 @@ function kelvinEvaluate(x: number, scaled: boolean): KelvinFunctions {
   } else {
     lo = x * SQRT1_2_LO;
   }
+  // Below a = 1 the rounding of x/√2 moves the result by < 2e-16 relative: no correction.
+  if (a < 1) lo = 0;
   const o = besselIKScaled(a, a, true);
-  // δ = lo(1 + i); 1/z₀ = (1 − i)/(2a)
-  const inv = 0.5 / a;
-  // I0(z) ≈ I0 + δ I1 ; I1(z) ≈ I1 + δ (I0 − I1/z0)   (all e^{−a}-scaled at z0)
-  const i0r = o.i0r + lo * (o.i1r - o.i1i);
-  const i0i = o.i0i + lo * (o.i1r + o.i1i);
-  // I1/z0 = I1 (1 − i) inv
-  const q1r = (o.i1r + o.i1i) * inv;
-  const q1i = (o.i1i - o.i1r) * inv;
-  const d1r = o.i0r - q1r;
-  const d1i = o.i0i - q1i;
-  const i1r = o.i1r + lo * (d1r - d1i);
-  const i1i = o.i1i + lo * (d1r + d1i);
+  // Carry the result from z₀ to z = z₀ + δ, δ = lo(1 + i): I-type functions gain the factor
+  // e^{δ}, K-type ones e^{−δ}, up to a relative O(δ/z) ≲ 1e-16 (their exponential behaviour;
+  // DLMF 10.40). The moduli e^{±lo} cancel in the scaled forms, leaving rotations by ±lo.
+  const cl = lo === 0 ? 1 : Math.cos(lo);
+  const sl = lo === 0 ? 0 : Math.sin(lo);
+  let i0r = o.i0r;
+  let i0i = o.i0i;
+  let i1r = o.i1r;
+  let i1i = o.i1i;
   // K at z0, e^{a}-scaled: e^{−ia}·(e^{z0}K)
   const c = Math.cos(a);
   const s = Math.sin(a);
-  const k0r0 = c * o.k0r + s * o.k0i;
-  const k0i0 = c * o.k0i - s * o.k0r;
-  const k1r0 = c * o.k1r + s * o.k1i;
-  const k1i0 = c * o.k1i - s * o.k1r;
-  // K0(z) ≈ K0 − δ K1 ; K1(z) ≈ K1 − δ (K0 + K1/z0)
-  const k0r = k0r0 - lo * (k1r0 - k1i0);
-  const k0i = k0i0 - lo * (k1r0 + k1i0);
-  const p1r = (k1r0 + k1i0) * inv;
-  const p1i = (k1i0 - k1r0) * inv;
-  const e1r = k0r0 + p1r;
-  const e1i = k0i0 + p1i;
-  const k1r = k1r0 - lo * (e1r - e1i);
-  const k1i = k1i0 - lo * (e1r + e1i);
-  // Scale factors: scaled form removes e^{±(a + lo)}; unscaled restores e^{±a} only.
-  let fi: number;
-  let fk: number;
-  if (scaled) {
-    fi = 1 - lo;
-    fk = 1 + lo;
-  } else {
-    const ea = Math.exp(a);
-    fi = ea;
-    fk = 1 / ea;
-    if (!Number.isFinite(ea)) fk = Math.exp(-a);
+  let k0r = c * o.k0r + s * o.k0i;
+  let k0i = c * o.k0i - s * o.k0r;
+  let k1r = c * o.k1r + s * o.k1i;
+  let k1i = c * o.k1i - s * o.k1r;
+  if (lo !== 0) {
+    let t = cl * i0r - sl * i0i;
+    i0i = cl * i0i + sl * i0r;
+    i0r = t;
+    t = cl * i1r - sl * i1i;
+    i1i = cl * i1i + sl * i1r;
+    i1r = t;
+    t = cl * k0r + sl * k0i;
+    k0i = cl * k0i - sl * k0r;
+    k0r = t;
+    t = cl * k1r + sl * k1i;
+    k1i = cl * k1i - sl * k1r;
+    k1r = t;
+  }
+  // Scale factors: the scaled forms are complete; the plain ones restore e^{±(a + lo)}.
+  let fi = 1;
+  let fk = 1;
+  if (!scaled) {
+    if (a > 710) {
+      // beyond overflow of e^{x/√2}: ber-type ±∞, ker-type 0 (use the scaled forms there)
+      fi = Infinity;
+      fk = 0;
+    } else {
+      const ea = Math.exp(a) * Math.exp(lo);
+      fi = ea;
+      fk = Number.isFinite(ea) ? 1 / ea : Math.exp(-a) * Math.exp(-lo);
+    }
   }
   // e^{iπ/4} = (1 + i)/√2
   return {

@@ -90,4 +90,15 @@ describe("Bessel function invariants", () => {
       { seed: 1, numRuns: 200 },
     );
   });
+
+  it("real Bessel functions and scaled forms are finite for 1e-300 ≤ x ≤ 1e300", () => {
+    fc.assert(
+      fc.property(logX(1e-300, 1e300), (x) =>
+        [besselJ0(x), besselJ1(x), besselY0(x), besselY1(x), besselI0Scaled(x), besselI1Scaled(x), besselK0Scaled(x), besselK1Scaled(x)].every(
+          Number.isFinite,
+        ),
+      ),
+      { seed: 1, numRuns: 200 },
+    );
+  });
 });

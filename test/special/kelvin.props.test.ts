@@ -62,4 +62,14 @@ describe("Kelvin function invariants", () => {
       { seed: 1, numRuns: 200 },
     );
   });
+
+  it("scaled forms are never NaN for 1e-300 ≤ x ≤ 1e300, and finite for x ≥ 1e-150", () => {
+    fc.assert(
+      fc.property(logX(1e-300, 1e300), (x) => {
+        const values = Object.values(kelvinFunctionsScaled(x));
+        return values.every((v) => !Number.isNaN(v)) && (x < 1e-150 || values.every(Number.isFinite));
+      }),
+      { seed: 1, numRuns: 200 },
+    );
+  });
 });
