@@ -5,7 +5,7 @@
 import { readFileSync } from "node:fs";
 
 /** Loads a demo study file from docs/examples. */
-export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json"): Record<string, unknown> {
+export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json"): Record<string, unknown> {
   return JSON.parse(readFileSync(new URL(`../../docs/examples/${name}`, import.meta.url), "utf8")) as Record<string, unknown>;
 }
 
