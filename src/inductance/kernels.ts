@@ -62,7 +62,11 @@ export function maxwellOverMu0(a: number, b: number, z: number): number {
  * $E - 1 = -\sum_{n\ge1}c'_n + K\sum_{n\ge0}2^{n-1}c_n'^2$: every term positive or dominated.
  */
 export function nagaokaKernel(x: number): number {
-  const h = Math.hypot(x, 1);
+  if (x > 1e100) {
+    // short-coil limit, relative error O(k'^2 ln k') < 1e-190
+    return (2 * (Math.log(4 * x) - 0.5)) / (Math.PI * x);
+  }
+  const h = Math.sqrt(x * x + 1);
   const k = x / h;
   const kp = 1 / h;
   if (kp < 1e-100) {

@@ -2,6 +2,7 @@ import { describe, it, expect } from "vitest";
 import { InputError, MU_0, ellipticE, ellipticK } from "../../src/index.js";
 import { loopInductance, loopMutualInductance } from "../../src/inductance/index.js";
 import mutual from "../fixtures/inductance/loop-mutual.json" with { type: "json" };
+import loopSelf from "../fixtures/inductance/loop-self.json" with { type: "json" };
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
@@ -51,6 +52,14 @@ describe("loopInductance", () => {
     const e = (r * r) / (a * a);
     expect(rel(loopInductance({ loopRadius: a, wireRadius: r }), MU_0 * a * ((1 + e / 8) * Math.log((8 * a) / r) + e / 24 - 1.75))).toBeLessThan(1e-15);
     expect(rel(loopInductance({ loopRadius: a, wireRadius: r, currentDistribution: "surface" }), MU_0 * a * (Math.log((8 * a) / r) - 2))).toBeLessThan(1e-15);
+  });
+
+  it("with uniform current matches the double integral over the wire section within 5e-3 (ρ/a)⁴", () => {
+    // fixture from scipy: Maxwell's formula integrated over the cross-section twice (generate.py)
+    for (const c of loopSelf.cases) {
+      const e = c.wireRadius / c.loopRadius;
+      expect(rel(loopInductance({ loopRadius: c.loopRadius, wireRadius: c.wireRadius }), c.inductance)).toBeLessThan(5e-3 * e ** 4 + 1e-12);
+    }
   });
 
   it("differs between uniform and surface current by the internal inductance μ0 a/4 for thin wire", () => {
