@@ -61,7 +61,7 @@ export interface TubeAcResistanceOptions {
  * @returns AC resistance per unit length [Ω/m]
  * @throws {@link InputError} on bad input
  * @see S. A. Schelkunoff, "The electromagnetic theory of coaxial transmission lines and cylindrical shields", Bell Syst. Tech. J. 13, 532–579 (1934) (impedance of a tubular conductor).
- * @see NIST Digital Library of Mathematical Functions, §10.61 (Kelvin functions as I, K of argument x e^{jπ/4}).
+ * @see NIST Digital Library of Mathematical Functions, §10.61 (Kelvin functions as I, K of argument x·exp(jπ/4)).
  * @example
  * ```ts
  * import { tubeAcResistance } from "fluxwright";
