@@ -10,7 +10,7 @@ import { lumpedHeatUp } from "../thermal/index.js";
 import type { LumpedEnergyBalance } from "../thermal/index.js";
 import { heaterCautions } from "./cautions.js";
 import { coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operating-point.js";
-import type { CoilProperties, HeaterOperatingPoint } from "./operating-point.js";
+import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
 
@@ -147,6 +147,20 @@ export interface HeaterStudy {
   readonly operating: HeaterOperatingPoint;
   /** Operating point with the part at its target temperature (`null` when the inverter cannot run there). */
   readonly atTarget: HeaterOperatingPoint | null;
+  /** Operating frequency with the part at its start temperature [Hz] (= `operating.frequency`). */
+  readonly frequency: number;
+  /** Operating frequency with the empty coil [Hz] (= `emptyCoil.frequency`). */
+  readonly frequencyWithoutPart: number;
+  /** Power into the part at its start temperature [W] (= `operating.losses.part`). */
+  readonly partPower: number;
+  /** Power drawn from the supply at the start temperature [W] (= `operating.inputPower`). */
+  readonly inputPower: number;
+  /** Losses by place at the start temperature [W] (= `operating.losses`); they add up to `inputPower`. */
+  readonly losses: HeaterLosses;
+  /** Part power over input power at the start temperature (= `operating.efficiency`). */
+  readonly efficiency: number;
+  /** Time to the target temperature [s] (= `heatUp.timeToTarget`; `null` when not computed or not reached). */
+  readonly timeToTarget: number | null;
   /** Frequency with the cold part minus frequency with the empty coil [Hz]. */
   readonly frequencyShift: number;
   /** Frequency at the target minus frequency at the start [Hz]: the drift during heat-up (`null` without a target point). */
@@ -478,6 +492,13 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
     emptyCoil,
     operating,
     atTarget,
+    frequency: operating.frequency,
+    frequencyWithoutPart: emptyCoil.frequency,
+    partPower: operating.losses.part,
+    inputPower: operating.inputPower,
+    losses: operating.losses,
+    efficiency: operating.efficiency,
+    timeToTarget: heatUp?.timeToTarget ?? null,
     frequencyShift: operating.frequency - emptyCoil.frequency,
     frequencyDrift: atTarget === null ? null : atTarget.frequency - operating.frequency,
     heatUp,

@@ -246,3 +246,16 @@ describe("studyHeater: input handling", () => {
     expect(text).not.toContain("NONFINITE");
   });
 });
+
+describe("studyHeater: headline fields mirror the cold operating point", () => {
+  it("frequency, losses, efficiency and time to target at the top level equal their detailed sources", () => {
+    const s = raceStudy;
+    expect(s.frequency).toBe(s.operating.frequency);
+    expect(s.frequencyWithoutPart).toBe(s.emptyCoil.frequency);
+    expect(s.losses).toEqual(s.operating.losses);
+    expect(s.partPower).toBe(s.operating.losses.part);
+    expect(s.inputPower).toBe(s.operating.inputPower);
+    expect(s.efficiency).toBe(s.operating.efficiency);
+    expect(s.timeToTarget).toBe(s.heatUp?.timeToTarget ?? null);
+  });
+});
