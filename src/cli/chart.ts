@@ -259,7 +259,8 @@ export function linearTicks(min: number, max: number, unit = "", target = 6): { 
 /**
  * Logarithmic ticks covering `[min, max]` (both > 0): every decade labelled, with 2 and 5
  * labelled too when the range spans fewer than three decades, and unlabelled minor ticks at
- * 2…9 × 10ⁿ. The range widens to whole decades (or to 1-2-5 steps when it spans less than one).
+ * 2…9 × 10ⁿ. Across three decades or more the range widens to whole decades; below that it
+ * keeps the data range when two labelled ticks fall inside it, else widens to 1-2-5 steps.
  */
 export function logTicks(min: number, max: number, unit = ""): { ticks: ChartTick[]; min: number; max: number } {
   // clamp to where powers of ten are still normal doubles
@@ -287,8 +288,24 @@ export function logTicks(min: number, max: number, unit = ""): { ticks: ChartTic
     for (const s of steps) if (s * p >= v * (1 - 1e-12)) return s * p;
     return p * 10;
   };
+  // below three decades keep the data range when at least two labelled ticks fall inside it
+  const dataLo = lo;
+  const dataHi = hi;
   lo = floorNice(lo);
   hi = ceilNice(hi);
+  if (decades < 3) {
+    let inside = 0;
+    for (let d = Math.floor(Math.log10(dataLo)); d <= Math.ceil(Math.log10(dataHi)); d++) {
+      for (const m of mantissas) {
+        const v = m * 10 ** d;
+        if (v >= dataLo * (1 - 1e-9) && v <= dataHi * (1 + 1e-9)) inside++;
+      }
+    }
+    if (inside >= 2) {
+      lo = dataLo;
+      hi = dataHi;
+    }
+  }
   const firstDecade = Math.floor(Math.log10(lo) + 1e-12);
   const lastDecade = Math.ceil(Math.log10(hi) - 1e-12);
   const decadeStride = Math.max(1, Math.ceil((lastDecade - firstDecade) / 8));

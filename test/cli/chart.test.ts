@@ -162,6 +162,13 @@ describe("ticks", () => {
     expect(narrow.ticks.filter((t) => t.major).map((t) => t.label)).toEqual(["10 kHz", "20 kHz", "50 kHz"]);
   });
 
+  it("log ticks keep a sub-three-decade data range when two labelled ticks fit inside it", () => {
+    const t = logTicks(1.06e4, 1.07e5, "Hz");
+    expect(t.min).toBe(1.06e4);
+    expect(t.max).toBe(1.07e5);
+    expect(t.ticks.filter((x) => x.major).map((x) => x.label)).toEqual(["20 kHz", "50 kHz", "100 kHz"]);
+  });
+
   it("formats numbers with engineering prefixes", () => {
     expect(formatChartNumber(4.7e-6, "F")).toBe("4.7 µF");
     expect(formatChartNumber(1500, "W")).toBe("1.5 kW");
