@@ -66,7 +66,7 @@ writeFileSync(
   }),
 );
 console.log(`\n| length / mean radius | ${depths.map((c) => `depth ${c} a`).join(" | ")} |\n| ---: | ${depths.map(() => "---:").join(" | ")} |`);
-lengths.forEach((b, i) => console.log(`| ${b} | ${multilayerSeries.map((s) => `${fmt(s.y[i]!)} %`).join(" | ")} |`));
+lengths.forEach((b, i) => { console.log(`| ${b} | ${multilayerSeries.map((s) => `${fmt(s.y[i]!)} %`).join(" | ")} |`); });
 
 // 3. flat spiral: Wheeler and Mohan vs the exact ring sum, over the fill ratio (20 turns,
 //    wire 0.8 of the pitch, outermost turn at 100 mm)
@@ -103,4 +103,4 @@ writeFileSync(
   }),
 );
 console.log("\n| fill ratio | Wheeler | Mohan |\n| ---: | ---: | ---: |");
-fills.forEach((f, i) => console.log(`| ${f} | ${fmt(wheelerSpiral[i]!)} % | ${fmt(mohanSpiral[i]!)} % |`));
+fills.forEach((f, i) => { console.log(`| ${f} | ${fmt(wheelerSpiral[i]!)} % | ${fmt(mohanSpiral[i]!)} % |`); });

@@ -8,9 +8,9 @@ describe("Rosa's corrections", () => {
     for (const c of rosa.cases) {
       if ("turns" in c && c.turns !== undefined) {
         const b = rosaCorrectionB(c.turns);
-        expect(Math.abs(b - (c.rosaB as number))).toBeLessThanOrEqual(1e-12 * Math.max(1e-3, c.rosaB as number));
+        expect(Math.abs(b - (c.rosaB))).toBeLessThanOrEqual(1e-12 * Math.max(1e-3, c.rosaB));
       } else {
-        expect(Math.abs(rosaCorrectionA(c.pitchOverDiameter as number) - (c.rosaA as number))).toBeLessThan(1e-14);
+        expect(Math.abs(rosaCorrectionA(c.pitchOverDiameter) - (c.rosaA))).toBeLessThan(1e-14);
       }
     }
   });
