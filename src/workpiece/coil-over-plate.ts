@@ -377,7 +377,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  * Accuracy: ≤ 1e-6 relative to |ΔZ| and to $L_0$ vs an mpmath evaluation of the same integrals
  * (fixture `test/fixtures/workpiece/plate.json`); $L_0$ matches
  * `multilayerCoilInductance` of the inductance module within the same tolerance. About
- * 0.1 ms per frequency point.
+ * 0.6 ms per frequency point (CPU time, random pancake geometries).
  *
  * @param options - coil, plate and frequency, see {@link CoilOverPlateOptions}
  * @returns the impedance change [Ω], inductance change and air-core inductance [H], and the
@@ -510,7 +510,7 @@ function besselJ1Zeros(n: number): Float64Array {
  * error falls as $b^{-3}$, so the sums at $b$ and $2b$ are combined by Richardson
  * extrapolation, $(8S_{2b} - S_b)/7$. It is an independent discretisation of the same field
  * problem (a series over eigenvalues instead of a quadrature), used to cross-check
- * {@link coilOverPlate}. About 10× slower than {@link coilOverPlate}.
+ * {@link coilOverPlate}. About 20× slower than {@link coilOverPlate}.
  *
  * Hard domain (throws {@link InputError}): as {@link coilOverPlate}, and domainRadius >
  * coil outerRadius when given. Validity: as {@link coilOverPlate}, with the plate and field
