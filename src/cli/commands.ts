@@ -284,7 +284,11 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
   const started = Date.now();
   let result;
   try {
-    result = optimizeHeater(input, goal);
+    result = optimizeHeater(input, goal, {
+      onProgress: (done, total) => {
+        if (total >= 1000) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
+      },
+    });
   } catch (e) {
     if (e instanceof InputError) {
       reportInputError(io, file, e);

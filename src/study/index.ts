@@ -72,5 +72,6 @@ export type {
   HeaterCandidate,
   HeaterRejection,
   HeaterOptimization,
+  HeaterSearchOptions,
 } from "./optimize-heater.js";
 export type { HeaterSummary } from "./summary.js";

@@ -163,6 +163,16 @@ const LIMIT_CHECKS: readonly [keyof HeaterLimits, string, string, (p: HeaterOper
 ];
 
 /**
+ * Options of {@link optimizeHeater} that do not change its result.
+ *
+ * @category Heater study
+ */
+export interface HeaterSearchOptions {
+  /** Called now and then with candidates evaluated so far and the total (for progress displays). */
+  readonly onProgress?: (evaluated: number, total: number) => void;
+}
+
+/**
  * Searches turns, capacitance (IEC 60063 E12/E24 values), conductor and (for a fixed-frequency
  * series inverter) switching frequency for designs that come closest to a target part power or
  * heat-up time while respecting voltage, current and frequency limits. Every candidate is a full
@@ -176,6 +186,7 @@ const LIMIT_CHECKS: readonly [keyof HeaterLimits, string, string, (p: HeaterOper
  *
  * @param description - the base design
  * @param goal - target, limits, search space and how many designs to keep
+ * @param options - `onProgress` callback (optional)
  * @returns the best designs and the rejection counts
  * @throws {@link InputError} when the base description is invalid, the goal has neither or both
  * targets, or a limit or search value is malformed
@@ -196,7 +207,7 @@ const LIMIT_CHECKS: readonly [keyof HeaterLimits, string, string, (p: HeaterOper
  * ```
  * @category Heater study
  */
-export function optimizeHeater(description: unknown, goal: HeaterGoal): HeaterOptimization {
+export function optimizeHeater(description: unknown, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
   const base = readHeaterDescription(description);
   if (typeof goal !== "object" || goal === null) throw new InputError(WHERE, "goal", goal, "", "an object");
   const targetPower = quantity("goal.targetPower", goal.targetPower, "W");
@@ -242,6 +253,15 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal): HeaterOp
   }
   const feasible: Feasible[] = [];
   let evaluated = 0;
+  const total = conductors.length * turnsList.length * frequencies.length * capacitances.length;
+  const progressStep = Math.max(1, Math.floor(total / 20));
+  let nextProgress = progressStep;
+  const progress = (): void => {
+    if (options.onProgress !== undefined && evaluated >= nextProgress) {
+      nextProgress += progressStep;
+      options.onProgress(evaluated, total);
+    }
+  };
   // the heat-up-time estimate: energy to heat the part over the cold part power (losses ignored)
   const cMid = specificHeatAt(base.part.material, (base.part.startTemperature + base.part.targetTemperature) / 2);
   const energyEstimate = (mass: number): number => mass * cMid * (base.part.targetTemperature - base.part.startTemperature);
@@ -261,10 +281,12 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal): HeaterOp
           const rule = e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "").replace(/\s+/g, " ");
           for (let k = 0; k < capacitances.length; k++) reject(`invalid design: ${e.parameter} must be ${rule}`);
           evaluated += capacitances.length;
+          progress();
           continue;
         }
         for (const capacitance of capacitances) {
           evaluated++;
+          progress();
           const variant = { ...coilVariant, capacitor: { ...raw.capacitor, capacitance } } as unknown as HeaterDescription;
           let point: HeaterOperatingPoint;
           try {
