@@ -324,7 +324,8 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
   panel(0, lo);
   let a = w;
   while (a < aMax) {
-    const b = Math.min(a + w, aMax);
+    // beyond aExp only the air-core integrand remains: one oscillation period per panel is enough
+    const b = Math.min(a + (a < aExp ? w : Math.PI / r2), aMax);
     panel(a, b);
     a = b;
   }
