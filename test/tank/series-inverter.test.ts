@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { frequencyForPower, InputError, seriesInverter } from "../../src/index.js";
 import { simulateHalfBridge } from "./simulate.js";
+import fourier from "../fixtures/tank/half-bridge-fourier.json" with { type: "json" };
 
 describe("seriesInverter (first-harmonic approximation)", () => {
   const L = 20e-6;
@@ -25,6 +26,25 @@ describe("seriesInverter (first-harmonic approximation)", () => {
       }
     });
   }
+
+  it("stays within the stated FHA error of the exact Fourier-series steady state (fixture half-bridge-fourier.json)", () => {
+    const { supplyVoltage, inductance, capacitance } = fourier.meta;
+    for (const c of fourier.cases) {
+      const op = seriesInverter({ supplyVoltage, bridge: "half", inductance, capacitance, resistance: c.resistance, switchingFrequency: c.switchingFrequency });
+      expect(Math.abs(op.power / c.power - 1)).toBeLessThanOrEqual(0.01); // fixture, mpmath Fourier sum
+      expect(op.power).toBeLessThanOrEqual(c.power); // FHA leaves out the harmonics' power
+      expect(Math.abs(op.currentRms / c.currentRms - 1)).toBeLessThanOrEqual(0.005); // fixture, mpmath Fourier sum
+    }
+  });
+
+  it("has a simulator that reproduces the exact Fourier-series steady state within 0.1 %", () => {
+    const { supplyVoltage, inductance, capacitance } = fourier.meta;
+    for (const c of fourier.cases.filter((_, k) => k % 3 === 0)) {
+      const sim = simulateHalfBridge({ supplyVoltage, inductance, capacitance, resistance: c.resistance, switchingFrequency: c.switchingFrequency, cycles: Math.ceil(6 * c.qualityFactor) + 15, measureCycles: 4, stepsPerHalfCycle: 200 });
+      expect(Math.abs(sim.power / c.power - 1)).toBeLessThanOrEqual(1e-3); // fixture, mpmath Fourier sum
+      expect(Math.abs(sim.currentRms / c.currentRms - 1)).toBeLessThanOrEqual(1e-3);
+    }
+  });
 
   it("doubles the fundamental (×4 power) for a full bridge, checked by simulation", () => {
     const options = { supplyVoltage: 50, inductance: L, capacitance: C, resistance: z0 / 5, switchingFrequency: 1.1 * f0 };
