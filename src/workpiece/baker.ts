@@ -56,7 +56,7 @@ export interface BakerFunctions {
  * @returns the functions `p` and `q` [-]
  * @throws {@link InputError} when ratio is negative or not finite
  * @see R. M. Baker, "Classical heat-flow problems applied to induction billet heating",
- *   Trans. AIEE 77 (1958, paper 57-1036, 1957) — the P and Q functions; E. J. Davies,
+ *   AIEE paper, 1957 (title and year from memory) — the P and Q functions; E. J. Davies,
  *   *Conduction and Induction Heating*, Peter Peregrinus 1990, ch. 5 (the same functions).
  * @example
  * ```ts

@@ -385,8 +385,9 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  *   terminal impedance without winding resistance [Ω]
  * @throws {@link InputError} for values outside the hard domain
  * @see C. V. Dodd and W. E. Deeds, "Analytical solutions to eddy-current probe-coil problems",
- *   J. Appl. Phys. 39 (1968) 2829–2838, eqs. (33)–(35) (coil above a two-conductor plane) and
- *   the air-core inductance; layered recursion as in their later reports for many layers.
+ *   J. Appl. Phys. 39 (1968) 2829–2838 (coil above a two-conductor plane, and the air-core
+ *   inductance); the many-layer recursion is the same transmission-line form written for any
+ *   number of layers.
  * @example
  * ```ts
  * import { coilOverPlate } from "fluxwright";

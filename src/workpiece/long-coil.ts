@@ -248,7 +248,7 @@ function longCoilResult(
  * @param options - coil, bar, frequency and optional coil resistance, see {@link BarInLongCoilOptions}
  * @returns reflected resistance [Ω], inductance change [H], power per A² [W/A²], efficiency [-] and notes
  * @throws {@link InputError} for values outside the hard domain
- * @see R. M. Baker (1957), "Classical heat-flow problems applied to induction billet heating";
+ * @see R. M. Baker (1957, citation from memory), "Classical heat-flow problems applied to induction billet heating";
  *   E. J. Davies, *Conduction and Induction Heating* (1990), ch. 5 (cylinder in a long coil).
  * @example
  * ```ts
