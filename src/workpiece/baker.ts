@@ -57,7 +57,7 @@ export interface BakerFunctions {
  * @throws {@link InputError} when ratio is negative or not finite
  * @see R. M. Baker, "Classical heat-flow problems applied to induction billet heating",
  *   AIEE paper, 1957 (title and year from memory) — the P and Q functions; E. J. Davies,
- *   *Conduction and Induction Heating*, Peter Peregrinus 1990, ch. 5 (the same functions).
+ *   *Conduction and Induction Heating*, Peter Peregrinus 1990 (the same functions).
  * @example
  * ```ts
  * import { bakerFunctions } from "fluxwright";

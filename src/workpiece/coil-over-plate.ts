@@ -527,7 +527,7 @@ function besselJ1Zeros(n: number): Float64Array {
  * @returns as {@link coilOverPlate}
  * @throws {@link InputError} for values outside the hard domain
  * @see T. P. Theodoulidis and E. E. Kriezis, *Eddy Current Canonical Problems (with
- *   Applications to Nondestructive Evaluation)*, Tech Science Press 2006, ch. 2–3 (truncated
+ *   Applications to Nondestructive Evaluation)*, Tech Science Press 2006 (truncated
  *   region eigenfunction expansion of the coil above a layered half-space).
  * @example
  * ```ts

@@ -34,7 +34,7 @@ export interface CoilEfficiencyOptions {
  * @param options - the two resistances, see {@link CoilEfficiencyOptions}
  * @returns efficiency [-], in [0, 1]
  * @throws {@link InputError} for negative or non-finite resistances, or both zero
- * @see E. J. Davies, *Conduction and Induction Heating* (1990), ch. 5 (coil efficiency);
+ * @see E. J. Davies, *Conduction and Induction Heating* (1990) (coil efficiency);
  *   common practice.
  * @example
  * ```ts
@@ -74,7 +74,7 @@ export interface PowerInPartOptions {
  * @param options - coil current and reflected resistance, see {@link PowerInPartOptions}
  * @returns power in the part [W]
  * @throws {@link InputError} for negative or non-finite inputs
- * @see E. J. Davies, *Conduction and Induction Heating* (1990), ch. 5; common practice.
+ * @see E. J. Davies, *Conduction and Induction Heating* (1990); common practice.
  * @example
  * ```ts
  * import { powerInPart } from "fluxwright";

@@ -249,7 +249,7 @@ function longCoilResult(
  * @returns reflected resistance [Ω], inductance change [H], power per A² [W/A²], efficiency [-] and notes
  * @throws {@link InputError} for values outside the hard domain
  * @see R. M. Baker (1957, citation from memory), "Classical heat-flow problems applied to induction billet heating";
- *   E. J. Davies, *Conduction and Induction Heating* (1990), ch. 5 (cylinder in a long coil).
+ *   E. J. Davies, *Conduction and Induction Heating* (1990) (cylinder in a long coil).
  * @example
  * ```ts
  * import { barInLongCoil } from "fluxwright";
@@ -322,8 +322,8 @@ export function barCoupling(
  * @param options - coil, tube, frequency and optional coil resistance, see {@link TubeInLongCoilOptions}
  * @returns reflected resistance [Ω], inductance change [H], power per A² [W/A²], efficiency [-] and notes
  * @throws {@link InputError} for values outside the hard domain
- * @see R. L. Stoll, *The Analysis of Eddy Currents* (1974), ch. 3 (cylindrical shells in an
- *   axial field); E. J. Davies, *Conduction and Induction Heating* (1990), ch. 5.
+ * @see R. L. Stoll, *The Analysis of Eddy Currents* (1974) (cylindrical shells in an
+ *   axial field); E. J. Davies, *Conduction and Induction Heating* (1990).
  * @example
  * ```ts
  * import { tubeInLongCoil } from "fluxwright";

@@ -117,9 +117,9 @@ export function slabFactors(u: number): { p: number; q: number } {
  * @returns power and reactive power per face [W/m², var/m²], skin depth [m], the factors p, q
  *   and the surface impedance [Ω]
  * @throws {@link InputError} for values outside the hard domain
- * @see R. L. Stoll, *The Analysis of Eddy Currents*, Clarendon Press 1974, ch. 2 (slab in a
+ * @see R. L. Stoll, *The Analysis of Eddy Currents*, Clarendon Press 1974 (slab in a
  *   uniform tangential field); E. J. Davies, *Conduction and Induction Heating*, Peter
- *   Peregrinus 1990, ch. 4 (plane-slab power functions).
+ *   Peregrinus 1990 (plane-slab power functions).
  * @example
  * ```ts
  * import { slabInTangentialField } from "fluxwright";

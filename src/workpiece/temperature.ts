@@ -139,7 +139,7 @@ export interface WorkpieceCouplingAtTemperatureResult {
  * @param options - material, temperature, part with its coil, frequency, see {@link WorkpieceCouplingAtTemperatureOptions}
  * @returns the material values used and the coupling [Ω, H]
  * @throws {@link InputError} for values outside the hard domain
- * @see E. J. Davies, *Conduction and Induction Heating* (1990), ch. 7 (magnetic load above and
+ * @see E. J. Davies, *Conduction and Induction Heating* (1990) (magnetic load above and
  *   below Curie); the materials module for the property sources.
  * @example
  * ```ts
