@@ -125,6 +125,23 @@ export interface LoopMutualInductanceOptions {
  * @category Inductance
  */
 export function loopMutualInductance(options: LoopMutualInductanceOptions): number {
+  // fast path: valid input is checked inline; anything else goes to the checks that throw
+  if (typeof options === "object" && (options as unknown) !== null) {
+    const a = options.radius1;
+    const b = options.radius2;
+    const z = options.axialDistance;
+    if (
+      typeof a === "number" && typeof b === "number" && typeof z === "number" &&
+      a > 0 && a < Infinity && b > 0 && b < Infinity && z >= 0 && z < Infinity && (a !== b || z !== 0)
+    ) {
+      return MU_0 * maxwellOverMu0(a, b, z);
+    }
+  }
+  return loopMutualInductanceChecked(options);
+}
+
+/** The validating path of {@link loopMutualInductance}. */
+function loopMutualInductanceChecked(options: LoopMutualInductanceOptions): number {
   const where = "loopMutualInductance";
   requireObject(where, "options", options);
   const a = requirePositive(where, "radius1", options.radius1, "m");

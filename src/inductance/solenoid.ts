@@ -96,6 +96,21 @@ export interface SolenoidInductanceOptions {
  * @category Inductance
  */
 export function solenoidInductance(options: SolenoidInductanceOptions): number {
+  // fast path for the current sheet: valid input is checked inline
+  if (typeof options === "object" && (options as unknown) !== null && options.wireDiameter === undefined) {
+    const a = options.radius;
+    const l = options.length;
+    const n = options.turns;
+    if (typeof a === "number" && typeof l === "number" && typeof n === "number" && a > 0 && a < Infinity && l > 0 && l < Infinity && n >= 1 && n < Infinity) {
+      const x = (2 * a) / l;
+      return MU_0 * n * n * a * ((Math.PI * x) / 2) * nagaokaKernel(x);
+    }
+  }
+  return solenoidInductanceChecked(options);
+}
+
+/** The validating path of {@link solenoidInductance}. */
+function solenoidInductanceChecked(options: SolenoidInductanceOptions): number {
   const where = "solenoidInductance";
   requireObject(where, "options", options);
   const a = requirePositive(where, "radius", options.radius, "m");
