@@ -6,6 +6,7 @@
  *
  * @packageDocumentation
  */
+import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
 
 /**
  * A quantity as written in a study file: an SI number, or text with a unit that
@@ -88,8 +89,8 @@ export interface SolidConductorDescription {
   readonly kind: "solid";
   /** Wire diameter [m], > 0. */
   readonly diameter: QuantityInput;
-  /** Conductor material id from the materials catalogue (`"copper"`, `"aluminium"`, `"silver"`); default `"copper"`. */
-  readonly material?: string;
+  /** Conductor material id from the materials catalogue (`"copper"`, `"aluminium"`, `"silver"`) or a material set; default `"copper"`. */
+  readonly material?: string | ConductiveMaterial;
 }
 
 /**
@@ -106,8 +107,8 @@ export interface LitzConductorDescription {
   readonly strandDiameter: QuantityInput;
   /** Outer diameter of the bundle [m], > 0; default from a packing factor of 0.5 (common practice). */
   readonly outerDiameter?: QuantityInput;
-  /** Conductor material id; default `"copper"`. */
-  readonly material?: string;
+  /** Conductor material id or a material set; default `"copper"`. */
+  readonly material?: string | ConductiveMaterial;
 }
 
 /**
@@ -122,8 +123,8 @@ export interface TubeConductorDescription {
   readonly outerDiameter: QuantityInput;
   /** Wall thickness [m], > 0 and less than half the outer diameter. */
   readonly wallThickness: QuantityInput;
-  /** Conductor material id; default `"copper"`. */
-  readonly material?: string;
+  /** Conductor material id or a material set; default `"copper"`. */
+  readonly material?: string | ConductiveMaterial;
 }
 
 /**
@@ -210,8 +211,8 @@ export interface HeaterCapacitorBank {
  * @category Heater study
  */
 export interface HeaterConcentrator {
-  /** Core material id: `"inventedExampleFerrite"` or `"inventedExampleIronPowder"` (invented example sets). */
-  readonly material: string;
+  /** Core material id: `"inventedExampleFerrite"` or `"inventedExampleIronPowder"` (invented example sets), or in code a core material set. */
+  readonly material: string | CoreMaterial;
   /** Cross-section the coil's flux passes through [m²], > 0. */
   readonly crossSectionArea: QuantityInput;
   /** Volume of magnetic material [m³], > 0. */
@@ -220,8 +221,8 @@ export interface HeaterConcentrator {
 
 /** Fields shared by every part shape. @category Heater study */
 export interface PartCommon {
-  /** Material id from the materials catalogue (`"lowCarbonSteel"`, `"mediumCarbonSteel"`, `"austeniticStainless"`, …). */
-  readonly material: string;
+  /** Material id from the materials catalogue (`"lowCarbonSteel"`, `"mediumCarbonSteel"`, `"austeniticStainless"`, …), or in code a material set such as the exported `lowCarbonSteel`. */
+  readonly material: string | ConductiveMaterial;
   /** Temperature at the start of heating [K], > 0; default the ambient temperature. */
   readonly startTemperature?: QuantityInput;
   /** Temperature to reach [K], > start temperature. */

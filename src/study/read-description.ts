@@ -366,6 +366,15 @@ class Reader {
   }
 
   material(path: string, value: unknown, allowed: readonly string[]): ConductiveMaterial | undefined {
+    // a material set passed in code (e.g. the exported `lowCarbonSteel`, or one of the caller's own)
+    if (typeof value === "object" && value !== null && !Array.isArray(value)) {
+      const m = value as Partial<ConductiveMaterial>;
+      if (typeof m.id === "string" && typeof m.resistivity20 === "number" && typeof m.density === "number" && typeof m.temperatureRange === "object") {
+        return value as ConductiveMaterial;
+      }
+      this.fail(path, value, "", `a material id (one of ${allowed.map((a) => JSON.stringify(a)).join(", ")}) or a material set of the materials module`);
+      return undefined;
+    }
     const id = this.oneOf(path, value, allowed);
     return id === undefined ? undefined : conductiveMaterials.find((m) => m.id === id);
   }
@@ -603,10 +612,12 @@ export function readHeaterDescription(input: unknown): ResolvedHeaterDescription
   if (top.concentrator !== undefined) {
     const cc = rd.object("concentrator", top.concentrator, ["material", "crossSectionArea", "volume"]);
     if (cc !== undefined) {
-      const id = rd.oneOf("concentrator.material", cc.material, Object.keys(CORE_MATERIALS));
+      const given = cc.material;
+      const isCore = typeof given === "object" && given !== null && typeof (given as Partial<CoreMaterial>).steinmetz === "object";
+      const id = isCore ? ((given as CoreMaterial).name) : rd.oneOf("concentrator.material", given, Object.keys(CORE_MATERIALS));
       const crossSectionArea = rd.quantity("concentrator.crossSectionArea", cc.crossSectionArea, "m²", "positive");
       const volume = rd.quantity("concentrator.volume", cc.volume, "m³", "positive");
-      const material = id === undefined ? undefined : CORE_MATERIALS[id];
+      const material = isCore ? (given as CoreMaterial) : id === undefined ? undefined : CORE_MATERIALS[id];
       if (material !== undefined && id !== undefined) concentrator = { material, materialId: id, crossSectionArea, volume };
     }
     if (coil !== undefined && coil.shape !== "pancake") rd.fail("concentrator", top.concentrator, "", "absent for a solenoid coil (concentrators are modelled behind pancake coils only)");

@@ -1,5 +1,5 @@
 import { describe, it, expect } from "vitest";
-import { HeaterDescriptionError, InputError, readHeaterDescription } from "../../src/index.js";
+import { HeaterDescriptionError, InputError, inventedExampleFerrite, lowCarbonSteel, readHeaterDescription, silver } from "../../src/index.js";
 import { loadExample, MALFORMED, mutate } from "./cases.js";
 
 describe("readHeaterDescription on the demo study files", () => {
@@ -30,6 +30,17 @@ describe("readHeaterDescription on the demo study files", () => {
     const b = readHeaterDescription(numeric);
     expect(b.coil).toEqual(a.coil);
     expect(b.part.targetTemperature).toBeCloseTo(a.part.targetTemperature, 12);
+  });
+
+  it("accepts material sets passed in code in place of ids", () => {
+    let input = mutate(loadExample("study-plate-warmer.json"), "part.material", lowCarbonSteel);
+    input = mutate(input, "coil.conductor.material", silver);
+    input = mutate(input, "concentrator.material", inventedExampleFerrite);
+    const d = readHeaterDescription(input);
+    expect(d.part.material).toEqual(lowCarbonSteel);
+    expect(d.coil.conductor.material).toEqual(silver);
+    expect(d.concentrator?.material).toEqual(inventedExampleFerrite);
+    expect(() => readHeaterDescription(mutate(input, "part.material", { id: "x" }))).toThrow(/part\.material must be a material id/);
   });
 
   it("rejects a non-object description", () => {

@@ -81,6 +81,17 @@ describe("optimizeHeater", () => {
     expect(Math.abs((t.best[0]?.summary.timeToTarget ?? 0) / 60 - 1)).toBeLessThan(0.5);
   });
 
+  it("reports progress through onProgress without changing the result", () => {
+    const seen: [number, number][] = [];
+    const again = optimizeHeater(race, goal, { onProgress: (done, total) => seen.push([done, total]) });
+    expect(seen.length).toBeGreaterThan(0);
+    for (const [done, total] of seen) {
+      expect(total).toBe(r.evaluated);
+      expect(done).toBeLessThanOrEqual(total);
+    }
+    expect(again.best.map((b) => b.score)).toEqual(r.best.map((b) => b.score));
+  });
+
   it("rejects a malformed goal with InputError", () => {
     expect(() => optimizeHeater(race, {})).toThrow(/exactly one of targetPower or targetTime/);
     expect(() => optimizeHeater(race, { targetPower: 100, targetTime: 10 })).toThrow(InputError);
