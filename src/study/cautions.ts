@@ -25,7 +25,7 @@ function ratingCaution(code: string, what: string, value: number, limit: number,
   return {
     code,
     severity: "warning",
-    message: `${what} (${value.toPrecision(3)} ${unit}) exceeds ${limit.toPrecision(3)} ${unit}. ${DEFER_TO_CODES}`,
+    message: `${what} (${value.toPrecision(3)} ${unit}) exceeds ${limit.toPrecision(3)} ${unit}; choose parts rated above it or change the design. ${DEFER_TO_CODES}`,
     value,
     limit,
     unit,
@@ -52,19 +52,24 @@ export function heaterCautions(
   const capI = max((p) => p.capacitorCurrentRms);
   const switchV = max((p) => p.switchVoltagePeak);
   const supplyI = max((p) => p.supplyCurrent);
+  // where the worst value occurs, in words ("with the empty coil", "with the part at 120 °C")
+  const at = (f: (p: HeaterOperatingPoint) => number): string => {
+    const worst = points.reduce((a, p) => (f(p) > f(a) ? p : a));
+    return worst.withPart ? ` with the part at ${(worst.partTemperature - 273.15).toFixed(0)} °C` : " with the empty coil (no part in place)";
+  };
   const cap = d.capacitor;
   if (cap.voltageRatingRms !== null && capV > cap.voltageRatingRms) {
-    out.push(ratingCaution("capacitor-voltage-above-rating", "The capacitor bank's RMS voltage", capV, cap.voltageRatingRms, "V", "the description's capacitor.voltageRatingRms"));
+    out.push(ratingCaution("capacitor-voltage-above-rating", `The capacitor bank's RMS voltage${at((p) => p.capacitorVoltageRms)}`, capV, cap.voltageRatingRms, "V", "the description's capacitor.voltageRatingRms"));
   }
   if (cap.currentRatingRms !== null && capI > cap.currentRatingRms) {
-    out.push(ratingCaution("capacitor-current-above-rating", "The capacitor bank's RMS current", capI, cap.currentRatingRms, "A", "the description's capacitor.currentRatingRms"));
+    out.push(ratingCaution("capacitor-current-above-rating", `The capacitor bank's RMS current${at((p) => p.capacitorCurrentRms)}`, capI, cap.currentRatingRms, "A", "the description's capacitor.currentRatingRms"));
   }
   const rating = d.inverter.switchVoltageRating;
   if (rating !== null && switchV > 0.8 * rating) {
-    out.push(ratingCaution("switch-voltage-above-derated", "The switches' peak off-state voltage", switchV, 0.8 * rating, "V", "80 % of inverter.switchVoltageRating (voltage derating, common practice)"));
+    out.push(ratingCaution("switch-voltage-above-derated", `The switches' peak off-state voltage${at((p) => p.switchVoltagePeak)}`, switchV, 0.8 * rating, "V", "80 % of inverter.switchVoltageRating (voltage derating, common practice)"));
   }
   if (d.supply.currentLimit !== null && supplyI > d.supply.currentLimit) {
-    out.push(ratingCaution("supply-current-above-limit", "The current drawn from the supply", supplyI, d.supply.currentLimit, "A", "the description's supply.currentLimit"));
+    out.push(ratingCaution("supply-current-above-limit", `The current drawn from the supply${at((p) => p.supplyCurrent)}`, supplyI, d.supply.currentLimit, "A", "the description's supply.currentLimit"));
   }
 
   // the safety module's hazard checks on the worst numbers of the study
