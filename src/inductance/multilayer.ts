@@ -55,7 +55,9 @@ function readMultilayer(where: string, options: MultilayerCoilOptions): [number,
  *   or turns < 1
  * @remarks Accuracy ≤ 1e-8 relative vs the Bessel–Struve integral evaluated in mpmath (fixture
  * multilayer.json). Validity: the winding is fine compared with its section (otherwise add
- * round-wire corrections as for a solenoid). Cost: about 1–10 ms.
+ * round-wire corrections as for a solenoid). Cost: about 1–10 ms. Note: at fixed turns, L is not
+ * monotonic in the outer radius — thickening a short, thick winding first lowers L as the current
+ * spreads (e.g. inner 0.1 m, length 0.02 m: a minimum near outer radius 0.1647 m).
  * @see F. W. Grover, Inductance Calculations (1946), ch. 13; T. R. Lyle, Phil. Trans. R. Soc. A 213,
  *   421 (1914) (the Bessel-function form used for the check).
  * @example
