@@ -40,6 +40,10 @@ export interface HeaterLimits {
   readonly minFrequency?: QuantityInput;
   /** Highest operating frequency [Hz]. */
   readonly maxFrequency?: QuantityInput;
+  /** Short form of `tankVoltagePeak` [V] (the smaller applies when both are given). */
+  readonly maxVoltage?: QuantityInput;
+  /** Short form of `coilCurrentRms` [A] (the smaller applies when both are given). */
+  readonly maxCurrent?: QuantityInput;
 }
 
 /**
@@ -151,7 +155,7 @@ function seriesValues(series: readonly number[], min: number, max: number): numb
 }
 
 /** The limit checks: [reason, value of the operating point, limit]. */
-const LIMIT_CHECKS: readonly [keyof HeaterLimits, string, string, (p: HeaterOperatingPoint) => number, "max" | "min"][] = [
+const LIMIT_CHECKS: readonly [Exclude<keyof HeaterLimits, "maxVoltage" | "maxCurrent">, string, string, (p: HeaterOperatingPoint) => number, "max" | "min"][] = [
   ["tankVoltagePeak", "V", "tank voltage above limit", (p) => p.tankVoltagePeak, "max"],
   ["coilCurrentRms", "A", "coil current above limit", (p) => p.coilCurrentRms, "max"],
   ["supplyCurrent", "A", "supply current above limit", (p) => p.supplyCurrent, "max"],
@@ -217,11 +221,27 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
   }
   const keep = goal.keep ?? 5;
   if (!Number.isInteger(keep) || keep < 1 || keep > 50) throw new InputError(WHERE, "goal.keep", keep, "", "an integer in [1, 50]");
+  // unknown keys are typos: reject them rather than ignore a limit the caller meant
+  const known = (path: string, value: object | undefined, keys: readonly string[]): void => {
+    if (value === undefined) return;
+    if (typeof value !== "object" || value === null || Array.isArray(value)) throw new InputError(WHERE, path, value, "", "an object");
+    for (const key of Object.keys(value)) {
+      if (!keys.includes(key)) throw new InputError(WHERE, `${path}.${key}`, (value as Record<string, unknown>)[key], "", `absent (known fields: ${keys.join(", ")})`);
+    }
+  };
+  known("goal", goal, ["targetPower", "targetTime", "limits", "search", "keep"]);
+  known("goal.limits", goal.limits, [...LIMIT_CHECKS.map((c) => c[0]), "maxVoltage", "maxCurrent"]);
+  known("goal.search", goal.search, ["turns", "capacitanceSeries", "minCapacitance", "maxCapacitance", "conductors", "frequencies"]);
   const limits = new Map<string, number>();
   for (const [key, unit] of LIMIT_CHECKS.map((c) => [c[0], c[1]] as const)) {
     const v = quantity(`goal.limits.${key}`, goal.limits?.[key], unit);
     if (v !== null) limits.set(key, v);
   }
+  // short aliases: maxVoltage = tankVoltagePeak, maxCurrent = coilCurrentRms
+  const maxVoltage = quantity("goal.limits.maxVoltage", goal.limits?.maxVoltage, "V");
+  const maxCurrent = quantity("goal.limits.maxCurrent", goal.limits?.maxCurrent, "A");
+  if (maxVoltage !== null) limits.set("tankVoltagePeak", Math.min(maxVoltage, limits.get("tankVoltagePeak") ?? Infinity));
+  if (maxCurrent !== null) limits.set("coilCurrentRms", Math.min(maxCurrent, limits.get("coilCurrentRms") ?? Infinity));
   const search = goal.search ?? {};
   const raw = structuredClone(description) as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
   const turnsList = search.turns ?? Array.from({ length: 2 * base.coil.turns - Math.max(1, Math.round(base.coil.turns / 2)) + 1 }, (_, i) => Math.max(1, Math.round(base.coil.turns / 2)) + i);

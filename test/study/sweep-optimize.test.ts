@@ -98,5 +98,14 @@ describe("optimizeHeater", () => {
     expect(() => optimizeHeater(race, { targetPower: "1 kV" })).toThrow(InputError);
     expect(() => optimizeHeater(race, { targetPower: 100, keep: 0 })).toThrow(/keep/);
     expect(() => optimizeHeater(race, { targetPower: 100, search: { turns: [0] } })).toThrow(/turns\[0\]/);
+    expect(() => optimizeHeater(race, { targetPower: 100, limits: { maxTankVoltag: 100 } as never })).toThrow(/goal\.limits\.maxTankVoltag must be absent/);
+  });
+
+  it("takes maxVoltage and maxCurrent as short forms of the tank-voltage and coil-current limits", () => {
+    const a = optimizeHeater(race, { targetPower: "1.5 kW", limits: { maxVoltage: "146 V", maxCurrent: "120 A" }, search: { turns: [5, 6] } });
+    for (const b of a.best) {
+      expect(b.summary.tankVoltagePeak).toBeLessThanOrEqual(146);
+      expect(b.summary.coilCurrentRms).toBeLessThanOrEqual(120);
+    }
   });
 });
