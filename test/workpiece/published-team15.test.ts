@@ -2,8 +2,9 @@ import { describe, it, expect } from "vitest";
 import { coilOverPlate } from "../../src/index.js";
 
 // Published check: the two air-cored coils of TEAM Workshop Problem 15 ("Rectangular slot in a
-// thick plate", S. K. Burke; Testing Electromagnetic Analysis Methods benchmark series, problems
-// 1 and 2), whose coil data include the MEASURED inductance of the isolated coil.
+// thick plate"; Testing Electromagnetic Analysis Methods benchmark series, problems 1 and 2,
+// contributed by S. K. Burke — author named from memory), whose coil data include the MEASURED
+// inductance of the isolated coil.
 //
 // Provenance of the figures: the problem data as restated in the README of the public
 // repository xfmrexpert/MFEM-ElectroMag, examples/team15/README.md (the primary problem
