@@ -160,7 +160,7 @@ describe("the installed command (a real process)", () => {
   const main = join(root, "src/cli/main.ts");
   it("exits 0 on an example and 2 on a malformed file, writing no report", () => {
     const dir = mkdtempSync(join(tmpdir(), "fluxwright-cli-"));
-    const ok = spawnSync(tsx, [main, "study", join(examplesDir, "study-plate-warmer.json"), "--html", join(dir, "ok.html"), "--quiet"], { encoding: "utf8" });
+    const ok = spawnSync(tsx, [main, "study", join(examplesDir, "study-bearing-race.json"), "--html", join(dir, "ok.html"), "--quiet"], { encoding: "utf8" });
     expect(ok.status, ok.stderr).toBe(0);
     expect(existsSync(join(dir, "ok.html"))).toBe(true);
     const badFile = join(dir, "bad.json");
