@@ -100,6 +100,14 @@ describe("fluxwright study", () => {
     expect(m.err()).toContain("part.thickness");
   });
 
+  it("a valid file whose design cannot run exits 1 with the reason, writing no report", () => {
+    const damped = mutate(mutate(JSON.parse(read("study-bearing-race.json")), "capacitor.capacitance", "10 mF"), "coil.turns", 2);
+    const m = memoryIo({ "damped.json": JSON.stringify(damped) });
+    expect(runCli(["study", "damped.json", "--html", "out.html"], m.io)).toBe(1);
+    expect(m.err()).toContain("the design cannot be studied");
+    expect(m.written.size).toBe(0);
+  });
+
   it("a missing file, invalid JSON, or a wrong argument count exit 2", () => {
     const m = memoryIo({ "broken.json": "{ \"supply\": " });
     expect(runCli(["study", "nope.json"], m.io)).toBe(2);

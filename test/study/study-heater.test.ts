@@ -241,6 +241,11 @@ describe("studyHeater: input handling", () => {
     const a = studyHeater(numeric, { heatUp: false, temperatureScan: false, impedanceSweep: false });
     expect(a.operating.frequency).toBe(raceStudy.operating.frequency);
   });
+  it("a valid description the inverter cannot run (a parallel tank damped past oscillation) throws a clear InputError", () => {
+    const damped = mutate(mutate(race, "capacitor.capacitance", "10 mF"), "coil.turns", 2);
+    expect(() => studyHeater(damped, { heatUp: false, temperatureScan: false, impedanceSweep: false })).toThrow(/a design the inverter can run .*coilResistance must be a finite number < √\(L\/C\)/);
+  });
+
   it("never returns NaN or Infinity in its numbers", () => {
     const text = JSON.stringify([raceStudy, plateStudy], (_, v: unknown) => (typeof v === "number" && !Number.isFinite(v) ? "NONFINITE" : v));
     expect(text).not.toContain("NONFINITE");
