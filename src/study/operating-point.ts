@@ -450,8 +450,7 @@ export function heaterOperatingPoint(
 
   let e = evaluate(frequency, field, coilCurrent, coilVoltagePeak);
   let s = solveInverter(e, false);
-  let previousField = Number.NaN;
-  let previousResidual = Number.NaN;
+  let previous: { g0: number; g1: number; x0: number; x1: number; fScale: number; hScale: number } | null = null;
   for (iterations = 1; iterations < 60; iterations++) {
     const newField = withPart ? surfaceField(d, props, s.coilCurrentRms) : 0;
     const residual = newField - field;
@@ -464,16 +463,35 @@ export function heaterOperatingPoint(
       converged = true;
       break;
     }
-    // next field: a secant step on the residual H_new(H) − H once two iterates exist, else plain substitution
+    // Anderson acceleration (depth 1) of the joint map (f, H) → (f_new, H_new), in relative units;
+    // plain substitution converges linearly and slowly when the coupling depends strongly on f
+    const fScale = frequency;
+    const hScale = Math.max(newField, 1);
+    const g0 = s.frequency / fScale;
+    const g1 = newField / hScale;
+    const r0 = g0 - frequency / fScale;
+    const r1 = g1 - field / hScale;
+    let nextFrequency = s.frequency;
     let nextField = newField;
-    if (Number.isFinite(previousResidual) && residual !== previousResidual) {
-      const secant = field - (residual * (field - previousField)) / (residual - previousResidual);
-      if (secant > 0 && Number.isFinite(secant)) nextField = secant;
+    if (previous !== null) {
+      const d0 = r0 - (previous.g0 - previous.x0) * (previous.fScale / fScale);
+      const d1 = r1 - (previous.g1 - previous.x1) * (previous.hScale / hScale);
+      const dg0 = g0 - previous.g0 * (previous.fScale / fScale);
+      const dg1 = g1 - previous.g1 * (previous.hScale / hScale);
+      const denominator = d0 * d0 + d1 * d1;
+      if (denominator > 0) {
+        const gamma = (r0 * d0 + r1 * d1) / denominator;
+        const candidateFrequency = (g0 - gamma * dg0) * fScale;
+        const candidateField = (g1 - gamma * dg1) * hScale;
+        if (candidateFrequency > 0.8 * s.frequency && candidateFrequency < 1.25 * s.frequency && candidateField >= 0 && Number.isFinite(candidateField)) {
+          nextFrequency = candidateFrequency;
+          nextField = candidateField;
+        }
+      }
     }
-    previousField = field;
-    previousResidual = residual;
+    previous = { g0, g1, x0: frequency / fScale, x1: field / hScale, fScale, hScale };
+    frequency = nextFrequency;
     field = nextField;
-    frequency = s.frequency;
     coilCurrent = s.coilCurrentRms;
     coilVoltagePeak = s.tankVoltagePeak;
     e = evaluate(frequency, field, coilCurrent, coilVoltagePeak);
