@@ -282,9 +282,9 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * 6. cautions (tank and safety modules, plus the description's own ratings) and a validity
  *    list of every approximation used.
  *
- * Accuracy: the composition adds no error of its own beyond the fixed-point tolerance (1e-11
- * in frequency, 1e-9 in surface field) and the linear interpolation of part power on the
- * heat-up grid (16 points plus a dense cluster at the Curie transition by default); the
+ * Accuracy: the composition adds no error of its own beyond the fixed-point tolerance (1e-9
+ * in frequency, 1e-8 in surface field) and the linear interpolation of part power on the
+ * heat-up grid (one point per 50 K, 6 to 16, plus a dense cluster at the Curie transition); the
  * energy balance of each operating point closes to 1e-9 relative (tested). Each module's
  * accuracy and validity apply, and are listed in `validity` where they are stretched.
  *
