@@ -30,6 +30,8 @@ const UNPREFIXED = new Set(["°C", "K"]);
  *   (`toExponential`), so no binary scaling error enters; trailing zeros are dropped.
  * - Zero prints as `0 F`. Beyond the prefixes (|value| ≥ 10³³ or < 10⁻³⁰) the value prints
  *   in scientific notation (`1.5e33 F`).
+ * - Areas and volumes take the prefix of the metre, raised with it: `0.0147` m² prints as
+ *   `14700 mm²` and `6e-4` m² as `600 mm²`; `2e-9` m³ as `2 mm³`.
  * - A mass in kg prints in grams with a prefix (`0.25` kg → `250 g`); kelvin and °C print
  *   without prefix. An empty unit prints the number and prefix alone (`4.7 k`).
  * - {@link parseQuantity} reads every output back: with `digits: 15` the round trip is within
@@ -78,7 +80,10 @@ export function formatQuantity(value: number, unit: string, options?: FormatQuan
   const allDigits = digitsPart.replace(".", "");
 
   const prefixable = !UNPREFIXED.has(printedUnit);
-  const engineering = prefixable ? Math.floor(exponent / 3) * 3 : 0;
+  // Areas and volumes: the prefix is raised with the metre (1 mm² = 10⁻⁶ m²), so the printed
+  // power of ten steps by 6 or 9 and the mantissa lies in [1, 10⁶) or [1, 10⁹).
+  const power = printedUnit === "m²" ? 2 : printedUnit === "m³" ? 3 : 1;
+  const engineering = prefixable ? Math.floor(exponent / (3 * power)) * 3 * power : 0;
   if (engineering > 30 || engineering < -30) {
     // Beyond quetta/quecto: plain scientific notation.
     const m = digitsPart.includes(".") ? digitsPart.replace(/0+$/u, "").replace(/\.$/u, "") : digitsPart;
@@ -95,7 +100,7 @@ export function formatQuantity(value: number, unit: string, options?: FormatQuan
     mantissa = `${allDigits.slice(0, pointAfter)}.${allDigits.slice(pointAfter)}`;
   }
   if (mantissa.includes(".")) mantissa = mantissa.replace(/0+$/u, "").replace(/\.$/u, "");
-  const prefix = engineering === 0 ? "" : (ENGINEERING_PREFIX.get(engineering) ?? "");
+  const prefix = engineering === 0 ? "" : (ENGINEERING_PREFIX.get(engineering / power) ?? "");
   const tail = `${prefix}${printedUnit}`;
   return tail === "" ? `${sign}${mantissa}` : `${sign}${mantissa}${space}${tail}`;
 }

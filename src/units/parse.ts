@@ -35,7 +35,9 @@ const RKM_EXPONENT: Readonly<Record<string, number>> = {
  * written value: `parseQuantity("4.7 µF")` is exactly the double nearest 4.7 × 10⁻⁶.
  *
  * A lone letter that is both a unit and a prefix (`m`, `T`) is read as the unit: `"1 m"` is one
- * metre, not 0.001.
+ * metre, not 0.001. A prefix on an area or volume applies to the metre before it is raised to
+ * the power, as the SI Brochure (§5.4.3) prescribes: `"6 cm²"` is 6 × 10⁻⁴ m², `"2 mm³"` is
+ * 2 × 10⁻⁹ m³.
  *
  * @param text - the quantity as text
  * @param unit - the expected unit symbol (e.g. `"F"`, `"Hz"`, `"Ω"`); when given, a unit
@@ -140,7 +142,8 @@ export function parseQuantity(text: string, unit?: string): number {
   if (expected !== undefined && resultUnit !== "" && resultUnit !== expected) {
     return fail(`a quantity in ${expected} (the text is in ${factorUnit})`);
   }
-  exponent += prefixExponent;
+  // A prefix on a power of the metre is raised to that power: 1 cm² = (10⁻² m)² = 10⁻⁴ m².
+  exponent += prefixExponent * (factorUnit === "m²" ? 2 : factorUnit === "m³" ? 3 : 1);
   const value = Number(`${mantissa}e${exponent}`) + offset;
   if (!Number.isFinite(value)) return fail("a quantity within the double-precision range");
   return value;

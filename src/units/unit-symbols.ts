@@ -23,6 +23,10 @@ export const UNIT_ALIASES: ReadonlyMap<string, string> = new Map([
   ["A/m", "A/m"], ["W/m²", "W/m²"], ["W/m2", "W/m²"], ["W/m³", "W/m³"], ["W/m3", "W/m³"],
   ["rad/s", "rad/s"], ["S/m", "S/m"], ["H/m", "H/m"], ["F/m", "F/m"], ["V/m", "V/m"],
   ["°C", "°C"], ["degC", "°C"], ["℃", "°C"],
+  ["W/(m²·K)", "W/(m²·K)"], ["W/(m2·K)", "W/(m²·K)"], ["W/(m^2·K)", "W/(m²·K)"], ["W/(m2*K)", "W/(m²·K)"],
+  ["W/(m²K)", "W/(m²·K)"], ["W/m2K", "W/(m²·K)"], ["W/(m·K)", "W/(m·K)"], ["W/(m*K)", "W/(m·K)"], ["W/mK", "W/(m·K)"],
+  ["J/(kg·K)", "J/(kg·K)"], ["J/(kg*K)", "J/(kg·K)"], ["J/kgK", "J/(kg·K)"], ["kg/m³", "kg/m³"], ["kg/m3", "kg/m³"],
+  ["V·s", "V·s"], ["Vs", "V·s"], ["A²", "A²"],
 ]);
 
 /** Normalises a unit spelling to its canonical symbol, or returns `undefined` if unknown. */

@@ -38,6 +38,15 @@ describe("formatQuantity", () => {
     expect(formatQuantity(4700, "")).toBe("4.7 k");
   });
 
+  it("prints areas and volumes with the prefix of the metre", () => {
+    expect(formatQuantity(0.0147, "m²")).toBe("14700 mm²");
+    expect(formatQuantity(6e-4, "m²")).toBe("600 mm²");
+    expect(formatQuantity(2.5e-6, "m²")).toBe("2.5 mm²");
+    expect(formatQuantity(2e-9, "m³")).toBe("2 mm³");
+    expect(formatQuantity(1.5, "m²")).toBe("1.5 m²");
+    expect(formatQuantity(3e6, "m²")).toBe("3 km²");
+  });
+
   it("rejects non-finite values and bad digit counts", () => {
     for (const bad of [NaN, Infinity, -Infinity]) expect(() => formatQuantity(bad, "F")).toThrow(InputError);
     for (const digits of [0, 18, 2.5]) expect(() => formatQuantity(1, "F", { digits })).toThrow(InputError);

@@ -46,6 +46,22 @@ describe("parseQuantity", () => {
     expect(parseQuantity("1.7241e-8 Ω·m", "Ω·m")).toBe(1.7241e-8);
   });
 
+  it("raises a prefix with the metre in areas and volumes (SI Brochure §5.4.3)", () => {
+    // SI Brochure, 9th edition, §5.4.3: "1 cm³ = (10⁻² m)³ = 10⁻⁶ m³".
+    expect(parseQuantity("6 cm²", "m²")).toBe(6e-4);
+    expect(parseQuantity("2.5 mm2", "m²")).toBe(2.5e-6);
+    expect(parseQuantity("1 cm³", "m³")).toBe(1e-6);
+    expect(parseQuantity("2 mm³", "m³")).toBe(2e-9);
+    expect(parseQuantity("3 kW/m²", "W/m²")).toBe(3000);
+  });
+
+  it("knows the compound units of heat transfer", () => {
+    expect(parseQuantity("15 W/(m²·K)", "W/(m²·K)")).toBe(15);
+    expect(parseQuantity("50 W/(m·K)", "W/(m·K)")).toBe(50);
+    expect(parseQuantity("460 J/(kg·K)", "J/(kg·K)")).toBe(460);
+    expect(parseQuantity("7850 kg/m³", "kg/m³")).toBe(7850);
+  });
+
   it("converts grams to kilograms and degrees Celsius to kelvin", () => {
     expect(parseQuantity("500 g", "kg")).toBe(0.5);
     expect(parseQuantity("1.2 kg", "kg")).toBe(1.2);

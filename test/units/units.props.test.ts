@@ -7,7 +7,7 @@ const logUniform = (lo: number, hi: number) =>
 
 describe("units properties", () => {
   it("parseQuantity(formatQuantity(x, u, { digits: 15 }), u) round-trips within 1e-14 over 1e-24 … 1e24", () => {
-    const units = ["F", "H", "Hz", "Ω", "V", "A", "W", "m", "T", "J", "s", ""];
+    const units = ["F", "H", "Hz", "Ω", "V", "A", "W", "m", "T", "J", "s", "m²", "m³", "W/m²", ""];
     fc.assert(
       fc.property(logUniform(1e-24, 1e24), fc.boolean(), fc.constantFrom(...units), (x, negative, unit) => {
         const v = negative ? -x : x;
