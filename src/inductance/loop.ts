@@ -55,8 +55,9 @@ export function loopSelf(a: number, rho: number, surface: boolean): number {
  * @remarks Accuracy: uniform, the neglected terms are O((ρ/a)⁴): relative error ≤ 5e-3 (ρ/a)⁴,
  * i.e. 3e-6 at ρ/a = 0.2, 2e-7 at 0.1, 3e-10 at 0.02, against a numerical double integral of
  * Maxwell's formula over the wire cross-section (fixture loop-self.json; the first-order form
- * ln(8a/ρ) − 7/4 alone is off by 2e-3 at ρ/a = 0.1). Surface: O((ρ/a)² ln(a/ρ)), below 3e-3 for
- * ρ/a ≤ 0.1. Validity: thin wire, ρ/a ≲ 0.2; the surface form assumes skin depth ≪ ρ.
+ * ln(8a/ρ) − 7/4 alone is off by 2e-3 at ρ/a = 0.1). Surface: first order, neglected terms
+ * O((ρ/a)² ln(a/ρ)) — about 3e-3 relative at ρ/a = 0.1 judging by the size of the uniform case's
+ * second-order terms (not checked against an exact high-frequency solution). Validity: thin wire, ρ/a ≲ 0.2; the surface form assumes skin depth ≪ ρ.
  * @see M. Wien, Ann. Phys. 289, 928 (1894); E. B. Rosa & F. W. Grover, "Formulas and tables for the
  *   calculation of mutual and self-inductance", Bull. Bur. Stand. 8, 1 (1912) (circular ring of
  *   circular section; equation numbers from memory).

@@ -10,6 +10,7 @@ import {
 } from "../../src/inductance/index.js";
 import mutual from "../fixtures/inductance/loop-mutual.json" with { type: "json" };
 import multilayer from "../fixtures/inductance/multilayer.json" with { type: "json" };
+import coaxial from "../fixtures/inductance/coaxial.json" with { type: "json" };
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
@@ -20,6 +21,15 @@ describe("coaxialCoilMutualInductance", () => {
       if (c.radius1 === c.radius2 && c.axialDistance === 0) continue;
       const m = coaxialCoilMutualInductance({ kind: "loop", radius: c.radius1 }, { kind: "loop", radius: c.radius2 }, c.axialDistance);
       expect(rel(m, c.mutual)).toBeLessThanOrEqual(1e-13);
+    }
+  });
+
+  it("matches the mpmath fixture for separated and nested windings of different kinds to 1e-9", () => {
+    // fixture from mpmath: Maxwell's formula averaged over both windings by nested mpmath.quad (generate.py)
+    expect(coaxial.meta.rtol).toBe(1e-9);
+    for (const c of coaxial.cases) {
+      const m = coaxialCoilMutualInductance(c.coilA as CoaxialCoil, c.coilB as CoaxialCoil, c.axialDistance);
+      expect(rel(m, c.mutual)).toBeLessThanOrEqual(1e-9);
     }
   });
 
