@@ -37,7 +37,7 @@ export function maxwellOverMu0(a: number, b: number, z: number): number {
   let ch = (0.5 * k) / (1 + kp); // c_1 / k
   let w = 1;
   let acc = ch * ch;
-  while (c > 1e-9 * an) {
+  while (c > 1e-4 * an) {
     const a2 = 0.5 * (an + bn);
     bn = Math.sqrt(an * bn);
     const q = 0.25 / a2;
@@ -47,7 +47,11 @@ export function maxwellOverMu0(a: number, b: number, z: number): number {
     w += w;
     acc += w * ch * ch;
   }
-  const agm = an - (0.25 * c * c) / an;
+  // one more step needs no square root: with c_n ≤ 1e-4 a_n, c_{n+1} ≤ 2.5e-9 a and the
+  // terms after it (c_{n+2} ~ 1e-18 a) are below double precision
+  const agm = 0.5 * (an + bn);
+  const chLast = (k * ch * ch * 0.25) / agm;
+  acc += 2 * w * chLast * chLast;
   return ((4 * a * b) / rs) * (HALF_PI / agm) * acc;
 }
 
@@ -82,7 +86,7 @@ export function nagaokaKernel(x: number): number {
   let ch = (0.5 * k) / (1 + kp);
   let w = 1;
   let acc = ch * ch;
-  while (c > 1e-9 * an) {
+  while (c > 1e-4 * an) {
     const a2 = 0.5 * (an + bn);
     bn = Math.sqrt(an * bn);
     const q = 0.25 / a2;
@@ -92,7 +96,11 @@ export function nagaokaKernel(x: number): number {
     w += w;
     acc += w * ch * ch;
   }
-  const bigK = HALF_PI / (an - (0.25 * c * c) / an);
+  // final step without a square root (see maxwellOverMu0)
+  const agmLast = 0.5 * (an + bn);
+  const chLast = (k * ch * ch * 0.25) / agmLast;
+  acc += 2 * w * chLast * chLast;
+  const bigK = HALF_PI / agmLast;
   const kMinusEOverM = bigK * (0.5 + acc);
   let bracket: number;
   if (x <= 1) {
@@ -106,7 +114,7 @@ export function nagaokaKernel(x: number): number {
     let sumC = cp;
     let wp = 1;
     let sumC2 = 0.5 * m1 + cp * cp;
-    while (cp > 1e-17 * ap) {
+    while (cp > 1e-4 * ap) {
       const a2 = 0.5 * (ap + bp);
       bp = Math.sqrt(ap * bp);
       cp = (cp * cp * 0.25) / a2;
@@ -115,6 +123,10 @@ export function nagaokaKernel(x: number): number {
       sumC += cp;
       sumC2 += wp * cp * cp;
     }
+    // final step without a square root
+    const cpLast = (cp * cp * 0.25) / (0.5 * (ap + bp));
+    sumC += cpLast;
+    sumC2 += 2 * wp * cpLast * cpLast;
     const eMinusOne = bigK * sumC2 - sumC;
     bracket = m1 * kMinusEOverM + eMinusOne + m1 / (1 + k);
   }
