@@ -374,7 +374,7 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  * @example
  * ```ts
  * import { coaxialCoilMutualInductance } from "fluxwright";
- * // a pancake transmitter 10 mm below a small solenoid receiver
+ * // a pancake transmitter with a short solenoid receiver whose centre is 15 mm above it
  * const m = coaxialCoilMutualInductance(
  *   { kind: "spiral", innerRadius: 0.01, outerRadius: 0.04, turns: 12 },
  *   { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 },
