@@ -4,7 +4,7 @@ import globals from "globals";
 import tseslint from "typescript-eslint";
 
 export default defineConfig(
-  { ignores: ["dist/**", "docs/api/**", "coverage/**", "node_modules/**", ".scratch/**"] },
+  { ignores: ["dist/**", "docs/api/**", "coverage/**", "node_modules/**", ".scratch/**", "browser-check/**", "notebook-out/**"] },
   js.configs.recommended,
   tseslint.configs.strictTypeChecked,
   {

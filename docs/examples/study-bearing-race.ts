@@ -12,14 +12,14 @@ const file = new URL("./study-bearing-race.json", import.meta.url);
 const study = studyHeater(JSON.parse(readFileSync(file, "utf8")));
 const op = study.operating;
 
-console.log(`${study.title}`);
+console.log(study.title);
 console.log(`  frequency: empty ${formatQuantity(study.emptyCoil.frequency, "Hz")}, with the ring ${formatQuantity(op.frequency, "Hz")}`);
 console.log(`  power into the ring: ${formatQuantity(op.losses.part, "W")} of ${formatQuantity(op.inputPower, "W")} drawn (${(100 * op.efficiency).toFixed(1)} %)`);
 console.log(`  time to ${toCelsius(study.description.part.targetTemperature).toFixed(0)} °C: ${study.heatUp?.timeToTarget?.toFixed(1)} s`);
 console.log(`  cautions: ${study.cautions.map((c) => c.code).join(", ")}`);
 
 // the losses by place add up to what the battery delivers
-const sum = Object.values(op.losses).reduce((a, b) => a + b, 0);
+const sum = (Object.values(op.losses) as number[]).reduce((a, b) => a + b, 0);
 if (Math.abs(sum - op.inputPower) > 1e-9 * op.inputPower) throw new Error(`energy balance off: ${sum} vs ${op.inputPower}`);
 // a few hundred watts to a few kilowatts into a 1 kg ring, above 70 % efficient (common practice)
 if (!(study.part.mass > 0.9 && study.part.mass < 1.1)) throw new Error(`ring mass ${study.part.mass}`);
