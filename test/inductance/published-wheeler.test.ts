@@ -10,7 +10,7 @@ const error = (approximation: number, exact: number): number => approximation / 
 
 // Wheeler's own 1928 wording was not available; the accuracy statements checked here are those
 // quoted from H. Pender & K. McIlwain, Electrical Engineers' Handbook: Communication and
-// Electronics, 3rd ed. (Wiley, 1945), which gives Wheeler's formulas with "accurate to 1 % when
+// Electronics, 3rd ed. (1945), which gives Wheeler's formulas with "accurate to 1 % when
 // the terms in the denominator are about equal" (multilayer) and "within 5 % if c > 0.2a" (flat
 // spiral). Secondary source, page not seen.
 
@@ -30,7 +30,7 @@ describe("Wheeler's multilayer formula against the exact coil (uniform current d
   };
 
   it("is within 1 % when 6a, 9b and 10c are about equal (9b and 10c within ±10 % of 6a)", () => {
-    // Wheeler 1928, eq. (2), as quoted in Pender & McIlwain 1945: "accurate to 1 % when the terms in
+    // Wheeler 1928 (multilayer formula), as quoted in Pender & McIlwain 1945: "accurate to 1 % when the terms in
     // the denominator are about equal". Measured: −0.47 % at equal terms, worst 0.97 % over ±10 %.
     const worst = worstOver(0.1);
     expect(worst).toBeLessThan(0.01);
@@ -51,7 +51,7 @@ describe("Wheeler's flat-spiral formula against the exact ring sum", () => {
   };
 
   it("is within 5 % for c > 0.2a on close-wound spirals of 20 and 40 turns (wire 0.6–0.9 of the pitch)", () => {
-    // Wheeler 1928, eq. (3), as quoted in Pender & McIlwain 1945: "within 5 % if c > 0.2a".
+    // Wheeler 1928 (flat-spiral formula), as quoted in Pender & McIlwain 1945: "within 5 % if c > 0.2a".
     // Wheeler's formula describes a current sheet; the exact sum is a winding of round wire, so the
     // check is made where a winding resembles a sheet (many turns, wire close to the pitch).
     // Measured: worst 3.6 % (40 turns, wire 0.6 pitch, c = 1.85a).
