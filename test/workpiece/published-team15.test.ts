@@ -6,15 +6,15 @@ import { coilOverPlate } from "../../src/index.js";
 // contributed by S. K. Burke — author named from memory), whose coil data include the MEASURED
 // inductance of the isolated coil.
 //
-// Provenance of the figures: the problem data as restated in the README of the public
-// repository xfmrexpert/MFEM-ElectroMag, examples/team15/README.md (the primary problem
-// definition could not be read here). Data used:
+// Provenance of the figures: the problem data as restated in a public write-up of a
+// finite-element solution of the problem (the primary problem definition could not be read
+// here). Data used:
 // - plate: aluminium alloy, σ = 3.06e7 S/m, μr = 1, 12.22 mm thick;
 // - problem 1 coil: inner radius 6.15 mm, outer 12.4 mm, length 6.15 mm, 3790 turns, lift-off
 //   0.88 mm, 900 Hz; isolated inductance 221.8 mH (measured);
 // - problem 2 coil: inner radius 9.34 mm, outer 18.4 mm, length 9.0 mm, 408 turns, lift-off
 //   2.03 mm, 7 kHz; isolated inductance 3.96 mH (measured).
-// The same README reports an independent 3-D finite-element solution (MFEM) of problem 1:
+// The same write-up reports an independent 3-D finite-element solution of problem 1:
 // isolated coil 225.9 mH, coil over the unflawed plate 178.63 mH and 120.67 Ω; it attributes
 // the 1.9 % excess of the computed L0 over the measurement to the nominal dimensions and
 // uniform current density of the model coil — the same idealisation as Dodd & Deeds'.
@@ -51,7 +51,7 @@ describe("coilOverPlate against TEAM Workshop Problem 15 (Burke)", () => {
 
   it("agrees with the independent 3-D FEM solution of problem 1 to 1e-3 (L0, L and R over the unflawed plate)", () => {
     const r = coilOverPlate(problem1);
-    // FEM values printed to 4–5 digits (225.9 mH; 178.63 mH; 120.67 Ω); the README states the FEM
+    // FEM values printed to 4–5 digits (225.9 mH; 178.63 mH; 120.67 Ω); the write-up states the FEM
     // solution converged to 0.1–0.2 % under refinement, hence 1e-3. Measured: L0 +4.0e-4,
     // L +1.4e-4, R −1.6e-4.
     expect(Math.abs(r.airCoreInductance / 225.9e-3 - 1)).toBeLessThan(1e-3);
