@@ -42,6 +42,7 @@ export interface WireDcResistanceOptions {
  * @category Conductors
  */
 export function wireDcResistance(options: WireDcResistanceOptions): number {
+  requireObject("wireDcResistance", "options", options);
   const resistivity = requirePositive("wireDcResistance", "resistivity", options.resistivity, "Ω·m");
   const length = requirePositive("wireDcResistance", "length", options.length, "m");
   const diameter = requirePositive("wireDcResistance", "diameter", options.diameter, "m");
@@ -83,6 +84,7 @@ export interface WireDcResistanceAtOptions {
  * @category Conductors
  */
 export function wireDcResistanceAt(options: WireDcResistanceAtOptions): number {
+  requireObject("wireDcResistanceAt", "options", options);
   const material = requireObject("wireDcResistanceAt", "material", options.material) as unknown as ConductiveMaterial;
   const temperature = requirePositive("wireDcResistanceAt", "temperature", options.temperature, "K");
   const length = requirePositive("wireDcResistanceAt", "length", options.length, "m");

@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { requireInteger, requirePositive } from "../core/index.js";
+import { requireInteger, requireObject, requirePositive } from "../core/index.js";
 
 /** Options of {@link dowellFactor}. @category Conductors */
 export interface DowellFactorOptions {
@@ -61,6 +61,7 @@ export interface DowellFactorOptions {
  * @category Conductors
  */
 export function dowellFactor(options: DowellFactorOptions): number {
+  requireObject("dowellFactor", "options", options);
   const delta = options.penetrationRatio;
   const layers = options.layers;
   if (typeof delta !== "number" || !(delta > 0) || delta === Infinity) {

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { requireInteger, requirePositive } from "../core/index.js";
+import { requireInteger, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 
 /** Options of {@link litzWindingAcRatio}. @category Conductors */
@@ -77,6 +77,7 @@ function sullivanCoefficient(turns: number, breadth: number, frequency: number, 
  */
 export function litzWindingAcRatio(options: LitzWindingAcRatioOptions): number {
   const where = "litzWindingAcRatio";
+  requireObject(where, "options", options);
   const strands = requireInteger(where, "strands", options.strands, 1);
   const d = requirePositive(where, "strandDiameter", options.strandDiameter, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);
@@ -142,6 +143,7 @@ export interface OptimalLitzStrandCountOptions {
  */
 export function optimalLitzStrandCount(options: OptimalLitzStrandCountOptions): number {
   const where = "optimalLitzStrandCount";
+  requireObject(where, "options", options);
   const d = requirePositive(where, "strandDiameter", options.strandDiameter, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);
   const breadth = requirePositive(where, "windowBreadth", options.windowBreadth, "m");

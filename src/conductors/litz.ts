@@ -190,6 +190,7 @@ export interface LitzDcResistanceOptions {
  */
 export function litzDcResistance(options: LitzDcResistanceOptions): number {
   const where = "litzDcResistance";
+  requireObject(where, "options", options);
   const c = checkLitz(where, options.construction);
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const length = requirePositive(where, "length", options.length, "m");
@@ -263,6 +264,7 @@ export interface LitzAcRatioOptions {
  */
 export function litzAcRatio(options: LitzAcRatioOptions): number {
   const where = "litzAcRatio";
+  requireObject(where, "options", options);
   const c = checkLitz(where, options.construction);
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");

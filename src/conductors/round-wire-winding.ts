@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
 
@@ -45,6 +45,7 @@ export interface CheckedWinding {
  * @internal
  */
 export function checkWinding(where: string, options: RoundWireWindingOptions): CheckedWinding {
+  requireObject(where, "options", options);
   const diameter = requirePositive(where, "wireDiameter", options.wireDiameter, "m");
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");

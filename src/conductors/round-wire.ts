@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requirePositive } from "../core/index.js";
+import { InputError, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { wireSkinFactorKernel } from "./round-wire-kernels.js";
 
@@ -55,6 +55,7 @@ export interface RoundWireAcRatioOptions {
  * @category Conductors
  */
 export function roundWireAcRatio(options: RoundWireAcRatioOptions): number {
+  requireObject("roundWireAcRatio", "options", options);
   const diameter = requirePositive("roundWireAcRatio", "diameter", options.diameter, "m");
   const frequency = requirePositive("roundWireAcRatio", "frequency", options.frequency, "Hz");
   const resistivity = requirePositive("roundWireAcRatio", "resistivity", options.resistivity, "Ω·m");
@@ -99,6 +100,7 @@ export interface RoundWireAcRatioSweepOptions {
  */
 export function roundWireAcRatioSweep(options: RoundWireAcRatioSweepOptions, out?: Float64Array): Float64Array {
   const where = "roundWireAcRatioSweep";
+  requireObject(where, "options", options);
   const diameter = requirePositive(where, "diameter", options.diameter, "m");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const mur = options.relativePermeability === undefined ? 1 : requirePositive(where, "relativePermeability", options.relativePermeability, "");

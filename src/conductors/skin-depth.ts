@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { requirePositive } from "../core/index.js";
+import { requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 
 /** Options of {@link skinDepth}. @category Conductors */
@@ -47,6 +47,7 @@ export interface SkinDepthOptions {
  * @category Conductors
  */
 export function skinDepth(options: SkinDepthOptions): number {
+  requireObject("skinDepth", "options", options);
   const resistivity = requirePositive("skinDepth", "resistivity", options.resistivity, "Ω·m");
   const frequency = requirePositive("skinDepth", "frequency", options.frequency, "Hz");
   const mur =

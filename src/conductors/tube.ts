@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requirePositive } from "../core/index.js";
+import { InputError, requireObject, requirePositive } from "../core/index.js";
 import { kelvinFunctionsScaled } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
@@ -72,6 +72,7 @@ export interface TubeAcResistanceOptions {
  */
 export function tubeAcResistance(options: TubeAcResistanceOptions): number {
   const where = "tubeAcResistance";
+  requireObject(where, "options", options);
   const outerDiameter = requirePositive(where, "outerDiameter", options.outerDiameter, "m");
   const wall = requirePositive(where, "wallThickness", options.wallThickness, "m");
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");

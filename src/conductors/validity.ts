@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import type { ValidityNote } from "../core/index.js";
+import { requireObject, type ValidityNote } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import type { RoundWireWindingOptions } from "./round-wire-winding.js";
 import type { LitzWindingAcRatioOptions } from "./litz-sullivan.js";
@@ -42,6 +42,7 @@ function skin(resistivity: number, frequency: number): number {
  * @category Conductors
  */
 export function roundWireWindingValidity(options: RoundWireWindingOptions): ValidityNote[] {
+  requireObject("roundWireWindingValidity", "options", options);
   roundWireWindingAcRatio(options); // validates the inputs
   const notes: ValidityNote[] = [];
   const ratio = options.wireDiameter / skin(options.resistivity, options.frequency);
@@ -90,6 +91,7 @@ export function roundWireWindingValidity(options: RoundWireWindingOptions): Vali
  * @category Conductors
  */
 export function litzWindingValidity(options: LitzWindingAcRatioOptions): ValidityNote[] {
+  requireObject("litzWindingValidity", "options", options);
   litzWindingAcRatio(options); // validates the inputs
   const ratio = options.strandDiameter / skin(options.resistivity, options.frequency);
   if (ratio <= 1) return [];

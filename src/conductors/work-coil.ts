@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { requireInRange, requireInteger, requirePositive } from "../core/index.js";
+import { requireInRange, requireInteger, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 
 /** Options of {@link workCoilResistanceCurrentSheet}. @category Conductors */
@@ -63,6 +63,7 @@ export interface WorkCoilResistanceOptions {
  */
 export function workCoilResistanceCurrentSheet(options: WorkCoilResistanceOptions): number {
   const where = "workCoilResistanceCurrentSheet";
+  requireObject(where, "options", options);
   const diameter = requirePositive(where, "innerDiameter", options.innerDiameter, "m");
   const length = requirePositive(where, "coilLength", options.coilLength, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);

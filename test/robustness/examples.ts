@@ -1,0 +1,679 @@
+/**
+ * One valid call per public function, taken from the function's TSDoc @example, plus what the
+ * robustness suite may accept instead of an InputError, each with its reason.
+ *
+ * A new export from src/index.ts without an entry here fails the suite (public-api.test.ts).
+ */
+import {
+  austeniticStainless,
+  celsius,
+  complex,
+  copper,
+  InputError,
+  lowCarbonSteel,
+  parallelTank,
+  resistorElement,
+  seriesTank,
+  triangularFluxWaveform,
+} from "../../src/index.js";
+import type { BadNumber, BadObject } from "./harness.js";
+
+/** What a function is, for the purpose of the suite. */
+export type ExampleKind =
+  /** Validates its input: all three checks. */
+  | "checked"
+  /** A special-function kernel documented to return NaN outside its domain: valid call only. */
+  | "kernel"
+  /** A zero-cost unit brand (identity at run time, no checks by design): valid call only. */
+  | "brand"
+  /** A class: constructed with `new`, valid call only. */
+  | "class";
+
+/** Bad values that are accepted (no InputError) for some argument paths, with the reason. */
+export interface Allowance {
+  /** Path keys (`0.coil.turns`); a trailing `*` matches a prefix, `*` alone every path. */
+  paths: readonly string[];
+  kinds: readonly (BadNumber | BadObject)[];
+  reason: string;
+}
+
+/** One table entry. */
+export interface Example {
+  /** Fresh valid arguments, from the @example. */
+  args: () => unknown[];
+  kind?: ExampleKind;
+  allow?: readonly Allowance[];
+  /** Result paths (array indices written `[]`) that may hold `null` or ±Infinity, with the reason. */
+  nonFinite?: Readonly<Record<string, string>>;
+  /** Argument paths (prefixes with `*`) not mutated, with the reason. */
+  skip?: { paths: readonly string[]; reason: string };
+  /** Study descriptions take quantities as text: treat quantity strings as numeric leaves. */
+  quantityStrings?: boolean;
+  /** The replacement used for the "string" bad number (default `"1"`, to catch coercion). */
+  badString?: string;
+}
+
+/** Objects passed back into the library (results, data sets): checked as objects, not walked. */
+export const OPAQUE = new Set<object>();
+function opaque<T extends object>(v: T): T {
+  OPAQUE.add(v);
+  return v;
+}
+
+const SERIES_TANK = opaque(seriesTank({ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }));
+const PARALLEL_TANK = opaque(parallelTank({ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }));
+const FLUX = opaque(triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3, dutyCycle: 0.3 }));
+const R1 = opaque(resistorElement(1));
+const R2 = opaque(resistorElement(2));
+const R50 = opaque(resistorElement(50));
+
+const cx = (re: number, im: number): unknown => complex(re, im);
+const SIGNED = "a signed quantity: any finite value is in the domain";
+const OPTIONAL = "optional field: undefined selects the documented default";
+
+/** Base heater description of the study examples. */
+function heater(): Record<string, unknown> {
+  return {
+    supply: { kind: "battery", voltage: "48 V", internalResistance: "40 mΩ" },
+    inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+    coil: {
+      shape: "solenoid",
+      radius: "75 mm",
+      length: "48 mm",
+      turns: 6,
+      conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" },
+    },
+    capacitor: { capacitance: "4 µF" },
+    part: {
+      shape: "ring",
+      material: "lowCarbonSteel",
+      outerRadius: "62 mm",
+      innerRadius: "50 mm",
+      height: "30 mm",
+      targetTemperature: "120 °C",
+    },
+  };
+}
+
+/** Optional fields of a description that the reader resolves to null. */
+const DESCRIPTION_NULLS: Readonly<Record<string, string>> = {
+  "supply.currentLimit": "null when not given (optional rating, documented)",
+  "inverter.switchVoltageRating": "null when not given (optional rating, documented)",
+  "capacitor.voltageRatingRms": "null when not given (optional rating, documented)",
+  "capacitor.currentRatingRms": "null when not given (optional rating, documented)",
+  concentrator: "null when the coil has no flux concentrator (documented)",
+};
+const STUDY_ALLOW: readonly Allowance[] = [
+  { paths: ["0.supply.internalResistance"], kinds: ["undefined"], reason: OPTIONAL + " (0 Ω)" },
+  { paths: ["0.supply.internalResistance", "0.inverter.switchOnResistance"], kinds: ["zero"], reason: "source and switch resistances are ≥ 0 (documented)" },
+];
+
+const kernel1 = (x: number): Example => ({ kind: "kernel", args: () => [x] });
+const kernelC = (...z: [number, number][]): Example => ({ kind: "kernel", args: () => z.map(([re, im]) => cx(re, im)) });
+const brand = (x: number): Example => ({ kind: "brand", args: () => [x] });
+
+/** The table: every function exported from src/index.ts. */
+export const EXAMPLES: Readonly<Record<string, Example>> = {
+  // ---------------------------------------------------------------- core
+  InputError: { kind: "class", args: () => ["demo", "radius", -1, "m", "a finite number > 0"] },
+  requireFinite: {
+    args: () => ["demo", "offset", -2, "m"],
+    allow: [{ paths: ["2"], kinds: ["zero", "negative"], reason: SIGNED }],
+  },
+  requirePositive: { args: () => ["demo", "radius", 0.01, "m"] },
+  requireNonNegative: {
+    args: () => ["demo", "gap", 0, "m"],
+    allow: [{ paths: ["2"], kinds: ["zero"], reason: "the domain is ≥ 0" }],
+  },
+  requireInRange: {
+    args: () => ["demo", "dutyCycle", 0.5, "", 0, 1, "()"],
+    allow: [
+      { paths: ["4"], kinds: ["zero", "negative", "-Infinity"], reason: "min is the calling function's own bound (may be -Infinity, documented), not checked input" },
+      { paths: ["5"], kinds: ["Infinity", "string"], reason: "max is the calling function's own bound (may be Infinity, documented), not checked input" },
+    ],
+  },
+  requireInteger: { args: () => ["demo", "turns", 12] },
+  requireOneOf: {
+    args: () => ["demo", "bridge", "half", ["half", "full"]],
+    skip: { paths: ["3", "3.*"], reason: "`allowed` is the calling function's own constant list, not checked input" },
+  },
+  requireObject: { args: () => ["demo", "options", { radius: 1 }], skip: { paths: ["2.*"], reason: "any object is valid; its contents are not looked at" } },
+
+  // ---------------------------------------------------------------- units
+  metres: brand(0.025),
+  henries: brand(2.2e-6),
+  farads: brand(4.7e-6),
+  ohms: brand(0.022),
+  ohmMetres: brand(1.7241e-8),
+  hertz: brand(25e3),
+  teslas: brand(0.2),
+  amperesPerMetre: brand(8000),
+  amperes: brand(40),
+  volts: brand(24),
+  watts: brand(1500),
+  joules: brand(3.6e6),
+  kelvins: brand(300),
+  seconds: brand(45),
+  kilograms: brand(0.85),
+  celsius: { args: () => [20], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: "°C: 0 and negative values down to absolute zero are temperatures" }] },
+  toCelsius: { args: () => [373.15], allow: [{ paths: ["0"], kinds: ["zero"], reason: "absolute zero (0 K) is a temperature" }] },
+  inches: { args: () => [2], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (a length conversion)" }] },
+  toInches: { args: () => [0.0508], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (a length conversion)" }] },
+  mils: { args: () => [10], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (a length conversion)" }] },
+  toMils: { args: () => [0.000254], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (a length conversion)" }] },
+  millimetres: { args: () => [2.5], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (a length conversion)" }] },
+  toMillimetres: { args: () => [0.0025], allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (a length conversion)" }] },
+  formatQuantity: {
+    args: () => [Math.PI, "V", { digits: 3 }],
+    allow: [
+      { paths: ["0"], kinds: ["zero", "negative"], reason: SIGNED + " (formatting)" },
+      { paths: ["2"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["2.digits"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+  },
+  parseQuantity: { args: () => ["4.7 µF", "F"], badString: "1" },
+  awgToDiameter: { args: () => [24], allow: [{ paths: ["0"], kinds: ["zero", "string"], reason: "AWG 0 is a gauge, and gauges may be given as text (\"1\", \"0000\")" }] },
+  diameterToAwg: { args: () => [0.00051054] },
+  nextMetricCrossSection: { args: () => [2e-6] },
+  crossSectionToDiameter: { args: () => [1.5e-6] },
+  diameterToCrossSection: { args: () => [0.002] },
+
+  // ---------------------------------------------------------------- special (kernels)
+  besselI0Complex: kernelC([1, 1]),
+  besselI1Complex: kernelC([2, 0]),
+  besselI0ComplexScaled: kernelC([5000, 5000]),
+  besselI1ComplexScaled: kernelC([0, 0]),
+  besselK0Complex: kernelC([1, 0]),
+  besselK1Complex: kernelC([1, 0]),
+  besselK0ComplexScaled: kernelC([1e6, 0]),
+  besselK1ComplexScaled: kernelC([1e6, 0]),
+  besselJ0Complex: kernelC([2.404825557695773, 0]),
+  besselJ1Complex: kernelC([1, 0]),
+  besselI1OverI0Complex: kernelC([1e4, 1e4]),
+  besselJ0: kernel1(1),
+  besselJ1: kernel1(1),
+  besselY0: kernel1(1),
+  besselY1: kernel1(1),
+  besselI0: kernel1(1),
+  besselI1: kernel1(1),
+  besselI0Scaled: kernel1(0),
+  besselI1Scaled: kernel1(1),
+  besselK0: kernel1(1),
+  besselK1: kernel1(1),
+  besselK0Scaled: kernel1(1),
+  besselK1Scaled: kernel1(1),
+  brentRoot: { kind: "kernel", args: () => [(t: number) => Math.cos(t) - t, 0, 1] },
+  complex: { kind: "kernel", args: () => [1, -2] },
+  cAdd: kernelC([1, 2], [3, -1]),
+  cSub: kernelC([1, 2], [3, -1]),
+  cMul: kernelC([1, 2], [3, 4]),
+  cDiv: kernelC([-5, 10], [3, 4]),
+  cScale: { kind: "kernel", args: () => [cx(1, -2), 3] },
+  cNeg: kernelC([1, -2]),
+  cConj: kernelC([1, -2]),
+  cAbs: kernelC([3, 4]),
+  cArg: kernelC([0, 1]),
+  cSqrt: kernelC([-4, 0]),
+  cExp: kernelC([0, Math.PI]),
+  cLog: kernelC([-1, 0]),
+  cSinh: kernelC([0, Math.PI / 2]),
+  cCosh: kernelC([0, 0]),
+  cTanh: kernelC([1000, 1]),
+  cCoth: kernelC([-1000, 2]),
+  ellipticK: kernel1(0.5),
+  ellipticE: kernel1(0.5),
+  ellipticKFromComplement: kernel1(1e-20),
+  ellipticEFromComplement: kernel1(0),
+  integrateAdaptive: { kind: "kernel", args: () => [Math.sin, 0, Math.PI] },
+  integrateToInfinity: {
+    kind: "kernel",
+    args: () => [(x: number) => (x === 0 ? 1 : Math.sin(x) / x), 0, { intervalLength: Math.PI }],
+  },
+  kelvinFunctions: kernel1(1),
+  kelvinFunctionsScaled: kernel1(5000),
+  kelvinBer: kernel1(2),
+  kelvinBei: kernel1(2),
+  kelvinKer: kernel1(1),
+  kelvinKei: kernel1(1),
+  kelvinBerPrime: kernel1(1),
+  kelvinBeiPrime: kernel1(1),
+  kelvinKerPrime: kernel1(1),
+  kelvinKeiPrime: kernel1(1),
+  solveOde: {
+    kind: "kernel",
+    args: () => [
+      (_t: number, y: Float64Array, dy: Float64Array) => {
+        dy[0] = -y[0]!;
+      },
+      [1],
+      { end: 10, event: (_t: number, y: Float64Array) => y[0]! - 0.5 },
+    ],
+    nonFinite: { sample: "null unless dense output was asked for (documented)" },
+  },
+
+  // ---------------------------------------------------------------- materials
+  specificEnthalpyChange: { args: () => [lowCarbonSteel, { fromTemperature: celsius(20), toTemperature: celsius(200) }] },
+  relativePermeabilityAt: {
+    args: () => [lowCarbonSteel, { temperature: celsius(20), fieldStrength: 1e5 }],
+    allow: [
+      { paths: ["1.fieldStrength"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["1.fieldStrength"], kinds: ["zero"], reason: "zero field is in the domain (initial permeability)" },
+    ],
+  },
+  saturationFluxDensityAt: { args: () => [lowCarbonSteel, celsius(20)] },
+  resistivityAt: { args: () => [copper, celsius(100)] },
+  specificHeatAt: { args: () => [lowCarbonSteel, celsius(735)] },
+  thermalConductivityAt: { args: () => [austeniticStainless, 600] },
+
+  // ---------------------------------------------------------------- inductance
+  coaxialCoilMutualInductance: {
+    args: () => [
+      { kind: "spiral", innerRadius: 0.01, outerRadius: 0.04, turns: 12 },
+      { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 },
+      0.015,
+    ],
+    allow: [
+      { paths: ["2"], kinds: ["zero"], reason: "coplanar coils (axial distance 0) are in the domain" },
+    ],
+  },
+  couplingCoefficient: {
+    args: () => [2e-6, 4e-6, 9e-6],
+    allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: "mutual inductance is signed (winding sense); k carries the sign" }],
+  },
+  loopInductance: {
+    args: () => [{ loopRadius: 0.05, wireRadius: 0.001, currentDistribution: "surface" }],
+    allow: [],
+  },
+  loopMutualInductance: {
+    args: () => [{ radius1: 0.1, radius2: 0.1, axialDistance: 0.1 }],
+  },
+  multilayerCoilInductance: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
+  multilayerCoilInductanceWheeler: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
+  brooksCoilInductance: { args: () => [{ sideLength: 0.01, turns: 100 }] },
+  rosaCorrectionA: { args: () => [1] },
+  rosaCorrectionB: { args: () => [2] },
+  nagaokaCoefficient: { args: () => [1] },
+  solenoidInductance: {
+    args: () => [{ radius: 0.025, length: 0.03, turns: 20, wireDiameter: 0.001 }],
+    allow: [{ paths: ["0.wireDiameter"], kinds: ["undefined"], reason: OPTIONAL + " (current sheet)" }],
+  },
+  solenoidInductanceWheeler: { args: () => [{ radius: 0.025, length: 0.03, turns: 20 }] },
+  spiralCoilInductance: {
+    args: () => [{ innerRadius: 0.02, outerRadius: 0.062, turns: 15, wireDiameter: 0.002 }],
+    allow: [
+    ],
+  },
+  spiralCoilInductanceWheeler: {
+    args: () => [{ innerRadius: 0.02, outerRadius: 0.062, turns: 15 }],
+  },
+  spiralCoilInductanceMohan: {
+    args: () => [{ innerRadius: 0.02, outerRadius: 0.062, turns: 15 }],
+  },
+
+  // ---------------------------------------------------------------- conductors
+  wireDcResistance: { args: () => [{ resistivity: 1.7241e-8, length: 10, diameter: 1e-3 }] },
+  wireDcResistanceAt: { args: () => [{ material: copper, temperature: celsius(100), length: 10, diameter: 1e-3 }] },
+  dowellFactor: { args: () => [{ penetrationRatio: 1, layers: 3 }] },
+  litzWindingAcRatio: {
+    args: () => [{ strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3, frequency: 100e3, resistivity: 1.7241e-8 }],
+  },
+  optimalLitzStrandCount: {
+    args: () => [{ strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3, frequency: 100e3, resistivity: 1.7241e-8 }],
+  },
+  litzGeometry: {
+    args: () => [
+      { strands: 100, strandDiameter: 0.1e-3, strandOuterDiameter: 0.115e-3, bundleLevels: [5, 5, 4], twistPitch: 25e-3, servingThickness: 0.05e-3 },
+    ],
+    allow: [
+      { paths: ["0.strandOuterDiameter", "0.bundleLevels", "0.twistPitch", "0.servingThickness"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.servingThickness"], kinds: ["zero"], reason: "no serving is a valid construction (thickness ≥ 0)" },
+    ],
+  },
+  litzDcResistance: {
+    args: () => [{ construction: { strands: 100, strandDiameter: 0.1e-3, bundleLevels: [10, 10] }, resistivity: 1.7241e-8, length: 1 }],
+    allow: [{ paths: ["0.construction.bundleLevels"], kinds: ["undefined"], reason: OPTIONAL }],
+  },
+  litzAcRatio: {
+    args: () => [
+      { construction: { strands: 100, strandDiameter: 0.1e-3, strandOuterDiameter: 0.115e-3 }, frequency: 100e3, resistivity: 1.7241e-8, turns: 20, windowBreadth: 20e-3 },
+    ],
+    allow: [{ paths: ["0.construction.strandOuterDiameter"], kinds: ["undefined"], reason: OPTIONAL }],
+  },
+  roundWireWindingAcRatioFerreira: {
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+  },
+  roundWireWindingAcRatio: {
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+  },
+  roundWireAcRatio: { args: () => [{ diameter: 2e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
+  roundWireAcRatioSweep: { args: () => [{ diameter: 2e-3, frequencies: [1e3, 20e3, 1e6], resistivity: 1.7241e-8 }] },
+  skinDepth: { args: () => [{ resistivity: 1.7241e-8, frequency: 20e3 }] },
+  tubeAcResistance: { args: () => [{ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
+  roundWireWindingValidity: {
+    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windingWidth: 10e-3 }],
+  },
+  litzWindingValidity: {
+    args: () => [{ strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3, frequency: 100e3, resistivity: 1.7241e-8 }],
+  },
+  workCoilResistanceCurrentSheet: {
+    args: () => [{ innerDiameter: 0.06, coilLength: 0.08, turns: 8, spaceFactor: 0.75, frequency: 20e3, resistivity: 1.86e-8 }],
+  },
+
+  // ---------------------------------------------------------------- coreloss
+  toroidCoreGeometry: { args: () => [{ innerDiameter: 0.02, outerDiameter: 0.04, height: 0.01 }] },
+  rodCoreGeometry: { args: () => [{ diameter: 0.01, length: 0.1 }] },
+  coreLossPower: {
+    args: () => [{ lossDensity: 200e3, effectiveVolume: 8e-6 }],
+    allow: [{ paths: ["0.lossDensity"], kinds: ["zero"], reason: "zero loss density is in the domain (≥ 0)" }],
+  },
+  fitSteinmetz: {
+    args: () => [
+      [25e3, 50e3, 100e3, 200e3].flatMap((frequency) =>
+        [0.05, 0.1, 0.2].map((peakFluxDensity) => ({
+          frequency,
+          peakFluxDensity,
+          lossDensity: 2.5 * frequency ** 1.45 * peakFluxDensity ** 2.55,
+        })),
+      ),
+    ],
+  },
+  igseCoefficient: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55 }] },
+  igseLoss: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55, period: FLUX.period, flux: FLUX }] },
+  steinmetzLoss: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55, frequency: 100e3, peakFluxDensity: 0.1 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "no flux, no loss: B ≥ 0" }] },
+  steinmetzTemperatureFactor: {
+    args: () => [{ referenceTemperature: 373.15, linear: 2e-3, quadratic: 1e-4 }, 363.15],
+    allow: [{ paths: ["0.linear", "0.quadratic"], kinds: ["zero", "negative"], reason: SIGNED + " (fitted coefficients)" }],
+  },
+  fluxDensityFromVoltSeconds: {
+    args: () => [{ voltSeconds: 48 * 5e-6, turns: 6, coreArea: 1e-4 }],
+    allow: [{ paths: ["0.voltSeconds"], kinds: ["zero"], reason: "volt-seconds ≥ 0 (documented)" }],
+  },
+  sinusoidalPeakFluxDensity: {
+    args: () => [{ voltageRms: 230, frequency: 50, turns: 500, coreArea: 20e-4 }],
+    allow: [{ paths: ["0.voltageRms"], kinds: ["zero"], reason: "RMS voltage ≥ 0 (documented)" }],
+  },
+  fluxWaveformFromVoltage: {
+    args: () => [{ time: [0, 10e-6, 20e-6], voltage: [100, -100], turns: 10, coreArea: 1e-4 }],
+    allow: [
+      { paths: ["0.voltage.1"], kinds: ["negative"], reason: SIGNED + " (voltage samples; this one is negative already)" },
+      { paths: ["0.time.0"], kinds: ["zero"], reason: "the time axis may start at 0; only its increase is required" },
+    ],
+  },
+  sinusoidalFluxWaveform: { args: () => [{ peakFluxDensity: 0.1, frequency: 50e3, samples: 8 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }, { paths: ["0.samples"], kinds: ["undefined"], reason: OPTIONAL }] },
+  triangularFluxWaveform: { args: () => [{ peakFluxDensity: 0.2, frequency: 20e3, dutyCycle: 0.25 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }, { paths: ["0.dutyCycle"], kinds: ["undefined"], reason: OPTIONAL }] },
+  trapezoidalFluxWaveform: { args: () => [{ peakFluxDensity: 0.1, frequency: 1e3, dutyCycle: 0.5 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }] },
+
+  // ---------------------------------------------------------------- tank
+  capacitorBank: {
+    args: () => [{ capacitance: 2e-6, voltageRms: 600, currentRms: 300, frequency: 40e3, series: "E12", unitVoltageRmsRating: 400, unitCurrentRmsRating: 60 }],
+    allow: [{ paths: ["0.unitVoltageRmsRating", "0.unitCurrentRmsRating"], kinds: ["undefined"], reason: OPTIONAL + " (no rating limit)" }],
+  },
+  currentFedParallelInverter: {
+    args: () => [{ supplyVoltage: 24, inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }],
+    nonFinite: { chokeRipplePeakToPeak: "null for an infinite choke, i.e. none given (documented)" },
+  },
+  resistorElement: { args: () => [8], allow: [{ paths: ["0"], kinds: ["zero"], reason: "resistance ≥ 0 (0 is a short circuit, documented)" }] },
+  inductorElement: { args: () => [1e-3, 2], allow: [{ paths: ["1"], kinds: ["undefined", "zero"], reason: "series resistance is optional and ≥ 0 (default 0)" }] },
+  capacitorElement: { args: () => [1e-6, 0.01], allow: [{ paths: ["1"], kinds: ["undefined", "zero"], reason: "series resistance is optional and ≥ 0 (default 0)" }] },
+  seriesNetwork: { args: () => [R1, R2] },
+  parallelNetwork: { args: () => [opaque(resistorElement(6)), opaque(resistorElement(3))] },
+  lclNetwork: {
+    args: () => [{ seriesInductance: 10e-6, inductance: 10e-6, capacitance: 1e-6, coilResistance: 0.05 }],
+    allow: [{ paths: ["0.coilResistance"], kinds: ["zero"], reason: "work-coil resistance ≥ 0 (documented)" }],
+  },
+  lccNetwork: { args: () => [{ seriesInductance: 100e-6, seriesCapacitance: 100e-9, parallelCapacitance: 100e-9, load: R50 }] },
+  tankImpedance: { args: () => [SERIES_TANK, SERIES_TANK.undampedFrequency] },
+  tankImpedanceSweep: { args: () => [PARALLEL_TANK, [1e4, 1e5, 1e6]] },
+  logSpacedFrequencies: { args: () => [10, 1000, 3] },
+  parallelTank: {
+    args: () => [{ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }],
+    nonFinite: { parallelResistance: "null when no parallel resistance was given (documented)" },
+  },
+  seriesInverter: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, switchingFrequency: 38e3 }] },
+  frequencyForPower: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, power: 2000 }] },
+  seriesTank: { args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }] },
+  tankStresses: { args: () => [SERIES_TANK, { frequency: SERIES_TANK.undampedFrequency, voltageRms: 10 }] },
+  tankToleranceAnalysis: {
+    // the @example uses 20000 samples; 2000 keep the suite quick and exercise the same code
+    args: () => [{ inductance: 10e-6, capacitance: 1e-6, resistance: 0.1, inductanceTolerance: 0.05, capacitanceTolerance: 0.1, samples: 2000, seed: 7 }],
+    allow: [
+      { paths: ["0.seed", "0.samples"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.inductanceTolerance", "0.capacitanceTolerance"], kinds: ["zero"], reason: "an exact component (tolerance 0) is in the domain" },
+      { paths: ["0.seed"], kinds: ["zero", "negative"], reason: "any integer seeds the generator" },
+    ],
+  },
+
+  // ---------------------------------------------------------------- workpiece
+  bakerFunctions: { args: () => [2.5], allow: [{ paths: ["0"], kinds: ["zero"], reason: "radius / skin depth ≥ 0 (p = 0 at the DC limit)" }] },
+  bakerFunctionsAsymptotic: { args: () => [10] },
+  coilOverPlate: {
+    args: () => [
+      {
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
+        frequency: 2e4,
+      },
+    ],
+    allow: [
+      { paths: ["0.coil.innerRadius", "0.coil.liftOff"], kinds: ["zero"], reason: "a coil may start at the axis and rest on the plate (≥ 0)" },
+      { paths: ["0.plate.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space (documented)" },
+    ],
+  },
+  coilOverPlateTruncatedRegion: {
+    args: () => [
+      {
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
+        frequency: 2e4,
+      },
+    ],
+    allow: [
+      { paths: ["0.coil.innerRadius", "0.coil.liftOff"], kinds: ["zero"], reason: "a coil may start at the axis and rest on the plate (≥ 0)" },
+      { paths: ["0.plate.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space (documented)" },
+    ],
+  },
+  coilEfficiency: {
+    args: () => [{ coilResistance: 0.01, reflectedResistance: 0.03 }],
+    allow: [
+      { paths: ["0.reflectedResistance"], kinds: ["zero"], reason: "an empty coil (no reflected resistance) is in the domain: efficiency 0" },
+      { paths: ["0.coilResistance"], kinds: ["zero"], reason: "a lossless coil is in the domain: efficiency 1" },
+    ],
+  },
+  powerInPart: {
+    args: () => [{ coilCurrentRms: 200, reflectedResistance: 0.05 }],
+    allow: [{ paths: ["0.coilCurrentRms", "0.reflectedResistance"], kinds: ["zero"], reason: "no current or no part: zero power is in the domain" }],
+  },
+  encirclingCoilOverRod: {
+    args: () => [
+      {
+        coil: { innerRadius: 0.02, outerRadius: 0.025, length: 0.05, turns: 10 },
+        rod: { radius: 0.015, resistivity: 3e-8, relativePermeability: 1 },
+        frequency: 1e3,
+      },
+    ],
+  },
+  barInLongCoil: {
+    args: () => [
+      {
+        coil: { innerRadius: 0.03, length: 0.3, turns: 20 },
+        bar: { radius: 0.02, resistivity: 1.2e-6, relativePermeability: 1 },
+        frequency: 1e4,
+        coilResistance: 0.01,
+      },
+    ],
+    allow: [{ paths: ["0.coilResistance"], kinds: ["undefined", "zero"], reason: OPTIONAL + " (efficiency needs it; ≥ 0)" }],
+  },
+  tubeInLongCoil: {
+    args: () => [
+      {
+        coil: { innerRadius: 0.035, length: 0.4, turns: 25 },
+        tube: { outerRadius: 0.025, innerRadius: 0.022, resistivity: 7.2e-7, relativePermeability: 1 },
+        frequency: 2e4,
+      },
+    ],
+    nonFinite: { efficiency: "null when no coilResistance is given (documented)" },
+    allow: [{ paths: ["0.tube.innerRadius"], kinds: ["zero"], reason: "bore radius ≥ 0 (0 is a solid bar, documented)" }],
+  },
+  slabInTangentialField: {
+    args: () => [{ thickness: 0.01, resistivity: 3e-8, relativePermeability: 1, frequency: 1e4, fieldStrengthRms: 1e4 }],
+    allow: [
+      { paths: ["0.fieldStrengthRms"], kinds: ["zero"], reason: "zero field is in the domain (no power)" },
+      { paths: ["0.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space heated from one face (documented)" },
+    ],
+  },
+  workpieceCouplingAtTemperature: {
+    args: () => [
+      { material: lowCarbonSteel, temperature: celsius(20), part: { kind: "bar", radius: 0.02, coil: { innerRadius: 0.03, length: 0.3, turns: 20 } }, frequency: 1e4 },
+    ],
+  },
+
+  // ---------------------------------------------------------------- thermal
+  lumpedHeatUp: {
+    args: () => [
+      { mass: 0.05, specificHeat: 490, power: 200, surfaceArea: 0.003, convectionCoefficient: 10, emissivity: 0.5, ambientTemperature: 293.15, targetTemperature: 333.15 },
+    ],
+    allow: [
+      { paths: ["0.convectionCoefficient", "0.emissivity"], kinds: ["zero"], reason: "convection and emissivity (0 … 1) are ≥ 0 (documented); with power 0 and no duration the span cannot be chosen (throws, documented)" },
+      { paths: ["0.targetTemperature"], kinds: ["undefined"], reason: OPTIONAL + " (no target: timeToTarget null)" },
+    ],
+    nonFinite: {
+      biotNumber: "null when no thermal conductivity or size is known for a Biot check (documented)",
+      timeToTarget: "null when no target was given or it is not reached (documented)",
+    },
+  },
+  radialHeatUp: {
+    args: () => [
+      {
+        geometry: "cylinder",
+        radius: 0.01,
+        length: 0.1,
+        power: 1000,
+        skinDepth: 0.001,
+        density: 7850,
+        specificHeat: 480,
+        thermalConductivity: 45,
+        convectionCoefficient: 10,
+        emissivity: 0,
+        ambientTemperature: 293.15,
+        duration: 10,
+      },
+    ],
+    allow: [
+      { paths: ["0.convectionCoefficient", "0.emissivity", "0.power"], kinds: ["zero"], reason: "convection, emissivity (0 … 1) and power are ≥ 0 (documented)" },
+      { paths: ["0.skinDepth"], kinds: ["undefined"], reason: OPTIONAL + " (surface heating)" },
+    ],
+    nonFinite: {
+      timeToSurfaceTarget: "null when no target was given or it is not reached (documented)",
+      timeToCoreTarget: "null when no target was given or it is not reached (documented)",
+    },
+  },
+  steadyStateTemperature: {
+    args: () => [{ power: 100, surfaceArea: 0.01, convectionCoefficient: 20, emissivity: 0, ambientTemperature: 293.15 }],
+    allow: [{ paths: ["0.emissivity", "0.power"], kinds: ["zero"], reason: "emissivity (0 … 1) and power are ≥ 0 (documented); with emissivity 0 already, zero convection leaves no loss and throws" }],
+  },
+
+  // ---------------------------------------------------------------- safety
+  voltageCaution: {
+    args: () => [{ voltage: 230, waveform: "ac", location: "tank" }],
+    allow: [{ paths: ["0.voltage"], kinds: ["zero", "negative"], reason: "its magnitude is used (documented)" }],
+    nonFinite: { "": "null when there is nothing to caution about (documented)" },
+  },
+  storedEnergyCaution: {
+    args: () => [{ capacitance: 10e-6, voltagePeak: 400 }],
+    allow: [{ paths: ["0.voltagePeak"], kinds: ["zero", "negative"], reason: "its magnitude is used (documented)" }],
+    nonFinite: { "": "null when there is nothing to caution about (documented)" },
+  },
+  contactBurnThreshold: { args: () => [60] },
+  surfaceTemperatureCaution: { args: () => [{ temperature: celsius(200) }], nonFinite: { "": "null when there is nothing to caution about (documented)" } },
+  audibleFrequencyCaution: { args: () => [12000], nonFinite: { "": "null when there is nothing to caution about (documented)" } },
+  exposureCaution: {
+    args: () => [{ fluxDensityRms: 1e-4, frequency: 30000 }],
+    allow: [{ paths: ["0.fluxDensityRms"], kinds: ["zero"], reason: "RMS flux density ≥ 0" }],
+    nonFinite: { "": "null when there is nothing to caution about (documented)" },
+  },
+  safetyCautions: {
+    args: () => [{ tankVoltageRms: 180, surfaceTemperature: celsius(250), frequency: 25000 }],
+    allow: [
+      { paths: ["0.tankVoltageRms", "0.surfaceTemperature", "0.frequency"], kinds: ["undefined"], reason: OPTIONAL + " (each check runs only when its inputs are given)" },
+      { paths: ["0.tankVoltageRms"], kinds: ["zero", "negative"], reason: "passed to voltageCaution, which uses the magnitude (documented)" },
+    ],
+  },
+  fieldOnAxis: {
+    args: () => [[{ radius: 0.05 }], 10, 0],
+    allow: [
+      { paths: ["1", "2"], kinds: ["zero", "negative"], reason: SIGNED + " (current sense, axial position)" },
+    ],
+  },
+  fieldNearCoil: {
+    args: () => [{ kind: "solenoid", radius: 0.04, length: 0.08, turns: 10 }, 20, { radialDistance: 0.1, axialPosition: 0 }],
+    allow: [
+      { paths: ["1", "2.axialPosition"], kinds: ["zero", "negative"], reason: SIGNED + " (current sense, axial position)" },
+      { paths: ["2.radialDistance"], kinds: ["zero"], reason: "on the axis is in the domain (radial distance ≥ 0)" },
+    ],
+  },
+  icnirpReferenceLevel: { args: () => [25000, "general-public"] },
+  exposureCheck: {
+    args: () => [{ fluxDensityRms: 54e-6, frequency: 30000, population: "general-public" }],
+    allow: [{ paths: ["0.fluxDensityRms"], kinds: ["zero"], reason: "RMS flux density ≥ 0" }],
+  },
+
+  // ---------------------------------------------------------------- study
+  HeaterDescriptionError: { kind: "class", args: () => [[new InputError("readHeaterDescription", "coil.turns", 0, "", "an integer ≥ 1")]] },
+  readHeaterDescription: {
+    args: () => [heater()],
+    quantityStrings: true,
+    badString: "12 parsecs",
+    allow: STUDY_ALLOW,
+    nonFinite: DESCRIPTION_NULLS,
+  },
+  studyHeater: {
+    // the @example with heatUp on (few grid points, to test heatUpPoints) and the slow scans off
+    args: () => [heater(), { heatUp: true, heatUpPoints: 4, temperatureScan: false, impedanceSweep: false }],
+    quantityStrings: true,
+    badString: "12 parsecs",
+    allow: [
+      ...STUDY_ALLOW,
+      { paths: ["1", "1.heatUpPoints"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+    nonFinite: {
+      ...Object.fromEntries(Object.entries(DESCRIPTION_NULLS).map(([k, v]) => [`description.${k}`, v])),
+      "emptyCoil.partSkinDepth": "null for the empty coil: there is no part (documented)",
+      "emptyCoil.zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
+      "operating.zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
+      "atTarget.zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
+      "heatUp.points[].zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
+      "heatUp.curieCrossingTime": "null when the part does not cross its Curie point (120 °C target, documented)",
+      temperatureScan: "null when not asked for (documented)",
+      impedance: "null when not asked for (documented)",
+    },
+  },
+  sweepHeater: {
+    args: () => [heater(), { field: "coil.turns", values: [5, 6], heatUp: false }],
+    skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
+    allow: [
+      { paths: ["1.values.*"], kinds: ["NaN", "Infinity", "-Infinity", "string", "zero", "negative"], reason: "a value the study rejects is reported in its row's `problem` (documented), not thrown" },
+      { paths: ["1.heatUp"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+    nonFinite: {
+      "rows[].value": "echoes the swept value as given, also a rejected one (its row carries the problem)",
+      "rows[].summary": "null for a row whose value was rejected (documented)",
+      "rows[].summary.timeToTarget": "null when the heat-up is not run (heatUp: false)",
+      "rows[].problem": "null when the row's study succeeded (documented)",
+    },
+    quantityStrings: true,
+    badString: "12 parsecs",
+  },
+  optimizeHeater: {
+    args: () => [heater(), { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 }, {}],
+    skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
+    allow: [
+      { paths: ["1.limits", "1.limits.minFrequency", "1.keep", "2"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+    nonFinite: {
+      "best[].switchingFrequency": "null unless the inverter runs at a fixed frequency (documented)",
+      "best[].summary.timeToTarget": "null for a power goal: no heat-up is run (documented)",
+    },
+    quantityStrings: true,
+    badString: "12 parsecs",
+  },
+};
