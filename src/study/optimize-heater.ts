@@ -193,7 +193,7 @@ export interface HeaterSearchOptions {
  * @param options - `onProgress` callback (optional)
  * @returns the best designs and the rejection counts
  * @throws {@link InputError} when the base description is invalid, the goal has neither or both
- * targets, or a limit or search value is malformed
+ * targets, a limit or search value is malformed, or `options` is not an object
  * @example
  * ```ts
  * import { optimizeHeater } from "fluxwright";
@@ -212,6 +212,10 @@ export interface HeaterSearchOptions {
  * @category Heater study
  */
 export function optimizeHeater(description: unknown, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
+  if (typeof options !== "object" || options === null || Array.isArray(options)) throw new InputError(WHERE, "options", options, "", "an object");
+  if (options.onProgress !== undefined && typeof options.onProgress !== "function") {
+    throw new InputError(WHERE, "options.onProgress", options.onProgress, "", "a function");
+  }
   const base = readHeaterDescription(description);
   if (typeof goal !== "object" || goal === null) throw new InputError(WHERE, "goal", goal, "", "an object");
   const targetPower = quantity("goal.targetPower", goal.targetPower, "W");

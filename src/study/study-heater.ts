@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, InputError } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireInteger, requireObject } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
 import { lumpedHeatUp } from "../thermal/index.js";
@@ -26,7 +26,7 @@ export interface StudyHeaterOptions {
   readonly temperatureScan?: boolean;
   /** Compute the tank impedance against frequency with and without the part (default `true`). */
   readonly impedanceSweep?: boolean;
-  /** Operating points on the temperature grid of the heat-up, ≥ 4 (default: one per 50 K, 6 … 16, plus a cluster at the Curie transition). */
+  /** Operating points on the temperature grid of the heat-up, an integer ≥ 4 (default: one per 50 K, 6 … 16, plus a cluster at the Curie transition). */
   readonly heatUpPoints?: number;
 }
 
@@ -292,7 +292,8 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * @param options - which slower parts to run (all by default)
  * @returns the {@link HeaterStudy}
  * @throws {@link HeaterDescriptionError} (an {@link InputError}) when the description is
- * invalid, naming the field path
+ * invalid, naming the field path; {@link InputError} when `options` is not an object or
+ * `options.heatUpPoints` is not an integer ≥ 4
  * @example
  * ```ts
  * import { studyHeater } from "fluxwright";
@@ -310,6 +311,8 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * @category Heater study
  */
 export function studyHeater(description: unknown, options: StudyHeaterOptions = {}): HeaterStudy {
+  requireObject("studyHeater", "options", options);
+  const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
   const d = readHeaterDescription(description);
   const props = coilProperties(d);
   const part = d.part;
@@ -350,7 +353,7 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
     const width = material.permeability?.transitionWidth ?? 0;
     // about one operating point per 50 K (6 … 16), plus a dense cluster at the Curie transition
     const span = part.targetTemperature - part.startTemperature;
-    const count = options.heatUpPoints ?? Math.min(16, Math.max(6, Math.ceil(span / 50) + 2));
+    const count = heatUpPoints ?? Math.min(16, Math.max(6, Math.ceil(span / 50) + 2));
     const grid = temperatureGrid(part.startTemperature, part.targetTemperature, Math.max(4, count), curie, width);
     const points = grid.map((t) => (t === part.startTemperature ? operating : t === part.targetTemperature ? atTarget : tryPoint(t)));
     for (const p of points) if (p !== null) allPoints.push(p);
