@@ -4,7 +4,7 @@
  * @packageDocumentation
  */
 import { InputError } from "../core/input-error.js";
-import { requireInteger } from "../core/validate.js";
+import { requireInteger, requireObject } from "../core/validate.js";
 import { ENGINEERING_PREFIX } from "./prefixes.js";
 import { canonicalUnit } from "./unit-symbols.js";
 
@@ -41,7 +41,8 @@ const UNPREFIXED = new Set(["°C", "K"]);
  * @param unit - the unit symbol to print (e.g. `"F"`, `"Hz"`, `"Ω"`, `"kg"`, or `""`)
  * @param options - `digits`: significant digits, 1 … 17, default 4
  * @returns the formatted text
- * @throws {@link InputError} when `value` is not finite or `digits` is not an integer 1 … 17
+ * @throws {@link InputError} when `value` is not finite, `options` is given but not an object, or
+ * `digits` is not an integer 1 … 17
  * @see SI Brochure, 9th edition (2019), §5.4.3 (a space between number and unit) and Table 7.
  * @example
  * ```ts
@@ -60,6 +61,7 @@ export function formatQuantity(value: number, unit: string, options?: FormatQuan
     throw new InputError(where, "value", value, "", "a finite number");
   }
   if (typeof unit !== "string") throw new InputError(where, "unit", unit, "", "a unit symbol string");
+  if (options !== undefined) requireObject(where, "options", options);
   const digits = options?.digits === undefined ? 4 : requireInteger(where, "options.digits", options.digits, 1);
   if (digits > 17) throw new InputError(where, "options.digits", digits, "", "an integer between 1 and 17");
 
