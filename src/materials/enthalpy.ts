@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { requireObject, requirePositive } from "../core/index.js";
+import { checkSpecificHeatModel } from "./check-material.js";
 import { specificHeatAt } from "./specific-heat.js";
 import type { ConductiveMaterial } from "./types.js";
 
@@ -64,6 +65,7 @@ export function specificEnthalpyChange(material: ConductiveMaterial, interval: E
   requireObject(where, "interval", interval);
   const t1 = requirePositive(where, "interval.fromTemperature", interval.fromTemperature, "K");
   const t2 = requirePositive(where, "interval.toTemperature", interval.toTemperature, "K");
+  checkSpecificHeatModel(where, material);
   if (t1 === t2) return 0;
   const lo = t1 < t2 ? t1 : t2;
   const hi = t1 < t2 ? t2 : t1;

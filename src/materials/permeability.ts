@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { checkPermeabilityModel } from "./check-material.js";
 import { MU_0 } from "../units/index.js";
 import type { ConductiveMaterial, PermeabilityModel } from "./types.js";
 
@@ -101,6 +102,7 @@ export function relativePermeabilityAt(material: ConductiveMaterial, conditions:
     conditions.fieldStrength === undefined
       ? 0
       : requireNonNegative("relativePermeabilityAt", "conditions.fieldStrength", conditions.fieldStrength, "A/m");
+  checkPermeabilityModel("relativePermeabilityAt", material);
   const model = material.permeability;
   const curie = material.curieTemperature;
   if (!material.magnetic || model === undefined || curie === undefined || t >= curie) return 1;
@@ -143,6 +145,7 @@ export function relativePermeabilityAt(material: ConductiveMaterial, conditions:
 export function saturationFluxDensityAt(material: ConductiveMaterial, temperature: number): number {
   requireObject("saturationFluxDensityAt", "material", material);
   const t = requirePositive("saturationFluxDensityAt", "temperature", temperature, "K");
+  checkPermeabilityModel("saturationFluxDensityAt", material);
   const model = material.permeability;
   const curie = material.curieTemperature;
   if (!material.magnetic || model === undefined || curie === undefined) return 0;

@@ -4,6 +4,7 @@
  * @packageDocumentation
  */
 import { requireObject, requirePositive } from "../core/index.js";
+import { checkResistivityModel } from "./check-material.js";
 import { interpolateTemperatureTable } from "./interpolate.js";
 import type { ConductiveMaterial } from "./types.js";
 
@@ -42,6 +43,7 @@ const T20 = 293.15;
 export function resistivityAt(material: ConductiveMaterial, temperature: number): number {
   requireObject("resistivityAt", "material", material);
   requirePositive("resistivityAt", "temperature", temperature, "K");
+  checkResistivityModel("resistivityAt", material);
   const model = material.resistivity;
   if (model.kind === "table") return interpolateTemperatureTable(model.table, temperature);
   const range = material.temperatureRange;

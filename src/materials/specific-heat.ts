@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { requireObject, requirePositive } from "../core/index.js";
+import { checkSpecificHeatModel } from "./check-material.js";
 import { interpolateTemperatureTable } from "./interpolate.js";
 import type { ConductiveMaterial } from "./types.js";
 
@@ -65,6 +66,7 @@ export function carbonSteelSpecificHeatEn1993(theta: number): number {
 export function specificHeatAt(material: ConductiveMaterial, temperature: number): number {
   requireObject("specificHeatAt", "material", material);
   requirePositive("specificHeatAt", "temperature", temperature, "K");
+  checkSpecificHeatModel("specificHeatAt", material);
   const range = material.temperatureRange;
   const t = temperature < range.min ? range.min : temperature > range.max ? range.max : temperature;
   const model = material.specificHeat;

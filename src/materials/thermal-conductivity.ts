@@ -4,6 +4,7 @@
  * @packageDocumentation
  */
 import { requireObject, requirePositive } from "../core/index.js";
+import { checkTemperatureTable } from "./check-material.js";
 import { interpolateTemperatureTable } from "./interpolate.js";
 import type { ConductiveMaterial } from "./types.js";
 
@@ -34,5 +35,6 @@ import type { ConductiveMaterial } from "./types.js";
 export function thermalConductivityAt(material: ConductiveMaterial, temperature: number): number {
   requireObject("thermalConductivityAt", "material", material);
   requirePositive("thermalConductivityAt", "temperature", temperature, "K");
-  return interpolateTemperatureTable(material.thermalConductivityTable, temperature);
+  const table = checkTemperatureTable("thermalConductivityAt", "material.thermalConductivityTable", material.thermalConductivityTable, "W/(m·K)");
+  return interpolateTemperatureTable(table, temperature);
 }
