@@ -16,6 +16,7 @@ import {
   seriesTank,
   triangularFluxWaveform,
 } from "../../src/index.js";
+import { loadExample } from "../study/cases.js";
 import type { BadNumber, BadObject } from "./harness.js";
 
 /** What a function is, for the purpose of the suite. */
@@ -41,6 +42,8 @@ export interface Allowance {
 export interface Example {
   /** Fresh valid arguments, from the @example. */
   args: () => unknown[];
+  /** Further valid calls checked the same way (other kinds of a union option), same allowances. */
+  variants?: readonly (() => unknown[])[];
   kind?: ExampleKind;
   allow?: readonly Allowance[];
   /** Result paths (array indices written `[]`) that may hold `null` or ±Infinity, with the reason. */
@@ -102,10 +105,41 @@ const DESCRIPTION_NULLS: Readonly<Record<string, string>> = {
   "capacitor.voltageRatingRms": "null when not given (optional rating, documented)",
   "capacitor.currentRatingRms": "null when not given (optional rating, documented)",
   concentrator: "null when the coil has no flux concentrator (documented)",
+  "inverter.frequency": "null for a power-tracking series inverter (documented)",
 };
 const STUDY_ALLOW: readonly Allowance[] = [
-  { paths: ["0.supply.internalResistance"], kinds: ["undefined"], reason: OPTIONAL + " (0 Ω)" },
-  { paths: ["0.supply.internalResistance", "0.inverter.switchOnResistance"], kinds: ["zero"], reason: "source and switch resistances are ≥ 0 (documented)" },
+  {
+    paths: [
+      "0.supply.internalResistance",
+      "0.supply.currentLimit",
+      "0.inverter.switchVoltageRating",
+      "0.coil.leadLength",
+      "0.coil.temperature",
+      "0.coil.conductor.outerDiameter",
+      "0.capacitor.dissipationFactor",
+      "0.capacitor.voltageRatingRms",
+      "0.capacitor.currentRatingRms",
+      "0.part.startTemperature",
+      "0.environment",
+      "0.environment.ambientTemperature",
+      "0.environment.convectionCoefficient",
+      "0.concentrator",
+    ],
+    kinds: ["undefined"],
+    reason: OPTIONAL + " (ratings unchecked, leads 0 m, coil 40 °C, tan δ 0.0005, still air, litz bundle from packing)",
+  },
+  {
+    paths: [
+      "0.supply.internalResistance",
+      "0.inverter.switchOnResistance",
+      "0.coil.leadLength",
+      "0.coil.liftOff",
+      "0.capacitor.dissipationFactor",
+      "0.environment.convectionCoefficient",
+    ],
+    kinds: ["zero"],
+    reason: "resistances, lead length, lift-off, tan δ and convection are ≥ 0 (documented)",
+  },
 ];
 
 const kernel1 = (x: number): Example => ({ kind: "kernel", args: () => [x] });
@@ -272,8 +306,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 },
       0.015,
     ],
+    variants: [() => [{ kind: "loop", radius: 0.03, turns: 2 }, { kind: "multilayer", innerRadius: 0.02, outerRadius: 0.03, length: 0.02, turns: 50 }, 0.02]],
     allow: [
       { paths: ["2"], kinds: ["zero"], reason: "coplanar coils (axial distance 0) are in the domain" },
+      { paths: ["0.turns"], kinds: ["undefined"], reason: OPTIONAL + " (a loop of one turn)" },
     ],
   },
   couplingCoefficient: {
@@ -454,9 +490,21 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
         frequency: 2e4,
       },
     ],
+    variants: [
+      () => [
+        {
+          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+          plate: [
+            { thickness: 0.0005, resistivity: 1.7e-8, relativePermeability: 1 },
+            { thickness: Infinity, resistivity: 2e-7, relativePermeability: 50 },
+          ],
+          frequency: 2e4,
+        },
+      ],
+    ],
     allow: [
       { paths: ["0.coil.innerRadius", "0.coil.liftOff"], kinds: ["zero"], reason: "a coil may start at the axis and rest on the plate (≥ 0)" },
-      { paths: ["0.plate.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space (documented)" },
+      { paths: ["0.plate.thickness", "0.plate.1.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space (documented)" },
     ],
   },
   coilOverPlateTruncatedRegion: {
@@ -525,6 +573,24 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [
       { material: lowCarbonSteel, temperature: celsius(20), part: { kind: "bar", radius: 0.02, coil: { innerRadius: 0.03, length: 0.3, turns: 20 } }, frequency: 1e4 },
     ],
+    variants: [
+      () => [
+        { material: austeniticStainless, temperature: celsius(20), part: { kind: "tube", outerRadius: 0.025, innerRadius: 0.022, coil: { innerRadius: 0.035, length: 0.4, turns: 25 } }, frequency: 2e4 },
+      ],
+      () => [
+        {
+          material: lowCarbonSteel,
+          temperature: celsius(20),
+          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 } },
+          frequency: 2e4,
+        },
+      ],
+    ],
+    allow: [
+      { paths: ["0.part.innerRadius"], kinds: ["zero"], reason: "bore radius ≥ 0 (0 is a solid bar, documented)" },
+      { paths: ["0.part.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space (documented)" },
+      { paths: ["0.part.coil.innerRadius", "0.part.coil.liftOff"], kinds: ["zero"], reason: "a pancake coil may start at the axis and rest on the plate (≥ 0)" },
+    ],
   },
 
   // ---------------------------------------------------------------- thermal
@@ -557,6 +623,24 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
         ambientTemperature: 293.15,
         duration: 10,
       },
+    ],
+    variants: [
+      () => [
+        {
+          geometry: "slab",
+          thickness: 0.01,
+          faceArea: 0.01,
+          power: 1000,
+          skinDepth: 0.001,
+          density: 7850,
+          specificHeat: 480,
+          thermalConductivity: 45,
+          convectionCoefficient: 10,
+          emissivity: 0,
+          ambientTemperature: 293.15,
+          duration: 10,
+        },
+      ],
     ],
     allow: [
       { paths: ["0.convectionCoefficient", "0.emissivity", "0.power"], kinds: ["zero"], reason: "convection, emissivity (0 … 1) and power are ≥ 0 (documented)" },
@@ -606,9 +690,16 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   },
   fieldNearCoil: {
     args: () => [{ kind: "solenoid", radius: 0.04, length: 0.08, turns: 10 }, 20, { radialDistance: 0.1, axialPosition: 0 }],
+    variants: [
+      () => [{ kind: "spiral", innerRadius: 0.01, outerRadius: 0.04, turns: 12, position: 0.005 }, 20, { radialDistance: 0.1, axialPosition: 0.02 }],
+      () => [[{ radius: 0.05, position: 0.01, turns: 2 }], 20, { radialDistance: 0.1, axialPosition: 0.02 }],
+    ],
     allow: [
       { paths: ["1", "2.axialPosition"], kinds: ["zero", "negative"], reason: SIGNED + " (current sense, axial position)" },
       { paths: ["2.radialDistance"], kinds: ["zero"], reason: "on the axis is in the domain (radial distance ≥ 0)" },
+      { paths: ["0.position", "0.0.position"], kinds: ["zero", "negative", "undefined"], reason: "axial position of a coil or loop is signed and optional (default 0, documented)" },
+      { paths: ["0.innerRadius"], kinds: ["zero"], reason: "a spiral's inner edge is ≥ 0 (documented)" },
+      { paths: ["0.0.turns"], kinds: ["undefined"], reason: OPTIONAL + " (1 turn)" },
     ],
   },
   icnirpReferenceLevel: { args: () => [25000, "general-public"] },
@@ -621,6 +712,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   HeaterDescriptionError: { kind: "class", args: () => [[new InputError("readHeaterDescription", "coil.turns", 0, "", "an integer ≥ 1")]] },
   readHeaterDescription: {
     args: () => [heater()],
+    variants: [() => [loadExample("study-bearing-race.json")], () => [loadExample("study-forging-bar.json")], () => [loadExample("study-plate-warmer.json")]],
     quantityStrings: true,
     badString: "12 parsecs",
     allow: STUDY_ALLOW,

@@ -83,7 +83,7 @@ export function findLeaves(args: readonly unknown[], opaque: ReadonlySet<object>
       out.numbers.push({ path, value });
       return;
     }
-    if (typeof value === "string" && quantityStrings && /^-?[\d.]/.test(value)) {
+    if (typeof value === "string" && quantityStrings && /^-?(\d|\.\d)/.test(value)) {
       out.numbers.push({ path, value: Number.parseFloat(value) });
       return;
     }

@@ -106,46 +106,51 @@ for (const [name, fn] of functions) {
   const kind = example.kind ?? "checked";
 
   describe(name, () => {
+    // the @example call first, then any further variants (other kinds of a union option)
+    const calls = [example.args, ...(example.variants ?? [])];
+    const label = (i: number): string => (i === 0 ? "" : `[variant ${i}] `);
+
     it("returns finite numbers for its documented example", () => {
       if (kind === "class") {
         const Ctor = fn as unknown as new (...args: unknown[]) => unknown;
         expect(new Ctor(...example.args())).toBeInstanceOf(InputError);
         return;
       }
-      const result = fn(...example.args());
-      const bad = unexpectedNonFinite(example, result);
+      const bad = calls.flatMap((args, i) => unexpectedNonFinite(example, fn(...args())).map((b) => label(i) + b));
       expect(bad, bad.join("\n")).toEqual([]);
     });
 
     if (kind !== "checked") return;
 
-    const leaves = findLeaves(example.args(), OPAQUE, example.quantityStrings ?? false);
-
     it("throws InputError for a non-finite, non-numeric, missing, zero or negative number", () => {
       const failures: string[] = [];
-      for (const { path, value } of leaves.numbers) {
-        const key = pathKey(path);
-        if (skipped(example, key)) continue;
-        for (const bad of BAD_NUMBERS) {
-          const replacement = badNumber(bad, value, example.badString ?? "1");
-          const problem = judge(fn, replaceAt(example.args(), path, replacement), example, allowed(example, key, bad));
-          if (problem !== null) failures.push(`${key} = ${show(replacement)}: ${problem}`);
+      calls.forEach((args, i) => {
+        for (const { path, value } of findLeaves(args(), OPAQUE, example.quantityStrings ?? false).numbers) {
+          const key = pathKey(path);
+          if (skipped(example, key)) continue;
+          for (const bad of BAD_NUMBERS) {
+            const replacement = badNumber(bad, value, example.badString ?? "1");
+            const problem = judge(fn, replaceAt(args(), path, replacement), example, allowed(example, key, bad));
+            if (problem !== null) failures.push(`${label(i)}${key} = ${show(replacement)}: ${problem}`);
+          }
         }
-      }
+      });
       expect(failures, failures.join("\n")).toEqual([]);
     });
 
     it("throws InputError when an options object is null, a number, a string or missing", () => {
       const failures: string[] = [];
-      for (const { path } of leaves.objects) {
-        const key = pathKey(path);
-        if (skipped(example, key)) continue;
-        for (const bad of BAD_OBJECTS) {
-          const replacement = badObject(bad);
-          const problem = judge(fn, replaceAt(example.args(), path, replacement), example, allowed(example, key, bad));
-          if (problem !== null) failures.push(`${key} = ${show(replacement)}: ${problem}`);
+      calls.forEach((args, i) => {
+        for (const { path } of findLeaves(args(), OPAQUE, example.quantityStrings ?? false).objects) {
+          const key = pathKey(path);
+          if (skipped(example, key)) continue;
+          for (const bad of BAD_OBJECTS) {
+            const replacement = badObject(bad);
+            const problem = judge(fn, replaceAt(args(), path, replacement), example, allowed(example, key, bad));
+            if (problem !== null) failures.push(`${label(i)}${key} = ${show(replacement)}: ${problem}`);
+          }
         }
-      }
+      });
       expect(failures, failures.join("\n")).toEqual([]);
     });
   });
