@@ -4,15 +4,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireFinite, requireInRange, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInRange, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { specificHeatAt, thermalConductivityAt } from "../materials/index.js";
+import { specificEnthalpyChange, specificHeatAt, thermalConductivityAt } from "../materials/index.js";
 import { solveOde } from "../special/index.js";
 import type { OdeResult } from "../special/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { findEquilibrium } from "./steady-state.js";
-import { adaptiveSimpson, checkSurface, effectiveCoefficient, powerFunction } from "./surface-loss.js";
+import { checkSurface, effectiveCoefficient, powerFunction } from "./surface-loss.js";
 
 /**
  * Options of {@link lumpedHeatUp}. Give `specificHeat` or `material` (or both: `specificHeat`
@@ -327,10 +327,10 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
     return sample(time)[0]!;
   };
 
-  // Stored energy by quadrature of m c(T) over temperature, split at the material's breakpoints.
+  // Stored energy m ∫c(T) dT, exact for the material's specific-heat model.
   let stored: number;
   if (constantSpecificHeat !== null) stored = mass * constantSpecificHeat * (finalTemperature - initial);
-  else stored = integrateHeatCapacity(heatCapacityAt, material!, initial, finalTemperature);
+  else stored = mass * specificEnthalpyChange(material!, { fromTemperature: initial, toTemperature: finalTemperature });
   const input = finalState[1]!;
   const convective = finalState[2]!;
   const radiative = finalState[3]!;
@@ -407,28 +407,3 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   };
 }
 
-/** $\int_{a}^{b} m\,c(T)\,dT$, split at the breakpoints of the material's specific-heat model. */
-function integrateHeatCapacity(
-  heatCapacityAt: (temperature: number) => number,
-  material: ConductiveMaterial,
-  a: number,
-  b: number,
-): number {
-  if (a === b) return 0;
-  const lo = Math.min(a, b);
-  const hi = Math.max(a, b);
-  const model = material.specificHeat;
-  const breaks =
-    model.kind === "table"
-      ? [...model.table.temperatures]
-      : [600, 735, 900, 1200].map((c) => c + 273.15);
-  breaks.push(material.temperatureRange.min, material.temperatureRange.max);
-  const points = [lo, ...breaks.filter((t) => t > lo && t < hi).sort((x, y) => x - y), hi];
-  let sum = 0;
-  const scale = heatCapacityAt(lo) * (hi - lo);
-  for (let i = 0; i + 1 < points.length; i++) {
-    sum += adaptiveSimpson(heatCapacityAt, points[i]!, points[i + 1]!, 1e-14 * scale);
-  }
-  requireFinite(WHERE, "stored energy", sum, "J");
-  return b > a ? sum : -sum;
-}

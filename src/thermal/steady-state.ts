@@ -5,7 +5,8 @@
  */
 import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
-import { bracketedRoot, checkSurface, powerFunction, surfaceLoss } from "./surface-loss.js";
+import { brentRoot } from "../special/index.js";
+import { checkSurface, powerFunction, surfaceLoss } from "./surface-loss.js";
 
 /**
  * Options of {@link steadyStateTemperature}. Give exactly one of `power` and `powerAt`.
@@ -136,7 +137,7 @@ export function findEquilibrium(
       if (t - next <= 4 * Number.EPSILON * t) return next;
       t = next;
     }
-    return bracketedRoot(net, ambient, t, net(ambient), net(t), 1e-13 * t);
+    return brentRoot(net, ambient, t, { tolerance: 1e-13 * t });
   }
   const n0 = net(start);
   if (n0 === 0) return start;
@@ -153,7 +154,7 @@ export function findEquilibrium(
     if (b > 1e6) return null;
     const fb = net(b);
     if (fb === 0) return b;
-    if (fb > 0 !== fa > 0) return bracketedRoot(net, a, b, fa, fb, 1e-13 * Math.max(a, b));
+    if (fb > 0 !== fa > 0) return brentRoot(net, Math.min(a, b), Math.max(a, b), { tolerance: 1e-13 * Math.max(a, b) });
     a = b;
     fa = fb;
   }

@@ -19,6 +19,7 @@ import {
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { gaussLegendreRule } from "./kernels.js";
+import { constantPermeabilityNote } from "./validity-notes.js";
 
 /**
  * A coaxial coil of rectangular winding cross-section around a rod, with uniform current
@@ -286,15 +287,7 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
   const dR = -coef * sumIm;
   const dX = coef * sumRe;
   const validity: ValidityNote[] = [];
-  if (mur > 1) {
-    validity.push({
-      code: "constant-permeability",
-      message:
-        "A constant relative permeability is assumed; magnetic steel saturates in strong fields, so use the permeability at the surface field strength.",
-      value: mur,
-      limit: 1,
-    });
-  }
+  if (mur > 1) validity.push(constantPermeabilityNote(mur));
   return {
     resistanceChange: dR,
     reactanceChange: dX,

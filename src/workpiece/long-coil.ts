@@ -13,6 +13,7 @@ import {
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { bakerPQ } from "./kernels.js";
+import { constantPermeabilityNote } from "./validity-notes.js";
 
 /**
  * A long solenoid coil around the part (the long-coil idealisation: uniform axial field
@@ -175,15 +176,7 @@ function longCoilResult(
       limit: SHORT_COIL_LIMIT,
     });
   }
-  if (mur > 1) {
-    validity.push({
-      code: "constant-permeability",
-      message:
-        "A constant relative permeability is assumed; magnetic steel saturates in strong fields, so use the permeability at the surface field strength.",
-      value: mur,
-      limit: 1,
-    });
-  }
+  if (mur > 1) validity.push(constantPermeabilityNote(mur));
   const inductanceChange = reactanceChange / omega;
   const emptyCoilInductance = MU_0 * Math.PI * coil.innerRadius * coil.innerRadius * nn;
   const ratio = radius / delta;

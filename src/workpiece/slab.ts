@@ -6,6 +6,7 @@
 import { InputError, requireFinite, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
+import { constantPermeabilityNote } from "./validity-notes.js";
 
 /**
  * Options of {@link slabInTangentialField}.
@@ -149,15 +150,7 @@ export function slabInTangentialField(options: SlabInTangentialFieldOptions): Sl
   const { p, q } = slabFactors(thickness / (2 * delta));
   const rs = rho / delta;
   const validity: ValidityNote[] = [];
-  if (mur > 1) {
-    validity.push({
-      code: "constant-permeability",
-      message:
-        "A constant relative permeability is assumed; magnetic steel saturates in strong fields, so use the permeability at the surface field strength.",
-      value: mur,
-      limit: 1,
-    });
-  }
+  if (mur > 1) validity.push(constantPermeabilityNote(mur));
   return {
     powerPerArea: rs * p * h * h,
     reactivePowerPerArea: rs * q * h * h,
