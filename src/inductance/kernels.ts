@@ -15,7 +15,7 @@
  *   coefficients, rounded once);
  * - everywhere else (far filaments, long and short coils) the bracket itself as a convergent
  *   series of one-signed terms, replaced on its piece by a Chebyshev economisation (truncation
- *   below 4e-17 relative), so nothing cancels.
+ *   below 1e-16 relative), so nothing cancels.
  *
  * Straight-line code without loops, in pieces small enough for the JavaScript engine to inline
  * into the caller (each piece stays under V8's 460-byte bytecode inlining limit, and a public
@@ -26,6 +26,10 @@
  *
  * @packageDocumentation
  */
+import { MU_0 } from "../units/index.js";
+
+/** μ₀ π/2 [H/m]: the current-sheet solenoid is $L = (\mu_0\pi/2)\,N^2 a\,(d/l)\,K_N$. */
+export const MU_0_HALF_PI = (MU_0 * Math.PI) / 2;
 
 /**
  * Maxwell's mutual inductance of two coaxial circular filaments divided by μ₀ [m].
@@ -85,38 +89,39 @@ function maxwellFar(a: number, b: number, s: number, q: number): number {
  * $K_N = \frac{4}{3\pi k'}\,B$, $B = \frac{k'^2}{k^2}(K - E) + E - k$, $k = x/\sqrt{1+x^2}$,
  * $k' = 1/\sqrt{1+x^2}$, $m = k^2$, $m_1 = k'^2 = 1/(1+x^2)$.
  *
- * - x² < 2 (m < 2/3, long coils): $B = \tfrac{3\pi}{4} - k - m\,S(m)$, where
+ * - x < 1.4919 (m < 0.69, long coils): $B = \tfrac{3\pi}{4} - k - m\,S(m)$, where
  *   $(1-m)(K-E)/m + E = \tfrac{3\pi}{4} - m\,S(m)$ from the hypergeometric series of K and E
  *   (A&S 17.3.11, 17.3.12); S has positive Taylor coefficients
  *   $s_j = \tfrac{\pi}{2}\,a_{j+1}(2j+3)\bigl(\tfrac{1}{2j+1} - \tfrac{1}{2j+4}\bigr)$,
- *   $a_j = ((1/2)_j/j!)^2$; economised to degree 23 in $m - 0.3335$. B ≥ 0.77 here, so the
- *   subtraction costs nothing.
- * - x² ≥ 2 ($m_1$ ≤ 1/3, short coils): $B/m_1 = A(m_1) + \ln(1/k')\,C(m_1) + 1/(1+k)$ from the
+ *   $a_j = ((1/2)_j/j!)^2$; economised to degree 24 in $m - 0.34505$ (truncation below 1e-16 relative). B > 0.75
+ *   here, so the subtraction costs nothing.
+ * - x ≥ 1.4919 ($m_1$ ≤ 0.31, short coils): $B/m_1 = A(m_1) + \ln(1/k')\,C(m_1) + 1/(1+k)$ from the
  *   logarithmic expansions of K and E about m = 1 (DLMF 19.12.1, 19.12.2): every term
- *   positive; A and C economised to degree 13 and 16 in $m_1 - 0.167$. Written with 1/x, so no
+ *   positive; A and C economised to degree 13 and 15 in $m_1 - 0.15505$ (truncation below
+ *   1e-16 relative). Written with 1/x, so no
  *   square of x overflows for any finite x (the short-coil limit
  *   $K_N \to \tfrac{2}{\pi x}[\ln(4x) - \tfrac12]$ is reached smoothly).
  */
 export function nagaokaKernel(x: number): number {
-  return x * x < 2 ? nagaokaLong(x) : nagaokaShort(x);
+  return x < 1.4919 ? nagaokaLong(x) : nagaokaShort(x);
 }
 
-/** Nagaoka's coefficient for (d/l)² < 2 (m < 2/3; see {@link nagaokaKernel}). */
-function nagaokaLong(x: number): number {
+/** Nagaoka's coefficient for d/l < 1.4919 (m < 0.69; see {@link nagaokaKernel}). */
+export function nagaokaLong(x: number): number {
   const h2 = 1 + x * x;
   const h = Math.sqrt(h2);
   const m = (x * x) / h2;
-  const t = m - 0.3335;
+  const t = m - 0.34505;
   const t2 = t * t;
   const t4 = t2 * t2;
   const t8 = t4 * t4;
   const t16 = t8 * t8;
-  const sm = 0.9560710930468841 + t * 0.2590011773182561 + t2 * (0.15705611113659862 + t * 0.12609303367184382) + t4 * (0.11731497408796154 + t * 0.11957891796487662 + t2 * (0.12969581966516575 + t * 0.14714028545286184)) + t8 * (0.17271643628705455 + t * 0.20822186988874075 + t2 * (0.25647620288380035 + t * 0.32158600607253546) + t4 * (0.40916341850956434 + t * 0.5257382510516792 + t2 * (0.6845269932380227 + t * 0.9272085895635541))) + t16 * (1.230705856502284 + t * 1.2808526157231537 + t2 * (1.7030895289714985 + t * 5.497751438976406) + t4 * (7.575053288427824 + t * -7.716805726976903 + t2 * (-10.946701264093734 + t * 43.94008939278641)) + t8 * 61.23631319568136);
+  const sm = 0.9590837047194353 + t * 0.2626803707011062 + t2 * (0.1615210131571813 + t * 0.13167659712497232) + t4 * (0.12448833846536851 + t * 0.12899442779243997 + t2 * (0.14226519219828718 + t * 0.1641486849517624)) + t8 * (0.19598641937816344 + t * 0.24034762352554154 + t2 * (0.30117152206985376 + t * 0.3842688475685149) + t4 * (0.49743600219519796 + t * 0.6481869452909739 + t2 * (0.858492581193321 + t * 1.2184613015482162))) + t16 * (1.6480173657847654 + t * 1.3714449309474432 + t2 * (1.8311234372501688 + t * 9.668301445419246) + t4 * (13.609677723004072 + t * -18.829318014400663 + t2 * (-27.05541316407566 + t * 77.29260064111836)) + t8 * 109.73132533092401);
   return 0.4244131815783876 * (2.356194490192345 - x / h - m * sm) * h; // 4/(3 pi) B / k'
 }
 
-/** Nagaoka's coefficient for (d/l)² ≥ 2 (m₁ ≤ 1/3; see {@link nagaokaKernel}). */
-function nagaokaShort(x: number): number {
+/** Nagaoka's coefficient for d/l ≥ 1.4919 (m₁ ≤ 0.31; see {@link nagaokaKernel}). */
+export function nagaokaShort(x: number): number {
   // written with 1/x so that no square of x overflows for any finite x
   const r = 1 / x;
   const r2 = r * r;
@@ -124,12 +129,11 @@ function nagaokaShort(x: number): number {
   const h = x * g; // 1/k'
   const y = r2 / (1 + r2); // m1
   const l = Math.log(h); // ln(1/k')
-  const t = y - 0.167;
+  const t = y - 0.15505;
   const t2 = t * t;
   const t4 = t2 * t2;
   const t8 = t4 * t4;
-  const t16 = t8 * t8;
-  const sa = 0.8466509468998403 + t * 0.11021537240772296 + t2 * (0.04719343687211496 + t * 0.028749520457891208) + t4 * (0.020802162863004736 + t * 0.01667280065744257 + t2 * (0.014301529198231976 + t * 0.012875047509565694)) + t8 * (0.012018875371086393 + t * 0.011538537647231667 + t2 * (0.011277527717135345 + t * 0.011275136523108478) + t4 * (0.012787644415744067 + t * 0.013182839810712301));
-  const sc = 1.6837098658156304 + t * 1.2931076892785531 + t2 * (1.3737874436619024 + t * 1.5565037318428048) + t4 * (1.806429707417708 + t * 2.120987244134749 + t2 * (2.5065699959256733 + t * 2.974149482435503)) + t8 * (3.5383012863210177 + t * 4.217162161492637 + t2 * (5.033008019892142 + t * 6.015794610202404) + t4 * (7.192196439747171 + t * 8.482187701631261 + t2 * (10.151565939308602 + t * 14.645186765461931))) + t16 * 17.54153721589115;
+  const sa = 0.8453405638997589 + t * 0.10909962546129538 + t2 * (0.04618030995898027 + t * 0.027778507170890126) + t4 * (0.019835845249004194 + t * 0.015684871194643804 + t2 * (0.013270982522498738 + t * 0.011783208533763917)) + t8 * (0.01084727047616118 + t * 0.010269184253153082 + t2 * (0.009911095311745803 + t * 0.009771374806646705) + t4 * (0.010723641961110022 + t * 0.010896226921862626));
+  const sc = 1.6684507893803635 + t * 1.2609288692879321 + t2 * (1.3194991183063987 + t * 1.473101741402828) + t4 * (1.6848971731298088 + t * 1.9498576137992527 + t2 * (2.271346664794516 + t * 2.6565762752363704)) + t8 * (3.1154487403560265 + t * 3.6603900661565687 + t2 * (4.3074466173040005 + t * 5.072779918213321) + t4 * (5.928810371880571 + t * 6.9917083542647145 + t2 * (9.525896176421567 + t * 11.244464659243857)));
   return (0.4244131815783876 * (sa + l * sc + g / (g + 1))) / h; // 4/(3 pi) (B/m1) m1/k'
 }

@@ -5,9 +5,8 @@
  * @packageDocumentation
  */
 import { InputError, requireObject, requirePositive } from "../core/index.js";
-import { MU_0 } from "../units/index.js";
 import { multilayerShape, requireTurns, shapeMutual } from "./coaxial.js";
-import { nagaokaKernel } from "./kernels.js";
+import { MU_0_HALF_PI, nagaokaKernel } from "./kernels.js";
 
 /**
  * Options of {@link multilayerCoilInductance} and {@link multilayerCoilInductanceWheeler}.
@@ -73,7 +72,7 @@ export function multilayerCoilInductance(options: MultilayerCoilOptions): number
   const [r1, r2, l, n] = readMultilayer("multilayerCoilInductance", options);
   if (r2 === r1) {
     const x = (2 * r1) / l;
-    return MU_0 * n * n * r1 * ((Math.PI * x) / 2) * nagaokaKernel(x);
+    return MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x);
   }
   const s = multilayerShape(r1, r2, l, n);
   return shapeMutual(s, s, 0);

@@ -7,8 +7,9 @@
 import { InputError, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { requireTurns } from "./coaxial.js";
-import { nagaokaKernel } from "./kernels.js";
+import { MU_0_HALF_PI, nagaokaKernel, nagaokaLong, nagaokaShort } from "./kernels.js";
 import { rosaB } from "./rosa.js";
+
 
 /**
  * Nagaoka's coefficient: the inductance of a finite current-sheet solenoid relative to the
@@ -96,14 +97,17 @@ export interface SolenoidInductanceOptions {
  * @category Inductance
  */
 export function solenoidInductance(options: SolenoidInductanceOptions): number {
-  // fast path for the current sheet: valid input is checked inline
-  if (typeof options === "object" && (options as unknown) !== null && options.wireDiameter === undefined) {
+  // fast path for the current sheet, valid input checked inline; kept small so that the engine
+  // inlines it together with both Nagaoka pieces (a product of finite positives is finite
+  // unless it overflows, which only sends the call to the checked path)
+  if ((options as unknown) != null && options.wireDiameter === undefined) {
     const a = options.radius;
     const l = options.length;
     const n = options.turns;
-    if (typeof a === "number" && typeof l === "number" && typeof n === "number" && a > 0 && a < Infinity && l > 0 && l < Infinity && n >= 1 && n < Infinity) {
+    if (typeof a === "number" && typeof l === "number" && typeof n === "number" && a > 0 && l > 0 && n >= 1 && a * l * n < Infinity) {
       const x = (2 * a) / l;
-      return MU_0 * n * n * a * ((Math.PI * x) / 2) * nagaokaKernel(x);
+      // mu0 N^2 a (pi x / 2) K_N, Nagaoka's two pieces called directly (one inlining level less)
+      return MU_0_HALF_PI * n * n * a * x * (x < 1.4919 ? nagaokaLong(x) : nagaokaShort(x));
     }
   }
   return solenoidInductanceChecked(options);
@@ -118,7 +122,7 @@ function solenoidInductanceChecked(options: SolenoidInductanceOptions): number {
   const n = requireTurns(where, "turns", options.turns);
   const x = (2 * a) / l;
   // mu0 pi a^2 N^2 K_N / l = mu0 N^2 a (pi x / 2) K_N (no overflow of a^2/l for very short coils)
-  const sheet = MU_0 * n * n * a * ((Math.PI * x) / 2) * nagaokaKernel(x);
+  const sheet = MU_0_HALF_PI * n * n * a * x * nagaokaKernel(x);
   const d = options.wireDiameter;
   if (d === undefined) return sheet;
   const wire = requirePositive(where, "wireDiameter", d, "m");
