@@ -15,7 +15,7 @@
  *   coefficients, rounded once);
  * - everywhere else (far filaments, long and short coils) the bracket itself as a convergent
  *   series of one-signed terms, replaced on its piece by a Chebyshev economisation (truncation
- *   below 1e-16 relative), so nothing cancels.
+ *   below 3e-16 relative), so nothing cancels.
  *
  * Straight-line code without loops, in pieces small enough for the JavaScript engine to inline
  * into the caller (each piece stays under V8's 460-byte bytecode inlining limit, and a public
@@ -93,12 +93,12 @@ function maxwellFar(a: number, b: number, s: number, q: number): number {
  *   $(1-m)(K-E)/m + E = \tfrac{3\pi}{4} - m\,S(m)$ from the hypergeometric series of K and E
  *   (A&S 17.3.11, 17.3.12); S has positive Taylor coefficients
  *   $s_j = \tfrac{\pi}{2}\,a_{j+1}(2j+3)\bigl(\tfrac{1}{2j+1} - \tfrac{1}{2j+4}\bigr)$,
- *   $a_j = ((1/2)_j/j!)^2$; economised to degree 24 in $m - 0.34505$ (truncation below 1e-16 relative). B > 0.75
+ *   $a_j = ((1/2)_j/j!)^2$; economised to degree 23 in $m - 0.34505$ (truncation below 3e-16 relative). B > 0.75
  *   here, so the subtraction costs nothing.
  * - x ≥ 1.4919 ($m_1$ ≤ 0.31, short coils): $B/m_1 = A(m_1) + \ln(1/k')\,C(m_1) + 1/(1+k)$ from the
  *   logarithmic expansions of K and E about m = 1 (DLMF 19.12.1, 19.12.2): every term
- *   positive; A and C economised to degree 13 and 15 in $m_1 - 0.15505$ (truncation below
- *   1e-16 relative). Written with 1/x, so no
+ *   positive; A and C economised to degree 12 and 15 in $m_1 - 0.15505$ (truncation below
+ *   3e-16 and 1e-16 relative). Written with 1/x, so no
  *   square of x overflows for any finite x (the short-coil limit
  *   $K_N \to \tfrac{2}{\pi x}[\ln(4x) - \tfrac12]$ is reached smoothly).
  */
@@ -116,7 +116,7 @@ export function nagaokaLong(x: number): number {
   const t4 = t2 * t2;
   const t8 = t4 * t4;
   const t16 = t8 * t8;
-  const sm = 0.9590837047194353 + t * 0.2626803707011062 + t2 * (0.1615210131571813 + t * 0.13167659712497232) + t4 * (0.12448833846536851 + t * 0.12899442779243997 + t2 * (0.14226519219828718 + t * 0.1641486849517624)) + t8 * (0.19598641937816344 + t * 0.24034762352554154 + t2 * (0.30117152206985376 + t * 0.3842688475685149) + t4 * (0.49743600219519796 + t * 0.6481869452909739 + t2 * (0.858492581193321 + t * 1.2184613015482162))) + t16 * (1.6480173657847654 + t * 1.3714449309474432 + t2 * (1.8311234372501688 + t * 9.668301445419246) + t4 * (13.609677723004072 + t * -18.829318014400663 + t2 * (-27.05541316407566 + t * 77.29260064111836)) + t8 * 109.73132533092401);
+  const sm = 0.9590837047194352 + t * 0.26268037070110795 + t2 * (0.16152101315742387 + t * 0.13167659712366814) + t4 * (0.1244883383673799 + t * 0.12899442807968234 + t2 * (0.14226520767949688 + t * 0.16414865578612947)) + t8 * (0.19598515710231504 + t * 0.24034926720466793 + t2 * (0.3012321929835644 + t * 0.3842123010082375) + t4 * (0.4955887544224622 + t * 0.6494353871200212 + t2 * (0.8954930650086271 + t * 1.2004043325863039))) + t16 * (1.153883788557394 + t * 1.5416391748048446 + t2 * (6.187864198552359 + t * 8.66147216599344) + t4 * (-10.741264313079158 + t * -15.43544606561676 + t2 * (51.105886578628116 + t * 72.32003816991339)));
   return 0.4244131815783876 * (2.356194490192345 - x / h - m * sm) * h; // 4/(3 pi) B / k'
 }
 
@@ -133,7 +133,7 @@ export function nagaokaShort(x: number): number {
   const t2 = t * t;
   const t4 = t2 * t2;
   const t8 = t4 * t4;
-  const sa = 0.8453405638997589 + t * 0.10909962546129538 + t2 * (0.04618030995898027 + t * 0.027778507170890126) + t4 * (0.019835845249004194 + t * 0.015684871194643804 + t2 * (0.013270982522498738 + t * 0.011783208533763917)) + t8 * (0.01084727047616118 + t * 0.010269184253153082 + t2 * (0.009911095311745803 + t * 0.009771374806646705) + t4 * (0.010723641961110022 + t * 0.010896226921862626));
+  const sa = 0.8453405638997589 + t * 0.10909962546128875 + t2 * (0.0461803099589993 + t * 0.027778507178635375) + t4 * (0.019835845239756726 + t * 0.015684868614220755 + t2 * (0.013270984165494593 + t * 0.011783576880728905)) + t8 * (0.01084713856138556 + t * 0.010243629020940673 + t2 * (0.00991597609422959 + t * 0.010622289970347348) + t4 * 0.010655930251862684);
   const sc = 1.6684507893803635 + t * 1.2609288692879321 + t2 * (1.3194991183063987 + t * 1.473101741402828) + t4 * (1.6848971731298088 + t * 1.9498576137992527 + t2 * (2.271346664794516 + t * 2.6565762752363704)) + t8 * (3.1154487403560265 + t * 3.6603900661565687 + t2 * (4.3074466173040005 + t * 5.072779918213321) + t4 * (5.928810371880571 + t * 6.9917083542647145 + t2 * (9.525896176421567 + t * 11.244464659243857)));
   return (0.4244131815783876 * (sa + l * sc + g / (g + 1))) / h; // 4/(3 pi) (B/m1) m1/k'
 }
