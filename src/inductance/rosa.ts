@@ -17,7 +17,7 @@ import { requireInRange, requireInteger } from "../core/index.js";
  * @remarks Exact for the defining formula; the formula itself assumes wire and pitch small
  * compared with the coil radius and uniform current in the wire (low frequency).
  * @see E. B. Rosa, "The self and mutual inductances of linear conductors", Bull. Bur. Stand. 4 (1908)
- *   and Rosa, Bull. Bur. Stand. 2, 161 (1906); F. W. Grover, Inductance Calculations (1946), Table 7 (A).
+ *   and Rosa, Bull. Bur. Stand. 2, 161 (1906); F. W. Grover, Inductance Calculations (1946), the table of A (table number not confirmed).
  * @example
  * ```ts
  * import { rosaCorrectionA } from "fluxwright";
@@ -82,10 +82,10 @@ function powerSum(p: number, a: number, b: number): number {
  * and the power sums by Euler–Maclaurin, so the cost does not grow with N.
  *
  * @param turns - number of turns N, an integer ≥ 1
- * @returns B (dimensionless): 0 for one turn, 0.1137 for two, rising to 0.3186 for many
+ * @returns B (dimensionless): 0 for one turn, 0.1137 for two, rising to 0.3269 at 100 turns and towards 0.3379 for very many
  * @throws {@link InputError} when turns is not an integer ≥ 1
  * @remarks Accuracy ≤ 1e-12 relative vs the defining sum evaluated in mpmath (fixture rosa.json).
- * @see E. B. Rosa, Bull. Bur. Stand. 2, 161 (1906); F. W. Grover, Inductance Calculations (1946), Table 8 (B).
+ * @see E. B. Rosa, Bull. Bur. Stand. 2, 161 (1906); F. W. Grover, Inductance Calculations (1946), p. 150 (table of B).
  * @example
  * ```ts
  * import { rosaCorrectionB } from "fluxwright";
