@@ -36,7 +36,7 @@ console.log(
 );
 check(Math.abs(warmer.tankVoltagePeak - 24 * Math.PI) < 1e-9, "tank peak must be π·Vdc");
 check(Math.abs(warmer.circulatingToSupplyRatio - (Math.SQRT2 * warmer.qualityFactor) / Math.PI) < 1e-9, "ratio must be √2·Q/π");
-check(warmer.cautions.some((c) => c.code === "tank-voltage-above-elv"), "53 V RMS tank must carry the ELV caution");
+check(warmer.cautions.some((c) => c.code === "voltage-above-extra-low"), "53 V RMS tank must carry the ELV caution");
 for (const c of warmer.cautions) console.log(`  caution [${c.severity}] ${c.message}`);
 
 // Capacitor bank for it: 2 µF from E12 units rated 250 V RMS and 20 A RMS at the frequency.

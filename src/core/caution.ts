@@ -20,7 +20,7 @@ export type CautionSeverity = "info" | "warning" | "danger";
  * @category Cautions
  */
 export interface Caution {
-  /** A stable machine-readable code of fluxwright's own, e.g. `"tank-voltage-above-elv"`. */
+  /** A stable machine-readable code of fluxwright's own, e.g. `"voltage-above-extra-low"`. */
   readonly code: string;
   /** How serious it is. */
   readonly severity: CautionSeverity;

@@ -15,4 +15,6 @@ export {
   requireObject,
 } from "./validate.js";
 export { DEFER_TO_CODES } from "./caution.js";
+export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "./extra-low-voltage.js";
+export type { VoltageCautionOptions } from "./extra-low-voltage.js";
 export type { Caution, CautionSeverity, ValidityNote } from "./caution.js";

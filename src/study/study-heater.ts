@@ -482,10 +482,15 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
     });
   }
   const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity);
-  // the tank models' own voltage cautions repeat the safety module's; keep their other ones
-  const fromSafety = new Set(cautions.map((c) => c.code));
+  // the operating points' own cautions (tank voltage, hard switching) join the list once per code:
+  // the safety module's caution of the same code, or the first point's, stands for the rest
+  const seen = new Set(cautions.map((c) => c.code));
   for (const p of allPoints) {
-    for (const c of p.cautions) if (!(c.code === "tank-voltage-above-elv" && fromSafety.has("voltage-above-extra-low"))) cautions.push(c);
+    for (const c of p.cautions) {
+      if (seen.has(c.code)) continue;
+      seen.add(c.code);
+      cautions.push(c);
+    }
   }
   return {
     title: d.title,

@@ -6,22 +6,13 @@
  * @packageDocumentation
  */
 import {
-  DEFER_TO_CODES,
   InputError,
   requireObject,
   requirePositive,
+  voltageCaution,
   type Caution,
   type ValidityNote,
 } from "../core/index.js";
-
-/**
- * The extra-low-voltage limit used for tank-voltage cautions: 50 V a.c. RMS, the upper end of
- * voltage band I (ELV) referred to by IEC 61140:2016 (band limits from IEC 60449). Applied
- * conservatively at any frequency.
- *
- * @category Inverters
- */
-export const EXTRA_LOW_VOLTAGE_AC_RMS = 50;
 
 /**
  * Options of {@link currentFedParallelInverter}.
@@ -145,7 +136,7 @@ const HARMONIC_SUM = (Math.PI * Math.PI) / 48 + 1 / 16;
  * const op = currentFedParallelInverter({ supplyVoltage: 24, inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 });
  * console.log(op.tankVoltagePeak); // ≈ 75.398
  * console.log(op.supplyCurrent); // ≈ 2.3687
- * console.log(op.cautions[0]?.code); // tank-voltage-above-elv
+ * console.log(op.cautions[0]?.code); // voltage-above-extra-low
  * ```
  * @category Inverters
  */
@@ -176,17 +167,9 @@ export function currentFedParallelInverter(options: CurrentFedParallelInverterOp
   const chokeRipple = choke === null ? null : (RIPPLE_FACTOR * supplyVoltage) / (omega * choke);
 
   const cautions: Caution[] = [];
-  if (tankVoltageRms > EXTRA_LOW_VOLTAGE_AC_RMS) {
-    cautions.push({
-      code: "tank-voltage-above-elv",
-      severity: "danger",
-      message: `The tank voltage (${tankVoltageRms.toPrecision(3)} V RMS, ${tankVoltagePeak.toPrecision(3)} V peak) exceeds extra-low voltage (50 V a.c. RMS): the coil, capacitors and switch nodes are a shock and burn hazard and need enclosure or insulation. ${DEFER_TO_CODES}`,
-      value: tankVoltageRms,
-      limit: EXTRA_LOW_VOLTAGE_AC_RMS,
-      unit: "V",
-      source: "IEC 61140:2016 (extra-low voltage, band I of IEC 60449: 50 V a.c. RMS)",
-    });
-  }
+  const voltage = voltageCaution({ voltage: tankVoltageRms, waveform: "ac", location: "resonant tank" });
+  if (voltage !== null) cautions.push(voltage);
+
   const validity: ValidityNote[] = [];
   if (qualityFactor < 3) {
     validity.push({

@@ -10,9 +10,9 @@ import {
   requireObject,
   requireOneOf,
   requirePositive,
+  voltageCaution,
   type Caution,
 } from "../core/index.js";
-import { EXTRA_LOW_VOLTAGE_AC_RMS } from "./current-fed-inverter.js";
 
 /**
  * Options of {@link seriesInverter}.
@@ -144,17 +144,9 @@ export function seriesInverter(options: SeriesInverterOptions): SeriesInverter {
     });
   }
   const capacitorVoltageRms = capacitorVoltagePeak / Math.SQRT2;
-  if (capacitorVoltageRms > EXTRA_LOW_VOLTAGE_AC_RMS) {
-    cautions.push({
-      code: "tank-voltage-above-elv",
-      severity: "danger",
-      message: `The capacitor voltage (${capacitorVoltageRms.toPrecision(3)} V RMS) exceeds extra-low voltage (50 V a.c. RMS): the tank is a shock and burn hazard. ${DEFER_TO_CODES}`,
-      value: capacitorVoltageRms,
-      limit: EXTRA_LOW_VOLTAGE_AC_RMS,
-      unit: "V",
-      source: "IEC 61140:2016 (extra-low voltage, band I of IEC 60449: 50 V a.c. RMS)",
-    });
-  }
+  const voltage = voltageCaution({ voltage: capacitorVoltageRms, waveform: "ac", location: "tank capacitor" });
+  if (voltage !== null) cautions.push(voltage);
+
   return {
     switchingFrequency: fs,
     resonantFrequency: f0,

@@ -62,7 +62,7 @@ describe("currentFedParallelInverter", () => {
     expect(low.cautions).toHaveLength(0); // 12·π/√2 = 26.7 V RMS < 50 V (IEC 61140 ELV band)
     const high = currentFedParallelInverter({ supplyVoltage: 24, inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 });
     const c = high.cautions[0];
-    expect(c?.code).toBe("tank-voltage-above-elv");
+    expect(c?.code).toBe("voltage-above-extra-low");
     expect(c?.limit).toBe(50); // IEC 61140:2016 / IEC 60449 band I
     expect(c?.value).toBeCloseTo((24 * Math.PI) / Math.SQRT2, 9);
     expect(c?.message.endsWith("Consult local codes and licensed practice.")).toBe(true);

@@ -1,0 +1,102 @@
+/**
+ * The extra-low-voltage limits of IEC 61140 and the caution for a voltage above them. It lives
+ * in `core` because several modules (tank, safety, study) raise the same caution, with one code.
+ *
+ * @packageDocumentation
+ */
+import { DEFER_TO_CODES } from "./caution.js";
+import type { Caution } from "./caution.js";
+import { InputError } from "./input-error.js";
+import { requireFinite, requireObject, requireOneOf } from "./validate.js";
+
+/**
+ * Extra-low-voltage limits of IEC 61140 [V]: 50 V AC (RMS) and 120 V ripple-free DC.
+ *
+ * @see IEC 61140:2016, Protection against electric shock — Common aspects for installation and
+ *   equipment (extra-low voltage: voltage band I of IEC 60449; clause numbers not quoted, the
+ *   limits are the well-known ones).
+ * @example
+ * ```ts
+ * import { EXTRA_LOW_VOLTAGE_LIMITS } from "fluxwright";
+ * console.log(EXTRA_LOW_VOLTAGE_LIMITS.acRms, EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc); // 50 120
+ * ```
+ * @category Cautions
+ */
+export const EXTRA_LOW_VOLTAGE_LIMITS: {
+  /** AC limit, RMS [V]. */
+  readonly acRms: 50;
+  /** Ripple-free DC limit [V]. */
+  readonly rippleFreeDc: 120;
+} = Object.freeze({
+  acRms: 50,
+  rippleFreeDc: 120,
+});
+
+/**
+ * Options of {@link voltageCaution}.
+ *
+ * @category Cautions
+ */
+export interface VoltageCautionOptions {
+  /** The voltage [V]: the RMS value for `"ac"`, the value for `"dc"`; its magnitude is used. */
+  readonly voltage: number;
+  /** `"ac"` (compared with 50 V RMS) or `"dc"` (ripple-free DC, compared with 120 V). */
+  readonly waveform: "ac" | "dc";
+  /** What carries the voltage, for the message, e.g. `"tank capacitor"` (default `"circuit"`). */
+  readonly location?: string;
+}
+
+/**
+ * A caution when a voltage exceeds the extra-low-voltage limit of IEC 61140 (50 V AC RMS,
+ * 120 V ripple-free DC): touching such parts can drive a dangerous current through the body.
+ * Code `"voltage-above-extra-low"`, severity `"danger"`; `null` at or below the limit.
+ *
+ * Hard domain (throws {@link InputError}): non-finite voltage; unknown waveform.
+ *
+ * @param options - voltage, waveform and where it appears
+ * @returns the caution, or `null`
+ * @throws {@link InputError} on bad input
+ * @see IEC 61140:2016 (extra-low voltage limits); {@link EXTRA_LOW_VOLTAGE_LIMITS}.
+ * @example
+ * ```ts
+ * import { voltageCaution } from "fluxwright";
+ * console.log(voltageCaution({ voltage: 230, waveform: "ac", location: "tank" })?.code); // voltage-above-extra-low
+ * console.log(voltageCaution({ voltage: 24, waveform: "dc" })); // null
+ * ```
+ * @category Cautions
+ */
+export function voltageCaution(options: VoltageCautionOptions): Caution | null {
+  const where = "voltageCaution";
+  requireObject(where, "options", options);
+  const v = Math.abs(requireFinite(where, "voltage", options.voltage, "V"));
+  const waveform = requireOneOf(where, "waveform", options.waveform, ["ac", "dc"] as const);
+  const location = optionalText(where, "location", options.location, "circuit");
+  const limit = waveform === "ac" ? EXTRA_LOW_VOLTAGE_LIMITS.acRms : EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc;
+  if (v <= limit) return null;
+  const kind = waveform === "ac" ? "V AC (RMS)" : "V DC";
+  return {
+    code: "voltage-above-extra-low",
+    severity: "danger",
+    message: `The ${location} reaches ${round(v)} ${kind}, above the extra-low-voltage limit of ${limit} ${kind}: contact can cause a dangerous electric shock. Enclose live parts, discharge capacitors before touching, and use insulated tools. ${DEFER_TO_CODES}`,
+    value: v,
+    limit,
+    unit: "V",
+    source: "IEC 61140:2016, extra-low voltage limits (50 V AC RMS, 120 V ripple-free DC; voltage band I of IEC 60449)",
+  };
+}
+
+
+/** An optional text option, or the fallback when it is absent. */
+function optionalText(where: string, parameter: string, value: unknown, fallback: string): string {
+  if (value === undefined) return fallback;
+  if (typeof value !== "string") throw new InputError(where, parameter, value, "", "a string");
+  return value;
+}
+
+/** Three significant digits, plain notation where sensible. */
+function round(value: number): string {
+  if (value === 0) return "0";
+  const a = Math.abs(value);
+  if (a >= 1e-3 && a < 1e6) return String(Number(value.toPrecision(3)));
+  return value.toPrecision(3);
+}
