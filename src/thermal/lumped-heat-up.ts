@@ -73,7 +73,7 @@ export interface LumpedHeatUpOptions {
 export interface LumpedEnergyBalance {
   /** Heat absorbed from the heater, $\int P\,dt$ [J]. */
   readonly input: number;
-  /** Heat stored in the part, $m \int_{T_0}^{T_{end}} c(T)\,dT$ (by quadrature) [J]. */
+  /** Heat stored in the part, $m \int_{T_0}^{T_{end}} c(T)\,dT$ (exact for the material's specific-heat model, via `specificEnthalpyChange`) [J]. */
   readonly stored: number;
   /** Heat lost by convection, $\int hA(T - T_a)\,dt$ [J]. */
   readonly convection: number;

@@ -1,7 +1,6 @@
 /**
  * Internal helpers shared by the thermal models: the surface heat loss by convection and
- * radiation, a safeguarded bracketed root finder, an adaptive Simpson quadrature, and input
- * checks. Not part of the public surface.
+ * radiation, and input checks. Not part of the public surface.
  *
  * @packageDocumentation
  */
