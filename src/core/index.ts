@@ -13,6 +13,8 @@ export {
   requireInteger,
   requireOneOf,
   requireObject,
+  requireKnownKeys,
+  nearestName,
 } from "./validate.js";
 export { DEFER_TO_CODES } from "./caution.js";
 export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "./extra-low-voltage.js";

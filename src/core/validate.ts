@@ -188,3 +188,93 @@ export function requireObject(where: string, parameter: string, value: unknown):
   }
   return value as Record<string, unknown>;
 }
+
+/** Edit distance (Levenshtein, insert/delete/substitute = 1) between two short strings. */
+function editDistance(a: string, b: string): number {
+  const row: number[] = [];
+  for (let j = 0; j <= b.length; j++) row.push(j);
+  for (let i = 1; i <= a.length; i++) {
+    let diagonal = row[0] ?? 0;
+    row[0] = i;
+    for (let j = 1; j <= b.length; j++) {
+      const above = row[j] ?? 0;
+      const cost = a.charCodeAt(i - 1) === b.charCodeAt(j - 1) ? 0 : 1;
+      row[j] = Math.min(above + 1, (row[j - 1] ?? 0) + 1, diagonal + cost);
+      diagonal = above;
+    }
+  }
+  return row[b.length] ?? 0;
+}
+
+/**
+ * The known name closest to `name` (case-insensitive edit distance), or `null` when none is
+ * close enough to be a likely typo (distance above a third of the longer name, at least 2).
+ *
+ * @param name - the unknown name as written
+ * @param known - the names that are accepted
+ * @returns the suggestion, or `null`
+ * @example
+ * ```ts
+ * import { nearestName } from "fluxwright";
+ * console.log(nearestName("relativePermeabilty", ["diameter", "relativePermeability"])); // relativePermeability
+ * ```
+ * @category Validation
+ */
+export function nearestName(name: string, known: readonly string[]): string | null {
+  const lower = name.toLowerCase();
+  let best: string | null = null;
+  let bestDistance = Infinity;
+  for (const candidate of known) {
+    const distance = editDistance(lower, candidate.toLowerCase());
+    if (distance < bestDistance) {
+      bestDistance = distance;
+      best = candidate;
+    }
+  }
+  if (best === null) return null;
+  const allowed = Math.max(2, Math.floor(Math.max(name.length, best.length) / 3));
+  return bestDistance <= allowed ? best : null;
+}
+
+/**
+ * Requires that an options object has no fields besides `known`: a misspelt optional field
+ * would otherwise fall back to its default without a word. The error names the field and
+ * suggests the nearest known one. The valid path allocates nothing (one `for…in` over the
+ * object's own keys, each looked up in `known`).
+ *
+ * @param where - the public function doing the check
+ * @param path - the options parameter's name or field path (`"options"`, `"coil"`); the error names `path.key`
+ * @param value - the options object (already checked to be an object)
+ * @param known - every accepted field name
+ * @returns the value, unchanged
+ * @throws {@link InputError} when `value` is not an object, or naming the first unknown field with the nearest known name
+ * @example
+ * ```ts
+ * import { requireKnownKeys } from "fluxwright";
+ * try {
+ *   requireKnownKeys("demo", "options", { radius: 1, lenght: 2 }, ["radius", "length"]);
+ * } catch (e) {
+ *   console.log((e as Error).message); // demo: options.lenght must be absent (unknown field; did you mean "length"? known fields: radius, length), got 2
+ * }
+ * ```
+ * @category Validation
+ */
+export function requireKnownKeys<T extends object>(where: string, path: string, value: T, known: readonly string[]): T {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) {
+    throw new InputError(where, path === "" ? "options" : path, value, "", "an object");
+  }
+  for (const key in value) {
+    if (!Object.prototype.hasOwnProperty.call(value, key)) continue;
+    if (known.includes(key)) continue;
+    const suggestion = nearestName(key, known);
+    const hint = suggestion === null ? "" : `did you mean ${JSON.stringify(suggestion)}? `;
+    throw new InputError(
+      where,
+      path === "" ? key : `${path}.${key}`,
+      (value as Record<string, unknown>)[key],
+      "",
+      `absent (unknown field; ${hint}known fields: ${known.join(", ")})`,
+    );
+  }
+  return value;
+}

@@ -99,3 +99,34 @@ describe("validation helpers", () => {
     for (const bad of [null, [], 3, "x", undefined]) expect(() => requireObject("f", "options", bad)).toThrow(InputError);
   });
 });
+
+describe("requireKnownKeys and nearestName", () => {
+  it("requireKnownKeys returns the object when every field is known", async () => {
+    const { requireKnownKeys } = await import("../../src/core/index.js");
+    const options = { radius: 1, length: 2 };
+    expect(requireKnownKeys("f", "options", options, ["radius", "length", "turns"])).toBe(options);
+  });
+  it("requireKnownKeys names the unknown field and suggests the nearest known one", async () => {
+    const { requireKnownKeys } = await import("../../src/core/index.js");
+    let error: unknown = null;
+    try {
+      requireKnownKeys("roundWireAcRatio", "options", { diameter: 1e-3, relativePermeabilty: 1000 }, ["diameter", "relativePermeability"]);
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as InputError).parameter).toBe("options.relativePermeabilty");
+    expect((error as InputError).message).toContain('did you mean "relativePermeability"?');
+  });
+  it("requireKnownKeys offers no suggestion for an unrelated name", async () => {
+    const { requireKnownKeys } = await import("../../src/core/index.js");
+    expect(() => requireKnownKeys("f", "", { zzzzzz: 1 }, ["radius"])).toThrow(/zzzzzz must be absent \(unknown field; known fields: radius\)/);
+  });
+  it("nearestName is case-insensitive and bounded by a third of the name", async () => {
+    const { nearestName } = await import("../../src/core/index.js");
+    expect(nearestName("TankVoltageRMS", ["tankVoltageRms", "coilCurrentRms"])).toBe("tankVoltageRms");
+    expect(nearestName("heatup", ["heatUp", "points"])).toBe("heatUp");
+    expect(nearestName("frequency", ["radius"])).toBeNull();
+    expect(nearestName("x", [])).toBeNull();
+  });
+});

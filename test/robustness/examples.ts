@@ -172,6 +172,11 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     skip: { paths: ["3", "3.*"], reason: "`allowed` is the calling function's own constant list, not checked input" },
   },
   requireObject: { args: () => ["demo", "options", { radius: 1 }], skip: { paths: ["2.*"], reason: "any object is valid; its contents are not looked at" } },
+  requireKnownKeys: {
+    args: () => ["demo", "options", { radius: 1 }, ["radius", "length"]],
+    skip: { paths: ["2.*", "3", "3.*"], reason: "field values are not looked at, only their names; `known` is the calling function's own constant list" },
+  },
+  nearestName: { args: () => ["relativePermeabilty", ["diameter", "relativePermeability"]], kind: "kernel" },
 
   // ---------------------------------------------------------------- units
   metres: brand(0.025),
