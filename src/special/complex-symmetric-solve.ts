@@ -163,3 +163,94 @@ export function complexSymmetricSolve(
     }
   }
 }
+
+/**
+ * Solves $A X = B$ for a general dense complex n×n matrix (row-major, overwritten) by Gaussian
+ * elimination with partial pivoting; m right-hand sides column after column in (bRe, bIm),
+ * overwritten by X. Returns false for a singular matrix. Cost n³/3 + m·n² complex
+ * multiply-adds; for the small systems of reduced models.
+ */
+export function complexGeneralSolve(
+  n: number,
+  re: Float64Array,
+  im: Float64Array,
+  bRe: Float64Array,
+  bIm: Float64Array,
+  m = 1,
+): boolean {
+  for (let j = 0; j < n; j++) {
+    // pivot: largest modulus in column j at or below the diagonal
+    let p = j;
+    let best = -1;
+    for (let i = j; i < n; i++) {
+      const v = re[i * n + j]! ** 2 + im[i * n + j]! ** 2;
+      if (v > best) {
+        best = v;
+        p = i;
+      }
+    }
+    if (!(best > 0) || !Number.isFinite(best)) return false;
+    if (p !== j) {
+      for (let k = 0; k < n; k++) {
+        const tr = re[j * n + k]!;
+        const ti = im[j * n + k]!;
+        re[j * n + k] = re[p * n + k]!;
+        im[j * n + k] = im[p * n + k]!;
+        re[p * n + k] = tr;
+        im[p * n + k] = ti;
+      }
+      for (let c = 0; c < m; c++) {
+        const tr = bRe[c * n + j]!;
+        const ti = bIm[c * n + j]!;
+        bRe[c * n + j] = bRe[c * n + p]!;
+        bIm[c * n + j] = bIm[c * n + p]!;
+        bRe[c * n + p] = tr;
+        bIm[c * n + p] = ti;
+      }
+    }
+    const dr = re[j * n + j]!;
+    const di = im[j * n + j]!;
+    const mag = dr * dr + di * di;
+    const invRe = dr / mag;
+    const invIm = -di / mag;
+    for (let i = j + 1; i < n; i++) {
+      const ar = re[i * n + j]!;
+      const ai = im[i * n + j]!;
+      const fr = ar * invRe - ai * invIm;
+      const fi = ar * invIm + ai * invRe;
+      if (fr === 0 && fi === 0) continue;
+      for (let k = j + 1; k < n; k++) {
+        const xr = re[j * n + k]!;
+        const xi = im[j * n + k]!;
+        re[i * n + k] = re[i * n + k]! - (fr * xr - fi * xi);
+        im[i * n + k] = im[i * n + k]! - (fr * xi + fi * xr);
+      }
+      for (let c = 0; c < m; c++) {
+        const xr = bRe[c * n + j]!;
+        const xi = bIm[c * n + j]!;
+        bRe[c * n + i] = bRe[c * n + i]! - (fr * xr - fi * xi);
+        bIm[c * n + i] = bIm[c * n + i]! - (fr * xi + fi * xr);
+      }
+    }
+  }
+  for (let c = 0; c < m; c++) {
+    for (let i = n - 1; i >= 0; i--) {
+      let sr = bRe[c * n + i]!;
+      let si = bIm[c * n + i]!;
+      for (let k = i + 1; k < n; k++) {
+        const ar = re[i * n + k]!;
+        const ai = im[i * n + k]!;
+        const xr = bRe[c * n + k]!;
+        const xi = bIm[c * n + k]!;
+        sr -= ar * xr - ai * xi;
+        si -= ar * xi + ai * xr;
+      }
+      const dr = re[i * n + i]!;
+      const di = im[i * n + i]!;
+      const mag = dr * dr + di * di;
+      bRe[c * n + i] = (sr * dr + si * di) / mag;
+      bIm[c * n + i] = (si * dr - sr * di) / mag;
+    }
+  }
+  return true;
+}

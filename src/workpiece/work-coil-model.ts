@@ -265,20 +265,36 @@ export function rodScale(p: RodPart, rMax: number): number {
   return scale;
 }
 
+/** Part geometry for the kernel columns (material-free). */
+export type PartGeometry = { readonly kind: "rod"; readonly radius: number } | { readonly kind: "plate"; readonly top: number };
+
 /**
- * Adds the part's reflected coupling jω ΔM to the folded matrix (zRe, zIm, m×m) at angular
- * frequency omega. Rod: ΔM_ij = 2μ0 ∫ C̃(α) G_i G_j cos(α(z_i − z_j)) dα with
- * G = r K1s(αr) e^{−α(r − a)}; plate: ΔM_ij = πμ0 ∫ Γ(α) H_i H_j dα, H = r J1(αr) e^{−α h}.
- * The cell kernels are taken at the cell centroids. Returns the number of α nodes used.
+ * The part's kernel in factored form: ΔM = Q (C diag(c(α)) Cᵀ) Qᵀ over the folded unknowns, with
+ * Q (m × r, orthonormal columns) spanning the cell kernel vectors of every α node (cos and, for
+ * an unfolded rod, sin columns; weights folded in as √w), C = Qᵀ F (r × columns), and c(α) the
+ * material's reflection coefficient times the kernel's constant. Material-independent: built
+ * once per coil mesh and part geometry.
  */
-export function addPartCoupling(
-  red: Reduction,
-  cells: CellSet,
-  part: RodPart | PlatePart,
-  omega: number,
-  zRe: Float64Array,
-  zIm: Float64Array,
-): number {
+export interface PartKernel {
+  readonly geometry: PartGeometry;
+  readonly rule: AlphaRule;
+  /** Columns per α node: 2 for an unfolded rod (cos, sin), else 1. */
+  readonly perNode: number;
+  readonly r: number;
+  /** Q, column-major (column q at q·m). */
+  readonly q: Float64Array;
+  /** C, row-major r × (perNode · K). */
+  readonly c: Float64Array;
+}
+
+/** Relative truncation of the kernel columns' span (ΔM relative error of the same order). */
+const KERNEL_TOLERANCE = 1e-8;
+
+/**
+ * Builds the factored part kernel for a geometry; `floor` is the lowest α scale the material
+ * needs resolved (the rule is graded down to it).
+ */
+export function partKernel(red: Reduction, cells: CellSet, geometry: PartGeometry, floor: number): PartKernel {
   const m = red.m;
   const n = cells.n;
   let rMax = 0;
@@ -286,87 +302,236 @@ export function addPartCoupling(
   let zMax = -Infinity;
   let gapMin = Infinity;
   for (let i = 0; i < n; i++) {
+    if (cells.turn[i]! < 0) continue;
     rMax = Math.max(rMax, cells.r[i]! + cells.size[i]!);
     zMin = Math.min(zMin, cells.z[i]!);
     zMax = Math.max(zMax, cells.z[i]!);
-    const d = part.kind === "rod" ? cells.r[i]! - part.radius : cells.z[i]! - part.top;
+    const d = geometry.kind === "rod" ? cells.r[i]! - geometry.radius : cells.z[i]! - geometry.top;
     gapMin = Math.min(gapMin, d);
   }
   const folded = red.members.length !== red.m; // mirror folding: the sin part cancels
-  const cc = new Float64Array(2);
+  // the grading stops at 1e-6/rMax at the lowest (kernel columns grow as α^(−1/2) towards 0)
+  floor = Math.max(floor, 1e-6 / rMax);
   let rule: AlphaRule;
-  if (part.kind === "rod") {
+  if (geometry.kind === "rod") {
     const zExt = Math.max(zMax - zMin, gapMin);
-    rule = alphaRule(Math.min((2 * Math.PI) / zExt, 2 / gapMin), rodScale(part, rMax) / 8, TOP / gapMin);
+    rule = alphaRule(Math.min((2 * Math.PI) / zExt, 2 / gapMin), Math.min(floor, 1 / rMax) / 8, TOP / gapMin);
   } else {
-    let scale = 1 / rMax;
-    const lay = part.layers;
-    for (let i = 0; i < lay.k.length; i++) {
-      scale = Math.min(scale, Math.sqrt(lay.k[i]!) / lay.mu[i]!);
-      const t = lay.t[i]!;
-      if (t < Infinity) scale = Math.min(scale, (lay.k[i]! * t) / (2 * lay.mu[i]!), 1 / (lay.mu[i]! * t));
-    }
-    rule = alphaRule(Math.min((2 * Math.PI) / rMax, 2 / gapMin), scale / 8, TOP / gapMin);
+    rule = alphaRule(Math.min((2 * Math.PI) / rMax, 2 / gapMin), Math.min(floor, 1 / rMax) / 8, TOP / gapMin);
   }
   const K = rule.nodes.length;
-  const fc = new Float64Array(m);
-  const fs = new Float64Array(m);
+  const perNode = geometry.kind === "rod" && !folded ? 2 : 1;
+  const cols = perNode * K;
+  const f = new Float64Array(cols * m); // column-major
   const ms = red.memberStart;
   for (let k = 0; k < K; k++) {
     const alpha = rule.nodes[k]!;
-    let factor: number;
-    if (part.kind === "rod") {
-      rodReflectionScaled(alpha, part.radius, part.innerRadius, part.kk, part.mur, cc);
-      factor = 2 * MU_0 * rule.weights[k]!;
-    } else {
-      reflectionInto(alpha, part.layers, cc);
-      factor = Math.PI * MU_0 * rule.weights[k]!;
-    }
-    const cRe = cc[0]! * factor;
-    const cIm = cc[1]! * factor;
-    if (!(Math.abs(cRe) + Math.abs(cIm) > 0)) continue;
-    let any = false;
+    const sw = Math.sqrt(rule.weights[k]!);
     for (let a = 0; a < m; a++) {
       let sc = 0;
       let ss = 0;
       for (let x = ms[a]!; x < ms[a + 1]!; x++) {
         const i = red.members[x]!;
         const r = cells.r[i]!;
-        if (part.kind === "rod") {
-          const g = r * besselK1Scaled(alpha * r) * Math.exp(-alpha * (r - part.radius));
+        if (geometry.kind === "rod") {
+          const g = r * besselK1Scaled(alpha * r) * Math.exp(-alpha * (r - geometry.radius));
           const z = cells.z[i]!;
           sc += g * Math.cos(alpha * z);
           ss += g * Math.sin(alpha * z);
         } else {
-          sc += r * besselJ1(alpha * r) * Math.exp(-alpha * (cells.z[i]! - part.top));
+          sc += r * besselJ1(alpha * r) * Math.exp(-alpha * (cells.z[i]! - geometry.top));
         }
       }
-      fc[a] = sc;
-      fs[a] = ss;
-      if (sc !== 0 || ss !== 0) any = true;
+      f[perNode * k * m + a] = sw * sc;
+      if (perNode === 2) f[(2 * k + 1) * m + a] = sw * ss;
     }
-    if (!any) continue;
-    // jω (cRe + j cIm) F Fᵀ: real part −ω cIm, imaginary ω cRe
-    const pr = -omega * cIm;
-    const pi = omega * cRe;
-    const useSin = part.kind === "rod" && !folded;
-    for (let a = 0; a < m; a++) {
-      const fa = fc[a]!;
-      const sa = fs[a]!;
-      const row = a * m;
-      for (let b = 0; b <= a; b++) {
-        const v = fa * fc[b]! + (useSin ? sa * fs[b]! : 0);
-        zRe[row + b] = zRe[row + b]! + pr * v;
-        zIm[row + b] = zIm[row + b]! + pi * v;
+  }
+  // the span is truncated in a norm that weighs each column by min(1, α r_max): the reflection
+  // coefficients vanish as α² towards α = 0, where the columns themselves grow as α^(−1/2)
+  const scaled = Float64Array.from(f);
+  for (let col = 0; col < cols; col++) {
+    const s = Math.min(1, rule.nodes[Math.floor(col / perNode)]! * rMax);
+    for (let a = 0; a < m; a++) scaled[col * m + a] = scaled[col * m + a]! * s;
+  }
+  const { q, r } = pivotedGramSchmidt(m, cols, scaled, KERNEL_TOLERANCE);
+  // C = Qᵀ F (row-major r × cols), from the original columns
+  const c = new Float64Array(r * cols);
+  const orig = f;
+  for (let p = 0; p < r; p++) {
+    for (let col = 0; col < cols; col++) {
+      let sum = 0;
+      const qo = p * m;
+      const fo = col * m;
+      for (let a = 0; a < m; a++) sum += q[qo + a]! * orig[fo + a]!;
+      c[p * cols + col] = sum;
+    }
+  }
+  return { geometry, rule, perNode, r, q, c };
+}
+
+/**
+ * Column-pivoted modified Gram–Schmidt on `cols` columns of length m (column-major, not
+ * modified): an orthonormal basis Q of their span, stopping when every remaining column's
+ * norm is below `tol` times the largest column norm.
+ */
+export function pivotedGramSchmidt(m: number, cols: number, a: Float64Array, tol: number): { q: Float64Array; r: number } {
+  const work = Float64Array.from(a);
+  const norm2 = new Float64Array(cols);
+  let largest = 0;
+  for (let col = 0; col < cols; col++) {
+    let s = 0;
+    for (let i = 0; i < m; i++) s += work[col * m + i]! ** 2;
+    norm2[col] = s;
+    largest = Math.max(largest, s);
+  }
+  const basis: number[] = [];
+  const q = new Float64Array(Math.min(m, cols) * m);
+  let r = 0;
+  const limit = tol * tol * largest;
+  while (r < Math.min(m, cols)) {
+    let best = -1;
+    let bestN = limit;
+    for (let col = 0; col < cols; col++) {
+      if (norm2[col]! > bestN) {
+        bestN = norm2[col]!;
+        best = col;
+      }
+    }
+    if (best < 0) break;
+    // normalise, re-orthogonalise once against the basis (twice is enough)
+    const v = work.subarray(best * m, best * m + m);
+    for (let pass = 0; pass < 2; pass++) {
+      for (let p = 0; p < r; p++) {
+        let d = 0;
+        for (let i = 0; i < m; i++) d += q[p * m + i]! * v[i]!;
+        for (let i = 0; i < m; i++) v[i] = v[i]! - d * q[p * m + i]!;
+      }
+    }
+    let nv = 0;
+    for (let i = 0; i < m; i++) nv += v[i]! ** 2;
+    if (!(nv > limit)) {
+      norm2[best] = 0;
+      continue;
+    }
+    const inv = 1 / Math.sqrt(nv);
+    for (let i = 0; i < m; i++) q[r * m + i] = v[i]! * inv;
+    norm2[best] = 0;
+    // remove the new direction from the remaining columns
+    for (let col = 0; col < cols; col++) {
+      if (norm2[col] === 0) continue;
+      let d = 0;
+      const o = col * m;
+      for (let i = 0; i < m; i++) d += q[r * m + i]! * work[o + i]!;
+      for (let i = 0; i < m; i++) work[o + i] = work[o + i]! - d * q[r * m + i]!;
+      norm2[col] = Math.max(0, norm2[col]! - d * d);
+    }
+    basis.push(best);
+    r++;
+  }
+  return { q: q.subarray(0, r * m), r };
+}
+
+/** Material of a kernel part at one frequency (rod: bore radius a1, kk, μr; plate: layers). */
+export type PartMaterial =
+  | { readonly kind: "rod"; readonly innerRadius: number; readonly kk: number; readonly mur: number }
+  | { readonly kind: "plate"; readonly layers: LayerArrays };
+
+/** c(α_k) times the kernel constant for every node (re, im), into out (length 2K). */
+export function partCoefficients(kernel: PartKernel, material: PartMaterial, out: Float64Array): void {
+  const cc = new Float64Array(2);
+  const K = kernel.rule.nodes.length;
+  for (let k = 0; k < K; k++) {
+    const alpha = kernel.rule.nodes[k]!;
+    let factor: number;
+    if (material.kind === "rod" && kernel.geometry.kind === "rod") {
+      rodReflectionScaled(alpha, kernel.geometry.radius, material.innerRadius, material.kk, material.mur, cc);
+      factor = 2 * MU_0;
+    } else if (material.kind === "plate") {
+      reflectionInto(alpha, material.layers, cc);
+      factor = Math.PI * MU_0;
+    } else {
+      throw new Error("internal: part material and kernel differ");
+    }
+    out[2 * k] = cc[0]! * factor;
+    out[2 * k + 1] = cc[1]! * factor;
+  }
+}
+
+/** The r × r complex core M = C diag(c) Cᵀ (c per node, repeated for the node's columns). */
+export function kernelCore(kernel: PartKernel, coefficients: Float64Array, mRe: Float64Array, mIm: Float64Array): void {
+  const r = kernel.r;
+  const per = kernel.perNode;
+  const cols = per * kernel.rule.nodes.length;
+  const c = kernel.c;
+  mRe.fill(0);
+  mIm.fill(0);
+  for (let p = 0; p < r; p++) {
+    for (let q = 0; q <= p; q++) {
+      let sr = 0;
+      let si = 0;
+      const op = p * cols;
+      const oq = q * cols;
+      for (let col = 0; col < cols; col++) {
+        const v = c[op + col]! * c[oq + col]!;
+        const node = per === 2 ? col >> 1 : col;
+        sr += v * coefficients[2 * node]!;
+        si += v * coefficients[2 * node + 1]!;
+      }
+      mRe[p * r + q] = mRe[q * r + p] = sr;
+      mIm[p * r + q] = mIm[q * r + p] = si;
+    }
+  }
+}
+
+/**
+ * Adds jω Q M Qᵀ (the part's reflected coupling) to the folded matrix (zRe, zIm, m×m).
+ */
+export function addKernel(m: number, kernel: PartKernel, mRe: Float64Array, mIm: Float64Array, omega: number, zRe: Float64Array, zIm: Float64Array): void {
+  const r = kernel.r;
+  const q = kernel.q;
+  // T = Q M (m × r, complex), then Z += jω T Qᵀ
+  const tRe = new Float64Array(m * r);
+  const tIm = new Float64Array(m * r);
+  for (let a = 0; a < m; a++) {
+    for (let p = 0; p < r; p++) {
+      let sr = 0;
+      let si = 0;
+      for (let s = 0; s < r; s++) {
+        const v = q[s * m + a]!;
+        sr += v * mRe[s * r + p]!;
+        si += v * mIm[s * r + p]!;
+      }
+      tRe[a * r + p] = sr;
+      tIm[a * r + p] = si;
+    }
+  }
+  for (let a = 0; a < m; a++) {
+    for (let b = 0; b <= a; b++) {
+      let sr = 0;
+      let si = 0;
+      for (let p = 0; p < r; p++) {
+        const v = q[p * m + b]!;
+        sr += tRe[a * r + p]! * v;
+        si += tIm[a * r + p]! * v;
+      }
+      // jω (sr + j si) = −ω si + j ω sr
+      zRe[a * m + b] = zRe[a * m + b]! - omega * si;
+      zIm[a * m + b] = zIm[a * m + b]! + omega * sr;
+      if (b !== a) {
+        zRe[b * m + a] = zRe[a * m + b]!;
+        zIm[b * m + a] = zIm[a * m + b]!;
       }
     }
   }
-  // mirror the lower triangle to the upper (the factorisation reads the lower only, but keep it whole)
-  for (let a = 0; a < m; a++) {
-    for (let b = 0; b < a; b++) {
-      zRe[b * m + a] = zRe[a * m + b]!;
-      zIm[b * m + a] = zIm[a * m + b]!;
-    }
+}
+
+/** Material scale of a plate's reflection coefficient near α = 0 (as rodScale). */
+export function plateScale(lay: LayerArrays): number {
+  let scale = Infinity;
+  for (let i = 0; i < lay.k.length; i++) {
+    scale = Math.min(scale, Math.sqrt(lay.k[i]!) / lay.mu[i]!);
+    const t = lay.t[i]!;
+    if (t < Infinity) scale = Math.min(scale, (lay.k[i]! * t) / (2 * lay.mu[i]!), 1 / (lay.mu[i]! * t));
   }
-  return K;
+  return scale;
 }

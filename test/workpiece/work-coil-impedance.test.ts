@@ -238,3 +238,65 @@ describe("workCoilImpedance: contract and behaviour", () => {
     expect(() => prepareWorkCoil({ coil, frequency: 1e3, part: {} } as never)).toThrow(InputError);
   });
 });
+
+describe("prepareWorkCoil(...).reduce: the fast path against the full solve", () => {
+  it("solenoid with a bar: R, L, ΔL within 2e-4 and ΔR within 1e-3 of the full model between the trained frequencies", () => {
+    const prepared = prepareWorkCoil({
+      coil: { shape: "solenoid", radius: 0.02, length: 0.032, turns: 4, conductor: { kind: "tube", outerDiameter: 0.006, wallThickness: 0.001 }, resistivity: copper },
+      frequency: 50e3,
+    });
+    const part = { shape: "bar", radius: 0.008, length: 0.4, resistivity: 2e-7, relativePermeability: 50 } as const;
+    const fast = prepared.reduce({ part, minFrequency: 10e3, maxFrequency: 50e3 });
+    expect(fast.basisSize).toBeGreaterThan(0);
+    for (const [f, rho, mur] of [
+      [10e3, 2e-7, 50],
+      [23.9e3, 4e-7, 150],
+      [46.5e3, 1e-7, 1],
+      [12e3, 1e-6, 300],
+      [31e3, 1e-8, 1],
+    ] as const) {
+      const a = fast.impedance(f, rho, mur);
+      const b = prepared.impedance(f, { ...part, resistivity: rho, relativePermeability: mur });
+      expect(Math.abs(a.resistance / b.resistance - 1)).toBeLessThan(2e-4);
+      expect(Math.abs(a.inductance / b.inductance - 1)).toBeLessThan(2e-4);
+      expect(Math.abs(a.inductanceChange / b.inductanceChange - 1)).toBeLessThan(2e-4);
+      expect(Math.abs(a.reflectedResistance / b.reflectedResistance - 1)).toBeLessThan(1e-3);
+      expect(Math.abs(a.emptyResistance / b.emptyResistance - 1)).toBeLessThan(2e-4);
+      expect(a.outsideTrainedRange).toBe(false);
+    }
+    expect(fast.impedance(100e3, 2e-7, 50).outsideTrainedRange).toBe(true);
+    expect(() => fast.impedance(20e3, -1, 50)).toThrow(InputError);
+    expect(() => fast.impedance(20e3, 1e-7, 0.5)).toThrow(InputError);
+  });
+
+  it("pancake over a plate (small coil): same tolerances", () => {
+    const prepared = prepareWorkCoil({
+      coil: { shape: "pancake", innerRadius: 0.015, pitch: 0.007, turns: 3, conductor: { kind: "tube", outerDiameter: 0.005, wallThickness: 0.001 }, resistivity: copper },
+      frequency: 40e3,
+    });
+    const part = { shape: "plate", radius: 0.2, thickness: 0.003, gap: 0.004, resistivity: 4e-8, relativePermeability: 1 } as const;
+    const fast = prepared.reduce({ part, minFrequency: 20e3, maxFrequency: 40e3 });
+    for (const [f, rho, mur] of [
+      [27e3, 4e-8, 1],
+      [35e3, 2e-7, 100],
+    ] as const) {
+      const a = fast.impedance(f, rho, mur);
+      const b = prepared.impedance(f, { ...part, resistivity: rho, relativePermeability: mur });
+      expect(Math.abs(a.resistance / b.resistance - 1)).toBeLessThan(2e-4);
+      expect(Math.abs(a.inductance / b.inductance - 1)).toBeLessThan(2e-4);
+      expect(Math.abs(a.inductanceChange / b.inductanceChange - 1)).toBeLessThan(2e-4);
+      expect(Math.abs(a.reflectedResistance / b.reflectedResistance - 1)).toBeLessThan(1e-3);
+    }
+  });
+
+  it("falls back to the full solve for a short non-magnetic bar (own cells)", () => {
+    const prepared = prepareWorkCoil({
+      coil: { shape: "solenoid", radius: 0.02, length: 0.012, turns: 2, conductor: { kind: "round", diameter: 0.002 }, resistivity: copper },
+      frequency: 10e3,
+    });
+    const part = { shape: "bar", radius: 0.012, length: 0.01, resistivity: 4e-8, relativePermeability: 1 } as const;
+    const fast = prepared.reduce({ part, minFrequency: 5e3, maxFrequency: 10e3 });
+    expect(fast.basisSize).toBe(0);
+    expect(fast.impedance(8e3, 4e-8, 1).resistance).toBe(prepared.impedance(8e3, { ...part, resistivity: 4e-8 }).resistance);
+  });
+});
