@@ -143,8 +143,9 @@ export interface WorkCoilImpedanceOptions {
   /** The part, see {@link WorkCoilPart}; omitted for the empty coil. */
   readonly part?: WorkCoilPart;
   /**
-   * Mesh refinement [-], in [0.5, 4], default 1: the cells at the conductor surfaces are a third
-   * of a skin depth thick divided by this factor (cost grows about as its cube).
+   * Mesh refinement [-], in [0.5, 4], default 1: the cells at the conductor surfaces are δ/4.5
+   * thick (δ the skin depth), divided by this factor; the cost grows about as its sixth power
+   * for the solve.
    */
   readonly refinement?: number;
 }
@@ -344,7 +345,7 @@ function skinDepthOf(resistivity: number, frequency: number, mur = 1): number {
 function controlsFor(geo: CoilGeometry, delta: number, refinement: number): CellControls {
   const size = Math.max(geo.radialHalf, geo.axialHalf);
   return {
-    surfaceLayer: Math.min(delta / 3, size / 2) / refinement,
+    surfaceLayer: Math.min(delta / 4.5, size / 2) / refinement,
     growth: 1 + 0.3 / refinement,
     sectors: 2 * Math.round(8 * refinement),
     maxDepth: 6 * delta,
@@ -1142,8 +1143,9 @@ function dcResistanceOf(geo: CoilGeometry): number {
  * tube or plate), at the coil terminals without leads.
  *
  * Model: every turn is a closed coaxial ring of its real cross-section (helical pitch
- * ignored), split into ring cells of uniform current density, graded to a third of a skin
- * depth at the conductor surfaces. With cell resistances $R_i = 2\pi\rho/\int_i dA/r$, the
+ * ignored), split into ring cells of uniform current density, δ/4.5 thick at the conductor
+ * surfaces (δ the skin depth) and growing by 1.3 per layer inwards, 16 sectors around a round
+ * turn. With cell resistances $R_i = 2\pi\rho/\int_i dA/r$, the
  * partial inductances $L_{ij}$ (Maxwell's formula for coaxial filaments with the
  * geometric-mean-distance correction for neighbouring cells) and the part's reflected
  * coupling $\Delta M_{ij}(\omega)$, the cells of one turn share the turn's voltage and the
