@@ -49,6 +49,9 @@ export { workCoilImpedance, prepareWorkCoil } from "./work-coil-impedance.js";
 export type {
   PreparedWorkCoil,
   PrepareWorkCoilOptions,
+  ReducedWorkCoil,
+  ReducedWorkCoilResult,
+  ReduceWorkCoilOptions,
   WorkCoilConductor,
   WorkCoilImpedanceOptions,
   WorkCoilImpedanceResult,

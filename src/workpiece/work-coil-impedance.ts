@@ -47,10 +47,36 @@ import { constantPermeabilityNote } from "./validity-notes.js";
  * @category Workpiece
  */
 export type WorkCoilConductor =
-  | { readonly kind: "tube"; readonly outerDiameter: number; readonly wallThickness: number }
-  | { readonly kind: "round"; readonly diameter: number }
-  | { readonly kind: "strip"; readonly width: number; readonly thickness: number }
-  | { readonly kind: "litz"; readonly strands: number; readonly strandDiameter: number };
+  | {
+      /** Round tube. */
+      readonly kind: "tube";
+      /** Outer diameter [m], > 0. */
+      readonly outerDiameter: number;
+      /** Wall thickness [m], in (0, outerDiameter/2]. */
+      readonly wallThickness: number;
+    }
+  | {
+      /** Solid round wire. */
+      readonly kind: "round";
+      /** Wire diameter [m], > 0. */
+      readonly diameter: number;
+    }
+  | {
+      /** Rectangular strip. */
+      readonly kind: "strip";
+      /** Width [m], > 0: the side facing the part (along the axis of a solenoid, the radius of a pancake). */
+      readonly width: number;
+      /** Thickness [m], > 0. */
+      readonly thickness: number;
+    }
+  | {
+      /** Litz, homogenised. */
+      readonly kind: "litz";
+      /** Number of strands, an integer ≥ 1. */
+      readonly strands: number;
+      /** Bare diameter of one strand [m], > 0. */
+      readonly strandDiameter: number;
+    };
 
 /**
  * A solenoid work coil: `turns` closed coaxial rings (helical pitch ignored) with centres at
@@ -59,6 +85,7 @@ export type WorkCoilConductor =
  * @category Workpiece
  */
 export interface WorkCoilSolenoid {
+  /** A solenoid. */
   readonly shape: "solenoid";
   /** Radius of the turn centres [m], > the conductor's radial half-size. */
   readonly radius: number;
@@ -79,6 +106,7 @@ export interface WorkCoilSolenoid {
  * @category Workpiece
  */
 export interface WorkCoilPancake {
+  /** A flat pancake. */
   readonly shape: "pancake";
   /** Radius of the first (innermost) turn's centre [m], > the conductor's radial half-size. */
   readonly innerRadius: number;
@@ -107,26 +135,43 @@ export interface WorkCoilPancake {
  */
 export type WorkCoilPart =
   | {
+      /** A solid round bar, centred on the coil. */
       readonly shape: "bar";
+      /** Bar radius [m], > 0 and inside the turns' inner faces. */
       readonly radius: number;
+      /** Bar length [m], > 0. */
       readonly length: number;
+      /** Resistivity [Ω·m], > 0. */
       readonly resistivity: number;
+      /** Relative permeability [-], ≥ 1 (constant). */
       readonly relativePermeability: number;
     }
   | {
+      /** A hollow round tube, centred on the coil. */
       readonly shape: "tube";
+      /** Outer radius [m], > 0 and inside the turns' inner faces. */
       readonly radius: number;
+      /** Bore radius [m], > 0 and < radius. */
       readonly innerRadius: number;
+      /** Tube length [m], > 0. */
       readonly length: number;
+      /** Resistivity [Ω·m], > 0. */
       readonly resistivity: number;
+      /** Relative permeability [-], ≥ 1 (constant). */
       readonly relativePermeability: number;
     }
   | {
+      /** A round plate below the coil. */
       readonly shape: "plate";
+      /** Plate radius [m], > 0. */
       readonly radius: number;
+      /** Plate thickness [m], > 0. */
       readonly thickness: number;
+      /** Gap from the lowest turn's conductor surface down to the plate's top face [m], > 0. */
       readonly gap: number;
+      /** Resistivity [Ω·m], > 0. */
       readonly resistivity: number;
+      /** Relative permeability [-], ≥ 1 (constant). */
       readonly relativePermeability: number;
     };
 
