@@ -1235,7 +1235,7 @@ function dcResistanceOf(geo: CoilGeometry): number {
  * reflected resistance within 0.6 % — except where the part adds less than a tenth of the empty
  * coil's resistance: there ΔR is a small difference of two larger resistances and the copper's
  * own discretisation error dominates it (pancake over aluminium at 60 kHz, ΔR = 0.067 R₀:
- * 6.0 %; use `refinement` > 1 or `partResistance`, the part loss itself, within 0.4 %). The
+ * 6.0 %, 2.7 % at `refinement` 1.5; `partResistance`, the part loss itself, is within 0.4 %). The
  * tests assert the issue-14 tolerances (L 2 %, R and ΔR 3 %, that ΔR case 6.5 %) plus the
  * reference's uncertainty. DC resistance exact (≤ 1e-9); an isolated ring's AC
  * resistance within 1 % of the exact tube and wire solution ({@link tubeAcResistance}); the
