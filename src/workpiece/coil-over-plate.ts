@@ -171,13 +171,13 @@ function checkCoil(where: string, coil: unknown): CoilAbovePlate {
 }
 
 /** Layer data for the reflection coefficient: k = ωμ0μr/ρ, μr, thickness. */
-interface LayerArrays {
+export interface LayerArrays {
   readonly k: Float64Array;
   readonly mu: Float64Array;
   readonly t: Float64Array;
 }
 
-function layerArrays(layers: readonly PlateLayer[], omega: number): LayerArrays {
+export function layerArrays(layers: readonly PlateLayer[], omega: number): LayerArrays {
   const n = layers.length;
   const k = new Float64Array(n);
   const mu = new Float64Array(n);
@@ -195,7 +195,7 @@ function layerArrays(layers: readonly PlateLayer[], omega: number): LayerArrays 
  * Reflection coefficient Γ(α) = (α − Y)/(α + Y), Y the surface admittance of the layers,
  * written into out[0] (real) and out[1] (imaginary).
  */
-function reflectionInto(alpha: number, lay: LayerArrays, out: Float64Array): void {
+export function reflectionInto(alpha: number, lay: LayerArrays, out: Float64Array): void {
   const { k, mu, t } = lay;
   const nLayers = k.length;
   const a2 = alpha * alpha;

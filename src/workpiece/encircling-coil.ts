@@ -179,58 +179,7 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
   // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²)
   const solid = a1 < 1e-9 * a;
 
-  // R(α): (1/μr)(1/r) d(rA)/dr / A at the rod surface
-  const surfaceRatio = (alpha: number): [number, number] => {
-    const b2 = alpha * alpha;
-    const rr = Math.hypot(b2, kk);
-    const bRe = Math.sqrt(0.5 * (rr + b2));
-    const bIm = kk / (2 * bRe);
-    if (solid) {
-      const w = besselI1OverI0Complex({ re: bRe * a, im: bIm * a });
-      // β / (μr w)
-      const ww = w.re * w.re + w.im * w.im;
-      return [(bRe * w.re + bIm * w.im) / (ww * mur), (bIm * w.re - bRe * w.im) / (ww * mur)];
-    }
-    // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
-    const x1 = alpha * a1;
-    const rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
-    const z1 = { re: bRe * a1, im: bIm * a1 };
-    const i0 = besselI0ComplexScaled(z1);
-    const i1 = besselI1ComplexScaled(z1);
-    const k0 = besselK0ComplexScaled(z1);
-    const k1 = besselK1ComplexScaled(z1);
-    // num = β I0/μr − rAir I1 ; den = β K0/μr + rAir K1
-    const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
-    const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
-    const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
-    const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
-    const dd = dRe * dRe + dIm * dIm;
-    let sRe = (nRe * dRe + nIm * dIm) / dd;
-    let sIm = (nIm * dRe - nRe * dIm) / dd;
-    // scale factor e^{Re z1 + z1 − z2 − Re z2}, z = β r
-    const mag = Math.exp(2 * bRe * (a1 - a));
-    const ph = bIm * (a1 - a);
-    const eRe = mag * Math.cos(ph);
-    const eIm = mag * Math.sin(ph);
-    const tRe = sRe * eRe - sIm * eIm;
-    sIm = sRe * eIm + sIm * eRe;
-    sRe = tRe;
-    const z2 = { re: bRe * a, im: bIm * a };
-    const j0 = besselI0ComplexScaled(z2);
-    const j1 = besselI1ComplexScaled(z2);
-    const m0 = besselK0ComplexScaled(z2);
-    const m1 = besselK1ComplexScaled(z2);
-    // R = β (I0 − s K0) / (μr (I1 + s K1))
-    const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
-    const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
-    const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
-    const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
-    const pRe = bRe * uRe - bIm * uIm;
-    const pIm = bRe * uIm + bIm * uRe;
-    const vv = vRe * vRe + vIm * vIm;
-    return [(pRe * vRe + pIm * vIm) / vv, (pIm * vRe - pRe * vIm) / vv];
-  };
-
+  const cc = new Float64Array(2);
   let sumRe = 0;
   let sumIm = 0;
   const panel = (lo: number, hi: number): void => {
@@ -239,20 +188,9 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
     for (let i = 0; i < PANEL_NODES; i++) {
       const alpha = mid + half * RULE.nodes[i]!;
       const wt = half * RULE.weights[i]!;
-      const x = alpha * a;
-      const [rRe, rIm] = surfaceRatio(alpha);
-      const i0 = besselI0Scaled(x);
-      const i1 = besselI1Scaled(x);
-      const k0 = besselK0Scaled(x);
-      const k1 = besselK1Scaled(x);
-      // C̃ = (α I0 − R I1)/(α K0 + R K1) (scaled; true C = e^{2x} C̃)
-      const nRe = alpha * i0 - rRe * i1;
-      const nIm = -rIm * i1;
-      const dRe = alpha * k0 + rRe * k1;
-      const dIm = rIm * k1;
-      const dd = dRe * dRe + dIm * dIm;
-      const cRe = (nRe * dRe + nIm * dIm) / dd;
-      const cIm = (nIm * dRe - nRe * dIm) / dd;
+      rodReflectionScaled(alpha, a, a1, kk, mur, cc);
+      const cRe = cc[0]!;
+      const cIm = cc[1]!;
       // κ e^{α r1} = Gs(α r1) − e^{−α (r2 − r1)} Gs(α r2)
       const kap = kMomentTailScaled(alpha * r1) - Math.exp(-alpha * (r2 - r1)) * kMomentTailScaled(alpha * r2);
       const s = Math.sin(0.5 * alpha * len);
@@ -295,4 +233,84 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
     skinDepth: Math.sqrt((2 * rho) / (omega * MU_0 * mur)),
     validity,
   };
+}
+
+/**
+ * The rod's reflection coefficient of the Dodd–Deeds–Luquire solution, exponentially scaled:
+ * writes $\tilde C = e^{-2\alpha a}C$ into out[0] (real) and out[1] (imaginary), with
+ * $C = (\alpha I_0(\alpha a) - R\,I_1(\alpha a))/(\alpha K_0(\alpha a) + R\,K_1(\alpha a))$ and R the
+ * rod's surface ratio $(1/\mu_r)(1/r)\,\partial_r(rA)/A$ at r = a (solid rod, or tube of bore
+ * radius a1 with an air bore). kk = ωμ0μr/ρ. A filament pair (r_i, z_i), (r_j, z_j) outside the
+ * rod then couples through the reflected mutual inductance
+ * $\Delta M_{ij} = 2\mu_0 r_i r_j \int_0^\infty C\,K_1(\alpha r_i) K_1(\alpha r_j)\cos(\alpha(z_i - z_j))\,d\alpha$.
+ * Internal kernel shared by {@link encirclingCoilOverRod} and the work-coil impedance model.
+ */
+export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: number, mur: number, out: Float64Array): void {
+  const b2 = alpha * alpha;
+  const rr = Math.hypot(b2, kk);
+  const bRe = Math.sqrt(0.5 * (rr + b2));
+  const bIm = kk / (2 * bRe);
+  let rRe: number;
+  let rIm: number;
+  // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²)
+  if (a1 < 1e-9 * a) {
+    const w = besselI1OverI0Complex({ re: bRe * a, im: bIm * a });
+    // β / (μr w)
+    const ww = w.re * w.re + w.im * w.im;
+    rRe = (bRe * w.re + bIm * w.im) / (ww * mur);
+    rIm = (bIm * w.re - bRe * w.im) / (ww * mur);
+  } else {
+    // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
+    const x1 = alpha * a1;
+    const rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
+    const z1 = { re: bRe * a1, im: bIm * a1 };
+    const i0 = besselI0ComplexScaled(z1);
+    const i1 = besselI1ComplexScaled(z1);
+    const k0 = besselK0ComplexScaled(z1);
+    const k1 = besselK1ComplexScaled(z1);
+    // num = β I0/μr − rAir I1 ; den = β K0/μr + rAir K1
+    const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
+    const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
+    const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
+    const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
+    const dd = dRe * dRe + dIm * dIm;
+    let sRe = (nRe * dRe + nIm * dIm) / dd;
+    let sIm = (nIm * dRe - nRe * dIm) / dd;
+    // scale factor e^{Re z1 + z1 − z2 − Re z2}, z = β r
+    const mag = Math.exp(2 * bRe * (a1 - a));
+    const ph = bIm * (a1 - a);
+    const eRe = mag * Math.cos(ph);
+    const eIm = mag * Math.sin(ph);
+    const tRe = sRe * eRe - sIm * eIm;
+    sIm = sRe * eIm + sIm * eRe;
+    sRe = tRe;
+    const z2 = { re: bRe * a, im: bIm * a };
+    const j0 = besselI0ComplexScaled(z2);
+    const j1 = besselI1ComplexScaled(z2);
+    const m0 = besselK0ComplexScaled(z2);
+    const m1 = besselK1ComplexScaled(z2);
+    // R = β (I0 − s K0) / (μr (I1 + s K1))
+    const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
+    const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
+    const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
+    const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
+    const pRe = bRe * uRe - bIm * uIm;
+    const pIm = bRe * uIm + bIm * uRe;
+    const vv = vRe * vRe + vIm * vIm;
+    rRe = (pRe * vRe + pIm * vIm) / vv;
+    rIm = (pIm * vRe - pRe * vIm) / vv;
+  }
+  const x = alpha * a;
+  const i0 = besselI0Scaled(x);
+  const i1 = besselI1Scaled(x);
+  const k0 = besselK0Scaled(x);
+  const k1 = besselK1Scaled(x);
+  // C̃ = (α I0 − R I1)/(α K0 + R K1) (scaled; true C = e^{2x} C̃)
+  const nRe = alpha * i0 - rRe * i1;
+  const nIm = -rIm * i1;
+  const dRe = alpha * k0 + rRe * k1;
+  const dIm = rIm * k1;
+  const dd = dRe * dRe + dIm * dIm;
+  out[0] = (nRe * dRe + nIm * dIm) / dd;
+  out[1] = (nIm * dRe - nRe * dIm) / dd;
 }

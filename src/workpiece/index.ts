@@ -45,3 +45,17 @@ export type {
   WorkpieceCouplingAtTemperatureOptions,
   WorkpieceCouplingAtTemperatureResult,
 } from "./temperature.js";
+export { workCoilImpedance, prepareWorkCoil } from "./work-coil-impedance.js";
+export type {
+  PreparedWorkCoil,
+  PrepareWorkCoilOptions,
+  ReducedWorkCoil,
+  ReducedWorkCoilResult,
+  ReduceWorkCoilOptions,
+  WorkCoilConductor,
+  WorkCoilImpedanceOptions,
+  WorkCoilImpedanceResult,
+  WorkCoilPancake,
+  WorkCoilPart,
+  WorkCoilSolenoid,
+} from "./work-coil-impedance.js";

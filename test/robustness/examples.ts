@@ -536,6 +536,50 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ coilCurrentRms: 200, reflectedResistance: 0.05 }],
     allow: [{ paths: ["0.coilCurrentRms", "0.reflectedResistance"], kinds: ["zero"], reason: "no current or no part: zero power is in the domain" }],
   },
+  workCoilImpedance: {
+    args: () => [
+      {
+        coil: { shape: "solenoid", radius: 0.02, length: 0.012, turns: 2, conductor: { kind: "round", diameter: 0.002 }, resistivity: 1.75e-8 },
+        frequency: 1e3,
+        part: { shape: "bar", radius: 0.01, length: 0.2, resistivity: 2e-7, relativePermeability: 50 },
+      },
+    ],
+    variants: [
+      () => [
+        {
+          coil: { shape: "pancake", innerRadius: 0.01, pitch: 0.004, turns: 2, conductor: { kind: "tube", outerDiameter: 0.003, wallThickness: 0.001 }, resistivity: 1.75e-8 },
+          frequency: 1e3,
+          part: { shape: "plate", radius: 0.05, thickness: 0.002, gap: 0.003, resistivity: 4e-8, relativePermeability: 1 },
+        },
+      ],
+      () => [
+        {
+          coil: { shape: "solenoid", radius: 0.02, length: 0.01, turns: 2, conductor: { kind: "strip", width: 0.003, thickness: 0.001 }, resistivity: 1.75e-8 },
+          frequency: 1e3,
+          part: { shape: "tube", radius: 0.012, innerRadius: 0.01, length: 0.2, resistivity: 7e-7, relativePermeability: 20 },
+          refinement: 0.5,
+        },
+      ],
+      () => [
+        {
+          coil: { shape: "solenoid", radius: 0.02, length: 0.01, turns: 2, conductor: { kind: "litz", strands: 20, strandDiameter: 0.0002 }, resistivity: 1.75e-8 },
+          frequency: 1e3,
+        },
+      ],
+    ],
+    allow: [
+      { paths: ["0.part"], kinds: ["undefined"], reason: OPTIONAL + " (the empty coil)" },
+      { paths: ["0.refinement"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+  },
+  prepareWorkCoil: {
+    args: () => [
+      {
+        coil: { shape: "solenoid", radius: 0.02, length: 0.012, turns: 2, conductor: { kind: "round", diameter: 0.002 }, resistivity: 1.75e-8 },
+        frequency: 1e3,
+      },
+    ],
+  },
   encirclingCoilOverRod: {
     args: () => [
       {
