@@ -31,7 +31,7 @@ import {
   tankStresses,
 } from "../tank/index.js";
 import { MU_0 } from "../units/index.js";
-import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod } from "../workpiece/index.js";
+import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, tubeInLongCoil } from "../workpiece/index.js";
 import { conductorOuterDiameter } from "./read-description.js";
 import type { ResolvedConductor, ResolvedHeaterDescription, ResolvedSolenoidCoil } from "./read-description.js";
 
@@ -266,6 +266,8 @@ interface Coupling {
 interface CouplingModel {
   readonly key: string;
   readonly coupling: (frequency: number, resistivity: number, relativePermeability: number) => Coupling;
+  /** A cheap model with the same trends (long-coil solution), corrected to the exact one inside the iteration. */
+  readonly surrogate: (frequency: number, resistivity: number, relativePermeability: number) => Coupling;
   /** Peak tangential field strength at the part surface per RMS ampere of coil current [A/m per A]. */
   readonly fieldPerAmpere: number;
   readonly notes: readonly ValidityNote[];
@@ -354,10 +356,15 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
         limit: 1,
       });
     }
+    const longCoil = { innerRadius: layer.innerRadius, length: coil.length, turns: coil.turns };
     model = {
       key,
       fieldPerAmpere,
       notes,
+      surrogate: (f, rho, mur) => {
+        const r = tubeInLongCoil({ coil: longCoil, tube: { outerRadius: radius, innerRadius: bore, resistivity: rho, relativePermeability: mur }, frequency: f });
+        return { reflectedResistance: r.reflectedResistance, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
+      },
       coupling: (f, rho, mur) => {
         const z = evaluate(f, rho, mur);
         return { reflectedResistance: n2 * z.resistanceChange, inductanceChange: n2 * z.inductanceChange, skinDepth: Math.sqrt((2 * rho) / (2 * Math.PI * f * MU_0 * mur)) };
@@ -386,10 +393,18 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
       const b = fieldNearCoil(loops, 1, { radialDistance: r, axialPosition: -(coil.liftOff + dc / 2) });
       peak = Math.max(peak, Math.abs(b.radial));
     }
+    // surrogate: the plate's thickness as the wall of a tube of the coil's radius in a long coil
+    const outer = geometry.outerRadius;
+    const surrogateCoil = { innerRadius: outer + coil.liftOff + dc, length: 2 * outer, turns: coil.turns };
+    const surrogateBore = Math.max(0, outer - part.thickness);
     model = {
       key,
       fieldPerAmpere: (2 * Math.SQRT2 * peak) / MU_0,
       notes,
+      surrogate: (f, rho, mur) => {
+        const r = tubeInLongCoil({ coil: surrogateCoil, tube: { outerRadius: outer, innerRadius: surrogateBore, resistivity: rho, relativePermeability: mur }, frequency: f });
+        return { reflectedResistance: r.reflectedResistance, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
+      },
       coupling: (f, rho, mur) => {
         const r = coilOverPlate({ coil: geometry, plate: { thickness: part.thickness, resistivity: rho, relativePermeability: mur }, frequency: f });
         return { reflectedResistance: r.resistanceChange, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
@@ -448,6 +463,22 @@ export function heaterOperatingPoint(
   const partResistivity = resistivityAt(d.part.material, partTemperature);
   const fixedFrequency = inv.kind === "voltage-fed-series" && inv.control === "fixed" && inv.frequency !== null ? inv.frequency : null;
 
+  // the exact coupling is costly: the iteration runs on the long-coil surrogate corrected to the
+  // exact value at the last exact evaluation (R by a factor, ΔL by an offset); the outer loop
+  // re-evaluates the exact coupling at the converged point until the correction no longer moves
+  let correction: { resistance: number; inductance: number } | null = null;
+  function couple(f: number, mur: number): Coupling {
+    if (model === null) throw new RangeError("unreachable: coupling without a part");
+    if (correction === null) {
+      const exact = model.coupling(f, partResistivity, mur);
+      const cheap = model.surrogate(f, partResistivity, mur);
+      correction = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
+      return exact;
+    }
+    const cheap = model.surrogate(f, partResistivity, mur);
+    return { reflectedResistance: cheap.reflectedResistance * correction.resistance, inductanceChange: cheap.inductanceChange + correction.inductance, skinDepth: cheap.skinDepth };
+  }
+
   // concentrator: Steinmetz loss at the peak flux the coil voltage drives through its section, as a series resistance
   function evaluateCoreResistance(f: number, current: number, voltagePeak: number): number {
     if (d.concentrator === null || !(voltagePeak > 0) || !(current > 0)) return 0;
@@ -462,7 +493,7 @@ export function heaterOperatingPoint(
     // the coil's own impedance at f: the one place a frequency-dependent coil model plugs in
     const coilResistance = coilAcResistance(d, props, f, notes);
     const mur = part ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrength: h }) : 1;
-    const coupling = part && model !== null ? model.coupling(f, partResistivity, mur) : null;
+    const coupling = part && model !== null ? couple(f, mur) : null;
     const reflectedResistance = coupling?.reflectedResistance ?? 0;
     const inductanceChange = coupling?.inductanceChange ?? 0;
     const L = L0 + inductanceChange;
@@ -711,6 +742,43 @@ export function heaterOperatingPoint(
     const polished = iterate(found.frequency, found.field);
     if (polished !== null) result = polished;
     if (result === null) throw new InputError("heaterOperatingPoint", "part", partTemperature, "K", "a part temperature with an operating point the inverter can run");
+  }
+  // refresh the correction at the converged point until the exact coupling agrees with it; the
+  // corrections are a fixed point of their own, solved by the secant method per component
+  let previousCorrection: { c: { resistance: number; inductance: number }; g: { resistance: number; inductance: number } } | null = null;
+  for (let outer = 0; model !== null && outer < 16; outer++) {
+    const at = result.e;
+    const exact = model.coupling(at.f, partResistivity, at.mur);
+    const cheap = model.surrogate(at.f, partResistivity, at.mur);
+    const g = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
+    const agreed =
+      Math.abs(exact.reflectedResistance - at.reflectedResistance) <= 1e-10 * at.tankResistance &&
+      Math.abs(exact.inductanceChange - at.inductanceChange) <= 1e-11 * at.L;
+    if (agreed) {
+      // the reported numbers come from the exact coupling at this point
+      correction = g;
+      result = { ...result, e: evaluate(at.f, at.h, result.s.coilCurrentRms, result.s.tankVoltagePeak, true) };
+      break;
+    }
+    const c = correction ?? g;
+    let next = g;
+    if (previousCorrection !== null) {
+      const secant = (cn: number, gn: number, cp: number, gp: number): number => {
+        const denominator = gn - cn - (gp - cp);
+        return denominator !== 0 ? cn - ((gn - cn) * (cn - cp)) / denominator : gn;
+      };
+      const resistance = secant(c.resistance, g.resistance, previousCorrection.c.resistance, previousCorrection.g.resistance);
+      const inductance = secant(c.inductance, g.inductance, previousCorrection.c.inductance, previousCorrection.g.inductance);
+      if (resistance > 0.5 * g.resistance && resistance < 2 * g.resistance && Number.isFinite(inductance)) next = { resistance, inductance };
+    }
+    previousCorrection = { c, g };
+    correction = next;
+    const again = iterate(at.f, at.h);
+    if (again === null) {
+      correction = g;
+      break;
+    }
+    result = again;
   }
   const { e, iterations, converged } = result;
   const s = solveInverter(e, true);

@@ -195,6 +195,8 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
     const mur = relativePermeability;
     const omega = 2 * Math.PI * frequency;
     const kk = (omega * MU_0 * mur) / resistivity;
+    // a wall many skin depths thick shields the bore: the solid-rod ratio is then exact to e^{−40}
+    const thick = solid || 2 * (a - a1) * Math.sqrt(0.5 * kk) > 40;
     let sumRe = 0;
     let sumIm = 0;
     for (let j = 0; j < count; j++) {
@@ -205,7 +207,7 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
       const bIm = kk / (2 * bRe);
       let rRe: number;
       let rIm: number;
-      if (solid) {
+      if (thick) {
         const wv = besselI1OverI0Complex({ re: bRe * a, im: bIm * a });
         const ww = wv.re * wv.re + wv.im * wv.im;
         rRe = (bRe * wv.re + bIm * wv.im) / (ww * mur);

@@ -11,7 +11,7 @@ import {
   solenoidInductance,
   spiralCoilInductance,
   studyHeater,
-  tubeInLongCoil,
+  prepareEncirclingCoilOverRod,
   workCoilResistanceCurrentSheet,
   celsius,
 } from "../../src/index.js";
@@ -56,15 +56,16 @@ describe("studyHeater: every number equals the module-level call it came from", 
     expect(op.coilCurrentRms).toBe(inv.coilCurrentRms);
     expect(op.switchVoltagePeak).toBe(inv.switchVoltagePeak);
     expect(op.coilEfficiency).toBe(coilEfficiency({ coilResistance: op.coilResistance, reflectedResistance: op.reflectedResistance }));
-    // coupling and coil resistance were evaluated at the previous fixed-point iterate (within 1e-10 in frequency)
-    const coupling = tubeInLongCoil({
-      coil: { innerRadius: coil.radius - tube.outerDiameter / 2, length: coil.length, turns: coil.turns },
-      tube: { outerRadius: d.part.outerRadius, innerRadius: d.part.innerRadius, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
-      frequency: op.frequency,
-    });
-    const k = (d.part.height / coil.length) * (s.coil.inductance / coupling.emptyCoilInductance);
-    closeRel(op.reflectedResistance, coupling.reflectedResistance * k, 1e-8);
-    closeRel(op.inductanceChange, coupling.inductanceChange * k, 1e-8);
+    // coupling: the finite coil (a current layer on the tube's bore face) over the infinite ring,
+    // N² times the one-turn solution, weighted by the share of the squared field over its height
+    const one = prepareEncirclingCoilOverRod({
+      coil: { innerRadius: coil.radius - tube.outerDiameter / 2, outerRadius: coil.radius - tube.outerDiameter / 2 + tube.wallThickness, length: coil.length, turns: 1 },
+      rod: { radius: d.part.outerRadius, innerRadius: d.part.innerRadius },
+    })(op.frequency, op.partResistivity, op.partRelativePermeability);
+    const ratio = op.reflectedResistance / (coil.turns ** 2 * one.resistanceChange);
+    expect(ratio).toBeGreaterThan(0.3); // the field share over a ring shorter than the coil
+    expect(ratio).toBeLessThan(1);
+    closeRel(op.inductanceChange, coil.turns ** 2 * one.inductanceChange * ratio, 1e-8);
     const sheet = workCoilResistanceCurrentSheet({
       innerDiameter: 2 * coil.radius - tube.outerDiameter,
       coilLength: coil.length,
@@ -221,7 +222,8 @@ describe("studyHeater: plausibility of the 1 kg steel-ring shrink-fit demo (comm
   it("lists its approximations, one note per code", () => {
     const codes = s.validity.map((v) => v.code);
     expect(new Set(codes).size).toBe(codes.length);
-    expect(codes).toContain("short-coil-correction");
+    expect(codes).toContain("finite-coil-coupling");
+    expect(codes).toContain("part-shorter-than-coil");
     expect(codes).toContain("lumped-heat-up");
   });
   it("cautions come most serious first", () => {
@@ -242,7 +244,7 @@ describe("studyHeater: input handling", () => {
     expect(a.operating.frequency).toBe(raceStudy.operating.frequency);
   });
   it("a valid description the inverter cannot run (a parallel tank damped past oscillation) throws a clear InputError", () => {
-    const damped = mutate(mutate(race, "capacitor.capacitance", "10 mF"), "coil.turns", 2);
+    const damped = mutate(mutate(race, "capacitor.capacitance", "1 F"), "coil.turns", 1);
     expect(() => studyHeater(damped, { heatUp: false, temperatureScan: false, impedanceSweep: false })).toThrow(/a design the inverter can run .*coilResistance must be a finite number < √\(L\/C\)/);
   });
 
