@@ -586,16 +586,20 @@ export function heaterOperatingPoint(
   // the starting iterate: a neighbour's solution, else the empty coil's resonance and its field
   let f0 = fixedFrequency ?? 1 / (2 * Math.PI * Math.sqrt(L0 * C));
   let h0 = 0;
-  if (start !== null && withPart) {
-    f0 = fixedFrequency ?? start.frequency;
-    h0 = start.surfaceFieldStrengthPeak;
-  } else if (withPart) {
+  let emptyField = 0;
+  if (withPart) {
     try {
       const empty = solveInverter(evaluate(f0, 0, 0, 0, false), false);
       f0 = fixedFrequency ?? empty.frequency;
-      h0 = fieldOf(empty);
+      emptyField = fieldOf(empty);
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
+    }
+    h0 = emptyField;
+    // continuation from a neighbour's solution (an empty-coil start carries no field: keep the estimate)
+    if (start !== null && start.surfaceFieldStrengthPeak > 0) {
+      f0 = fixedFrequency ?? start.frequency;
+      h0 = start.surfaceFieldStrengthPeak;
     }
   }
 
@@ -679,10 +683,16 @@ export function heaterOperatingPoint(
    * (log field) for the field the resulting coil current reproduces.
    */
   function bracketField(reference: number): { frequency: number; field: number } {
+    if (!withPart) {
+      // the empty coil has no field to iterate: its inverter failure is the design's limit
+      solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      return { frequency: f0, field: 0 };
+    }
     let lastError: InputError | null = null;
     let allOscillation = true;
     const atField = (h: number): { f: number; r: number } | null => {
       let f = f0;
+      correction = null; // the first coupling at this field is exact
       try {
         let e = evaluate(f, h, 0, 0, withPart);
         let s = solveInverter(e, false);
@@ -738,7 +748,7 @@ export function heaterOperatingPoint(
 
   let result = iterate(f0, h0);
   if (result === null || !result.converged) {
-    const found = bracketField(h0);
+    const found = bracketField(Math.max(h0, emptyField));
     const polished = iterate(found.frequency, found.field);
     if (polished !== null) result = polished;
     if (result === null) throw new InputError("heaterOperatingPoint", "part", partTemperature, "K", "a part temperature with an operating point the inverter can run");
