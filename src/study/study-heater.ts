@@ -77,7 +77,7 @@ export interface HeaterHeatUp {
   readonly reachable: boolean;
   /** Temperature at the end of the simulated span [K]. */
   readonly finalTemperature: number;
-  /** Temperature the part would settle at with this heater [K] (`null` when unbounded). */
+  /** Temperature the part would settle at with this heater [K], from the power curve over the material's whole range (independent of the target); `null` when it lies above that range. */
   readonly steadyStateTemperature: number | null;
   /** Time the part crosses its Curie temperature [s], `null` when it does not. */
   readonly curieCrossingTime: number | null;
@@ -512,6 +512,16 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       relativeTolerance: 1e-8,
     });
     validity.push(...thermal.validity);
+    // the settle temperature is found on the power curve, which ends at the top of the material's range
+    let steadyStateTemperature = thermal.steadyStateTemperature;
+    if (steadyStateTemperature !== null && steadyStateTemperature > curve.range[1]) {
+      validity.push({
+        code: "settles-above-range",
+        message: `The part would still be heating at ${(curve.range[1] - 273.15).toFixed(0)} °C, the top of the material's documented range (or 50 K below melting): it settles above it, where the study has no data; the settle temperature is reported as unknown.`,
+        value: curve.range[1],
+      });
+      steadyStateTemperature = null;
+    }
     validity.push({
       code: "lumped-heat-up",
       message: `Heat-up with one part temperature (lumped model); the part power is solved at ${grid.length} temperatures from ${(curve.range[0] - 273.15).toFixed(0)} to ${(curve.range[1] - 273.15).toFixed(0)} °C (denser where it changes fast) and interpolated linearly between neighbouring solved points, never across an unsolved band.`,
@@ -542,7 +552,7 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       timeToTarget: thermal.timeToTarget,
       reachable: thermal.reachable,
       finalTemperature: thermal.finalTemperature,
-      steadyStateTemperature: thermal.steadyStateTemperature,
+      steadyStateTemperature,
       curieCrossingTime,
       times,
       temperatures,
