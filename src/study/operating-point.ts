@@ -616,7 +616,6 @@ export function heaterOperatingPoint(
       if (!(error instanceof InputError)) throw error;
       return null;
     }
-    let good = { frequency, field };
     let previous: { g0: number; g1: number; x0: number; x1: number; fScale: number; hScale: number } | null = null;
     let iterations = 1;
     for (; iterations < 80; iterations++) {
@@ -653,7 +652,7 @@ export function heaterOperatingPoint(
       previous = { g0, g1, x0: frequency / fScale, x1: field / hScale, fScale, hScale };
       coilCurrent = s.coilCurrentRms;
       coilVoltagePeak = s.tankVoltagePeak;
-      good = { frequency, field };
+      const good = { frequency, field };
       // damping: an iterate the inverter cannot run at is pulled back towards the last good one
       let accepted = false;
       for (let k = 0; k < 40; k++) {
