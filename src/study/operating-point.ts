@@ -223,7 +223,7 @@ function coilAcResistance(d: ResolvedHeaterDescription, props: CoilProperties, f
     const spaceFactor = Math.min(1, (coil.turns * props.conductorDiameter) / coil.length);
     notes.push({
       code: "coil-resistance-current-sheet",
-      message: "Coil resistance from the current-sheet estimate (current in one skin depth of the face towards the part); it ignores current on the sides and back of each turn and reads 10–30 % low for short or loosely coupled coils (common practice).",
+      message: "Coil resistance from the current-sheet estimate (current in one skin depth of the face towards the part); it ignores current on the sides and back of each turn and the proximity effect between turns, and reads low by an amount not measured here (the coil-impedance model with skin and proximity effect replaces it).",
     });
     if (thickness < 3 * delta) {
       notes.push({

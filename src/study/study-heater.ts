@@ -422,24 +422,30 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  *    frequency (`workCoilResistanceCurrentSheet`, `tubeAcResistance`, `roundWireAcRatio`,
  *    `litzAcRatio`);
  * 2. the part's coupling at its temperature (`resistivityAt`, `relativePermeabilityAt` at the
- *    surface field, `barInLongCoil` / `tubeInLongCoil` / `coilOverPlate`);
- * 3. tank and inverter (`currentFedParallelInverter`, or `seriesInverter` with
- *    `frequencyForPower`; `tankStresses`), with frequency and the field-dependent permeability
- *    iterated to a fixed point, and the supply's internal resistance and the switches'
- *    on-resistance in the loop;
- * 4. losses by place (supply, switches, coil, capacitors, concentrator core via `steinmetzLoss`,
- *    part) adding up to the input power, efficiencies (`coilEfficiency`);
- * 5. the electro-thermal heat-up (`lumpedHeatUp` driven by the part power re-solved on a
- *    temperature grid through the Curie point), the operating point against temperature and
- *    the tank impedance against frequency (`tankImpedanceSweep`);
- * 6. cautions (tank and safety modules, plus the description's own ratings) and a validity
+ *    finite coil's surface field from `fieldNearCoil`): bars, tubes and rings through the finite
+ *    coil, `prepareEncirclingCoilOverRod`, weighted by the share of the coil's squared field over
+ *    the part's length; plates through `coilOverPlate`;
+ * 3. tank and inverter fed from the source (`currentFedParallelInverterWithSource`, or
+ *    `seriesInverterWithSource` at a fixed frequency or a target power; `tankStresses`), with
+ *    frequency and the field-dependent permeability iterated to a fixed point by continuation
+ *    from the neighbouring temperature, damping, and a bracketing search over the field;
+ * 4. losses by place (supply, switches, coil, capacitors via `capacitorSeriesResistance`,
+ *    concentrator core via `sinusoidalPeakFluxDensity` and `steinmetzLoss`, part) adding up to the
+ *    input power, efficiencies (`coilEfficiency`);
+ * 5. the power curve over the material's whole temperature range (adaptive, by continuation),
+ *    the electro-thermal heat-up on it (`lumpedHeatUp`), the operating point against temperature
+ *    and the tank impedance against frequency (`tankImpedanceSweep`);
+ * 6. cautions (tank and safety modules, plus the description's ratings, plus
+ *    `tank-cannot-oscillate` for a band where the current-fed tank cannot run) and a validity
  *    list of every approximation used.
  *
- * Accuracy: the composition adds no error of its own beyond the fixed-point tolerance (1e-9
- * in frequency, 1e-8 in surface field) and the linear interpolation of part power on the
- * heat-up grid (one point per 50 K, 6 to 16, plus a dense cluster at the Curie transition); the
- * energy balance of each operating point closes to 1e-9 relative (tested). Each module's
- * accuracy and validity apply, and are listed in `validity` where they are stretched.
+ * Accuracy: the composition adds no error of its own beyond the fixed-point tolerance (1e-10
+ * in frequency, 1e-9 in surface field, exact coupling agreeing to 1e-10 of the tank resistance)
+ * and the linear interpolation of part power between neighbouring points of the power curve
+ * (refined until neighbours differ by ≤ 2 % in power and frequency, within 48 extra points); the
+ * energy balance of each operating point closes to 1e-9 relative and its terminal voltages are
+ * positive (tested); a design the source or tank cannot serve throws. Each module's accuracy and
+ * validity apply, and are listed in `validity` where they are stretched.
  *
  * @param description - the design (see {@link HeaterDescription}); text quantities allowed
  * @param options - which slower parts to run (all by default)
