@@ -290,6 +290,8 @@ export function solenoidCurrentLayer(coil: ResolvedSolenoidCoil): { innerRadius:
   return { innerRadius: inner, outerRadius: inner + depth };
 }
 
+/** The surrogate correction each solved point ended with: a continued point starts from its neighbour's. */
+const corrections = new WeakMap<OperatingPointStart, { resistance: number; inductance: number }>();
 const evaluatorCache = new Map<string, { evaluate: ReturnType<typeof prepareEncirclingCoilOverRod>; weight: number; fieldPerAmpere: number }>();
 const modelCache = new WeakMap<CoilProperties, CouplingModel>();
 
@@ -466,7 +468,8 @@ export function heaterOperatingPoint(
   // the exact coupling is costly: the iteration runs on the long-coil surrogate corrected to the
   // exact value at the last exact evaluation (R by a factor, ΔL by an offset); the outer loop
   // re-evaluates the exact coupling at the converged point until the correction no longer moves
-  let correction: { resistance: number; inductance: number } | null = null;
+  // a continued point starts from its neighbour's correction; otherwise the first coupling is exact
+  let correction: { resistance: number; inductance: number } | null = start !== null && withPart ? (corrections.get(start) ?? null) : null;
   function couple(f: number, mur: number): Coupling {
     if (model === null) throw new RangeError("unreachable: coupling without a part");
     if (correction === null) {
@@ -761,8 +764,8 @@ export function heaterOperatingPoint(
     const cheap = model.surrogate(at.f, partResistivity, at.mur);
     const g = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
     const agreed =
-      Math.abs(exact.reflectedResistance - at.reflectedResistance) <= 1e-10 * at.tankResistance &&
-      Math.abs(exact.inductanceChange - at.inductanceChange) <= 1e-11 * at.L;
+      Math.abs(exact.reflectedResistance - at.reflectedResistance) <= 1e-7 * at.tankResistance &&
+      Math.abs(exact.inductanceChange - at.inductanceChange) <= 1e-8 * at.L;
     if (agreed) {
       // the reported numbers come from the exact coupling at this point
       correction = g;
@@ -803,7 +806,7 @@ export function heaterOperatingPoint(
     });
   }
   const I2 = s.coilCurrentRms * s.coilCurrentRms;
-  const losses: HeaterLosses = {
+  const lossesPlace: HeaterLosses = {
     supply: s.sourceLoss,
     switches: s.switchLoss,
     coil: I2 * e.coilResistance,
@@ -812,7 +815,7 @@ export function heaterOperatingPoint(
     part: I2 * e.reflectedResistance,
   };
   const inputPower = s.sourcePower;
-  return {
+  const point: HeaterOperatingPoint = {
     withPart,
     partTemperature,
     frequency: s.frequency,
@@ -844,14 +847,16 @@ export function heaterOperatingPoint(
     switchCurrentRms: s.switchCurrentRms,
     qualityFactor: s.qualityFactor,
     inputPower,
-    losses,
-    efficiency: inputPower > 0 ? losses.part / inputPower : 0,
+    losses: lossesPlace,
+    efficiency: inputPower > 0 ? lossesPlace.part / inputPower : 0,
     coilEfficiency: coilEfficiency({ coilResistance: e.coilResistance, reflectedResistance: e.reflectedResistance }),
     zeroVoltageSwitching: s.zvs,
     iterations,
     cautions: s.cautions,
     validity,
   };
+  if (correction !== null) corrections.set(point, correction);
+  return point;
 }
 
 /**

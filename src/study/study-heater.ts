@@ -250,7 +250,7 @@ interface CurveSample {
 }
 
 /** Extra refinement points of the power curve beyond the initial grid. */
-const REFINEMENT_BUDGET = 48;
+const REFINEMENT_BUDGET = 32;
 
 /**
  * Samples the part's operating point from the start temperature to the top of the material's
@@ -276,7 +276,7 @@ function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operati
   const samples: CurveSample[] = [];
   if (enabled) {
     const curie = material.magnetic && material.curieTemperature !== undefined ? material.curieTemperature : null;
-    const count = initialCount ?? Math.min(24, Math.max(6, Math.ceil((top - start) / 50) + 2));
+    const count = initialCount ?? Math.min(16, Math.max(6, Math.ceil((top - start) / 100) + 2));
     const grid = new Set(temperatureGrid(start, top, count, curie, material.permeability?.transitionWidth ?? 0));
     // a cluster at the specific-heat peak (e.g. the magnetic transition of steel)
     let peakT = start;
@@ -309,7 +309,7 @@ function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operati
         if ((a.p === null) !== (b.p === null)) priority = span > 0.5 ? 10 + span : 0;
         else if (a.p !== null && b.p !== null && span > 1) {
           const change = Math.max(Math.abs(b.p.losses.part - a.p.losses.part) / pMax, Math.abs(b.p.frequency - a.p.frequency) / a.p.frequency);
-          priority = change > 0.02 ? change : 0;
+          priority = change > 0.03 ? change : 0;
         }
         if (priority > bestPriority) {
           bestPriority = priority;

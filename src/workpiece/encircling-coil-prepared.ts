@@ -58,10 +58,10 @@ export interface EncirclingCoilChange {
  */
 export type EncirclingCoilEvaluator = (frequency: number, resistivity: number, relativePermeability: number) => EncirclingCoilChange;
 
-const PANEL_NODES = 12;
+const PANEL_NODES = 6;
 const RULE = gaussLegendreRule(PANEL_NODES);
 /** Geometric panels towards α = 0 (from the first oscillation width down by 2⁻⁴⁰). */
-const GRADED_LEVELS = 40;
+const GRADED_LEVELS = 24;
 const KNOWN = ["coil", "rod"] as const;
 
 /** $e^{x}\int_x^\infty tK_1(t)\,dt$ (trapezoid rule on the cosh substitution, ≤ 1e-14 relative). */
