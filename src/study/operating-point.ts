@@ -875,3 +875,21 @@ export function coilImpedanceAt(
   const c = couplingModel(d, props).coupling(frequency, point.partResistivity, point.partRelativePermeability);
   return { inductance: props.inductance + c.inductanceChange, resistance: coilResistance + c.reflectedResistance };
 }
+
+/**
+ * The study's coupling of its part at a given frequency, resistivity and relative permeability
+ * (the exact model the operating point reports), with the surface field per ampere: for checks
+ * against field solutions at fixed material properties.
+ *
+ * @internal
+ */
+export function studyPartCoupling(
+  d: ResolvedHeaterDescription,
+  frequency: number,
+  resistivity: number,
+  relativePermeability: number,
+): { reflectedResistance: number; inductanceChange: number; fieldPerAmpere: number } {
+  const model = couplingModel(d, coilProperties(d));
+  const c = model.coupling(frequency, resistivity, relativePermeability);
+  return { reflectedResistance: c.reflectedResistance, inductanceChange: c.inductanceChange, fieldPerAmpere: model.fieldPerAmpere };
+}
