@@ -47,3 +47,5 @@ export type {
   WorkpieceCouplingAtTemperatureOptions,
   WorkpieceCouplingAtTemperatureResult,
 } from "./temperature.js";
+export { workpieceGeometry } from "./geometry.js";
+export type { WorkpieceShape, WorkpieceGeometry } from "./geometry.js";
