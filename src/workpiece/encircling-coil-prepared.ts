@@ -18,6 +18,7 @@ import {
   besselK1Scaled,
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
+import type { EncirclingCoil } from "./encircling-coil.js";
 import { gaussLegendreRule } from "./kernels.js";
 
 /**
@@ -27,10 +28,22 @@ import { gaussLegendreRule } from "./kernels.js";
  * @category Workpiece
  */
 export interface EncirclingCoilGeometry {
-  /** The coil: winding inner and outer radius, length [m] and turns (integer ≥ 1). */
-  readonly coil: { readonly innerRadius: number; readonly outerRadius: number; readonly length: number; readonly turns: number };
-  /** The rod: outer radius [m] (> 0, < coil innerRadius) and, for a tube, its bore radius [m] (≥ 0, < radius). */
-  readonly rod: { readonly radius: number; readonly innerRadius?: number };
+  /** The coil, see {@link EncirclingCoil}. */
+  readonly coil: EncirclingCoil;
+  /** The rod's radii, see {@link RodRadii}. */
+  readonly rod: RodRadii;
+}
+
+/**
+ * The radii of a rod or tube for {@link prepareEncirclingCoilOverRod}.
+ *
+ * @category Workpiece
+ */
+export interface RodRadii {
+  /** Outer radius [m], > 0 and < the coil's innerRadius. */
+  readonly radius: number;
+  /** Bore radius of a tube [m], ≥ 0 and < radius; omitted or 0 for a solid rod. */
+  readonly innerRadius?: number;
 }
 
 /**

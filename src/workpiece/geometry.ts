@@ -11,10 +11,53 @@ import { InputError, requireKnownKeys, requireNonNegative, requireObject, requir
  *
  * @category Workpiece
  */
-export type WorkpieceShape =
-  | { readonly shape: "bar"; readonly radius: number; readonly length: number }
-  | { readonly shape: "tube"; readonly outerRadius: number; readonly innerRadius: number; readonly length: number }
-  | { readonly shape: "plate"; readonly length: number; readonly width: number; readonly thickness: number };
+export type WorkpieceShape = WorkpieceBar | WorkpieceTube | WorkpiecePlate;
+
+/**
+ * A solid round bar for {@link workpieceGeometry}.
+ *
+ * @category Workpiece
+ */
+export interface WorkpieceBar {
+  /** Discriminant. */
+  readonly shape: "bar";
+  /** Radius [m], > 0. */
+  readonly radius: number;
+  /** Length [m], > 0. */
+  readonly length: number;
+}
+
+/**
+ * A tube or ring for {@link workpieceGeometry}.
+ *
+ * @category Workpiece
+ */
+export interface WorkpieceTube {
+  /** Discriminant. */
+  readonly shape: "tube";
+  /** Outer radius [m], > 0. */
+  readonly outerRadius: number;
+  /** Bore radius [m], ≥ 0 and < outerRadius. */
+  readonly innerRadius: number;
+  /** Length (a ring's height) [m], > 0. */
+  readonly length: number;
+}
+
+/**
+ * A rectangular plate for {@link workpieceGeometry}.
+ *
+ * @category Workpiece
+ */
+export interface WorkpiecePlate {
+  /** Discriminant. */
+  readonly shape: "plate";
+  /** Length [m], > 0. */
+  readonly length: number;
+  /** Width [m], > 0. */
+  readonly width: number;
+  /** Thickness [m], > 0. */
+  readonly thickness: number;
+}
 
 /**
  * Result of {@link workpieceGeometry}.
@@ -59,14 +102,14 @@ export function workpieceGeometry(part: WorkpieceShape): WorkpieceGeometry {
   const shape = requireOneOf(where, "part.shape", part.shape, ["bar", "tube", "plate"] as const);
   if (shape === "bar") {
     requireKnownKeys(where, "part", part, ["shape", "radius", "length"]);
-    const p = part as Extract<WorkpieceShape, { shape: "bar" }>;
+    const p = part as WorkpieceBar;
     const a = requirePositive(where, "part.radius", p.radius, "m");
     const l = requirePositive(where, "part.length", p.length, "m");
     return { volume: Math.PI * a * a * l, surfaceArea: 2 * Math.PI * a * (a + l) };
   }
   if (shape === "tube") {
     requireKnownKeys(where, "part", part, ["shape", "outerRadius", "innerRadius", "length"]);
-    const p = part as Extract<WorkpieceShape, { shape: "tube" }>;
+    const p = part as WorkpieceTube;
     const a = requirePositive(where, "part.outerRadius", p.outerRadius, "m");
     const b = requireNonNegative(where, "part.innerRadius", p.innerRadius, "m");
     if (!(b < a)) throw new InputError(where, "part.innerRadius", b, "m", `a finite number ≥ 0 and < part.outerRadius (${a})`);
@@ -74,7 +117,7 @@ export function workpieceGeometry(part: WorkpieceShape): WorkpieceGeometry {
     return { volume: Math.PI * (a * a - b * b) * l, surfaceArea: 2 * Math.PI * (a + b) * l + 2 * Math.PI * (a * a - b * b) };
   }
   requireKnownKeys(where, "part", part, ["shape", "length", "width", "thickness"]);
-  const p = part as Extract<WorkpieceShape, { shape: "plate" }>;
+  const p = part as WorkpiecePlate;
   const l = requirePositive(where, "part.length", p.length, "m");
   const w = requirePositive(where, "part.width", p.width, "m");
   const t = requirePositive(where, "part.thickness", p.thickness, "m");
