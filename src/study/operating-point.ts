@@ -283,12 +283,16 @@ export const SHORT_PART_ERROR_NOTE = "not yet measured against a field solution"
 
 /**
  * The study's coupling against the axisymmetric field solutions of the reference scenarios
- * (test/fixtures/field-reference): the largest relative error of the reflected resistance, and
- * of ΔL as a fraction of the loaded inductance, per scenario, as measured and checked by
- * test/study/field-reference.test.ts (on top of the fixture's own uncertainty).
+ * (test/fixtures/field-reference): the largest relative error of the part power at a given coil
+ * current (the reflected resistance against the field solution's part losses), and of ΔL as a
+ * fraction of the loaded inductance, per scenario, as measured and checked by
+ * test/study/field-reference.test.ts (on top of the fixture's own uncertainty). Measured:
+ * A (short coil, μr 50 bar) power −1.8 … −2.6 %, ΔL ≤ 0.4 %; E (pancake over aluminium) power
+ * −0.3 %, ΔL −15 % of the loaded inductance.
  */
 export const FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly resistance: number; readonly inductance: number }>> = {
   A: { resistance: 0.03, inductance: 0.005 },
+  E: { resistance: 0.005, inductance: 0.16 },
 };
 
 /** The empty solenoid's inductance (Rosa, uniform turn current) against the field solution, largest relative error measured (scenario A). */
@@ -363,7 +367,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
       {
         code: "finite-coil-coupling",
         message:
-          "Part coupling from the finite-coil solution (Dodd–Deeds–Luquire, prepareEncirclingCoilOverRod) with each turn's current spread uniformly over the conductor's radial extent and the part as infinitely long, weighted by the share of the empty coil's squared axial field at the part surface that lies over the part's length. Against the field solution with solid turns (scenario A, tube turns, short coil, μr 50 bar, 10–50 kHz) the reflected resistance reads 1.8–2.7 % low and ΔL is within 0.4 % of the loaded inductance.",
+          "Part coupling from the finite-coil solution (Dodd–Deeds–Luquire, prepareEncirclingCoilOverRod) with each turn's current spread uniformly over the conductor's radial extent and the part as infinitely long, weighted by the share of the empty coil's squared axial field at the part surface that lies over the part's length. Against the field solution with solid turns (scenario A, tube turns, short coil, μr 50 bar, 10–50 kHz) the part power reads 1.8–2.6 % low and ΔL is within 0.4 % of the loaded inductance.",
       },
     ];
     if (partLength < coil.length) {
@@ -392,7 +396,13 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
     if (part.shape !== "plate") throw new RangeError("unreachable: pancake coil over a non-plate part");
     const dc = props.conductorDiameter;
     const geometry = { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, height: dc, turns: coil.turns };
-    const notes: ValidityNote[] = [];
+    const notes: ValidityNote[] = [
+      {
+        code: "plate-coupling",
+        message:
+          "Plate coupling from the coil over an infinitely wide plate (Dodd & Deeds, coilOverPlate) with the turns as one winding of uniform current density. Against the field solution with solid turns (scenario E, 8 tube turns over aluminium, 20 kHz) the part power reads 0.3 % low and ΔL is 15 % of the loaded inductance too negative (part of it the change of the turns' own current distribution, the coil model's share).",
+      },
+    ];
     const halfSpan = Math.min(part.length, part.width) / 2;
     if (halfSpan < 1.5 * (coil.outerRadius + dc / 2)) {
       notes.push({
