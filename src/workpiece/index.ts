@@ -28,6 +28,8 @@ export type {
   PlateLayer,
 } from "./coil-over-plate.js";
 export { encirclingCoilOverRod } from "./encircling-coil.js";
+export { prepareEncirclingCoilOverRod } from "./encircling-coil-prepared.js";
+export type { EncirclingCoilGeometry, EncirclingCoilChange, EncirclingCoilEvaluator, RodRadii } from "./encircling-coil-prepared.js";
 export type {
   EncirclingCoil,
   EncirclingCoilOverRodOptions,
@@ -59,3 +61,5 @@ export type {
   WorkCoilPart,
   WorkCoilSolenoid,
 } from "./work-coil-impedance.js";
+export { workpieceGeometry } from "./geometry.js";
+export type { WorkpieceShape, WorkpieceBar, WorkpieceTube, WorkpiecePlate, WorkpieceGeometry } from "./geometry.js";
