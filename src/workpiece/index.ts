@@ -45,3 +45,5 @@ export type {
   WorkpieceCouplingAtTemperatureOptions,
   WorkpieceCouplingAtTemperatureResult,
 } from "./temperature.js";
+export { layeredCylinderInLongCoil } from "./layered-cylinder.js";
+export type { LayeredCylinderInLongCoilOptions, LayeredCylinderInLongCoilResult } from "./layered-cylinder.js";
