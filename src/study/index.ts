@@ -75,3 +75,11 @@ export type {
   HeaterSearchOptions,
 } from "./optimize-heater.js";
 export type { HeaterSummary } from "./summary.js";
+export { inductionRadialHeatUp } from "./induction-radial-heat-up.js";
+export type {
+  InductionRadialDrive,
+  InductionRadialHeatUpOptions,
+  InductionRadialHeatUpResult,
+  InductionRadialState,
+  RadialHeatedPart,
+} from "./induction-radial-heat-up.js";

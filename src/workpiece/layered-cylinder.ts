@@ -7,13 +7,7 @@
  */
 import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
-import {
-  besselI0ComplexScaled,
-  besselI1ComplexScaled,
-  besselI1OverI0Complex,
-  besselK0ComplexScaled,
-  besselK1ComplexScaled,
-} from "../special/index.js";
+import { besselI0ComplexScaled, besselI1OverI0Complex, besselIKComplexScaled } from "../special/index.js";
 import type { Complex } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import type { LongCoil } from "./long-coil.js";
@@ -216,6 +210,12 @@ export function layeredCylinderInLongCoil(options: LayeredCylinderInLongCoilOpti
 }
 
 /**
+ * Attenuation (in nepers of field amplitude, Σ Δr/δ) beyond which the shells inside are left out:
+ * their influence on the surface impedance is below e^{-2·DEEP} ≈ 2e-22 relative.
+ */
+const DEEP = 25;
+
+/**
  * The field through the shells (checked input): writes |H(r_b)|/|H(R)| at each boundary into
  * `ratios` (n + 1 values), the inward power flux difference across each shell per unit length
  * per (A/m)² of surface field into `powers` (n values), and returns Z_s = ρH'/H at the surface.
@@ -230,67 +230,88 @@ function layeredField(
   powers: Float64Array,
 ): Complex {
   const n = radii.length;
+  // Shells deeper than DEEP skin depths below the surface are left out: the field starts in
+  // shell `first` as in a solid of that shell's material.
+  let first = 0;
+  let attenuation = 0;
+  for (let s = n - 1; s >= 0; s--) {
+    const delta = Math.sqrt((2 * rho[s]!) / (omega * MU_0 * mur[s]!));
+    attenuation += (radii[s]! - (s === 0 ? inner : radii[s - 1]!)) / delta;
+    if (attenuation > DEEP && s > 0) {
+      first = s;
+      break;
+    }
+  }
   // State at the current boundary, normalised so that |H| = 1: H = (hr, hi), G = ρH' = (gr, gi);
-  // the true amplitude is exp(logs[b]) times a common factor. powers[] first holds 2πr Re(G H*)
-  // per boundary (index b − 1 for boundary b ≥ 1), ratios[] the log-amplitudes.
+  // ratios[] first hold log-amplitudes, powers[] the inward flux 2πr Re(G H*) at each shell's
+  // outer boundary.
   let hr = 1;
   let hi = 0;
   let gr: number;
   let gi: number;
   let logAmp = 0;
-  let start = 0;
-  const flux0 = 0; // inward power flux at the inner boundary (0: bore or axis)
-  if (inner > 0) {
+  let start: number;
+  let startFlux = 0; // inward power flux at the start boundary (0: bore or axis)
+  if (first === 0 && inner > 0) {
     gr = 0;
     gi = 0.5 * omega * MU_0 * inner;
+    ratios[0] = 0;
+    start = 0;
   } else {
-    // solid first shell: H = I0(kr), ρH' = ρk I1(kr), from the axis to radii[0]
-    const delta = Math.sqrt((2 * rho[0]!) / (omega * MU_0 * mur[0]!));
-    const u = radii[0]! / delta;
+    // solid start: H = I0(kr), ρH' = ρk I1(kr) in shell `first`, at its outer radius (axis start,
+    // first = 0) or at its inner radius (deep start, the shells inside left out)
+    const delta = Math.sqrt((2 * rho[first]!) / (omega * MU_0 * mur[first]!));
+    const at = first === 0 ? radii[0]! : radii[first - 1]!;
+    const u = at / delta;
     const ratio = besselI1OverI0Complex({ re: u, im: u });
-    const rk = rho[0]! / delta; // ρk = (ρ/δ)(1 + j)
+    const rk = rho[first]! / delta; // ρk = (ρ/δ)(1 + j)
     gr = rk * (ratio.re - ratio.im);
     gi = rk * (ratio.re + ratio.im);
-    const i0 = besselI0ComplexScaled({ re: u, im: u });
-    // |I0(z)| = |Ĩ0| e^u: the axis field relative to the boundary is 1/|I0|
-    ratios[0] = -(Math.log(Math.hypot(i0.re, i0.im)) + u);
-    logAmp = 0;
-    start = 1;
-    ratios[1] = 0;
-    powers[0] = 2 * Math.PI * radii[0]! * gr; // Re(G H*) with H = 1
+    if (first === 0) {
+      const i0 = besselI0ComplexScaled({ re: u, im: u });
+      // |I0(z)| = |Ĩ0| e^u: the axis field relative to the boundary is 1/|I0|
+      ratios[0] = -(Math.log(Math.hypot(i0.re, i0.im)) + u);
+      ratios[1] = 0;
+      powers[0] = 2 * Math.PI * radii[0]! * gr; // Re(G H*) with H = 1
+      start = 1;
+    } else {
+      for (let b = 0; b < first; b++) ratios[b] = -Infinity;
+      for (let s = 0; s < first - 1; s++) powers[s] = 0;
+      ratios[first] = 0;
+      startFlux = 2 * Math.PI * at * gr;
+      powers[first - 1] = startFlux; // the (negligible) power flowing further in
+      start = first;
+    }
   }
-  if (inner > 0) ratios[0] = 0;
+  let cachedDelta = NaN;
+  let cachedRadius = NaN;
+  let cached = besselIKComplexScaled({ re: 1, im: 1 });
   for (let s = start; s < n; s++) {
     const r1 = s === 0 ? inner : radii[s - 1]!;
     const r2 = radii[s]!;
     const delta = Math.sqrt((2 * rho[s]!) / (omega * MU_0 * mur[s]!));
     const u1 = r1 / delta;
     const u2 = r2 / delta;
-    const z1 = { re: u1, im: u1 };
-    const z2 = { re: u2, im: u2 };
-    const i0a = besselI0ComplexScaled(z1);
-    const i1a = besselI1ComplexScaled(z1);
-    const k0a = besselK0ComplexScaled(z1);
-    const k1a = besselK1ComplexScaled(z1);
-    const i0b = besselI0ComplexScaled(z2);
-    const i1b = besselI1ComplexScaled(z2);
-    const k0b = besselK0ComplexScaled(z2);
-    const k1b = besselK1ComplexScaled(z2);
+    // the functions at the inner radius were computed for the shell below when its δ is the same
+    const a = delta === cachedDelta && r1 === cachedRadius ? cached : besselIKComplexScaled({ re: u1, im: u1 });
+    const b = besselIKComplexScaled({ re: u2, im: u2 });
+    cached = b;
+    cachedDelta = delta;
+    cachedRadius = r2;
     // e1 = e^{−i Im z1}, e2 = e^{−i Im z2} / g², g = e^{u2 − u1}
     const e1r = Math.cos(u1);
     const e1i = -Math.sin(u1);
     const g2 = Math.exp(-2 * (u2 - u1));
     const e2r = Math.cos(u2) * g2;
     const e2i = -Math.sin(u2) * g2;
-    // products P·e: (a·b)·e for complex a, b, e
-    const m11r0 = mul3r(k1a, i0b, e1r, e1i) + mul3r(i1a, k0b, e2r, e2i);
-    const m11i0 = mul3i(k1a, i0b, e1r, e1i) + mul3i(i1a, k0b, e2r, e2i);
-    const m12r0 = mul3r(k0a, i0b, e1r, e1i) - mul3r(i0a, k0b, e2r, e2i);
-    const m12i0 = mul3i(k0a, i0b, e1r, e1i) - mul3i(i0a, k0b, e2r, e2i);
-    const m21r0 = mul3r(k1a, i1b, e1r, e1i) - mul3r(i1a, k1b, e2r, e2i);
-    const m21i0 = mul3i(k1a, i1b, e1r, e1i) - mul3i(i1a, k1b, e2r, e2i);
-    const m22r0 = mul3r(k0a, i1b, e1r, e1i) + mul3r(i0a, k1b, e2r, e2i);
-    const m22i0 = mul3i(k0a, i1b, e1r, e1i) + mul3i(i0a, k1b, e2r, e2i);
+    const m11r0 = mul3r(a.k1r, a.k1i, b.i0r, b.i0i, e1r, e1i) + mul3r(a.i1r, a.i1i, b.k0r, b.k0i, e2r, e2i);
+    const m11i0 = mul3i(a.k1r, a.k1i, b.i0r, b.i0i, e1r, e1i) + mul3i(a.i1r, a.i1i, b.k0r, b.k0i, e2r, e2i);
+    const m12r0 = mul3r(a.k0r, a.k0i, b.i0r, b.i0i, e1r, e1i) - mul3r(a.i0r, a.i0i, b.k0r, b.k0i, e2r, e2i);
+    const m12i0 = mul3i(a.k0r, a.k0i, b.i0r, b.i0i, e1r, e1i) - mul3i(a.i0r, a.i0i, b.k0r, b.k0i, e2r, e2i);
+    const m21r0 = mul3r(a.k1r, a.k1i, b.i1r, b.i1i, e1r, e1i) - mul3r(a.i1r, a.i1i, b.k1r, b.k1i, e2r, e2i);
+    const m21i0 = mul3i(a.k1r, a.k1i, b.i1r, b.i1i, e1r, e1i) - mul3i(a.i1r, a.i1i, b.k1r, b.k1i, e2r, e2i);
+    const m22r0 = mul3r(a.k0r, a.k0i, b.i1r, b.i1i, e1r, e1i) + mul3r(a.i0r, a.i0i, b.k1r, b.k1i, e2r, e2i);
+    const m22i0 = mul3i(a.k0r, a.k0i, b.i1r, b.i1i, e1r, e1i) + mul3i(a.i0r, a.i0i, b.k1r, b.k1i, e2r, e2i);
     // multiply by z1 = u1(1 + j)
     const m11r = u1 * (m11r0 - m11i0);
     const m11i = u1 * (m11r0 + m11i0);
@@ -322,11 +343,11 @@ function layeredField(
   }
   // Scale to the surface: amplitude ratios and flux per (A/m)² of surface field
   const top = logAmp;
-  let previousFlux = flux0;
   for (let b = 0; b <= n; b++) ratios[b] = Math.exp(ratios[b]! - top);
+  let previousFlux = 0;
   for (let s = 0; s < n; s++) {
     const a = ratios[s + 1]!;
-    const flux = powers[s]! * a * a;
+    const flux = s + 1 < first ? 0 : s + 1 === first ? startFlux * ratios[first]! * ratios[first]! : powers[s]! * a * a;
     powers[s] = flux - previousFlux;
     previousFlux = flux;
   }
@@ -334,16 +355,16 @@ function layeredField(
   return { re: gr * hr + gi * hi, im: gi * hr - gr * hi };
 }
 
-/** Re(a·b·e) for complex a, b and e = (er, ei). */
-function mul3r(a: Complex, b: Complex, er: number, ei: number): number {
-  const pr = a.re * b.re - a.im * b.im;
-  const pi = a.re * b.im + a.im * b.re;
+/** Re(a·b·e) for complex a = (ar, ai), b = (br, bi), e = (er, ei). */
+function mul3r(ar: number, ai: number, br: number, bi: number, er: number, ei: number): number {
+  const pr = ar * br - ai * bi;
+  const pi = ar * bi + ai * br;
   return pr * er - pi * ei;
 }
 
-/** Im(a·b·e) for complex a, b and e = (er, ei). */
-function mul3i(a: Complex, b: Complex, er: number, ei: number): number {
-  const pr = a.re * b.re - a.im * b.im;
-  const pi = a.re * b.im + a.im * b.re;
+/** Im(a·b·e) for complex a = (ar, ai), b = (br, bi), e = (er, ei). */
+function mul3i(ar: number, ai: number, br: number, bi: number, er: number, ei: number): number {
+  const pr = ar * br - ai * bi;
+  const pi = ar * bi + ai * br;
   return pr * ei + pi * er;
 }
