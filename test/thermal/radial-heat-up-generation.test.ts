@@ -128,3 +128,44 @@ describe("radialHeatUp: generationAt, stop, soak and hardening", () => {
     expect(() => radialHeatUp({ geometry: "slab", thickness: 0.01, innerRadius: 0.001, surfacePowerDensity: 1, ...steel, thermalConductivity: 1, convectionCoefficient: 1, emissivity: 0, ambientTemperature: 300, duration: 1 })).toThrow(InputError);
   });
 });
+
+import cj from "../fixtures/thermal/carslaw-jaeger.json" with { type: "json" };
+
+describe("radialHeatUp: Carslaw & Jaeger series for radial conduction with uniform properties (fixture from mpmath, generate_carslaw_jaeger.py)", () => {
+  const rtol = cj.meta.rtol;
+  it.each(cj.cases.map((c) => [c.label, c] as const))("%s", (_label, c) => {
+    const ambient = 293.15;
+    const common = {
+      geometry: "cylinder" as const,
+      radius: c.radius,
+      density: c.density,
+      specificHeat: c.specificHeat,
+      thermalConductivity: c.thermalConductivity,
+      convectionCoefficient: c.convectionCoefficient,
+      emissivity: 0,
+      ambientTemperature: ambient,
+      duration: c.time,
+      temperatureTolerance: 1e-4,
+    };
+    const r =
+      c.kind === "generation"
+        ? radialHeatUp({
+            ...common,
+            // uniform q (W/m³): per CV and per m² of surface, q·(b² − a²)/(2R)
+            generationAt: (q: RadialGenerationRequest) => {
+              for (let i = 0; i < q.generation.length; i++) {
+                const a = q.faces[i]!;
+                const b = q.faces[i + 1]!;
+                q.generation[i] = (c.generation * (b * b - a * a)) / (2 * c.radius);
+              }
+            },
+          })
+        : radialHeatUp({ ...common, ...(c.innerRadius > 0 ? { innerRadius: c.innerRadius } : {}), surfacePowerDensity: c.surfaceFlux });
+    const scale = c.surface; // the surface temperature rise
+    expect(Math.abs(r.finalCoreTemperature - ambient - c.core)).toBeLessThan(rtol * scale);
+    expect(Math.abs(r.finalSurfaceTemperature - ambient - c.surface)).toBeLessThan(rtol * scale);
+    const middle = r.finalTemperatures[30]!; // 60 uniform cells: node 30 is the mid-radius (mid-wall)
+    expect(r.positions[30]).toBeCloseTo(c.innerRadius + (c.radius - c.innerRadius) / 2, 12);
+    expect(Math.abs(middle - ambient - c.middle)).toBeLessThan(rtol * scale);
+  });
+});
