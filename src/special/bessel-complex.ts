@@ -342,7 +342,7 @@ export function besselI1OverI0Complex(z: Complex): Complex {
  * ```ts
  * import { besselIKComplexScaled, complex } from "fluxwright";
  * const b = besselIKComplexScaled(complex(1, 0));
- * console.log(b.k0r); // ≈ 1.1444630799
+ * console.log(b.k0r); // ≈ 1.1444630798
  * ```
  * @category Bessel functions
  */
