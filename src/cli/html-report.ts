@@ -114,10 +114,24 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
   }
   if (study.temperatureScan !== null) {
     const s = study.temperatureScan;
-    const series: ChartSeries[] = [
-      { name: "power into part", x: s.temperatures.map(toC), y: s.partPowers, markers: false },
-      { name: "operating frequency", x: s.temperatures.map(toC), y: s.frequencies, axis: "secondary", markers: false },
-    ];
+    // one segment per solved stretch: no line is drawn across a band without an operating point
+    const series: ChartSeries[] = [];
+    const bands = s.unsolvedBands;
+    const cuts = [-Infinity, ...bands.map((b) => b.from), Infinity];
+    for (let k = 0; k + 1 < cuts.length; k++) {
+      const lo = k === 0 ? -Infinity : (bands[k - 1]?.to ?? -Infinity);
+      const hi = cuts[k + 1] ?? Infinity;
+      const idx = s.temperatures.flatMap((t, i) => (t >= lo && t <= hi ? [i] : []));
+      if (idx.length === 0) continue;
+      const suffix = k === 0 ? "" : ` (above ${celsiusText(lo)})`;
+      series.push({ name: `power into part${suffix}`, x: idx.map((i) => toC(s.temperatures[i] ?? 0)), y: idx.map((i) => s.partPowers[i] ?? 0), markers: false });
+      series.push({ name: `operating frequency${suffix}`, x: idx.map((i) => toC(s.temperatures[i] ?? 0)), y: idx.map((i) => s.frequencies[i] ?? 0), axis: "secondary", markers: false });
+    }
+    const scanRefs: ChartReferenceLine[] = curie === null ? [] : [{ axis: "x", value: toC(curie), label: "Curie point" }];
+    for (const b of bands) {
+      scanRefs.push({ axis: "x", value: toC(b.from), label: "no operating point from" });
+      scanRefs.push({ axis: "x", value: toC(b.to), label: "to" });
+    }
     plots.push({
       svg: lineChart({
         title: "Operating point against part temperature",
@@ -127,10 +141,10 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
         yUnit: "W",
         series,
         secondaryAxis: { label: "frequency", unit: "Hz" },
-        referenceLines: curie === null ? [] : [{ axis: "x", value: toC(curie), label: "Curie point" }],
+        referenceLines: scanRefs,
         idPrefix: "temperature-scan",
       }),
-      caption: "Power into the part (left axis) and operating frequency (right axis) against part temperature, each point a solved operating point; past the Curie point a steel part is no longer magnetic, which shows as a step in both.",
+      caption: `Power into the part (left axis) and operating frequency (right axis) against part temperature, each point a solved operating point; past the Curie point a steel part is no longer magnetic, which shows as a step in both.${bands.length === 0 ? "" : ` The heater has no operating point at ${bands.map((b) => `${celsiusText(b.from)}–${celsiusText(b.to)}`).join(", ")}: no line is drawn there and the heat-up counts no power.`}`,
     });
   }
   const losses = lossEntries(study.operating);

@@ -131,6 +131,11 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
         ["heat into the part", q(h.energy.input, "J")],
         ["heat lost (convection + radiation)", q(h.energy.convection + h.energy.radiation, "J")],
         ["Biot number", h.biotNumber === null ? "—" : h.biotNumber.toPrecision(3)],
+        ["power solved from … to", `${celsiusText(h.powerCurveRange[0])} … ${celsiusText(h.powerCurveRange[1])} (${h.gridTemperatures.length} temperatures)`],
+        ...h.unsolvedBands.map((b): [string, string] => [
+          "NO OPERATING POINT (no power counted)",
+          `${celsiusText(b.from)} … ${celsiusText(b.to)}${b.noOscillation ? " — the tank cannot oscillate" : ""}`,
+        ]),
       ]),
     );
     out.push("");

@@ -5,6 +5,7 @@
  *
  * @packageDocumentation
  */
+import { InputError } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import {
   litzAcRatio,
@@ -15,13 +16,24 @@ import {
   wireDcResistance,
   workCoilResistanceCurrentSheet,
 } from "../conductors/index.js";
-import { steinmetzLoss } from "../coreloss/index.js";
+import { sinusoidalPeakFluxDensity, steinmetzLoss } from "../coreloss/index.js";
 import { solenoidInductance, spiralCoilInductance } from "../inductance/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
-import { currentFedParallelInverter, frequencyForPower, parallelTank, seriesInverter, seriesTank, tankStresses } from "../tank/index.js";
-import { barInLongCoil, coilEfficiency, coilOverPlate, tubeInLongCoil } from "../workpiece/index.js";
+import { fieldNearCoil } from "../safety/index.js";
+import type { FieldSolenoid } from "../safety/index.js";
+import { integrateAdaptive } from "../special/index.js";
+import {
+  capacitorSeriesResistance,
+  currentFedParallelInverterWithSource,
+  parallelTank,
+  seriesInverterWithSource,
+  seriesTank,
+  tankStresses,
+} from "../tank/index.js";
+import { MU_0 } from "../units/index.js";
+import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, tubeInLongCoil } from "../workpiece/index.js";
 import { conductorOuterDiameter } from "./read-description.js";
-import type { ResolvedConductor, ResolvedHeaterDescription } from "./read-description.js";
+import type { ResolvedConductor, ResolvedHeaterDescription, ResolvedSolenoidCoil } from "./read-description.js";
 
 /**
  * Power by place at one operating point [W]. The places add up to the supply's input power
@@ -82,7 +94,7 @@ export interface HeaterOperatingPoint {
   readonly partResistivity: number;
   /** Skin depth in the part [m] (from the coupling result; `null` without the part). */
   readonly partSkinDepth: number | null;
-  /** Peak tangential field at the part surface used for the permeability [A/m] (sheet-current estimate). */
+  /** Peak tangential field at the part surface used for the permeability [A/m]: the empty coil's field there at the coil current (finite coil, Biot–Savart). */
   readonly surfaceFieldStrengthPeak: number;
   /** DC voltage at the inverter input, after source and (current-fed) switch drops [V]. */
   readonly inverterInputVoltage: number;
@@ -211,7 +223,7 @@ function coilAcResistance(d: ResolvedHeaterDescription, props: CoilProperties, f
     const spaceFactor = Math.min(1, (coil.turns * props.conductorDiameter) / coil.length);
     notes.push({
       code: "coil-resistance-current-sheet",
-      message: "Coil resistance from the current-sheet estimate (current in one skin depth of the face towards the part); it ignores current on the sides and back of each turn and reads 10–30 % low for short or loosely coupled coils (common practice).",
+      message: "Coil resistance from the current-sheet estimate (current in one skin depth of the face towards the part); it ignores current on the sides and back of each turn and the proximity effect between turns, and reads low by an amount not measured here (the coil-impedance model with skin and proximity effect replaces it).",
     });
     if (thickness < 3 * delta) {
       notes.push({
@@ -239,269 +251,553 @@ function coilAcResistance(d: ResolvedHeaterDescription, props: CoilProperties, f
   return isolatedPerMetre() * props.windingLength + leads;
 }
 
-/** Coupling of the part at a frequency, temperature and surface field. */
+/** Coupling of the part at a frequency, resistivity and permeability. */
 interface Coupling {
   readonly reflectedResistance: number;
   readonly inductanceChange: number;
   readonly skinDepth: number;
-  readonly validity: readonly ValidityNote[];
 }
 
-function partCoupling(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number, resistivity: number, mur: number): Coupling {
+/**
+ * The part's coupling to the coil, prepared once per coil and part geometry: the exact
+ * coupling at any frequency and material, the peak tangential field at the part surface per
+ * RMS ampere of coil current, and the approximations it makes.
+ */
+interface CouplingModel {
+  readonly key: string;
+  readonly coupling: (frequency: number, resistivity: number, relativePermeability: number) => Coupling;
+  /** A cheap model with the same trends (long-coil solution), corrected to the exact one inside the iteration. */
+  readonly surrogate: (frequency: number, resistivity: number, relativePermeability: number) => Coupling;
+  /** Peak tangential field strength at the part surface per RMS ampere of coil current [A/m per A]. */
+  readonly fieldPerAmpere: number;
+  readonly notes: readonly ValidityNote[];
+}
+
+/** Measured error of the part-shorter-than-coil weighting against the field solution (case G). */
+export const SHORT_PART_ERROR_NOTE = "not yet measured against a field solution";
+
+/**
+ * Radial extent of the current layer the finite-coil solution gives each solenoid turn: the
+ * face towards the part, as deep as the tube wall (a tube), a quarter of the diameter (a solid
+ * wire: the current crowds on the bore side at working frequencies), or the whole diameter
+ * (litz: the strands share the current).
+ */
+export function solenoidCurrentLayer(coil: ResolvedSolenoidCoil): { innerRadius: number; outerRadius: number } {
+  const c = coil.conductor;
+  const dc = conductorOuterDiameter(c);
+  const inner = coil.radius - dc / 2;
+  const depth = c.kind === "tube" ? c.wallThickness : c.kind === "solid" ? dc / 4 : dc;
+  return { innerRadius: inner, outerRadius: inner + depth };
+}
+
+/** The surrogate correction each solved point ended with: a continued point starts from its neighbour's. */
+const corrections = new WeakMap<OperatingPointStart, { resistance: number; inductance: number }>();
+const evaluatorCache = new Map<string, { evaluate: ReturnType<typeof prepareEncirclingCoilOverRod>; weight: number; fieldPerAmpere: number }>();
+const modelCache = new WeakMap<CoilProperties, CouplingModel>();
+
+/** ∫ f(u) du over [0, hi] (adaptive Gauss–Kronrod of the special module). */
+function panelIntegral(fn: (u: number) => number, hi: number): number {
+  return integrateAdaptive(fn, 0, hi, { relativeTolerance: 1e-11 }).value;
+}
+
+/**
+ * The coupling model of a coil and part: finite coil over the rod, tube or ring
+ * (`prepareEncirclingCoilOverRod`, weighted by the share of the coil's field over the part's
+ * length), or the pancake over the plate (`coilOverPlate`).
+ */
+function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): CouplingModel {
   const coil = d.coil;
   const part = d.part;
+  const key = JSON.stringify([coil, part.shape, "radius" in part ? part.radius : 0, "outerRadius" in part ? part.outerRadius : 0, "innerRadius" in part ? part.innerRadius : 0, "wallThickness" in part ? part.wallThickness : 0, "length" in part ? part.length : 0, "height" in part ? part.height : 0, "thickness" in part ? part.thickness : 0, "width" in part ? part.width : 0]);
+  const cached = modelCache.get(props);
+  if (cached !== undefined && cached.key === key) return cached;
+  let model: CouplingModel;
   if (coil.shape === "solenoid") {
-    const longCoil = { innerRadius: coil.radius - props.conductorDiameter / 2, length: coil.length, turns: coil.turns };
-    const partLength = part.shape === "bar" || part.shape === "tube" ? part.length : part.shape === "ring" ? part.height : coil.length;
-    // the part fills fill × coil length; the long-coil result is per coil length (uniform field)
-    const fill = Math.min(1, partLength / coil.length);
-    const r =
-      part.shape === "bar"
-        ? barInLongCoil({ coil: longCoil, bar: { radius: part.radius, resistivity, relativePermeability: mur }, frequency })
-        : part.shape === "tube"
-          ? tubeInLongCoil({ coil: longCoil, tube: { outerRadius: part.outerRadius, innerRadius: part.outerRadius - part.wallThickness, resistivity, relativePermeability: mur }, frequency })
-          : part.shape === "ring"
-            ? tubeInLongCoil({ coil: longCoil, tube: { outerRadius: part.outerRadius, innerRadius: part.innerRadius, resistivity, relativePermeability: mur }, frequency })
-            : null;
-    if (r === null) throw new RangeError("unreachable: plate in a solenoid");
-    const validity = [...r.validity];
-    if (fill < 1) {
-      validity.push({
+    if (part.shape === "plate") throw new RangeError("unreachable: plate in a solenoid");
+    const layer = solenoidCurrentLayer(coil);
+    const radius = part.shape === "bar" ? part.radius : part.outerRadius;
+    const bore = part.shape === "bar" ? 0 : part.shape === "tube" ? part.outerRadius - part.wallThickness : part.innerRadius;
+    const partLength = part.shape === "ring" ? part.height : part.length;
+    const evalKey = JSON.stringify([layer.innerRadius, layer.outerRadius, coil.length, coil.turns, radius, bore, partLength]);
+    let entry = evaluatorCache.get(evalKey);
+    if (entry === undefined) {
+      // turns enter as N² (uniform winding density): prepare for one turn, scale by N²
+      const evaluate = prepareEncirclingCoilOverRod({
+        coil: { innerRadius: layer.innerRadius, outerRadius: layer.outerRadius, length: coil.length, turns: 1 },
+        rod: bore > 0 ? { radius, innerRadius: bore } : { radius },
+      });
+      // the coil's axial field along the part surface (loops at the layer's mean radius)
+      const loops: FieldSolenoid = { kind: "solenoid", radius: 0.5 * (layer.innerRadius + layer.outerRadius), length: coil.length, turns: coil.turns };
+      const hz = (z: number): number => fieldNearCoil(loops, 1, { radialDistance: radius, axialPosition: z }).axial / MU_0;
+      const scale = coil.length / 2 + loops.radius;
+      const squared = (u: number): number => {
+        const h = hz(scale * Math.sinh(u));
+        return h * h * Math.cosh(u);
+      };
+      const full = panelIntegral(squared, 7);
+      const span = panelIntegral(squared, Math.asinh(partLength / 2 / scale));
+      const weight = Math.min(1, span / full);
+      entry = { evaluate, weight, fieldPerAmpere: Math.SQRT2 * Math.abs(hz(0)) };
+      if (evaluatorCache.size > 256) evaluatorCache.clear();
+      evaluatorCache.set(evalKey, entry);
+    }
+    const { evaluate, weight, fieldPerAmpere } = entry;
+    const n2 = coil.turns * coil.turns * weight;
+    const notes: ValidityNote[] = [
+      {
+        code: "finite-coil-coupling",
+        message:
+          "Part coupling from the finite-coil solution (Dodd–Deeds–Luquire, prepareEncirclingCoilOverRod) with each turn's current as a uniform layer on the face towards the part (tube wall; a quarter of a solid wire's diameter; the whole litz bundle) and the part as infinitely long, weighted by the share of the empty coil's squared axial field at the part surface that lies over the part's length.",
+      },
+    ];
+    if (partLength < coil.length) {
+      notes.push({
         code: "part-shorter-than-coil",
-        message: "The part is shorter than the coil: the long-coil coupling was scaled by the fraction of the coil length it fills (uniform field assumed; end effects of the part ignored).",
-        value: fill,
+        message: `The part is shorter than the coil: its coupling is the infinite part's, weighted by the share of the coil's squared field over the part's length (${(weight * 100).toFixed(1)} %); the part's own end effects are ignored (${SHORT_PART_ERROR_NOTE}).`,
+        value: partLength / coil.length,
         limit: 1,
       });
     }
-    // short-coil correction: the long-coil field N·I/ℓ overstates a short coil's field; scale the
-    // coupling by the ratio of the exact empty-coil inductance to the long-coil one (Nagaoka's
-    // coefficient for a current sheet), so the loaded inductance stays L₀(1 + ΔL_long/L_long) > 0
-    const shortCoil = Math.min(1, props.inductance / r.emptyCoilInductance);
-    if (shortCoil < 0.95) {
-      validity.push({
-        code: "short-coil-correction",
-        message: "Short coil: the long-coil coupling (reflected resistance and inductance change) was scaled by the ratio of the exact empty-coil inductance to the long-coil one, i.e. by the coil's mean field relative to N·I/ℓ; expect ±20 % on the part power (common practice).",
-        value: shortCoil,
-        limit: 0.95,
+    const longCoil = { innerRadius: layer.innerRadius, length: coil.length, turns: coil.turns };
+    model = {
+      key,
+      fieldPerAmpere,
+      notes,
+      surrogate: (f, rho, mur) => {
+        const r = tubeInLongCoil({ coil: longCoil, tube: { outerRadius: radius, innerRadius: bore, resistivity: rho, relativePermeability: mur }, frequency: f });
+        return { reflectedResistance: r.reflectedResistance, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
+      },
+      coupling: (f, rho, mur) => {
+        const z = evaluate(f, rho, mur);
+        return { reflectedResistance: n2 * z.resistanceChange, inductanceChange: n2 * z.inductanceChange, skinDepth: Math.sqrt((2 * rho) / (2 * Math.PI * f * MU_0 * mur)) };
+      },
+    };
+  } else {
+    if (part.shape !== "plate") throw new RangeError("unreachable: pancake coil over a non-plate part");
+    const dc = props.conductorDiameter;
+    const geometry = { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, height: dc, turns: coil.turns };
+    const notes: ValidityNote[] = [];
+    const halfSpan = Math.min(part.length, part.width) / 2;
+    if (halfSpan < 1.5 * (coil.outerRadius + dc / 2)) {
+      notes.push({
+        code: "plate-not-wide",
+        message: "The plate is modelled as infinitely wide (Dodd & Deeds); its half-width is less than 1.5 × the coil's outer radius, so edge effects may matter.",
+        value: halfSpan,
+        limit: 1.5 * (coil.outerRadius + dc / 2),
       });
     }
-    const k = fill * shortCoil;
-    return { reflectedResistance: r.reflectedResistance * k, inductanceChange: r.inductanceChange * k, skinDepth: r.skinDepth, validity };
+    // tangential field at the plate surface: twice the empty coil's radial field there (the
+    // image of the coil in a plate that excludes the normal field), largest over radius
+    const loops = Array.from({ length: coil.turns }, (_, i) => ({ radius: coil.turns === 1 ? coil.innerRadius : coil.innerRadius + (i * (coil.outerRadius - coil.innerRadius)) / (coil.turns - 1) }));
+    let peak = 0;
+    for (let i = 1; i <= 80; i++) {
+      const r = (i / 80) * (coil.outerRadius + 2 * dc);
+      const b = fieldNearCoil(loops, 1, { radialDistance: r, axialPosition: -(coil.liftOff + dc / 2) });
+      peak = Math.max(peak, Math.abs(b.radial));
+    }
+    // surrogate: the plate's thickness as the wall of a tube of the coil's radius in a long coil
+    const outer = geometry.outerRadius;
+    const surrogateCoil = { innerRadius: outer + coil.liftOff + dc, length: 2 * outer, turns: coil.turns };
+    const surrogateBore = Math.max(0, outer - part.thickness);
+    model = {
+      key,
+      fieldPerAmpere: (2 * Math.SQRT2 * peak) / MU_0,
+      notes,
+      surrogate: (f, rho, mur) => {
+        const r = tubeInLongCoil({ coil: surrogateCoil, tube: { outerRadius: outer, innerRadius: surrogateBore, resistivity: rho, relativePermeability: mur }, frequency: f });
+        return { reflectedResistance: r.reflectedResistance, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
+      },
+      coupling: (f, rho, mur) => {
+        const r = coilOverPlate({ coil: geometry, plate: { thickness: part.thickness, resistivity: rho, relativePermeability: mur }, frequency: f });
+        return { reflectedResistance: r.resistanceChange, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
+      },
+    };
   }
-  if (part.shape !== "plate") throw new RangeError("unreachable: pancake coil over a non-plate part");
-  const dCond = props.conductorDiameter;
-  const r = coilOverPlate({
-    coil: { innerRadius: coil.innerRadius - dCond / 2, outerRadius: coil.outerRadius + dCond / 2, liftOff: coil.liftOff, height: dCond, turns: coil.turns },
-    plate: { thickness: part.thickness, resistivity, relativePermeability: mur },
-    frequency,
-  });
-  const validity = [...r.validity];
-  const halfSpan = Math.min(part.length, part.width) / 2;
-  if (halfSpan < 1.5 * (coil.outerRadius + dCond / 2)) {
-    validity.push({
-      code: "plate-not-wide",
-      message: "The plate is modelled as infinitely wide (Dodd & Deeds); its half-width is less than 1.5 × the coil's outer radius, so edge effects may matter.",
-      value: halfSpan,
-      limit: 1.5 * (coil.outerRadius + dCond / 2),
-    });
-  }
-  return { reflectedResistance: r.resistanceChange, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth, validity };
+  modelCache.set(props, model);
+  return model;
 }
 
-/** Peak sheet-current estimate of the tangential surface field: N Î / (length of the winding). */
-function surfaceField(d: ResolvedHeaterDescription, props: CoilProperties, coilCurrentRms: number): number {
-  const coil = d.coil;
-  const span = coil.shape === "solenoid" ? coil.length : coil.outerRadius - coil.innerRadius + props.conductorDiameter;
-  return (coil.turns * Math.SQRT2 * coilCurrentRms) / span;
+/** A point to start the operating-point iteration from (a neighbouring temperature's solution). */
+export interface OperatingPointStart {
+  /** Operating frequency [Hz]. */
+  readonly frequency: number;
+  /** Peak surface field [A/m]. */
+  readonly surfaceFieldStrengthPeak: number;
 }
-
 
 /**
- * Solves one operating point of the heater at a part temperature. Iterates frequency and the
- * part's field-dependent permeability to a fixed point, then reports the values of the final
- * module calls.
+ * Thrown when the loaded current-fed tank cannot oscillate for any permeability the part can
+ * take at this temperature (its resistance exceeds √(L/C) for every field strength).
+ */
+export class NoOscillationError extends InputError {}
+
+/**
+ * Solves one operating point of the heater at a part temperature: frequency and the part's
+ * field-dependent permeability to a fixed point, the tank, the inverter and the source.
+ *
+ * The iteration starts from `start` (a neighbouring temperature's solution: continuation) or,
+ * without one, from the empty coil's resonance and the field its current produces at the part
+ * surface; it is accelerated (Anderson, depth 1) and damped back towards the last iterate the
+ * inverter could run at. When that fails, a bracketing search over the surface field (each
+ * field with its own frequency fixed point) finds the self-consistent field; if the inverter can
+ * run at no field strength, the design's limit is thrown: {@link NoOscillationError} when the
+ * current-fed tank cannot oscillate for any permeability the part can take, else the
+ * inverter's own {@link InputError} (e.g. a target power the source cannot deliver).
  *
  * @param d - resolved description
  * @param partTemperature - part temperature [K]
  * @param withPart - `false` for the empty coil
  * @param props - the coil's own properties (from {@link coilProperties})
+ * @param start - where to start the iteration (a neighbouring solution), or `null`
  */
 export function heaterOperatingPoint(
   d: ResolvedHeaterDescription,
   partTemperature: number,
   withPart: boolean,
   props: CoilProperties = coilProperties(d),
+  start: OperatingPointStart | null = null,
 ): HeaterOperatingPoint {
   const inv = d.inverter;
   const cap = d.capacitor;
   const L0 = props.inductance;
   const C = cap.capacitance;
+  const model = withPart ? couplingModel(d, props) : null;
   const partResistivity = resistivityAt(d.part.material, partTemperature);
-  let frequency = inv.kind === "voltage-fed-series" && inv.control === "fixed" && inv.frequency !== null ? inv.frequency : 1 / (2 * Math.PI * Math.sqrt(L0 * C));
-  let field = 0;
-  let coilCurrent = 0;
-  let coilVoltagePeak = 0;
-  let iterations: number;
-  let converged = false;
+  const fixedFrequency = inv.kind === "voltage-fed-series" && inv.control === "fixed" && inv.frequency !== null ? inv.frequency : null;
 
-  // concentrator: Steinmetz loss at the flux the coil voltage drives through its section, as a series resistance
+  // the exact coupling is costly: the iteration runs on the long-coil surrogate corrected to the
+  // exact value at the last exact evaluation (R by a factor, ΔL by an offset); the outer loop
+  // re-evaluates the exact coupling at the converged point until the correction no longer moves
+  // a continued point starts from its neighbour's correction; otherwise the first coupling is exact
+  let correction: { resistance: number; inductance: number } | null = start !== null && withPart ? (corrections.get(start) ?? null) : null;
+  function couple(f: number, mur: number): Coupling {
+    if (model === null) throw new RangeError("unreachable: coupling without a part");
+    if (correction === null) {
+      const exact = model.coupling(f, partResistivity, mur);
+      const cheap = model.surrogate(f, partResistivity, mur);
+      correction = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
+      return exact;
+    }
+    const cheap = model.surrogate(f, partResistivity, mur);
+    return { reflectedResistance: cheap.reflectedResistance * correction.resistance, inductanceChange: cheap.inductanceChange + correction.inductance, skinDepth: cheap.skinDepth };
+  }
+
+  // concentrator: Steinmetz loss at the peak flux the coil voltage drives through its section, as a series resistance
   function evaluateCoreResistance(f: number, current: number, voltagePeak: number): number {
     if (d.concentrator === null || !(voltagePeak > 0) || !(current > 0)) return 0;
-    const bPeak = voltagePeak / (2 * Math.PI * f * d.coil.turns * d.concentrator.crossSectionArea);
+    const bPeak = sinusoidalPeakFluxDensity({ voltageRms: voltagePeak / Math.SQRT2, frequency: f, turns: d.coil.turns, coreArea: d.concentrator.crossSectionArea });
     const k = d.concentrator.material.steinmetz;
     const loss = steinmetzLoss({ k: k.k, alpha: k.alpha, beta: k.beta, frequency: f, peakFluxDensity: bPeak }) * d.concentrator.volume;
     return loss / (current * current);
   }
 
-  function evaluate(f: number, h: number, previousCurrent: number, previousVoltagePeak: number) {
+  function evaluate(f: number, h: number, previousCurrent: number, previousVoltagePeak: number, part: boolean) {
     const notes: ValidityNote[] = [];
+    // the coil's own impedance at f: the one place a frequency-dependent coil model plugs in
     const coilResistance = coilAcResistance(d, props, f, notes);
-    const mur = withPart ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrength: h }) : 1;
-    const coupling = withPart ? partCoupling(d, props, f, partResistivity, mur) : null;
+    const mur = part ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrength: h }) : 1;
+    const coupling = part && model !== null ? couple(f, mur) : null;
     const reflectedResistance = coupling?.reflectedResistance ?? 0;
     const inductanceChange = coupling?.inductanceChange ?? 0;
     const L = L0 + inductanceChange;
-    const omega = 2 * Math.PI * f;
-    // capacitor dielectric loss as a series resistance: exact in a series tank (ESR = tanδ/ωC);
-    // in the parallel tank folded into the coil branch as tanδ·ωL (equal at resonance, Q ≫ 1)
-    const capacitorResistance = inv.kind === "voltage-fed-series" ? cap.dissipationFactor / (omega * C) : cap.dissipationFactor * omega * L;
+    // the capacitor's dielectric loss as its equivalent series resistance tanδ/(ωC), in the coil branch
+    const capacitorResistance = capacitorSeriesResistance({ capacitance: C, dissipationFactor: cap.dissipationFactor, frequency: f });
     const coreResistance = evaluateCoreResistance(f, previousCurrent, previousVoltagePeak);
-    const switchResistance = inv.kind === "voltage-fed-series" ? (inv.bridge === "full" ? 2 : 1) * inv.switchOnResistance : 0;
-    const tankResistance = coilResistance + reflectedResistance + capacitorResistance + coreResistance + switchResistance;
-    return { notes, coilResistance, mur, coupling, reflectedResistance, inductanceChange, L, capacitorResistance, coreResistance, switchResistance, tankResistance, f, h };
+    const tankResistance = coilResistance + reflectedResistance + capacitorResistance + coreResistance;
+    return { notes, coilResistance, mur, coupling, reflectedResistance, inductanceChange, L, capacitorResistance, coreResistance, tankResistance, f, h };
   }
+  type Evaluation = ReturnType<typeof evaluate>;
 
-  function solveInverter(e: ReturnType<typeof evaluate>, final: boolean) {
+  function solveInverter(e: Evaluation, final: boolean) {
     const Rint = d.supply.internalResistance;
     const Vs = d.supply.voltage;
     if (inv.kind === "current-fed-parallel") {
-      // the inverter input is a resistance 2R_d/π²; source and switch resistances in series with it
-      const unit = currentFedParallelInverter({ supplyVoltage: 1, inductance: e.L, capacitance: C, coilResistance: e.tankResistance });
-      const inputResistance = 1 / unit.supplyCurrent;
-      const current = Vs / (inputResistance + Rint + inv.switchOnResistance);
-      const vin = current * inputResistance;
-      const op = currentFedParallelInverter({ supplyVoltage: vin, inductance: e.L, capacitance: C, coilResistance: e.tankResistance, chokeInductance: inv.chokeInductance });
+      const op = currentFedParallelInverterWithSource({
+        sourceVoltage: Vs,
+        sourceResistance: Rint,
+        switchOnResistance: inv.switchOnResistance,
+        inductance: e.L,
+        capacitance: C,
+        coilResistance: e.tankResistance,
+        chokeInductance: inv.chokeInductance,
+      });
       const st = final ? tankStresses(parallelTank({ inductance: e.L, capacitance: C, coilResistance: e.tankResistance }), { frequency: op.frequency, voltageRms: op.tankVoltageRms }) : null;
       return {
         reactivePower: st?.capacitorReactivePower ?? 0,
         storedEnergyPeak: st?.storedEnergyPeak ?? 0,
         coilVoltageRmsStress: st?.coilVoltageRms ?? op.tankVoltageRms,
         frequency: op.frequency,
-        vin,
-        supplyCurrent: op.supplyCurrent,
-        tankPower: op.power,
+        vin: op.inputVoltage,
+        terminalVoltage: op.terminalVoltage,
+        supplyCurrent: op.sourceCurrent,
+        sourcePower: op.sourcePower,
+        sourceLoss: op.sourceLoss,
         coilCurrentRms: op.coilCurrentRms,
         tankVoltagePeak: op.tankVoltagePeak,
-        coilVoltageRms: op.tankVoltageRms,
         capacitorVoltageRms: op.tankVoltageRms,
         capacitorCurrentRms: op.capacitorCurrentRmsWithHarmonics,
         switchVoltagePeak: op.switchVoltagePeak,
-        // each switch carries the (ripple-free) supply current for half a period
-        switchCurrentPeak: op.supplyCurrent + (op.chokeRipplePeakToPeak ?? 0) / 2,
-        switchCurrentRms: op.supplyCurrent / Math.SQRT2,
-        switchLoss: op.supplyCurrent * op.supplyCurrent * inv.switchOnResistance,
+        switchCurrentPeak: op.switchCurrentPeak,
+        switchCurrentRms: op.switchCurrentRms,
+        switchLoss: op.switchConductionLoss,
+        switchResistance: 0,
         qualityFactor: op.qualityFactor,
         zvs: null,
         cautions: op.cautions,
         validity: op.validity,
       };
     }
-    const bridge = inv.bridge;
-    const fAt = (vin: number): number =>
-      inv.control === "fixed" && inv.frequency !== null
-        ? inv.frequency
-        : frequencyForPower({ supplyVoltage: vin, bridge, inductance: e.L, capacitance: C, resistance: e.tankResistance, power: inv.targetPower ?? 0 });
-    // the source resistance lowers the bridge voltage: iterate V_in = V_s − R_int·I_dc (converges fast, R_int small)
-    let vin = Vs;
-    let op = seriesInverter({ supplyVoltage: vin, bridge, inductance: e.L, capacitance: C, resistance: e.tankResistance, switchingFrequency: fAt(vin) });
-    for (let k = 0; k < 60 && Rint > 0; k++) {
-      const next = Vs - Rint * op.supplyCurrent;
-      if (!(next > 0)) break;
-      const done = Math.abs(next - vin) <= 1e-13 * Vs;
-      vin = next;
-      op = seriesInverter({ supplyVoltage: vin, bridge, inductance: e.L, capacitance: C, resistance: e.tankResistance, switchingFrequency: fAt(vin) });
-      if (done) break;
-    }
-    const switchCount = bridge === "full" ? 2 : 1;
-    const st = tankStresses(seriesTank({ inductance: e.L, capacitance: C, resistance: e.tankResistance }), { frequency: op.switchingFrequency, currentRms: op.currentRms });
+    const common = {
+      sourceVoltage: Vs,
+      sourceResistance: Rint,
+      bridge: inv.bridge,
+      inductance: e.L,
+      capacitance: C,
+      resistance: e.tankResistance,
+      switchOnResistance: inv.switchOnResistance,
+    };
+    const op = seriesInverterWithSource(fixedFrequency !== null ? { ...common, switchingFrequency: fixedFrequency } : { ...common, power: inv.targetPower ?? 0 });
+    const st = tankStresses(seriesTank({ inductance: e.L, capacitance: C, resistance: op.tankResistance }), { frequency: op.switchingFrequency, currentRms: op.currentRms });
     return {
       reactivePower: st.capacitorReactivePower,
       storedEnergyPeak: st.storedEnergyPeak,
       coilVoltageRmsStress: st.coilVoltageRms,
       frequency: op.switchingFrequency,
-      vin,
-      supplyCurrent: op.supplyCurrent,
-      tankPower: op.power,
+      vin: op.inputVoltage,
+      terminalVoltage: op.terminalVoltage,
+      supplyCurrent: op.sourceCurrent,
+      sourcePower: op.sourcePower,
+      sourceLoss: op.sourceLoss,
       coilCurrentRms: op.currentRms,
       tankVoltagePeak: Math.SQRT2 * st.coilVoltageRms,
-      coilVoltageRms: st.coilVoltageRms,
       capacitorVoltageRms: op.capacitorVoltageRms,
       capacitorCurrentRms: op.currentRms,
-      switchVoltagePeak: vin,
-      switchCurrentPeak: op.currentPeak,
-      switchCurrentRms: op.currentRms / Math.SQRT2,
-      switchLoss: op.currentRms * op.currentRms * switchCount * inv.switchOnResistance,
-      qualityFactor: (2 * Math.PI * op.switchingFrequency * e.L) / e.tankResistance,
+      switchVoltagePeak: op.inputVoltage,
+      switchCurrentPeak: op.switchCurrentPeak,
+      switchCurrentRms: op.switchCurrentRms,
+      switchLoss: op.switchConductionLoss,
+      switchResistance: op.tankResistance - e.tankResistance,
+      qualityFactor: (2 * Math.PI * op.switchingFrequency * e.L) / op.tankResistance,
       zvs: op.zeroVoltageSwitching,
       cautions: op.cautions,
       validity: [] as readonly ValidityNote[],
     };
   }
+  type Solution = ReturnType<typeof solveInverter>;
+  const fieldOf = (s: Solution): number => (model === null ? 0 : model.fieldPerAmpere * s.coilCurrentRms);
 
-  let e = evaluate(frequency, field, coilCurrent, coilVoltagePeak);
-  let s = solveInverter(e, false);
-  let previous: { g0: number; g1: number; x0: number; x1: number; fScale: number; hScale: number } | null = null;
-  for (iterations = 1; iterations < 60; iterations++) {
-    const newField = withPart ? surfaceField(d, props, s.coilCurrentRms) : 0;
-    const residual = newField - field;
-    const df = Math.abs(s.frequency - frequency) / frequency;
-    const dh = Math.abs(residual) / Math.max(newField, 1);
-    // the concentrator's loss resistance lags one iterate: converged when its change no longer matters
-    const nextCore = d.concentrator === null ? 0 : evaluateCoreResistance(s.frequency, s.coilCurrentRms, s.tankVoltagePeak);
-    const dc = Math.abs(nextCore - e.coreResistance) / e.tankResistance;
-    if (df < 1e-9 && dh < 1e-8 && dc < 1e-10 && iterations > 1) {
-      converged = true;
-      break;
+  // the starting iterate: a neighbour's solution, else the empty coil's resonance and its field
+  let f0 = fixedFrequency ?? 1 / (2 * Math.PI * Math.sqrt(L0 * C));
+  let h0 = 0;
+  let emptyField = 0;
+  if (withPart) {
+    try {
+      const empty = solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      f0 = fixedFrequency ?? empty.frequency;
+      emptyField = fieldOf(empty);
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
     }
-    // Anderson acceleration (depth 1) of the joint map (f, H) → (f_new, H_new), in relative units;
-    // plain substitution converges linearly and slowly when the coupling depends strongly on f
-    const fScale = frequency;
-    const hScale = Math.max(newField, 1);
-    const g0 = s.frequency / fScale;
-    const g1 = newField / hScale;
-    const r0 = g0 - frequency / fScale;
-    const r1 = g1 - field / hScale;
-    let nextFrequency = s.frequency;
-    let nextField = newField;
-    if (previous !== null) {
-      const d0 = r0 - (previous.g0 - previous.x0) * (previous.fScale / fScale);
-      const d1 = r1 - (previous.g1 - previous.x1) * (previous.hScale / hScale);
-      const dg0 = g0 - previous.g0 * (previous.fScale / fScale);
-      const dg1 = g1 - previous.g1 * (previous.hScale / hScale);
-      const denominator = d0 * d0 + d1 * d1;
-      if (denominator > 0) {
-        const gamma = (r0 * d0 + r1 * d1) / denominator;
-        const candidateFrequency = (g0 - gamma * dg0) * fScale;
-        const candidateField = (g1 - gamma * dg1) * hScale;
-        if (candidateFrequency > 0.8 * s.frequency && candidateFrequency < 1.25 * s.frequency && candidateField >= 0 && Number.isFinite(candidateField)) {
-          nextFrequency = candidateFrequency;
-          nextField = candidateField;
+    h0 = emptyField;
+    // continuation from a neighbour's solution (an empty-coil start carries no field: keep the estimate)
+    if (start !== null && start.surfaceFieldStrengthPeak > 0) {
+      f0 = fixedFrequency ?? start.frequency;
+      h0 = start.surfaceFieldStrengthPeak;
+    }
+  }
+
+  /** Anderson-accelerated, damped fixed point from (f, h); `null` when it cannot proceed. */
+  function iterate(frequency: number, field: number): { e: Evaluation; s: Solution; iterations: number; converged: boolean } | null {
+    let coilCurrent = 0;
+    let coilVoltagePeak = 0;
+    let e: Evaluation;
+    let s: Solution;
+    try {
+      e = evaluate(frequency, field, coilCurrent, coilVoltagePeak, withPart);
+      s = solveInverter(e, false);
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      return null;
+    }
+    let previous: { g0: number; g1: number; x0: number; x1: number; fScale: number; hScale: number } | null = null;
+    let iterations = 1;
+    for (; iterations < 80; iterations++) {
+      const newField = fieldOf(s);
+      const df = Math.abs(s.frequency - frequency) / frequency;
+      const dh = Math.abs(newField - field) / Math.max(newField, 1);
+      const nextCore = d.concentrator === null ? 0 : evaluateCoreResistance(s.frequency, s.coilCurrentRms, s.tankVoltagePeak);
+      const dc = Math.abs(nextCore - e.coreResistance) / e.tankResistance;
+      if (df < 1e-10 && dh < 1e-9 && dc < 1e-11 && iterations > 1) return { e, s, iterations, converged: true };
+      const fScale = frequency;
+      const hScale = Math.max(newField, 1);
+      const g0 = s.frequency / fScale;
+      const g1 = newField / hScale;
+      const r0 = g0 - frequency / fScale;
+      const r1 = g1 - field / hScale;
+      let nextFrequency = s.frequency;
+      let nextField = newField;
+      if (previous !== null) {
+        const d0 = r0 - (previous.g0 - previous.x0) * (previous.fScale / fScale);
+        const d1 = r1 - (previous.g1 - previous.x1) * (previous.hScale / hScale);
+        const dg0 = g0 - previous.g0 * (previous.fScale / fScale);
+        const dg1 = g1 - previous.g1 * (previous.hScale / hScale);
+        const denominator = d0 * d0 + d1 * d1;
+        if (denominator > 0) {
+          const gamma = (r0 * d0 + r1 * d1) / denominator;
+          const candidateFrequency = (g0 - gamma * dg0) * fScale;
+          const candidateField = (g1 - gamma * dg1) * hScale;
+          if (candidateFrequency > 0.8 * s.frequency && candidateFrequency < 1.25 * s.frequency && candidateField >= 0 && Number.isFinite(candidateField)) {
+            nextFrequency = candidateFrequency;
+            nextField = candidateField;
+          }
         }
       }
+      previous = { g0, g1, x0: frequency / fScale, x1: field / hScale, fScale, hScale };
+      coilCurrent = s.coilCurrentRms;
+      coilVoltagePeak = s.tankVoltagePeak;
+      const good = { frequency, field };
+      // damping: an iterate the inverter cannot run at is pulled back towards the last good one
+      let accepted = false;
+      for (let k = 0; k < 40; k++) {
+        try {
+          const eNext = evaluate(nextFrequency, nextField, coilCurrent, coilVoltagePeak, withPart);
+          const sNext = solveInverter(eNext, false);
+          e = eNext;
+          s = sNext;
+          frequency = nextFrequency;
+          field = nextField;
+          accepted = true;
+          break;
+        } catch (error) {
+          if (!(error instanceof InputError)) throw error;
+          nextFrequency = 0.5 * (nextFrequency + good.frequency);
+          nextField = 0.5 * (nextField + good.field);
+          previous = null;
+        }
+      }
+      if (!accepted) return null;
     }
-    previous = { g0, g1, x0: frequency / fScale, x1: field / hScale, fScale, hScale };
-    frequency = nextFrequency;
-    field = nextField;
-    coilCurrent = s.coilCurrentRms;
-    coilVoltagePeak = s.tankVoltagePeak;
-    e = evaluate(frequency, field, coilCurrent, coilVoltagePeak);
-    s = solveInverter(e, false);
+    return { e, s, iterations, converged: false };
   }
-  s = solveInverter(e, true);
-  const result = e;
-  const validity: ValidityNote[] = [...result.notes, ...(result.coupling?.validity ?? []), ...s.validity];
+
+  /**
+   * The robust path: the frequency fixed point at a given surface field, and a bracketing search
+   * (log field) for the field the resulting coil current reproduces.
+   */
+  function bracketField(reference: number): { frequency: number; field: number } {
+    if (!withPart) {
+      // the empty coil has no field to iterate: its inverter failure is the design's limit
+      solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      return { frequency: f0, field: 0 };
+    }
+    let lastError: InputError | null = null;
+    let allOscillation = true;
+    const atField = (h: number): { f: number; r: number } | null => {
+      let f = f0;
+      correction = null; // the first coupling at this field is exact
+      try {
+        let e = evaluate(f, h, 0, 0, withPart);
+        let s = solveInverter(e, false);
+        for (let k = 0; k < 60 && Math.abs(s.frequency - f) > 1e-12 * f; k++) {
+          f = s.frequency;
+          e = evaluate(f, h, s.coilCurrentRms, s.tankVoltagePeak, withPart);
+          s = solveInverter(e, false);
+        }
+        return { f: s.frequency, r: Math.log(Math.max(fieldOf(s), 1e-300) / h) };
+      } catch (error) {
+        if (!(error instanceof InputError)) throw error;
+        lastError = error;
+        if (error.parameter !== "coilResistance") allOscillation = false;
+        return null;
+      }
+    };
+    const ref = Math.max(reference, 1);
+    const fields: number[] = [];
+    for (let k = -24; k <= 24; k++) fields.push(ref * 10 ** (k / 4));
+    const values = fields.map(atField);
+    for (let i = 0; i + 1 < fields.length; i++) {
+      const a = values[i];
+      const b = values[i + 1];
+      if (a === null || a === undefined || b === null || b === undefined || !(a.r > 0 && b.r <= 0)) continue;
+      let lo = Math.log(fields[i]!);
+      let hi = Math.log(fields[i + 1]!);
+      let best = { frequency: b.f, field: fields[i + 1]! };
+      for (let k = 0; k < 60 && hi - lo > 1e-13; k++) {
+        const mid = 0.5 * (lo + hi);
+        const m = atField(Math.exp(mid));
+        if (m === null) break;
+        best = { frequency: m.f, field: Math.exp(mid) };
+        if (m.r > 0) lo = mid;
+        else hi = mid;
+      }
+      return best;
+    }
+    if (values.every((v) => v === null)) {
+      const err = lastError as InputError | null;
+      if (inv.kind === "current-fed-parallel" && allOscillation && err !== null) {
+        throw new NoOscillationError(
+          "heaterOperatingPoint",
+          "part",
+          partTemperature,
+          "K",
+          `a part temperature at which the loaded tank can oscillate: its resistance exceeds √(L/C) for every surface field from ${ref * 1e-6} to ${ref * 1e6} A/m, so the switches would latch on and only the supply would limit the current (${err.message})`,
+        );
+      }
+      if (err !== null) throw err;
+    }
+    throw new InputError("heaterOperatingPoint", "part", partTemperature, "K", "a part temperature with a self-consistent operating point (no surface field reproduces itself)");
+  }
+
+  let result = iterate(f0, h0);
+  if (result === null || !result.converged) {
+    const found = bracketField(Math.max(h0, emptyField));
+    const polished = iterate(found.frequency, found.field);
+    if (polished !== null) result = polished;
+    if (result === null) throw new InputError("heaterOperatingPoint", "part", partTemperature, "K", "a part temperature with an operating point the inverter can run");
+  }
+  // refresh the correction at the converged point until the exact coupling agrees with it; the
+  // corrections are a fixed point of their own, solved by the secant method per component
+  let previousCorrection: { c: { resistance: number; inductance: number }; g: { resistance: number; inductance: number } } | null = null;
+  for (let outer = 0; model !== null && outer < 16; outer++) {
+    const at = result.e;
+    const exact = model.coupling(at.f, partResistivity, at.mur);
+    const cheap = model.surrogate(at.f, partResistivity, at.mur);
+    const g = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
+    const agreed =
+      Math.abs(exact.reflectedResistance - at.reflectedResistance) <= 1e-7 * at.tankResistance &&
+      Math.abs(exact.inductanceChange - at.inductanceChange) <= 1e-8 * at.L;
+    if (agreed) {
+      // the reported numbers come from the exact coupling at this point
+      correction = g;
+      result = { ...result, e: evaluate(at.f, at.h, result.s.coilCurrentRms, result.s.tankVoltagePeak, true) };
+      break;
+    }
+    const c = correction ?? g;
+    let next = g;
+    if (previousCorrection !== null) {
+      const secant = (cn: number, gn: number, cp: number, gp: number): number => {
+        const denominator = gn - cn - (gp - cp);
+        return denominator !== 0 ? cn - ((gn - cn) * (cn - cp)) / denominator : gn;
+      };
+      const resistance = secant(c.resistance, g.resistance, previousCorrection.c.resistance, previousCorrection.g.resistance);
+      const inductance = secant(c.inductance, g.inductance, previousCorrection.c.inductance, previousCorrection.g.inductance);
+      if (resistance > 0.5 * g.resistance && resistance < 2 * g.resistance && Number.isFinite(inductance)) next = { resistance, inductance };
+    }
+    previousCorrection = { c, g };
+    correction = next;
+    const again = iterate(at.f, at.h);
+    if (again === null) {
+      correction = g;
+      break;
+    }
+    result = again;
+  }
+  const { e, iterations, converged } = result;
+  const s = solveInverter(e, true);
+  const validity: ValidityNote[] = [...e.notes, ...(withPart && model !== null ? model.notes : []), ...s.validity];
+  if (e.mur > 1) validity.push({ code: "constant-permeability", message: "The part's permeability is taken as constant through its depth at the value for the surface field (a linear model of a saturating material)." });
   if (!converged) {
-    validity.push({ code: "operating-point-not-converged", message: "The frequency/permeability fixed point did not settle to 1e-9 within 60 iterations; numbers are from the last iterate." });
+    validity.push({ code: "operating-point-not-converged", message: "The frequency/permeability fixed point did not settle to 1e-10 within 80 iterations; numbers are from the last iterate." });
   }
   if (d.concentrator !== null) {
     validity.push({
@@ -510,36 +806,35 @@ export function heaterOperatingPoint(
     });
   }
   const I2 = s.coilCurrentRms * s.coilCurrentRms;
-  const supplyLoss = s.supplyCurrent * s.supplyCurrent * d.supply.internalResistance;
-  const losses: HeaterLosses = {
-    supply: supplyLoss,
+  const lossesPlace: HeaterLosses = {
+    supply: s.sourceLoss,
     switches: s.switchLoss,
-    coil: I2 * result.coilResistance,
-    capacitors: I2 * result.capacitorResistance,
-    core: I2 * result.coreResistance,
-    part: I2 * result.reflectedResistance,
+    coil: I2 * e.coilResistance,
+    capacitors: I2 * e.capacitorResistance,
+    core: I2 * e.coreResistance,
+    part: I2 * e.reflectedResistance,
   };
-  const inputPower = d.supply.voltage * s.supplyCurrent;
-  return {
+  const inputPower = s.sourcePower;
+  const point: HeaterOperatingPoint = {
     withPart,
     partTemperature,
     frequency: s.frequency,
     coilInductance: L0,
-    inductanceChange: result.inductanceChange,
-    inductance: result.L,
-    coilResistance: result.coilResistance,
-    reflectedResistance: result.reflectedResistance,
-    capacitorResistance: result.capacitorResistance,
-    coreResistance: result.coreResistance,
-    switchResistance: result.switchResistance,
-    tankResistance: result.tankResistance,
-    partRelativePermeability: result.mur,
+    inductanceChange: e.inductanceChange,
+    inductance: e.L,
+    coilResistance: e.coilResistance,
+    reflectedResistance: e.reflectedResistance,
+    capacitorResistance: e.capacitorResistance,
+    coreResistance: e.coreResistance,
+    switchResistance: s.switchResistance,
+    tankResistance: e.tankResistance + s.switchResistance,
+    partRelativePermeability: e.mur,
     partResistivity,
-    partSkinDepth: result.coupling?.skinDepth ?? null,
-    surfaceFieldStrengthPeak: result.h,
+    partSkinDepth: e.coupling?.skinDepth ?? null,
+    surfaceFieldStrengthPeak: e.h,
     inverterInputVoltage: s.vin,
     supplyCurrent: s.supplyCurrent,
-    supplyTerminalVoltage: d.supply.voltage - s.supplyCurrent * d.supply.internalResistance,
+    supplyTerminalVoltage: s.terminalVoltage,
     tankVoltagePeak: s.tankVoltagePeak,
     coilVoltageRms: s.coilVoltageRmsStress,
     coilCurrentRms: s.coilCurrentRms,
@@ -552,14 +847,16 @@ export function heaterOperatingPoint(
     switchCurrentRms: s.switchCurrentRms,
     qualityFactor: s.qualityFactor,
     inputPower,
-    losses,
-    efficiency: inputPower > 0 ? losses.part / inputPower : 0,
-    coilEfficiency: coilEfficiency({ coilResistance: result.coilResistance, reflectedResistance: result.reflectedResistance }),
+    losses: lossesPlace,
+    efficiency: inputPower > 0 ? lossesPlace.part / inputPower : 0,
+    coilEfficiency: coilEfficiency({ coilResistance: e.coilResistance, reflectedResistance: e.reflectedResistance }),
     zeroVoltageSwitching: s.zvs,
     iterations,
     cautions: s.cautions,
     validity,
   };
+  if (correction !== null) corrections.set(point, correction);
+  return point;
 }
 
 /**
@@ -575,6 +872,24 @@ export function coilImpedanceAt(
   const notes: ValidityNote[] = [];
   const coilResistance = coilAcResistance(d, props, frequency, notes);
   if (!point.withPart) return { inductance: props.inductance, resistance: coilResistance };
-  const c = partCoupling(d, props, frequency, point.partResistivity, point.partRelativePermeability);
+  const c = couplingModel(d, props).coupling(frequency, point.partResistivity, point.partRelativePermeability);
   return { inductance: props.inductance + c.inductanceChange, resistance: coilResistance + c.reflectedResistance };
+}
+
+/**
+ * The study's coupling of its part at a given frequency, resistivity and relative permeability
+ * (the exact model the operating point reports), with the surface field per ampere: for checks
+ * against field solutions at fixed material properties.
+ *
+ * @internal
+ */
+export function studyPartCoupling(
+  d: ResolvedHeaterDescription,
+  frequency: number,
+  resistivity: number,
+  relativePermeability: number,
+): { reflectedResistance: number; inductanceChange: number; fieldPerAmpere: number } {
+  const model = couplingModel(d, coilProperties(d));
+  const c = model.coupling(frequency, resistivity, relativePermeability);
+  return { reflectedResistance: c.reflectedResistance, inductanceChange: c.inductanceChange, fieldPerAmpere: model.fieldPerAmpere };
 }

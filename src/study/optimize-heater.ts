@@ -308,6 +308,8 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
           progress();
           continue;
         }
+        // continuation across capacitances of one coil: each candidate starts from the previous solution
+        let previous: HeaterOperatingPoint | null = null;
         for (const capacitance of capacitances) {
           evaluated++;
           progress();
@@ -315,7 +317,8 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
           let point: HeaterOperatingPoint;
           try {
             const d = readHeaterDescription(variant);
-            point = heaterOperatingPoint(d, d.part.startTemperature, true, props);
+            point = heaterOperatingPoint(d, d.part.startTemperature, true, props, previous);
+            previous = point;
           } catch (e) {
             if (!(e instanceof InputError)) throw e;
             reject(`no operating point: ${e.where}: ${e.parameter} must be ${e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "")}`);

@@ -6,10 +6,11 @@
 import { DEFER_TO_CODES, InputError, requireInteger, requireObject } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
+import { specificHeatAt } from "../materials/index.js";
 import { lumpedHeatUp } from "../thermal/index.js";
 import type { LumpedEnergyBalance } from "../thermal/index.js";
 import { heaterCautions } from "./cautions.js";
-import { coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operating-point.js";
+import { NoOscillationError, coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operating-point.js";
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
@@ -26,7 +27,7 @@ export interface StudyHeaterOptions {
   readonly temperatureScan?: boolean;
   /** Compute the tank impedance against frequency with and without the part (default `true`). */
   readonly impedanceSweep?: boolean;
-  /** Operating points on the temperature grid of the heat-up, an integer ≥ 4 (default: one per 50 K, 6 … 16, plus a cluster at the Curie transition). */
+  /** Operating points of the initial temperature grid of the power curve, an integer ≥ 4 (default: one per 50 K, 6 … 24, plus clusters at the Curie transition and the specific-heat peak); adaptive refinement adds up to 48 more. */
   readonly heatUpPoints?: number;
 }
 
@@ -47,6 +48,23 @@ export interface HeaterPartFacts {
 }
 
 /**
+ * A span of part temperature where the heater has no operating point (the study counts no
+ * power there and never interpolates across it).
+ *
+ * @category Heater study
+ */
+export interface HeaterUnsolvedBand {
+  /** Lowest temperature of the band [K] (located to within 0.5 K). */
+  readonly from: number;
+  /** Highest temperature of the band [K] (located to within 0.5 K; the top of the studied range when it runs off it). */
+  readonly to: number;
+  /** `true` when the current-fed tank cannot oscillate there for any permeability the part can take (the switches latch on). */
+  readonly noOscillation: boolean;
+  /** Why the operating point fails (the limit the design hits). */
+  readonly reason: string;
+}
+
+/**
  * The electro-thermal heat-up: the lumped heat-up of the thermal module, driven by the part
  * power of the operating point re-solved as the part heats (through the Curie point).
  *
@@ -59,7 +77,7 @@ export interface HeaterHeatUp {
   readonly reachable: boolean;
   /** Temperature at the end of the simulated span [K]. */
   readonly finalTemperature: number;
-  /** Temperature the part would settle at with this heater [K] (`null` when unbounded). */
+  /** Temperature the part would settle at with this heater [K], from the power curve over the material's whole range (independent of the target); `null` when it lies above that range. */
   readonly steadyStateTemperature: number | null;
   /** Time the part crosses its Curie temperature [s], `null` when it does not. */
   readonly curieCrossingTime: number | null;
@@ -83,11 +101,15 @@ export interface HeaterHeatUp {
   readonly biotNumber: number | null;
   /** The temperatures at which operating points were solved (the heat-up grid) [K]. */
   readonly gridTemperatures: readonly number[];
+  /** Bands of temperature without an operating point (no power counted there), lowest first. */
+  readonly unsolvedBands: readonly HeaterUnsolvedBand[];
+  /** The temperature span over which the part power was solved [K]: from the start to the top of the material's range, independent of the target. */
+  readonly powerCurveRange: readonly [number, number];
 }
 
 /**
- * The operating point against part temperature, from the start temperature to past the Curie
- * point (or to the target for non-magnetic parts).
+ * The operating point against part temperature, over the same adaptively sampled power curve
+ * the heat-up uses (from the start temperature to the top of the material's range).
  *
  * @category Heater study
  */
@@ -106,6 +128,8 @@ export interface HeaterTemperatureScan {
   readonly relativePermeabilities: readonly number[];
   /** Inductance at the coil terminals [H]. */
   readonly inductances: readonly number[];
+  /** Bands of temperature without an operating point, lowest first (their points are left out above). */
+  readonly unsolvedBands: readonly HeaterUnsolvedBand[];
 }
 
 /**
@@ -202,22 +226,151 @@ function partGeometry(part: ResolvedPart): { volume: number; surfaceArea: number
   }
 }
 
-/** Linear interpolation in a sorted grid, clamped at its ends. */
-function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
-  const n = xs.length;
-  if (x <= (xs[0] as number)) return ys[0] as number;
-  if (x >= (xs[n - 1] as number)) return ys[n - 1] as number;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if ((xs[mid] as number) <= x) lo = mid;
-    else hi = mid;
+/** The part's operating points against temperature, with the bands where none exists. */
+interface PowerCurve {
+  /** Every sampled temperature, ascending [K]. */
+  readonly temperatures: readonly number[];
+  /** The solved operating points, ascending in temperature. */
+  readonly points: readonly HeaterOperatingPoint[];
+  /** The unsolved bands. */
+  readonly bands: readonly HeaterUnsolvedBand[];
+  /** The sampled span [K]. */
+  readonly range: readonly [number, number];
+  /** A quantity at a temperature: linear between neighbouring solved points, 0 in an unsolved band, held beyond the ends. */
+  valueAt(temperature: number, of: (p: HeaterOperatingPoint) => number): number;
+  /** The operating point at a temperature (continued from the nearest solved sample), `null` when none exists. */
+  solveAt(temperature: number): HeaterOperatingPoint | null;
+}
+
+interface CurveSample {
+  readonly t: number;
+  readonly p: HeaterOperatingPoint | null;
+  readonly reason: string;
+  readonly noOscillation: boolean;
+}
+
+/** Extra refinement points of the power curve beyond the initial grid. */
+const REFINEMENT_BUDGET = 32;
+
+/**
+ * Samples the part's operating point from the start temperature to the top of the material's
+ * range (independent of the target): an initial grid with clusters at the Curie transition and
+ * the specific-heat peak, solved in ascending order by continuation, then refined where the part
+ * power or frequency changes by more than 2 % between neighbours and at the edges of any band
+ * without an operating point (located to 0.5 K).
+ */
+function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operating: HeaterOperatingPoint, initialCount: number | undefined, enabled: boolean): PowerCurve {
+  const part = d.part;
+  const material = part.material;
+  const start = part.startTemperature;
+  const top = Math.max(part.targetTemperature, Math.min(material.temperatureRange.max, material.meltingTemperature - 50));
+  const solve = (t: number, from: HeaterOperatingPoint | null): CurveSample => {
+    if (t === start) return { t, p: operating, reason: "", noOscillation: false };
+    try {
+      return { t, p: heaterOperatingPoint(d, t, true, props, from), reason: "", noOscillation: false };
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      return { t, p: null, reason: e.message, noOscillation: e instanceof NoOscillationError };
+    }
+  };
+  const samples: CurveSample[] = [];
+  if (enabled) {
+    const curie = material.magnetic && material.curieTemperature !== undefined ? material.curieTemperature : null;
+    const count = initialCount ?? Math.min(16, Math.max(6, Math.ceil((top - start) / 100) + 2));
+    const grid = new Set(temperatureGrid(start, top, count, curie, material.permeability?.transitionWidth ?? 0));
+    // a cluster at the specific-heat peak (e.g. the magnetic transition of steel)
+    let peakT = start;
+    let peakC = -Infinity;
+    for (let i = 0; i <= 200; i++) {
+      const t = start + ((top - start) * i) / 200;
+      const c = specificHeatAt(material, t);
+      if (c > peakC) {
+        peakC = c;
+        peakT = t;
+      }
+    }
+    if (peakT > start && peakT < top) for (let k = -3; k <= 3; k++) grid.add(Math.min(top, Math.max(start, peakT + 10 * k)));
+    let previous: HeaterOperatingPoint | null = operating;
+    for (const t of [...grid].sort((x, y) => x - y)) {
+      const sample = solve(t, previous);
+      if (sample.p !== null) previous = sample.p;
+      samples.push(sample);
+    }
+    // adaptive refinement: band edges first, then the largest changes of power or frequency
+    const pMax = Math.max(...samples.map((x) => x.p?.losses.part ?? 0), 1e-300);
+    for (let budget = REFINEMENT_BUDGET; budget > 0; budget--) {
+      let best = -1;
+      let bestPriority = 0;
+      for (let i = 0; i + 1 < samples.length; i++) {
+        const a = samples[i] as CurveSample;
+        const b = samples[i + 1] as CurveSample;
+        const span = b.t - a.t;
+        let priority = 0;
+        if ((a.p === null) !== (b.p === null)) priority = span > 0.5 ? 10 + span : 0;
+        else if (a.p !== null && b.p !== null && span > 1) {
+          const change = Math.max(Math.abs(b.p.losses.part - a.p.losses.part) / pMax, Math.abs(b.p.frequency - a.p.frequency) / a.p.frequency);
+          priority = change > 0.03 ? change : 0;
+        }
+        if (priority > bestPriority) {
+          bestPriority = priority;
+          best = i;
+        }
+      }
+      if (best < 0) break;
+      const a = samples[best] as CurveSample;
+      const b = samples[best + 1] as CurveSample;
+      samples.splice(best + 1, 0, solve(0.5 * (a.t + b.t), a.p ?? b.p));
+    }
   }
-  const x0 = xs[lo] as number;
-  const x1 = xs[hi] as number;
-  const t = (x - x0) / (x1 - x0);
-  return (ys[lo] as number) * (1 - t) + (ys[hi] as number) * t;
+  const points = samples.flatMap((x) => (x.p === null ? [] : [x.p]));
+  const bands: HeaterUnsolvedBand[] = [];
+  for (let i = 0; i < samples.length; i++) {
+    const x = samples[i] as CurveSample;
+    if (x.p !== null) continue;
+    let j = i;
+    while (j + 1 < samples.length && (samples[j + 1] as CurveSample).p === null) j++;
+    const last = samples[j] as CurveSample;
+    bands.push({ from: x.t, to: j + 1 < samples.length ? last.t : top, noOscillation: samples.slice(i, j + 1).some((y) => y.noOscillation), reason: x.reason });
+    i = j;
+  }
+  const temperatures = samples.map((x) => x.t);
+  return {
+    temperatures,
+    points,
+    bands,
+    range: [start, top],
+    valueAt(t, of) {
+      const n = samples.length;
+      if (n === 0) return of(operating);
+      const first = samples[0] as CurveSample;
+      const last = samples[n - 1] as CurveSample;
+      if (t <= first.t) return first.p === null ? 0 : of(first.p);
+      if (t >= last.t) return last.p === null ? 0 : of(last.p);
+      let lo = 0;
+      let hi = n - 1;
+      while (hi - lo > 1) {
+        const mid = (lo + hi) >> 1;
+        if ((samples[mid] as CurveSample).t <= t) lo = mid;
+        else hi = mid;
+      }
+      const a = samples[lo] as CurveSample;
+      const b = samples[hi] as CurveSample;
+      if (a.p !== null && b.p !== null) {
+        const u = (t - a.t) / (b.t - a.t);
+        return of(a.p) * (1 - u) + of(b.p) * u;
+      }
+      // beside a band: hold the solved neighbour over the half of the (≤ 0.5 K) gap nearer to it
+      const nearer = t - a.t <= b.t - t ? a : b;
+      return nearer.p === null ? 0 : of(nearer.p);
+    },
+    solveAt(t) {
+      const exact = samples.find((x) => x.t === t);
+      if (exact !== undefined) return exact.p;
+      let from: HeaterOperatingPoint = operating;
+      for (const p of points) if (Math.abs(p.partTemperature - t) < Math.abs(from.partTemperature - t)) from = p;
+      return solve(t, from).p;
+    },
+  };
 }
 
 /** Temperatures from `start` to `end`, uniform, with extra points around the Curie transition. */
@@ -269,24 +422,30 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  *    frequency (`workCoilResistanceCurrentSheet`, `tubeAcResistance`, `roundWireAcRatio`,
  *    `litzAcRatio`);
  * 2. the part's coupling at its temperature (`resistivityAt`, `relativePermeabilityAt` at the
- *    surface field, `barInLongCoil` / `tubeInLongCoil` / `coilOverPlate`);
- * 3. tank and inverter (`currentFedParallelInverter`, or `seriesInverter` with
- *    `frequencyForPower`; `tankStresses`), with frequency and the field-dependent permeability
- *    iterated to a fixed point, and the supply's internal resistance and the switches'
- *    on-resistance in the loop;
- * 4. losses by place (supply, switches, coil, capacitors, concentrator core via `steinmetzLoss`,
- *    part) adding up to the input power, efficiencies (`coilEfficiency`);
- * 5. the electro-thermal heat-up (`lumpedHeatUp` driven by the part power re-solved on a
- *    temperature grid through the Curie point), the operating point against temperature and
- *    the tank impedance against frequency (`tankImpedanceSweep`);
- * 6. cautions (tank and safety modules, plus the description's own ratings) and a validity
+ *    finite coil's surface field from `fieldNearCoil`): bars, tubes and rings through the finite
+ *    coil, `prepareEncirclingCoilOverRod`, weighted by the share of the coil's squared field over
+ *    the part's length; plates through `coilOverPlate`;
+ * 3. tank and inverter fed from the source (`currentFedParallelInverterWithSource`, or
+ *    `seriesInverterWithSource` at a fixed frequency or a target power; `tankStresses`), with
+ *    frequency and the field-dependent permeability iterated to a fixed point by continuation
+ *    from the neighbouring temperature, damping, and a bracketing search over the field;
+ * 4. losses by place (supply, switches, coil, capacitors via `capacitorSeriesResistance`,
+ *    concentrator core via `sinusoidalPeakFluxDensity` and `steinmetzLoss`, part) adding up to the
+ *    input power, efficiencies (`coilEfficiency`);
+ * 5. the power curve over the material's whole temperature range (adaptive, by continuation),
+ *    the electro-thermal heat-up on it (`lumpedHeatUp`), the operating point against temperature
+ *    and the tank impedance against frequency (`tankImpedanceSweep`);
+ * 6. cautions (tank and safety modules, plus the description's ratings, plus
+ *    `tank-cannot-oscillate` for a band where the current-fed tank cannot run) and a validity
  *    list of every approximation used.
  *
- * Accuracy: the composition adds no error of its own beyond the fixed-point tolerance (1e-9
- * in frequency, 1e-8 in surface field) and the linear interpolation of part power on the
- * heat-up grid (one point per 50 K, 6 to 16, plus a dense cluster at the Curie transition); the
- * energy balance of each operating point closes to 1e-9 relative (tested). Each module's
- * accuracy and validity apply, and are listed in `validity` where they are stretched.
+ * Accuracy: the composition adds no error of its own beyond the fixed-point tolerance (1e-10
+ * in frequency, 1e-9 in surface field, exact coupling agreeing to 1e-10 of the tank resistance)
+ * and the linear interpolation of part power between neighbouring points of the power curve
+ * (refined until neighbours differ by ≤ 2 % in power and frequency, within 48 extra points); the
+ * energy balance of each operating point closes to 1e-9 relative and its terminal voltages are
+ * positive (tested); a design the source or tank cannot serve throws. Each module's accuracy and
+ * validity apply, and are listed in `validity` where they are stretched.
  *
  * @param description - the design (see {@link HeaterDescription}); text quantities allowed
  * @param options - which slower parts to run (all by default)
@@ -321,17 +480,6 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
   const curie = material.magnetic && material.curieTemperature !== undefined ? material.curieTemperature : null;
   const facts: HeaterPartFacts = { mass: geometry.volume * material.density, surfaceArea: geometry.surfaceArea, volume: geometry.volume, curieTemperature: curie };
 
-  // a point the inverter cannot run at (e.g. a parallel tank damped past oscillation) is `null`
-  const failures: { temperature: number; message: string }[] = [];
-  const tryPoint = (t: number): HeaterOperatingPoint | null => {
-    try {
-      return heaterOperatingPoint(d, t, true, props);
-    } catch (e) {
-      if (!(e instanceof InputError)) throw e;
-      failures.push({ temperature: t, message: e.message });
-      return null;
-    }
-  };
   const must = (f: () => HeaterOperatingPoint, what: string): HeaterOperatingPoint => {
     try {
       return f();
@@ -341,31 +489,26 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
     }
   };
   const emptyCoil = must(() => heaterOperatingPoint(d, part.startTemperature, false, props), "with the empty coil");
-  const operating = must(() => heaterOperatingPoint(d, part.startTemperature, true, props), "with the part at its start temperature");
-  const atTarget = tryPoint(part.targetTemperature);
+  const operating = must(() => heaterOperatingPoint(d, part.startTemperature, true, props, emptyCoil), "with the part at its start temperature");
+
+  // the part power against temperature, over the material's whole range (independent of the
+  // target), sampled adaptively and solved by continuation from the neighbouring point
+  const curve = powerCurve(d, props, operating, heatUpPoints, options.heatUp !== false || options.temperatureScan !== false);
+  const atTarget = curve.solveAt(part.targetTemperature);
   const validity: ValidityNote[] = [...operating.validity, ...(atTarget?.validity ?? []), ...emptyCoil.validity];
   const allPoints: HeaterOperatingPoint[] = [emptyCoil, operating];
   if (atTarget !== null) allPoints.push(atTarget);
 
-  // electro-thermal heat-up
+  // ---- heat-up: the hook for the radial (surface/core) model is here: it takes `curve`
+  // (operating points by temperature, unsolved bands) and replaces `lumpedHeatUp` ----
   let heatUp: HeaterHeatUp | null = null;
   if (options.heatUp !== false) {
-    const width = material.permeability?.transitionWidth ?? 0;
-    // about one operating point per 50 K (6 … 16), plus a dense cluster at the Curie transition
-    const span = part.targetTemperature - part.startTemperature;
-    const count = heatUpPoints ?? Math.min(16, Math.max(6, Math.ceil(span / 50) + 2));
-    const grid = temperatureGrid(part.startTemperature, part.targetTemperature, Math.max(4, count), curie, width);
-    const points = grid.map((t) => (t === part.startTemperature ? operating : t === part.targetTemperature ? atTarget : tryPoint(t)));
-    for (const p of points) if (p !== null) allPoints.push(p);
-    // where the inverter cannot run, no power flows (frequency shown as 0)
-    const partPower = points.map((p) => p?.losses.part ?? 0);
-    const inputPower = points.map((p) => p?.inputPower ?? 0);
-    const frequency = points.map((p) => p?.frequency ?? 0);
-    const current = points.map((p) => p?.supplyCurrent ?? 0);
+    const grid = curve.temperatures;
+    for (const p of curve.points) allPoints.push(p);
     const thermal = lumpedHeatUp({
       mass: facts.mass,
       material,
-      powerAt: (t: number) => interpolate(grid, partPower, t),
+      powerAt: (t: number) => curve.valueAt(t, (p) => p.losses.part),
       surfaceArea: facts.surfaceArea,
       convectionCoefficient: d.environment.convectionCoefficient,
       emissivity: part.emissivity,
@@ -375,16 +518,26 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       relativeTolerance: 1e-8,
     });
     validity.push(...thermal.validity);
+    // the settle temperature is found on the power curve, which ends at the top of the material's range
+    let steadyStateTemperature = thermal.steadyStateTemperature;
+    if (steadyStateTemperature !== null && steadyStateTemperature > curve.range[1]) {
+      validity.push({
+        code: "settles-above-range",
+        message: `The part would still be heating at ${(curve.range[1] - 273.15).toFixed(0)} °C, the top of the material's documented range (or 50 K below melting): it settles above it, where the study has no data; the settle temperature is reported as unknown.`,
+        value: curve.range[1],
+      });
+      steadyStateTemperature = null;
+    }
     validity.push({
       code: "lumped-heat-up",
-      message: `Heat-up with one part temperature (lumped model); the part power is re-solved at ${grid.length} temperatures and interpolated linearly between them.`,
+      message: `Heat-up with one part temperature (lumped model); the part power is solved at ${grid.length} temperatures from ${(curve.range[0] - 273.15).toFixed(0)} to ${(curve.range[1] - 273.15).toFixed(0)} °C (denser where it changes fast) and interpolated linearly between neighbouring solved points, never across an unsolved band.`,
     });
     const times = thermal.times;
     const temperatures = thermal.temperatures;
     let supplyEnergy = 0;
     let supplyCharge = 0;
-    const inputs = temperatures.map((t) => interpolate(grid, inputPower, t));
-    const currents = temperatures.map((t) => interpolate(grid, current, t));
+    const inputs = temperatures.map((t) => curve.valueAt(t, (p) => p.inputPower));
+    const currents = temperatures.map((t) => curve.valueAt(t, (p) => p.supplyCurrent));
     for (let i = 1; i < times.length; i++) {
       const dt = (times[i] as number) - (times[i - 1] as number);
       supplyEnergy += 0.5 * dt * ((inputs[i] as number) + (inputs[i - 1] as number));
@@ -405,41 +558,38 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       timeToTarget: thermal.timeToTarget,
       reachable: thermal.reachable,
       finalTemperature: thermal.finalTemperature,
-      steadyStateTemperature: thermal.steadyStateTemperature,
+      steadyStateTemperature,
       curieCrossingTime,
       times,
       temperatures,
-      frequencies: temperatures.map((t) => interpolate(grid, frequency, t)),
-      partPowers: temperatures.map((t) => interpolate(grid, partPower, t)),
+      // where no operating point exists, no power flows and the frequency is shown as 0
+      frequencies: temperatures.map((t) => curve.valueAt(t, (p) => p.frequency)),
+      partPowers: temperatures.map((t) => curve.valueAt(t, (p) => p.losses.part)),
       inputPowers: inputs,
       supplyEnergy,
       supplyCharge,
       energy: thermal.energy,
       biotNumber: thermal.biotNumber,
       gridTemperatures: grid,
+      unsolvedBands: curve.bands,
+      powerCurveRange: curve.range,
     };
   }
 
-  // operating point against temperature, through the Curie point
+  // operating point against temperature: the solved points of the same curve
   let temperatureScan: HeaterTemperatureScan | null = null;
   if (options.temperatureScan !== false) {
-    const top = Math.min(
-      material.temperatureRange.max,
-      material.meltingTemperature - 50,
-      Math.max(part.targetTemperature, curie === null ? part.targetTemperature : curie + 150),
-    );
-    const grid = temperatureGrid(part.startTemperature, Math.max(top, part.targetTemperature), 16, curie, material.permeability?.transitionWidth ?? 0);
-    const solved = grid.map((t) => ({ t, p: tryPoint(t) }));
-    const ok = solved.filter((x): x is { t: number; p: HeaterOperatingPoint } => x.p !== null);
-    const points = ok.map((x) => x.p);
+    const points = curve.points;
+    if (options.heatUp === false) for (const p of points) allPoints.push(p);
     temperatureScan = {
-      temperatures: ok.map((x) => x.t),
+      temperatures: points.map((p) => p.partTemperature),
       frequencies: points.map((p) => p.frequency),
       partPowers: points.map((p) => p.losses.part),
       inputPowers: points.map((p) => p.inputPower),
       efficiencies: points.map((p) => p.efficiency),
       relativePermeabilities: points.map((p) => p.partRelativePermeability),
       inductances: points.map((p) => p.inductance),
+      unsolvedBands: curve.bands,
     };
   }
 
@@ -473,17 +623,31 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
     impedance = { frequencies, magnitudeEmpty, phaseEmpty, magnitudeLoaded, phaseLoaded };
   }
 
-  if (failures.length > 0) {
-    const first = failures.reduce((a, b) => (b.temperature < a.temperature ? b : a));
+  const bands = curve.bands;
+  if (bands.length > 0) {
+    const list = bands.map((band) => `${(band.from - 273.15).toFixed(0)}–${(band.to - 273.15).toFixed(0)} °C`).join(", ");
     validity.push({
       code: "no-operating-point",
-      message: `The inverter has no operating point with the part at ${(first.temperature - 273.15).toFixed(0)} °C and above in places (${first.message}); the study counts no power there.`,
-      value: first.temperature,
+      message: `The inverter has no operating point with the part at ${list} (${bands[0]?.reason ?? ""}); the study counts no power there and does not interpolate across it.`,
+      value: bands[0]?.from ?? 0,
     });
   }
   const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity);
   // the operating points' own cautions (tank voltage, hard switching) join the list once per code:
   // the safety module's caution of the same code, or the first point's, stands for the rest
+  const latched = bands.filter((band) => band.noOscillation);
+  if (latched.length > 0) {
+    const list = latched.map((band) => `${(band.from - 273.15).toFixed(0)}–${(band.to - 273.15).toFixed(0)} °C`).join(", ");
+    cautions.push({
+      code: "tank-cannot-oscillate",
+      severity: "danger",
+      message: `With the part at ${list} the loaded tank's resistance exceeds √(L/C) for every permeability the part can take: the current-fed inverter cannot oscillate, its switches latch on and only the supply's internal resistance, the choke and the switches limit the current (a short circuit of the supply through the choke). Add current limiting or a shutdown, or change the tank so that √(L/C) exceeds the loaded resistance (less capacitance, more turns).`,
+      value: latched[0]?.from ?? 0,
+      limit: part.startTemperature,
+      unit: "K",
+      source: "current-fed inverter: the tank oscillates only while its coil-branch resistance is below √(L/C) (currentFedParallelInverter)",
+    });
+  }
   const seen = new Set(cautions.map((c) => c.code));
   for (const p of allPoints) {
     for (const c of p.cautions) {

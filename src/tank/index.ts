@@ -12,3 +12,4 @@ export * from "./series-inverter.js";
 export * from "./e-series.js";
 export * from "./capacitor-bank.js";
 export * from "./tolerance-analysis.js";
+export * from "./inverter-with-source.js";

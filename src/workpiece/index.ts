@@ -28,6 +28,8 @@ export type {
   PlateLayer,
 } from "./coil-over-plate.js";
 export { encirclingCoilOverRod } from "./encircling-coil.js";
+export { prepareEncirclingCoilOverRod } from "./encircling-coil-prepared.js";
+export type { EncirclingCoilGeometry, EncirclingCoilChange, EncirclingCoilEvaluator } from "./encircling-coil-prepared.js";
 export type {
   EncirclingCoil,
   EncirclingCoilOverRodOptions,

@@ -13,6 +13,10 @@ const race = JSON.parse(readFileSync(new URL("../../docs/examples/study-bearing-
 // random supply voltages prepared beforehand (36–60 V)
 let seed = 12345;
 const random = (): number => ((seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648);
+const plate = JSON.parse(readFileSync(new URL("../../docs/examples/study-plate-warmer.json", import.meta.url), "utf8")) as Record<string, unknown> & {
+  supply: Record<string, unknown>;
+};
+const plateVariants = Array.from({ length: 8 }, (_, i) => ({ ...plate, supply: { ...plate.supply, voltage: 24 + 0.25 * i } }));
 const variants = Array.from({ length: 64 }, () => ({ ...race, supply: { ...race.supply, voltage: 36 + 24 * random() } }));
 let k = 0;
 const check = (x: number): void => {
@@ -34,6 +38,10 @@ describe("heater study", () => {
     const s = studyHeater(variants[k++ % variants.length], { temperatureScan: false, impedanceSweep: false });
     check(s.heatUp?.timeToTarget ?? Number.NaN);
   }, { time: 300 });
+  bench("studyHeater with the heat-up (plate warmer: pancake over a steel plate)", () => {
+    const s = studyHeater(plateVariants[k++ % plateVariants.length], { temperatureScan: false, impedanceSweep: false });
+    check(s.heatUp?.finalTemperature ?? Number.NaN);
+  }, { time: 300, iterations: 2 });
   bench("optimizeHeater over 10 080 candidates (bearing race)", () => {
     const r = optimizeHeater(race, {
       targetPower: 1500,

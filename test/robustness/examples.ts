@@ -483,6 +483,22 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }],
     nonFinite: { parallelResistance: "null when no parallel resistance was given (documented)" },
   },
+  capacitorSeriesResistance: {
+    args: () => [{ capacitance: 1e-6, dissipationFactor: 0.001, frequency: 50e3 }],
+    allow: [{ paths: ["0.dissipationFactor"], kinds: ["zero"], reason: "a lossless capacitor (tan δ = 0) is in the domain" }],
+  },
+  seriesInverterWithSource: {
+    args: () => [{ sourceVoltage: 24, sourceResistance: 0.5, bridge: "full", inductance: 20e-6, capacitance: 1.5e-6, resistance: 0.3, power: 100 }],
+    allow: [{ paths: ["0.sourceResistance"], kinds: ["zero"], reason: "an ideal source (R = 0) is in the domain" }],
+  },
+  currentFedParallelInverterWithSource: {
+    args: () => [{ sourceVoltage: 24, sourceResistance: 0.05, switchOnResistance: 0.01, inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }],
+    allow: [
+      { paths: ["0.sourceResistance", "0.switchOnResistance"], kinds: ["zero"], reason: "ideal source and switches (R = 0) are in the domain" },
+      { paths: ["0.switchOnResistance"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+    nonFinite: { chokeRipplePeakToPeak: "null for an infinite choke, i.e. none given (documented)" },
+  },
   seriesInverter: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, switchingFrequency: 38e3 }] },
   frequencyForPower: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, power: 2000 }] },
   seriesTank: { args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }] },
@@ -548,6 +564,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   powerInPart: {
     args: () => [{ coilCurrentRms: 200, reflectedResistance: 0.05 }],
     allow: [{ paths: ["0.coilCurrentRms", "0.reflectedResistance"], kinds: ["zero"], reason: "no current or no part: zero power is in the domain" }],
+  },
+  prepareEncirclingCoilOverRod: {
+    args: () => [{ coil: { innerRadius: 0.02, outerRadius: 0.025, length: 0.05, turns: 10 }, rod: { radius: 0.015, innerRadius: 0.005 } }],
+    allow: [{ paths: ["0.rod.innerRadius"], kinds: ["undefined", "zero"], reason: OPTIONAL + " (a solid rod)" }],
   },
   encirclingCoilOverRod: {
     args: () => [
