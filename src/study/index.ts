@@ -57,6 +57,7 @@ export type {
   StudyHeaterOptions,
   HeaterPartFacts,
   HeaterHeatUp,
+  HeaterRadialHeatUp,
   HeaterTemperatureScan,
   HeaterImpedanceSweep,
   HeaterStudy,

@@ -26,7 +26,7 @@ import { surfaceTemperatureCaution } from "../safety/index.js";
 import { radialHeatUp } from "../thermal/index.js";
 import type { RadialGenerationRequest, RadialHeatUpResult } from "../thermal/index.js";
 import { MU_0 } from "../units/index.js";
-import { layeredCylinderInLongCoil } from "../workpiece/index.js";
+import { barInLongCoil, layeredCylinderInLongCoil, tubeInLongCoil } from "../workpiece/index.js";
 import type { LongCoil } from "../workpiece/index.js";
 
 /**
@@ -75,8 +75,14 @@ export interface InductionRadialState {
 export interface InductionRadialDrive {
   /** Frequency [Hz], > 0. */
   readonly frequency: number;
-  /** RMS coil current [A], ≥ 0. */
+  /** RMS coil current [A], ≥ 0: sets the field amplitude (hence μr(H)) and, without `power`, the power. */
   readonly coilCurrentRms: number;
+  /**
+   * Factor on the power of every shell [-], ≥ 0 (default 1): the ratio of a better coupling
+   * model's power (e.g. a finite coil's) to the long coil's at the same state; the distribution
+   * by depth stays that of the layered solution.
+   */
+  readonly powerFactor?: number;
 }
 
 /**
@@ -92,8 +98,14 @@ export interface InductionRadialHeatUpOptions {
   readonly part: RadialHeatedPart;
   /** Material: resistivity ρ(T), permeability μr(T, H), specific heat, conductivity, density. */
   readonly material: ConductiveMaterial;
-  /** The long coil around the part, see {@link LongCoil}; its length is the heated length. */
+  /** The long coil around the part, see {@link LongCoil}. */
   readonly coil: LongCoil;
+  /**
+   * Length of part that shares the absorbed power and loses heat from its mantle [m], > 0
+   * (default `coil.length`); a part longer than the coil, with axial conduction evening out the
+   * power, is modelled by its whole length (an axial average).
+   */
+  readonly heatedLength?: number;
   /** Frequency [Hz], > 0 (with `coilCurrentRms` or `power`). */
   readonly frequency?: number;
   /** Constant RMS coil current [A], ≥ 0. */
@@ -156,8 +168,14 @@ export interface InductionRadialHeatUpResult extends RadialHeatUpResult {
     readonly inductanceChange: number[];
     /** Relative permeability of the outer shell [-]. */
     readonly surfacePermeability: number[];
+    /**
+     * Reflected resistance of the part at one uniform temperature, the surface's, with the outer
+     * shell's permeability ({@link barInLongCoil} / {@link tubeInLongCoil}) [Ω]: against
+     * `reflectedResistance` it measures what a uniform-temperature model misses.
+     */
+    readonly uniformReflectedResistance: number[];
   };
-  /** Energy balance of the whole part over the heated length [J]: electrical input, stored, lost to the surroundings. */
+  /** Energy balance of the part over `heatedLength` [J]: electrical input, stored, lost to the surroundings. */
   readonly partEnergy: { readonly input: number; readonly stored: number; readonly lost: number; readonly imbalance: number };
   /** Number of times the field was re-solved for new temperatures. */
   readonly fieldSolutions: number;
@@ -172,6 +190,7 @@ const KNOWN = [
   "part",
   "material",
   "coil",
+  "heatedLength",
   "frequency",
   "coilCurrentRms",
   "power",
@@ -215,7 +234,7 @@ const KNOWN = [
  * `coilCurrentRms` or `power`, or `driveAt`); a drive callback returning a non-positive
  * frequency or a negative current; the hard domain of {@link radialHeatUp}.
  * Validity: the long-coil idealisation (uniform applied field along the coil; end effects and
- * axial conduction ignored; the heated length is the coil length, the part's ends insulated);
+ * axial conduction ignored; the power spread over `heatedLength`, the part's ends insulated);
  * the bore of a tube insulated; the permeability model of the material (no hysteresis loss).
  *
  * Accuracy: the field solution is exact for the shell properties (≤ 1e-10 vs mpmath); the
@@ -307,10 +326,10 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
     const d = driveAt(state) as unknown;
     if (typeof d !== "object" || d === null) throw new InputError(WHERE, "driveAt(…)", d, "", "an object { frequency, coilCurrentRms }");
     const o = d as Record<string, unknown>;
-    return {
-      frequency: requirePositive(WHERE, "driveAt(…).frequency", o["frequency"], "Hz"),
-      coilCurrentRms: requireNonNegative(WHERE, "driveAt(…).coilCurrentRms", o["coilCurrentRms"], "A"),
-    };
+    const frequency = requirePositive(WHERE, "driveAt(…).frequency", o["frequency"], "Hz");
+    const coilCurrentRms = requireNonNegative(WHERE, "driveAt(…).coilCurrentRms", o["coilCurrentRms"], "A");
+    if (o["powerFactor"] === undefined) return { frequency, coilCurrentRms };
+    return { frequency, coilCurrentRms, powerFactor: requireNonNegative(WHERE, "driveAt(…).powerFactor", o["powerFactor"], "") };
   };
 
   // Finest skin depth expected (cold, weak-field permeability) sets the grid refinement.
@@ -319,7 +338,8 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
   const coldRho = resistivityAt(material, initial);
   const finestSkin = Math.sqrt((2 * coldRho) / (2 * Math.PI * firstDrive.frequency * MU_0 * coldMur));
 
-  const heatedArea = 2 * Math.PI * radius * coil.length;
+  const heatedLength = options.heatedLength === undefined ? coil.length : requirePositive(WHERE, "heatedLength", options.heatedLength, "m");
+  const heatedArea = 2 * Math.PI * radius * heatedLength;
   const n = cells + 1; // shells = control volumes
   const rho = new Float64Array(n);
   const mur = new Float64Array(n);
@@ -327,6 +347,7 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
   const lastTemps = new Float64Array(n);
   const perArea = new Float64Array(n); // W/m² per A² (last solution)
   let lastCurrent = 0;
+  let lastScale = 0; // generation per (W/m² per A²): I², times the override factor
   let solved = false;
   let solutions = 0;
   let iterations = 0;
@@ -338,6 +359,7 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
     reflectedResistance: [] as number[],
     inductanceChange: [] as number[],
     surfacePermeability: [] as number[],
+    uniformReflectedResistance: [] as number[],
   };
 
   const solve = (request: RadialGenerationRequest): void => {
@@ -389,15 +411,23 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
       lastTemps[i] = temps[i]!;
     }
     lastCurrent = current;
+    const factor = drive.powerFactor ?? 1;
+    const power = result.reflectedResistance * current * current * factor;
+    lastScale = current * current * factor;
     solved = true;
     solutions++;
     electrical.times.push(request.time);
-    electrical.power.push(result.reflectedResistance * current * current);
+    electrical.power.push(power);
     electrical.frequency.push(drive.frequency);
     electrical.coilCurrentRms.push(current);
     electrical.reflectedResistance.push(result.reflectedResistance);
     electrical.inductanceChange.push(result.inductanceChange);
     electrical.surfacePermeability.push(mur[n - 1]!);
+    const uniform =
+      bore > 0
+        ? tubeInLongCoil({ coil, tube: { outerRadius: radius, innerRadius: bore, resistivity: rho[n - 1]!, relativePermeability: mur[n - 1]! }, frequency: drive.frequency })
+        : barInLongCoil({ coil, bar: { radius, resistivity: rho[n - 1]!, relativePermeability: mur[n - 1]! }, frequency: drive.frequency });
+    electrical.uniformReflectedResistance.push(uniform.reflectedResistance);
   };
 
   const generationAt = (request: RadialGenerationRequest): void => {
@@ -411,8 +441,7 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
       }
     }
     if (moved) solve(request);
-    const scale = lastCurrent * lastCurrent;
-    for (let i = 0; i < n; i++) request.generation[i] = perArea[i]! * scale;
+    for (let i = 0; i < n; i++) request.generation[i] = perArea[i]! * lastScale;
   };
 
   const thermal = radialHeatUp({
