@@ -61,6 +61,7 @@ export type {
   HeaterTemperatureScan,
   HeaterImpedanceSweep,
   HeaterStudy,
+  HeaterUnsolvedBand,
 } from "./study-heater.js";
 export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
 export { sweepHeater } from "./sweep-heater.js";

@@ -8,6 +8,7 @@ import type { Caution, ValidityNote } from "../core/index.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
 import { specificHeatAt } from "../materials/index.js";
 import { lumpedHeatUp } from "../thermal/index.js";
+import { workpieceGeometry } from "../workpiece/index.js";
 import type { LumpedEnergyBalance } from "../thermal/index.js";
 import { heaterCautions } from "./cautions.js";
 import { inductionRadialHeatUp } from "./induction-radial-heat-up.js";
@@ -249,28 +250,17 @@ export interface HeaterStudy {
   readonly validity: readonly ValidityNote[];
 }
 
-/** Geometry of the part: volume and heat-losing surface. */
+/** Geometry of the part: volume and heat-losing surface (`workpieceGeometry`). */
 function partGeometry(part: ResolvedPart): { volume: number; surfaceArea: number } {
   switch (part.shape) {
     case "bar":
-      return { volume: Math.PI * part.radius ** 2 * part.length, surfaceArea: 2 * Math.PI * part.radius * (part.radius + part.length) };
-    case "tube": {
-      const ri = part.outerRadius - part.wallThickness;
-      return {
-        volume: Math.PI * (part.outerRadius ** 2 - ri ** 2) * part.length,
-        surfaceArea: 2 * Math.PI * (part.outerRadius + ri) * part.length + 2 * Math.PI * (part.outerRadius ** 2 - ri ** 2),
-      };
-    }
+      return workpieceGeometry({ shape: "bar", radius: part.radius, length: part.length });
+    case "tube":
+      return workpieceGeometry({ shape: "tube", outerRadius: part.outerRadius, innerRadius: part.outerRadius - part.wallThickness, length: part.length });
     case "ring":
-      return {
-        volume: Math.PI * (part.outerRadius ** 2 - part.innerRadius ** 2) * part.height,
-        surfaceArea: 2 * Math.PI * (part.outerRadius + part.innerRadius) * part.height + 2 * Math.PI * (part.outerRadius ** 2 - part.innerRadius ** 2),
-      };
+      return workpieceGeometry({ shape: "tube", outerRadius: part.outerRadius, innerRadius: part.innerRadius, length: part.height });
     case "plate":
-      return {
-        volume: part.length * part.width * part.thickness,
-        surfaceArea: 2 * (part.length * part.width + part.length * part.thickness + part.width * part.thickness),
-      };
+      return workpieceGeometry({ shape: "plate", length: part.length, width: part.width, thickness: part.thickness });
   }
 }
 

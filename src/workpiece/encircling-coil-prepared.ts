@@ -18,6 +18,7 @@ import {
   besselK1Scaled,
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
+import type { EncirclingCoil } from "./encircling-coil.js";
 import { gaussLegendreRule } from "./kernels.js";
 
 /**
@@ -27,10 +28,22 @@ import { gaussLegendreRule } from "./kernels.js";
  * @category Workpiece
  */
 export interface EncirclingCoilGeometry {
-  /** The coil: winding inner and outer radius, length [m] and turns (integer ≥ 1). */
-  readonly coil: { readonly innerRadius: number; readonly outerRadius: number; readonly length: number; readonly turns: number };
-  /** The rod: outer radius [m] (> 0, < coil innerRadius) and, for a tube, its bore radius [m] (≥ 0, < radius). */
-  readonly rod: { readonly radius: number; readonly innerRadius?: number };
+  /** The coil, see {@link EncirclingCoil}. */
+  readonly coil: EncirclingCoil;
+  /** The rod's radii, see {@link RodRadii}. */
+  readonly rod: RodRadii;
+}
+
+/**
+ * The radii of a rod or tube for {@link prepareEncirclingCoilOverRod}.
+ *
+ * @category Workpiece
+ */
+export interface RodRadii {
+  /** Outer radius [m], > 0 and < the coil's innerRadius. */
+  readonly radius: number;
+  /** Bore radius of a tube [m], ≥ 0 and < radius; omitted or 0 for a solid rod. */
+  readonly innerRadius?: number;
 }
 
 /**
@@ -63,6 +76,8 @@ const RULE = gaussLegendreRule(PANEL_NODES);
 /** Geometric panels towards α = 0 (from the first oscillation width down by 2⁻⁴⁰). */
 const GRADED_LEVELS = 24;
 const KNOWN = ["coil", "rod"] as const;
+/** |z|² above which I1/I0 comes from Hankel's asymptotic sums. */
+const ASYMPTOTIC_LIMIT_SQUARED = 40 * 40;
 
 /** $e^{x}\int_x^\infty tK_1(t)\,dt$ (trapezoid rule on the cosh substitution, ≤ 1e-14 relative). */
 function kMomentTailScaled(x: number): number {
@@ -208,10 +223,50 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
       let rRe: number;
       let rIm: number;
       if (thick) {
-        const wv = besselI1OverI0Complex({ re: bRe * a, im: bIm * a });
-        const ww = wv.re * wv.re + wv.im * wv.im;
-        rRe = (bRe * wv.re + bIm * wv.im) / (ww * mur);
-        rIm = (bIm * wv.re - bRe * wv.im) / (ww * mur);
+        const zRe = bRe * a;
+        const zIm = bIm * a;
+        let wRe: number;
+        let wIm: number;
+        if (zRe * zRe + zIm * zIm >= ASYMPTOTIC_LIMIT_SQUARED) {
+          // Hankel's expansions of I0 and I1 (the e^{−2z} part is below 1e-24 here): the ratio
+          // of the two sums, to ≤ 1e-16 with 12 terms for |z| ≥ 40
+          const d = 8 * (zRe * zRe + zIm * zIm);
+          const uRe = zRe / d; // u = 1/(8z)
+          const uIm = -zIm / d;
+          let t0Re = 1;
+          let t0Im = 0;
+          let t1Re = 1;
+          let t1Im = 0;
+          let s0Re = 1;
+          let s0Im = 0;
+          let s1Re = 1;
+          let s1Im = 0;
+          for (let k = 1; k <= 12; k++) {
+            const odd = (2 * k - 1) * (2 * k - 1);
+            const c0 = odd / k;
+            const c1 = (odd - 4) / k;
+            const a0 = c0 * (t0Re * uRe - t0Im * uIm);
+            t0Im = c0 * (t0Re * uIm + t0Im * uRe);
+            t0Re = a0;
+            const a1 = c1 * (t1Re * uRe - t1Im * uIm);
+            t1Im = c1 * (t1Re * uIm + t1Im * uRe);
+            t1Re = a1;
+            s0Re += t0Re;
+            s0Im += t0Im;
+            s1Re += t1Re;
+            s1Im += t1Im;
+          }
+          const ss = s0Re * s0Re + s0Im * s0Im;
+          wRe = (s1Re * s0Re + s1Im * s0Im) / ss;
+          wIm = (s1Im * s0Re - s1Re * s0Im) / ss;
+        } else {
+          const wv = besselI1OverI0Complex({ re: zRe, im: zIm });
+          wRe = wv.re;
+          wIm = wv.im;
+        }
+        const ww = wRe * wRe + wIm * wIm;
+        rRe = (bRe * wRe + bIm * wIm) / (ww * mur);
+        rIm = (bIm * wRe - bRe * wIm) / (ww * mur);
       } else {
         [rRe, rIm] = tubeSurfaceRatio(bRe, bIm, a, a1, mur, bore[j]!);
       }

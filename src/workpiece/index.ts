@@ -29,7 +29,7 @@ export type {
 } from "./coil-over-plate.js";
 export { encirclingCoilOverRod } from "./encircling-coil.js";
 export { prepareEncirclingCoilOverRod } from "./encircling-coil-prepared.js";
-export type { EncirclingCoilGeometry, EncirclingCoilChange, EncirclingCoilEvaluator } from "./encircling-coil-prepared.js";
+export type { EncirclingCoilGeometry, EncirclingCoilChange, EncirclingCoilEvaluator, RodRadii } from "./encircling-coil-prepared.js";
 export type {
   EncirclingCoil,
   EncirclingCoilOverRodOptions,
@@ -49,3 +49,5 @@ export type {
 } from "./temperature.js";
 export { layeredCylinderInLongCoil } from "./layered-cylinder.js";
 export type { LayeredCylinderInLongCoilOptions, LayeredCylinderInLongCoilResult } from "./layered-cylinder.js";
+export { workpieceGeometry } from "./geometry.js";
+export type { WorkpieceShape, WorkpieceBar, WorkpieceTube, WorkpiecePlate, WorkpieceGeometry } from "./geometry.js";

@@ -101,7 +101,7 @@ describe("fluxwright study", () => {
   });
 
   it("a valid file whose design cannot run exits 1 with the reason, writing no report", () => {
-    const damped = mutate(mutate(JSON.parse(read("study-bearing-race.json")), "capacitor.capacitance", "10 mF"), "coil.turns", 2);
+    const damped = mutate(mutate(JSON.parse(read("study-bearing-race.json")), "capacitor.capacitance", "1 F"), "coil.turns", 1);
     const m = memoryIo({ "damped.json": JSON.stringify(damped) });
     expect(runCli(["study", "damped.json", "--html", "out.html"], m.io)).toBe(1);
     expect(m.err()).toContain("the design cannot be studied");

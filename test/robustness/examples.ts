@@ -565,6 +565,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ coilCurrentRms: 200, reflectedResistance: 0.05 }],
     allow: [{ paths: ["0.coilCurrentRms", "0.reflectedResistance"], kinds: ["zero"], reason: "no current or no part: zero power is in the domain" }],
   },
+  workpieceGeometry: {
+    args: () => [{ shape: "tube", outerRadius: 0.062, innerRadius: 0.05, length: 0.03 }],
+    allow: [{ paths: ["0.innerRadius"], kinds: ["zero"], reason: "a tube with no bore is a bar (inner radius ≥ 0)" }],
+  },
   prepareEncirclingCoilOverRod: {
     args: () => [{ coil: { innerRadius: 0.02, outerRadius: 0.025, length: 0.05, turns: 10 }, rod: { radius: 0.015, innerRadius: 0.005 } }],
     allow: [{ paths: ["0.rod.innerRadius"], kinds: ["undefined", "zero"], reason: OPTIONAL + " (a solid rod)" }],

@@ -268,7 +268,8 @@ describe("studyHeater: headline fields mirror the cold operating point", () => {
 });
 
 describe("studyHeater: reproductions of reported failures", () => {
-  const forging = loadExample("study-forging-bar.json");
+  // the reports were made with the forging bar on a 60 V bus (the demo now runs at 80 V)
+  const forging = mutate(loadExample("study-forging-bar.json"), "supply.voltage", "60 V");
   it("the forging bar with 10 µF solves at 650–700 °C (was a false 'no operating point' and a stalled heat-up at 681 °C)", () => {
     const d = mutate(forging, "capacitor.capacitance", "10 µF");
     for (const c of [600, 650, 660, 670, 680, 690, 700, 740]) {

@@ -62,7 +62,8 @@ describe("optimizeHeater", () => {
       expect(b.summary.frequency).toBeGreaterThanOrEqual(20e3);
       expect(b.summary.tankVoltagePeak).toBeLessThanOrEqual(200);
       const s = studyHeater(b.description, { heatUp: false, temperatureScan: false, impedanceSweep: false });
-      expect(s.operating.losses.part).toBe(b.summary.partPower);
+      // the optimiser continues each candidate from its neighbour: the same point to the fixed-point tolerance
+      expect(Math.abs(s.operating.losses.part / b.summary.partPower - 1)).toBeLessThanOrEqual(1e-7);
       expect(Math.abs(Math.log(b.summary.partPower / 1500))).toBeCloseTo(b.score, 12);
     }
     expect(r.best[0]?.score ?? 1).toBeLessThan(0.2);
