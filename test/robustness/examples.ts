@@ -800,6 +800,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       "atTarget.zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
       "heatUp.points[].zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
       "heatUp.curieCrossingTime": "null when the part does not cross its Curie point (120 °C target, documented)",
+      "heatUp.radial": "null for parts other than bars and tubes in a solenoid (a ring here, documented)",
       temperatureScan: "null when not asked for (documented)",
       impedance: "null when not asked for (documented)",
     },
