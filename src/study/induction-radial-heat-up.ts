@@ -175,8 +175,17 @@ export interface InductionRadialHeatUpResult extends RadialHeatUpResult {
      */
     readonly uniformReflectedResistance: number[];
   };
-  /** Energy balance of the part over `heatedLength` [J]: electrical input, stored, lost to the surroundings. */
-  readonly partEnergy: { readonly input: number; readonly stored: number; readonly lost: number; readonly imbalance: number };
+  /** Energy balance of the part over `heatedLength`, in joules: electrical input, stored, lost to the surroundings. */
+  readonly partEnergy: {
+    /** Electrical energy absorbed by the part [J]. */
+    readonly input: number;
+    /** Heat stored [J]. */
+    readonly stored: number;
+    /** Heat lost by convection and radiation [J]. */
+    readonly lost: number;
+    /** `input − stored − lost` [J] (rounding only). */
+    readonly imbalance: number;
+  };
   /** Number of times the field was re-solved for new temperatures. */
   readonly fieldSolutions: number;
   /** Number of field evaluations in the permeability fixed points (≥ `fieldSolutions`). */
