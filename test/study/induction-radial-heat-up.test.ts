@@ -187,3 +187,25 @@ describe("inductionRadialHeatUp: drives, targets and results", () => {
     expect(r.heatingTime !== null && r.surfaceCoreDifferenceAtStop! > 0).toBe(true);
   });
 });
+
+describe("inductionRadialHeatUp: the default re-solve step and time tolerance against a finer run (better method: same model, 8× finer re-solve, 20× tighter tolerance)", () => {
+  it("heating time within 0.3 %, surface-to-core difference within 0.5 K", () => {
+    const run = (fine: boolean) =>
+      inductionRadialHeatUp({
+        part: { shape: "bar", radius: 0.015 },
+        material: lowCarbonSteel,
+        coil,
+        frequency: 1e4,
+        coilCurrentRms: 250,
+        ...surroundings,
+        duration: 300,
+        targetTemperature: celsius(900),
+        targetLocation: "surface",
+        ...(fine ? { resolveStep: 0.25, temperatureTolerance: 0.01 } : {}),
+      });
+    const coarse = run(false);
+    const fine = run(true);
+    expect(Math.abs(coarse.heatingTime! / fine.heatingTime! - 1)).toBeLessThan(3e-3);
+    expect(Math.abs(coarse.surfaceCoreDifferenceAtStop! - fine.surfaceCoreDifferenceAtStop!)).toBeLessThan(0.5);
+  });
+});
