@@ -56,10 +56,10 @@ describe("studyHeater: every number equals the module-level call it came from", 
     expect(op.coilCurrentRms).toBe(inv.coilCurrentRms);
     expect(op.switchVoltagePeak).toBe(inv.switchVoltagePeak);
     expect(op.coilEfficiency).toBe(coilEfficiency({ coilResistance: op.coilResistance, reflectedResistance: op.reflectedResistance }));
-    // coupling: the finite coil (a current layer on the tube's bore face) over the infinite ring,
+    // coupling: the finite coil (current over the tube's radial extent) over the infinite ring,
     // N² times the one-turn solution, weighted by the share of the squared field over its height
     const one = prepareEncirclingCoilOverRod({
-      coil: { innerRadius: coil.radius - tube.outerDiameter / 2, outerRadius: coil.radius - tube.outerDiameter / 2 + tube.wallThickness, length: coil.length, turns: 1 },
+      coil: { innerRadius: coil.radius - tube.outerDiameter / 2, outerRadius: coil.radius + tube.outerDiameter / 2, length: coil.length, turns: 1 },
       rod: { radius: d.part.outerRadius, innerRadius: d.part.innerRadius },
     })(op.frequency, op.partResistivity, op.partRelativePermeability);
     const ratio = op.reflectedResistance / (coil.turns ** 2 * one.resistanceChange);
