@@ -33,9 +33,10 @@ describe("studyHeater: surface and core temperature of a bar (radial model)", ()
     // "mean" keeps today's meaning: the lumped model's time
     expect(mean.heatUp!.targetLocation).toBe("mean");
     expect(mean.timeToTarget).not.toBe(mean.heatUp!.radial!.heatingTime);
-    const radialMean = mean.heatUp!.radial!.timeToMeanTarget!;
-    expect(surface.timeToTarget!).toBeLessThanOrEqual(radialMean);
-    expect(radialMean).toBeLessThanOrEqual(core.timeToTarget!);
+    // within one run the surface arrives first; the core target takes longest
+    const m = mean.heatUp!.radial!;
+    expect(m.timeToSurfaceTarget!).toBeLessThanOrEqual(m.timeToMeanTarget!);
+    expect(m.timeToMeanTarget!).toBeLessThan(core.timeToTarget!);
   });
   it("reports the difference at target, the soak time and the hardening depth", () => {
     const r = surface.heatUp!.radial!;
