@@ -111,6 +111,26 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
       }),
       caption: `Part temperature (left axis) and operating frequency (right axis) against time, from the electro-thermal heat-up${h.curieCrossingTime === null ? "" : `; the part crosses its Curie point at ${duration(h.curieCrossingTime)}`}.`,
     });
+    const r = h.radial;
+    if (r !== null) {
+      plots.push({
+        svg: lineChart({
+          title: "Heat-up: surface and core temperature",
+          xLabel: "time",
+          yLabel: "temperature",
+          xUnit: "s",
+          yUnit: "°C",
+          series: [
+            { name: "surface", x: r.times, y: r.surfaceTemperatures.map(toC), markers: false },
+            { name: "core", x: r.times, y: r.coreTemperatures.map(toC), markers: false },
+            { name: "mean", x: r.times, y: r.meanTemperatures.map(toC), markers: false },
+          ],
+          referenceLines: refLines,
+          idPrefix: "surface-core",
+        }),
+        caption: `Surface, core and mean temperature against time from the radial model (power by depth from the exact field in the part, re-solved as each shell heats)${r.surfaceCoreDifferenceAtTarget === null ? "" : `; surface − core ${r.surfaceCoreDifferenceAtTarget.toFixed(1)} K when the heating stops`}${r.soakTime === null ? "" : `, within ${(r.soakBand ?? 0).toFixed(0)} K after a ${duration(r.soakTime)} soak`}${r.hardeningDepth === null ? "" : `; heated above the hardening temperature to ${(r.hardeningDepth * 1000).toFixed(2)} mm`}.`,
+      });
+    }
   }
   if (study.temperatureScan !== null) {
     const s = study.temperatureScan;

@@ -2,7 +2,7 @@
  * The plain-text report of a heater study: cautions first, then the operating points, losses,
  * heat-up and the validity notes, in aligned tables with engineering units.
  */
-import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterOperatingPoint } from "../study/index.js";
+import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterOperatingPoint, HeaterRadialHeatUp } from "../study/index.js";
 import { area, celsiusText, duration, percent, q, textTable, wrap } from "./format.js";
 
 /** Rows comparing operating points side by side. */
@@ -123,7 +123,10 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
     out.push("HEAT-UP");
     out.push(
       textTable([
-        [`time to ${celsiusText(p.targetTemperature)}`, h.reachable ? duration(h.timeToTarget) : "not reached"],
+        [
+          `time to ${celsiusText(p.targetTemperature)}${h.targetLocation === "mean" ? "" : ` at the ${h.targetLocation}`}`,
+          h.timeToTarget !== null && (h.targetLocation !== "mean" || h.reachable) ? duration(h.timeToTarget) : "not reached",
+        ],
         ["temperature the part would settle at", celsiusText(h.steadyStateTemperature)],
         ["Curie point crossed at", h.curieCrossingTime === null ? "—" : duration(h.curieCrossingTime)],
         ["energy from the supply", q(h.supplyEnergy, "J")],
@@ -131,6 +134,7 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
         ["heat into the part", q(h.energy.input, "J")],
         ["heat lost (convection + radiation)", q(h.energy.convection + h.energy.radiation, "J")],
         ["Biot number", h.biotNumber === null ? "—" : h.biotNumber.toPrecision(3)],
+        ...radialRows(h.radial, p.targetTemperature),
         ["power solved from … to", `${celsiusText(h.powerCurveRange[0])} … ${celsiusText(h.powerCurveRange[1])} (${h.gridTemperatures.length} temperatures)`],
         ...h.unsolvedBands.map((b): [string, string] => [
           "NO OPERATING POINT (no power counted)",
@@ -197,4 +201,18 @@ export function optimisationTextReport(r: HeaterOptimization): string {
     out.push("");
   }
   return out.join("\n");
+}
+
+/** Rows of the surface/core (radial) model for the heat-up table. */
+function radialRows(r: HeaterRadialHeatUp | null, target: number): [string, string][] {
+  if (r === null) return [];
+  const end = r.times.length - 1;
+  const rows: [string, string][] = [
+    [`surface / mean / core reach ${celsiusText(target)} at`, [r.timeToSurfaceTarget, r.timeToMeanTarget, r.timeToCoreTarget].map((t) => (t === null ? "—" : duration(t))).join(" / ")],
+    ["surface − core when the heating stops", r.surfaceCoreDifferenceAtTarget === null ? "—" : `${r.surfaceCoreDifferenceAtTarget.toFixed(1)} K`],
+    ["surface / core at the end", `${celsiusText(r.surfaceTemperatures[end] ?? null)} / ${celsiusText(r.coreTemperatures[end] ?? null)}`],
+  ];
+  if (r.soakBand !== null) rows.push([`soak until within ${r.soakBand.toFixed(0)} K`, r.soakTime === null ? "not reached" : duration(r.soakTime)]);
+  if (r.hardeningTemperature !== null) rows.push([`depth heated above ${celsiusText(r.hardeningTemperature)}`, r.hardeningDepth === null ? "—" : `${(r.hardeningDepth * 1000).toFixed(2)} mm`]);
+  return rows;
 }

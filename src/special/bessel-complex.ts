@@ -320,3 +320,60 @@ export function besselI1OverI0Complex(z: Complex): Complex {
   }
   return { re: (o.i1r * o.i0r + o.i1i * o.i0i) / d, im: (o.i1i * o.i0r - o.i1r * o.i0i) / d };
 }
+
+/**
+ * The four exponentially scaled modified Bessel functions $e^{-\mathrm{Re}\,z} I_0(z)$,
+ * $e^{-\mathrm{Re}\,z} I_1(z)$, $e^{z} K_0(z)$, $e^{z} K_1(z)$ at one argument with Re z ≥ 0, from one
+ * evaluation of the engine behind {@link besselI0ComplexScaled} and {@link besselK0ComplexScaled}
+ * (a quarter of the cost of the four separate calls): what a transfer matrix across a
+ * cylindrical shell needs at each radius.
+ *
+ * $$
+ * \tilde I_\nu(z) = e^{-\mathrm{Re}\,z} I_\nu(z),\qquad \tilde K_\nu(z) = e^{z} K_\nu(z)\qquad (\nu = 0, 1)
+ * $$
+ *
+ * Domain: Re z ≥ 0, z ≠ 0 (NaN fields otherwise, as the separate kernels). Accuracy: identical
+ * to the separate functions (same computation), ≤ 5e-15 relative to the modulus vs mpmath.
+ *
+ * @param z - argument, Re z ≥ 0, z ≠ 0 [dimensionless]
+ * @returns real and imaginary parts of the four scaled functions
+ * @see NIST DLMF 10.40.1, 10.40.2; Thompson & Barnett (1987)
+ * @example
+ * ```ts
+ * import { besselIKComplexScaled, complex } from "fluxwright";
+ * const b = besselIKComplexScaled(complex(1, 0));
+ * console.log(b.k0r); // ≈ 1.1444630798
+ * ```
+ * @category Bessel functions
+ */
+export function besselIKComplexScaled(z: Complex): ScaledBesselIKComplex {
+  if (!(z.re >= 0) || (z.re === 0 && z.im === 0)) {
+    return { i0r: NaN, i0i: NaN, i1r: NaN, i1i: NaN, k0r: NaN, k0i: NaN, k1r: NaN, k1i: NaN };
+  }
+  return besselIKScaled(z.re, z.im, true);
+}
+
+/**
+ * Result of {@link besselIKComplexScaled}: real (`r`) and imaginary (`i`) parts of the scaled
+ * $I_0, I_1, K_0, K_1$.
+ *
+ * @category Bessel functions
+ */
+export interface ScaledBesselIKComplex {
+  /** Re of $e^{-\mathrm{Re}\,z} I_0(z)$. */
+  i0r: number;
+  /** Im of $e^{-\mathrm{Re}\,z} I_0(z)$. */
+  i0i: number;
+  /** Re of $e^{-\mathrm{Re}\,z} I_1(z)$. */
+  i1r: number;
+  /** Im of $e^{-\mathrm{Re}\,z} I_1(z)$. */
+  i1i: number;
+  /** Re of $e^{z} K_0(z)$. */
+  k0r: number;
+  /** Im of $e^{z} K_0(z)$. */
+  k0i: number;
+  /** Re of $e^{z} K_1(z)$. */
+  k1r: number;
+  /** Im of $e^{z} K_1(z)$. */
+  k1i: number;
+}

@@ -57,7 +57,9 @@ export {
   besselK0ComplexScaled,
   besselK1ComplexScaled,
   besselI1OverI0Complex,
+  besselIKComplexScaled,
 } from "./bessel-complex.js";
+export type { ScaledBesselIKComplex } from "./bessel-complex.js";
 export {
   kelvinBer,
   kelvinBei,

@@ -229,6 +229,15 @@ export interface PartCommon {
   readonly targetTemperature: QuantityInput;
   /** Surface emissivity in (0, 1]; default the material's typical value. */
   readonly emissivity?: number;
+  /**
+   * What `targetTemperature` applies to: `"mean"` (the lumped part temperature, default),
+   * `"surface"` or `"core"` (bars and tubes: the electro-thermal radial model).
+   */
+  readonly targetLocation?: "mean" | "surface" | "core";
+  /** Bars and tubes: after the target, soak until surface and core are within this difference [K] (e.g. `"25 K"`). */
+  readonly soakBand?: QuantityInput;
+  /** Bars and tubes: temperature whose depth of reach into the part is reported (hardening depth) [K]. */
+  readonly hardeningTemperature?: QuantityInput;
 }
 
 /**

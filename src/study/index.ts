@@ -57,6 +57,7 @@ export type {
   StudyHeaterOptions,
   HeaterPartFacts,
   HeaterHeatUp,
+  HeaterRadialHeatUp,
   HeaterTemperatureScan,
   HeaterImpedanceSweep,
   HeaterStudy,
@@ -76,3 +77,11 @@ export type {
   HeaterSearchOptions,
 } from "./optimize-heater.js";
 export type { HeaterSummary } from "./summary.js";
+export { inductionRadialHeatUp } from "./induction-radial-heat-up.js";
+export type {
+  InductionRadialDrive,
+  InductionRadialHeatUpOptions,
+  InductionRadialHeatUpResult,
+  InductionRadialState,
+  RadialHeatedPart,
+} from "./induction-radial-heat-up.js";

@@ -352,7 +352,7 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
   const finalists = order.slice(0, targetTime !== null ? Math.max(4 * keep, 20) : keep);
   for (const i of finalists) {
     const f = feasible[i] as Feasible;
-    const s = studyHeater(f.variant, { heatUp: targetTime !== null, temperatureScan: false, impedanceSweep: false });
+    const s = studyHeater(f.variant, { heatUp: targetTime !== null, radialHeatUp: false, temperatureScan: false, impedanceSweep: false });
     const t = s.heatUp?.timeToTarget ?? null;
     const score = targetTime !== null ? (t === null ? Infinity : Math.abs(Math.log(t / targetTime))) : (scores[i] as number);
     chosen.push({ f, score, timeToTarget: t, empty: s.emptyCoil });

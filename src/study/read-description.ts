@@ -166,6 +166,12 @@ export interface ResolvedPartCommon {
   readonly targetTemperature: number;
   /** Emissivity. */
   readonly emissivity: number;
+  /** What the target applies to (absent: `"mean"`). */
+  readonly targetLocation?: "mean" | "surface" | "core";
+  /** Soak band [K] (absent: no soak). */
+  readonly soakBand?: number;
+  /** Hardening temperature [K] (absent: none). */
+  readonly hardeningTemperature?: number;
 }
 
 /** A resolved bar. @category Heater study */
@@ -491,7 +497,7 @@ function readInverter(rd: Reader, value: unknown): ResolvedInverter | undefined 
 
 function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | undefined {
   const o = rd.object("part", value, [
-    "shape", "material", "startTemperature", "targetTemperature", "emissivity",
+    "shape", "material", "startTemperature", "targetTemperature", "emissivity", "targetLocation", "soakBand", "hardeningTemperature",
     "radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness",
   ]);
   if (o === undefined) return undefined;
@@ -521,7 +527,23 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
     if (shape !== undefined) for (const key of fields[shape] ?? []) dim(key);
     return undefined;
   }
-  const common = { material, startTemperature, targetTemperature, emissivity };
+  const radialShape = shape === "bar" || shape === "tube";
+  const targetLocation = o.targetLocation === undefined ? undefined : rd.oneOf("part.targetLocation", o.targetLocation, ["mean", "surface", "core"] as const);
+  if (!radialShape && targetLocation !== undefined && targetLocation !== "mean") rd.fail("part.targetLocation", o.targetLocation, "", `"mean" for a ${shape} part (surface and core: bars and tubes)`);
+  const soakBand = o.soakBand === undefined ? undefined : rd.quantity("part.soakBand", o.soakBand, "K", "positive");
+  const hardeningTemperature = o.hardeningTemperature === undefined ? undefined : rd.quantity("part.hardeningTemperature", o.hardeningTemperature, "K", "positive");
+  for (const [key, v] of [["soakBand", soakBand], ["hardeningTemperature", hardeningTemperature]] as const) {
+    if (!radialShape && v !== undefined) rd.fail(`part.${key}`, o[key], "K", `absent for a ${shape} part (bars and tubes only)`);
+  }
+  const common = {
+    material,
+    startTemperature,
+    targetTemperature,
+    emissivity,
+    ...(targetLocation === undefined ? {} : { targetLocation }),
+    ...(soakBand === undefined ? {} : { soakBand }),
+    ...(hardeningTemperature === undefined ? {} : { hardeningTemperature }),
+  };
   switch (shape) {
     case "bar":
       return { ...common, shape, radius: dim("radius"), length: dim("length") };

@@ -116,7 +116,7 @@ export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): Heate
   const rows: HeaterSweepRow[] = values.map((value: QuantityInput): HeaterSweepRow => {
     const variant = setField(description, sweep.field, value);
     try {
-      const s = studyHeater(variant, { heatUp: sweep.heatUp !== false, temperatureScan: false, impedanceSweep: false });
+      const s = studyHeater(variant, { heatUp: sweep.heatUp !== false, radialHeatUp: false, temperatureScan: false, impedanceSweep: false });
       return { value, summary: summarise(s.operating, s.emptyCoil, s.heatUp?.timeToTarget ?? null), cautionCount: s.cautions.length, problem: null };
     } catch (e) {
       if (!(e instanceof InputError)) throw e;

@@ -8,4 +8,4 @@ export type { LumpedHeatUpOptions, LumpedHeatUpResult, LumpedEnergyBalance } fro
 export { steadyStateTemperature } from "./steady-state.js";
 export type { SteadyStateTemperatureOptions } from "./steady-state.js";
 export { radialHeatUp } from "./radial-heat-up.js";
-export type { RadialHeatUpOptions, RadialHeatUpResult, RadialEnergyBalance } from "./radial-heat-up.js";
+export type { RadialHeatUpOptions, RadialHeatUpResult, RadialEnergyBalance, RadialGenerationRequest } from "./radial-heat-up.js";

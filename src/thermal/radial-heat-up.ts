@@ -9,6 +9,7 @@ import {
   InputError,
   requireInRange,
   requireInteger,
+  requireKnownKeys,
   requireNonNegative,
   requireObject,
   requireOneOf,
@@ -36,6 +37,11 @@ export interface RadialHeatUpOptions {
   readonly geometry: "cylinder" | "slab";
   /** Cylinder radius [m], > 0 (cylinder only). */
   readonly radius?: number;
+  /**
+   * Bore radius of a hollow cylinder (tube) [m], ≥ 0 and < `radius` (cylinder only; default 0,
+   * a solid cylinder). The bore surface is insulated; the "core" is then the bore surface.
+   */
+  readonly innerRadius?: number;
   /** Slab full thickness [m], > 0 (slab only); the core is the mid-plane. */
   readonly thickness?: number;
   /** Heated length of the cylinder [m], > 0, to turn `power` into a surface density. */
@@ -46,6 +52,16 @@ export interface RadialHeatUpOptions {
   readonly power?: number;
   /** Absorbed power per unit heated surface [W/m²], ≥ 0 (instead of `power`). */
   readonly surfacePowerDensity?: number;
+  /**
+   * Heat generated in each control volume, recomputed from the temperature profile (instead of
+   * `power` or `surfacePowerDensity`): called with the node temperatures and the control-volume
+   * boundaries, it fills `request.generation` with the power generated in each control volume
+   * per square metre of heated surface [W/m²] (finite). Called once at the start of each time
+   * step and once at the predicted mid-step temperatures (the source is held over each step,
+   * which keeps the energy balance exact). This is how an electromagnetic model that re-solves
+   * the induced power as the properties change drives the conduction.
+   */
+  readonly generationAt?: (request: RadialGenerationRequest) => void;
   /**
    * Electromagnetic skin depth δ [m], > 0: the generated power density falls with depth $d$ below
    * the heated surface as $e^{-2d/\delta}$ (86 % within δ). Omit for heating at the surface itself
@@ -70,14 +86,49 @@ export interface RadialHeatUpOptions {
   readonly initialTemperature?: number;
   /** Time span to simulate [s], > 0. */
   readonly duration: number;
-  /** Temperature whose arrival at the surface and at the core is wanted [K], > 0. */
+  /** Temperature whose arrival at the surface, at the core and in the mean is wanted [K], > 0. */
   readonly targetTemperature?: number;
+  /**
+   * Switch the heating off when this temperature reaches `targetTemperature` (the step is
+   * shortened to land on it within `temperatureTolerance`): the surface, the core, or the
+   * volume-mean temperature. Without `soakBand` the run then ends.
+   */
+  readonly stopAt?: "surface" | "core" | "mean";
+  /**
+   * After the heating stops (`stopAt`), continue without heating until the surface and core
+   * temperatures are within this band [K], > 0 (the soak); the run ends then or at `duration`.
+   */
+  readonly soakBand?: number;
+  /**
+   * Temperature whose reach into the part is wanted [K], > 0: the result gives the depth below
+   * the heated surface down to which the peak temperature reached it (the hardening depth).
+   */
+  readonly hardeningTemperature?: number;
   /** Number of cells across the radius or half-thickness (integer, 4 … 2000; default 60). */
   readonly cells?: number;
   /** Local error allowed per time step [K], > 0 (default 0.005 K). */
   readonly temperatureTolerance?: number;
   /** Largest time step [s], > 0 (default `duration`/100). */
   readonly maxTimeStep?: number;
+}
+
+/**
+ * What {@link RadialHeatUpOptions.generationAt} receives; it writes into `generation`.
+ *
+ * @category Thermal
+ */
+export interface RadialGenerationRequest {
+  /** Time [s] at which the generation is wanted. */
+  readonly time: number;
+  /** Temperature at each node [K], from the core (index 0) to the heated surface (read only; reused between calls). */
+  readonly temperatures: Float64Array;
+  /**
+   * Boundaries of the control volumes [m] (one more than nodes): node `i` owns
+   * `faces[i] … faces[i + 1]`; `faces[0]` is the axis, bore or mid-plane and the last is the heated surface.
+   */
+  readonly faces: Float64Array;
+  /** To fill: power generated in each control volume per square metre of heated surface [W/m²]. */
+  readonly generation: Float64Array;
 }
 
 /**
@@ -106,8 +157,10 @@ export interface RadialHeatUpResult {
   readonly times: number[];
   /** Surface temperature at each time [K]. */
   readonly surfaceTemperatures: number[];
-  /** Core (axis or mid-plane) temperature at each time [K]. */
+  /** Core (axis, bore surface or mid-plane) temperature at each time [K]. */
   readonly coreTemperatures: number[];
+  /** Volume-mean temperature at each time [K]. */
+  readonly meanTemperatures: number[];
   /** Distances of the grid nodes from the axis or mid-plane [m], 0 … radius or half-thickness. */
   readonly positions: Float64Array;
   /** Temperature at each node at the end [K]. */
@@ -120,6 +173,25 @@ export interface RadialHeatUpResult {
   readonly timeToSurfaceTarget: number | null;
   /** Time the core first reaches `targetTemperature` [s] (linear between steps), or `null`. */
   readonly timeToCoreTarget: number | null;
+  /** Time the volume-mean temperature first reaches `targetTemperature` [s] (linear between steps), or `null`. */
+  readonly timeToMeanTarget: number | null;
+  /** Volume-mean temperature at the end [K]. */
+  readonly finalMeanTemperature: number;
+  /** Time the heating was switched off by `stopAt` [s], or `null` (no `stopAt`, or target not reached within `duration`). */
+  readonly heatingTime: number | null;
+  /** Surface minus core temperature when the heating stopped [K], or `null` when it did not stop. */
+  readonly surfaceCoreDifferenceAtStop: number | null;
+  /** Time from switching off until surface and core are within `soakBand` [s] (linear between steps), or `null`. */
+  readonly soakTime: number | null;
+  /**
+   * Depth below the heated surface down to which the peak temperature reached
+   * `hardeningTemperature` by the end [m] (linear between nodes; 0 when the surface never
+   * reached it; the whole radius or half-thickness when the core did), or `null` without
+   * `hardeningTemperature`.
+   */
+  readonly hardeningDepth: number | null;
+  /** The hardening depth at each time [m] (never decreasing), or `null` without `hardeningTemperature`. */
+  readonly hardeningDepths: number[] | null;
   /** Energy balance per square metre of heated surface. */
   readonly energy: RadialEnergyBalance;
   /**
@@ -139,6 +211,34 @@ export interface RadialHeatUpResult {
 }
 
 const WHERE = "radialHeatUp";
+const KNOWN = [
+  "geometry",
+  "radius",
+  "innerRadius",
+  "thickness",
+  "length",
+  "faceArea",
+  "power",
+  "surfacePowerDensity",
+  "generationAt",
+  "skinDepth",
+  "material",
+  "density",
+  "specificHeat",
+  "thermalConductivity",
+  "convectionCoefficient",
+  "emissivity",
+  "ambientTemperature",
+  "initialTemperature",
+  "duration",
+  "targetTemperature",
+  "stopAt",
+  "soakBand",
+  "hardeningTemperature",
+  "cells",
+  "temperatureTolerance",
+  "maxTimeStep",
+] as const;
 
 /**
  * Transient heat conduction across a cylinder's radius or a slab's half-thickness with the
@@ -148,6 +248,16 @@ const WHERE = "radialHeatUp";
  * and at the surface $r = R$:
  * $-k\,\partial T/\partial r = h(T - T_a) + \varepsilon\sigma(T^4 - T_a^4)$; $q_0$ makes the generated
  * power per unit surface equal the absorbed surface power density.
+ * A hollow cylinder (`innerRadius` $a$) has an insulated bore, $\partial T/\partial r = 0$ at $r = a$.
+ * Instead of the exponential profile, `generationAt` supplies the power generated in each
+ * control volume from the current temperature profile (an electromagnetic model re-solved as
+ * the properties change, see `inductionRadialHeatUp` in the study module).
+ *
+ * Results besides the surface and core curves: the volume-mean temperature, the times each of
+ * the three reaches `targetTemperature`, the heating switched off when the one named by
+ * `stopAt` reaches it (the surface-to-core difference at that moment), the soak time until
+ * surface and core are within `soakBand`, and the depth the peak temperature reached
+ * `hardeningTemperature` (never decreasing in time).
  *
  * Method of lines: a vertex-centred finite-volume grid (refined geometrically toward the surface
  * when the skin layer is thin; the generation integrated exactly over each cell), stepped in time
@@ -157,15 +267,20 @@ const WHERE = "radialHeatUp";
  * predictor, and temperature-dependent $c$ and $k$ are evaluated at the predicted mid-step
  * temperature. Each implicit step conserves energy exactly (the balance closes to rounding).
  *
- * Hard domain (throws {@link InputError}): non-finite or out-of-range inputs; a geometry size
- * missing; `power` without `length`/`faceArea`; both or neither of `power` and
- * `surfacePowerDensity`; missing properties (no material and no explicit value).
+ * Hard domain (throws {@link InputError}): unknown option keys; non-finite or out-of-range
+ * inputs; a geometry size missing; `innerRadius` for a slab or not below `radius`; `power`
+ * without `length`/`faceArea`; not exactly one of `power`, `surfacePowerDensity`, `generationAt`;
+ * a non-finite generation written by `generationAt`; `stopAt` without `targetTemperature`,
+ * `soakBand` without `stopAt`; missing properties (no material and no explicit value).
  *
  * Validity: 1-D conduction (long cylinder, wide slab), uniform skin depth, properties at the
  * local temperature, no phase change. Accuracy (tests, 60 cells): within 1e-3 of the temperature
  * change against the series solutions for a slab and a cylinder with convection (fixture from
- * mpmath), and against Incropera's Example 5.4 within its rounding; energy balance ≤ 1e-9
- * relative.
+ * mpmath), and against Incropera's Example 5.4 within its rounding; within 1e-3 against the
+ * Carslaw–Jaeger series for uniform generation with convection, a constant surface flux, and a
+ * hollow cylinder with an insulated bore (fixture `carslaw-jaeger.json`); the mean temperature
+ * within 0.1 % of the lumped model at Biot 1e-3 with the power at the surface; energy balance
+ * ≤ 1e-9 relative.
  *
  * @param options - geometry, heating, properties, surface and time span; see {@link RadialHeatUpOptions}
  * @returns surface and core temperature curves, final profile, times to target, energy balance
@@ -173,6 +288,8 @@ const WHERE = "radialHeatUp";
  * @see F. P. Incropera, D. P. DeWitt et al., Fundamentals of Heat and Mass Transfer, 6th ed.,
  *   Wiley 2007, §5.5–5.6 (exact series solutions, eqs. 5.39 and 5.49) and §5.10 (finite-volume
  *   implicit method).
+ * @see H. S. Carslaw, J. C. Jaeger, Conduction of Heat in Solids, 2nd ed., Oxford 1959, ch. VII
+ *   (the circular cylinder: constant flux, heat production, hollow cylinder).
  * @see S. V. Patankar, Numerical Heat Transfer and Fluid Flow, Hemisphere 1980, ch. 4 (control
  *   volumes, source linearisation).
  * @example
@@ -188,11 +305,18 @@ const WHERE = "radialHeatUp";
  */
 export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   requireObject(WHERE, "options", options);
+  requireKnownKeys(WHERE, "options", options, KNOWN);
   const geometry = requireOneOf(WHERE, "geometry", options.geometry, ["cylinder", "slab"] as const);
   const cylinder = geometry === "cylinder";
   const size = cylinder
     ? requirePositive(WHERE, "radius", options.radius, "m")
     : 0.5 * requirePositive(WHERE, "thickness", options.thickness, "m");
+  let inner = 0;
+  if (options.innerRadius !== undefined) {
+    if (!cylinder) throw new InputError(WHERE, "innerRadius", options.innerRadius, "m", "absent for a slab");
+    inner = requireNonNegative(WHERE, "innerRadius", options.innerRadius, "m");
+    if (!(inner < size)) throw new InputError(WHERE, "innerRadius", inner, "m", `a finite number ≥ 0 and < radius (${size})`);
+  }
   const material = options.material;
   if (material !== undefined) requireObject(WHERE, "material", material);
   const density =
@@ -213,9 +337,18 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   const kAt = (t: number): number => fixedK ?? thermalConductivityAt(material!, t);
   const variable = fixedC === null || fixedK === null;
 
-  // Heat input per unit heated surface.
-  let flux: number;
-  if (options.surfacePowerDensity !== undefined) {
+  // Heat input per unit heated surface: a fixed density, or a callback.
+  let flux = 0;
+  const generationAt = options.generationAt;
+  if (generationAt !== undefined) {
+    if (typeof generationAt !== "function") {
+      throw new InputError(WHERE, "generationAt", generationAt, "", "a function filling request.generation");
+    }
+    if (options.power !== undefined) throw new InputError(WHERE, "power", options.power, "W", "absent when generationAt is given");
+    if (options.surfacePowerDensity !== undefined) {
+      throw new InputError(WHERE, "surfacePowerDensity", options.surfacePowerDensity, "W/m²", "absent when generationAt is given");
+    }
+  } else if (options.surfacePowerDensity !== undefined) {
     if (options.power !== undefined) {
       throw new InputError(WHERE, "power", options.power, "W", "given alone (not together with surfacePowerDensity)");
     }
@@ -237,6 +370,17 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   const duration = requirePositive(WHERE, "duration", options.duration, "s");
   const target =
     options.targetTemperature === undefined ? null : requirePositive(WHERE, "targetTemperature", options.targetTemperature, "K");
+  const stopAt =
+    options.stopAt === undefined ? null : requireOneOf(WHERE, "stopAt", options.stopAt, ["surface", "core", "mean"] as const);
+  if (stopAt !== null && target === null) {
+    throw new InputError(WHERE, "targetTemperature", options.targetTemperature, "K", "a finite number > 0 when stopAt is given");
+  }
+  const soakBand = options.soakBand === undefined ? null : requirePositive(WHERE, "soakBand", options.soakBand, "K");
+  if (soakBand !== null && stopAt === null) throw new InputError(WHERE, "stopAt", options.stopAt, "", 'one of "surface", "core", "mean" when soakBand is given');
+  const hardening =
+    options.hardeningTemperature === undefined
+      ? null
+      : requirePositive(WHERE, "hardeningTemperature", options.hardeningTemperature, "K");
   const cells = options.cells === undefined ? 60 : requireInteger(WHERE, "cells", options.cells, 4);
   requireInRange(WHERE, "cells", cells, "", 4, 2000);
   const tolerance =
@@ -246,27 +390,34 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   const maxStep =
     options.maxTimeStep === undefined ? duration / 100 : requirePositive(WHERE, "maxTimeStep", options.maxTimeStep, "s");
 
-  // Grid: nodes x_0 = 0 (core) … x_N = size (surface), geometric refinement toward the surface.
+  // Grid: nodes x_0 = inner (core or bore) … x_N = size (surface), geometric refinement toward the surface.
   const n = cells;
-  const x = buildGrid(size, n, skinDepth);
+  const span = size - inner;
+  const x = buildGrid(span, n, skinDepth);
+  for (let i = 0; i <= n; i++) x[i] = inner + x[i]!;
+  x[n] = size;
   const faces = new Float64Array(n + 2); // CV boundaries: faces[i] = left boundary of CV i
-  faces[0] = 0;
+  faces[0] = inner;
   for (let i = 1; i <= n; i++) faces[i] = 0.5 * (x[i - 1]! + x[i]!);
   faces[n + 1] = size;
   // Geometry factors per unit heated surface: volume of CV i and area of face i+1/2, both
   // divided by the heated area (cylinder: per radian and metre, divided by R).
   const volume = new Float64Array(n + 1);
   const faceArea = new Float64Array(n); // between node i and i+1
+  let totalVolume = 0;
   for (let i = 0; i <= n; i++) {
     const a = faces[i]!;
     const b = faces[i + 1]!;
     volume[i] = cylinder ? (0.5 * (b * b - a * a)) / size : b - a;
+    totalVolume += volume[i]!;
   }
   for (let i = 0; i < n; i++) faceArea[i] = cylinder ? faces[i + 1]! / size : 1;
-  // Fraction of the generated power in each CV (exact integral of the exponential profile).
-  const share = generationShares(faces, n, size, skinDepth, cylinder);
+  // Fixed heating: the share of the generated power in each CV (exact integral of the exponential profile).
   const source = new Float64Array(n + 1);
-  for (let i = 0; i <= n; i++) source[i] = flux * share[i]!;
+  if (generationAt === undefined) {
+    const share = generationShares(faces, n, size, skinDepth, cylinder);
+    for (let i = 0; i <= n; i++) source[i] = flux * share[i]!;
+  }
 
   const sigmaEps = emissivity * STEFAN_BOLTZMANN;
   const ambient4 = ambient ** 4;
@@ -285,6 +436,30 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   const upper = new Float64Array(n + 1);
   const rhs = new Float64Array(n + 1);
   const work = new Float64Array(n + 1);
+  const peak = new Float64Array(n + 1).fill(initial);
+  const absolute = new Float64Array(n + 1);
+  const generated = new Float64Array(n + 1);
+  const request: RadialGenerationRequest = { time: 0, temperatures: absolute, faces, generation: generated };
+  const startSource = new Float64Array(n + 1);
+  let startSourceValid = false;
+
+  // Fills `source` from the callback at offsets `temps` and time `at` (a no-op for fixed heating).
+  const evaluateSource = (temps: Float64Array, at: number, into: Float64Array): void => {
+    if (generationAt === undefined) return;
+    for (let i = 0; i <= n; i++) {
+      absolute[i] = initial + temps[i]!;
+      generated[i] = 0;
+    }
+    (request as { time: number }).time = at;
+    generationAt(request);
+    for (let i = 0; i <= n; i++) {
+      const g = generated[i]!;
+      if (typeof g !== "number" || !Number.isFinite(g)) {
+        throw new InputError(WHERE, `generationAt(…).generation[${i}]`, g, "W/m²", "a finite number");
+      }
+      into[i] = g;
+    }
+  };
 
   const setProperties = (temps: Float64Array): void => {
     for (let i = 0; i <= n; i++) capacity[i] = density * cAt(initial + temps[i]!) * volume[i]!;
@@ -295,7 +470,7 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   // One implicit Euler step of size tau from `from` into `to` (offsets from `initial`), radiation
   // linearised about the absolute temperature `star`: the surface loss per unit area is
   // lossConstant + lossSlope·θ_N. Returns the surface loss over the step [J/m²].
-  const implicitStep = (from: Float64Array, to: Float64Array, tau: number, star: number): number => {
+  const implicitStep = (from: Float64Array, to: Float64Array, tau: number, star: number, heating: boolean): number => {
     const star3 = star * star * star;
     const radiationSlope = 4 * sigmaEps * star3;
     const lossSlope = convection + radiationSlope;
@@ -307,17 +482,36 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       lower[i] = -gl;
       upper[i] = -gr;
       diag[i] = capacity[i]! / tau + gl + gr;
-      rhs[i] = (capacity[i]! / tau) * from[i]! + source[i]!;
+      rhs[i] = (capacity[i]! / tau) * from[i]! + (heating ? source[i]! : 0);
     }
     diag[n] = diag[n]! + lossSlope;
     rhs[n] = rhs[n]! - lossConstant;
     solveTridiagonal(lower, diag, upper, rhs, to, work, n + 1);
     return tau * (lossConstant + lossSlope * to[n]!);
   };
+  const meanOf = (temps: Float64Array): number => {
+    let s = 0;
+    for (let i = 0; i <= n; i++) s += volume[i]! * temps[i]!;
+    return s / totalVolume;
+  };
+  const stopValue = (temps: Float64Array): number =>
+    stopAt === "surface" ? temps[n]! : stopAt === "core" ? temps[0]! : meanOf(temps);
+  const hardeningDepthNow = (): number => {
+    if (hardening === null || peak[n]! < hardening) return 0;
+    let j = n;
+    while (j > 0 && peak[j - 1]! >= hardening) j--;
+    if (j === 0) return span;
+    const a = peak[j - 1]!;
+    const b = peak[j]!;
+    const r = x[j - 1]! + ((x[j]! - x[j - 1]!) * (hardening - a)) / (b - a);
+    return size - r;
+  };
 
   const times: number[] = [0];
   const surfaceTemperatures: number[] = [initial];
   const coreTemperatures: number[] = [initial];
+  const meanTemperatures: number[] = [initial];
+  const hardeningDepths: number[] | null = hardening === null ? null : [hardeningDepthNow()];
   let time = 0;
   let tau = Math.min(maxStep, duration * 1e-6);
   let input = 0;
@@ -327,10 +521,23 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   let rejected = 0;
   let timeToSurfaceTarget: number | null = target !== null && initial === target ? 0 : null;
   let timeToCoreTarget: number | null = timeToSurfaceTarget;
+  let timeToMeanTarget: number | null = timeToSurfaceTarget;
   let hottest = initial;
-  const totalSource = flux;
+  let heating = true;
+  let heatingTime: number | null = null;
+  let differenceAtStop: number | null = null;
+  let soakTime: number | null = null;
+  let landingTries = 0;
+  const rising = target !== null && target >= initial;
+  const landing = Math.max(tolerance, 1e-9 * (target ?? 0));
+  if (stopAt !== null && target === initial) {
+    heating = false;
+    heatingTime = 0;
+    differenceAtStop = 0;
+    if (soakBand !== null) soakTime = 0;
+  }
 
-  while (time < duration) {
+  while (time < duration && !(heatingTime !== null && (soakBand === null || soakTime !== null))) {
     if (accepted + rejected > 2000000) {
       throw new InputError(WHERE, "temperatureTolerance", tolerance, "K", "large enough for the run to finish in 2e6 steps");
     }
@@ -339,18 +546,25 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       tau = duration - time;
       last = true;
     }
-    // Predictor: a full step with properties and radiation at the start of the step.
+    // Source at the start of the step (kept across rejected retries).
+    if (heating && !startSourceValid) {
+      evaluateSource(T, time, startSource);
+      startSourceValid = true;
+    }
+    if (heating && generationAt !== undefined) source.set(startSource);
+    // Predictor: a full step with properties, radiation and source at the start of the step.
     setProperties(T);
     let star = initial + T[n]!;
-    if (variable || sigmaEps > 0) {
-      implicitStep(T, full, tau, star);
+    if (variable || sigmaEps > 0 || (heating && generationAt !== undefined)) {
+      implicitStep(T, full, tau, star, heating);
       for (let i = 0; i <= n; i++) mid[i] = 0.5 * (T[i]! + full[i]!);
       if (variable) setProperties(mid);
+      if (heating) evaluateSource(mid, time + 0.5 * tau, source);
       star = initial + mid[n]!;
     }
-    const lossFull = implicitStep(T, full, tau, star);
-    const lossHalf1 = implicitStep(T, mid, 0.5 * tau, star);
-    const lossHalf2 = implicitStep(mid, half, 0.5 * tau, star);
+    const lossFull = implicitStep(T, full, tau, star, heating);
+    const lossHalf1 = implicitStep(T, mid, 0.5 * tau, star, heating);
+    const lossHalf2 = implicitStep(mid, half, 0.5 * tau, star, heating);
     let err = 0;
     for (let i = 0; i <= n; i++) err = Math.max(err, Math.abs(half[i]! - full[i]!));
     if (!Number.isFinite(err)) {
@@ -361,40 +575,82 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       tau *= Math.max(0.1, 0.9 * Math.sqrt(tolerance / err));
       continue;
     }
-    // Accept the Richardson-extrapolated state 2·half − full (second order, conservative).
+    // The Richardson-extrapolated state 2·half − full (second order, conservative), in `full`.
+    for (let i = 0; i <= n; i++) full[i] = 2 * half[i]! - full[i]!;
+    // Land on the stop target: shorten the step when it overshoots by more than the tolerance.
+    let stopsNow = false;
+    if (heating && stopAt !== null && target !== null) {
+      const before = stopValue(T);
+      const after = stopValue(full);
+      const goal = target - initial;
+      const crossed = rising ? after >= goal : after <= goal;
+      if (crossed) {
+        if (Math.abs(after - goal) > landing && landingTries < 12 && after !== before) {
+          landingTries++;
+          rejected++;
+          tau *= Math.max(1e-3, Math.min(0.999, (goal - before) / (after - before)));
+          continue;
+        }
+        stopsNow = true;
+      }
+    }
+    landingTries = 0;
     let stored = 0;
     for (let i = 0; i <= n; i++) {
-      const next = 2 * half[i]! - full[i]!;
-      stored += capacity[i]! * (next - T[i]!);
-      T[i] = next;
+      stored += capacity[i]! * (full[i]! - T[i]!);
+      T[i] = full[i]!;
     }
     const stepLoss = 2 * (lossHalf1 + lossHalf2) - lossFull;
-    input += totalSource * tau;
+    if (heating) {
+      let totalSource = 0;
+      for (let i = 0; i <= n; i++) totalSource += source[i]!;
+      input += totalSource * tau;
+    }
     lost += stepLoss;
     storedTotal += stored;
+    startSourceValid = false;
     const previousSurface = surfaceTemperatures[surfaceTemperatures.length - 1]!;
     const previousCore = coreTemperatures[coreTemperatures.length - 1]!;
+    const previousMean = meanTemperatures[meanTemperatures.length - 1]!;
     const previousTime = time;
     time = last ? duration : time + tau;
     accepted++;
     times.push(time);
     const surfaceNow = initial + T[n]!;
     const coreNow = initial + T[0]!;
+    const meanNow = initial + meanOf(T);
     surfaceTemperatures.push(surfaceNow);
     coreTemperatures.push(coreNow);
+    meanTemperatures.push(meanNow);
+    for (let i = 0; i <= n; i++) if (initial + T[i]! > peak[i]!) peak[i] = initial + T[i]!;
+    if (hardeningDepths !== null) hardeningDepths.push(hardeningDepthNow());
     if (Math.abs(surfaceNow - ambient) > Math.abs(hottest - ambient)) hottest = surfaceNow;
     if (target !== null) {
       if (timeToSurfaceTarget === null) timeToSurfaceTarget = crossing(previousTime, time, previousSurface, surfaceNow, target, initial);
       if (timeToCoreTarget === null) timeToCoreTarget = crossing(previousTime, time, previousCore, coreNow, target, initial);
+      if (timeToMeanTarget === null) timeToMeanTarget = crossing(previousTime, time, previousMean, meanNow, target, initial);
+    }
+    if (stopsNow) {
+      heating = false;
+      heatingTime = time;
+      differenceAtStop = surfaceNow - coreNow;
+      if (soakBand !== null && Math.abs(differenceAtStop) <= soakBand) soakTime = 0;
+    } else if (!heating && soakBand !== null && soakTime === null && heatingTime !== null) {
+      const now = surfaceNow - coreNow;
+      if (Math.abs(now) <= soakBand) {
+        const before = Math.abs(previousSurface - previousCore);
+        const at = before > soakBand ? previousTime + ((time - previousTime) * (before - soakBand)) / (before - Math.abs(now)) : time;
+        soakTime = at - heatingTime;
+      }
     }
     const factor = err > 0 ? Math.min(3, Math.max(0.2, 0.9 * Math.sqrt(tolerance / err))) : 3;
     tau = Math.min(maxStep, tau * factor);
   }
 
   const kSurface = kAt(hottest);
-  const biotNumber = (effectiveCoefficient(hottest, ambient, convection, emissivity) * size) / kSurface;
+  const biotNumber = (effectiveCoefficient(hottest, ambient, convection, emissivity) * span) / kSurface;
   const validity: ValidityNote[] = [];
-  const surfaceCell = x[n]! - x[n - 1]!;
+  const surfaceCell = size - x[n - 1]!;
   if (skinDepth > 0 && surfaceCell > 0.5 * skinDepth) {
     validity.push({
       code: "grid-coarser-than-skin",
@@ -406,14 +662,12 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   if (material !== undefined) {
     let lowest = Infinity;
     let highest = -Infinity;
-    for (const v of surfaceTemperatures) {
-      lowest = Math.min(lowest, v);
-      highest = Math.max(highest, v);
+    for (let i = 0; i <= n; i++) {
+      lowest = Math.min(lowest, initial + T[i]!);
+      highest = Math.max(highest, peak[i]!);
     }
-    for (const v of coreTemperatures) {
-      lowest = Math.min(lowest, v);
-      highest = Math.max(highest, v);
-    }
+    for (const v of surfaceTemperatures) lowest = Math.min(lowest, v);
+    for (const v of coreTemperatures) lowest = Math.min(lowest, v);
     if (highest > material.temperatureRange.max || lowest < material.temperatureRange.min) {
       validity.push({
         code: "material-data-range",
@@ -428,12 +682,20 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     times,
     surfaceTemperatures,
     coreTemperatures,
+    meanTemperatures,
     positions: x,
     finalTemperatures: Float64Array.from(T, (v) => initial + v),
     finalSurfaceTemperature: initial + T[n]!,
     finalCoreTemperature: initial + T[0]!,
+    finalMeanTemperature: initial + meanOf(T),
     timeToSurfaceTarget,
     timeToCoreTarget,
+    timeToMeanTarget,
+    heatingTime,
+    surfaceCoreDifferenceAtStop: differenceAtStop,
+    soakTime,
+    hardeningDepth: hardeningDepths === null ? null : hardeningDepths[hardeningDepths.length - 1]!,
+    hardeningDepths,
     energy: { input, stored: storedTotal, lost, imbalance: input - storedTotal - lost },
     biotNumber,
     steps: { accepted, rejected },

@@ -61,5 +61,7 @@ export type {
   WorkCoilPart,
   WorkCoilSolenoid,
 } from "./work-coil-impedance.js";
+export { layeredCylinderInLongCoil } from "./layered-cylinder.js";
+export type { LayeredCylinderInLongCoilOptions, LayeredCylinderInLongCoilResult } from "./layered-cylinder.js";
 export { workpieceGeometry } from "./geometry.js";
 export type { WorkpieceShape, WorkpieceBar, WorkpieceTube, WorkpiecePlate, WorkpieceGeometry } from "./geometry.js";

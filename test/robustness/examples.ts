@@ -146,6 +146,18 @@ const kernel1 = (x: number): Example => ({ kind: "kernel", args: () => [x] });
 const kernelC = (...z: [number, number][]): Example => ({ kind: "kernel", args: () => z.map(([re, im]) => cx(re, im)) });
 const brand = (x: number): Example => ({ kind: "brand", args: () => [x] });
 
+/** Result fields of the radial heat-ups that are null when not asked for or not reached (documented). */
+const RADIAL_NULLS: Readonly<Record<string, string>> = {
+  timeToSurfaceTarget: "null when no target was given or it is not reached (documented)",
+  timeToCoreTarget: "null when no target was given or it is not reached (documented)",
+  timeToMeanTarget: "null when no target was given or it is not reached (documented)",
+  heatingTime: "null when the heating is not stopped at a target (documented)",
+  surfaceCoreDifferenceAtStop: "null when the heating is not stopped at a target (documented)",
+  soakTime: "null without a soak band, or when the band is not reached (documented)",
+  hardeningDepth: "null without a hardening temperature (documented)",
+  hardeningDepths: "null without a hardening temperature (documented)",
+};
+
 /** The table: every function exported from src/index.ts. */
 export const EXAMPLES: Readonly<Record<string, Example>> = {
   // ---------------------------------------------------------------- core
@@ -229,6 +241,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   besselJ0Complex: kernelC([2.404825557695773, 0]),
   besselJ1Complex: kernelC([1, 0]),
   besselI1OverI0Complex: kernelC([1e4, 1e4]),
+  besselIKComplexScaled: kernelC([1, 1]),
   besselJ0: kernel1(1),
   besselJ1: kernel1(1),
   besselY0: kernel1(1),
@@ -642,6 +655,32 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       { paths: ["0.thickness"], kinds: ["Infinity"], reason: "Infinity is a half-space heated from one face (documented)" },
     ],
   },
+  layeredCylinderInLongCoil: {
+    args: () => [
+      {
+        coil: { innerRadius: 0.03, length: 0.3, turns: 20 },
+        frequency: 1e4,
+        radii: [0.018, 0.02],
+        resistivities: [6e-7, 1.15e-6],
+        relativePermeabilities: [30, 1],
+      },
+    ],
+    variants: [
+      () => [
+        {
+          coil: { innerRadius: 0.03, length: 0.3, turns: 20 },
+          frequency: 1e4,
+          innerRadius: 0.01,
+          radii: [0.018, 0.02],
+          resistivities: [6e-7, 1.15e-6],
+          relativePermeabilities: [1, 1],
+        },
+      ],
+    ],
+    allow: [
+      { paths: ["0.innerRadius"], kinds: ["zero", "undefined"], reason: "bore radius ≥ 0, optional (0: a solid cylinder, documented)" },
+    ],
+  },
   workpieceCouplingAtTemperature: {
     args: () => [
       { material: lowCarbonSteel, temperature: celsius(20), part: { kind: "bar", radius: 0.02, coil: { innerRadius: 0.03, length: 0.3, turns: 20 } }, frequency: 1e4 },
@@ -719,10 +758,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       { paths: ["0.convectionCoefficient", "0.emissivity", "0.power"], kinds: ["zero"], reason: "convection, emissivity (0 … 1) and power are ≥ 0 (documented)" },
       { paths: ["0.skinDepth"], kinds: ["undefined"], reason: OPTIONAL + " (surface heating)" },
     ],
-    nonFinite: {
-      timeToSurfaceTarget: "null when no target was given or it is not reached (documented)",
-      timeToCoreTarget: "null when no target was given or it is not reached (documented)",
-    },
+    nonFinite: RADIAL_NULLS,
   },
   steadyStateTemperature: {
     args: () => [{ power: 100, surfaceArea: 0.01, convectionCoefficient: 20, emissivity: 0, ambientTemperature: 293.15 }],
@@ -808,9 +844,52 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       "atTarget.zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
       "heatUp.points[].zeroVoltageSwitching": "null for a current-fed inverter: not applicable (documented)",
       "heatUp.curieCrossingTime": "null when the part does not cross its Curie point (120 °C target, documented)",
+      "heatUp.radial": "null for parts other than bars and tubes in a solenoid (a ring here, documented)",
       temperatureScan: "null when not asked for (documented)",
       impedance: "null when not asked for (documented)",
     },
+  },
+  inductionRadialHeatUp: {
+    args: () => [
+      {
+        part: { shape: "bar", radius: 0.015 },
+        material: lowCarbonSteel,
+        coil: { innerRadius: 0.025, length: 0.2, turns: 40 },
+        frequency: 1e4,
+        coilCurrentRms: 600,
+        convectionCoefficient: 10,
+        emissivity: 0.8,
+        ambientTemperature: celsius(20),
+        duration: 1,
+        cells: 8,
+      },
+    ],
+    variants: [
+      () => [
+        {
+          part: { shape: "tube", radius: 0.015, innerRadius: 0.01 },
+          material: austeniticStainless,
+          coil: { innerRadius: 0.025, length: 0.2, turns: 40 },
+          frequency: 1e4,
+          power: 5000,
+          convectionCoefficient: 10,
+          emissivity: 0.8,
+          ambientTemperature: celsius(20),
+          duration: 1,
+          targetTemperature: celsius(100),
+          targetLocation: "core",
+          soakBand: 5,
+          hardeningTemperature: celsius(60),
+          cells: 8,
+        },
+      ],
+    ],
+    allow: [
+      { paths: ["0.convectionCoefficient", "0.emissivity", "0.coilCurrentRms", "0.power"], kinds: ["zero"], reason: "convection, emissivity (0 … 1), current and power are ≥ 0 (documented)" },
+      { paths: ["0.part.innerRadius"], kinds: ["zero"], reason: "bore radius ≥ 0 (documented)" },
+      { paths: ["0.soakBand", "0.hardeningTemperature", "0.targetTemperature", "0.cells"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+    nonFinite: RADIAL_NULLS,
   },
   sweepHeater: {
     args: () => [heater(), { field: "coil.turns", values: [5, 6], heatUp: false }],

@@ -11,6 +11,7 @@ import {
   besselK0ComplexScaled,
   besselK1ComplexScaled,
   besselI1OverI0Complex,
+  besselIKComplexScaled,
   complex,
   type Complex,
 } from "../../src/special/index.js";
@@ -88,5 +89,32 @@ describe("Bessel functions of complex argument (fixture from mpmath, test/fixtur
   it("real-axis values e^{-1}I₀(1) and e·K₀(1) agree with mpmath (25 digits: 0.4657596075936404, 1.144463079806895)", () => {
     expect(besselI0ComplexScaled(complex(1, 0)).re).toBeCloseTo(0.4657596075936404, 15);
     expect(besselK0ComplexScaled(complex(1, 0)).re).toBeCloseTo(1.144463079806895, 14);
+  });
+});
+
+describe("besselIKComplexScaled: the four scaled functions at once (fixture from mpmath, test/fixtures/special/generate.py)", () => {
+  const pick = (name: "i0" | "i1" | "k0" | "k1") => (z: Complex): Complex => {
+    const b = besselIKComplexScaled(z);
+    return { re: b[`${name}r`], im: b[`${name}i`] };
+  };
+  it("matches mpmath to 5e-15 on Re z ≥ 0 (I envelope-relative near zeros)", () => {
+    const right = (name: string, fn: (z: Complex) => Complex, floor: (r: Row) => number = () => 0): number => {
+      let w = 0;
+      for (const r of rows) {
+        const ref = r[name];
+        if (ref === undefined || !(r.z[0]! >= 0) || (r.z[0] === 0 && (r.z[1] ?? 0) === 0)) continue;
+        w = Math.max(w, err(fn(complex(r.z[0]!, r.z[1] ?? 0)), ref, floor(r)));
+      }
+      return w;
+    };
+    expect(right("i0s", pick("i0"), (r) => envelope(r.z))).toBeLessThanOrEqual(TOL);
+    expect(right("i1s", pick("i1"), (r) => envelope(r.z))).toBeLessThanOrEqual(TOL);
+    expect(right("k0s", pick("k0"))).toBeLessThanOrEqual(TOL);
+    expect(right("k1s", pick("k1"))).toBeLessThanOrEqual(TOL);
+  });
+  it("the TSDoc example, and NaN outside Re z ≥ 0, z ≠ 0 (kernel convention)", () => {
+    expect(besselIKComplexScaled(complex(1, 0)).k0r).toBeCloseTo(1.14446307980689, 12); // mpmath: e·K0(1) = 1.14446307980689
+    expect(besselIKComplexScaled(complex(-1, 0)).i0r).toBeNaN();
+    expect(besselIKComplexScaled(complex(0, 0)).k0r).toBeNaN();
   });
 });
