@@ -4,8 +4,14 @@
  *
  * @packageDocumentation
  */
-import { requireInteger, requireObject, requirePositive } from "../core/index.js";
+import { requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const OPTIMAL_FIELDS: readonly string[] = Object.freeze(["strandDiameter", "turns", "windowBreadth", "frequency", "resistivity", "fieldFactor", "maxStrands"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LITZ_WINDING_FIELDS: readonly string[] = Object.freeze(["strands", "strandDiameter", "turns", "windowBreadth", "frequency", "resistivity", "fieldFactor"]);
 
 /** Options of {@link litzWindingAcRatio}. @category Conductors */
 export interface LitzWindingAcRatioOptions {
@@ -78,6 +84,7 @@ function sullivanCoefficient(turns: number, breadth: number, frequency: number, 
 export function litzWindingAcRatio(options: LitzWindingAcRatioOptions): number {
   const where = "litzWindingAcRatio";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LITZ_WINDING_FIELDS);
   const strands = requireInteger(where, "strands", options.strands, 1);
   const d = requirePositive(where, "strandDiameter", options.strandDiameter, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);
@@ -144,6 +151,7 @@ export interface OptimalLitzStrandCountOptions {
 export function optimalLitzStrandCount(options: OptimalLitzStrandCountOptions): number {
   const where = "optimalLitzStrandCount";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, OPTIMAL_FIELDS);
   const d = requirePositive(where, "strandDiameter", options.strandDiameter, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);
   const breadth = requirePositive(where, "windowBreadth", options.windowBreadth, "m");

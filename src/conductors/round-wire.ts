@@ -3,9 +3,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { wireSkinFactorKernel } from "./round-wire-kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const AC_RATIO_FIELDS: readonly string[] = Object.freeze(["diameter", "frequency", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SWEEP_FIELDS: readonly string[] = Object.freeze(["diameter", "frequencies", "resistivity", "relativePermeability"]);
 
 /** Options of {@link roundWireAcRatio}. @category Conductors */
 export interface RoundWireAcRatioOptions {
@@ -56,6 +62,12 @@ export interface RoundWireAcRatioOptions {
  */
 export function roundWireAcRatio(options: RoundWireAcRatioOptions): number {
   requireObject("roundWireAcRatio", "options", options);
+  for (const key in options) {
+    // constant-name comparisons: a few ns on this hot path
+    if (key !== "diameter" && key !== "frequency" && key !== "resistivity" && key !== "relativePermeability") {
+      requireKnownKeys("roundWireAcRatio", "", options, AC_RATIO_FIELDS);
+    }
+  }
   const diameter = requirePositive("roundWireAcRatio", "diameter", options.diameter, "m");
   const frequency = requirePositive("roundWireAcRatio", "frequency", options.frequency, "Hz");
   const resistivity = requirePositive("roundWireAcRatio", "resistivity", options.resistivity, "Ω·m");
@@ -101,6 +113,7 @@ export interface RoundWireAcRatioSweepOptions {
 export function roundWireAcRatioSweep(options: RoundWireAcRatioSweepOptions, out?: Float64Array): Float64Array {
   const where = "roundWireAcRatioSweep";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SWEEP_FIELDS);
   const diameter = requirePositive(where, "diameter", options.diameter, "m");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const mur = options.relativePermeability === undefined ? 1 : requirePositive(where, "relativePermeability", options.relativePermeability, "");

@@ -4,9 +4,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { maxwellOverMu0 } from "./kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const MUTUAL_FIELDS: readonly string[] = Object.freeze(["radius1", "radius2", "axialDistance"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LOOP_FIELDS: readonly string[] = Object.freeze(["loopRadius", "wireRadius", "currentDistribution"]);
 
 /**
  * How the current is spread over the wire's cross-section: `"uniform"` (direct current and low
@@ -74,6 +80,7 @@ export function loopSelf(a: number, rho: number, surface: boolean): number {
 export function loopInductance(options: LoopInductanceOptions): number {
   const where = "loopInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LOOP_FIELDS);
   const a = requirePositive(where, "loopRadius", options.loopRadius, "m");
   const rho = requirePositive(where, "wireRadius", options.wireRadius, "m");
   if (!(rho < a)) throw new InputError(where, "wireRadius", rho, "m", `less than loopRadius (${a})`);
@@ -137,7 +144,8 @@ export function loopMutualInductance(options: LoopMutualInductanceOptions): numb
     const z = options.axialDistance;
     if (
       typeof a === "number" && typeof b === "number" && typeof z === "number" &&
-      a > 0 && a < Infinity && b > 0 && b < Infinity && z >= 0 && z < Infinity && (a !== b || z !== 0)
+      a > 0 && a < Infinity && b > 0 && b < Infinity && z >= 0 && z < Infinity && (a !== b || z !== 0) &&
+      loopFieldsKnown(options)
     ) {
       return MU_0 * maxwellOverMu0(a, b, z);
     }
@@ -145,10 +153,19 @@ export function loopMutualInductance(options: LoopMutualInductanceOptions): numb
   return loopMutualInductanceChecked(options);
 }
 
+/** True when every field is a known one (constant-name comparisons: a few ns on this hot path). */
+function loopFieldsKnown(options: object): boolean {
+  for (const key in options) {
+    if (key !== "radius1" && key !== "radius2" && key !== "axialDistance") return false;
+  }
+  return true;
+}
+
 /** The validating path of {@link loopMutualInductance}. */
 function loopMutualInductanceChecked(options: LoopMutualInductanceOptions): number {
   const where = "loopMutualInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, MUTUAL_FIELDS);
   const a = requirePositive(where, "radius1", options.radius1, "m");
   const b = requirePositive(where, "radius2", options.radius2, "m");
   const z = requireNonNegative(where, "axialDistance", options.axialDistance, "m");

@@ -4,9 +4,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { multilayerShape, requireTurns, shapeMutual } from "./coaxial.js";
 import { MU_0_HALF_PI, nagaokaKernel } from "./kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const BROOKS_FIELDS: readonly string[] = Object.freeze(["sideLength", "meanRadius", "turns"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const MULTILAYER_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "length", "turns"]);
 
 /**
  * Options of {@link multilayerCoilInductance} and {@link multilayerCoilInductanceWheeler}.
@@ -26,6 +32,7 @@ export interface MultilayerCoilOptions {
 
 function readMultilayer(where: string, options: MultilayerCoilOptions): [number, number, number, number] {
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, MULTILAYER_FIELDS);
   const r1 = requirePositive(where, "innerRadius", options.innerRadius, "m");
   const r2 = requirePositive(where, "outerRadius", options.outerRadius, "m");
   if (!(r2 >= r1)) throw new InputError(where, "outerRadius", r2, "m", `a finite number ≥ innerRadius (${r1})`);
@@ -150,6 +157,7 @@ export interface BrooksCoilOptions {
 export function brooksCoilInductance(options: BrooksCoilOptions): number {
   const where = "brooksCoilInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, BROOKS_FIELDS);
   const hasSide = options.sideLength !== undefined;
   const hasMean = options.meanRadius !== undefined;
   if (hasSide === hasMean) {

@@ -4,11 +4,14 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { checkSpiralRadii } from "./coaxial.js";
 import { maxwellOverMu0 } from "./kernels.js";
 import { loopSelf, type LoopCurrentDistribution } from "./loop.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SPIRAL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "turns", "wireDiameter", "currentDistribution"]);
 
 /**
  * Options of {@link spiralCoilInductance}.
@@ -30,6 +33,7 @@ export interface SpiralCoilOptions {
 
 function readSpiral(where: string, options: SpiralCoilOptions, needWire: boolean): { r1: number; r2: number; n: number; wire: number; pitch: number } {
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SPIRAL_FIELDS);
   const r1 = requirePositive(where, "innerRadius", options.innerRadius, "m");
   const r2 = requirePositive(where, "outerRadius", options.outerRadius, "m");
   const n = requireInteger(where, "turns", options.turns, 1);
