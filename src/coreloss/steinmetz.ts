@@ -3,8 +3,14 @@
  *
  * @packageDocumentation
  */
-import { requireFinite, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { requireFinite, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { SteinmetzCoefficients, SteinmetzTemperatureTerm } from "../materials/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TERM_FIELDS: readonly string[] = Object.freeze(["referenceTemperature", "linear", "quadratic"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STEINMETZ_FIELDS: readonly string[] = Object.freeze(["frequency", "peakFluxDensity", "k", "alpha", "beta"]);
 
 /**
  * Options of {@link steinmetzLoss}: Steinmetz coefficients (SI) and the sinusoidal operating
@@ -60,6 +66,7 @@ export function checkSteinmetzCoefficients(where: string, o: SteinmetzCoefficien
 export function steinmetzLoss(options: SteinmetzLossOptions): number {
   const where = "steinmetzLoss";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, STEINMETZ_FIELDS);
   checkSteinmetzCoefficients(where, options);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const b = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
@@ -96,6 +103,7 @@ export function steinmetzLoss(options: SteinmetzLossOptions): number {
 export function steinmetzTemperatureFactor(term: SteinmetzTemperatureTerm, temperature: number): number {
   const where = "steinmetzTemperatureFactor";
   requireObject(where, "term", term);
+  requireKnownKeys(where, "term", term, TERM_FIELDS);
   const ref = requirePositive(where, "term.referenceTemperature", term.referenceTemperature, "K");
   const c1 = requireFinite(where, "term.linear", term.linear, "1/K");
   const c2 = requireFinite(where, "term.quadratic", term.quadratic, "1/K²");

@@ -4,9 +4,12 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { TankNetwork } from "./network.js";
 import { tankNetworkUnchecked } from "./tank-network-internal.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const PARALLEL_TANK_FIELDS: readonly string[] = Object.freeze(["inductance", "capacitance", "coilResistance", "parallelResistance"]);
 
 /**
  * Options of {@link parallelTank}.
@@ -123,6 +126,7 @@ export interface ParallelTank {
 export function parallelTank(options: ParallelTankOptions): ParallelTank {
   const where = "parallelTank";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, PARALLEL_TANK_FIELDS);
   const inductance = requirePositive(where, "inductance", options.inductance, "H");
   const capacitance = requirePositive(where, "capacitance", options.capacitance, "F");
   const coilResistance = requireNonNegative(where, "coilResistance", options.coilResistance, "Ω");

@@ -3,9 +3,12 @@
  *
  * @packageDocumentation
  */
-import { requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { TankNetwork } from "./network.js";
 import { tankNetworkUnchecked } from "./tank-network-internal.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SERIES_TANK_FIELDS: readonly string[] = Object.freeze(["inductance", "capacitance", "resistance"]);
 
 /**
  * Options of {@link seriesTank}.
@@ -88,6 +91,7 @@ export interface SeriesTank {
 export function seriesTank(options: SeriesTankOptions): SeriesTank {
   const where = "seriesTank";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SERIES_TANK_FIELDS);
   const inductance = requirePositive(where, "inductance", options.inductance, "H");
   const capacitance = requirePositive(where, "capacitance", options.capacitance, "F");
   const resistance = requirePositive(where, "resistance", options.resistance, "Ω");
