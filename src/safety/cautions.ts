@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireObject, requirePositive } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { Caution } from "../core/index.js";
 import { voltageCaution } from "../core/extra-low-voltage.js";
 // The extra-low-voltage caution is shared with the tank module, so it lives in core; this
@@ -13,6 +13,18 @@ export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "../core/extra-low-volt
 export type { VoltageCautionOptions } from "../core/extra-low-voltage.js";
 import { exposureCheck } from "./exposure.js";
 import type { ExposurePopulation } from "./exposure.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SAFETY_FIELDS: readonly string[] = Object.freeze(["tankVoltageRms", "supplyVoltageDc", "capacitance", "capacitorVoltagePeak", "surfaceTemperature", "contactTime", "frequency", "fluxDensityRms", "population"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const EXPOSURE_CAUTION_FIELDS: readonly string[] = Object.freeze(["fluxDensityRms", "frequency", "population"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SURFACE_FIELDS: readonly string[] = Object.freeze(["temperature", "contactTime", "location"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STORED_ENERGY_FIELDS: readonly string[] = Object.freeze(["capacitance", "voltagePeak"]);
 
 /**
  * Options of {@link storedEnergyCaution}.
@@ -59,6 +71,7 @@ const SHOCK_VOLTAGE_PEAK = 42.4;
 export function storedEnergyCaution(options: StoredEnergyCautionOptions): Caution | null {
   const where = "storedEnergyCaution";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, STORED_ENERGY_FIELDS);
   const c = requirePositive(where, "capacitance", options.capacitance, "F");
   const v = Math.abs(requireFinite(where, "voltagePeak", options.voltagePeak, "V"));
   const energy = 0.5 * c * v * v;
@@ -177,6 +190,7 @@ export interface SurfaceTemperatureCautionOptions {
 export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOptions): Caution | null {
   const where = "surfaceTemperatureCaution";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SURFACE_FIELDS);
   const temperature = requirePositive(where, "temperature", options.temperature, "K");
   const contactTime =
     options.contactTime === undefined ? 1 : requirePositive(where, "contactTime", options.contactTime, "s");
@@ -282,6 +296,7 @@ export interface ExposureCautionOptions {
  */
 export function exposureCaution(options: ExposureCautionOptions): Caution | null {
   requireObject("exposureCaution", "options", options);
+  requireKnownKeys("exposureCaution", "", options, EXPOSURE_CAUTION_FIELDS);
   const population = options.population ?? "general-public";
   const check = exposureCheck({ fluxDensityRms: options.fluxDensityRms, frequency: options.frequency, population });
   if (!check.exceeded) return null;
@@ -349,6 +364,7 @@ export interface SafetyCautionsOptions {
 export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
   const where = "safetyCautions";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SAFETY_FIELDS);
   const cautions: (Caution | null)[] = [];
   if (options.tankVoltageRms !== undefined) {
     cautions.push(voltageCaution({ voltage: options.tankVoltageRms, waveform: "ac", location: "resonant tank" }));

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInRange, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { specificEnthalpyChange, specificHeatAt, thermalConductivityAt } from "../materials/index.js";
@@ -13,6 +13,9 @@ import type { OdeResult } from "../special/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { findEquilibrium } from "./steady-state.js";
 import { checkSurface, effectiveCoefficient, powerFunction } from "./surface-loss.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LUMPED_FIELDS: readonly string[] = Object.freeze(["mass", "specificHeat", "material", "power", "powerAt", "surfaceArea", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature", "targetTemperature", "duration", "thermalConductivity", "density", "characteristicLength", "relativeTolerance"]);
 
 /**
  * Options of {@link lumpedHeatUp}. Give `specificHeat` or `material` (or both: `specificHeat`
@@ -188,6 +191,7 @@ const WHERE = "lumpedHeatUp";
  */
 export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   requireObject(WHERE, "options", options);
+  requireKnownKeys(WHERE, "", options, LUMPED_FIELDS);
   const mass = requirePositive(WHERE, "mass", options.mass, "kg");
   const material = options.material;
   if (material !== undefined) requireObject(WHERE, "material", material);

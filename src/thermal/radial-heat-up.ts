@@ -5,20 +5,15 @@
  *
  * @packageDocumentation
  */
-import {
-  InputError,
-  requireInRange,
-  requireInteger,
-  requireNonNegative,
-  requireObject,
-  requireOneOf,
-  requirePositive,
-} from "../core/index.js";
+import { InputError, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { specificHeatAt, thermalConductivityAt } from "../materials/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { checkSurface, effectiveCoefficient } from "./surface-loss.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const RADIAL_FIELDS: readonly string[] = Object.freeze(["geometry", "radius", "thickness", "length", "faceArea", "power", "surfacePowerDensity", "skinDepth", "material", "density", "specificHeat", "thermalConductivity", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature", "duration", "targetTemperature", "cells", "temperatureTolerance", "maxTimeStep"]);
 
 /**
  * Options of {@link radialHeatUp}.
@@ -188,6 +183,7 @@ const WHERE = "radialHeatUp";
  */
 export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   requireObject(WHERE, "options", options);
+  requireKnownKeys(WHERE, "", options, RADIAL_FIELDS);
   const geometry = requireOneOf(WHERE, "geometry", options.geometry, ["cylinder", "slab"] as const);
   const cylinder = geometry === "cylinder";
   const size = cylinder

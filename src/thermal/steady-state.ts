@@ -3,10 +3,13 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { brentRoot } from "../special/index.js";
 import { checkSurface, powerFunction, surfaceLoss } from "./surface-loss.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STEADY_FIELDS: readonly string[] = Object.freeze(["power", "powerAt", "surfaceArea", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature"]);
 
 /**
  * Options of {@link steadyStateTemperature}. Give exactly one of `power` and `powerAt`.
@@ -78,6 +81,7 @@ export interface SteadyStateTemperatureOptions {
 export function steadyStateTemperature(options: SteadyStateTemperatureOptions): number {
   const where = "steadyStateTemperature";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, STEADY_FIELDS);
   const surface = checkSurface(where, options);
   const start =
     options.initialTemperature === undefined

@@ -4,12 +4,24 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { Complex } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { besselJ0, besselJ1 } from "../special/index.js";
 import { besselJ1MomentOverCube, gaussLegendreRule } from "./kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TRUNCATED_FIELDS: readonly string[] = Object.freeze(["domainRadius", "coil", "plate", "frequency"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const COIL_OVER_PLATE_FIELDS: readonly string[] = Object.freeze(["coil", "plate", "frequency"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LAYER_FIELDS: readonly string[] = Object.freeze(["thickness", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "height", "turns"]);
 
 /**
  * One conducting layer of a plate or layered half-space (top layer first).
@@ -135,7 +147,7 @@ export function checkPlateLayers(where: string, plate: unknown): PlateLayer[] {
   if (list.length === 0) throw new InputError(where, "plate", plate, "", "a layer or a non-empty array of layers");
   return list.map((item, i) => {
     const name = Array.isArray(plate) ? `plate[${i}]` : "plate";
-    const layer = requireObject(where, name, item);
+    const layer = requireKnownKeys(where, name, requireObject(where, name, item), LAYER_FIELDS);
     const t = layer["thickness"];
     const last = i === list.length - 1;
     if (typeof t !== "number" || !(t > 0) || (t === Infinity && !last)) {
@@ -159,6 +171,7 @@ export function checkPlateLayers(where: string, plate: unknown): PlateLayer[] {
 /** Checked coil of {@link coilOverPlate}. */
 function checkCoil(where: string, coil: unknown): CoilAbovePlate {
   const c = requireObject(where, "coil", coil);
+  requireKnownKeys(where, "coil", c, PLATE_COIL_FIELDS);
   const innerRadius = requireNonNegative(where, "coil.innerRadius", c["innerRadius"], "m");
   const outerRadius = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
   if (!(outerRadius > innerRadius)) {
@@ -405,6 +418,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
 export function coilOverPlate(options: CoilOverPlateOptions): CoilOverPlateResult {
   const where = "coilOverPlate";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, COIL_OVER_PLATE_FIELDS);
   const coil = checkCoil(where, options.coil);
   const layers = checkPlateLayers(where, options.plate);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
@@ -546,6 +560,7 @@ function besselJ1Zeros(n: number): Float64Array {
 export function coilOverPlateTruncatedRegion(options: CoilOverPlateTruncatedRegionOptions): CoilOverPlateResult {
   const where = "coilOverPlateTruncatedRegion";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TRUNCATED_FIELDS);
   const coil = checkCoil(where, options.coil);
   const layers = checkPlateLayers(where, options.plate);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");

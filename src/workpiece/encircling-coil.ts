@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import {
   besselI0ComplexScaled,
@@ -20,6 +20,15 @@ import {
 import { MU_0 } from "../units/index.js";
 import { gaussLegendreRule } from "./kernels.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ROD_FIELDS: readonly string[] = Object.freeze(["radius", "innerRadius", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ENCIRCLING_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "length", "turns"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ENCIRCLING_FIELDS: readonly string[] = Object.freeze(["coil", "rod", "frequency"]);
 
 /**
  * A coaxial coil of rectangular winding cross-section around a rod, with uniform current
@@ -155,13 +164,16 @@ function kMomentTailScaled(x: number): number {
 export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): EncirclingCoilOverRodResult {
   const where = "encirclingCoilOverRod";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, ENCIRCLING_FIELDS);
   const c = requireObject(where, "coil", options.coil);
+  requireKnownKeys(where, "coil", c, ENCIRCLING_COIL_FIELDS);
   const r1 = requirePositive(where, "coil.innerRadius", c["innerRadius"], "m");
   const r2 = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
   if (!(r2 > r1)) throw new InputError(where, "coil.outerRadius", r2, "m", `a finite number > coil.innerRadius (${r1})`);
   const len = requirePositive(where, "coil.length", c["length"], "m");
   const turns = requireInteger(where, "coil.turns", c["turns"], 1);
   const rod = requireObject(where, "rod", options.rod);
+  requireKnownKeys(where, "rod", rod, ROD_FIELDS);
   const a = requirePositive(where, "rod.radius", rod["radius"], "m");
   if (!(a < r1)) throw new InputError(where, "rod.radius", a, "m", `a finite number > 0 and < coil.innerRadius (${r1})`);
   const a1 = rod["innerRadius"] === undefined ? 0 : requireNonNegative(where, "rod.innerRadius", rod["innerRadius"], "m");
