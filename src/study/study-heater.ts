@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, InputError, requireInteger, requireObject } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireInteger, requireKnownKeys, requireObject } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
 import { lumpedHeatUp } from "../thermal/index.js";
@@ -13,6 +13,9 @@ import { coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operati
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints"]);
 
 /**
  * Options of {@link studyHeater}: which of the slower parts of the study to run.
@@ -312,6 +315,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  */
 export function studyHeater(description: unknown, options: StudyHeaterOptions = {}): HeaterStudy {
   requireObject("studyHeater", "options", options);
+  requireKnownKeys("studyHeater", "options", options, STUDY_OPTION_FIELDS);
   const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
   const d = readHeaterDescription(description);
   const props = coilProperties(d);
