@@ -253,12 +253,18 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
 
   const sigmaA = emissivity * STEFAN_BOLTZMANN * area;
   const hA = convection * area;
+  // The state is the rise above the initial temperature (not the temperature itself), so that a
+  // tiny rise keeps its full relative precision and the stored energy m·c·ΔT balances the
+  // integrated input to rounding; the losses use T − Ta = (T0 − Ta) + ΔT and
+  // T⁴ − Ta⁴ = (T − Ta)(T + Ta)(T² + Ta²) for the same reason.
+  const initialExcess = initial - ambient;
   const derivative = (_t: number, y: Float64Array, dy: Float64Array): void => {
-    const temperature = y[0]!;
+    const rise = y[0]!;
+    const temperature = initial + rise;
     const p = power(temperature);
-    const convective = hA * (temperature - ambient);
-    const t2 = temperature * temperature;
-    const radiative = sigmaA * (t2 * t2 - ambient * ambient * ambient * ambient);
+    const excess = initialExcess + rise;
+    const convective = hA * excess;
+    const radiative = sigmaA * excess * (temperature + ambient) * (temperature * temperature + ambient * ambient);
     dy[0] = (p - convective - radiative) / heatCapacityAt(temperature);
     dy[1] = p;
     dy[2] = convective;
@@ -266,20 +272,21 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   };
   const energyScale = heatCapacityAt(initial) * Math.max(1, Math.abs((equilibrium ?? target ?? initial) - initial));
   const absoluteTolerance = [1e-12 * Math.max(initial, ambient), 1e-13 * energyScale, 1e-13 * energyScale, 1e-13 * energyScale];
+  const riseToTarget = target === null ? 0 : target - initial;
 
   // Time constant near the steady state.
   const heff = effectiveCoefficient(equilibrium ?? initial, ambient, convection, emissivity);
   const timeConstant = heff > 0 && equilibrium !== null ? heatCapacityAt(equilibrium) / (heff * area) : null;
 
   const run = (end: number, withEvent: boolean): OdeResult => {
-    const result = solveOde(derivative, [initial, 0, 0, 0], {
+    const result = solveOde(derivative, [0, 0, 0, 0], {
       end,
       ...(withEvent ? {} : { maxStep: end / 64 }),
       relativeTolerance: rtol,
       absoluteTolerance,
       dense: true,
       maxSteps: 1000000,
-      ...(withEvent && target !== null ? { event: (_t: number, y: Float64Array): number => y[0]! - target } : {}),
+      ...(withEvent && target !== null ? { event: (_t: number, y: Float64Array): number => y[0]! - riseToTarget } : {}),
     });
     if (result.status !== "completed" && result.status !== "event") {
       throw new InputError(WHERE, "options", options, "", `a problem the integrator can follow (it stopped: ${result.status})`);
@@ -310,30 +317,31 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   // with 64 dense samples, for plotting), else a run over the span with at least 64 steps.
   const curve = eventRun !== null && end === timeToTarget ? eventRun : run(end, false);
   let times = curve.times;
-  let temperatures = curve.states.map((s) => s[0]!);
+  let temperatures = curve.states.map((s) => initial + s[0]!);
   if (curve === eventRun) {
     const merged: { t: number; v: number }[] = times.map((t, k) => ({ t, v: temperatures[k]! }));
     for (let k = 1; k < 64; k++) {
       const t = (end * k) / 64;
-      merged.push({ t, v: curve.sample!(t)[0]! });
+      merged.push({ t, v: initial + curve.sample!(t)[0]! });
     }
     merged.sort((a, b) => a.t - b.t);
     times = merged.map((p) => p.t);
     temperatures = merged.map((p) => p.v);
   }
   const finalState = curve.finalState;
-  const finalTemperature = finalState[0]!;
+  const finalRise = finalState[0]!;
+  const finalTemperature = initial + finalRise;
   const sample = curve.sample!;
   const temperatureAt = (time: number): number => {
     if (typeof time !== "number" || !(time >= 0 && time <= end)) {
       throw new InputError("LumpedHeatUpResult.temperatureAt", "time", time, "s", `a finite number between 0 and ${end}`);
     }
-    return sample(time)[0]!;
+    return initial + sample(time)[0]!;
   };
 
   // Stored energy m ∫c(T) dT, exact for the material's specific-heat model.
   let stored: number;
-  if (constantSpecificHeat !== null) stored = mass * constantSpecificHeat * (finalTemperature - initial);
+  if (constantSpecificHeat !== null) stored = mass * constantSpecificHeat * finalRise;
   else stored = mass * specificEnthalpyChange(material!, { fromTemperature: initial, toTemperature: finalTemperature });
   const input = finalState[1]!;
   const convective = finalState[2]!;

@@ -43,8 +43,8 @@ describe("litzWindingAcRatio properties", () => {
     fc.assert(
       fc.property(arb, (o) => {
         const base = { ...o, resistivity: rho };
-        const { strands: _strands, ...withoutStrands } = base;
-        const n = optimalLitzStrandCount(withoutStrands);
+        const { strandDiameter, turns, windowBreadth, frequency, resistivity } = base;
+        const n = optimalLitzStrandCount({ strandDiameter, turns, windowBreadth, frequency, resistivity });
         const loss = (k: number) => litzWindingAcRatio({ ...base, strands: k }) / k;
         expect(Number.isInteger(n) && n >= 1).toBe(true);
         expect(loss(n)).toBeLessThanOrEqual(loss(n + 1) * (1 + 1e-12));
