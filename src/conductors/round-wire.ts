@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireArrayLike, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { wireSkinFactorKernel } from "./round-wire-kernels.js";
 
@@ -118,10 +118,7 @@ export function roundWireAcRatioSweep(options: RoundWireAcRatioSweepOptions, out
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const mur = options.relativePermeability === undefined ? 1 : requirePositive(where, "relativePermeability", options.relativePermeability, "");
   const frequencies = options.frequencies;
-  if (typeof frequencies !== "object" || frequencies === null || typeof frequencies.length !== "number") {
-    throw new InputError(where, "frequencies", frequencies, "Hz", "an array of frequencies");
-  }
-  const n = frequencies.length;
+  const n = requireArrayLike(where, "frequencies", frequencies, "Hz").length;
   const result = out ?? new Float64Array(n);
   if (result.length < n) throw new InputError(where, "out", result, "", `a Float64Array of length ≥ ${n}`);
   const scale = diameter * Math.sqrt((Math.PI * MU_0 * mur) / (2 * resistivity));

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { requireFinite, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, MAX_ARRAY_LENGTH, requireFinite, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { FluxWaveform } from "./waveform-types.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
@@ -65,6 +65,7 @@ export function sinusoidalFluxWaveform(options: SinusoidalFluxOptions): FluxWave
   const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const samples = options.samples === undefined ? 256 : requireInteger(where, "samples", options.samples, 4);
+  if (samples > MAX_ARRAY_LENGTH) throw new InputError(where, "samples", samples, "", `an integer between 4 and ${MAX_ARRAY_LENGTH}`);
   const offset = options.offset === undefined ? 0 : requireFinite(where, "offset", options.offset, "T");
   const period = 1 / f;
   const time = new Float64Array(samples + 1);

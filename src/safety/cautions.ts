@@ -340,6 +340,22 @@ export interface SafetyCautionsOptions {
 }
 
 /**
+ * Runs one of the single cautions for {@link safetyCautions} and, when it rejects a value, says
+ * so in terms of the field the caller wrote (`tankVoltageRms`, not `voltageCaution: voltage`).
+ */
+function relabel<T>(run: () => T, fields: Readonly<Record<string, string>>): T {
+  try {
+    return run();
+  } catch (e) {
+    if (e instanceof InputError) {
+      const field = fields[e.parameter];
+      if (field !== undefined) throw new InputError("safetyCautions", field, e.value, e.unit, e.expected);
+    }
+    throw e;
+  }
+}
+
+/**
  * Runs every applicable caution generator ({@link voltageCaution}, {@link storedEnergyCaution},
  * {@link surfaceTemperatureCaution}, {@link audibleFrequencyCaution}, {@link exposureCaution}) on
  * the given numbers and returns the cautions found, most severe first. Each message ends with
@@ -366,36 +382,51 @@ export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, SAFETY_FIELDS);
   const cautions: (Caution | null)[] = [];
-  if (options.tankVoltageRms !== undefined) {
-    cautions.push(voltageCaution({ voltage: options.tankVoltageRms, waveform: "ac", location: "resonant tank" }));
+  const { tankVoltageRms, supplyVoltageDc, capacitance, capacitorVoltagePeak, surfaceTemperature, contactTime, fluxDensityRms, population } = options;
+  if (tankVoltageRms !== undefined) {
+    cautions.push(relabel(() => voltageCaution({ voltage: tankVoltageRms, waveform: "ac", location: "resonant tank" }), { voltage: "tankVoltageRms" }));
   }
-  if (options.supplyVoltageDc !== undefined) {
-    cautions.push(voltageCaution({ voltage: options.supplyVoltageDc, waveform: "dc", location: "DC supply" }));
+  if (supplyVoltageDc !== undefined) {
+    cautions.push(relabel(() => voltageCaution({ voltage: supplyVoltageDc, waveform: "dc", location: "DC supply" }), { voltage: "supplyVoltageDc" }));
   }
   if ((options.capacitance === undefined) !== (options.capacitorVoltagePeak === undefined)) {
     const missing = options.capacitance === undefined ? "capacitance" : "capacitorVoltagePeak";
     requireFinite(where, missing, undefined, missing === "capacitance" ? "F" : "V");
   }
-  if (options.capacitance !== undefined && options.capacitorVoltagePeak !== undefined) {
-    cautions.push(storedEnergyCaution({ capacitance: options.capacitance, voltagePeak: options.capacitorVoltagePeak }));
-  }
-  if (options.surfaceTemperature !== undefined) {
+  if (capacitance !== undefined && capacitorVoltagePeak !== undefined) {
     cautions.push(
-      surfaceTemperatureCaution({
-        temperature: options.surfaceTemperature,
-        ...(options.contactTime === undefined ? {} : { contactTime: options.contactTime }),
+      relabel(() => storedEnergyCaution({ capacitance, voltagePeak: capacitorVoltagePeak }), {
+        capacitance: "capacitance",
+        voltagePeak: "capacitorVoltagePeak",
       }),
     );
   }
-  if (options.frequency !== undefined) cautions.push(audibleFrequencyCaution(options.frequency));
-  if (options.fluxDensityRms !== undefined) {
+  if (surfaceTemperature !== undefined) {
+    cautions.push(
+      relabel(
+        () =>
+          surfaceTemperatureCaution({
+            temperature: surfaceTemperature,
+            ...(contactTime === undefined ? {} : { contactTime }),
+          }),
+        { temperature: "surfaceTemperature", contactTime: "contactTime" },
+      ),
+    );
+  }
+  const audible = options.frequency;
+  if (audible !== undefined) cautions.push(relabel(() => audibleFrequencyCaution(audible), { frequency: "frequency" }));
+  if (fluxDensityRms !== undefined) {
     const frequency = requireInRange(where, "frequency", options.frequency, "Hz", 1, 1e7);
     cautions.push(
-      exposureCaution({
-        fluxDensityRms: options.fluxDensityRms,
-        frequency,
-        ...(options.population === undefined ? {} : { population: options.population }),
-      }),
+      relabel(
+        () =>
+          exposureCaution({
+            fluxDensityRms,
+            frequency,
+            ...(population === undefined ? {} : { population }),
+          }),
+        { fluxDensityRms: "fluxDensityRms", population: "population" },
+      ),
     );
   }
   const order = { danger: 0, warning: 1, info: 2 } as const;

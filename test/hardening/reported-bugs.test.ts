@@ -12,7 +12,19 @@ import {
   optimalLitzStrandCount,
   parseQuantity,
   steadyStateTemperature,
+  HeaterDescriptionError,
+  integrateAdaptive,
+  integrateToInfinity,
+  logSpacedFrequencies,
+  readHeaterDescription,
+  roundWireAcRatioSweep,
+  safetyCautions,
+  seriesTank,
+  sinusoidalFluxWaveform,
+  SI_PREFIXES,
+  tankImpedanceSweep,
 } from "../../src/index.js";
+import { loadExample } from "../study/cases.js";
 
 describe("reported wrong answers", () => {
   it("parseQuantity refuses a Celsius text below absolute zero, as celsius() does", () => {
@@ -78,5 +90,43 @@ describe("reported wrong answers", () => {
     const mu0 = 1.25663706212e-6;
     const sheet = mu0 * (100_000 / 0.1) * 1e-3 * (0.05 / Math.hypot(0.05, 0.05));
     expect(Math.abs(b / sheet - 1)).toBeLessThan(1e-8);
+  });
+
+  it("errors name the field the caller wrote", () => {
+    expect(() => safetyCautions({ tankVoltageRms: Number.NaN })).toThrow(/^safetyCautions: tankVoltageRms must be/);
+    expect(() => safetyCautions({ surfaceTemperature: Number.NaN })).toThrow(/^safetyCautions: surfaceTemperature must be/);
+    expect(() => integrateAdaptive(Math.sin, 0, 1, null as never)).toThrow(InputError);
+    expect(() => integrateToInfinity((x) => Math.exp(-x), 0, null as never)).toThrow(InputError);
+  });
+
+  it("huge array requests get an InputError naming the limit, not a plain RangeError", () => {
+    const tank = seriesTank({ inductance: 1e-4, capacitance: 1e-6, resistance: 0.5 });
+    expect(() => logSpacedFrequencies(1, 10, 1e12)).toThrow(InputError);
+    expect(() => sinusoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 1e3, samples: 1e12 })).toThrow(InputError);
+    for (const length of [2 ** 40, -1, 1.5]) {
+      expect(() => tankImpedanceSweep(tank, { length })).toThrow(InputError);
+      expect(() => roundWireAcRatioSweep({ diameter: 1e-3, frequencies: { length }, resistivity: 1.7e-8 })).toThrow(InputError);
+    }
+  });
+
+  it("a study file with 100 000 unknown fields stops after a few hundred problems, quickly", () => {
+    const d = loadExample("study-bearing-race.json");
+    const coil = { ...(d.coil as Record<string, unknown>) };
+    for (let i = 0; i < 100_000; i++) coil[`extra${i}`] = i;
+    const start = performance.now();
+    let problems = 0;
+    try {
+      readHeaterDescription({ ...d, coil });
+    } catch (e) {
+      expect(e).toBeInstanceOf(HeaterDescriptionError);
+      problems = (e as InstanceType<typeof HeaterDescriptionError>).problems.length;
+    }
+    expect(problems).toBeGreaterThan(100);
+    expect(problems).toBeLessThanOrEqual(201);
+    expect(performance.now() - start).toBeLessThan(2000);
+  });
+
+  it("SI_PREFIXES entries are frozen like every other exported object", () => {
+    for (const p of SI_PREFIXES) expect(Object.isFrozen(p)).toBe(true);
   });
 });

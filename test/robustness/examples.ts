@@ -181,6 +181,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => ["demo", "options", { radius: 1 }, ["radius", "length"]],
     skip: { paths: ["2.*", "3", "3.*"], reason: "field values are not looked at, only their names; `known` is the calling function's own constant list" },
   },
+  requireArrayLike: {
+    args: () => ["demo", "frequencies", [1e3, 2e3], "Hz"],
+    skip: { paths: ["2.*"], reason: "element values are not looked at, only the length" },
+  },
   nearestName: { args: () => ["relativePermeabilty", ["diameter", "relativePermeability"]], kind: "kernel" },
 
   // ---------------------------------------------------------------- units
