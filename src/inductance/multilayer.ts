@@ -30,6 +30,9 @@ export interface MultilayerCoilOptions {
   readonly turns: number;
 }
 
+/** Smallest length/outerRadius of the exact integral (its cost grows as the inverse). */
+const MIN_LENGTH_RATIO = 1e-4;
+
 function readMultilayer(where: string, options: MultilayerCoilOptions): [number, number, number, number] {
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, MULTILAYER_FIELDS);
@@ -61,7 +64,8 @@ function readMultilayer(where: string, options: MultilayerCoilOptions): [number,
  *   or turns < 1
  * @remarks Accuracy ≤ 1e-8 relative vs the Bessel–Struve integral evaluated in mpmath (fixture
  * multilayer.json). Validity: the winding is fine compared with its section (otherwise add
- * round-wire corrections as for a solenoid). Cost: about 1–10 ms. Note: at fixed turns, L is not
+ * round-wire corrections as for a solenoid). Cost: about 1–10 ms, growing as outerRadius/length;
+ * length < 1e-4 × outerRadius is refused (InputError) to keep a call under about 0.5 s. Note: at fixed turns, L is not
  * monotonic in the outer radius — thickening a short, thick winding first lowers L as the current
  * spreads (e.g. inner 0.1 m, length 0.02 m: a minimum near outer radius 0.1647 m).
  * @see F. W. Grover, Inductance Calculations (1946), ch. 13; T. R. Lyle, Phil. Trans. R. Soc. A 213,
@@ -77,6 +81,9 @@ function readMultilayer(where: string, options: MultilayerCoilOptions): [number,
  */
 export function multilayerCoilInductance(options: MultilayerCoilOptions): number {
   const [r1, r2, l, n] = readMultilayer("multilayerCoilInductance", options);
+  if (l < MIN_LENGTH_RATIO * r2) {
+    throw new InputError("multilayerCoilInductance", "length", l, "m", `at least ${MIN_LENGTH_RATIO} × outerRadius = ${MIN_LENGTH_RATIO * r2} (the integral's cost grows as outerRadius/length; a flatter winding is a flat spiral: use spiralCoilInductance)`);
+  }
   if (r2 === r1) {
     const x = (2 * r1) / l;
     return MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x);

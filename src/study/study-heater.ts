@@ -296,7 +296,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * @returns the {@link HeaterStudy}
  * @throws {@link HeaterDescriptionError} (an {@link InputError}) when the description is
  * invalid, naming the field path; {@link InputError} when `options` is not an object or
- * `options.heatUpPoints` is not an integer ≥ 4
+ * `options.heatUpPoints` is not an integer from 4 to 1000 (each point costs a coupling solution)
  * @example
  * ```ts
  * import { studyHeater } from "fluxwright";
@@ -317,6 +317,8 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
   requireObject("studyHeater", "options", options);
   requireKnownKeys("studyHeater", "options", options, STUDY_OPTION_FIELDS);
   const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
+  // bounded work: each point is a coupling solution (about 0.1 ms)
+  if (heatUpPoints !== undefined && heatUpPoints > 1000) throw new InputError("studyHeater", "options.heatUpPoints", heatUpPoints, "", "an integer between 4 and 1000");
   const d = readHeaterDescription(description);
   const props = coilProperties(d);
   const part = d.part;

@@ -14,6 +14,13 @@ import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { findEquilibrium } from "./steady-state.js";
 import { checkSurface, effectiveCoefficient, powerFunction } from "./surface-loss.js";
 
+/** Longest duration accepted, in time constants (about 0.3 s of work there on one core). */
+const MAX_TIME_CONSTANTS = 1e5;
+
+function steadyText(equilibrium: number | null): string {
+  return equilibrium === null ? "" : `(${equilibrium.toPrecision(6)} K)`;
+}
+
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const LUMPED_FIELDS: readonly string[] = Object.freeze(["mass", "specificHeat", "material", "power", "powerAt", "surfaceArea", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature", "targetTemperature", "duration", "thermalConductivity", "density", "characteristicLength", "relativeTolerance"]);
 
@@ -159,6 +166,8 @@ const WHERE = "lumpedHeatUp";
  * Closed form (checked in the tests to 1e-9): with constant $P$, $c$, no radiation and
  * $T_0 = T_a$, $t = -\frac{mc}{hA}\ln\!\left(1 - \frac{(T - T_a)\,hA}{P}\right)$.
  *
+ * Cost: grows as duration / time constant (explicit steps near the time constant); a duration
+ * above 1e5 time constants is refused with an InputError (the part is long at its steady state).
  * Hard domain (throws {@link InputError}): non-finite or out-of-range inputs (see
  * {@link LumpedHeatUpOptions}); neither `specificHeat` nor `material`; both or neither of
  * `power`/`powerAt`; no `duration` when the span cannot be chosen (no losses and no reachable
@@ -278,6 +287,11 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   const heff = effectiveCoefficient(equilibrium ?? initial, ambient, convection, emissivity);
   const timeConstant = heff > 0 && equilibrium !== null ? heatCapacityAt(equilibrium) / (heff * area) : null;
 
+  // bounded work: the explicit integrator's steps stay near the time constant, so the cost grows
+  // as duration/τ; the part sits at its steady state long before 1e5 τ
+  if (duration !== null && timeConstant !== null && duration > MAX_TIME_CONSTANTS * timeConstant) {
+    throw new InputError(WHERE, "duration", duration, "s", `at most ${MAX_TIME_CONSTANTS} time constants = ${(MAX_TIME_CONSTANTS * timeConstant).toPrecision(4)} s (the part is at its steady state ${steadyText(equilibrium)} long before)`);
+  }
   const run = (end: number, withEvent: boolean): OdeResult => {
     const result = solveOde(derivative, [0, 0, 0, 0], {
       end,

@@ -17,6 +17,9 @@ const TRUNCATED_FIELDS: readonly string[] = Object.freeze(["domainRadius", "coil
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const COIL_OVER_PLATE_FIELDS: readonly string[] = Object.freeze(["coil", "plate", "frequency"]);
 
+/** Largest lift-off / outer radius of the truncated-region series (cost about 0.2 s there). */
+const MAX_TRUNCATED_LIFT_OFF = 20;
+
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const LAYER_FIELDS: readonly string[] = Object.freeze(["thickness", "resistivity", "relativePermeability"]);
 
@@ -528,6 +531,8 @@ function besselJ1Zeros(n: number): Float64Array {
  * problem (a series over eigenvalues instead of a quadrature), used to cross-check
  * {@link coilOverPlate}. About 20× slower than {@link coilOverPlate}.
  *
+ * Cost: grows with lift-off / outer radius; a lift-off above 20 outer radii is refused with an
+ * InputError (use {@link coilOverPlate} there; about 0.2 s at that edge).
  * Hard domain (throws {@link InputError}): as {@link coilOverPlate}, and domainRadius >
  * coil outerRadius when given. Validity: as {@link coilOverPlate}, with the plate and field
  * ending at domainRadius.
@@ -562,6 +567,9 @@ export function coilOverPlateTruncatedRegion(options: CoilOverPlateTruncatedRegi
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, TRUNCATED_FIELDS);
   const coil = checkCoil(where, options.coil);
+  if (coil.liftOff > MAX_TRUNCATED_LIFT_OFF * coil.outerRadius) {
+    throw new InputError(where, "coil.liftOff", coil.liftOff, "m", `at most ${MAX_TRUNCATED_LIFT_OFF} × coil.outerRadius = ${MAX_TRUNCATED_LIFT_OFF * coil.outerRadius} (the series' cost grows with lift-off/radius; use coilOverPlate)`);
+  }
   const layers = checkPlateLayers(where, options.plate);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const size = Math.max(coil.outerRadius, coil.liftOff + coil.height);
