@@ -224,9 +224,14 @@ export function igseLoss(options: IgseLossOptions): number {
   const alpha = options.alpha;
   const beta = options.beta;
   // one loop: the whole waveform with ΔB = peak-to-peak
-  if (reversals <= 2) return (options.k * Math.exp(igseLogFactor(alpha, beta) + (beta - alpha) * Math.log(swing)) * sum) / period;
-  const ki = igseCoefficientUnchecked(options.k, alpha, beta);
-  return (ki * minorLoopSum(time, b, bFirst, iMax, alpha, beta)) / period;
+  const loss =
+    reversals <= 2
+      ? (options.k * Math.exp(igseLogFactor(alpha, beta) + (beta - alpha) * Math.log(swing)) * sum) / period
+      : (igseCoefficientUnchecked(options.k, alpha, beta) * minorLoopSum(time, b, bFirst, iMax, alpha, beta)) / period;
+  if (!(loss < Infinity)) {
+    throw new InputError(WHERE, "period", period, "s", "a period for which (with these flux values and coefficients) the loss density lies within the double-precision range");
+  }
+  return loss;
 }
 
 /**

@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { requireFinite, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireFinite, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { SteinmetzCoefficients, SteinmetzTemperatureTerm } from "../materials/index.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
@@ -71,7 +71,15 @@ export function steinmetzLoss(options: SteinmetzLossOptions): number {
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const b = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
   if (b === 0) return 0;
-  return options.k * Math.pow(f, options.alpha) * Math.pow(b, options.beta);
+  const direct = options.k * Math.pow(f, options.alpha) * Math.pow(b, options.beta);
+  if (direct > 0 && direct < Infinity) return direct;
+  // a factor left the double range: the product in logarithms gives every representable result
+  const logLoss = Math.log(options.k) + options.alpha * Math.log(f) + options.beta * Math.log(b);
+  const loss = Math.exp(logLoss);
+  if (loss === Infinity) {
+    throw new InputError(where, "frequency", f, "Hz", `a frequency for which (with peakFluxDensity ${b} T) the loss density k·f^α·B^β, e^${logLoss.toPrecision(4)} W/m³, lies within the double-precision range`);
+  }
+  return loss;
 }
 
 /**

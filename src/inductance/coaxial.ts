@@ -430,9 +430,10 @@ export function couplingCoefficient(mutual: number, selfInductance1: number, sel
   const m = requireFinite(where, "mutual", mutual, "H");
   const l1 = requirePositive(where, "selfInductance1", selfInductance1, "H");
   const l2 = requirePositive(where, "selfInductance2", selfInductance2, "H");
-  const k = m / Math.sqrt(l1 * l2);
+  // √L1·√L2 rather than √(L1·L2): the product may leave the double range
+  const k = m / Math.sqrt(l1) / Math.sqrt(l2);
   if (Math.abs(k) > 1 + 1e-12) {
-    throw new InputError(where, "mutual", m, "H", `at most √(selfInductance1·selfInductance2) = ${Math.sqrt(l1 * l2)} in magnitude`);
+    throw new InputError(where, "mutual", m, "H", `at most √(selfInductance1·selfInductance2) = ${Math.sqrt(l1) * Math.sqrt(l2)} in magnitude`);
   }
   return Math.max(-1, Math.min(1, k));
 }

@@ -147,7 +147,8 @@ export function loopMutualInductance(options: LoopMutualInductanceOptions): numb
       a > 0 && a < Infinity && b > 0 && b < Infinity && z >= 0 && z < Infinity && (a !== b || z !== 0) &&
       loopFieldsKnown(options)
     ) {
-      return MU_0 * maxwellOverMu0(a, b, z);
+      const m = MU_0 * maxwellOverMu0(a, b, z);
+      if (m > 0 && m < Infinity) return m; // else: extreme scales, handled by the scaled path
     }
   }
   return loopMutualInductanceChecked(options);
@@ -172,5 +173,24 @@ function loopMutualInductanceChecked(options: LoopMutualInductanceOptions): numb
   if (a === b && z === 0) {
     throw new InputError(where, "axialDistance", z, "", "> 0 m when radius1 equals radius2 (coinciding filaments have infinite mutual inductance)");
   }
-  return MU_0 * maxwellOverMu0(a, b, z);
+  const direct = MU_0 * maxwellOverMu0(a, b, z);
+  if (direct > 0 && direct < Infinity) return direct;
+  // Extreme scales: M is homogeneous of degree 1 in the lengths, so evaluate it on the geometry
+  // divided by the largest length S and put S back in logarithms. When the smaller radius
+  // underflows after the division, k² < 1e-300 and the far-field term
+  // M = µ0 π a² b² / (2 (a² + b² + z²)^{3/2}) is exact to rounding (DLMF 15.8.13's series).
+  const scale = Math.max(a, b, z);
+  const as = a / scale;
+  const bs = b / scale;
+  const zs = z / scale;
+  const kernel = as > 0 && bs > 0 ? maxwellOverMu0(as, bs, zs) : 0;
+  const logM =
+    kernel > 0 && kernel < Infinity
+      ? Math.log(MU_0 * kernel) + Math.log(scale)
+      : Math.log((MU_0 * Math.PI) / 2) + 2 * Math.log(a) + 2 * Math.log(b) - 1.5 * (2 * Math.log(scale) + Math.log(as * as + bs * bs + zs * zs));
+  const m = Math.exp(logM);
+  if (!(m > 0 && m < Infinity)) {
+    throw new InputError(where, "radius1", a, "m", `a radius for which (with radius2 ${b} m and axialDistance ${z} m) the mutual inductance, e^${logM.toPrecision(4)} H, lies within the double-precision range`);
+  }
+  return m;
 }

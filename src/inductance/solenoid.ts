@@ -114,7 +114,9 @@ export function solenoidInductance(options: SolenoidInductanceOptions): number {
     if (typeof a === "number" && typeof l === "number" && typeof n === "number" && a > 0 && l > 0 && n >= 1 && a * l * n < Infinity && solenoidFieldsKnown(options)) {
       const x = (2 * a) / l;
       // mu0 N^2 a (pi x / 2) K_N, Nagaoka's two pieces called directly (one inlining level less)
-      return MU_0_HALF_PI * n * n * a * x * (x < 1.4919 ? nagaokaLong(x) : nagaokaShort(x));
+      const value = MU_0_HALF_PI * n * n * a * x * (x < 1.4919 ? nagaokaLong(x) : nagaokaShort(x));
+      if (value > 0 && value < Infinity) return value; // else: extreme scales, the checked path
+
     }
   }
   return solenoidInductanceChecked(options);
@@ -141,7 +143,18 @@ function solenoidInductanceChecked(options: SolenoidInductanceOptions): number {
   const n = requireTurns(where, "turns", options.turns);
   const x = (2 * a) / l;
   // mu0 pi a^2 N^2 K_N / l = mu0 N^2 a (pi x / 2) K_N (no overflow of a^2/l for very short coils)
-  const sheet = MU_0_HALF_PI * n * n * a * x * nagaokaKernel(x);
+  let sheet = MU_0_HALF_PI * n * n * a * x * nagaokaKernel(x);
+  if (!(sheet > 0 && sheet < Infinity)) {
+    // a factor left the double range: the same product in logarithms; for x = 2a/l beyond the
+    // double range, x·K(x) = (2/π)(ln 4x − 1/2) (thin band, Rosa & Grover 1916) to rounding
+    const logX = Math.log(2) + Math.log(a) - Math.log(l);
+    const logXK = x < Infinity ? logX + Math.log(nagaokaKernel(x)) : Math.log((2 / Math.PI) * (Math.log(4) + logX - 0.5));
+    const logSheet = Math.log(MU_0_HALF_PI) + 2 * Math.log(n) + Math.log(a) + logXK;
+    sheet = Math.exp(logSheet);
+    if (!(sheet > 0 && sheet < Infinity)) {
+      throw new InputError(where, "turns", n, "", `a count for which (with radius ${a} m and length ${l} m) the inductance, e^${logSheet.toPrecision(4)} H, lies within the double-precision range`);
+    }
+  }
   const d = options.wireDiameter;
   if (d === undefined) return sheet;
   const wire = requirePositive(where, "wireDiameter", d, "m");

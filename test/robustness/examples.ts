@@ -477,11 +477,19 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   logSpacedFrequencies: { args: () => [10, 1000, 3] },
   parallelTank: {
     args: () => [{ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }],
-    nonFinite: { parallelResistance: "null when no parallel resistance was given (documented)" },
+    nonFinite: {
+      parallelResistance: "null when no parallel resistance was given (documented)",
+      zeroPhaseFrequency: "null when the coil Q ≤ 1: no zero-phase point (documented)",
+      maxImpedanceFrequency: "null when the impedance has no peak (documented)",
+      maxImpedance: "null when the impedance has no peak (documented)",
+    },
   },
   seriesInverter: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, switchingFrequency: 38e3 }] },
   frequencyForPower: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, power: 2000 }] },
-  seriesTank: { args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }] },
+  seriesTank: {
+    args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }],
+    nonFinite: { dampedFrequency: "null when Q ≤ 1/2: an over-damped tank does not ring (documented)" },
+  },
   tankStresses: { args: () => [SERIES_TANK, { frequency: SERIES_TANK.undampedFrequency, voltageRms: 10 }] },
   tankToleranceAnalysis: {
     // the @example uses 20000 samples; 2000 keep the suite quick and exercise the same code
