@@ -374,11 +374,11 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
     panel(a, b);
     a = b;
   }
-  // the air-core integrand decays only as α⁻³ (thin windings): sum it further, one oscillation
-  // per panel, before its tail
+  // the air-core integrand decays only as α⁻³ (thin windings): sum it further before its tail
   const aAir = AIR_CORE_REACH * aMax;
   while (a < aAir) {
-    const b = Math.min(a + Math.PI / r2, aAir);
+    // two oscillation periods per 12-point panel: smooth enough there (checked against the fixture)
+    const b = Math.min(a + (4 * Math.PI) / r2, aAir);
     panel(a, b, true);
     a = b;
   }
