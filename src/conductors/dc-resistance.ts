@@ -3,9 +3,15 @@
  *
  * @packageDocumentation
  */
-import { requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { resistivityAt } from "../materials/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const DC_AT_FIELDS: readonly string[] = Object.freeze(["material", "temperature", "length", "diameter"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const DC_FIELDS: readonly string[] = Object.freeze(["resistivity", "length", "diameter"]);
 
 /** Options of {@link wireDcResistance}. @category Conductors */
 export interface WireDcResistanceOptions {
@@ -43,6 +49,7 @@ export interface WireDcResistanceOptions {
  */
 export function wireDcResistance(options: WireDcResistanceOptions): number {
   requireObject("wireDcResistance", "options", options);
+  requireKnownKeys("wireDcResistance", "", options, DC_FIELDS);
   const resistivity = requirePositive("wireDcResistance", "resistivity", options.resistivity, "Ω·m");
   const length = requirePositive("wireDcResistance", "length", options.length, "m");
   const diameter = requirePositive("wireDcResistance", "diameter", options.diameter, "m");
@@ -85,6 +92,7 @@ export interface WireDcResistanceAtOptions {
  */
 export function wireDcResistanceAt(options: WireDcResistanceAtOptions): number {
   requireObject("wireDcResistanceAt", "options", options);
+  requireKnownKeys("wireDcResistanceAt", "", options, DC_AT_FIELDS);
   const material = requireObject("wireDcResistanceAt", "material", options.material) as unknown as ConductiveMaterial;
   const temperature = requirePositive("wireDcResistanceAt", "temperature", options.temperature, "K");
   const length = requirePositive("wireDcResistanceAt", "length", options.length, "m");

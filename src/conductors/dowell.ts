@@ -3,7 +3,10 @@
  *
  * @packageDocumentation
  */
-import { requireInteger, requireObject, requirePositive } from "../core/index.js";
+import { requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const DOWELL_FIELDS: readonly string[] = Object.freeze(["penetrationRatio", "layers"]);
 
 /** Options of {@link dowellFactor}. @category Conductors */
 export interface DowellFactorOptions {
@@ -62,6 +65,10 @@ export interface DowellFactorOptions {
  */
 export function dowellFactor(options: DowellFactorOptions): number {
   requireObject("dowellFactor", "options", options);
+  for (const key in options) {
+    // constant-name comparisons: a few ns on this hot path
+    if (key !== "penetrationRatio" && key !== "layers") requireKnownKeys("dowellFactor", "", options, DOWELL_FIELDS);
+  }
   const delta = options.penetrationRatio;
   const layers = options.layers;
   if (typeof delta !== "number" || !(delta > 0) || delta === Infinity) {

@@ -4,8 +4,14 @@
  *
  * @packageDocumentation
  */
-import { requireInteger, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const OPTIMAL_FIELDS: readonly string[] = Object.freeze(["strandDiameter", "turns", "windowBreadth", "frequency", "resistivity", "fieldFactor", "maxStrands"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LITZ_WINDING_FIELDS: readonly string[] = Object.freeze(["strands", "strandDiameter", "turns", "windowBreadth", "frequency", "resistivity", "fieldFactor"]);
 
 /** Options of {@link litzWindingAcRatio}. @category Conductors */
 export interface LitzWindingAcRatioOptions {
@@ -78,6 +84,7 @@ function sullivanCoefficient(turns: number, breadth: number, frequency: number, 
 export function litzWindingAcRatio(options: LitzWindingAcRatioOptions): number {
   const where = "litzWindingAcRatio";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LITZ_WINDING_FIELDS);
   const strands = requireInteger(where, "strands", options.strands, 1);
   const d = requirePositive(where, "strandDiameter", options.strandDiameter, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);
@@ -88,6 +95,9 @@ export function litzWindingAcRatio(options: LitzWindingAcRatioOptions): number {
   const d3 = d * d * d;
   return 1 + sullivanCoefficient(turns, breadth, frequency, resistivity, k) * strands * strands * d3 * d3;
 }
+
+/** Densest packing of equal circles (hexagonal), π/(2√3): the most copper a bundle's square holds. */
+const HEX_PACKING = Math.PI / (2 * Math.sqrt(3));
 
 /** Options of {@link optimalLitzStrandCount}. @category Conductors */
 export interface OptimalLitzStrandCountOptions {
@@ -119,7 +129,10 @@ export interface OptimalLitzStrandCountOptions {
  *
  * The result is the better of the two neighbouring integers (at least 1), capped at
  * `maxStrands` when more would not fit the window (then the cap is the optimum, since the
- * loss falls monotonically below $n_\mathrm{opt}$).
+ * loss falls monotonically below $n_\mathrm{opt}$). It is always capped at the most strands a
+ * bundle no wider than the window can hold, $\lfloor \tfrac{\pi}{2\sqrt3}(b/d_s)^2 \rfloor$
+ * (hexagonal packing): at low frequency $n_\mathrm{opt}$ grows without bound (7.6·10⁷ strands
+ * of 0.1 mm at 50 Hz), which no window holds. The result is an exactly representable integer.
  *
  * Hard domain (throws {@link InputError}): as {@link litzWindingAcRatio}; maxStrands an
  * integer ≥ 1. Validity: that of {@link litzWindingAcRatio} (d_s < δ), and a winding whose
@@ -144,17 +157,28 @@ export interface OptimalLitzStrandCountOptions {
 export function optimalLitzStrandCount(options: OptimalLitzStrandCountOptions): number {
   const where = "optimalLitzStrandCount";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, OPTIMAL_FIELDS);
   const d = requirePositive(where, "strandDiameter", options.strandDiameter, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);
   const breadth = requirePositive(where, "windowBreadth", options.windowBreadth, "m");
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const k = options.fieldFactor === undefined ? 1 : requirePositive(where, "fieldFactor", options.fieldFactor, "");
-  const cap = options.maxStrands === undefined ? Infinity : requireInteger(where, "maxStrands", options.maxStrands, 1);
+  const userCap = options.maxStrands === undefined ? Infinity : requireInteger(where, "maxStrands", options.maxStrands, 1);
+  // a turn is no wider than the window: hexagonally packed strands of diameter d fill at most
+  // π/(2√3) of the bundle's square, so at most floor(π/(2√3) (b/d)²) strands fit the breadth
+  const fit = Math.floor(HEX_PACKING * (breadth / d) * (breadth / d));
+  if (!(fit >= 1)) throw new InputError(where, "strandDiameter", d, "m", `at most ${(breadth * Math.sqrt(HEX_PACKING)).toPrecision(4)} (windowBreadth × √(π/(2√3))), so that one strand fits the window`);
+  if (fit > Number.MAX_SAFE_INTEGER && userCap === Infinity) {
+    throw new InputError(where, "windowBreadth", breadth, "m", `at most ${(d * Math.sqrt(Number.MAX_SAFE_INTEGER / HEX_PACKING)).toPrecision(3)} for this strand diameter (otherwise the count is not exactly representable; give maxStrands)`);
+  }
+  const cap = Math.min(userCap, fit);
+  // continuous optimum 1/(d³ √K), in logarithms so that neither d⁶ underflows nor the count overflows
+  const logContinuous = -3 * Math.log(d) - 0.5 * Math.log(sullivanCoefficient(turns, breadth, frequency, resistivity, k));
+  if (logContinuous >= Math.log(cap)) return cap;
+  const continuous = Math.exp(logContinuous);
   const d3 = d * d * d;
   const c = sullivanCoefficient(turns, breadth, frequency, resistivity, k) * d3 * d3; // Fr = 1 + c n²
-  const continuous = 1 / Math.sqrt(c);
-  if (continuous >= cap) return cap;
   const lo = Math.max(1, Math.floor(continuous));
   const hi = Math.min(cap, lo + 1);
   const loss = (n: number): number => (1 + c * n * n) / n;

@@ -4,9 +4,18 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireInRange, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { wireProximityFactorKernel, wireSkinFactorKernel } from "./round-wire-kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LITZ_AC_FIELDS: readonly string[] = Object.freeze(["construction", "frequency", "resistivity", "turns", "windowBreadth", "fieldFactor"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LITZ_DC_FIELDS: readonly string[] = Object.freeze(["construction", "resistivity", "length"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LITZ_FIELDS: readonly string[] = Object.freeze(["strands", "strandDiameter", "strandOuterDiameter", "bundleLevels", "packingFactor", "twistPitch", "servingThickness"]);
 
 /**
  * How a litz conductor is built. Lengths in metres.
@@ -72,6 +81,7 @@ const HEX_PACKING = Math.PI / (2 * Math.sqrt(3));
 
 function checkLitz(where: string, value: unknown): CheckedLitz {
   const c = requireObject(where, "construction", value);
+  requireKnownKeys(where, "construction", c, LITZ_FIELDS);
   const strands = requireInteger(where, "construction.strands", c.strands, 1);
   const strandDiameter = requirePositive(where, "construction.strandDiameter", c.strandDiameter, "m");
   let strandOuterDiameter = strandDiameter;
@@ -191,6 +201,7 @@ export interface LitzDcResistanceOptions {
 export function litzDcResistance(options: LitzDcResistanceOptions): number {
   const where = "litzDcResistance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LITZ_DC_FIELDS);
   const c = checkLitz(where, options.construction);
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const length = requirePositive(where, "length", options.length, "m");
@@ -265,6 +276,7 @@ export interface LitzAcRatioOptions {
 export function litzAcRatio(options: LitzAcRatioOptions): number {
   const where = "litzAcRatio";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LITZ_AC_FIELDS);
   const c = checkLitz(where, options.construction);
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");

@@ -4,9 +4,12 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const WINDING_FIELDS: readonly string[] = Object.freeze(["wireDiameter", "frequency", "resistivity", "layers", "turnsPerLayer", "windingWidth"]);
 
 /** (π/4)^{3/4}: the equal-area square's side and porosity folded into one factor. */
 const EQUIVALENT_FOIL_FACTOR = Math.pow(Math.PI / 4, 0.75);
@@ -46,6 +49,7 @@ export interface CheckedWinding {
  */
 export function checkWinding(where: string, options: RoundWireWindingOptions): CheckedWinding {
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, WINDING_FIELDS);
   const diameter = requirePositive(where, "wireDiameter", options.wireDiameter, "m");
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");

@@ -3,9 +3,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireArrayLike, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { wireSkinFactorKernel } from "./round-wire-kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const AC_RATIO_FIELDS: readonly string[] = Object.freeze(["diameter", "frequency", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SWEEP_FIELDS: readonly string[] = Object.freeze(["diameter", "frequencies", "resistivity", "relativePermeability"]);
 
 /** Options of {@link roundWireAcRatio}. @category Conductors */
 export interface RoundWireAcRatioOptions {
@@ -56,6 +62,12 @@ export interface RoundWireAcRatioOptions {
  */
 export function roundWireAcRatio(options: RoundWireAcRatioOptions): number {
   requireObject("roundWireAcRatio", "options", options);
+  for (const key in options) {
+    // constant-name comparisons: a few ns on this hot path
+    if (key !== "diameter" && key !== "frequency" && key !== "resistivity" && key !== "relativePermeability") {
+      requireKnownKeys("roundWireAcRatio", "", options, AC_RATIO_FIELDS);
+    }
+  }
   const diameter = requirePositive("roundWireAcRatio", "diameter", options.diameter, "m");
   const frequency = requirePositive("roundWireAcRatio", "frequency", options.frequency, "Hz");
   const resistivity = requirePositive("roundWireAcRatio", "resistivity", options.resistivity, "Ω·m");
@@ -101,14 +113,12 @@ export interface RoundWireAcRatioSweepOptions {
 export function roundWireAcRatioSweep(options: RoundWireAcRatioSweepOptions, out?: Float64Array): Float64Array {
   const where = "roundWireAcRatioSweep";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SWEEP_FIELDS);
   const diameter = requirePositive(where, "diameter", options.diameter, "m");
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const mur = options.relativePermeability === undefined ? 1 : requirePositive(where, "relativePermeability", options.relativePermeability, "");
   const frequencies = options.frequencies;
-  if (typeof frequencies !== "object" || frequencies === null || typeof frequencies.length !== "number") {
-    throw new InputError(where, "frequencies", frequencies, "Hz", "an array of frequencies");
-  }
-  const n = frequencies.length;
+  const n = requireArrayLike(where, "frequencies", frequencies, "Hz").length;
   const result = out ?? new Float64Array(n);
   if (result.length < n) throw new InputError(where, "out", result, "", `a Float64Array of length ≥ ${n}`);
   const scale = diameter * Math.sqrt((Math.PI * MU_0 * mur) / (2 * resistivity));

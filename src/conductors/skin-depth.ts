@@ -3,8 +3,11 @@
  *
  * @packageDocumentation
  */
-import { requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SKIN_DEPTH_FIELDS: readonly string[] = Object.freeze(["resistivity", "frequency", "relativePermeability"]);
 
 /** Options of {@link skinDepth}. @category Conductors */
 export interface SkinDepthOptions {
@@ -48,6 +51,7 @@ export interface SkinDepthOptions {
  */
 export function skinDepth(options: SkinDepthOptions): number {
   requireObject("skinDepth", "options", options);
+  requireKnownKeys("skinDepth", "", options, SKIN_DEPTH_FIELDS);
   const resistivity = requirePositive("skinDepth", "resistivity", options.resistivity, "Ω·m");
   const frequency = requirePositive("skinDepth", "frequency", options.frequency, "Hz");
   const mur =

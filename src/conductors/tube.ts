@@ -3,11 +3,14 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { kelvinFunctionsScaled } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
 import { wireSkinFactorKernel } from "./round-wire-kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TUBE_FIELDS: readonly string[] = Object.freeze(["outerDiameter", "wallThickness", "frequency", "resistivity", "relativePermeability"]);
 
 /** Options of {@link tubeAcResistance}. @category Conductors */
 export interface TubeAcResistanceOptions {
@@ -73,6 +76,7 @@ export interface TubeAcResistanceOptions {
 export function tubeAcResistance(options: TubeAcResistanceOptions): number {
   const where = "tubeAcResistance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TUBE_FIELDS);
   const outerDiameter = requirePositive(where, "outerDiameter", options.outerDiameter, "m");
   const wall = requirePositive(where, "wallThickness", options.wallThickness, "m");
   const frequency = requirePositive(where, "frequency", options.frequency, "Hz");

@@ -4,12 +4,18 @@
  *
  * @packageDocumentation
  */
-import { requireObject, type ValidityNote } from "../core/index.js";
+import { requireKnownKeys, requireObject, type ValidityNote } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import type { RoundWireWindingOptions } from "./round-wire-winding.js";
 import type { LitzWindingAcRatioOptions } from "./litz-sullivan.js";
 import { roundWireWindingAcRatio } from "./round-wire-winding.js";
 import { litzWindingAcRatio } from "./litz-sullivan.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LITZ_WINDING_FIELDS: readonly string[] = Object.freeze(["strands", "strandDiameter", "turns", "windowBreadth", "frequency", "resistivity", "fieldFactor"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const WINDING_FIELDS: readonly string[] = Object.freeze(["wireDiameter", "frequency", "resistivity", "layers", "turnsPerLayer", "windingWidth"]);
 
 function skin(resistivity: number, frequency: number): number {
   return Math.sqrt(resistivity / (Math.PI * frequency * MU_0));
@@ -43,6 +49,7 @@ function skin(resistivity: number, frequency: number): number {
  */
 export function roundWireWindingValidity(options: RoundWireWindingOptions): ValidityNote[] {
   requireObject("roundWireWindingValidity", "options", options);
+  requireKnownKeys("roundWireWindingValidity", "", options, WINDING_FIELDS);
   roundWireWindingAcRatio(options); // validates the inputs
   const notes: ValidityNote[] = [];
   const ratio = options.wireDiameter / skin(options.resistivity, options.frequency);
@@ -92,6 +99,7 @@ export function roundWireWindingValidity(options: RoundWireWindingOptions): Vali
  */
 export function litzWindingValidity(options: LitzWindingAcRatioOptions): ValidityNote[] {
   requireObject("litzWindingValidity", "options", options);
+  requireKnownKeys("litzWindingValidity", "", options, LITZ_WINDING_FIELDS);
   litzWindingAcRatio(options); // validates the inputs
   const ratio = options.strandDiameter / skin(options.resistivity, options.frequency);
   if (ratio <= 1) return [];

@@ -3,8 +3,11 @@
  *
  * @packageDocumentation
  */
-import { requireInRange, requireInteger, requireObject, requirePositive } from "../core/index.js";
+import { requireInRange, requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const WORK_COIL_FIELDS: readonly string[] = Object.freeze(["innerDiameter", "coilLength", "turns", "spaceFactor", "frequency", "resistivity"]);
 
 /** Options of {@link workCoilResistanceCurrentSheet}. @category Conductors */
 export interface WorkCoilResistanceOptions {
@@ -69,6 +72,7 @@ export interface WorkCoilResistanceOptions {
 export function workCoilResistanceCurrentSheet(options: WorkCoilResistanceOptions): number {
   const where = "workCoilResistanceCurrentSheet";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, WORK_COIL_FIELDS);
   const diameter = requirePositive(where, "innerDiameter", options.innerDiameter, "m");
   const length = requirePositive(where, "coilLength", options.coilLength, "m");
   const turns = requireInteger(where, "turns", options.turns, 1);

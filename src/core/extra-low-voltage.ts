@@ -7,7 +7,10 @@
 import { DEFER_TO_CODES } from "./caution.js";
 import type { Caution } from "./caution.js";
 import { InputError } from "./input-error.js";
-import { requireFinite, requireObject, requireOneOf } from "./validate.js";
+import { requireFinite, requireObject, requireOneOf, requireKnownKeys } from "./validate.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const VOLTAGE_CAUTION_FIELDS: readonly string[] = Object.freeze(["voltage", "waveform", "location"]);
 
 /**
  * Extra-low-voltage limits of IEC 61140 [V]: 50 V AC (RMS) and 120 V ripple-free DC.
@@ -68,6 +71,7 @@ export interface VoltageCautionOptions {
 export function voltageCaution(options: VoltageCautionOptions): Caution | null {
   const where = "voltageCaution";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, VOLTAGE_CAUTION_FIELDS);
   const v = Math.abs(requireFinite(where, "voltage", options.voltage, "V"));
   const waveform = requireOneOf(where, "waveform", options.waveform, ["ac", "dc"] as const);
   const location = optionalText(where, "location", options.location, "circuit");

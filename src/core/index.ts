@@ -15,6 +15,8 @@ export {
   requireObject,
   requireKnownKeys,
   nearestName,
+  requireArrayLike,
+  MAX_ARRAY_LENGTH,
 } from "./validate.js";
 export { DEFER_TO_CODES } from "./caution.js";
 export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "./extra-low-voltage.js";

@@ -278,3 +278,39 @@ export function requireKnownKeys<T extends object>(where: string, path: string, 
   }
   return value;
 }
+
+/**
+ * Most points a sweep, sampled waveform or other array result may have (10⁷: 80 MB per
+ * `Float64Array`). Longer requests are refused with an {@link InputError} instead of failing
+ * inside the engine with a plain `RangeError` or exhausting memory.
+ *
+ * @category Validation
+ */
+export const MAX_ARRAY_LENGTH = 10_000_000;
+
+/**
+ * Requires an array-like whose `length` is an integer between 0 (or `min`) and
+ * {@link MAX_ARRAY_LENGTH}, e.g. the frequencies of a sweep.
+ *
+ * @param where - the public function doing the check
+ * @param parameter - the parameter name or field path
+ * @param value - the value to check
+ * @param unit - the unit of its elements, `""` for dimensionless
+ * @param min - the fewest elements allowed (default 0)
+ * @returns the value, typed as an array-like of unknowns
+ * @throws {@link InputError} when the value is not an object with such a length
+ * @example
+ * ```ts
+ * import { requireArrayLike } from "fluxwright";
+ * console.log(requireArrayLike("demo", "frequencies", [1e3, 2e3], "Hz").length); // 2
+ * ```
+ * @category Validation
+ */
+export function requireArrayLike(where: string, parameter: string, value: unknown, unit: string, min = 0): ArrayLike<unknown> {
+  if (typeof value !== "object" || value === null) throw new InputError(where, parameter, value, unit, "an array");
+  const length = (value as { length?: unknown }).length;
+  if (typeof length !== "number" || !Number.isInteger(length) || length < min || length > MAX_ARRAY_LENGTH) {
+    throw new InputError(where, `${parameter}.length`, length, "", `an integer between ${min} and ${MAX_ARRAY_LENGTH}`);
+  }
+  return value as ArrayLike<unknown>;
+}

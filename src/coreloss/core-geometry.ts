@@ -3,7 +3,16 @@
  *
  * @packageDocumentation
  */
-import { requireObject, requirePositive, requireNonNegative, InputError } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LOSS_POWER_FIELDS: readonly string[] = Object.freeze(["lossDensity", "effectiveVolume"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ROD_FIELDS: readonly string[] = Object.freeze(["diameter", "length"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TOROID_FIELDS: readonly string[] = Object.freeze(["innerDiameter", "outerDiameter", "height"]);
 
 /**
  * Effective dimensions of a core: the cross-section, path length and volume of the
@@ -62,6 +71,7 @@ export interface ToroidCoreOptions {
 export function toroidCoreGeometry(options: ToroidCoreOptions): CoreGeometry {
   const where = "toroidCoreGeometry";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TOROID_FIELDS);
   const d1 = requirePositive(where, "innerDiameter", options.innerDiameter, "m");
   const d2 = requirePositive(where, "outerDiameter", options.outerDiameter, "m");
   const h = requirePositive(where, "height", options.height, "m");
@@ -114,6 +124,7 @@ export interface RodCoreOptions {
 export function rodCoreGeometry(options: RodCoreOptions): CoreGeometry {
   const where = "rodCoreGeometry";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, ROD_FIELDS);
   const d = requirePositive(where, "diameter", options.diameter, "m");
   const l = requirePositive(where, "length", options.length, "m");
   const area = (Math.PI * d * d) / 4;
@@ -156,6 +167,7 @@ export interface CoreLossPowerOptions {
 export function coreLossPower(options: CoreLossPowerOptions): number {
   const where = "coreLossPower";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LOSS_POWER_FIELDS);
   const p = requireNonNegative(where, "lossDensity", options.lossDensity, "W/m³");
   const v = requirePositive(where, "effectiveVolume", options.effectiveVolume, "m³");
   return p * v;

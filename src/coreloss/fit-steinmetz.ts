@@ -4,10 +4,16 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { SteinmetzTemperatureTerm } from "../materials/index.js";
 import { leastSquaresQr } from "./numeric.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const POINT_FIELDS: readonly string[] = Object.freeze(["frequency", "peakFluxDensity", "lossDensity", "temperature"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const FIT_FIELDS: readonly string[] = Object.freeze(["referenceTemperature"]);
 
 /**
  * One measured (or datasheet) loss point for {@link fitSteinmetz}.
@@ -102,6 +108,7 @@ const WHERE = "fitSteinmetz";
 export function fitSteinmetz(points: readonly SteinmetzDataPoint[], options: FitSteinmetzOptions = {}): SteinmetzFit {
   if (!Array.isArray(points)) throw new InputError(WHERE, "points", points, "", "an array of { frequency, peakFluxDensity, lossDensity } points");
   requireObject(WHERE, "options", options);
+  requireKnownKeys(WHERE, "options", options, FIT_FIELDS);
   const n = points.length;
   if (n < 3) throw new InputError(WHERE, "points.length", n, "", "at least 3");
   const lf = new Float64Array(n);
@@ -111,6 +118,7 @@ export function fitSteinmetz(points: readonly SteinmetzDataPoint[], options: Fit
   let withT = 0;
   for (let i = 0; i < n; i++) {
     const p = requireObject(WHERE, `points[${i}]`, points[i]);
+    requireKnownKeys(WHERE, `points[${i}]`, p, POINT_FIELDS);
     lf[i] = Math.log(requirePositive(WHERE, `points[${i}].frequency`, p.frequency, "Hz"));
     lb[i] = Math.log(requirePositive(WHERE, `points[${i}].peakFluxDensity`, p.peakFluxDensity, "T"));
     lp[i] = Math.log(requirePositive(WHERE, `points[${i}].lossDensity`, p.lossDensity, "W/m³"));

@@ -4,11 +4,17 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { SteinmetzCoefficients } from "../materials/index.js";
 import { logGamma } from "./numeric.js";
 import { checkSteinmetzCoefficients } from "./steinmetz.js";
 import type { FluxPoint, FluxSamples } from "./waveform-types.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const IGSE_FIELDS: readonly string[] = Object.freeze(["period", "flux", "k", "alpha", "beta"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const COEFFICIENT_FIELDS: readonly string[] = Object.freeze(["k", "alpha", "beta"]);
 
 /** ln(2π). */
 const LN_2PI = Math.log(2 * Math.PI);
@@ -57,6 +63,7 @@ function igseCoefficientUnchecked(k: number, alpha: number, beta: number): numbe
  */
 export function igseCoefficient(coefficients: SteinmetzCoefficients): number {
   requireObject("igseCoefficient", "coefficients", coefficients);
+  requireKnownKeys("igseCoefficient", "coefficients", coefficients, COEFFICIENT_FIELDS);
   checkSteinmetzCoefficients("igseCoefficient", coefficients);
   return igseCoefficientUnchecked(coefficients.k, coefficients.alpha, coefficients.beta);
 }
@@ -124,6 +131,12 @@ const WHERE = "igseLoss";
  */
 export function igseLoss(options: IgseLossOptions): number {
   requireObject(WHERE, "options", options);
+  for (const key in options) {
+    // constant-name comparisons: a few ns on this hot path
+    if (key !== "period" && key !== "flux" && key !== "k" && key !== "alpha" && key !== "beta") {
+      requireKnownKeys(WHERE, "", options, IGSE_FIELDS);
+    }
+  }
   checkSteinmetzCoefficients(WHERE, options);
   const period = requirePositive(WHERE, "period", options.period, "s");
   const flux = options.flux;
@@ -211,9 +224,14 @@ export function igseLoss(options: IgseLossOptions): number {
   const alpha = options.alpha;
   const beta = options.beta;
   // one loop: the whole waveform with ΔB = peak-to-peak
-  if (reversals <= 2) return (options.k * Math.exp(igseLogFactor(alpha, beta) + (beta - alpha) * Math.log(swing)) * sum) / period;
-  const ki = igseCoefficientUnchecked(options.k, alpha, beta);
-  return (ki * minorLoopSum(time, b, bFirst, iMax, alpha, beta)) / period;
+  const loss =
+    reversals <= 2
+      ? (options.k * Math.exp(igseLogFactor(alpha, beta) + (beta - alpha) * Math.log(swing)) * sum) / period
+      : (igseCoefficientUnchecked(options.k, alpha, beta) * minorLoopSum(time, b, bFirst, iMax, alpha, beta)) / period;
+  if (!(loss < Infinity)) {
+    throw new InputError(WHERE, "period", period, "s", "a period for which (with these flux values and coefficients) the loss density lies within the double-precision range");
+  }
+  return loss;
 }
 
 /**

@@ -3,8 +3,14 @@
  *
  * @packageDocumentation
  */
-import { requireFinite, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireFinite, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { SteinmetzCoefficients, SteinmetzTemperatureTerm } from "../materials/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TERM_FIELDS: readonly string[] = Object.freeze(["referenceTemperature", "linear", "quadratic"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STEINMETZ_FIELDS: readonly string[] = Object.freeze(["frequency", "peakFluxDensity", "k", "alpha", "beta"]);
 
 /**
  * Options of {@link steinmetzLoss}: Steinmetz coefficients (SI) and the sinusoidal operating
@@ -60,11 +66,20 @@ export function checkSteinmetzCoefficients(where: string, o: SteinmetzCoefficien
 export function steinmetzLoss(options: SteinmetzLossOptions): number {
   const where = "steinmetzLoss";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, STEINMETZ_FIELDS);
   checkSteinmetzCoefficients(where, options);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const b = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
   if (b === 0) return 0;
-  return options.k * Math.pow(f, options.alpha) * Math.pow(b, options.beta);
+  const direct = options.k * Math.pow(f, options.alpha) * Math.pow(b, options.beta);
+  if (direct > 0 && direct < Infinity) return direct;
+  // a factor left the double range: the product in logarithms gives every representable result
+  const logLoss = Math.log(options.k) + options.alpha * Math.log(f) + options.beta * Math.log(b);
+  const loss = Math.exp(logLoss);
+  if (loss === Infinity) {
+    throw new InputError(where, "frequency", f, "Hz", `a frequency for which (with peakFluxDensity ${b} T) the loss density k·f^α·B^β, e^${logLoss.toPrecision(4)} W/m³, lies within the double-precision range`);
+  }
+  return loss;
 }
 
 /**
@@ -96,6 +111,7 @@ export function steinmetzLoss(options: SteinmetzLossOptions): number {
 export function steinmetzTemperatureFactor(term: SteinmetzTemperatureTerm, temperature: number): number {
   const where = "steinmetzTemperatureFactor";
   requireObject(where, "term", term);
+  requireKnownKeys(where, "term", term, TERM_FIELDS);
   const ref = requirePositive(where, "term.referenceTemperature", term.referenceTemperature, "K");
   const c1 = requireFinite(where, "term.linear", term.linear, "1/K");
   const c2 = requireFinite(where, "term.quadratic", term.quadratic, "1/K²");

@@ -3,8 +3,17 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive, requireFinite } from "../core/index.js";
+import { InputError, requireFinite, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { FluxWaveform } from "./waveform-types.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const WAVEFORM_FIELDS: readonly string[] = Object.freeze(["time", "voltage", "turns", "coreArea"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const VOLT_SECONDS_FIELDS: readonly string[] = Object.freeze(["voltSeconds", "turns", "coreArea"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SINUSOIDAL_VOLTAGE_FIELDS: readonly string[] = Object.freeze(["voltageRms", "frequency", "turns", "coreArea"]);
 
 /**
  * Options of {@link fluxDensityFromVoltSeconds} with a volt-second product.
@@ -53,6 +62,7 @@ export interface VoltSecondsOptions {
 export function fluxDensityFromVoltSeconds(options: VoltSecondsOptions | VoltageWaveformOptions): number {
   const where = "fluxDensityFromVoltSeconds";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, "voltSeconds" in options || !("voltage" in options) ? VOLT_SECONDS_FIELDS : WAVEFORM_FIELDS);
   if (!("voltSeconds" in options) && "voltage" in options) {
     const w = fluxWaveformFromVoltage(options);
     let max = -Infinity;
@@ -112,6 +122,7 @@ export interface SinusoidalVoltageOptions {
 export function sinusoidalPeakFluxDensity(options: SinusoidalVoltageOptions): number {
   const where = "sinusoidalPeakFluxDensity";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SINUSOIDAL_VOLTAGE_FIELDS);
   const v = options.voltageRms;
   if (typeof v !== "number" || !(v >= 0) || v === Infinity) throw new InputError(where, "voltageRms", v, "V", "a finite number ≥ 0");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
@@ -167,6 +178,7 @@ export interface VoltageWaveformOptions {
 export function fluxWaveformFromVoltage(options: VoltageWaveformOptions): FluxWaveform {
   const where = "fluxWaveformFromVoltage";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, WAVEFORM_FIELDS);
   const time = options.time;
   const voltage = options.voltage;
   if (time === null || typeof time !== "object" || typeof time.length !== "number" || time.length < 2) {

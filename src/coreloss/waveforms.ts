@@ -4,8 +4,17 @@
  *
  * @packageDocumentation
  */
-import { requireFinite, requireInRange, requireInteger, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, MAX_ARRAY_LENGTH, requireFinite, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { FluxWaveform } from "./waveform-types.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TRAPEZOIDAL_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "frequency", "dutyCycle", "offset"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TRIANGULAR_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "frequency", "dutyCycle", "offset"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SINUSOIDAL_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "frequency", "samples", "offset"]);
 
 /**
  * Options of {@link sinusoidalFluxWaveform}.
@@ -52,9 +61,11 @@ export interface SinusoidalFluxOptions {
 export function sinusoidalFluxWaveform(options: SinusoidalFluxOptions): FluxWaveform {
   const where = "sinusoidalFluxWaveform";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SINUSOIDAL_FIELDS);
   const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const samples = options.samples === undefined ? 256 : requireInteger(where, "samples", options.samples, 4);
+  if (samples > MAX_ARRAY_LENGTH) throw new InputError(where, "samples", samples, "", `an integer between 4 and ${MAX_ARRAY_LENGTH}`);
   const offset = options.offset === undefined ? 0 : requireFinite(where, "offset", options.offset, "T");
   const period = 1 / f;
   const time = new Float64Array(samples + 1);
@@ -118,6 +129,7 @@ export interface TriangularFluxOptions {
 export function triangularFluxWaveform(options: TriangularFluxOptions): FluxWaveform {
   const where = "triangularFluxWaveform";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TRIANGULAR_FIELDS);
   const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const d = options.dutyCycle === undefined ? 0.5 : requireInRange(where, "dutyCycle", options.dutyCycle, "", 0, 1, "()");
@@ -179,6 +191,7 @@ export interface TrapezoidalFluxOptions {
 export function trapezoidalFluxWaveform(options: TrapezoidalFluxOptions): FluxWaveform {
   const where = "trapezoidalFluxWaveform";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TRAPEZOIDAL_FIELDS);
   const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const d = requireInRange(where, "dutyCycle", options.dutyCycle, "", 0, 1, "(]");

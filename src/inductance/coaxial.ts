@@ -4,10 +4,19 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireFinite, requireInteger, requireNonNegative, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { InputError, requireFinite, requireInteger, requireNonNegative, requireObject, requireOneOf,
+  requireKnownKeys, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { maxwellOverMu0 } from "./kernels.js";
 import { integrate, integrateAbsolute, integrateSingularAtStart } from "./quadrature.js";
+
+/** Accepted fields of each coil kind (misspelt ones are rejected, not ignored). */
+const COIL_FIELDS: Readonly<Record<"loop" | "solenoid" | "multilayer" | "spiral", readonly string[]>> = Object.freeze({
+  loop: Object.freeze(["kind", "radius", "turns"]),
+  solenoid: Object.freeze(["kind", "radius", "length", "turns"]),
+  multilayer: Object.freeze(["kind", "innerRadius", "outerRadius", "length", "turns"]),
+  spiral: Object.freeze(["kind", "innerRadius", "outerRadius", "turns"]),
+});
 
 /**
  * A single circular filament (or `turns` filaments bunched at one place), centred on the axis.
@@ -99,6 +108,7 @@ function readCoil(where: string, name: string, coil: unknown): Shape {
   requireObject(where, name, coil);
   const c = coil as Record<string, unknown>;
   const kind = requireOneOf(where, `${name}.kind`, c.kind, ["loop", "solenoid", "multilayer", "spiral"] as const);
+  requireKnownKeys(where, name, c, COIL_FIELDS[kind]);
   if (kind === "loop") {
     const r = requirePositive(where, `${name}.radius`, c.radius, "m");
     const n = c.turns === undefined ? 1 : requireTurns(where, `${name}.turns`, c.turns);
@@ -420,9 +430,10 @@ export function couplingCoefficient(mutual: number, selfInductance1: number, sel
   const m = requireFinite(where, "mutual", mutual, "H");
   const l1 = requirePositive(where, "selfInductance1", selfInductance1, "H");
   const l2 = requirePositive(where, "selfInductance2", selfInductance2, "H");
-  const k = m / Math.sqrt(l1 * l2);
+  // √L1·√L2 rather than √(L1·L2): the product may leave the double range
+  const k = m / Math.sqrt(l1) / Math.sqrt(l2);
   if (Math.abs(k) > 1 + 1e-12) {
-    throw new InputError(where, "mutual", m, "H", `at most √(selfInductance1·selfInductance2) = ${Math.sqrt(l1 * l2)} in magnitude`);
+    throw new InputError(where, "mutual", m, "H", `at most √(selfInductance1·selfInductance2) = ${Math.sqrt(l1) * Math.sqrt(l2)} in magnitude`);
   }
   return Math.max(-1, Math.min(1, k));
 }

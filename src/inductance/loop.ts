@@ -4,9 +4,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { maxwellOverMu0 } from "./kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const MUTUAL_FIELDS: readonly string[] = Object.freeze(["radius1", "radius2", "axialDistance"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LOOP_FIELDS: readonly string[] = Object.freeze(["loopRadius", "wireRadius", "currentDistribution"]);
 
 /**
  * How the current is spread over the wire's cross-section: `"uniform"` (direct current and low
@@ -74,6 +80,7 @@ export function loopSelf(a: number, rho: number, surface: boolean): number {
 export function loopInductance(options: LoopInductanceOptions): number {
   const where = "loopInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, LOOP_FIELDS);
   const a = requirePositive(where, "loopRadius", options.loopRadius, "m");
   const rho = requirePositive(where, "wireRadius", options.wireRadius, "m");
   if (!(rho < a)) throw new InputError(where, "wireRadius", rho, "m", `less than loopRadius (${a})`);
@@ -137,23 +144,53 @@ export function loopMutualInductance(options: LoopMutualInductanceOptions): numb
     const z = options.axialDistance;
     if (
       typeof a === "number" && typeof b === "number" && typeof z === "number" &&
-      a > 0 && a < Infinity && b > 0 && b < Infinity && z >= 0 && z < Infinity && (a !== b || z !== 0)
+      a > 0 && a < Infinity && b > 0 && b < Infinity && z >= 0 && z < Infinity && (a !== b || z !== 0) &&
+      loopFieldsKnown(options)
     ) {
-      return MU_0 * maxwellOverMu0(a, b, z);
+      const m = MU_0 * maxwellOverMu0(a, b, z);
+      if (m > 0 && m < Infinity) return m; // else: extreme scales, handled by the scaled path
     }
   }
   return loopMutualInductanceChecked(options);
+}
+
+/** True when every field is a known one (constant-name comparisons: a few ns on this hot path). */
+function loopFieldsKnown(options: object): boolean {
+  for (const key in options) {
+    if (key !== "radius1" && key !== "radius2" && key !== "axialDistance") return false;
+  }
+  return true;
 }
 
 /** The validating path of {@link loopMutualInductance}. */
 function loopMutualInductanceChecked(options: LoopMutualInductanceOptions): number {
   const where = "loopMutualInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, MUTUAL_FIELDS);
   const a = requirePositive(where, "radius1", options.radius1, "m");
   const b = requirePositive(where, "radius2", options.radius2, "m");
   const z = requireNonNegative(where, "axialDistance", options.axialDistance, "m");
   if (a === b && z === 0) {
     throw new InputError(where, "axialDistance", z, "", "> 0 m when radius1 equals radius2 (coinciding filaments have infinite mutual inductance)");
   }
-  return MU_0 * maxwellOverMu0(a, b, z);
+  const direct = MU_0 * maxwellOverMu0(a, b, z);
+  if (direct > 0 && direct < Infinity) return direct;
+  // Extreme scales: M is homogeneous of degree 1 in the lengths, so evaluate it on the geometry
+  // divided by the largest length S and put S back in logarithms. When the smaller radius
+  // underflows after the division, k² < 1e-300 and the far-field term
+  // M = µ0 π a² b² / (2 (a² + b² + z²)^{3/2}) is exact to rounding (DLMF 15.8.13's series).
+  const scale = Math.max(a, b, z);
+  const as = a / scale;
+  const bs = b / scale;
+  const zs = z / scale;
+  const kernel = as > 0 && bs > 0 ? maxwellOverMu0(as, bs, zs) : 0;
+  const logM =
+    kernel > 0 && kernel < Infinity
+      ? Math.log(MU_0 * kernel) + Math.log(scale)
+      : Math.log((MU_0 * Math.PI) / 2) + 2 * Math.log(a) + 2 * Math.log(b) - 1.5 * (2 * Math.log(scale) + Math.log(as * as + bs * bs + zs * zs));
+  const m = Math.exp(logM);
+  if (!(m > 0 && m < Infinity)) {
+    throw new InputError(where, "radius1", a, "m", `a radius for which (with radius2 ${b} m and axialDistance ${z} m) the mutual inductance, e^${logM.toPrecision(4)} H, lies within the double-precision range`);
+  }
+  return m;
 }

@@ -4,9 +4,15 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { multilayerShape, requireTurns, shapeMutual } from "./coaxial.js";
 import { MU_0_HALF_PI, nagaokaKernel } from "./kernels.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const BROOKS_FIELDS: readonly string[] = Object.freeze(["sideLength", "meanRadius", "turns"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const MULTILAYER_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "length", "turns"]);
 
 /**
  * Options of {@link multilayerCoilInductance} and {@link multilayerCoilInductanceWheeler}.
@@ -24,8 +30,12 @@ export interface MultilayerCoilOptions {
   readonly turns: number;
 }
 
+/** Smallest length/outerRadius of the exact integral (its cost grows as the inverse). */
+const MIN_LENGTH_RATIO = 1e-4;
+
 function readMultilayer(where: string, options: MultilayerCoilOptions): [number, number, number, number] {
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, MULTILAYER_FIELDS);
   const r1 = requirePositive(where, "innerRadius", options.innerRadius, "m");
   const r2 = requirePositive(where, "outerRadius", options.outerRadius, "m");
   if (!(r2 >= r1)) throw new InputError(where, "outerRadius", r2, "m", `a finite number ≥ innerRadius (${r1})`);
@@ -54,7 +64,8 @@ function readMultilayer(where: string, options: MultilayerCoilOptions): [number,
  *   or turns < 1
  * @remarks Accuracy ≤ 1e-8 relative vs the Bessel–Struve integral evaluated in mpmath (fixture
  * multilayer.json). Validity: the winding is fine compared with its section (otherwise add
- * round-wire corrections as for a solenoid). Cost: about 1–10 ms. Note: at fixed turns, L is not
+ * round-wire corrections as for a solenoid). Cost: about 1–10 ms, growing as outerRadius/length;
+ * length < 1e-4 × outerRadius is refused (InputError) to keep a call under about 0.5 s. Note: at fixed turns, L is not
  * monotonic in the outer radius — thickening a short, thick winding first lowers L as the current
  * spreads (e.g. inner 0.1 m, length 0.02 m: a minimum near outer radius 0.1647 m).
  * @see F. W. Grover, Inductance Calculations (1946), ch. 13; T. R. Lyle, Phil. Trans. R. Soc. A 213,
@@ -70,6 +81,9 @@ function readMultilayer(where: string, options: MultilayerCoilOptions): [number,
  */
 export function multilayerCoilInductance(options: MultilayerCoilOptions): number {
   const [r1, r2, l, n] = readMultilayer("multilayerCoilInductance", options);
+  if (l < MIN_LENGTH_RATIO * r2) {
+    throw new InputError("multilayerCoilInductance", "length", l, "m", `at least ${MIN_LENGTH_RATIO} × outerRadius = ${MIN_LENGTH_RATIO * r2} (the integral's cost grows as outerRadius/length; a flatter winding is a flat spiral: use spiralCoilInductance)`);
+  }
   if (r2 === r1) {
     const x = (2 * r1) / l;
     return MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x);
@@ -150,6 +164,7 @@ export interface BrooksCoilOptions {
 export function brooksCoilInductance(options: BrooksCoilOptions): number {
   const where = "brooksCoilInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, BROOKS_FIELDS);
   const hasSide = options.sideLength !== undefined;
   const hasMean = options.meanRadius !== undefined;
   if (hasSide === hasMean) {

@@ -4,12 +4,17 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { requireTurns } from "./coaxial.js";
 import { MU_0_HALF_PI, nagaokaKernel, nagaokaLong, nagaokaShort } from "./kernels.js";
 import { rosaB } from "./rosa.js";
 
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SOLENOID_FIELDS: readonly string[] = Object.freeze(["radius", "length", "turns", "wireDiameter"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const WHEELER_FIELDS: readonly string[] = Object.freeze(["radius", "length", "turns"]);
 
 /**
  * Nagaoka's coefficient: the inductance of a finite current-sheet solenoid relative to the
@@ -106,25 +111,50 @@ export function solenoidInductance(options: SolenoidInductanceOptions): number {
     const a = options.radius;
     const l = options.length;
     const n = options.turns;
-    if (typeof a === "number" && typeof l === "number" && typeof n === "number" && a > 0 && l > 0 && n >= 1 && a * l * n < Infinity) {
+    if (typeof a === "number" && typeof l === "number" && typeof n === "number" && a > 0 && l > 0 && n >= 1 && a * l * n < Infinity && solenoidFieldsKnown(options)) {
       const x = (2 * a) / l;
       // mu0 N^2 a (pi x / 2) K_N, Nagaoka's two pieces called directly (one inlining level less)
-      return MU_0_HALF_PI * n * n * a * x * (x < 1.4919 ? nagaokaLong(x) : nagaokaShort(x));
+      const value = MU_0_HALF_PI * n * n * a * x * (x < 1.4919 ? nagaokaLong(x) : nagaokaShort(x));
+      if (value > 0 && value < Infinity) return value; // else: extreme scales, the checked path
+
     }
   }
   return solenoidInductanceChecked(options);
+}
+
+/**
+ * True when every field is a known one: a for…in over the options with comparisons against
+ * constant names (a few ns; a generic list lookup costs several times more on this hot path).
+ */
+function solenoidFieldsKnown(options: object): boolean {
+  for (const key in options) {
+    if (key !== "radius" && key !== "length" && key !== "turns" && key !== "wireDiameter") return false;
+  }
+  return true;
 }
 
 /** The validating path of {@link solenoidInductance}. */
 function solenoidInductanceChecked(options: SolenoidInductanceOptions): number {
   const where = "solenoidInductance";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SOLENOID_FIELDS);
   const a = requirePositive(where, "radius", options.radius, "m");
   const l = requirePositive(where, "length", options.length, "m");
   const n = requireTurns(where, "turns", options.turns);
   const x = (2 * a) / l;
   // mu0 pi a^2 N^2 K_N / l = mu0 N^2 a (pi x / 2) K_N (no overflow of a^2/l for very short coils)
-  const sheet = MU_0_HALF_PI * n * n * a * x * nagaokaKernel(x);
+  let sheet = MU_0_HALF_PI * n * n * a * x * nagaokaKernel(x);
+  if (!(sheet > 0 && sheet < Infinity)) {
+    // a factor left the double range: the same product in logarithms; for x = 2a/l beyond the
+    // double range, x·K(x) = (2/π)(ln 4x − 1/2) (thin band, Rosa & Grover 1916) to rounding
+    const logX = Math.log(2) + Math.log(a) - Math.log(l);
+    const logXK = x < Infinity ? logX + Math.log(nagaokaKernel(x)) : Math.log((2 / Math.PI) * (Math.log(4) + logX - 0.5));
+    const logSheet = Math.log(MU_0_HALF_PI) + 2 * Math.log(n) + Math.log(a) + logXK;
+    sheet = Math.exp(logSheet);
+    if (!(sheet > 0 && sheet < Infinity)) {
+      throw new InputError(where, "turns", n, "", `a count for which (with radius ${a} m and length ${l} m) the inductance, e^${logSheet.toPrecision(4)} H, lies within the double-precision range`);
+    }
+  }
   const d = options.wireDiameter;
   if (d === undefined) return sheet;
   const wire = requirePositive(where, "wireDiameter", d, "m");
@@ -179,6 +209,7 @@ const INCH = 0.0254;
 export function solenoidInductanceWheeler(options: SolenoidInductanceWheelerOptions): number {
   const where = "solenoidInductanceWheeler";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, WHEELER_FIELDS);
   const r = requirePositive(where, "radius", options.radius, "m");
   const l = requirePositive(where, "length", options.length, "m");
   const n = requireTurns(where, "turns", options.turns);

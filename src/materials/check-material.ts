@@ -6,7 +6,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireFinite, requireInRange, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { InputError, requireFinite, requireInRange, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import type { ConductiveMaterial, TemperatureTable } from "./types.js";
 
 /**
@@ -104,4 +104,93 @@ export function checkPermeabilityModel(where: string, material: ConductiveMateri
   requirePositive(where, "material.permeability.transitionWidth", model.transitionWidth, "K");
   requireInRange(where, "material.permeability.magnetisationShape", model.magnetisationShape, "", 0, 1);
   requirePositive(where, "material.permeability.magnetisationExponent", model.magnetisationExponent, "");
+}
+
+const MATERIAL_FIELDS: readonly string[] = Object.freeze([
+  "name", "id", "resistivity20", "temperatureCoefficient", "resistivity", "density", "specificHeat20", "specificHeat",
+  "thermalConductivity", "thermalConductivityTable", "emissivity", "meltingTemperature", "temperatureRange", "magnetic",
+  "curieTemperature", "permeability", "sources",
+]);
+const TABLE_FIELDS: readonly string[] = Object.freeze(["temperatures", "values", "source"]);
+const EMISSIVITY_FIELDS: readonly string[] = Object.freeze(["min", "max", "typical", "source"]);
+const RANGE_FIELDS: readonly string[] = Object.freeze(["min", "max"]);
+const PERMEABILITY_FIELDS: readonly string[] = Object.freeze([
+  "initialRelativePermeability", "saturationFluxDensity", "transitionWidth", "magnetisationShape", "magnetisationExponent", "source",
+]);
+
+function requireText(where: string, path: string, value: unknown): string {
+  if (typeof value !== "string") throw new InputError(where, path, value, "", "a string");
+  return value;
+}
+
+function checkTable(where: string, path: string, value: unknown, unit: string): void {
+  requireKnownKeys(where, path, requireObject(where, path, value), TABLE_FIELDS);
+  checkTemperatureTable(where, path, value, unit);
+  requireText(where, `${path}.source`, (value as TemperatureTable).source);
+}
+
+/**
+ * Checks a whole conductive material set field by field (a caller's own set, e.g. one written
+ * in a study file), naming the path of the first bad field: every field of
+ * {@link ConductiveMaterial} present with its type and range, the models well formed, and no
+ * unknown fields.
+ *
+ * @param where - the public function doing the check
+ * @param path - where the material sits in the caller's input (`"part.material"`)
+ * @param value - the material set
+ * @returns the value, typed as a material
+ * @throws InputError naming `path.field` for the first bad field
+ */
+export function checkConductiveMaterial(where: string, path: string, value: unknown): ConductiveMaterial {
+  const m = requireKnownKeys(where, path, requireObject(where, path, value), MATERIAL_FIELDS);
+  requireText(where, `${path}.name`, m.name);
+  requireText(where, `${path}.id`, m.id);
+  requirePositive(where, `${path}.resistivity20`, m.resistivity20, "Ω·m");
+  requireFinite(where, `${path}.temperatureCoefficient`, m.temperatureCoefficient, "1/K");
+  const resistivity = requireObject(where, `${path}.resistivity`, m.resistivity);
+  const rKind = requireOneOf(where, `${path}.resistivity.kind`, resistivity.kind, ["linear", "table"]);
+  if (rKind === "table") {
+    requireKnownKeys(where, `${path}.resistivity`, resistivity, ["kind", "table"]);
+    checkTable(where, `${path}.resistivity.table`, resistivity.table, "Ω·m");
+  } else {
+    requireKnownKeys(where, `${path}.resistivity`, resistivity, ["kind", "source"]);
+    requireText(where, `${path}.resistivity.source`, resistivity.source);
+  }
+  requirePositive(where, `${path}.density`, m.density, "kg/m³");
+  requirePositive(where, `${path}.specificHeat20`, m.specificHeat20, "J/(kg·K)");
+  const heat = requireObject(where, `${path}.specificHeat`, m.specificHeat);
+  const hKind = requireOneOf(where, `${path}.specificHeat.kind`, heat.kind, ["table", "en1993-carbon-steel"]);
+  if (hKind === "table") {
+    requireKnownKeys(where, `${path}.specificHeat`, heat, ["kind", "table"]);
+    checkTable(where, `${path}.specificHeat.table`, heat.table, "J/(kg·K)");
+  } else {
+    requireKnownKeys(where, `${path}.specificHeat`, heat, ["kind", "source"]);
+    requireText(where, `${path}.specificHeat.source`, heat.source);
+  }
+  requirePositive(where, `${path}.thermalConductivity`, m.thermalConductivity, "W/(m·K)");
+  checkTable(where, `${path}.thermalConductivityTable`, m.thermalConductivityTable, "W/(m·K)");
+  const e = requireKnownKeys(where, `${path}.emissivity`, requireObject(where, `${path}.emissivity`, m.emissivity), EMISSIVITY_FIELDS);
+  const eMin = requireInRange(where, `${path}.emissivity.min`, e.min, "", 0, 1);
+  const eMax = requireInRange(where, `${path}.emissivity.max`, e.max, "", eMin, 1);
+  requireInRange(where, `${path}.emissivity.typical`, e.typical, "", eMin, eMax);
+  requireText(where, `${path}.emissivity.source`, e.source);
+  const range = requireKnownKeys(where, `${path}.temperatureRange`, requireObject(where, `${path}.temperatureRange`, m.temperatureRange), RANGE_FIELDS);
+  const min = requirePositive(where, `${path}.temperatureRange.min`, range.min, "K");
+  requireInRange(where, `${path}.temperatureRange.max`, range.max, "K", min, Infinity);
+  requirePositive(where, `${path}.meltingTemperature`, m.meltingTemperature, "K");
+  if (typeof m.magnetic !== "boolean") throw new InputError(where, `${path}.magnetic`, m.magnetic, "", "true or false");
+  if (m.magnetic) {
+    requirePositive(where, `${path}.curieTemperature`, m.curieTemperature, "K");
+    const p = requireKnownKeys(where, `${path}.permeability`, requireObject(where, `${path}.permeability`, m.permeability), PERMEABILITY_FIELDS);
+    requireInRange(where, `${path}.permeability.initialRelativePermeability`, p.initialRelativePermeability, "", 1, Infinity);
+    requirePositive(where, `${path}.permeability.saturationFluxDensity`, p.saturationFluxDensity, "T");
+    requirePositive(where, `${path}.permeability.transitionWidth`, p.transitionWidth, "K");
+    requireInRange(where, `${path}.permeability.magnetisationShape`, p.magnetisationShape, "", 0, 1);
+    requirePositive(where, `${path}.permeability.magnetisationExponent`, p.magnetisationExponent, "");
+    requireText(where, `${path}.permeability.source`, p.source);
+  }
+  if (!Array.isArray(m.sources) || !m.sources.every((s) => typeof s === "string")) {
+    throw new InputError(where, `${path}.sources`, m.sources, "", "an array of source strings");
+  }
+  return value as ConductiveMaterial;
 }

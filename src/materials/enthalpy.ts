@@ -4,10 +4,13 @@
  *
  * @packageDocumentation
  */
-import { requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { checkSpecificHeatModel } from "./check-material.js";
 import { specificHeatAt } from "./specific-heat.js";
 import type { ConductiveMaterial } from "./types.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const INTERVAL_FIELDS: readonly string[] = Object.freeze(["fromTemperature", "toTemperature"]);
 
 /**
  * The temperatures between which {@link specificEnthalpyChange} integrates.
@@ -63,6 +66,7 @@ export function specificEnthalpyChange(material: ConductiveMaterial, interval: E
   const where = "specificEnthalpyChange";
   requireObject(where, "material", material);
   requireObject(where, "interval", interval);
+  requireKnownKeys(where, "interval", interval, INTERVAL_FIELDS);
   const t1 = requirePositive(where, "interval.fromTemperature", interval.fromTemperature, "K");
   const t2 = requirePositive(where, "interval.toTemperature", interval.toTemperature, "K");
   checkSpecificHeatModel(where, material);

@@ -4,10 +4,13 @@
  *
  * @packageDocumentation
  */
-import { requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import { checkPermeabilityModel } from "./check-material.js";
 import { MU_0 } from "../units/index.js";
 import type { ConductiveMaterial, PermeabilityModel } from "./types.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const CONDITION_FIELDS: readonly string[] = Object.freeze(["temperature", "fieldStrength"]);
 
 /** 20 °C in kelvin: the reference temperature of the permeability data. */
 const T20 = 293.15;
@@ -97,6 +100,7 @@ function saturationMagnetisation(model: PermeabilityModel, curie: number, t: num
 export function relativePermeabilityAt(material: ConductiveMaterial, conditions: PermeabilityConditions): number {
   requireObject("relativePermeabilityAt", "material", material);
   requireObject("relativePermeabilityAt", "conditions", conditions);
+  requireKnownKeys("relativePermeabilityAt", "conditions", conditions, CONDITION_FIELDS);
   const t = requirePositive("relativePermeabilityAt", "conditions.temperature", conditions.temperature, "K");
   const h =
     conditions.fieldStrength === undefined

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireObject, requirePositive } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { Caution } from "../core/index.js";
 import { voltageCaution } from "../core/extra-low-voltage.js";
 // The extra-low-voltage caution is shared with the tank module, so it lives in core; this
@@ -13,6 +13,18 @@ export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "../core/extra-low-volt
 export type { VoltageCautionOptions } from "../core/extra-low-voltage.js";
 import { exposureCheck } from "./exposure.js";
 import type { ExposurePopulation } from "./exposure.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SAFETY_FIELDS: readonly string[] = Object.freeze(["tankVoltageRms", "supplyVoltageDc", "capacitance", "capacitorVoltagePeak", "surfaceTemperature", "contactTime", "frequency", "fluxDensityRms", "population"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const EXPOSURE_CAUTION_FIELDS: readonly string[] = Object.freeze(["fluxDensityRms", "frequency", "population"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SURFACE_FIELDS: readonly string[] = Object.freeze(["temperature", "contactTime", "location"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STORED_ENERGY_FIELDS: readonly string[] = Object.freeze(["capacitance", "voltagePeak"]);
 
 /**
  * Options of {@link storedEnergyCaution}.
@@ -59,6 +71,7 @@ const SHOCK_VOLTAGE_PEAK = 42.4;
 export function storedEnergyCaution(options: StoredEnergyCautionOptions): Caution | null {
   const where = "storedEnergyCaution";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, STORED_ENERGY_FIELDS);
   const c = requirePositive(where, "capacitance", options.capacitance, "F");
   const v = Math.abs(requireFinite(where, "voltagePeak", options.voltagePeak, "V"));
   const energy = 0.5 * c * v * v;
@@ -177,6 +190,7 @@ export interface SurfaceTemperatureCautionOptions {
 export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOptions): Caution | null {
   const where = "surfaceTemperatureCaution";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SURFACE_FIELDS);
   const temperature = requirePositive(where, "temperature", options.temperature, "K");
   const contactTime =
     options.contactTime === undefined ? 1 : requirePositive(where, "contactTime", options.contactTime, "s");
@@ -282,6 +296,7 @@ export interface ExposureCautionOptions {
  */
 export function exposureCaution(options: ExposureCautionOptions): Caution | null {
   requireObject("exposureCaution", "options", options);
+  requireKnownKeys("exposureCaution", "", options, EXPOSURE_CAUTION_FIELDS);
   const population = options.population ?? "general-public";
   const check = exposureCheck({ fluxDensityRms: options.fluxDensityRms, frequency: options.frequency, population });
   if (!check.exceeded) return null;
@@ -325,6 +340,22 @@ export interface SafetyCautionsOptions {
 }
 
 /**
+ * Runs one of the single cautions for {@link safetyCautions} and, when it rejects a value, says
+ * so in terms of the field the caller wrote (`tankVoltageRms`, not `voltageCaution: voltage`).
+ */
+function relabel<T>(run: () => T, fields: Readonly<Record<string, string>>): T {
+  try {
+    return run();
+  } catch (e) {
+    if (e instanceof InputError) {
+      const field = fields[e.parameter];
+      if (field !== undefined) throw new InputError("safetyCautions", field, e.value, e.unit, e.expected);
+    }
+    throw e;
+  }
+}
+
+/**
  * Runs every applicable caution generator ({@link voltageCaution}, {@link storedEnergyCaution},
  * {@link surfaceTemperatureCaution}, {@link audibleFrequencyCaution}, {@link exposureCaution}) on
  * the given numbers and returns the cautions found, most severe first. Each message ends with
@@ -349,37 +380,53 @@ export interface SafetyCautionsOptions {
 export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
   const where = "safetyCautions";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SAFETY_FIELDS);
   const cautions: (Caution | null)[] = [];
-  if (options.tankVoltageRms !== undefined) {
-    cautions.push(voltageCaution({ voltage: options.tankVoltageRms, waveform: "ac", location: "resonant tank" }));
+  const { tankVoltageRms, supplyVoltageDc, capacitance, capacitorVoltagePeak, surfaceTemperature, contactTime, fluxDensityRms, population } = options;
+  if (tankVoltageRms !== undefined) {
+    cautions.push(relabel(() => voltageCaution({ voltage: tankVoltageRms, waveform: "ac", location: "resonant tank" }), { voltage: "tankVoltageRms" }));
   }
-  if (options.supplyVoltageDc !== undefined) {
-    cautions.push(voltageCaution({ voltage: options.supplyVoltageDc, waveform: "dc", location: "DC supply" }));
+  if (supplyVoltageDc !== undefined) {
+    cautions.push(relabel(() => voltageCaution({ voltage: supplyVoltageDc, waveform: "dc", location: "DC supply" }), { voltage: "supplyVoltageDc" }));
   }
   if ((options.capacitance === undefined) !== (options.capacitorVoltagePeak === undefined)) {
     const missing = options.capacitance === undefined ? "capacitance" : "capacitorVoltagePeak";
     requireFinite(where, missing, undefined, missing === "capacitance" ? "F" : "V");
   }
-  if (options.capacitance !== undefined && options.capacitorVoltagePeak !== undefined) {
-    cautions.push(storedEnergyCaution({ capacitance: options.capacitance, voltagePeak: options.capacitorVoltagePeak }));
-  }
-  if (options.surfaceTemperature !== undefined) {
+  if (capacitance !== undefined && capacitorVoltagePeak !== undefined) {
     cautions.push(
-      surfaceTemperatureCaution({
-        temperature: options.surfaceTemperature,
-        ...(options.contactTime === undefined ? {} : { contactTime: options.contactTime }),
+      relabel(() => storedEnergyCaution({ capacitance, voltagePeak: capacitorVoltagePeak }), {
+        capacitance: "capacitance",
+        voltagePeak: "capacitorVoltagePeak",
       }),
     );
   }
-  if (options.frequency !== undefined) cautions.push(audibleFrequencyCaution(options.frequency));
-  if (options.fluxDensityRms !== undefined) {
+  if (surfaceTemperature !== undefined) {
+    cautions.push(
+      relabel(
+        () =>
+          surfaceTemperatureCaution({
+            temperature: surfaceTemperature,
+            ...(contactTime === undefined ? {} : { contactTime }),
+          }),
+        { temperature: "surfaceTemperature", contactTime: "contactTime" },
+      ),
+    );
+  }
+  const audible = options.frequency;
+  if (audible !== undefined) cautions.push(relabel(() => audibleFrequencyCaution(audible), { frequency: "frequency" }));
+  if (fluxDensityRms !== undefined) {
     const frequency = requireInRange(where, "frequency", options.frequency, "Hz", 1, 1e7);
     cautions.push(
-      exposureCaution({
-        fluxDensityRms: options.fluxDensityRms,
-        frequency,
-        ...(options.population === undefined ? {} : { population: options.population }),
-      }),
+      relabel(
+        () =>
+          exposureCaution({
+            fluxDensityRms,
+            frequency,
+            ...(population === undefined ? {} : { population }),
+          }),
+        { fluxDensityRms: "fluxDensityRms", population: "population" },
+      ),
     );
   }
   const order = { danger: 0, warning: 1, info: 2 } as const;

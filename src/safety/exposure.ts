@@ -3,7 +3,10 @@
  *
  * @packageDocumentation
  */
-import { requireFinite, requireInRange, requireObject, requireOneOf } from "../core/index.js";
+import { requireFinite, requireInRange, requireKnownKeys, requireObject, requireOneOf } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const EXPOSURE_FIELDS: readonly string[] = Object.freeze(["fluxDensityRms", "frequency", "population"]);
 
 /**
  * Who is exposed: members of the `"general-public"` or workers (`"occupational"`, trained and
@@ -133,6 +136,7 @@ function band(f: number, population: ExposurePopulation): { level: number; range
 export function exposureCheck(options: ExposureCheckOptions): ExposureCheckResult {
   const where = "exposureCheck";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, EXPOSURE_FIELDS);
   const b = requireFinite(where, "fluxDensityRms", options.fluxDensityRms, "T");
   requireInRange(where, "fluxDensityRms", b, "T", 0, Infinity);
   const f = requireInRange(where, "frequency", options.frequency, "Hz", 1, 1e7);

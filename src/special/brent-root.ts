@@ -3,7 +3,10 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireKnownKeys } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const BRENT_FIELDS: readonly string[] = Object.freeze(["tolerance", "maxIterations"]);
 
 /**
  * Options of {@link brentRoot}.
@@ -56,6 +59,7 @@ export function brentRoot(
 ): number {
   const where = "brentRoot";
   if (typeof f !== "function") throw new InputError(where, "f", f, "", "a function");
+  requireKnownKeys(where, "options", options, BRENT_FIELDS);
   if (!Number.isFinite(lower)) throw new InputError(where, "lower", lower, "", "a finite number");
   if (!Number.isFinite(upper)) throw new InputError(where, "upper", upper, "", "a finite number");
   const tolerance = options.tolerance ?? 0;

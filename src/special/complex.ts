@@ -228,6 +228,11 @@ export function cSqrt(a: Complex): Complex {
   const x = a.re;
   const y = a.im;
   if (x === 0 && y === 0) return { re: 0, im: y };
+  // near the top of the double range r ± x would overflow: take √(z/4) and double it
+  if (Math.abs(x) > 1e307 || Math.abs(y) > 1e307) {
+    const half = cSqrt({ re: x / 4, im: y / 4 });
+    return { re: 2 * half.re, im: 2 * half.im };
+  }
   const r = Math.hypot(x, y);
   if (x >= 0) {
     const t = Math.sqrt(0.5 * (r + x));

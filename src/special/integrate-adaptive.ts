@@ -3,7 +3,10 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireKnownKeys } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ADAPTIVE_FIELDS: readonly string[] = Object.freeze(["relativeTolerance", "absoluteTolerance", "maxSubintervals"]);
 
 /**
  * Tolerances and limits of {@link integrateAdaptive}.
@@ -163,6 +166,7 @@ export function integrateAdaptive(
 ): IntegrationResult {
   const where = "integrateAdaptive";
   if (typeof f !== "function") throw new InputError(where, "f", f, "", "a function");
+  requireKnownKeys(where, "options", options, ADAPTIVE_FIELDS);
   if (!Number.isFinite(a)) throw new InputError(where, "a", a, "", "a finite number");
   if (!Number.isFinite(b)) throw new InputError(where, "b", b, "", "a finite number");
   const { rel, abs } = readTolerances(where, options);

@@ -4,7 +4,10 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireKnownKeys } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const INFINITY_FIELDS: readonly string[] = Object.freeze(["relativeTolerance", "absoluteTolerance", "intervalLength", "maxIntervals", "maxSubintervals"]);
 import { integrateGk, readTolerances, type IntegrationResult } from "./integrate-adaptive.js";
 
 /**
@@ -109,6 +112,7 @@ export function integrateToInfinity(
 ): IntegrationResult {
   const where = "integrateToInfinity";
   if (typeof f !== "function") throw new InputError(where, "f", f, "", "a function");
+  requireKnownKeys(where, "options", options, INFINITY_FIELDS);
   if (!Number.isFinite(a)) throw new InputError(where, "a", a, "", "a finite number");
   const defaults = { relativeTolerance: 1e-10, ...options };
   const { rel, abs } = readTolerances(where, defaults);

@@ -6,7 +6,10 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireFinite, requirePositive, requireInteger } from "../core/index.js";
+import { InputError, requireFinite, requirePositive, requireInteger, requireKnownKeys } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ODE_FIELDS: readonly string[] = Object.freeze(["start", "end", "relativeTolerance", "absoluteTolerance", "initialStep", "maxStep", "maxSteps", "recordSteps", "outputTimes", "dense", "event", "eventDirection", "eventTolerance"]);
 
 /**
  * The right-hand side of $y'(t) = f(t, y)$: writes $f(t, y)$ into `derivative` (length of the
@@ -237,7 +240,7 @@ export function solveOde(
   }
   const n = initialState.length;
   if (n < 1) throw new InputError(WHERE, "initialState", initialState, "", "an array of length ≥ 1");
-  if (options === null || typeof options !== "object") throw new InputError(WHERE, "options", options, "", "an object");
+  requireKnownKeys(WHERE, "options", options, ODE_FIELDS);
   const t0 = options.start === undefined ? 0 : requireFinite(WHERE, "start", options.start, "");
   const t1 = requireFinite(WHERE, "end", options.end, "");
   if (t1 === t0) throw new InputError(WHERE, "end", t1, "", `a finite number ≠ start (${t0})`);

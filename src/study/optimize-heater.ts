@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireKnownKeys } from "../core/index.js";
 import { specificHeatAt } from "../materials/index.js";
 import { parseQuantity } from "../units/index.js";
 import { E12, E24 } from "../tank/index.js";
@@ -137,7 +137,16 @@ export interface HeaterOptimization {
 
 function quantity(path: string, value: QuantityInput | undefined, unit: string): number | null {
   if (value === undefined) return null;
-  const v = typeof value === "string" ? parseQuantity(value, unit) : value;
+  let v: unknown = value;
+  if (typeof value === "string") {
+    try {
+      v = parseQuantity(value, unit);
+    } catch (e) {
+      // name the field the caller wrote, not the parser's own parameter
+      if (e instanceof InputError) throw new InputError(WHERE, path, value, unit, `a finite number > 0 or a quantity text (${e.expected})`);
+      throw e;
+    }
+  }
   if (typeof v !== "number" || !(v > 0) || !Number.isFinite(v)) throw new InputError(WHERE, path, value, unit, "a finite number > 0 or a quantity text");
   return v;
 }
@@ -213,6 +222,7 @@ export interface HeaterSearchOptions {
  */
 export function optimizeHeater(description: unknown, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
   if (typeof options !== "object" || options === null || Array.isArray(options)) throw new InputError(WHERE, "options", options, "", "an object");
+  requireKnownKeys(WHERE, "options", options, ["onProgress"]);
   if (options.onProgress !== undefined && typeof options.onProgress !== "function") {
     throw new InputError(WHERE, "options.onProgress", options.onProgress, "", "a function");
   }
@@ -228,10 +238,7 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
   // unknown keys are typos: reject them rather than ignore a limit the caller meant
   const known = (path: string, value: object | undefined, keys: readonly string[]): void => {
     if (value === undefined) return;
-    if (typeof value !== "object" || value === null || Array.isArray(value)) throw new InputError(WHERE, path, value, "", "an object");
-    for (const key of Object.keys(value)) {
-      if (!keys.includes(key)) throw new InputError(WHERE, `${path}.${key}`, (value as Record<string, unknown>)[key], "", `absent (known fields: ${keys.join(", ")})`);
-    }
+    requireKnownKeys(WHERE, path, value, keys);
   };
   known("goal", goal, ["targetPower", "targetTime", "limits", "search", "keep"]);
   known("goal.limits", goal.limits, [...LIMIT_CHECKS.map((c) => c[0]), "maxVoltage", "maxCurrent"]);

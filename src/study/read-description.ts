@@ -7,6 +7,7 @@
 import { InputError } from "../core/index.js";
 import { conductiveMaterials, inventedExampleFerrite, inventedExampleIronPowder } from "../materials/index.js";
 import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
+import { checkConductiveMaterial } from "../materials/check-material.js";
 import { celsius, parseQuantity } from "../units/index.js";
 
 const WHERE = "readHeaterDescription";
@@ -286,12 +287,20 @@ const CORE_MATERIALS: Readonly<Record<string, CoreMaterial>> = {
   inventedExampleIronPowder,
 };
 
+/** Problems collected before the reader stops (a huge malformed file would list millions). */
+const MAX_PROBLEMS = 200;
+
 /** The reader: converts and checks fields, recording problems instead of stopping at the first. */
 class Reader {
   readonly problems: InputError[] = [];
 
   fail(path: string, value: unknown, unit: string, expected: string): number {
     this.problems.push(new InputError(WHERE, path, value, unit, expected));
+    // bounded work on huge malformed input: stop collecting after MAX_PROBLEMS
+    if (this.problems.length >= MAX_PROBLEMS) {
+      this.problems.push(new InputError(WHERE, "(description)", `more than ${MAX_PROBLEMS} problems`, "", `fixed first: reading stopped after ${MAX_PROBLEMS} problems`));
+      throw new HeaterDescriptionError(this.problems);
+    }
     return Number.NaN;
   }
 
@@ -330,6 +339,8 @@ class Reader {
         v = parseQuantity(value, unit);
       } catch (e) {
         if (!(e instanceof InputError)) throw e;
+        // a well-formed temperature below absolute zero: out of range, not unreadable
+        if (e.expected.includes("absolute zero")) return this.fail(path, value, unit, check === "positive" ? "a finite number > 0" : "a finite number ≥ 0");
         const example = { m: "30 mm", F: "4.7 µF", H: "200 µH", V: "24 V", Ω: "10 mΩ", A: "50 A", Hz: "25 kHz", W: "1.5 kW", K: "20 °C", "m²": "1e-4 m²", "m³": "2e-6 m³", "": "0.5" }[unit] ?? "1";
         return this.fail(path, value, "", unit === "" ? `a number, e.g. "${example}"` : `a quantity in ${unit}, e.g. "${example}"`);
       }
@@ -374,12 +385,14 @@ class Reader {
   material(path: string, value: unknown, allowed: readonly string[]): ConductiveMaterial | undefined {
     // a material set passed in code (e.g. the exported `lowCarbonSteel`, or one of the caller's own)
     if (typeof value === "object" && value !== null && !Array.isArray(value)) {
-      const m = value as Partial<ConductiveMaterial>;
-      if (typeof m.id === "string" && typeof m.resistivity20 === "number" && typeof m.density === "number" && typeof m.temperatureRange === "object") {
-        return value as ConductiveMaterial;
+      // checked field by field, so that a caller's own set fails here with its path, not later
+      try {
+        return checkConductiveMaterial(WHERE, path, value);
+      } catch (e) {
+        if (!(e instanceof InputError)) throw e;
+        this.fail(e.parameter, e.value, e.unit, e.expected);
+        return undefined;
       }
-      this.fail(path, value, "", `a material id (one of ${allowed.map((a) => JSON.stringify(a)).join(", ")}) or a material set of the materials module`);
-      return undefined;
     }
     const id = this.oneOf(path, value, allowed);
     return id === undefined ? undefined : conductiveMaterials.find((m) => m.id === id);

@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, InputError, requireInteger, requireObject } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireInteger, requireKnownKeys, requireObject } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
 import { specificHeatAt } from "../materials/index.js";
@@ -17,6 +17,9 @@ import { NoOscillationError, coilImpedanceAt, coilProperties, heaterOperatingPoi
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints"]);
 
 /**
  * Options of {@link studyHeater}: which of the slower parts of the study to run.
@@ -490,7 +493,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * @returns the {@link HeaterStudy}
  * @throws {@link HeaterDescriptionError} (an {@link InputError}) when the description is
  * invalid, naming the field path; {@link InputError} when `options` is not an object or
- * `options.heatUpPoints` is not an integer ≥ 4
+ * `options.heatUpPoints` is not an integer from 4 to 1000 (each point costs a coupling solution)
  * @example
  * ```ts
  * import { studyHeater } from "fluxwright";
@@ -509,7 +512,10 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  */
 export function studyHeater(description: unknown, options: StudyHeaterOptions = {}): HeaterStudy {
   requireObject("studyHeater", "options", options);
+  requireKnownKeys("studyHeater", "options", options, STUDY_OPTION_FIELDS);
   const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
+  // bounded work: each point is a coupling solution (about 0.1 ms)
+  if (heatUpPoints !== undefined && heatUpPoints > 1000) throw new InputError("studyHeater", "options.heatUpPoints", heatUpPoints, "", "an integer between 4 and 1000");
   const d = readHeaterDescription(description);
   const props = coilProperties(d);
   const part = d.part;

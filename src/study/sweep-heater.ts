@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireKnownKeys } from "../core/index.js";
 import type { QuantityInput } from "./description.js";
 import { studyHeater } from "./study-heater.js";
 import { summarise } from "./summary.js";
@@ -103,6 +103,7 @@ function setField(root: unknown, path: string, value: unknown): unknown {
 export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): HeaterSweep {
   const where = "sweepHeater";
   if (typeof sweep !== "object" || sweep === null) throw new InputError(where, "sweep", sweep, "", "an object { field, values }");
+  requireKnownKeys(where, "sweep", sweep, ["field", "values", "heatUp"]);
   if (typeof sweep.field !== "string" || !/^[A-Za-z]\w*(\.[A-Za-z]\w*)*$/.test(sweep.field)) {
     throw new InputError(where, "field", sweep.field, "", "a dotted field path such as \"coil.turns\"");
   }

@@ -3,15 +3,11 @@
  *
  * @packageDocumentation
  */
-import {
-  InputError,
-  requireInRange,
-  requireInteger,
-  requireObject,
-  requirePositive,
-  type ValidityNote,
-} from "../core/index.js";
+import { InputError, requireInRange, requireInteger, requireKnownKeys, requireObject, requirePositive, type ValidityNote } from "../core/index.js";
 import { E12, E24, E96 } from "./e-series.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const BANK_FIELDS: readonly string[] = Object.freeze(["capacitance", "voltageRms", "currentRms", "frequency", "series", "unitVoltageRmsRating", "unitCurrentRmsRating", "unitReactivePowerRating", "tolerance", "maxUnits", "minUnitCapacitance", "maxUnitCapacitance"]);
 
 /**
  * Options of {@link capacitorBank}.
@@ -160,6 +156,7 @@ function nearestStandard(mantissas: readonly number[], ideal: number, lo: number
 export function capacitorBank(options: CapacitorBankOptions): CapacitorBank {
   const where = "capacitorBank";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, BANK_FIELDS);
   const target = requirePositive(where, "capacitance", options.capacitance, "F");
   const voltage = requirePositive(where, "voltageRms", options.voltageRms, "V");
   const current = requirePositive(where, "currentRms", options.currentRms, "A");

@@ -5,14 +5,10 @@
  *
  * @packageDocumentation
  */
-import {
-  InputError,
-  requireObject,
-  requirePositive,
-  voltageCaution,
-  type Caution,
-  type ValidityNote,
-} from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive, voltageCaution, type Caution, type ValidityNote } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const CURRENT_FED_FIELDS: readonly string[] = Object.freeze(["supplyVoltage", "inductance", "capacitance", "coilResistance", "chokeInductance"]);
 
 /**
  * Options of {@link currentFedParallelInverter}.
@@ -143,6 +139,7 @@ const HARMONIC_SUM = (Math.PI * Math.PI) / 48 + 1 / 16;
 export function currentFedParallelInverter(options: CurrentFedParallelInverterOptions): CurrentFedParallelInverter {
   const where = "currentFedParallelInverter";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, CURRENT_FED_FIELDS);
   const supplyVoltage = requirePositive(where, "supplyVoltage", options.supplyVoltage, "V");
   const L = requirePositive(where, "inductance", options.inductance, "H");
   const C = requirePositive(where, "capacitance", options.capacitance, "F");

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requirePositive } from "../core/index.js";
+import { InputError, MAX_ARRAY_LENGTH, requireArrayLike, requireKnownKeys, requireNonNegative, requirePositive } from "../core/index.js";
 import type { Complex } from "../special/index.js";
 
 /**
@@ -260,6 +260,7 @@ export interface LclNetworkOptions {
 export function lclNetwork(options: LclNetworkOptions): TankSeriesConnection {
   const where = "lclNetwork";
   if (typeof options !== "object" || options === null) throw new InputError(where, "options", options, "", "an object");
+  requireKnownKeys(where, "", options, LCL_FIELDS);
   const ls = requirePositive(where, "seriesInductance", options.seriesInductance, "H");
   const rs = options.seriesResistance === undefined ? 0 : requireNonNegative(where, "seriesResistance", options.seriesResistance, "Ω");
   const l = requirePositive(where, "inductance", options.inductance, "H");
@@ -314,6 +315,7 @@ export interface LccNetworkOptions {
 export function lccNetwork(options: LccNetworkOptions): TankSeriesConnection {
   const where = "lccNetwork";
   if (typeof options !== "object" || options === null) throw new InputError(where, "options", options, "", "an object");
+  requireKnownKeys(where, "", options, LCC_FIELDS);
   const ls = requirePositive(where, "seriesInductance", options.seriesInductance, "H");
   const rs = options.seriesResistance === undefined ? 0 : requireNonNegative(where, "seriesResistance", options.seriesResistance, "Ω");
   const cs = requirePositive(where, "seriesCapacitance", options.seriesCapacitance, "F");
@@ -323,6 +325,14 @@ export function lccNetwork(options: LccNetworkOptions): TankSeriesConnection {
 }
 
 const MAX_DEPTH = 64;
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LCL_FIELDS: readonly string[] = Object.freeze(["seriesInductance", "seriesResistance", "inductance", "capacitance", "coilResistance"]);
+const LCC_FIELDS: readonly string[] = Object.freeze(["seriesInductance", "seriesResistance", "seriesCapacitance", "parallelCapacitance", "load"]);
+const RESISTOR_FIELDS: readonly string[] = Object.freeze(["kind", "resistance"]);
+const INDUCTOR_FIELDS: readonly string[] = Object.freeze(["kind", "inductance", "resistance"]);
+const CAPACITOR_FIELDS: readonly string[] = Object.freeze(["kind", "capacitance", "resistance"]);
+const CONNECTION_FIELDS: readonly string[] = Object.freeze(["kind", "elements"]);
 
 /** Scratch pair for the impedance kernel; evaluation is synchronous, so one buffer suffices. */
 const SCRATCH = new Float64Array(2);
@@ -334,18 +344,22 @@ function validateNetwork(where: string, path: string, net: unknown, depth: numbe
   const n = net as Partial<Record<string, unknown>>;
   switch (n.kind) {
     case "resistor":
+      requireKnownKeys(where, path, n, RESISTOR_FIELDS);
       requireNonNegative(where, `${path}.resistance`, n.resistance, "Ω");
       return;
     case "inductor":
+      requireKnownKeys(where, path, n, INDUCTOR_FIELDS);
       requirePositive(where, `${path}.inductance`, n.inductance, "H");
       requireNonNegative(where, `${path}.resistance`, n.resistance, "Ω");
       return;
     case "capacitor":
+      requireKnownKeys(where, path, n, CAPACITOR_FIELDS);
       requirePositive(where, `${path}.capacitance`, n.capacitance, "F");
       requireNonNegative(where, `${path}.resistance`, n.resistance, "Ω");
       return;
     case "series":
     case "parallel": {
+      requireKnownKeys(where, path, n, CONNECTION_FIELDS);
       const elements = n.elements;
       if (!Array.isArray(elements) || elements.length === 0) {
         throw new InputError(where, `${path}.elements`, elements, "", "a non-empty array of networks");
@@ -494,10 +508,7 @@ export function tankImpedanceSweep(
 ): TankImpedanceSweep {
   const where = "tankImpedanceSweep";
   const net = resolveNetwork(where, network);
-  if (typeof frequencies !== "object" || frequencies === null || typeof frequencies.length !== "number") {
-    throw new InputError(where, "frequencies", frequencies, "Hz", "an array of frequencies");
-  }
-  const n = frequencies.length;
+  const n = requireArrayLike(where, "frequencies", frequencies, "Hz").length;
   const re = new Float64Array(n);
   const im = new Float64Array(n);
   const out = new Float64Array(2);
@@ -524,7 +535,7 @@ export function tankImpedanceSweep(
  *
  * @param start - first frequency [Hz], > 0
  * @param stop - last frequency [Hz], > 0
- * @param count - number of points, integer ≥ 2
+ * @param count - number of points, integer from 2 to 10⁷ (cost and memory linear in it: 8 bytes a point)
  * @returns the frequencies [Hz]
  * @throws {@link InputError} when start or stop is not > 0 or count is not an integer ≥ 2
  * @example
@@ -538,8 +549,8 @@ export function logSpacedFrequencies(start: number, stop: number, count: number)
   const where = "logSpacedFrequencies";
   const a = requirePositive(where, "start", start, "Hz");
   const b = requirePositive(where, "stop", stop, "Hz");
-  if (typeof count !== "number" || !Number.isInteger(count) || count < 2) {
-    throw new InputError(where, "count", count, "", "an integer ≥ 2");
+  if (typeof count !== "number" || !Number.isInteger(count) || count < 2 || count > MAX_ARRAY_LENGTH) {
+    throw new InputError(where, "count", count, "", `an integer between 2 and ${MAX_ARRAY_LENGTH}`);
   }
   const out = new Float64Array(count);
   const ratio = b / a;

@@ -4,9 +4,12 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { TankNetwork } from "./network.js";
-import { tankNetworkUnchecked } from "./tank-network-internal.js";
+import { requireRepresentable, tankNetworkUnchecked } from "./tank-network-internal.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const PARALLEL_TANK_FIELDS: readonly string[] = Object.freeze(["inductance", "capacitance", "coilResistance", "parallelResistance"]);
 
 /**
  * Options of {@link parallelTank}.
@@ -123,6 +126,7 @@ export interface ParallelTank {
 export function parallelTank(options: ParallelTankOptions): ParallelTank {
   const where = "parallelTank";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, PARALLEL_TANK_FIELDS);
   const inductance = requirePositive(where, "inductance", options.inductance, "H");
   const capacitance = requirePositive(where, "capacitance", options.capacitance, "F");
   const coilResistance = requireNonNegative(where, "coilResistance", options.coilResistance, "Ω");
@@ -134,9 +138,12 @@ export function parallelTank(options: ParallelTankOptions): ParallelTank {
     throw new InputError(where, "coilResistance", coilResistance, "Ω", "a finite number > 0 when parallelResistance is not given");
   }
   const twoPi = 2 * Math.PI;
-  const omega0 = 1 / Math.sqrt(inductance * capacitance);
+  // square roots taken separately: L·C and L/C may leave the double range when ω0 and Z0 do not
+  const rootL = Math.sqrt(inductance);
+  const rootC = Math.sqrt(capacitance);
+  const omega0 = 1 / rootL / rootC;
   const f0 = omega0 / twoPi;
-  const z0 = Math.sqrt(inductance / capacitance);
+  const z0 = rootL / rootC;
   const r = coilResistance / z0; // √a
   const a = r * r;
   const g = parallelResistance === null ? 0 : z0 / parallelResistance;
@@ -150,14 +157,14 @@ export function parallelTank(options: ParallelTankOptions): ParallelTank {
     const im = Math.sqrt(xMax) * (1 - 1 / u);
     maxImpedance = z0 / Math.hypot(re, im);
   }
-  const coilDynamic = coilResistance === 0 ? Infinity : inductance / (coilResistance * capacitance);
+  const coilDynamic = coilResistance === 0 ? Infinity : z0 * (z0 / coilResistance); // L/(RC) = Z0²/R
   const dynamicResistance =
     parallelResistance === null
       ? coilDynamic
       : coilDynamic === Infinity
         ? parallelResistance
         : (coilDynamic * parallelResistance) / (coilDynamic + parallelResistance);
-  return {
+  return requireRepresentable(where, {
     kind: "parallel-tank",
     inductance,
     capacitance,
@@ -173,5 +180,5 @@ export function parallelTank(options: ParallelTankOptions): ParallelTank {
     qualityFactor: 1 / (r + g),
     resonant: xPhase > 0,
     network: tankNetworkUnchecked("parallel", inductance, coilResistance, capacitance, parallelResistance),
-  };
+  });
 }

@@ -4,15 +4,13 @@
  *
  * @packageDocumentation
  */
-import {
-  DEFER_TO_CODES,
-  InputError,
-  requireObject,
-  requireOneOf,
-  requirePositive,
-  voltageCaution,
-  type Caution,
-} from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireKnownKeys, requireObject, requireOneOf, requirePositive, voltageCaution, type Caution } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const FREQUENCY_FOR_POWER_FIELDS: readonly string[] = Object.freeze(["supplyVoltage", "bridge", "inductance", "capacitance", "resistance", "power"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SERIES_INVERTER_FIELDS: readonly string[] = Object.freeze(["supplyVoltage", "bridge", "inductance", "capacitance", "resistance", "switchingFrequency"]);
 
 /**
  * Options of {@link seriesInverter}.
@@ -116,6 +114,7 @@ function fundamentalPeak(bridge: "half" | "full", supplyVoltage: number): number
 export function seriesInverter(options: SeriesInverterOptions): SeriesInverter {
   const where = "seriesInverter";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SERIES_INVERTER_FIELDS);
   const supplyVoltage = requirePositive(where, "supplyVoltage", options.supplyVoltage, "V");
   const bridge = requireOneOf(where, "bridge", options.bridge, ["half", "full"] as const);
   const L = requirePositive(where, "inductance", options.inductance, "H");
@@ -217,6 +216,7 @@ export interface FrequencyForPowerOptions {
 export function frequencyForPower(options: FrequencyForPowerOptions): number {
   const where = "frequencyForPower";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, FREQUENCY_FOR_POWER_FIELDS);
   const supplyVoltage = requirePositive(where, "supplyVoltage", options.supplyVoltage, "V");
   const bridge = requireOneOf(where, "bridge", options.bridge, ["half", "full"] as const);
   const L = requirePositive(where, "inductance", options.inductance, "H");

@@ -3,9 +3,12 @@
  *
  * @packageDocumentation
  */
-import { requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { TankNetwork } from "./network.js";
-import { tankNetworkUnchecked } from "./tank-network-internal.js";
+import { requireRepresentable, tankNetworkUnchecked } from "./tank-network-internal.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SERIES_TANK_FIELDS: readonly string[] = Object.freeze(["inductance", "capacitance", "resistance"]);
 
 /**
  * Options of {@link seriesTank}.
@@ -88,20 +91,24 @@ export interface SeriesTank {
 export function seriesTank(options: SeriesTankOptions): SeriesTank {
   const where = "seriesTank";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SERIES_TANK_FIELDS);
   const inductance = requirePositive(where, "inductance", options.inductance, "H");
   const capacitance = requirePositive(where, "capacitance", options.capacitance, "F");
   const resistance = requirePositive(where, "resistance", options.resistance, "Ω");
-  const omega0 = 1 / Math.sqrt(inductance * capacitance);
-  const characteristicImpedance = Math.sqrt(inductance / capacitance);
+  // square roots taken separately: L·C and L/C may leave the double range when ω0 and Z0 do not
+  const rootL = Math.sqrt(inductance);
+  const rootC = Math.sqrt(capacitance);
+  const omega0 = 1 / rootL / rootC;
+  const characteristicImpedance = rootL / rootC;
   const qualityFactor = characteristicImpedance / resistance;
   const alpha = resistance / (2 * inductance); // neper frequency [1/s]
   const root = Math.hypot(omega0, alpha);
   const twoPi = 2 * Math.PI;
   // f1 = (root - alpha)/2π written without cancellation: (root² − α²)/(root + α) = ω0²/(root + α).
-  const lower = (omega0 * omega0) / (root + alpha) / twoPi;
+  const lower = (omega0 * (omega0 / (root + alpha))) / twoPi;
   const upper = (root + alpha) / twoPi;
   const dampedSquared = 1 - 1 / (4 * qualityFactor * qualityFactor);
-  return {
+  return requireRepresentable(where, {
     kind: "series-tank",
     inductance,
     capacitance,
@@ -114,5 +121,5 @@ export function seriesTank(options: SeriesTankOptions): SeriesTank {
     upperHalfPowerFrequency: upper,
     dampedFrequency: dampedSquared > 0 ? (omega0 / twoPi) * Math.sqrt(dampedSquared) : null,
     network: tankNetworkUnchecked("series", inductance, resistance, capacitance, null),
-  };
+  });
 }

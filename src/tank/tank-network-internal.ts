@@ -3,6 +3,7 @@
  *
  * @packageDocumentation
  */
+import { InputError } from "../core/index.js";
 import type { TankCapacitor, TankInductor, TankNetwork } from "./network.js";
 
 /**
@@ -24,3 +25,18 @@ export function tankNetworkUnchecked(
   return { kind: "parallel", elements };
 }
 
+
+/**
+ * Returns a tank summary whose numbers are all finite, or throws an {@link InputError} saying
+ * that the inputs put a result outside the double range (a frequency, impedance or Q factor
+ * above about 1.8e308): scaled formulas give every representable result, so only an
+ * unrepresentable one is refused.
+ */
+export function requireRepresentable<T extends object>(where: string, result: T): T {
+  for (const [key, value] of Object.entries(result)) {
+    if (typeof value === "number" && !Number.isFinite(value)) {
+      throw new InputError(where, "options", `${key} = ${value}`, "", "values whose results lie within the double-precision range");
+    }
+  }
+  return result;
+}

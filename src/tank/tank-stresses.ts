@@ -3,9 +3,12 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { ParallelTank } from "./parallel-tank.js";
 import type { SeriesTank } from "./series-tank.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const DRIVE_FIELDS: readonly string[] = Object.freeze(["frequency", "voltageRms", "currentRms"]);
 
 /**
  * The sinusoidal drive of {@link tankStresses}: a frequency and exactly one of `voltageRms`
@@ -107,6 +110,7 @@ export function tankStresses(tank: SeriesTank | ParallelTank, drive: TankDrive):
   const where = "tankStresses";
   requireObject(where, "tank", tank);
   requireObject(where, "drive", drive);
+  requireKnownKeys(where, "drive", drive, DRIVE_FIELDS);
   const kind = (tank as { kind?: unknown }).kind;
   if (kind !== "series-tank" && kind !== "parallel-tank") {
     throw new InputError(where, "tank", tank, "", "a result of seriesTank or parallelTank");

@@ -4,16 +4,11 @@
  *
  * @packageDocumentation
  */
-import {
-  InputError,
-  requireFinite,
-  requireInRange,
-  requireInteger,
-  requireObject,
-  requireOneOf,
-  requirePositive,
-} from "../core/index.js";
+import { InputError, requireFinite, requireInRange, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import { summariseSamples } from "./percentiles.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TOLERANCE_FIELDS: readonly string[] = Object.freeze(["topology", "inductance", "capacitance", "resistance", "inductanceTolerance", "capacitanceTolerance", "resistanceTolerance", "inductanceTemperatureCoefficient", "capacitanceTemperatureCoefficient", "resistanceTemperatureCoefficient", "temperatureChangeMin", "temperatureChangeMax", "driveVoltageRms", "driveFrequency", "distribution", "samples", "seed"]);
 
 /**
  * Options of {@link tankToleranceAnalysis}. Tolerances are relative (0.05 = ±5 %); temperature
@@ -217,6 +212,7 @@ function rotl(x: number, k: number): number {
 export function tankToleranceAnalysis(options: TankToleranceOptions): TankToleranceAnalysis {
   const where = "tankToleranceAnalysis";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TOLERANCE_FIELDS);
   const topology = options.topology === undefined ? "series" : requireOneOf(where, "topology", options.topology, ["series", "parallel"] as const);
   const L0 = requirePositive(where, "inductance", options.inductance, "H");
   const C0 = requirePositive(where, "capacitance", options.capacitance, "F");

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInRange, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { specificEnthalpyChange, specificHeatAt, thermalConductivityAt } from "../materials/index.js";
@@ -13,6 +13,16 @@ import type { OdeResult } from "../special/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { findEquilibrium } from "./steady-state.js";
 import { checkSurface, effectiveCoefficient, powerFunction } from "./surface-loss.js";
+
+/** Longest duration accepted, in time constants (about 0.3 s of work there on one core). */
+const MAX_TIME_CONSTANTS = 1e5;
+
+function steadyText(equilibrium: number | null): string {
+  return equilibrium === null ? "" : `(${equilibrium.toPrecision(6)} K)`;
+}
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LUMPED_FIELDS: readonly string[] = Object.freeze(["mass", "specificHeat", "material", "power", "powerAt", "surfaceArea", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature", "targetTemperature", "duration", "thermalConductivity", "density", "characteristicLength", "relativeTolerance"]);
 
 /**
  * Options of {@link lumpedHeatUp}. Give `specificHeat` or `material` (or both: `specificHeat`
@@ -156,6 +166,8 @@ const WHERE = "lumpedHeatUp";
  * Closed form (checked in the tests to 1e-9): with constant $P$, $c$, no radiation and
  * $T_0 = T_a$, $t = -\frac{mc}{hA}\ln\!\left(1 - \frac{(T - T_a)\,hA}{P}\right)$.
  *
+ * Cost: grows as duration / time constant (explicit steps near the time constant); a duration
+ * above 1e5 time constants is refused with an InputError (the part is long at its steady state).
  * Hard domain (throws {@link InputError}): non-finite or out-of-range inputs (see
  * {@link LumpedHeatUpOptions}); neither `specificHeat` nor `material`; both or neither of
  * `power`/`powerAt`; no `duration` when the span cannot be chosen (no losses and no reachable
@@ -188,6 +200,7 @@ const WHERE = "lumpedHeatUp";
  */
 export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   requireObject(WHERE, "options", options);
+  requireKnownKeys(WHERE, "", options, LUMPED_FIELDS);
   const mass = requirePositive(WHERE, "mass", options.mass, "kg");
   const material = options.material;
   if (material !== undefined) requireObject(WHERE, "material", material);
@@ -249,12 +262,18 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
 
   const sigmaA = emissivity * STEFAN_BOLTZMANN * area;
   const hA = convection * area;
+  // The state is the rise above the initial temperature (not the temperature itself), so that a
+  // tiny rise keeps its full relative precision and the stored energy m·c·ΔT balances the
+  // integrated input to rounding; the losses use T − Ta = (T0 − Ta) + ΔT and
+  // T⁴ − Ta⁴ = (T − Ta)(T + Ta)(T² + Ta²) for the same reason.
+  const initialExcess = initial - ambient;
   const derivative = (_t: number, y: Float64Array, dy: Float64Array): void => {
-    const temperature = y[0]!;
+    const rise = y[0]!;
+    const temperature = initial + rise;
     const p = power(temperature);
-    const convective = hA * (temperature - ambient);
-    const t2 = temperature * temperature;
-    const radiative = sigmaA * (t2 * t2 - ambient * ambient * ambient * ambient);
+    const excess = initialExcess + rise;
+    const convective = hA * excess;
+    const radiative = sigmaA * excess * (temperature + ambient) * (temperature * temperature + ambient * ambient);
     dy[0] = (p - convective - radiative) / heatCapacityAt(temperature);
     dy[1] = p;
     dy[2] = convective;
@@ -262,20 +281,26 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   };
   const energyScale = heatCapacityAt(initial) * Math.max(1, Math.abs((equilibrium ?? target ?? initial) - initial));
   const absoluteTolerance = [1e-12 * Math.max(initial, ambient), 1e-13 * energyScale, 1e-13 * energyScale, 1e-13 * energyScale];
+  const riseToTarget = target === null ? 0 : target - initial;
 
   // Time constant near the steady state.
   const heff = effectiveCoefficient(equilibrium ?? initial, ambient, convection, emissivity);
   const timeConstant = heff > 0 && equilibrium !== null ? heatCapacityAt(equilibrium) / (heff * area) : null;
 
+  // bounded work: the explicit integrator's steps stay near the time constant, so the cost grows
+  // as duration/τ; the part sits at its steady state long before 1e5 τ
+  if (duration !== null && timeConstant !== null && duration > MAX_TIME_CONSTANTS * timeConstant) {
+    throw new InputError(WHERE, "duration", duration, "s", `at most ${MAX_TIME_CONSTANTS} time constants = ${(MAX_TIME_CONSTANTS * timeConstant).toPrecision(4)} s (the part is at its steady state ${steadyText(equilibrium)} long before)`);
+  }
   const run = (end: number, withEvent: boolean): OdeResult => {
-    const result = solveOde(derivative, [initial, 0, 0, 0], {
+    const result = solveOde(derivative, [0, 0, 0, 0], {
       end,
       ...(withEvent ? {} : { maxStep: end / 64 }),
       relativeTolerance: rtol,
       absoluteTolerance,
       dense: true,
       maxSteps: 1000000,
-      ...(withEvent && target !== null ? { event: (_t: number, y: Float64Array): number => y[0]! - target } : {}),
+      ...(withEvent && target !== null ? { event: (_t: number, y: Float64Array): number => y[0]! - riseToTarget } : {}),
     });
     if (result.status !== "completed" && result.status !== "event") {
       throw new InputError(WHERE, "options", options, "", `a problem the integrator can follow (it stopped: ${result.status})`);
@@ -306,30 +331,31 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   // with 64 dense samples, for plotting), else a run over the span with at least 64 steps.
   const curve = eventRun !== null && end === timeToTarget ? eventRun : run(end, false);
   let times = curve.times;
-  let temperatures = curve.states.map((s) => s[0]!);
+  let temperatures = curve.states.map((s) => initial + s[0]!);
   if (curve === eventRun) {
     const merged: { t: number; v: number }[] = times.map((t, k) => ({ t, v: temperatures[k]! }));
     for (let k = 1; k < 64; k++) {
       const t = (end * k) / 64;
-      merged.push({ t, v: curve.sample!(t)[0]! });
+      merged.push({ t, v: initial + curve.sample!(t)[0]! });
     }
     merged.sort((a, b) => a.t - b.t);
     times = merged.map((p) => p.t);
     temperatures = merged.map((p) => p.v);
   }
   const finalState = curve.finalState;
-  const finalTemperature = finalState[0]!;
+  const finalRise = finalState[0]!;
+  const finalTemperature = initial + finalRise;
   const sample = curve.sample!;
   const temperatureAt = (time: number): number => {
     if (typeof time !== "number" || !(time >= 0 && time <= end)) {
       throw new InputError("LumpedHeatUpResult.temperatureAt", "time", time, "s", `a finite number between 0 and ${end}`);
     }
-    return sample(time)[0]!;
+    return initial + sample(time)[0]!;
   };
 
   // Stored energy m ∫c(T) dT, exact for the material's specific-heat model.
   let stored: number;
-  if (constantSpecificHeat !== null) stored = mass * constantSpecificHeat * (finalTemperature - initial);
+  if (constantSpecificHeat !== null) stored = mass * constantSpecificHeat * finalRise;
   else stored = mass * specificEnthalpyChange(material!, { fromTemperature: initial, toTemperature: finalTemperature });
   const input = finalState[1]!;
   const convective = finalState[2]!;

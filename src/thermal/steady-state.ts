@@ -3,10 +3,16 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { brentRoot } from "../special/index.js";
 import { checkSurface, powerFunction, surfaceLoss } from "./surface-loss.js";
+
+/** Highest equilibrium temperature returned [K]: beyond it no material model means anything. */
+const MAX_TEMPERATURE = 1e6;
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const STEADY_FIELDS: readonly string[] = Object.freeze(["power", "powerAt", "surfaceArea", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature"]);
 
 /**
  * Options of {@link steadyStateTemperature}. Give exactly one of `power` and `powerAt`.
@@ -18,7 +24,7 @@ export interface SteadyStateTemperatureOptions {
   readonly power?: number;
   /**
    * Heating power absorbed by the part as a function of its temperature [K] → [W] (e.g. falling
-   * at the Curie point as the coupling changes). Must return finite numbers.
+   * at the Curie point as the coupling changes). Must return finite numbers ≥ 0 (anything else throws an InputError naming the temperature).
    */
   readonly powerAt?: (temperature: number) => number;
   /** Surface area exchanging heat with the surroundings [m²], > 0. */
@@ -78,6 +84,7 @@ export interface SteadyStateTemperatureOptions {
 export function steadyStateTemperature(options: SteadyStateTemperatureOptions): number {
   const where = "steadyStateTemperature";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, STEADY_FIELDS);
   const surface = checkSurface(where, options);
   const start =
     options.initialTemperature === undefined
@@ -118,9 +125,11 @@ export function findEquilibrium(
     const p = power(start);
     if (noLoss) return p === 0 ? start : null;
     if (p === 0) return ambient;
+    // no balance below the documented ceiling: refuse rather than return an overflowed bound
+    if (net(MAX_TEMPERATURE) > 0) return null;
     // Root of P = hA(T − Ta) + εσA(T⁴ − Ta⁴), P > 0: between Ta and each single-mechanism bound.
-    let upper = Infinity;
-    if (convection > 0) upper = ambient + p / (convection * area);
+    let upper: number = MAX_TEMPERATURE;
+    if (convection > 0) upper = Math.min(upper, ambient + p / (convection * area));
     if (emissivity > 0) upper = Math.min(upper, Math.pow(ambient ** 4 + p / (emissivity * STEFAN_BOLTZMANN * area), 0.25));
     if (convection === 0 || emissivity === 0) return upper; // a single mechanism: closed form
     // net(T) is decreasing and concave, so Newton's method from the upper bound descends
@@ -151,7 +160,7 @@ export function findEquilibrium(
       if (a < 1e-6) return null;
       b = 0.5 * a;
     }
-    if (b > 1e6) return null;
+    if (b > MAX_TEMPERATURE) return null;
     const fb = net(b);
     if (fb === 0) return b;
     if (fb > 0 !== fa > 0) return brentRoot(net, Math.min(a, b), Math.max(a, b), { tolerance: 1e-13 * Math.max(a, b) });

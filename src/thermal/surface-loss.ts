@@ -52,8 +52,8 @@ export function powerFunction(
     const fn = powerAt as (temperature: number) => number;
     return (temperature: number): number => {
       const p = fn(temperature);
-      if (typeof p !== "number" || !Number.isFinite(p)) {
-        throw new InputError(where, `powerAt(${temperature})`, p, "W", "a finite number");
+      if (typeof p !== "number" || !(p >= 0) || p === Infinity) {
+        throw new InputError(where, `powerAt(${temperature})`, p, "W", "a finite number ≥ 0 (the heating power the part absorbs)");
       }
       return p;
     };

@@ -4,9 +4,12 @@
  * @packageDocumentation
  */
 import { InputError } from "../core/input-error.js";
-import { requireInteger, requireObject } from "../core/validate.js";
+import { requireInteger, requireKnownKeys, requireObject } from "../core/validate.js";
 import { ENGINEERING_PREFIX } from "./prefixes.js";
 import { canonicalUnit } from "./unit-symbols.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const FORMAT_FIELDS: readonly string[] = Object.freeze(["digits"]);
 
 /**
  * Options of {@link formatQuantity}.
@@ -62,6 +65,7 @@ export function formatQuantity(value: number, unit: string, options?: FormatQuan
   }
   if (typeof unit !== "string") throw new InputError(where, "unit", unit, "", "a unit symbol string");
   if (options !== undefined) requireObject(where, "options", options);
+  if (options !== undefined) requireKnownKeys(where, "options", options, FORMAT_FIELDS);
   const digits = options?.digits === undefined ? 4 : requireInteger(where, "options.digits", options.digits, 1);
   if (digits > 17) throw new InputError(where, "options.digits", digits, "", "an integer between 1 and 17");
 

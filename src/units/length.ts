@@ -3,8 +3,15 @@
  *
  * @packageDocumentation
  */
+import { InputError } from "../core/input-error.js";
 import { requireFinite } from "../core/validate.js";
 import type { Metres } from "./quantities.js";
+
+/** The converted value, or an InputError when it leaves the double range (about ±1.8e308). */
+function representable(where: string, value: number, unit: string, result: number): number {
+  if (!Number.isFinite(result)) throw new InputError(where, "value", value, unit, "a value whose conversion lies within the double-precision range");
+  return result;
+}
 
 /** Metres per inch, exact by the 1959 international yard and pound agreement. */
 const METRES_PER_INCH = 0.0254;
@@ -24,7 +31,7 @@ const METRES_PER_INCH = 0.0254;
  * @category Conversions
  */
 export function inches(value: number): Metres {
-  return (requireFinite("inches", "value", value, "in") * METRES_PER_INCH) as Metres;
+  return representable("inches", value, "in", requireFinite("inches", "value", value, "in") * METRES_PER_INCH) as Metres;
 }
 
 /**
@@ -41,7 +48,7 @@ export function inches(value: number): Metres {
  * @category Conversions
  */
 export function toInches(value: number): number {
-  return requireFinite("toInches", "value", value, "m") / METRES_PER_INCH;
+  return representable("toInches", value, "m", requireFinite("toInches", "value", value, "m") / METRES_PER_INCH);
 }
 
 /**
@@ -58,7 +65,7 @@ export function toInches(value: number): number {
  * @category Conversions
  */
 export function mils(value: number): Metres {
-  return ((requireFinite("mils", "value", value, "mil") * METRES_PER_INCH) / 1000) as Metres;
+  return representable("mils", value, "mil", (requireFinite("mils", "value", value, "mil") * METRES_PER_INCH) / 1000) as Metres;
 }
 
 /**
@@ -75,7 +82,9 @@ export function mils(value: number): Metres {
  * @category Conversions
  */
 export function toMils(value: number): number {
-  return (requireFinite("toMils", "value", value, "m") * 1000) / METRES_PER_INCH;
+  const v = requireFinite("toMils", "value", value, "m");
+  // × 1000 first keeps the long-standing rounding; ÷ first when × 1000 alone would overflow
+  return representable("toMils", value, "m", Math.abs(v) < 1e305 ? (v * 1000) / METRES_PER_INCH : v / (METRES_PER_INCH / 1000));
 }
 
 /**
@@ -109,5 +118,5 @@ export function millimetres(value: number): Metres {
  * @category Conversions
  */
 export function toMillimetres(value: number): number {
-  return requireFinite("toMillimetres", "value", value, "m") * 1000;
+  return representable("toMillimetres", value, "m", requireFinite("toMillimetres", "value", value, "m") * 1000);
 }

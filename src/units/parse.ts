@@ -146,5 +146,7 @@ export function parseQuantity(text: string, unit?: string): number {
   exponent += prefixExponent * (factorUnit === "m²" ? 2 : factorUnit === "m³" ? 3 : 1);
   const value = Number(`${mantissa}e${exponent}`) + offset;
   if (!Number.isFinite(value)) return fail("a quantity within the double-precision range");
+  // a Celsius text below absolute zero is no temperature (celsius() refuses it too)
+  if (offset !== 0 && value < 0) return fail("a temperature at or above absolute zero (−273.15 °C)");
   return value;
 }

@@ -3,7 +3,13 @@
  *
  * @packageDocumentation
  */
-import { requireNonNegative, requireObject, InputError } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject } from "../core/index.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const POWER_FIELDS: readonly string[] = Object.freeze(["coilCurrentRms", "reflectedResistance"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const EFFICIENCY_FIELDS: readonly string[] = Object.freeze(["coilResistance", "reflectedResistance"]);
 
 /**
  * Options of {@link coilEfficiency}.
@@ -46,6 +52,7 @@ export interface CoilEfficiencyOptions {
 export function coilEfficiency(options: CoilEfficiencyOptions): number {
   const where = "coilEfficiency";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, EFFICIENCY_FIELDS);
   const rc = requireNonNegative(where, "coilResistance", options.coilResistance, "Ω");
   const rr = requireNonNegative(where, "reflectedResistance", options.reflectedResistance, "Ω");
   if (rc + rr === 0) throw new InputError(where, "coilResistance", rc, "Ω", "> 0 when reflectedResistance is 0");
@@ -85,6 +92,7 @@ export interface PowerInPartOptions {
 export function powerInPart(options: PowerInPartOptions): number {
   const where = "powerInPart";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, POWER_FIELDS);
   const i = requireNonNegative(where, "coilCurrentRms", options.coilCurrentRms, "A");
   const r = requireNonNegative(where, "reflectedResistance", options.reflectedResistance, "Ω");
   return i * i * r;

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import {
   besselI0ComplexScaled,
@@ -20,6 +20,18 @@ import {
 import { MU_0 } from "../units/index.js";
 import { gaussLegendreRule } from "./kernels.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+/** Largest coil length / radial gap accepted (cost about 0.1 s at this ratio on one core). */
+const MAX_LENGTH_PER_GAP = 2000;
+
+const ROD_FIELDS: readonly string[] = Object.freeze(["radius", "innerRadius", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ENCIRCLING_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "length", "turns"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const ENCIRCLING_FIELDS: readonly string[] = Object.freeze(["coil", "rod", "frequency"]);
 
 /**
  * A coaxial coil of rectangular winding cross-section around a rod, with uniform current
@@ -125,6 +137,8 @@ function kMomentTailScaled(x: number): number {
  * exponentially scaled Bessel functions and 12-point Gauss–Legendre panels up to
  * $\alpha = 20/(r_1 - a)$, where the integrand has fallen by $e^{-40}$.
  *
+ * Cost: grows as coil length / radial gap; a gap below 1/2000 of the coil length is refused
+ * with an InputError (about 0.1 s of work at that edge).
  * Hard domain (throws {@link InputError}): 0 < rod radius < coil innerRadius < outerRadius,
  * length > 0, turns an integer ≥ 1, 0 ≤ rod innerRadius < rod radius, resistivity > 0,
  * relativePermeability ≥ 1, frequency > 0.
@@ -155,15 +169,22 @@ function kMomentTailScaled(x: number): number {
 export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): EncirclingCoilOverRodResult {
   const where = "encirclingCoilOverRod";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, ENCIRCLING_FIELDS);
   const c = requireObject(where, "coil", options.coil);
+  requireKnownKeys(where, "coil", c, ENCIRCLING_COIL_FIELDS);
   const r1 = requirePositive(where, "coil.innerRadius", c["innerRadius"], "m");
   const r2 = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
   if (!(r2 > r1)) throw new InputError(where, "coil.outerRadius", r2, "m", `a finite number > coil.innerRadius (${r1})`);
   const len = requirePositive(where, "coil.length", c["length"], "m");
   const turns = requireInteger(where, "coil.turns", c["turns"], 1);
   const rod = requireObject(where, "rod", options.rod);
+  requireKnownKeys(where, "rod", rod, ROD_FIELDS);
   const a = requirePositive(where, "rod.radius", rod["radius"], "m");
   if (!(a < r1)) throw new InputError(where, "rod.radius", a, "m", `a finite number > 0 and < coil.innerRadius (${r1})`);
+  // bounded work: the quadrature's cost grows as coil length / gap
+  if (len > MAX_LENGTH_PER_GAP * (r1 - a)) {
+    throw new InputError(where, "rod.radius", a, "m", `at most coil.innerRadius − coil.length/${MAX_LENGTH_PER_GAP} = ${r1 - len / MAX_LENGTH_PER_GAP} (a gap below 1/${MAX_LENGTH_PER_GAP} of the coil length makes the integral too costly)`);
+  }
   const a1 = rod["innerRadius"] === undefined ? 0 : requireNonNegative(where, "rod.innerRadius", rod["innerRadius"], "m");
   if (!(a1 < a)) throw new InputError(where, "rod.innerRadius", a1, "m", `a finite number ≥ 0 and < rod.radius (${a})`);
   const rho = requirePositive(where, "rod.resistivity", rod["resistivity"], "Ω·m");

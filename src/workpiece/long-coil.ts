@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import {
   besselI0ComplexScaled,
@@ -14,6 +14,21 @@ import {
 import { MU_0 } from "../units/index.js";
 import { bakerPQ } from "./kernels.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TUBE_FIELDS: readonly string[] = Object.freeze(["outerRadius", "innerRadius", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const TUBE_OPTION_FIELDS: readonly string[] = Object.freeze(["coil", "tube", "frequency", "coilResistance"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const BAR_OPTION_FIELDS: readonly string[] = Object.freeze(["coil", "bar", "frequency", "coilResistance"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const BAR_FIELDS: readonly string[] = Object.freeze(["radius", "resistivity", "relativePermeability"]);
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const LONG_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "length", "turns"]);
 
 /**
  * A long solenoid coil around the part (the long-coil idealisation: uniform axial field
@@ -127,6 +142,7 @@ const SHORT_COIL_LIMIT = 4;
 
 function checkLongCoil(where: string, coil: unknown): LongCoil {
   const c = requireObject(where, "coil", coil);
+  requireKnownKeys(where, "coil", c, LONG_COIL_FIELDS);
   return {
     innerRadius: requirePositive(where, "coil.innerRadius", c["innerRadius"], "m"),
     length: requirePositive(where, "coil.length", c["length"], "m"),
@@ -261,8 +277,10 @@ function longCoilResult(
 export function barInLongCoil(options: BarInLongCoilOptions): LongCoilCouplingResult {
   const where = "barInLongCoil";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, BAR_OPTION_FIELDS);
   const coil = checkLongCoil(where, options.coil);
   const bar = requireObject(where, "bar", options.bar);
+  requireKnownKeys(where, "bar", bar, BAR_FIELDS);
   const radius = requirePositive(where, "bar.radius", bar["radius"], "m");
   if (radius > coil.innerRadius) {
     throw new InputError(where, "bar.radius", radius, "m", `a finite number ≤ coil.innerRadius (${coil.innerRadius})`);
@@ -333,8 +351,10 @@ export function barCoupling(
 export function tubeInLongCoil(options: TubeInLongCoilOptions): LongCoilCouplingResult {
   const where = "tubeInLongCoil";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, TUBE_OPTION_FIELDS);
   const coil = checkLongCoil(where, options.coil);
   const tube = requireObject(where, "tube", options.tube);
+  requireKnownKeys(where, "tube", tube, TUBE_FIELDS);
   const a2 = requirePositive(where, "tube.outerRadius", tube["outerRadius"], "m");
   if (a2 > coil.innerRadius) {
     throw new InputError(where, "tube.outerRadius", a2, "m", `a finite number ≤ coil.innerRadius (${coil.innerRadius})`);

@@ -3,10 +3,13 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireFinite, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireFinite, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const SLAB_FIELDS: readonly string[] = Object.freeze(["thickness", "resistivity", "relativePermeability", "frequency", "fieldStrengthRms"]);
 
 /**
  * Options of {@link slabInTangentialField}.
@@ -135,6 +138,7 @@ export function slabFactors(u: number): { p: number; q: number } {
 export function slabInTangentialField(options: SlabInTangentialFieldOptions): SlabInTangentialFieldResult {
   const where = "slabInTangentialField";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, SLAB_FIELDS);
   const thickness = options.thickness;
   if (typeof thickness !== "number" || !(thickness > 0)) {
     throw new InputError(where, "thickness", thickness, "m", "a number > 0 (Infinity for a half-space)");

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
@@ -13,6 +13,14 @@ import type { CoilAbovePlate } from "./coil-over-plate.js";
 import { barCoupling, tubeCoupling } from "./long-coil.js";
 import type { LongCoil } from "./long-coil.js";
 import { checkPlateLayers } from "./coil-over-plate.js";
+
+/** Accepted fields (misspelt ones are rejected, not ignored). */
+const COUPLING_FIELDS: readonly string[] = Object.freeze(["material", "temperature", "part", "frequency", "fieldStrength", "coilResistance"]);
+const BAR_PART_FIELDS: readonly string[] = Object.freeze(["kind", "radius", "coil"]);
+const TUBE_PART_FIELDS: readonly string[] = Object.freeze(["kind", "outerRadius", "innerRadius", "coil"]);
+const PLATE_PART_FIELDS: readonly string[] = Object.freeze(["kind", "thickness", "coil"]);
+const LONG_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "length", "turns"]);
+const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "height", "turns"]);
 
 /**
  * A solid round bar in a long coil, for {@link workpieceCouplingAtTemperature}.
@@ -157,6 +165,7 @@ export interface WorkpieceCouplingAtTemperatureResult {
 export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTemperatureOptions): WorkpieceCouplingAtTemperatureResult {
   const where = "workpieceCouplingAtTemperature";
   requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, COUPLING_FIELDS);
   const material = requireObject(where, "material", options.material) as unknown as ConductiveMaterial;
   const temperature = requirePositive(where, "temperature", options.temperature, "K");
   const part = requireObject(where, "part", options.part);
@@ -176,11 +185,13 @@ export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTempe
     validity: readonly ValidityNote[];
   };
   if (kind === "bar") {
+    requireKnownKeys(where, "part", part, BAR_PART_FIELDS);
     const radius = requirePositive(where, "part.radius", part["radius"], "m");
     const lc = checkCoil(where, coil);
     if (radius > lc.innerRadius) throw new InputError(where, "part.radius", radius, "m", `a finite number ≤ part.coil.innerRadius (${lc.innerRadius})`);
     r = barCoupling(lc, radius, rho, mur, f, rc);
   } else if (kind === "tube") {
+    requireKnownKeys(where, "part", part, TUBE_PART_FIELDS);
     const a2 = requirePositive(where, "part.outerRadius", part["outerRadius"], "m");
     const a1 = requireNonNegative(where, "part.innerRadius", part["innerRadius"], "m");
     if (!(a1 < a2)) throw new InputError(where, "part.innerRadius", a1, "m", `a finite number < part.outerRadius (${a2})`);
@@ -188,6 +199,7 @@ export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTempe
     if (a2 > lc.innerRadius) throw new InputError(where, "part.outerRadius", a2, "m", `a finite number ≤ part.coil.innerRadius (${lc.innerRadius})`);
     r = tubeCoupling(lc, a2, a1, rho, mur, f, rc);
   } else if (kind === "plate") {
+    requireKnownKeys(where, "part", part, PLATE_PART_FIELDS);
     const layers = checkPlateLayers(where, { thickness: part["thickness"], resistivity: rho, relativePermeability: mur });
     const pc = checkPlateCoil(where, coil);
     const z = coilOverLayers(pc, layers, f);
@@ -215,6 +227,7 @@ export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTempe
 }
 
 function checkCoil(where: string, c: Record<string, unknown>): LongCoil {
+  requireKnownKeys(where, "part.coil", c, LONG_COIL_FIELDS);
   const innerRadius = requirePositive(where, "part.coil.innerRadius", c["innerRadius"], "m");
   const length = requirePositive(where, "part.coil.length", c["length"], "m");
   const turns = c["turns"];
@@ -223,6 +236,7 @@ function checkCoil(where: string, c: Record<string, unknown>): LongCoil {
 }
 
 function checkPlateCoil(where: string, c: Record<string, unknown>): CoilAbovePlate {
+  requireKnownKeys(where, "part.coil", c, PLATE_COIL_FIELDS);
   const innerRadius = requireNonNegative(where, "part.coil.innerRadius", c["innerRadius"], "m");
   const outerRadius = requirePositive(where, "part.coil.outerRadius", c["outerRadius"], "m");
   if (!(outerRadius > innerRadius)) throw new InputError(where, "part.coil.outerRadius", outerRadius, "m", `a finite number > part.coil.innerRadius (${innerRadius})`);

@@ -10,11 +10,18 @@ import multilayer from "../fixtures/inductance/multilayer.json" with { type: "js
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
+const geometry = (c: { innerRadius: number; outerRadius: number; length: number; turns: number }) => ({
+  innerRadius: c.innerRadius,
+  outerRadius: c.outerRadius,
+  length: c.length,
+  turns: c.turns,
+});
+
 describe("multilayerCoilInductance", () => {
   it("matches the Bessel–Struve fixture to 1e-8", () => {
     // fixture from scipy/mpmath Bessel–Struve integral, test/fixtures/inductance/generate.py
     expect(multilayer.meta.rtol).toBe(1e-8);
-    for (const c of multilayer.cases) expect(rel(multilayerCoilInductance(c), c.inductance)).toBeLessThanOrEqual(1e-8);
+    for (const c of multilayer.cases) expect(rel(multilayerCoilInductance(geometry(c)), c.inductance)).toBeLessThanOrEqual(1e-8);
   });
 
   it("tends to the current-sheet solenoid as the winding depth goes to zero", () => {

@@ -52,6 +52,11 @@ export interface Example {
   skip?: { paths: readonly string[]; reason: string };
   /** Study descriptions take quantities as text: treat quantity strings as numeric leaves. */
   quantityStrings?: boolean;
+  /**
+   * Argument paths (prefixes with `*`) of objects whose field names are data, not options (a map
+   * from names to values): the unknown-field check skips them.
+   */
+  openObjects?: readonly string[];
   /** The replacement used for the "string" bad number (default `"1"`, to catch coercion). */
   badString?: string;
 }
@@ -183,10 +188,14 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => ["demo", "bridge", "half", ["half", "full"]],
     skip: { paths: ["3", "3.*"], reason: "`allowed` is the calling function's own constant list, not checked input" },
   },
-  requireObject: { args: () => ["demo", "options", { radius: 1 }], skip: { paths: ["2.*"], reason: "any object is valid; its contents are not looked at" } },
+  requireObject: { args: () => ["demo", "options", { radius: 1 }], openObjects: ["2"], skip: { paths: ["2.*"], reason: "any object is valid; its contents are not looked at" } },
   requireKnownKeys: {
     args: () => ["demo", "options", { radius: 1 }, ["radius", "length"]],
     skip: { paths: ["2.*", "3", "3.*"], reason: "field values are not looked at, only their names; `known` is the calling function's own constant list" },
+  },
+  requireArrayLike: {
+    args: () => ["demo", "frequencies", [1e3, 2e3], "Hz"],
+    skip: { paths: ["2.*"], reason: "element values are not looked at, only the length" },
   },
   nearestName: { args: () => ["relativePermeabilty", ["diameter", "relativePermeability"]], kind: "kernel" },
 
@@ -481,7 +490,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   logSpacedFrequencies: { args: () => [10, 1000, 3] },
   parallelTank: {
     args: () => [{ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }],
-    nonFinite: { parallelResistance: "null when no parallel resistance was given (documented)" },
+    nonFinite: {
+      parallelResistance: "null when no parallel resistance was given (documented)",
+      zeroPhaseFrequency: "null when the coil Q ≤ 1: no zero-phase point (documented)",
+      maxImpedanceFrequency: "null when the impedance has no peak (documented)",
+      maxImpedance: "null when the impedance has no peak (documented)",
+    },
   },
   capacitorSeriesResistance: {
     args: () => [{ capacitance: 1e-6, dissipationFactor: 0.001, frequency: 50e3 }],
@@ -501,7 +515,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   },
   seriesInverter: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, switchingFrequency: 38e3 }] },
   frequencyForPower: { args: () => [{ supplyVoltage: 325, bridge: "half", inductance: 100e-6, capacitance: 0.2e-6, resistance: 4, power: 2000 }] },
-  seriesTank: { args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }] },
+  seriesTank: {
+    args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }],
+    nonFinite: { dampedFrequency: "null when Q ≤ 1/2: an over-damped tank does not ring (documented)" },
+  },
   tankStresses: { args: () => [SERIES_TANK, { frequency: SERIES_TANK.undampedFrequency, voltageRms: 10 }] },
   tankToleranceAnalysis: {
     // the @example uses 20000 samples; 2000 keep the suite quick and exercise the same code

@@ -26,6 +26,9 @@ import {
   type BadObject,
 } from "./harness.js";
 
+/** A field name no function accepts: every options object must reject it by name. */
+const UNKNOWN_KEY = "unknownFieldXyz";
+
 type AnyFunction = (...args: unknown[]) => unknown;
 
 const exported = Object.entries(api as Record<string, unknown>);
@@ -53,6 +56,12 @@ function unexpectedNonFinite(example: Example, result: unknown): string[] {
   return nonFiniteValues(result)
     .filter((b) => example.nonFinite?.[resultPathPattern(b.path)] === undefined)
     .map((b) => `${b.path === "" ? "(result)" : b.path} = ${String(b.value)}`);
+}
+
+function valueAt(args: readonly unknown[], path: readonly (string | number)[]): unknown {
+  let node: unknown = args;
+  for (const p of path) node = (node as Record<string | number, unknown>)[p];
+  return node;
 }
 
 function describeThrown(e: unknown): string {
@@ -132,6 +141,27 @@ for (const [name, fn] of functions) {
             const replacement = badNumber(bad, value, example.badString ?? "1");
             const problem = judge(fn, replaceAt(args(), path, replacement), example, allowed(example, key, bad));
             if (problem !== null) failures.push(`${label(i)}${key} = ${show(replacement)}: ${problem}`);
+          }
+        }
+      });
+      expect(failures, failures.join("\n")).toEqual([]);
+    });
+
+    it("throws InputError naming an unknown (misspelt) field of every options object", () => {
+      const failures: string[] = [];
+      calls.forEach((args, i) => {
+        const original = args();
+        for (const { path, isArray } of findLeaves(original, OPAQUE, example.quantityStrings ?? false).objects) {
+          const key = pathKey(path);
+          // library data sets and results passed back in are checked as whole objects, not by field name
+          if (isArray || OPAQUE.has(valueAt(original, path) as object) || skipped(example, key) || example.openObjects?.some((p) => matches(p, key))) continue;
+          const mutated = replaceAt(args(), [...path, UNKNOWN_KEY], 1);
+          try {
+            fn(...mutated);
+            failures.push(`${label(i)}${key}.${UNKNOWN_KEY}: accepted`);
+          } catch (e) {
+            if (!(e instanceof InputError)) failures.push(`${label(i)}${key}.${UNKNOWN_KEY}: threw ${describeThrown(e)}`);
+            else if (!e.message.includes(UNKNOWN_KEY)) failures.push(`${label(i)}${key}.${UNKNOWN_KEY}: InputError not naming it: ${e.message}`);
           }
         }
       });

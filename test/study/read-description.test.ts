@@ -40,7 +40,13 @@ describe("readHeaterDescription on the demo study files", () => {
     expect(d.part.material).toEqual(lowCarbonSteel);
     expect(d.coil.conductor.material).toEqual(silver);
     expect(d.concentrator?.material).toEqual(inventedExampleFerrite);
-    expect(() => readHeaterDescription(mutate(input, "part.material", { id: "x" }))).toThrow(/part\.material must be a material id/);
+    // a caller's own set is checked field by field, naming the field (issue: a missing
+    // temperatureRange.typical gave a TypeError, a negative density blamed lumpedHeatUp's mass)
+    expect(() => readHeaterDescription(mutate(input, "part.material", { id: "x" }))).toThrow(/part\.material\.name must be a string/);
+    expect(() => readHeaterDescription(mutate(input, "part.material", { ...lowCarbonSteel, density: -7850 }))).toThrow(/part\.material\.density must be a finite number > 0/);
+    expect(() => readHeaterDescription(mutate(input, "part.material", { ...lowCarbonSteel, emissivity: { min: 0.1, max: 0.9, source: "x" } }))).toThrow(/part\.material\.emissivity\.typical must be/);
+    expect(() => readHeaterDescription(mutate(input, "part.material", { ...lowCarbonSteel, densty: 7850 }))).toThrow(/part\.material\.densty must be absent.*did you mean "density"/);
+    expect(() => readHeaterDescription(mutate(input, "part.material", 42))).toThrow(/part\.material must be/);
   });
 
   it("rejects a non-object description", () => {

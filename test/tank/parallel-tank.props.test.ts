@@ -90,7 +90,8 @@ describe("parallelTank properties", () => {
         const z0 = Math.sqrt(L / C);
         const t = parallelTank({ inductance: L, capacitance: C, coilResistance: ratio * z0, ...(rp === undefined ? {} : { parallelResistance: rp * z0 }) });
         for (const v of Object.values(t)) if (typeof v === "number") expect(Number.isFinite(v)).toBe(true);
-        expect(t.resonant).toBe(ratio < 1);
+        // at ratio = 1 exactly the test's √(L/C) and the library's √L/√C may differ in the last bit
+        if (Math.abs(ratio - 1) > 1e-12) expect(t.resonant).toBe(ratio < 1);
       }),
       settings,
     );
