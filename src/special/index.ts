@@ -72,3 +72,4 @@ export {
 } from "./kelvin.js";
 export type { KelvinFunctions } from "./kelvin.js";
 export * from "./ode.js";
+export { solveDense } from "./dense-solve.js";
