@@ -4,5 +4,6 @@
  *
  * @module converters
  */
-export * from "./fha.js";
+export { llcGain, seriesResonantGain, parallelResonantGain, lccGain } from "./fha.js";
+export type { LlcGainOptions, SeriesResonantGainOptions, ParallelResonantGainOptions, LccGainOptions } from "./fha.js";
 export * from "./llc-operating-point.js";

@@ -584,8 +584,15 @@ export function llcSteadyState(lam: number, q: number, fn: number): LlcSteadySta
   let sequence = "";
   const durations: number[] = [];
   for (let k = 0; k < evLength; k++) {
-    sequence += MODE_LETTER[evModes[k] ?? 0] ?? "?";
-    durations.push(evTau[k] ?? 0);
+    const tau = evTau[k] ?? 0;
+    if (tau <= 1e-9 * theta) continue; // a zero-length segment at a mode boundary is not a mode
+    const letter = MODE_LETTER[evModes[k] ?? 0] ?? "?";
+    if (sequence.endsWith(letter)) {
+      durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
+      continue;
+    }
+    sequence += letter;
+    durations.push(tau);
   }
   return {
     gain: m,
