@@ -51,7 +51,7 @@ const LLC_KEYS = ["inductanceRatio", "qualityFactor", "normalisedFrequency"] as 
  * ```ts
  * import { llcGain } from "fluxwright";
  * console.log(llcGain({ inductanceRatio: 6, qualityFactor: 0.4, normalisedFrequency: 1 })); // 1
- * console.log(llcGain({ inductanceRatio: 6, qualityFactor: 0.4, normalisedFrequency: 0.7 }).toFixed(4)); // 1.2497
+ * console.log(llcGain({ inductanceRatio: 6, qualityFactor: 0.4, normalisedFrequency: 0.7 }).toFixed(4)); // 1.1410
  * ```
  * @category Converters
  */
@@ -123,7 +123,7 @@ export interface SeriesResonantGainOptions {
  * @example
  * ```ts
  * import { seriesResonantGain } from "fluxwright";
- * console.log(seriesResonantGain({ qualityFactor: 1, normalisedFrequency: 1.2 }).toFixed(4)); // 0.9377
+ * console.log(seriesResonantGain({ qualityFactor: 1, normalisedFrequency: 1.2 }).toFixed(4)); // 0.9389
  * ```
  * @category Converters
  */
@@ -219,7 +219,7 @@ export interface LccGainOptions {
  * @example
  * ```ts
  * import { lccGain } from "fluxwright";
- * console.log(lccGain({ qualityFactor: 1, normalisedFrequency: 1.2, capacitanceRatio: 1 }).toFixed(4)); // 1.5002
+ * console.log(lccGain({ qualityFactor: 1, normalisedFrequency: 1.2, capacitanceRatio: 1 }).toFixed(4)); // 1.2110
  * ```
  * @category Converters
  */

@@ -289,11 +289,11 @@ function operatingPoint(where: string, options: LlcOperatingPointOptions | Serie
  * import { llcOperatingPoint } from "fluxwright";
  * const op = llcOperatingPoint({
  *   bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: 60e-6,
- *   resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 12,
+ *   resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 5,
  * });
  * console.log(op.conductionMode); // PO
- * console.log(op.outputVoltage.toFixed(3)); // 24.915
- * console.log(op.firstHarmonic.outputVoltage.toFixed(3)); // 24.737
+ * console.log(op.outputVoltage.toFixed(3)); // 26.769
+ * console.log(op.firstHarmonic.outputVoltage.toFixed(3)); // 26.288
  * ```
  * @category Converters
  */
@@ -323,7 +323,7 @@ export function llcOperatingPoint(options: LlcOperatingPointOptions): LlcOperati
  *   resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6,
  * });
  * console.log(op.conductionMode); // NP
- * console.log(op.gain.toFixed(4)); // 0.9145
+ * console.log(op.gain.toFixed(4)); // 0.9505
  * ```
  * @category Converters
  */

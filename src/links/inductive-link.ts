@@ -87,7 +87,12 @@ export interface InductiveLink {
   /** Power from the source [W]. */
   readonly inputPower: number;
   /** Impedance seen by the source [Ω]. */
-  readonly inputImpedance: { readonly re: number; readonly im: number };
+  readonly inputImpedance: {
+    /** Resistance [Ω]. */
+    readonly re: number;
+    /** Reactance [Ω], > 0 inductive. */
+    readonly im: number;
+  };
   /** RMS source current [A]. */
   readonly inputCurrentRms: number;
   /** RMS current of the primary coil [A]. */
@@ -161,8 +166,8 @@ function inv(a: Complex): Complex {
  *   primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3,
  *   compensation: "series-series", loadResistance: 5, sourceVoltage: 10,
  * });
- * console.log(link.efficiency.toFixed(4)); // 0.9692
- * console.log(link.outputPower.toFixed(3)); // 7.157
+ * console.log(link.efficiency.toFixed(4)); // 0.9455
+ * console.log(link.outputPower.toFixed(3)); // 37.265
  * ```
  * @category Inductive links
  */

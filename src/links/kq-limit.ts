@@ -51,7 +51,7 @@ function checkKq(where: string, options: MaximumLinkEfficiencyOptions, extra: re
  * @example
  * ```ts
  * import { maximumLinkEfficiency } from "fluxwright";
- * console.log(maximumLinkEfficiency({ couplingCoefficient: 0.2, primaryQuality: 200, secondaryQuality: 150 }).toFixed(4)); // 0.9428
+ * console.log(maximumLinkEfficiency({ couplingCoefficient: 0.2, primaryQuality: 200, secondaryQuality: 150 }).toFixed(4)); // 0.9439
  * ```
  * @category Inductive links
  */
@@ -89,7 +89,7 @@ export interface OptimalLoadResistanceOptions extends MaximumLinkEfficiencyOptio
  * @example
  * ```ts
  * import { optimalLoadResistance } from "fluxwright";
- * console.log(optimalLoadResistance({ couplingCoefficient: 0.2, primaryQuality: 200, secondaryQuality: 150, secondaryResistance: 0.05 }).toFixed(4)); // 1.7393
+ * console.log(optimalLoadResistance({ couplingCoefficient: 0.2, primaryQuality: 200, secondaryQuality: 150, secondaryResistance: 0.05 }).toFixed(4)); // 1.7328
  * ```
  * @category Inductive links
  */

@@ -29,7 +29,7 @@
  * const a = Float64Array.from([2, 1, 1, 3]);
  * const b = Float64Array.from([3, 5]);
  * solveDense(2, a, b);
- * console.log(b[0], b[1]); // ≈ 0.8 1.4
+ * console.log(b[0], b[1]); // 0.8 1.4
  * ```
  * @category Linear algebra
  */

@@ -478,7 +478,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   parallelResonantGain: { args: () => [{ qualityFactor: 0.5, normalisedFrequency: 1 }] },
   lccGain: { args: () => [{ qualityFactor: 1, normalisedFrequency: 1.2, capacitanceRatio: 1 }] },
   llcOperatingPoint: {
-    args: () => [{ bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: 60e-6, resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 12 }],
+    args: () => [{ bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: 60e-6, resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 5 }],
     variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
     allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
   },
