@@ -33,3 +33,25 @@ describe("converter properties", () => {
     );
   });
 });
+
+describe("exact steady state over the tested domain", () => {
+  it("converges and conserves power on a grid of 3 ≤ L_n ≤ 10 (and ∞), 0.15 ≤ Q ≤ 1, 0.45 ≤ f_n ≤ 1.6", async () => {
+    const { seriesResonantOperatingPoint } = await import("../../src/index.js");
+    const lr = 60e-6;
+    const cr = 24e-9;
+    const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cr));
+    const zr = Math.sqrt(lr / cr);
+    for (const ln of [3, 6, 10, Infinity]) {
+      for (let qi = 0; qi <= 4; qi++) {
+        for (let fi = 0; fi <= 12; fi++) {
+          const q = 0.15 * Math.pow(1 / 0.15, qi / 4);
+          const fn = 0.45 * Math.pow(1.6 / 0.45, fi / 12);
+          const base = { bridge: "half" as const, inputVoltage: 390, turnsRatio: 8, resonantInductance: lr, resonantCapacitance: cr, switchingFrequency: fn * fr, loadResistance: (Math.PI ** 2 * zr) / (q * 8 * 64) };
+          const op = ln === Infinity ? seriesResonantOperatingPoint(base) : llcOperatingPoint({ ...base, magnetisingInductance: ln * lr });
+          expect(Math.abs(op.inputPower / op.outputPower - 1)).toBeLessThanOrEqual(1e-9);
+          expect(op.validity).toHaveLength(0);
+        }
+      }
+    }
+  });
+});
