@@ -16,4 +16,6 @@ export * from "./tank/index.js";
 export * from "./workpiece/index.js";
 export * from "./thermal/index.js";
 export * from "./safety/index.js";
+export * from "./converters/index.js";
+export * from "./links/index.js";
 export * from "./study/index.js";

@@ -74,3 +74,4 @@ export {
 } from "./kelvin.js";
 export type { KelvinFunctions } from "./kelvin.js";
 export * from "./ode.js";
+export { solveDense } from "./dense-solve.js";

@@ -264,6 +264,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   besselK0Scaled: kernel1(1),
   besselK1Scaled: kernel1(1),
   brentRoot: { kind: "kernel", args: () => [(t: number) => Math.cos(t) - t, 0, 1] },
+  solveDense: { kind: "kernel", args: () => [2, Float64Array.from([2, 1, 1, 3]), Float64Array.from([3, 5])] },
   complex: { kind: "kernel", args: () => [1, -2] },
   cAdd: kernelC([1, 2], [3, -1]),
   cSub: kernelC([1, 2], [3, -1]),
@@ -519,6 +520,32 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }],
     nonFinite: { dampedFrequency: "null when Q ≤ 1/2: an over-damped tank does not ring (documented)" },
   },
+  llcGain: { args: () => [{ inductanceRatio: 6, qualityFactor: 0.4, normalisedFrequency: 0.7 }] },
+  seriesResonantGain: { args: () => [{ qualityFactor: 1, normalisedFrequency: 1.2 }] },
+  parallelResonantGain: { args: () => [{ qualityFactor: 0.5, normalisedFrequency: 1 }] },
+  lccGain: { args: () => [{ qualityFactor: 1, normalisedFrequency: 1.2, capacitanceRatio: 1 }] },
+  llcOperatingPoint: {
+    args: () => [{ bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: 60e-6, resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 5 }],
+    variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
+    allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
+  },
+  seriesResonantOperatingPoint: {
+    args: () => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 20e-6, resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6 }],
+    nonFinite: { inductanceRatio: "no magnetising branch: L_m/L_r is infinite by definition (documented)" },
+  },
+  inductiveLink: {
+    args: () => [{ primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }],
+    variants: [
+      () => [{ primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, compensation: "parallel-parallel", loadResistance: 5, sourceVoltage: 10, primaryCapacitance: 50e-9, secondaryCapacitance: 100e-9 }],
+      () => [{ primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, compensation: "double-lcc", loadResistance: 5, sourceVoltage: 10, primaryFilterInductance: 6e-6, secondaryFilterInductance: 4e-6 }],
+    ],
+    allow: [
+      { paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "lossless coils are allowed (domain ≥ 0)" },
+      { paths: ["0.primaryCapacitance", "0.secondaryCapacitance"], kinds: ["undefined"], reason: "optional: sized by the documented rule when absent" },
+    ],
+  },
+  maximumLinkEfficiency: { args: () => [{ couplingCoefficient: 0.2, primaryQuality: 200, secondaryQuality: 150 }] },
+  optimalLoadResistance: { args: () => [{ couplingCoefficient: 0.2, primaryQuality: 200, secondaryQuality: 150, secondaryResistance: 0.05 }] },
   tankStresses: { args: () => [SERIES_TANK, { frequency: SERIES_TANK.undampedFrequency, voltageRms: 10 }] },
   tankToleranceAnalysis: {
     // the @example uses 20000 samples; 2000 keep the suite quick and exercise the same code

@@ -1,0 +1,9 @@
+/**
+ * Resonant DC–DC converters: LLC, series (SRC), parallel (PRC) and LCC. The exact periodic
+ * steady state of the ideal piecewise-linear circuit, with the first-harmonic values beside it.
+ *
+ * @module converters
+ */
+export { llcGain, seriesResonantGain, parallelResonantGain, lccGain } from "./fha.js";
+export type { LlcGainOptions, SeriesResonantGainOptions, ParallelResonantGainOptions, LccGainOptions } from "./fha.js";
+export * from "./llc-operating-point.js";

@@ -1,0 +1,613 @@
+/**
+ * The exact periodic steady state of the ideal LLC (and, with an infinite magnetising
+ * inductance, series-resonant) converter with a stiff output capacitor, in normalised units:
+ * voltages in units of the bridge amplitude $V_b$, currents in $V_b/Z_r$, time as
+ * $\theta = \omega_r t$. Internal: the public wrappers check the input and scale the result.
+ *
+ * States: $j$ (resonant current), $u$ (resonant capacitor voltage), $g$ (magnetising current).
+ * In the positive half period the bridge applies $+1$. Three circuit modes:
+ * - P (rectifier conducts, $v_m = +m$), N ($v_m = -m$): $j' = 1 - u \mp m$, $u' = j$,
+ *   $g' = \pm m\lambda$ with $\lambda = L_r/L_m$;
+ * - O (rectifier off, $j = g$): $j' = \lambda(1-u)/(1+\lambda)$, $u' = j$;
+ *   it lasts while $|v_m| = |1-u|/(1+\lambda) < m$.
+ *
+ * The half-wave antisymmetric steady state $x(\Theta) = -x(0)$, $\Theta = \pi/f_n$, with
+ * the load balance $\frac1\Theta\int_0^\Theta |j-g|\,d\theta = \frac{8Q}{\pi^2}m$, is a
+ * boundary-value problem. For an assumed mode sequence the half-period map is affine in
+ * $x(0)$, so $x(0)$ follows from a 3×3 linear solve, and the unknowns left are $m$ and the
+ * switching instants, fixed by the switching conditions (Newton). The sequence is then checked
+ * by an event-driven propagation of the solution (exact events: extrema of the sinusoid-plus-
+ * ramp found in closed form, the crossing bracketed and solved by Brent's method); if the
+ * physics picks another sequence, it is adopted and the solve repeated.
+ *
+ * @packageDocumentation
+ */
+import { brentRoot, solveDense } from "../special/index.js";
+
+export const MODE_O = 0;
+export const MODE_P = 1;
+export const MODE_N = 2;
+const MODE_LETTER = ["O", "P", "N"] as const;
+
+const MAX_SEGMENTS = 48;
+
+/** The solved steady state and its waveform figures, normalised; filled by {@link llcSteadyState}. */
+export interface LlcSteadyState {
+  /** Gain m = n·V_out/V_b. */
+  gain: number;
+  /** State at θ = 0 (start of the positive half period). */
+  j0: number;
+  u0: number;
+  g0: number;
+  /** Mode sequence of the positive half period, e.g. "PO". */
+  sequence: string;
+  /** Segment durations [normalised time]. */
+  durations: number[];
+  /** RMS of j, of j − g (rectifier current), peaks of |j|, |u|, |g|. */
+  resonantRms: number;
+  rectifierRms: number;
+  resonantPeak: number;
+  capacitorPeak: number;
+  magnetisingPeak: number;
+  /** Mean of |j − g| over the period (rectified current), and mean of j over the positive half (input current). */
+  rectifiedMean: number;
+  inputMean: number;
+  /** Largest residual of the boundary conditions in the verifying propagation. */
+  residual: number;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Event search: first down-crossing of h(t) = A cos(wt) + B sin(wt) + C + D t on (0, tmax].
+
+let hA = 0;
+let hB = 0;
+let hC = 0;
+let hD = 0;
+let hW = 1;
+function hEval(t: number): number {
+  return hA * Math.cos(hW * t) + hB * Math.sin(hW * t) + hC + hD * t;
+}
+const BRENT = { tolerance: 0 };
+
+/**
+ * First t in (0, tmax] where h, non-negative at 0, becomes ≤ 0 (h is split at its extrema,
+ * found in closed form, into monotone pieces). Returns Infinity when h stays positive.
+ */
+export function firstDownCrossing(A: number, B: number, C: number, D: number, w: number, tmax: number): number {
+  hA = A;
+  hB = B;
+  hC = C;
+  hD = D;
+  hW = w;
+  const R = Math.hypot(A, B);
+  hTol = 1e-13 * (R + Math.abs(C) + Math.abs(D) * tmax);
+  // h'(t) = wR cos(wt + β) + D, β = atan2(A, B)
+  let tl = 0;
+  let hl = hEval(0);
+  const monotone = !(w > 0) || !(R > 0) || Math.abs(D) >= w * R;
+  if (monotone) return crossIn(0, hl, tmax, hEval(tmax));
+  const beta = Math.atan2(A, B);
+  const gamma = Math.acos(-D / (w * R));
+  const period = (2 * Math.PI) / w;
+  let t1 = (gamma - beta) / w;
+  let t2 = (-gamma - beta) / w;
+  t1 -= Math.floor(t1 / period) * period;
+  t2 -= Math.floor(t2 / period) * period;
+  if (t1 <= 0) t1 += period;
+  if (t2 <= 0) t2 += period;
+  for (let guard = 0; guard < 100000; guard++) {
+    const tr = Math.min(t1, t2, tmax);
+    const hr = hEval(tr);
+    const root = crossIn(tl, hl, tr, hr);
+    if (root !== Infinity) return root;
+    if (tr >= tmax) return Infinity;
+    if (tr === t1) t1 += period;
+    else t2 += period;
+    tl = tr;
+    hl = hr;
+  }
+  return Infinity;
+}
+
+let hTol = 0;
+/** The crossing inside one monotone piece; a start at zero (within rounding) counts only if h then clearly goes negative. */
+function crossIn(tl: number, hl: number, tr: number, hr: number): number {
+  if (hl <= hTol) return hr < -hTol ? tl : Infinity;
+  if (hr > 0) return Infinity;
+  if (hr === 0) return tr;
+  return brentRoot(hEval, tl, tr, BRENT);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Segment flows. Each takes a state and a duration and writes the end state into `out`.
+
+const out = new Float64Array(3);
+
+/** Advance by one segment of mode `mode` for time `tau`; `forced` = false drops the constant forcing (linear part only). */
+function flow(mode: number, tau: number, j: number, u: number, g: number, m: number, lam: number, forced: boolean): void {
+  if (mode === MODE_O) {
+    const drive = forced ? 1 : 0;
+    if (lam > 0) {
+      const w = Math.sqrt(lam / (1 + lam));
+      const c = Math.cos(w * tau);
+      const s = Math.sin(w * tau);
+      out[0] = j * c - (u - drive) * w * s;
+      out[1] = drive + (u - drive) * c + (j / w) * s;
+    } else {
+      out[0] = j;
+      out[1] = u + j * tau;
+    }
+    out[2] = out[0];
+    return;
+  }
+  const sign = mode === MODE_P ? 1 : -1;
+  const e = forced ? 1 - sign * m : 0;
+  const c = Math.cos(tau);
+  const s = Math.sin(tau);
+  out[0] = j * c + (e - u) * s;
+  out[1] = e + (u - e) * c + j * s;
+  out[2] = g + (forced ? sign * m * lam * tau : 0);
+}
+
+/** ∫ (j − g) dθ over a P or N segment from (j, u, g). */
+function diodeIntegral(mode: number, tau: number, j: number, u: number, g: number, m: number, lam: number): number {
+  const sign = mode === MODE_P ? 1 : -1;
+  const e = 1 - sign * m;
+  return j * Math.sin(tau) + (e - u) * (1 - Math.cos(tau)) - g * tau - 0.5 * sign * m * lam * tau * tau;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Newton on (m, τ_0 … τ_{k−2}) for a fixed sequence.
+
+const seqModes = new Int32Array(MAX_SEGMENTS);
+const seqTau = new Float64Array(MAX_SEGMENTS);
+let seqLength = 0;
+
+const resid = new Float64Array(MAX_SEGMENTS + 3);
+const residTrial = new Float64Array(MAX_SEGMENTS + 3);
+const jac = new Float64Array((MAX_SEGMENTS + 3) * (MAX_SEGMENTS + 3));
+const step = new Float64Array(MAX_SEGMENTS + 3);
+const unknowns = new Float64Array(MAX_SEGMENTS + 3);
+const trial = new Float64Array(MAX_SEGMENTS + 3);
+
+/**
+ * Residuals of the sequence solve at unknowns y = (j0, u0, g0, m, τ_0 … τ_{n−2}); the last
+ * duration is what remains of the half period. Residuals: antisymmetry (3), the switching
+ * condition at each interior boundary (n − 1), and the load balance (relative). Durations may
+ * go negative during the iteration (the flows are defined backwards too); the verifying
+ * propagation decides what is physical.
+ */
+function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: number, r: Float64Array): boolean {
+  const n = seqLength;
+  const m = y[3] ?? 0;
+  let last = theta;
+  for (let k = 0; k < n - 1; k++) {
+    seqTau[k] = y[k + 4] ?? 0;
+    last -= seqTau[k] ?? 0;
+  }
+  seqTau[n - 1] = last;
+  let j = y[0] ?? 0;
+  let u = y[1] ?? 0;
+  let g = y[2] ?? 0;
+  let charge = 0;
+  const band = m * (1 + lam);
+  for (let k = 0; k < n; k++) {
+    const mode = seqModes[k] ?? 0;
+    const tau = seqTau[k] ?? 0;
+    if (mode !== MODE_O) charge += (mode === MODE_P ? 1 : -1) * diodeIntegral(mode, tau, j, u, g, m, lam);
+    flow(mode, tau, j, u, g, m, lam, true);
+    j = out[0] ?? 0;
+    u = out[1] ?? 0;
+    g = out[2] ?? 0;
+    if (k < n - 1) {
+      const next = seqModes[k + 1] ?? 0;
+      if (mode !== MODE_O) r[k + 4] = j - g;
+      else r[k + 4] = next === MODE_P ? u - (1 - band) : u - (1 + band);
+    }
+  }
+  r[0] = j + (y[0] ?? 0);
+  r[1] = u + (y[1] ?? 0);
+  r[2] = g + (y[2] ?? 0);
+  r[3] = charge / (theta * kappa * m) - 1;
+  return Number.isFinite(r[3] ?? NaN) && m > 0;
+}
+
+function norm(r: Float64Array, n: number): number {
+  let s = 0;
+  for (let i = 0; i < n; i++) s = Math.max(s, Math.abs(r[i] ?? 0));
+  return s;
+}
+
+/** Newton with a forward-difference Jacobian and backtracking; returns the final residual norm. */
+function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0: number, g0: number, m: number): number {
+  const n = seqLength + 3;
+  unknowns[0] = j0;
+  unknowns[1] = u0;
+  unknowns[2] = g0;
+  unknowns[3] = m;
+  for (let k = 0; k < seqLength - 1; k++) unknowns[k + 4] = seqTau[k] ?? 0;
+  if (!sequenceResiduals(unknowns, theta, lam, kappa, resid)) return Infinity;
+  let rn = norm(resid, n);
+  const scale = Math.max(1, Math.abs(j0), Math.abs(u0), Math.abs(g0));
+  for (let iteration = 0; iteration < 40 && rn > 1e-15; iteration++) {
+    for (let c = 0; c < n; c++) {
+      const base = unknowns[c] ?? 0;
+      const h = 1e-7 * (c < 3 ? scale : c === 3 ? Math.max(Math.abs(base), 1e-3) : theta);
+      unknowns[c] = base + h;
+      if (!sequenceResiduals(unknowns, theta, lam, kappa, residTrial)) return Infinity;
+      unknowns[c] = base;
+      for (let i = 0; i < n; i++) jac[i * n + c] = ((residTrial[i] ?? 0) - (resid[i] ?? 0)) / h;
+    }
+    for (let i = 0; i < n; i++) step[i] = -(resid[i] ?? 0);
+    if (!solveDense(n, jac, step)) return Infinity;
+    let lambda = 1;
+    let accepted = false;
+    for (let back = 0; back < 30; back++) {
+      for (let i = 0; i < n; i++) trial[i] = (unknowns[i] ?? 0) + lambda * (step[i] ?? 0);
+      if ((trial[3] ?? 0) > 0.2 * (unknowns[3] ?? 0) && sequenceResiduals(trial, theta, lam, kappa, residTrial)) {
+        const tn = norm(residTrial, n);
+        if (tn < rn) {
+          for (let i = 0; i < n; i++) {
+            unknowns[i] = trial[i] ?? 0;
+            resid[i] = residTrial[i] ?? 0;
+          }
+          rn = tn;
+          accepted = true;
+          break;
+        }
+      }
+      lambda *= 0.5;
+    }
+    if (!accepted) break;
+  }
+  return rn;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Event-driven propagation over the positive half period from a given state.
+
+const evModes = new Int32Array(MAX_SEGMENTS);
+const evTau = new Float64Array(MAX_SEGMENTS);
+let evLength = 0;
+let evOverflow = false;
+const evEnd = new Float64Array(3);
+let evCharge = 0;
+let evJ2 = 0;
+let evD2 = 0;
+let evPeakJ = 0;
+let evPeakU = 0;
+let evPeakG = 0;
+
+/** max |c + a cos(wt) + b sin(wt)| for t in [0, tmax] (w > 0). */
+function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number): number {
+  let best = Math.max(Math.abs(c + a), Math.abs(c + a * Math.cos(w * tmax) + b * Math.sin(w * tmax)));
+  const R = Math.hypot(a, b);
+  if (!(R > 0)) return best;
+  let t = Math.atan2(b, a) / w;
+  const half = Math.PI / w;
+  t -= Math.floor(t / half) * half;
+  for (let k = 0; t <= tmax && k < 100000; k++) {
+    best = Math.max(best, Math.abs(c + a * Math.cos(w * t) + b * Math.sin(w * t)));
+    t += half;
+  }
+  return best;
+}
+
+/** ∫_0^τ (a cos t + b sin t)² dt. */
+function squareIntegral(a: number, b: number, tau: number): number {
+  const s2 = Math.sin(2 * tau);
+  const s = Math.sin(tau);
+  return 0.5 * (a * a + b * b) * tau + 0.25 * (a * a - b * b) * s2 + a * b * s * s;
+}
+
+/** Mode at the start of a segment from the state (bridge +1). */
+function startMode(j: number, u: number, g: number, m: number, lam: number): number {
+  const d = j - g;
+  const scale = Math.max(Math.abs(j), Math.abs(g), 1e-300);
+  if (Math.abs(d) > 1e-12 * scale) return d > 0 ? MODE_P : MODE_N;
+  const vm = (1 - u) / (1 + lam);
+  if (vm >= m) return MODE_P;
+  if (vm <= -m) return MODE_N;
+  return MODE_O;
+}
+
+export function propagateEvents(j0: number, u0: number, g0: number, m: number, lam: number, theta: number, record: boolean): void {
+  let j = j0;
+  let u = u0;
+  let g = g0;
+  let t = 0;
+  evLength = 0;
+  evOverflow = false;
+  evCharge = 0;
+  evJ2 = 0;
+  evD2 = 0;
+  evPeakJ = 0;
+  evPeakU = 0;
+  evPeakG = 0;
+  let mode = startMode(j, u, g, m, lam);
+  const band = m * (1 + lam);
+  while (t < theta) {
+    if (evLength >= MAX_SEGMENTS) {
+      evOverflow = true;
+      break;
+    }
+    const remaining = theta - t;
+    let tau: number;
+    let next = mode;
+    if (mode === MODE_O) {
+      g = j;
+      if (lam > 0) {
+        const w = Math.sqrt(lam / (1 + lam));
+        const a = u - 1;
+        const b = j / w;
+        // stays while 1 − band < u < 1 + band
+        const tLow = firstDownCrossing(a, b, band, 0, w, remaining); // u − (1 − band)
+        const tHigh = firstDownCrossing(-a, -b, band, 0, w, remaining); // (1 + band) − u
+        tau = Math.min(tLow, tHigh, remaining);
+        if (tau < remaining) next = tLow <= tHigh ? MODE_P : MODE_N;
+        if (record) {
+          evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, j, -a * w, w, tau));
+          evPeakG = Math.max(evPeakG, sinusoidPeak(0, j, -a * w, w, tau));
+          evPeakU = Math.max(evPeakU, sinusoidPeak(1, a, b, w, tau));
+          evJ2 += squareIntegral(j, -a * w, w * tau) / w;
+        }
+      } else {
+        // series-resonant limit: the current rests at zero until the bridge switches
+        tau = remaining;
+        if (record) {
+          evPeakJ = Math.max(evPeakJ, Math.abs(j));
+          evPeakG = Math.max(evPeakG, Math.abs(j));
+          evPeakU = Math.max(evPeakU, Math.abs(u), Math.abs(u + j * tau));
+          evJ2 += j * j * tau;
+        }
+      }
+    } else {
+      const sign = mode === MODE_P ? 1 : -1;
+      const e = 1 - sign * m;
+      // s·(j − g) = s[j cos t + (e − u) sin t − g] − m λ t
+      const root = firstDownCrossing(sign * j, sign * (e - u), -sign * g, -m * lam, 1, remaining);
+      tau = Math.min(root, remaining);
+      const integral = diodeIntegral(mode, tau, j, u, g, m, lam);
+      evCharge += sign * integral;
+      if (record) {
+        const a = j;
+        const b = e - u;
+        evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, a, b, 1, tau));
+        evPeakU = Math.max(evPeakU, sinusoidPeak(e, u - e, j, 1, tau));
+        const gEnd = g + sign * m * lam * tau;
+        evPeakG = Math.max(evPeakG, Math.abs(g), Math.abs(gEnd));
+        const j2 = squareIntegral(a, b, tau);
+        evJ2 += j2;
+        // ∫ (j − g − c t)² with c = s m λ
+        const c = sign * m * lam;
+        const sinT = Math.sin(tau);
+        const cosT = Math.cos(tau);
+        const intJ = a * sinT + b * (1 - cosT);
+        const intJt = a * (tau * sinT + cosT - 1) + b * (sinT - tau * cosT);
+        const intLin2 = g * g * tau + g * c * tau * tau + (c * c * tau * tau * tau) / 3;
+        evD2 += j2 - 2 * (g * intJ + c * intJt) + intLin2;
+      }
+      if (root < remaining) {
+        flow(mode, tau, j, u, g, m, lam, true);
+        const vm = (1 - (out[1] ?? 0)) / (1 + lam);
+        next = vm >= m ? MODE_P : vm <= -m ? MODE_N : MODE_O;
+        if (next === mode) next = MODE_O;
+      }
+    }
+    flow(mode, tau, j, u, g, m, lam, true);
+    j = out[0] ?? 0;
+    u = out[1] ?? 0;
+    g = out[2] ?? 0;
+    if (mode === MODE_O) g = j;
+    evModes[evLength] = mode;
+    evTau[evLength] = tau;
+    evLength++;
+    t += tau;
+    if (tau >= remaining) break;
+    mode = next;
+  }
+  evEnd[0] = j;
+  evEnd[1] = u;
+  evEnd[2] = g;
+}
+
+// ---------------------------------------------------------------------------------------------
+// First-harmonic seed and the driver.
+
+/** First-harmonic state at θ = 0 and gain, normalised (bridge fundamental (4/π) sin(f_n θ)). */
+export function fhaSeed(lam: number, q: number, fn: number, seed: Float64Array): void {
+  // impedances normalised by Z_r: series j(fn − 1/fn); magnetising j fn/λ ∥ 1/q
+  const xs = fn - 1 / fn;
+  // admittance of the parallel branch: q − j λ/fn
+  const yr = q;
+  const yi = -lam / fn;
+  // Z_par = 1/(yr + j yi)
+  const den = yr * yr + yi * yi;
+  const zpr = yr / den;
+  const zpi = -yi / den;
+  // total impedance
+  const ztr = zpr;
+  const zti = zpi + xs;
+  const v1 = 4 / Math.PI;
+  // I = v1 / Zt (phasor, reference sin → imaginary part is the value at θ = 0)
+  const zt2 = ztr * ztr + zti * zti;
+  const ir = (v1 * ztr) / zt2;
+  const ii = (-v1 * zti) / zt2;
+  // Vm = I · Z_par
+  const vr = ir * zpr - ii * zpi;
+  const vi = ir * zpi + ii * zpr;
+  // capacitor voltage U = I · (−j/fn)
+  const ur = ii / fn;
+  const ui = -ir / fn;
+  // magnetising current Im = Vm / (j fn/λ) = −j λ Vm / fn
+  const gr = (lam * vi) / fn;
+  const gi = (-lam * vr) / fn;
+  seed[0] = ii; // j(0) = Im(I)
+  seed[1] = ui;
+  seed[2] = gi;
+  seed[3] = (Math.PI / 4) * Math.hypot(vr, vi);
+  seed[4] = Math.hypot(ir, ii);
+  seed[5] = Math.hypot(ur, ui);
+  seed[6] = Math.hypot(gr, gi);
+  // current at the end of the positive half (θ = Θ): phasor value Im(I e^{jπ}) = −Im(I)
+  seed[7] = -ii;
+  // rectifier current amplitude (I − Im)
+  seed[8] = Math.hypot(ir - gr, ii - gi);
+}
+
+const seed = new Float64Array(9);
+
+/** Removes segment k of the assumed sequence, merging neighbours of the same mode. */
+function dropSegment(k: number): void {
+  const tau = seqTau[k] ?? 0;
+  for (let i = k; i < seqLength - 1; i++) {
+    seqModes[i] = seqModes[i + 1] ?? 0;
+    seqTau[i] = seqTau[i + 1] ?? 0;
+  }
+  seqLength--;
+  // give the removed time to a neighbour so the durations still fill the half period
+  const target = k > 0 ? k - 1 : 0;
+  seqTau[target] = (seqTau[target] ?? 0) + tau;
+  if (k > 0 && k < seqLength && seqModes[k - 1] === seqModes[k]) {
+    seqTau[k - 1] = (seqTau[k - 1] ?? 0) + (seqTau[k] ?? 0);
+    for (let i = k; i < seqLength - 1; i++) {
+      seqModes[i] = seqModes[i + 1] ?? 0;
+      seqTau[i] = seqTau[i + 1] ?? 0;
+    }
+    seqLength--;
+  }
+}
+
+function adoptEvents(): void {
+  seqLength = evLength;
+  for (let k = 0; k < evLength; k++) {
+    seqModes[k] = evModes[k] ?? 0;
+    seqTau[k] = evTau[k] ?? 0;
+  }
+}
+
+function verifyResidual(j0: number, u0: number, g0: number, m: number, kappa: number, theta: number): number {
+  const scale = Math.max(1, Math.abs(j0), Math.abs(u0), Math.abs(g0));
+  const e1 = Math.abs((evEnd[0] ?? 0) + j0);
+  const e2 = Math.abs((evEnd[1] ?? 0) + u0);
+  const e3 = Math.abs((evEnd[2] ?? 0) + g0);
+  const e4 = Math.abs(evCharge / theta - kappa * m) / Math.max(kappa * m, 1e-300);
+  return Math.max(e1 / scale, e2 / scale, e3 / scale, e4);
+}
+
+/** Tolerance on the verifying propagation's boundary residual for accepting a solution. */
+export const STEADY_STATE_TOLERANCE = 1e-9;
+
+function attempt(lam: number, q: number, fn: number, theta: number, kappa: number, m: number, j0: number, u0: number, g0: number): number {
+  let mm = m;
+  let sj = j0;
+  let su = u0;
+  let sg = g0;
+  let best = Infinity;
+  for (let round = 0; round < 8; round++) {
+    propagateEvents(sj, su, sg, mm, lam, theta, false);
+    if (evOverflow) return Infinity;
+    adoptEvents();
+    let rn = solveSequence(theta, lam, kappa, sj, su, sg, mm);
+    for (let fix = 0; fix < 6 && Number.isFinite(rn); fix++) {
+      // a segment driven to a negative duration does not exist: drop it and solve again
+      let worst = -1;
+      let worstTau = -1e-9 * theta;
+      for (let k = 0; k < seqLength; k++) {
+        const tau = seqTau[k] ?? 0;
+        if (tau < worstTau) {
+          worstTau = tau;
+          worst = k;
+        }
+      }
+      if (worst < 0 || seqLength < 2) break;
+      dropSegment(worst);
+      rn = solveSequence(theta, lam, kappa, unknowns[0] ?? 0, unknowns[1] ?? 0, unknowns[2] ?? 0, unknowns[3] ?? mm);
+    }
+    if (!Number.isFinite(rn)) return Infinity;
+    sj = unknowns[0] ?? 0;
+    su = unknowns[1] ?? 0;
+    sg = unknowns[2] ?? 0;
+    mm = unknowns[3] ?? mm;
+    propagateEvents(sj, su, sg, mm, lam, theta, false);
+    if (evOverflow) return Infinity;
+    const residual = verifyResidual(sj, su, sg, mm, kappa, theta);
+    best = residual;
+    if (residual < STEADY_STATE_TOLERANCE) {
+      solvedM = mm;
+      solvedJ = sj;
+      solvedU = su;
+      solvedG = sg;
+      return residual;
+    }
+  }
+  return best;
+}
+
+let solvedM = 0;
+let solvedJ = 0;
+let solvedU = 0;
+let solvedG = 0;
+
+/**
+ * Solves the steady state. `lam` = L_r/L_m (0: series resonant), `q` = Z_r/R_ac, `fn` = f_s/f_r.
+ * Returns null when no consistent periodic solution was found.
+ */
+export function llcSteadyState(lam: number, q: number, fn: number): LlcSteadyState | null {
+  const theta = Math.PI / fn;
+  const kappa = (8 * q) / (Math.PI * Math.PI);
+  fhaSeed(lam, q, fn, seed);
+  let residual = attempt(lam, q, fn, theta, kappa, seed[3] ?? 1, seed[0] ?? 0, seed[1] ?? 0, seed[2] ?? 0);
+  if (!(residual < STEADY_STATE_TOLERANCE)) {
+    // continuation from resonance, where the first harmonic is close
+    const steps = 16;
+    let ok = true;
+    fhaSeed(lam, q, 1, seed);
+    let m = seed[3] ?? 1;
+    let j = seed[0] ?? 0;
+    let u = seed[1] ?? 0;
+    let g = seed[2] ?? 0;
+    for (let s = 0; s <= steps && ok; s++) {
+      const f = Math.pow(fn, s / steps);
+      const th = Math.PI / f;
+      residual = attempt(lam, q, f, th, kappa, m, j, u, g);
+      if (!(residual < STEADY_STATE_TOLERANCE)) ok = false;
+      m = solvedM;
+      j = solvedJ;
+      u = solvedU;
+      g = solvedG;
+    }
+    if (!ok) return null;
+  }
+  const m = solvedM;
+  propagateEvents(solvedJ, solvedU, solvedG, m, lam, theta, true);
+  let sequence = "";
+  const durations: number[] = [];
+  for (let k = 0; k < evLength; k++) {
+    const tau = evTau[k] ?? 0;
+    if (tau <= 1e-9 * theta) continue; // a zero-length segment at a mode boundary is not a mode
+    const letter = MODE_LETTER[evModes[k] ?? 0] ?? "?";
+    if (sequence.endsWith(letter)) {
+      durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
+      continue;
+    }
+    sequence += letter;
+    durations.push(tau);
+  }
+  return {
+    gain: m,
+    j0: solvedJ,
+    u0: solvedU,
+    g0: solvedG,
+    sequence,
+    durations,
+    resonantRms: Math.sqrt(evJ2 / theta),
+    rectifierRms: Math.sqrt(Math.max(0, evD2) / theta),
+    resonantPeak: evPeakJ,
+    capacitorPeak: evPeakU,
+    magnetisingPeak: evPeakG,
+    rectifiedMean: evCharge / theta,
+    inputMean: ((evEnd[1] ?? 0) - solvedU) / theta,
+    residual: verifyResidual(solvedJ, solvedU, solvedG, m, kappa, theta),
+  };
+}

@@ -1,0 +1,8 @@
+/**
+ * Inductive power links: compensated coil pairs (series, parallel, LCC), the kQ efficiency
+ * limit and the load that reaches it.
+ *
+ * @module links
+ */
+export * from "./inductive-link.js";
+export * from "./kq-limit.js";

@@ -1,0 +1,57 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { llcGain, llcOperatingPoint } from "../../src/index.js";
+
+describe("converter properties", () => {
+  it("llcGain falls as the frequency rises above resonance", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1.5, max: 20, noNaN: true }), fc.double({ min: 0.05, max: 3, noNaN: true }), fc.double({ min: 1, max: 5, noNaN: true }), fc.double({ min: 1.001, max: 1.5, noNaN: true }), (ln, q, fn, step) => {
+        const a = llcGain({ inductanceRatio: ln, qualityFactor: q, normalisedFrequency: fn });
+        const b = llcGain({ inductanceRatio: ln, qualityFactor: q, normalisedFrequency: fn * step });
+        expect(b).toBeLessThan(a);
+      }),
+      { seed: 18, numRuns: 300 },
+    );
+  });
+
+  it("the exact LLC gain falls as the frequency rises above resonance, and power is conserved", () => {
+    const lr = 60e-6;
+    const cr = 24e-9;
+    const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cr));
+    const zr = Math.sqrt(lr / cr);
+    fc.assert(
+      fc.property(fc.double({ min: 3, max: 10, noNaN: true }), fc.double({ min: 0.15, max: 1, noNaN: true }), fc.double({ min: 1.01, max: 1.5, noNaN: true }), (ln, q, fn) => {
+        const rl = (Math.PI * Math.PI * zr) / (q * 8 * 64);
+        const at = (f: number) => llcOperatingPoint({ bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: lr, resonantCapacitance: cr, magnetisingInductance: ln * lr, switchingFrequency: f * fr, loadResistance: rl });
+        const a = at(fn);
+        const b = at(fn * 1.05);
+        expect(b.gain).toBeLessThan(a.gain);
+        expect(Math.abs(a.inputPower / a.outputPower - 1)).toBeLessThanOrEqual(1e-9);
+        expect(a.zeroVoltageSwitching).toBe(true); // above resonance the current lags: ZVS (common practice)
+      }),
+      { seed: 18, numRuns: 60 },
+    );
+  });
+});
+
+describe("exact steady state over the tested domain", () => {
+  it("converges and conserves power on a grid of 3 ≤ L_n ≤ 10 (and ∞), 0.15 ≤ Q ≤ 1, 0.45 ≤ f_n ≤ 1.6", async () => {
+    const { seriesResonantOperatingPoint } = await import("../../src/index.js");
+    const lr = 60e-6;
+    const cr = 24e-9;
+    const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cr));
+    const zr = Math.sqrt(lr / cr);
+    for (const ln of [3, 6, 10, Infinity]) {
+      for (let qi = 0; qi <= 4; qi++) {
+        for (let fi = 0; fi <= 12; fi++) {
+          const q = 0.15 * Math.pow(1 / 0.15, qi / 4);
+          const fn = 0.45 * Math.pow(1.6 / 0.45, fi / 12);
+          const base = { bridge: "half" as const, inputVoltage: 390, turnsRatio: 8, resonantInductance: lr, resonantCapacitance: cr, switchingFrequency: fn * fr, loadResistance: (Math.PI ** 2 * zr) / (q * 8 * 64) };
+          const op = ln === Infinity ? seriesResonantOperatingPoint(base) : llcOperatingPoint({ ...base, magnetisingInductance: ln * lr });
+          expect(Math.abs(op.inputPower / op.outputPower - 1)).toBeLessThanOrEqual(1e-9);
+          expect(op.validity).toHaveLength(0);
+        }
+      }
+    }
+  });
+});
