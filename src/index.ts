@@ -15,5 +15,6 @@ export * from "./coreloss/index.js";
 export * from "./tank/index.js";
 export * from "./workpiece/index.js";
 export * from "./thermal/index.js";
+export * from "./field/index.js";
 export * from "./safety/index.js";
 export * from "./study/index.js";

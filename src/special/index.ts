@@ -72,3 +72,5 @@ export {
 } from "./kelvin.js";
 export type { KelvinFunctions } from "./kelvin.js";
 export * from "./ode.js";
+export { factorComplexSymmetric, latticeNestedDissection } from "./sparse-ldl.js";
+export type { ComplexSparseMatrix, ComplexSymmetricFactor, LatticeNestedDissectionOptions } from "./sparse-ldl.js";
