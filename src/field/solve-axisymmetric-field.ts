@@ -240,7 +240,7 @@ function readProblem(options: SolveAxisymmetricFieldOptions): {
   if (!Array.isArray(options.coils) || options.coils.length === 0) {
     throw new InputError(WHERE, "coils", options.coils, "", "a non-empty array of coils");
   }
-  const regionsIn: unknown = options.regions ?? [];
+  const regionsIn: unknown = options.regions === undefined ? [] : options.regions;
   if (!Array.isArray(regionsIn)) throw new InputError(WHERE, "regions", regionsIn, "", "an array of regions");
   const bodies: SolverBody[] = [];
   const coilNames: string[] = [];
@@ -415,8 +415,8 @@ function change(a: SolverSolution, b: SolverSolution, nc: number): number {
  *               resistivity: 2e-7, relativePermeability: 1 }],
  *   accuracy: 1e-2,
  * });
- * console.log(field.coils.pancake.inductance.toExponential(2)); // ≈ 2.7e-7
- * console.log(field.regions.plate.losses.toFixed(0)); // ≈ 95
+ * console.log(field.coils.pancake.inductance.toExponential(1)); // ≈ 2.6e-7
+ * console.log(field.regions.plate.losses.toFixed(0)); // ≈ 33
  * ```
  * @category Field
  */
