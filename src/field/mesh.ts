@@ -298,7 +298,7 @@ export function buildLatticeMesh(
   return { rLines, zLines, ni, nj, r, z, cellBody, triangles, triangleCell, blocks };
 }
 
-/** Smallest interior angle (radians) of the straight triangle p, q, s. */
+/** Smallest sine of the interior angles of the straight triangle p, q, s (0 when degenerate, small for angles near 0 or π). */
 function minAngle(r: Float64Array, z: Float64Array, p: number, q: number, s: number): number {
   const ax = r[q]! - r[p]!;
   const ay = z[q]! - z[p]!;
@@ -315,5 +315,5 @@ function minAngle(r: Float64Array, z: Float64Array, p: number, q: number, s: num
   const sp = area2 / (la * lc);
   const sq = area2 / (la * lb);
   const ss = area2 / (lb * lc);
-  return Math.asin(Math.min(1, Math.min(sp, sq, ss)));
+  return Math.min(sp, sq, ss);
 }

@@ -158,152 +158,38 @@ function newPoints(): ElementPoints {
   return { r: new Float64Array(NQ), w: new Float64Array(NQ), nr: new Float64Array(NQ * 6), nz: new Float64Array(NQ * 6) };
 }
 
+/** The assembled finite-element system of one mesh (before the solid-turn constraints). */
+export interface AssembledSystem {
+  readonly mesh: LatticeMesh;
+  readonly omega: number;
+  /** Unknown number of each lattice node, −1 where A = 0. */
+  readonly unknownOf: Int32Array;
+  /** Number of unknowns. */
+  readonly size: number;
+  /** K = S + jωM in compressed columns (full pattern). */
+  readonly columnStarts: Int32Array;
+  readonly rowIndices: Int32Array;
+  readonly re: Float64Array;
+  readonly im: Float64Array;
+  /** Fill-reducing order of the unknowns. */
+  readonly ordering: Int32Array;
+  readonly bodyVec: readonly (Float64Array | null)[];
+  readonly bodyConductance: Float64Array;
+  readonly bodyArea: Float64Array;
+  readonly bodyRArea: Float64Array;
+}
+
 /** Solves the problem once on the mesh of the given density. */
 export function solveOnce(problem: SolverProblem, disc: Discretisation): SolverSolution {
-  const omega = 2 * Math.PI * problem.frequency;
-  const d = disc.density;
+  const sys = assembleSystem(problem, disc);
+  const { mesh, omega, unknownOf, bodyVec, bodyConductance, bodyArea, bodyRArea } = sys;
+  const n = sys.size;
   const bodies = problem.bodies;
-  const growth = 1 + 0.45 / d;
-  // Mesh sizes: skin depth and geometry of each body.
-  const meshBodies = bodies.map((b) => {
-    const s = b.shape;
-    const dim = s.kind === "rectangle" ? Math.min(s.rMax - s.rMin, s.zMax - s.zMin) : s.innerRadius > 0 ? s.radius - s.innerRadius : s.radius;
-    let h = dim / (3 * d);
-    if (b.sigma > 0) {
-      const delta = Math.sqrt(2 / (omega * MU_0 * b.mur * b.sigma));
-      h = Math.min(h, (0.5 * delta) / d);
-    }
-    return { shape: s, surfaceSize: h };
-  });
-  const ext = problem.extent;
-  const size = Math.max(ext.rMax, ext.zMax - ext.zMin);
-  const far = 12 * size * Math.max(1, d);
-  const zc = 0.5 * (ext.zMin + ext.zMax);
-  const mesh = buildLatticeMesh(meshBodies, problem.blockHalfSizes, growth, {
-    rOuter: ext.rMax + far,
-    zLow: zc - 0.5 * (ext.zMax - ext.zMin) - far,
-    zHigh: zc + 0.5 * (ext.zMax - ext.zMin) + far,
-    farSize: far / 3,
-    density: d,
-  });
-  const { ni, nj, triangles, triangleCell, cellBody } = mesh;
-  const nLat = ni * nj;
-  const nTri = triangleCell.length;
-  // unknown numbering: A = 0 on the axis and the outer box
-  const unknownOf = new Int32Array(nLat).fill(-1);
-  let n = 0;
-  for (let i = 1; i < ni - 1; i++) for (let j = 1; j < nj - 1; j++) unknownOf[i * nj + j] = n++;
-
-  // material of each triangle
-  const triBody = new Int32Array(nTri);
-  for (let t = 0; t < nTri; t++) triBody[t] = cellBody[triangleCell[t]!]!;
-
-  // Assemble K = S + jωM (full pattern, triplets per column), sources and solid-turn vectors.
   const nb = bodies.length;
   const nc = problem.coilCount;
-  const P = newPoints();
-  const kRe = new Float64Array(36);
-  const kIm = new Float64Array(36);
-  const colCount = new Int32Array(n + 1);
-  for (let t = 0; t < nTri; t++) {
-    for (let a = 0; a < 6; a++) {
-      const ua = unknownOf[triangles[t * 6 + a]!]!;
-      if (ua < 0) continue;
-      for (let b = 0; b < 6; b++) if (unknownOf[triangles[t * 6 + b]!]! >= 0) colCount[ua + 1]!++;
-    }
-  }
-  for (let k = 0; k < n; k++) colCount[k + 1] = colCount[k + 1]! + colCount[k]!;
-  const fill = colCount.slice(0, n);
-  const total = colCount[n]!;
-  const tRow = new Int32Array(total);
-  const tRe = new Float64Array(total);
-  const tIm = new Float64Array(total);
-  // per-body vectors over the lattice: c_k = ∫σN (solid), s_b = ∫ r N (stranded), and scalars
-  const bodyVec: (Float64Array | null)[] = bodies.map((b) => (b.role === "region" ? null : new Float64Array(nLat)));
-  const bodyConductance = new Float64Array(nb); // ∫σ/r dS (solid)
-  const bodyArea = new Float64Array(nb);
-  const bodyRArea = new Float64Array(nb); // ∫ r dS
-  for (let t = 0; t < nTri; t++) {
-    elementPoints(mesh, t, P);
-    const bi = triBody[t]!;
-    const body = bi >= 0 ? bodies[bi]! : null;
-    const nu = 1 / (MU_0 * (body ? body.mur : 1));
-    const sig = body ? body.sigma : 0;
-    kRe.fill(0);
-    kIm.fill(0);
-    for (let q = 0; q < NQ; q++) {
-      const r = P.r[q]!;
-      const w = P.w[q]!;
-      const N = QN[q]!;
-      for (let a = 0; a < 6; a++) {
-        const bra = -P.nz[q * 6 + a]!;
-        const bza = P.nr[q * 6 + a]! + N[a]! / r;
-        for (let b = a; b < 6; b++) {
-          const brb = -P.nz[q * 6 + b]!;
-          const bzb = P.nr[q * 6 + b]! + N[b]! / r;
-          kRe[a * 6 + b] = kRe[a * 6 + b]! + w * nu * (bra * brb + bza * bzb) * r;
-          if (sig > 0) kIm[a * 6 + b] = kIm[a * 6 + b]! + w * omega * sig * N[a]! * N[b]! * r;
-        }
-      }
-      if (body) {
-        bodyArea[bi] = bodyArea[bi]! + w;
-        bodyRArea[bi] = bodyRArea[bi]! + w * r;
-        if (body.role === "solid") bodyConductance[bi] = bodyConductance[bi]! + (w * sig) / r;
-        const vec = bodyVec[bi];
-        if (vec) {
-          for (let a = 0; a < 6; a++) {
-            const node = triangles[t * 6 + a]!;
-            vec[node] = vec[node]! + (body.role === "solid" ? w * sig * N[a]! : w * r * N[a]!);
-          }
-        }
-      }
-    }
-    for (let a = 0; a < 6; a++) {
-      for (let b = 0; b < a; b++) {
-        kRe[a * 6 + b] = kRe[b * 6 + a]!;
-        kIm[a * 6 + b] = kIm[b * 6 + a]!;
-      }
-    }
-    for (let a = 0; a < 6; a++) {
-      const ua = unknownOf[triangles[t * 6 + a]!]!;
-      if (ua < 0) continue;
-      for (let b = 0; b < 6; b++) {
-        const ub = unknownOf[triangles[t * 6 + b]!]!;
-        if (ub < 0) continue;
-        const p = fill[ub]!++;
-        tRow[p] = ua;
-        tRe[p] = kRe[a * 6 + b]!;
-        tIm[p] = kIm[a * 6 + b]!;
-      }
-    }
-  }
-  // compress: sort rows in each column and sum duplicates
-  const Ap = new Int32Array(n + 1);
-  const Ai = new Int32Array(total);
-  const Axr = new Float64Array(total);
-  const Axi = new Float64Array(total);
-  let nz = 0;
-  const mark = new Int32Array(n).fill(-1);
-  for (let col = 0; col < n; col++) {
-    const start = nz;
-    for (let p = colCount[col]!; p < colCount[col + 1]!; p++) {
-      const row = tRow[p]!;
-      const at = mark[row]!;
-      if (at >= start) {
-        Axr[at] = Axr[at]! + tRe[p]!;
-        Axi[at] = Axi[at]! + tIm[p]!;
-      } else {
-        mark[row] = nz;
-        Ai[nz] = row;
-        Axr[nz] = tRe[p]!;
-        Axi[nz] = tIm[p]!;
-        nz++;
-      }
-    }
-    Ap[col + 1] = nz;
-  }
-  const order = latticeNestedDissection({ columns: ni, rows: nj, step: 2, unknownOf });
-  const factor = factorComplexSymmetric({ size: n, columnStarts: Ap, rowIndices: Ai, re: Axr, im: Axi }, order);
+  const nLat = mesh.r.length;
+  const nTri = mesh.triangleCell.length;
+  const factor = factorComplexSymmetric({ size: n, columnStarts: sys.columnStarts, rowIndices: sys.rowIndices, re: sys.re, im: sys.im }, sys.ordering);
 
   // Stranded sources: uniform current density count·I/area.
   const strandDensity = new Float64Array(nb);
@@ -466,6 +352,153 @@ export function solveOnce(problem: SolverProblem, disc: Discretisation): SolverS
     nodes: nLat,
     elements: nTri,
   };
+}
+
+/** Meshes the problem at the given density and assembles the finite-element system. */
+export function assembleSystem(problem: SolverProblem, disc: Discretisation): AssembledSystem {
+  const omega = 2 * Math.PI * problem.frequency;
+  const d = disc.density;
+  const bodies = problem.bodies;
+  const growth = 1 + 0.45 / d;
+  // Mesh sizes: skin depth and geometry of each body.
+  const meshBodies = bodies.map((b) => {
+    const s = b.shape;
+    const dim = s.kind === "rectangle" ? Math.min(s.rMax - s.rMin, s.zMax - s.zMin) : s.innerRadius > 0 ? s.radius - s.innerRadius : s.radius;
+    let h = dim / (3 * d);
+    if (b.sigma > 0) {
+      const delta = Math.sqrt(2 / (omega * MU_0 * b.mur * b.sigma));
+      h = Math.min(h, (0.5 * delta) / d);
+    }
+    return { shape: s, surfaceSize: h };
+  });
+  const ext = problem.extent;
+  const size = Math.max(ext.rMax, ext.zMax - ext.zMin);
+  const far = 12 * size * Math.max(1, d);
+  const zc = 0.5 * (ext.zMin + ext.zMax);
+  const mesh = buildLatticeMesh(meshBodies, problem.blockHalfSizes, growth, {
+    rOuter: ext.rMax + far,
+    zLow: zc - 0.5 * (ext.zMax - ext.zMin) - far,
+    zHigh: zc + 0.5 * (ext.zMax - ext.zMin) + far,
+    farSize: far / 3,
+    density: d,
+  });
+  const { ni, nj, triangles, triangleCell, cellBody } = mesh;
+  const nLat = ni * nj;
+  const nTri = triangleCell.length;
+  // unknown numbering: A = 0 on the axis and the outer box
+  const unknownOf = new Int32Array(nLat).fill(-1);
+  let n = 0;
+  for (let i = 1; i < ni - 1; i++) for (let j = 1; j < nj - 1; j++) unknownOf[i * nj + j] = n++;
+
+  // material of each triangle
+  const triBody = new Int32Array(nTri);
+  for (let t = 0; t < nTri; t++) triBody[t] = cellBody[triangleCell[t]!]!;
+
+  // Assemble K = S + jωM (full pattern, triplets per column), sources and solid-turn vectors.
+  const nb = bodies.length;
+  const P = newPoints();
+  const kRe = new Float64Array(36);
+  const kIm = new Float64Array(36);
+  const colCount = new Int32Array(n + 1);
+  for (let t = 0; t < nTri; t++) {
+    for (let a = 0; a < 6; a++) {
+      const ua = unknownOf[triangles[t * 6 + a]!]!;
+      if (ua < 0) continue;
+      for (let b = 0; b < 6; b++) if (unknownOf[triangles[t * 6 + b]!]! >= 0) colCount[ua + 1]!++;
+    }
+  }
+  for (let k = 0; k < n; k++) colCount[k + 1] = colCount[k + 1]! + colCount[k]!;
+  const fill = colCount.slice(0, n);
+  const total = colCount[n]!;
+  const tRow = new Int32Array(total);
+  const tRe = new Float64Array(total);
+  const tIm = new Float64Array(total);
+  // per-body vectors over the lattice: c_k = ∫σN (solid), s_b = ∫ r N (stranded), and scalars
+  const bodyVec: (Float64Array | null)[] = bodies.map((b) => (b.role === "region" ? null : new Float64Array(nLat)));
+  const bodyConductance = new Float64Array(nb); // ∫σ/r dS (solid)
+  const bodyArea = new Float64Array(nb);
+  const bodyRArea = new Float64Array(nb); // ∫ r dS
+  for (let t = 0; t < nTri; t++) {
+    elementPoints(mesh, t, P);
+    const bi = triBody[t]!;
+    const body = bi >= 0 ? bodies[bi]! : null;
+    const nu = 1 / (MU_0 * (body ? body.mur : 1));
+    const sig = body ? body.sigma : 0;
+    kRe.fill(0);
+    kIm.fill(0);
+    for (let q = 0; q < NQ; q++) {
+      const r = P.r[q]!;
+      const w = P.w[q]!;
+      const N = QN[q]!;
+      for (let a = 0; a < 6; a++) {
+        const bra = -P.nz[q * 6 + a]!;
+        const bza = P.nr[q * 6 + a]! + N[a]! / r;
+        for (let b = a; b < 6; b++) {
+          const brb = -P.nz[q * 6 + b]!;
+          const bzb = P.nr[q * 6 + b]! + N[b]! / r;
+          kRe[a * 6 + b] = kRe[a * 6 + b]! + w * nu * (bra * brb + bza * bzb) * r;
+          if (sig > 0) kIm[a * 6 + b] = kIm[a * 6 + b]! + w * omega * sig * N[a]! * N[b]! * r;
+        }
+      }
+      if (body) {
+        bodyArea[bi] = bodyArea[bi]! + w;
+        bodyRArea[bi] = bodyRArea[bi]! + w * r;
+        if (body.role === "solid") bodyConductance[bi] = bodyConductance[bi]! + (w * sig) / r;
+        const vec = bodyVec[bi];
+        if (vec) {
+          for (let a = 0; a < 6; a++) {
+            const node = triangles[t * 6 + a]!;
+            vec[node] = vec[node]! + (body.role === "solid" ? w * sig * N[a]! : w * r * N[a]!);
+          }
+        }
+      }
+    }
+    for (let a = 0; a < 6; a++) {
+      for (let b = 0; b < a; b++) {
+        kRe[a * 6 + b] = kRe[b * 6 + a]!;
+        kIm[a * 6 + b] = kIm[b * 6 + a]!;
+      }
+    }
+    for (let a = 0; a < 6; a++) {
+      const ua = unknownOf[triangles[t * 6 + a]!]!;
+      if (ua < 0) continue;
+      for (let b = 0; b < 6; b++) {
+        const ub = unknownOf[triangles[t * 6 + b]!]!;
+        if (ub < 0) continue;
+        const p = fill[ub]!++;
+        tRow[p] = ua;
+        tRe[p] = kRe[a * 6 + b]!;
+        tIm[p] = kIm[a * 6 + b]!;
+      }
+    }
+  }
+  // compress: sort rows in each column and sum duplicates
+  const Ap = new Int32Array(n + 1);
+  const Ai = new Int32Array(total);
+  const Axr = new Float64Array(total);
+  const Axi = new Float64Array(total);
+  let nz = 0;
+  const mark = new Int32Array(n).fill(-1);
+  for (let col = 0; col < n; col++) {
+    const start = nz;
+    for (let p = colCount[col]!; p < colCount[col + 1]!; p++) {
+      const row = tRow[p]!;
+      const at = mark[row]!;
+      if (at >= start) {
+        Axr[at] = Axr[at]! + tRe[p]!;
+        Axi[at] = Axi[at]! + tIm[p]!;
+      } else {
+        mark[row] = nz;
+        Ai[nz] = row;
+        Axr[nz] = tRe[p]!;
+        Axi[nz] = tIm[p]!;
+        nz++;
+      }
+    }
+    Ap[col + 1] = nz;
+  }
+  const order = latticeNestedDissection({ columns: ni, rows: nj, step: 2, unknownOf });
+  return { mesh, omega, unknownOf, size: n, columnStarts: Ap, rowIndices: Ai, re: Axr, im: Axi, ordering: order, bodyVec, bodyConductance, bodyArea, bodyRArea };
 }
 
 /** Dense complex LU with partial pivoting (small Schur systems). */
