@@ -9,6 +9,10 @@ export { solveAxisymmetricField } from "./solve-axisymmetric-field.js";
 export type {
   AxisymmetricFieldResult,
   FieldCircle,
+  FieldFluxDensity,
+  FieldMeshSize,
+  FieldRegionResult,
+  FieldWindingBlock,
   AxisymmetricFieldCoil,
   AxisymmetricFieldCoilResult,
   AxisymmetricFieldPoint,

@@ -26,6 +26,7 @@ import type { SolverBody, SolverProblem, SolverSolution } from "./solver.js";
  * @category Field
  */
 export interface FieldRectangle {
+  /** Discriminant. */
   readonly kind: "rectangle";
   /** Inner radius [m], ≥ 0 (0: the body reaches the axis). */
   readonly rMin: number;
@@ -43,6 +44,7 @@ export interface FieldRectangle {
  * @category Field
  */
 export interface FieldCircle {
+  /** Discriminant. */
   readonly kind: "circle";
   /** Radius of the centre [m], > radius (the ring must not touch the axis). */
   readonly r: number;
@@ -62,6 +64,52 @@ export interface FieldCircle {
 export type FieldShape = FieldRectangle | FieldCircle;
 
 /**
+ * A stranded winding block: `count` turns sharing one cross-section with uniform current density.
+ *
+ * @category Field
+ */
+export interface FieldWindingBlock {
+  /** Cross-section of the whole block. */
+  readonly shape: FieldShape;
+  /** Number of turns, an integer ≥ 1. */
+  readonly count: number;
+}
+
+/**
+ * Flux density at a point: RMS phasors of its radial and axial components [T].
+ *
+ * @category Field
+ */
+export interface FieldFluxDensity {
+  /** Radial component $B_r$ [T, RMS phasor]. */
+  readonly br: Complex;
+  /** Axial component $B_z$ [T, RMS phasor]. */
+  readonly bz: Complex;
+}
+
+/**
+ * Losses of one region.
+ *
+ * @category Field
+ */
+export interface FieldRegionResult {
+  /** Time-average eddy-current loss [W] (0 for a non-conductor). */
+  readonly losses: number;
+}
+
+/**
+ * Size of a finite-element mesh.
+ *
+ * @category Field
+ */
+export interface FieldMeshSize {
+  /** Nodes of the quadratic triangles (including those on the outer boundary and the axis). */
+  readonly nodes: number;
+  /** Quadratic triangles. */
+  readonly elements: number;
+}
+
+/**
  * A coil: turns in series carrying the same current.
  *
  * @category Field
@@ -75,7 +123,7 @@ export interface AxisymmetricFieldCoil {
    * Each turn's cross-section (a list, one shape per turn), or a stranded winding block of
    * `count` turns sharing one cross-section (`model: "stranded"` only).
    */
-  readonly turns: readonly FieldShape[] | { readonly shape: FieldShape; readonly count: number };
+  readonly turns: readonly FieldShape[] | FieldWindingBlock;
   /** Resistivity of the conductor [Ω·m], > 0. */
   readonly resistivity: number;
   /**
@@ -159,16 +207,16 @@ export interface AxisymmetricFieldResult {
   /** Per coil, by name. */
   readonly coils: Readonly<Record<string, AxisymmetricFieldCoilResult>>;
   /** Per region, by name: time-average eddy-current loss [W] (0 for non-conductors). */
-  readonly regions: Readonly<Record<string, { readonly losses: number }>>;
+  readonly regions: Readonly<Record<string, FieldRegionResult>>;
   /**
    * Flux density at a point [T, RMS phasors]: radial and axial components. Zero outside the
    * solution box (which extends at least 12 times the size of the arrangement beyond it).
    */
-  fieldAt(point: AxisymmetricFieldPoint): { br: Complex; bz: Complex };
+  fieldAt(point: AxisymmetricFieldPoint): FieldFluxDensity;
   /** Time-average power density of the eddy (or coil) current at a point [W/m³]. */
   powerDensityAt(point: AxisymmetricFieldPoint): number;
   /** Size of the finest mesh solved: lattice nodes and quadratic triangles. */
-  readonly mesh: { readonly nodes: number; readonly elements: number };
+  readonly mesh: FieldMeshSize;
   /**
    * Estimated relative error of the coils' resistance and reactance (the larger of the two,
    * over all coils): the change between the last two meshes.
