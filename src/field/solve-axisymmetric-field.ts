@@ -478,7 +478,7 @@ export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): 
   const { problem, coilNames, regionNames, currents, accuracy } = readProblem(options);
   const nc = problem.coilCount;
   // starting density from the measured convergence (impedance error ≈ 2.5e-3·density⁻⁴ on the checks)
-  let density = Math.min(MAX_DENSITY / REFINE, Math.max(0.5, Math.pow(1e-3 / accuracy, 0.25)));
+  let density = Math.min(MAX_DENSITY / REFINE, Math.max(0.7, Math.pow(1e-3 / accuracy, 0.25)));
   let coarse = solveOnce(problem, { density });
   density *= REFINE;
   let fine = solveOnce(problem, { density });
