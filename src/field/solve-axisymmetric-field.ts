@@ -242,6 +242,8 @@ const BLOCK_KEYS = ["shape", "count"] as const;
 const POINT_KEYS = ["r", "z"] as const;
 /** Densest mesh tried (element sizes ∝ 1/density). */
 const MAX_DENSITY = 4;
+/** Largest mesh the refinement goes to (lattice nodes; a mesh about twice the last one is predicted). */
+const MAX_NODES = 300_000;
 /** Ratio of element sizes between successive meshes. */
 const REFINE = Math.SQRT2;
 
@@ -441,7 +443,8 @@ function change(a: SolverSolution, b: SolverSolution, nc: number): number {
  *   coaxial ring (helical pitch ignored). A round conductor reserves its bounding square: other
  *   bodies may touch neither it nor the axis (close-wound round turns need a small gap, or
  *   rectangles). When the finest mesh (density 4) does not reach `accuracy`, the note
- *   `"accuracy-not-reached"` is returned. Not yet covered: saturating B–H curves and the
+ *   `"accuracy-not-reached"` is returned; so it is when the next mesh would exceed about
+ *   300 000 nodes (memory and time bound). Not yet covered: saturating B–H curves and the
  *   coupled heat conduction.
  *
  *   Accuracy (measured, test/field): against the exact closed forms the actual error was below
@@ -483,7 +486,7 @@ export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): 
   density *= REFINE;
   let fine = solveOnce(problem, { density });
   let estimate = change(coarse, fine, nc);
-  while (estimate > accuracy && density * REFINE <= MAX_DENSITY * 1.0001) {
+  while (estimate > accuracy && density * REFINE <= MAX_DENSITY * 1.0001 && 2.2 * fine.nodes <= MAX_NODES) {
     density *= REFINE;
     coarse = fine;
     fine = solveOnce(problem, { density });
@@ -531,7 +534,7 @@ export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): 
   if (estimate > accuracy) {
     validity.push({
       code: "accuracy-not-reached",
-      message: `the finest mesh tried changes the impedance by ${estimate.toExponential(1)} relative, above the accuracy asked for`,
+      message: `the finest mesh tried (${fine.nodes} nodes) changes the impedance by ${estimate.toExponential(1)} relative, above the accuracy asked for`,
       value: estimate,
       limit: accuracy,
     });
