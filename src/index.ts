@@ -15,6 +15,7 @@ export * from "./coreloss/index.js";
 export * from "./tank/index.js";
 export * from "./workpiece/index.js";
 export * from "./thermal/index.js";
+export * from "./field/index.js";
 export * from "./safety/index.js";
 export * from "./converters/index.js";
 export * from "./links/index.js";

@@ -75,3 +75,5 @@ export {
 export type { KelvinFunctions } from "./kelvin.js";
 export * from "./ode.js";
 export { solveDense } from "./dense-solve.js";
+export { factorComplexSymmetric, latticeNestedDissection } from "./sparse-ldl.js";
+export type { ComplexSparseMatrix, ComplexSymmetricFactor, LatticeNestedDissectionOptions } from "./sparse-ldl.js";

@@ -313,6 +313,20 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     nonFinite: { sample: "null unless dense output was asked for (documented)" },
   },
 
+  factorComplexSymmetric: {
+    kind: "kernel",
+    args: () => [
+      {
+        size: 2,
+        columnStarts: Int32Array.from([0, 2, 4]),
+        rowIndices: Int32Array.from([0, 1, 0, 1]),
+        re: Float64Array.from([4, 1, 1, 3]),
+        im: Float64Array.from([0, 1, 1, 0]),
+      },
+    ],
+  },
+  latticeNestedDissection: { kind: "kernel", args: () => [{ columns: 5, rows: 4, step: 2 }] },
+
   // ---------------------------------------------------------------- materials
   specificEnthalpyChange: { args: () => [lowCarbonSteel, { fromTemperature: celsius(20), toTemperature: celsius(200) }] },
   relativePermeabilityAt: {
@@ -807,6 +821,60 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   steadyStateTemperature: {
     args: () => [{ power: 100, surfaceArea: 0.01, convectionCoefficient: 20, emissivity: 0, ambientTemperature: 293.15 }],
     allow: [{ paths: ["0.emissivity", "0.power"], kinds: ["zero"], reason: "emissivity (0 … 1) and power are ≥ 0 (documented); with emissivity 0 already, zero convection leaves no loss and throws" }],
+  },
+
+  // ---------------------------------------------------------------- field
+  solveAxisymmetricField: {
+    args: () => [
+      {
+        frequency: 2e4,
+        accuracy: 0.1,
+        coils: [
+          {
+            name: "coil",
+            current: 10,
+            resistivity: 1.75e-8,
+            model: "solid",
+            turns: [{ kind: "circle", r: 0.02, z: 0.004, radius: 0.002, innerRadius: 0.001 }],
+          },
+        ],
+        regions: [
+          {
+            name: "plate",
+            shape: { kind: "rectangle", rMin: 0, rMax: 0.05, zMin: -0.005, zMax: 0 },
+            resistivity: 2e-7,
+            relativePermeability: 10,
+          },
+        ],
+      },
+    ],
+    variants: [
+      () => [
+        {
+          frequency: 5e3,
+          accuracy: 0.1,
+          coils: [
+            {
+              name: "block",
+              current: 2,
+              resistivity: 1.75e-8,
+              model: "stranded",
+              turns: { shape: { kind: "rectangle", rMin: 0.01, rMax: 0.02, zMin: 0.002, zMax: 0.006 }, count: 12 },
+            },
+          ],
+        },
+      ],
+    ],
+    allow: [
+      { paths: ["0.accuracy", "0.regions", "0.regions.0.resistivity", "0.regions.0.relativePermeability", "0.coils.0.turns.0.innerRadius"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.coils.0.current"], kinds: ["zero"], reason: "an open-circuited coil (zero current) is in the domain" },
+      { paths: ["0.coils.0.turns.0.innerRadius", "0.regions.0.shape.rMin", "0.coils.0.turns.shape.rMin"], kinds: ["zero"], reason: "a solid round conductor / a body reaching the axis" },
+      {
+        paths: ["0.coils.0.turns.0.z", "0.coils.0.turns.shape.zMin", "0.coils.0.turns.shape.zMax", "0.regions.0.shape.zMin", "0.regions.0.shape.zMax"],
+        kinds: ["zero", "negative"],
+        reason: "axial positions may be any real number",
+      },
+    ],
   },
 
   // ---------------------------------------------------------------- safety

@@ -1,0 +1,23 @@
+/**
+ * Axisymmetric field solution: the time-harmonic eddy-current field of coaxial coils (solid or
+ * stranded turns), parts and concentrators in the r–z half-plane by quadratic finite elements,
+ * with each coil's impedance, the losses in every body and the field at any point.
+ *
+ * @module field
+ */
+export { solveAxisymmetricField } from "./solve-axisymmetric-field.js";
+export type {
+  AxisymmetricFieldResult,
+  FieldCircle,
+  FieldFluxDensity,
+  FieldMeshSize,
+  FieldRegionResult,
+  FieldWindingBlock,
+  AxisymmetricFieldCoil,
+  AxisymmetricFieldCoilResult,
+  AxisymmetricFieldPoint,
+  FieldRectangle,
+  FieldRegion,
+  FieldShape,
+  SolveAxisymmetricFieldOptions,
+} from "./solve-axisymmetric-field.js";
