@@ -222,7 +222,7 @@ function coilAcResistance(d: ResolvedHeaterDescription, props: CoilProperties, f
   if (coil.shape === "solenoid") {
     notes.push({
       code: "coil-inductance-uniform-current",
-      message: `The empty coil's inductance is the current-sheet value with Rosa's corrections for round wire (uniform current in each turn). At working frequencies a turn's current crowds towards its neighbours and the part: against the field solutions of the reference scenarios (4–20 turns, 5–200 kHz) it reads 5.9–16.0 % high (bound ${COIL_INDUCTANCE_ERROR * 100} %), so the operating frequency reads 4–9 % low; the coil-impedance model with skin and proximity effect replaces it.`,
+      message: `The empty coil's inductance is the current-sheet value with Rosa's corrections for round wire (uniform current in each turn). At working frequencies a turn's current crowds towards its neighbours and the part: against the field solutions of the reference scenarios (4–20 turns, 5–200 kHz) it reads 5.9–19.0 % high (bound ${COIL_INDUCTANCE_ERROR * 100} %), so the operating frequency reads 4–9 % low; the coil-impedance model with skin and proximity effect replaces it.`,
       value: COIL_INDUCTANCE_ERROR,
     });
     const spaceFactor = Math.min(1, (coil.turns * props.conductorDiameter) / coil.length);
@@ -289,21 +289,21 @@ export const SHORT_PART_ERROR_NOTE =
  * fraction of the loaded inductance, per scenario, as measured and checked by
  * test/study/field-reference.test.ts (on top of the fixture's own uncertainty). Measured:
  * bars, billets and tubes longer than the coil (A–D) power −0.3 … −2.6 %, ΔL ≤ 0.7 %; pancake over
- * aluminium (E) power −0.3 … −0.7 %, ΔL up to 18 %; over μr 100 steel (F) power +11.4 %, ΔL 5.8 %;
+ * aluminium (E) power −0.3 … −0.7 %, ΔL up to 18 %; over μr 100 steel (F) power +7.6 … +11.4 %, ΔL 5.8–10.5 %;
  * a billet shorter than the coil (G) power −49 %, ΔL 9.5 %.
  */
 export const FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly resistance: number; readonly inductance: number }>> = {
   A: { resistance: 0.03, inductance: 0.005 },
-  B: { resistance: 0.005, inductance: 0.005 },
+  B: { resistance: 0.01, inductance: 0.005 },
   C: { resistance: 0.025, inductance: 0.008 },
   D: { resistance: 0.02, inductance: 0.006 },
   E: { resistance: 0.01, inductance: 0.19 },
-  F: { resistance: 0.12, inductance: 0.06 },
+  F: { resistance: 0.12, inductance: 0.11 },
   G: { resistance: 0.49, inductance: 0.095 },
 };
 
-/** The empty solenoid's inductance (Rosa, uniform turn current) against the field solution, largest relative error measured (scenarios A–D, G: 5.9–16.0 % high). */
-export const COIL_INDUCTANCE_ERROR = 0.17;
+/** The empty solenoid's inductance (Rosa, uniform turn current) against the field solution, largest relative error measured (scenarios A–D, G: 5.9–19.0 % high). */
+export const COIL_INDUCTANCE_ERROR = 0.2;
 
 /**
  * Radial extent of the current layer the finite-coil solution gives each solenoid turn: the

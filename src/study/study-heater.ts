@@ -19,7 +19,7 @@ import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints"]);
+const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints", "radialHeatUp"]);
 
 /**
  * Options of {@link studyHeater}: which of the slower parts of the study to run.

@@ -26,9 +26,9 @@ const rel = (a: number, b: number): number => Math.abs(a / b - 1);
 describe("workCoilImpedance against the field-reference FEM solution (issue-14 scenarios)", () => {
   for (const c of batch1.cases as unknown as { id: string; name: string; coil: WorkCoilImpedanceOptions["coil"]; part: WorkCoilImpedanceOptions["part"]; results: Result[] }[]) {
     for (const res of c.results) {
-      it(`scenario ${c.id} (${c.name}) at ${res.frequency / 1e3} kHz: L within 2 %, R and reflected R within 3 % (6.5 % where ΔR < 0.1 R0) (+ the reference's own uncertainty, ≤ 1e-3)`, { timeout: 240_000 }, () => {
+      it(`scenario ${c.id} (${c.name}) at ${res.frequency / 1e3} kHz: L within 2 %, R and reflected R within 3 % (6.5 % where ΔR < 0.1 R0) (+ the reference's own uncertainty, ≤ 1.5e-3)`, { timeout: 240_000 }, () => {
         const u = res.uncertainty;
-        for (const v of Object.values(u)) expect(v).toBeLessThan(1e-3);
+        for (const v of Object.values(u)) expect(v).toBeLessThan(1.5e-3);
         const r = workCoilImpedance({ coil: c.coil, part: c.part, frequency: res.frequency } as WorkCoilImpedanceOptions);
         expect(rel(r.emptyInductance, res.empty.inductance)).toBeLessThan(TOL_L + u["emptyInductance"]!);
         expect(rel(r.inductance, res.loaded.inductance)).toBeLessThan(TOL_L + u["loadedInductance"]!);
