@@ -543,6 +543,14 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
     allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
   },
+  llcDesign: {
+    args: () => [{ inputVoltage: { min: 340, nominal: 390, max: 410 }, outputVoltage: 19.5, outputPower: 65, resonantFrequency: 100e3, bridge: "half" }],
+    variants: [() => [{ inputVoltage: { min: 40, nominal: 48, max: 56 }, outputVoltage: 12, outputPower: 300, resonantFrequency: 200e3, bridge: "full", inductanceRatio: 4, gainMargin: 1.15, lightLoadFraction: 0.3, capacitorSeries: "E12", rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 300e-12 }]],
+    allow: [
+      { paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" },
+      { paths: ["0.inductanceRatio", "0.gainMargin", "0.lightLoadFraction"], kinds: ["undefined"], reason: "optional with documented defaults (6, 1.1, 0.2)" },
+    ],
+  },
   seriesResonantOperatingPoint: {
     args: () => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 20e-6, resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6 }],
     nonFinite: { inductanceRatio: "no magnetising branch: L_m/L_r is infinite by definition (documented)" },
