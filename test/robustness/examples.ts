@@ -364,6 +364,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   },
   loopMutualInductance: {
     args: () => [{ radius1: 0.1, radius2: 0.1, axialDistance: 0.1 }],
+    variants: [() => [{ radius1: 0.1, radius2: 0.08, axialDistance: 0.05, lateralOffset: 0.04, tilt: 0.3 }]],
+    allow: [
+      { paths: ["0.lateralOffset"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (0 is the coaxial case)" },
+      { paths: ["0.axialDistance"], kinds: ["zero"], reason: "coplanar filaments of different radii (or offset) are valid; only coinciding ones throw" },
+      { paths: ["0.tilt"], kinds: ["zero", "negative", "undefined"], reason: "optional angle in [−π, π]; 0 and negative tilts are valid" },
+    ],
   },
   multilayerCoilInductance: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
   multilayerCoilInductanceWheeler: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
