@@ -6,3 +6,4 @@
  */
 export * from "./inductive-link.js";
 export * from "./kq-limit.js";
+export * from "./pad-mutual.js";

@@ -549,6 +549,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
     allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
   },
+  padMutualInductance: {
+    args: () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.04 }],
+    variants: [
+      () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, backingPlate: { material: "ferrite", gap: 0.005, relativePermeability: 1000 } }],
+      () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.05, turns: 1 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.02, backingPlate: { material: "aluminium", gap: 0.01 } }],
+    ],
+    allow: [
+      { paths: ["0.lateralOffset"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (0 is the coaxial case)" },
+      { paths: ["0.backingPlate", "0.backingPlate.relativePermeability"], kinds: ["undefined"], reason: "optional: no plate; ferrite µr defaults to 2000" },
+    ],
+  },
   llcDesign: {
     args: () => [{ inputVoltage: { min: 340, nominal: 390, max: 410 }, outputVoltage: 19.5, outputPower: 65, resonantFrequency: 100e3, bridge: "half" }],
     variants: [() => [{ inputVoltage: { min: 40, nominal: 48, max: 56 }, outputVoltage: 12, outputPower: 300, resonantFrequency: 200e3, bridge: "full", inductanceRatio: 4, gainMargin: 1.15, lightLoadFraction: 0.3, capacitorSeries: "E12", rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 300e-12 }]],
