@@ -7,3 +7,4 @@
 export * from "./inductive-link.js";
 export * from "./kq-limit.js";
 export * from "./pad-mutual.js";
+export * from "./splitting.js";

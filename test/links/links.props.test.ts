@@ -61,3 +61,19 @@ describe("pad properties", () => {
     );
   });
 });
+
+describe("splitting properties", () => {
+  it("seriesSeriesSplitting: no split below the critical coupling, three frequencies above it, and f₀ always among them", async () => {
+    const { seriesSeriesSplitting } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(logUniform(1e-6, 1e-3), logUniform(1e-6, 1e-3), fc.double({ min: 0.01, max: 0.95, noNaN: true }), logUniform(0.01, 1), logUniform(0.5, 100), logUniform(1e3, 1e7), (l1, l2, k, r2, rl, f0) => {
+        const s = seriesSeriesSplitting({ primaryInductance: l1, secondaryInductance: l2, mutualInductance: k * Math.sqrt(l1 * l2), secondaryResistance: r2, loadResistance: rl, resonantFrequency: f0 });
+        expect(s.zeroPhaseFrequencies).toContain(f0);
+        expect(s.zeroPhaseFrequencies.length).toBe(s.split ? 3 : 1);
+        expect(s.split).toBe(k > s.criticalCoupling);
+        expect(s.criticalCoupling).toBeLessThanOrEqual(1);
+      }),
+      { seed: 18, numRuns: 300 },
+    );
+  });
+});

@@ -549,6 +549,14 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
     allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
   },
+  seriesSeriesSplitting: {
+    args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, secondaryResistance: 0.08, loadResistance: 5, resonantFrequency: 100e3 }],
+    allow: [{ paths: ["0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (a lossless secondary coil)" }],
+  },
+  linkFrequencySweep: {
+    args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 100e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }, [90e3, 100e3, 115e3]],
+    allow: [{ paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" }],
+  },
   padMutualInductance: {
     args: () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.04 }],
     variants: [
