@@ -28,6 +28,7 @@ export type {
   HeaterDescription,
 } from "./description.js";
 export { readHeaterDescription, HeaterDescriptionError } from "./read-description.js";
+export type { ReadHeaterDescriptionOptions } from "./read-description.js";
 export type {
   ResolvedSupply,
   ResolvedCurrentFedInverter,

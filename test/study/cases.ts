@@ -55,10 +55,10 @@ export const MALFORMED: readonly MalformedCase[] = [
   // wrong type
   { fault: "wrong type", file: R, path: "coil.turns", value: "six", message: "coil.turns must be an integer ≥ 1, got \"six\"", schema: true },
   { fault: "wrong type", file: R, path: "coil", value: [1, 2], message: "coil must be an object, got an array of length 2", schema: true },
-  { fault: "wrong type", file: R, path: "supply.voltage", value: true, message: "supply.voltage must be a number (SI) or a quantity text V, got true", schema: true },
+  { fault: "wrong type", file: R, path: "supply.voltage", value: true, message: "supply.voltage must be a quantity text with its unit, e.g. \"24 V\", got true", schema: true },
   { fault: "wrong type", file: R, path: "title", value: 7, message: "title must be a string, got 7", schema: true },
   { fault: "wrong type", file: P, path: "coil.conductor.strands", value: 10.5, message: "coil.conductor.strands must be an integer ≥ 1, got 10.5", schema: true },
-  { fault: "wrong type", file: R, path: "environment.convectionCoefficient", value: "10 W", message: "environment.convectionCoefficient must be a finite number ≥ 0 W/(m²·K), got \"10 W\"", schema: true },
+  { fault: "wrong type", file: R, path: "environment.convectionCoefficient", value: "10 W", message: "environment.convectionCoefficient must be a quantity in W/(m²·K), e.g. \"10 W/(m²·K)\", got \"10 W\"", schema: true },
   { fault: "wrong type", file: R, path: "supply.kind", value: "mains", message: "supply.kind must be one of \"battery\", \"dc-bus\", got \"mains\"", schema: true },
   { fault: "wrong type", file: R, path: "part.material", value: "unobtainium", message: "part.material must be one of", schema: true },
   // wrong unit
