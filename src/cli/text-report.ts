@@ -2,7 +2,8 @@
  * The plain-text report of a heater study: cautions first, then the operating points, losses,
  * heat-up and the validity notes, in aligned tables with engineering units.
  */
-import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterOperatingPoint } from "../study/index.js";
+import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterSweepRow, HeaterOperatingPoint } from "../study/index.js";
+import { reasonText } from "./design-error.js";
 import { area, celsiusText, duration, percent, q, textTable, wrap } from "./format.js";
 
 /** Rows comparing operating points side by side. */
@@ -143,23 +144,53 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
   return out.join("\n");
 }
 
-/** Renders a sweep as a text table. */
-export function sweepTextReport(sweep: HeaterSweep): string {
-  const rows = sweep.rows.map((r) =>
-    r.summary === null
-      ? [String(r.value), r.problem ?? "invalid", "", "", "", "", "", ""]
-      : [
-          String(r.value),
-          q(r.summary.frequency, "Hz"),
-          q(r.summary.partPower, "W"),
-          percent(r.summary.efficiency),
-          q(r.summary.tankVoltagePeak, "V"),
-          q(r.summary.coilCurrentRms, "A"),
-          q(r.summary.supplyCurrent, "A"),
-          duration(r.summary.timeToTarget),
-        ],
-  );
-  return [`sweep of ${sweep.field}`, textTable(rows, [sweep.field, "frequency", "part power", "efficiency", "tank V peak", "coil I rms", "supply I", "time to target"]), ""].join("\n");
+/** The cells of one sweep row: numbers blank when the row failed; the time "not reached" when it is not. */
+function sweepCells(r: HeaterSweepRow, heatUp: boolean, format: "text" | "csv"): string[] {
+  const s = r.summary;
+  const n = (v: number, unit: string, text: () => string): string => (s === null ? "" : format === "csv" ? String(v) : text());
+  const cells = [
+    String(r.value),
+    n(s?.frequency ?? 0, "Hz", () => q(s?.frequency, "Hz")),
+    n(s?.partPower ?? 0, "W", () => q(s?.partPower, "W")),
+    n(s?.efficiency ?? 0, "", () => percent(s?.efficiency)),
+    n(s?.tankVoltagePeak ?? 0, "V", () => q(s?.tankVoltagePeak, "V")),
+    n(s?.coilCurrentRms ?? 0, "A", () => q(s?.coilCurrentRms, "A")),
+    n(s?.supplyCurrent ?? 0, "A", () => q(s?.supplyCurrent, "A")),
+  ];
+  if (heatUp) {
+    const t = s?.timeToTarget ?? null;
+    cells.push(s === null ? "" : t === null ? "not reached" : format === "csv" ? String(t) : duration(t));
+  }
+  cells.push(s === null ? "" : String(r.cautionCount));
+  cells.push(r.problem === null ? "" : reasonText(r.problem));
+  return cells;
+}
+
+/**
+ * Renders a sweep as a text table: one row per value, failed rows with blank numbers and their
+ * reason in the last column, an unreached target as "not reached", no time column without the
+ * heat-up.
+ */
+export function sweepTextReport(sweep: HeaterSweep, heatUp = true): string {
+  const header = [sweep.field, "frequency", "part power", "efficiency", "tank V peak", "coil I rms", "supply I", ...(heatUp ? ["time to target"] : []), "cautions", "reason (when no result)"];
+  const rows = sweep.rows.map((r) => sweepCells(r, heatUp, "text"));
+  const ok = sweep.rows.filter((r) => r.summary !== null).length;
+  return [`sweep of ${sweep.field}: ${ok} of ${sweep.rows.length} values gave a design that runs`, textTable(rows, header), ""].join("\n");
+}
+
+/** One CSV field (RFC 4180): quoted when it holds a comma, quote or line break. */
+function csvField(text: string): string {
+  return /[",\r\n]/u.test(text) ? `"${text.replace(/"/gu, '""')}"` : text;
+}
+
+/**
+ * Renders a sweep as CSV (RFC 4180): a header line with SI units, SI numbers, blank cells where
+ * a row has no result, `not reached` for an unreached target, and the reason.
+ */
+export function sweepCsv(sweep: HeaterSweep, heatUp = true): string {
+  const header = [sweep.field, "frequency_Hz", "part_power_W", "efficiency", "tank_voltage_peak_V", "coil_current_rms_A", "supply_current_A", ...(heatUp ? ["time_to_target_s"] : []), "cautions", "reason"];
+  const lines = [header, ...sweep.rows.map((r) => sweepCells(r, heatUp, "csv"))].map((cells) => cells.map(csvField).join(","));
+  return `${lines.join("\r\n")}\r\n`;
 }
 
 /** Renders an optimisation result as text. */

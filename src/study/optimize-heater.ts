@@ -6,7 +6,7 @@
  */
 import { InputError } from "../core/index.js";
 import { specificHeatAt } from "../materials/index.js";
-import { parseQuantity } from "../units/index.js";
+import { formatQuantity, parseQuantity } from "../units/index.js";
 import { E12, E24 } from "../tank/index.js";
 import type { HeaterConductor, HeaterDescription, QuantityInput } from "./description.js";
 import { coilProperties, heaterOperatingPoint } from "./operating-point.js";
@@ -133,6 +133,11 @@ export interface HeaterOptimization {
   readonly best: readonly HeaterCandidate[];
   /** Why the others failed, most common first. */
   readonly rejected: readonly HeaterRejection[];
+  /**
+   * What makes the ranking misleading, in words (empty when nothing does): e.g. a part-power
+   * goal for a power-tracking inverter, whose tank power the searched variables do not change.
+   */
+  readonly warnings: readonly string[];
 }
 
 function quantity(path: string, value: QuantityInput | undefined, unit: string): number | null {
@@ -368,5 +373,13 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
     description: f.variant,
   }));
   const rejected = [...rejections.entries()].map(([reason, count]) => ({ reason, count })).sort((a, b) => b.count - a.count);
-  return { evaluated, feasible: feasible.length, best, rejected };
+  const warnings: string[] = [];
+  if (targetPower !== null && base.inverter.kind === "voltage-fed-series" && base.inverter.control === "power-tracking" && base.inverter.targetPower !== null) {
+    warnings.push(
+      `the goal is a part power of ${formatQuantity(targetPower, "W", { digits: 4 })}, but the inverter holds the tank power at inverter.targetPower = ${formatQuantity(base.inverter.targetPower, "W", { digits: 4 })}; ` +
+        "the searched turns and capacitance change only the efficiency, so the designs closest to the goal are the least efficient ones. " +
+        "Set inverter.targetPower to the goal divided by the efficiency you expect, and search for a heat-up time (or compare efficiencies) instead.",
+    );
+  }
+  return { evaluated, feasible: feasible.length, best, rejected, warnings };
 }
