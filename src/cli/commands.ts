@@ -8,6 +8,7 @@ import { InputError, nearestName } from "../core/index.js";
 import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
 import type { HeaterGoal, HeaterLimits } from "../study/index.js";
 import { designErrorText } from "./design-error.js";
+import { jsonSyntaxError } from "./json-error.js";
 import { studyHtmlReport } from "./html-report.js";
 import { optimisationTextReport, studyTextReport, sweepCsv, sweepTextReport } from "./text-report.js";
 
@@ -242,11 +243,9 @@ function loadStudyFile(io: CliIo, path: string): StudyFile {
   try {
     parsed = JSON.parse(text) as unknown;
   } catch (e) {
-    const message = (e as Error).message;
-    const at = /position (\d+)/u.exec(message);
-    const lc = /line (\d+) column (\d+)/u.exec(message);
-    const where = lc !== null ? { line: Number(lc[1]), column: Number(lc[2]) } : lineColumn(text, at === null ? text.length : Number(at[1]));
-    const reason = message.replace(/\s*\(line \d+ column \d+\)/u, "").replace(/\s*in JSON at position \d+/u, "").replace(/^Unexpected end of JSON input$/u, "the text ends before the JSON does");
+    const found = jsonSyntaxError(text);
+    const where = lineColumn(text, found?.offset ?? text.length);
+    const reason = found?.reason ?? (e as Error).message;
     const source = text.split("\n")[where.line - 1] ?? "";
     const caret = `${" ".repeat(Math.max(0, where.column - 1))}^`;
     throw new UsageError(`${name}:${where.line}:${where.column}: not valid JSON: ${reason}\n    ${source}\n    ${caret}`);
@@ -500,12 +499,12 @@ const COMMANDS: Record<string, (args: readonly string[], io: CliIo) => number> =
 };
 
 /**
- * Terminal control characters (C0 except tab and newline, DEL, C1) written as `\x1B`-style
+ * Terminal control characters (C0 except tab, newline and the CR of a CRLF; DEL; C1) written as `\x1B`-style
  * escapes, so a title or a file name cannot move the cursor, recolour or clear the terminal.
  */
 export function escapeControls(text: string): string {
   // eslint-disable-next-line no-control-regex -- matching control characters is the point
-  return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/gu, (c) => `\\x${c.charCodeAt(0).toString(16).toUpperCase().padStart(2, "0")}`);
+  return text.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]|\r(?!\n)/gu, (c) => `\\x${c.charCodeAt(0).toString(16).toUpperCase().padStart(2, "0")}`);
 }
 
 /**

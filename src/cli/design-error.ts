@@ -32,7 +32,7 @@ function formatNumber(text: string, unit: string): string {
 const NUMBER = /[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/gu;
 
 /** Splits an InputError raised inside the study into the limit it names. */
-export function limitOf(error: InputError): Limit {
+export function limitOf(error: Pick<InputError, "expected" | "message" | "parameter">): Limit {
   const text = error.expected;
   const open = text.search(/\(\w+: /u);
   const outer = open < 0 ? "" : text.slice(0, open).trim();
@@ -94,7 +94,7 @@ export function reasonText(problem: string): string {
   if (described !== null) return described[1] ?? problem;
   const study = /^\w+: (\S+) must be (.*), got [^,]*$/su.exec(problem);
   if (study === null) return problem;
-  const limit = limitOf({ expected: study[2] ?? "", message: problem, parameter: study[1] ?? "" } as InputError);
+  const limit = limitOf({ expected: study[2] ?? "", message: problem, parameter: study[1] ?? "" });
   const where = limit.context === "" ? "" : `${limit.context}: `;
   return `${where}${limit.parameter} must be ${limit.expected}${limit.value === "" ? "" : `, but it is ${limit.value}`}`;
 }
