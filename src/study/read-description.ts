@@ -457,7 +457,7 @@ function readConductor(rd: Reader, path: string, value: unknown): ResolvedConduc
     // default bundle diameter: copper area over a packing factor of 0.5 (common practice for served litz)
     const packed = strandDiameter * Math.sqrt(strands / 0.5);
     const outerDiameter = rd.optional(`${path}.outerDiameter`, o.outerDiameter, "m", "positive", packed);
-    if (outerDiameter < strandDiameter * Math.sqrt(strands)) {
+    if (outerDiameter < strandDiameter * Math.sqrt(strands) * (1 - 1e-12)) {
       rd.fail(`${path}.outerDiameter`, o.outerDiameter, "", `≥ strandDiameter × √strands = ${limitText(strandDiameter * Math.sqrt(strands), "m", o.outerDiameter)}`);
     }
     return material === undefined ? undefined : { kind, strands, strandDiameter, outerDiameter, material };
@@ -494,7 +494,7 @@ function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
     const radius = rd.quantity("coil.radius", o.radius, "m", "positive");
     const length = rd.quantity("coil.length", o.length, "m", "positive");
     if (length / turns < d * (1 - 1e-12)) rd.fail("coil.length", o.length, "", `≥ turns × conductor diameter = ${limitText(turns * d, "m", o.length)} (turns would overlap)`);
-    if (radius < d / 2) rd.fail("coil.radius", o.radius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.radius)}`);
+    if (radius < (d / 2) * (1 - 1e-12)) rd.fail("coil.radius", o.radius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.radius)}`);
     return conductor === undefined ? undefined : { shape, radius, length, turns, conductor, leadLength, temperature };
   }
   if (shape === "pancake") {
@@ -506,7 +506,7 @@ function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
     if (turns > 1 && (outerRadius - innerRadius) / (turns - 1) < d * (1 - 1e-12)) {
       rd.fail("coil.outerRadius", o.outerRadius, "", `≥ innerRadius + (turns − 1) × conductor diameter = ${limitText(innerRadius + (turns - 1) * d, "m", o.outerRadius)} (turns would overlap)`);
     }
-    if (innerRadius < d / 2) rd.fail("coil.innerRadius", o.innerRadius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.innerRadius)}`);
+    if (innerRadius < (d / 2) * (1 - 1e-12)) rd.fail("coil.innerRadius", o.innerRadius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.innerRadius)}`);
     return conductor === undefined ? undefined : { shape, innerRadius, outerRadius, turns, liftOff, conductor, leadLength, temperature };
   }
   return undefined;
