@@ -11,13 +11,14 @@ import { fileURLToPath } from "node:url";
 import { studyHtmlReport } from "../src/cli/html-report.js";
 import { studyTextReport } from "../src/cli/text-report.js";
 import { studyHeater } from "../src/index.js";
+import type { HeaterDescription } from "../src/index.js";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 const studyFile = resolve(process.argv[2] ?? resolve(root, "docs/examples/study-bearing-race.json"));
 const output = resolve(process.argv[3] ?? resolve(root, "docs/report/bearing-race.html"));
 const shown = relative(process.cwd(), studyFile) || studyFile;
 
-const study = studyHeater(JSON.parse(readFileSync(studyFile, "utf8")));
+const study = studyHeater(JSON.parse(readFileSync(studyFile, "utf8")) as HeaterDescription);
 process.stdout.write(studyTextReport(study, shown));
 mkdirSync(dirname(output), { recursive: true });
 writeFileSync(output, studyHtmlReport(study, relative(root, studyFile)), "utf8");

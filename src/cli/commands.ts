@@ -6,7 +6,7 @@
  */
 import { InputError, nearestName } from "../core/index.js";
 import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
-import type { HeaterGoal, HeaterLimits } from "../study/index.js";
+import type { HeaterDescription, HeaterGoal, HeaterLimits } from "../study/index.js";
 import { designErrorText } from "./design-error.js";
 import { jsonSyntaxError } from "./json-error.js";
 import { studyHtmlReport } from "./html-report.js";
@@ -327,7 +327,7 @@ function studyCommand(args: readonly string[], io: CliIo): number {
   if (bad !== null) return bad;
   let study;
   try {
-    study = studyHeater(file.input);
+    study = studyHeater(file.input as HeaterDescription);
   } catch (e) {
     return designFailure(io, "study", file, e);
   }
@@ -370,7 +370,7 @@ function sweepCommand(args: readonly string[], io: CliIo): number {
   io.stderr(`sweeping ${field} over ${list.length} value${list.length === 1 ? "" : "s"}…\n`);
   let result;
   try {
-    result = sweepHeater(file.input, { field, values: list, heatUp, requireUnits: true });
+    result = sweepHeater(file.input as HeaterDescription, { field, values: list, heatUp, requireUnits: true });
   } catch (e) {
     if (e instanceof HeaterDescriptionError) {
       reportInputError(io, file.name, e);
@@ -445,7 +445,7 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
   const started = Date.now();
   let result;
   try {
-    result = optimizeHeater(file.input, goal, {
+    result = optimizeHeater(file.input as HeaterDescription, goal, {
       onProgress: (done, total) => {
         if (total >= 1000) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
       },

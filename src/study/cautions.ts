@@ -6,7 +6,8 @@
  */
 import { DEFER_TO_CODES } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
-import { exposureCaution, fieldOnAxis, safetyCautions } from "../safety/index.js";
+import { exposureCaution, exposureCheck, fieldOnAxis, safetyCautions } from "../safety/index.js";
+import { formatQuantity } from "../units/index.js";
 import type { HeaterOperatingPoint } from "./operating-point.js";
 import { conductorOuterDiameter } from "./read-description.js";
 import type { ResolvedHeaterDescription } from "./read-description.js";
@@ -25,7 +26,7 @@ function ratingCaution(code: string, what: string, value: number, limit: number,
   return {
     code,
     severity: "warning",
-    message: `${what} (${value.toPrecision(3)} ${unit}) exceeds ${limit.toPrecision(3)} ${unit}; choose parts rated above it or change the design. ${DEFER_TO_CODES}`,
+    message: `${what} (${formatQuantity(value, unit, { digits: 3 })}) exceeds ${formatQuantity(limit, unit, { digits: 3 })}; choose parts rated above it or change the design. ${DEFER_TO_CODES}`,
     value,
     limit,
     unit,
@@ -44,6 +45,7 @@ export function heaterCautions(
   points: readonly HeaterOperatingPoint[],
   hottestPartTemperature: number,
   validity: ValidityNote[],
+  settleTemperature: number | null = null,
 ): Caution[] {
   const out: Caution[] = [];
   const max = (f: (p: HeaterOperatingPoint) => number): number => points.reduce((m, p) => Math.max(m, f(p)), 0);
@@ -83,10 +85,16 @@ export function heaterCautions(
           outerRadius: coil.outerRadius + conductorOuterDiameter(coil.conductor) / 2,
           turns: coil.turns,
         } as const);
-  const coilCurrent = max((p) => p.coilCurrentRms);
-  const fastest = points.reduce((a, p) => (p.coilCurrentRms > a.coilCurrentRms ? p : a));
-  // RMS flux density on the coil axis at the exposure distance from the coil's centre
-  const fluxDensityRms = Math.abs(fieldOnAxis(fieldCoil, coilCurrent, EXPOSURE_DISTANCE));
+  // each operating point's field at its own frequency: the worst ratio to the reference level
+  // (the largest current and the lowest frequency need not occur together)
+  let worst = { fluxDensityRms: 0, frequency: 0, ratio: -1 };
+  for (const p of points) {
+    if (!(p.coilCurrentRms > 0) || !(p.frequency >= 1 && p.frequency <= 1e7)) continue;
+    const fluxDensityRms = Math.abs(fieldOnAxis(fieldCoil, p.coilCurrentRms, EXPOSURE_DISTANCE));
+    const ratio = exposureCheck({ fluxDensityRms, frequency: p.frequency, population: "general-public" }).ratio;
+    if (ratio > worst.ratio) worst = { fluxDensityRms, frequency: p.frequency, ratio };
+  }
+  const fluxDensityRms = worst.fluxDensityRms;
   out.push(
     ...safetyCautions({
       tankVoltageRms: max((p) => Math.max(p.coilVoltageRms, p.capacitorVoltageRms)),
@@ -95,18 +103,33 @@ export function heaterCautions(
       capacitorVoltagePeak: max((p) => Math.SQRT2 * p.capacitorVoltageRms),
       surfaceTemperature: hottestPartTemperature,
       frequency: min((p) => p.frequency),
-      fluxDensityRms,
       population: "general-public",
     }),
   );
-  // the exposure check at the frequency of the strongest field, when it differs
-  if (fastest.frequency !== min((p) => p.frequency)) {
-    const c = exposureCaution({ fluxDensityRms, frequency: fastest.frequency, population: "general-public" });
+  if (worst.ratio >= 0) {
+    const c = exposureCaution({ fluxDensityRms, frequency: worst.frequency, population: "general-public" });
     if (c !== null) out.push(c);
+  }
+  // a part that would melt: at the end of the heat-up, or where it would settle if left on
+  const melting = d.part.material.meltingTemperature;
+  const hottest = Math.max(hottestPartTemperature, settleTemperature ?? -Infinity);
+  if (hottest >= melting) {
+    const settles = settleTemperature !== null && settleTemperature >= melting && !(hottestPartTemperature >= melting);
+    out.push({
+      code: "part-above-melting",
+      severity: "danger",
+      message:
+        `The part ${settles ? "would settle" : "reaches"} at ${(hottest - 273.15).toFixed(0)} °C${settles ? " if the heater is left on" : ""}, at or above the melting temperature of ${d.part.material.name} (${(melting - 273.15).toFixed(0)} °C): ` +
+        `molten metal can drip, spatter and burn, and the coil can be destroyed. Switch off at the target (a temperature-controlled or timed cut-off) or lower the power. ${DEFER_TO_CODES}`,
+      value: hottest,
+      limit: melting,
+      unit: "K",
+      source: `the melting temperature of the materials catalogue (${d.part.material.id})`,
+    });
   }
   validity.push({
     code: "exposure-distance",
-    message: `Field exposure checked on the coil axis ${EXPOSURE_DISTANCE * 1000} mm from the coil centre at the largest coil current, against the ICNIRP 2010 general-public reference levels; the part's screening is ignored (conservative).`,
+    message: `Field exposure checked on the coil axis ${EXPOSURE_DISTANCE * 1000} mm from the coil centre for each operating point at its own coil current and frequency (the worst reported), against the ICNIRP 2010 general-public reference levels; the part's screening is ignored (conservative).`,
     value: fluxDensityRms,
   });
   return out;

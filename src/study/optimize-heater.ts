@@ -202,7 +202,8 @@ export interface HeaterSearchOptions {
  * @example
  * ```ts
  * import { optimizeHeater } from "fluxwright";
- * const base = {
+ * import type { HeaterDescription } from "fluxwright";
+ * const base: HeaterDescription = {
  *   supply: { kind: "battery", voltage: "48 V" },
  *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
  *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
@@ -216,7 +217,7 @@ export interface HeaterSearchOptions {
  * ```
  * @category Heater study
  */
-export function optimizeHeater(description: unknown, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
+export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
   if (typeof options !== "object" || options === null || Array.isArray(options)) throw new InputError(WHERE, "options", options, "", "an object");
   if (options.onProgress !== undefined && typeof options.onProgress !== "function") {
     throw new InputError(WHERE, "options.onProgress", options.onProgress, "", "a function");
@@ -252,7 +253,7 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
   if (maxVoltage !== null) limits.set("tankVoltagePeak", Math.min(maxVoltage, limits.get("tankVoltagePeak") ?? Infinity));
   if (maxCurrent !== null) limits.set("coilCurrentRms", Math.min(maxCurrent, limits.get("coilCurrentRms") ?? Infinity));
   const search = goal.search ?? {};
-  const raw = structuredClone(description) as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
+  const raw = structuredClone(description) as unknown as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
   const turnsList = search.turns ?? Array.from({ length: 2 * base.coil.turns - Math.max(1, Math.round(base.coil.turns / 2)) + 1 }, (_, i) => Math.max(1, Math.round(base.coil.turns / 2)) + i);
   turnsList.forEach((t, i) => {
     if (!Number.isInteger(t) || t < 1) throw new InputError(WHERE, `goal.search.turns[${i}]`, t, "", "an integer ≥ 1");

@@ -13,6 +13,7 @@ import { coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operati
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
+import type { HeaterDescription } from "./description.js";
 
 /**
  * Options of {@link studyHeater}: which of the slower parts of the study to run.
@@ -310,7 +311,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * ```
  * @category Heater study
  */
-export function studyHeater(description: unknown, options: StudyHeaterOptions = {}): HeaterStudy {
+export function studyHeater(description: HeaterDescription, options: StudyHeaterOptions = {}): HeaterStudy {
   requireObject("studyHeater", "options", options);
   const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
   const d = readHeaterDescription(description);
@@ -481,7 +482,7 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       value: first.temperature,
     });
   }
-  const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity);
+  const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity, heatUp?.steadyStateTemperature ?? null);
   // the operating points' own cautions (tank voltage, hard switching) join the list once per code:
   // the safety module's caution of the same code, or the first point's, stands for the rest
   const seen = new Set(cautions.map((c) => c.code));

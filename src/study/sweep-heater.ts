@@ -5,7 +5,7 @@
  */
 import { InputError, nearestName } from "../core/index.js";
 import { HeaterDescriptionError, readHeaterDescription } from "./read-description.js";
-import type { QuantityInput } from "./description.js";
+import type { HeaterDescription, QuantityInput } from "./description.js";
 import type { ReadHeaterDescriptionOptions } from "./read-description.js";
 import { studyHeater } from "./study-heater.js";
 import { summarise } from "./summary.js";
@@ -106,7 +106,8 @@ function setField(root: unknown, path: string, value: unknown): unknown {
  * @example
  * ```ts
  * import { sweepHeater } from "fluxwright";
- * const base = {
+ * import type { HeaterDescription } from "fluxwright";
+ * const base: HeaterDescription = {
  *   supply: { kind: "battery", voltage: "48 V" },
  *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
  *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
@@ -120,7 +121,7 @@ function setField(root: unknown, path: string, value: unknown): unknown {
  * ```
  * @category Heater study
  */
-export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): HeaterSweep {
+export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSpec): HeaterSweep {
   const where = "sweepHeater";
   if (typeof sweep !== "object" || sweep === null) throw new InputError(where, "sweep", sweep, "", "an object { field, values }");
   if (typeof sweep.field !== "string" || !/^[A-Za-z]\w*(\.[A-Za-z]\w*)*$/.test(sweep.field)) {
@@ -152,7 +153,7 @@ export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): Heate
     }
   });
   const rows: HeaterSweepRow[] = values.map((value: QuantityInput): HeaterSweepRow => {
-    const variant = setField(description, sweep.field, value);
+    const variant = setField(description, sweep.field, value) as HeaterDescription;
     try {
       if (requireUnits) readHeaterDescription(variant, { requireUnits });
       const s = studyHeater(variant, { heatUp: sweep.heatUp !== false, temperatureScan: false, impedanceSweep: false });

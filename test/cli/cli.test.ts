@@ -7,6 +7,7 @@ import { fileURLToPath } from "node:url";
 import { runCli } from "../../src/cli/commands.js";
 import type { CliIo } from "../../src/cli/commands.js";
 import { studyHeater } from "../../src/index.js";
+import type { HeaterDescription } from "../../src/index.js";
 import { mutate } from "../study/cases.js";
 import { findAll, parseXml } from "./xml.js";
 
@@ -44,7 +45,7 @@ describe("fluxwright study", () => {
     const { format, formatVersion, fluxwright, input, ...study } = printed;
     expect([format, formatVersion, fluxwright]).toEqual(["fluxwright-study", 1, "unknown"]);
     expect(input).toEqual(JSON.parse(text));
-    expect(study).toEqual(JSON.parse(JSON.stringify(studyHeater(JSON.parse(text)))));
+    expect(study).toEqual(JSON.parse(JSON.stringify(studyHeater(JSON.parse(text) as HeaterDescription))));
   });
 
   it("runs every example study file (exit 0, a text report with the key sections)", () => {

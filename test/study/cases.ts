@@ -3,14 +3,21 @@
  * test, the schema test and the CLI test.
  */
 import { readFileSync } from "node:fs";
+import type { HeaterDescription } from "../../src/index.js";
+
+/**
+ * A study file as read at run time: typed as a description for the study functions (which check
+ * every field at run time) and as a record for reaching into it.
+ */
+export type StudyFileObject = HeaterDescription & Record<string, unknown>;
 
 /** Loads a demo study file from docs/examples. */
-export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json"): Record<string, unknown> {
-  return JSON.parse(readFileSync(new URL(`../../docs/examples/${name}`, import.meta.url), "utf8")) as Record<string, unknown>;
+export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json"): StudyFileObject {
+  return JSON.parse(readFileSync(new URL(`../../docs/examples/${name}`, import.meta.url), "utf8")) as StudyFileObject;
 }
 
 /** Returns a deep copy of `base` with the field at `path` set to `value` (deleted when `value` is `undefined`). */
-export function mutate(base: unknown, path: string, value: unknown): Record<string, unknown> {
+export function mutate(base: unknown, path: string, value: unknown): StudyFileObject {
   const copy = structuredClone(base) as Record<string, unknown>;
   const keys = path.split(".");
   let node = copy;
@@ -18,7 +25,7 @@ export function mutate(base: unknown, path: string, value: unknown): Record<stri
   const last = keys[keys.length - 1] as string;
   if (value === undefined) Reflect.deleteProperty(node, last);
   else node[last] = value;
-  return copy;
+  return copy as StudyFileObject;
 }
 
 /** One malformed case. */

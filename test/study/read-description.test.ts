@@ -1,5 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { HeaterDescriptionError, InputError, inventedExampleFerrite, lowCarbonSteel, readHeaterDescription, silver } from "../../src/index.js";
+import type { ConductorMaterialId, PartMaterialId } from "../../src/index.js";
 import { loadExample, MALFORMED, mutate } from "./cases.js";
 
 describe("readHeaterDescription on the demo study files", () => {
@@ -156,5 +157,18 @@ describe("readHeaterDescription with requireUnits (how study files are read)", (
 
   it("rejects unknown options", () => {
     expect(() => readHeaterDescription(loadExample("study-bearing-race.json"), { requireUnit: true } as never)).toThrow(InputError);
+  });
+});
+
+describe("the material-id types match the catalogue", () => {
+  it("PartMaterialId lists exactly the ids of conductiveMaterials, ConductorMaterialId the coil conductors", async () => {
+    const { conductiveMaterials } = await import("../../src/index.js");
+    const partIds = {
+      copper: true, aluminium: true, silver: true, lowCarbonSteel: true, mediumCarbonSteel: true, austeniticStainless: true,
+      ferriticStainless: true, aluminiumAlloy: true, brass: true, titaniumAlloy: true,
+    } satisfies Record<PartMaterialId, true>;
+    expect(Object.keys(partIds).sort()).toEqual(conductiveMaterials.map((m) => m.id).sort());
+    const conductorIds = { copper: true, aluminium: true, silver: true } satisfies Record<ConductorMaterialId, true>;
+    for (const id of Object.keys(conductorIds)) expect(conductiveMaterials.some((m) => m.id === id)).toBe(true);
   });
 });

@@ -1,14 +1,14 @@
 import { describe, it } from "vitest";
 import fc from "fast-check";
 import { studyHeater } from "../../src/index.js";
-import type { HeaterStudy } from "../../src/index.js";
+import type { HeaterDescription, HeaterStudy } from "../../src/index.js";
 import { loadExample, mutate } from "./cases.js";
 
 const race = loadExample("study-bearing-race.json");
 const quick = { heatUp: false, temperatureScan: false, impedanceSweep: false } as const;
 const study = (d: unknown, options: object = quick): HeaterStudy | null => {
   try {
-    return studyHeater(d, options);
+    return studyHeater(d as HeaterDescription, options);
   } catch {
     return null; // a design the inverter cannot run is reported by an InputError (tested elsewhere)
   }

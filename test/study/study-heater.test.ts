@@ -15,7 +15,7 @@ import {
   workCoilResistanceCurrentSheet,
   celsius,
 } from "../../src/index.js";
-import type { HeaterOperatingPoint, HeaterStudy } from "../../src/index.js";
+import type { HeaterDescription, HeaterOperatingPoint, HeaterStudy } from "../../src/index.js";
 import { loadExample, mutate } from "./cases.js";
 
 const race = loadExample("study-bearing-race.json");
@@ -158,7 +158,7 @@ describe("studyHeater: the frequency shift of a ferromagnetic part and its rever
   // a slim steel bar in a long coil at a few kHz: magnetisation outweighs eddy-current shielding
   // below Curie (radius / skin depth < μr), so the inductance rises and the frequency drops;
   // past Curie only the shielding is left and the frequency rises above the empty coil's (common practice)
-  const bar = {
+  const bar: HeaterDescription = {
     supply: { kind: "dc-bus", voltage: "24 V" },
     inverter: { kind: "current-fed-parallel", chokeInductance: "1 mH", switchOnResistance: "10 mΩ" },
     coil: { shape: "solenoid", radius: "20 mm", length: "200 mm", turns: 40, conductor: { kind: "solid", diameter: "2 mm" } },

@@ -1,0 +1,41 @@
+import { describe, it, expect } from "vitest";
+import { exposureCheck, fieldOnAxis, studyHeater } from "../../src/index.js";
+import { loadExample, mutate } from "./cases.js";
+
+describe("heater study cautions", () => {
+  it("flags a part that would settle above its melting temperature (forging bar at 150 V)", () => {
+    const hot = mutate(loadExample("study-forging-bar.json"), "supply.voltage", "150 V");
+    const s = studyHeater(hot, { temperatureScan: false, impedanceSweep: false });
+    const melt = s.cautions.find((c) => c.code === "part-above-melting");
+    expect(melt?.severity).toBe("danger");
+    expect(s.heatUp?.steadyStateTemperature ?? 0).toBeGreaterThan(s.description.part.material.meltingTemperature);
+    expect(melt?.limit).toBe(s.description.part.material.meltingTemperature);
+    expect(melt?.message).toMatch(/would settle at \d+ °C if the heater is left on, at or above the melting temperature/);
+  });
+
+  it("raises no melting caution when the part settles below its melting point (the forging-bar example)", () => {
+    const s = studyHeater(loadExample("study-forging-bar.json"), { temperatureScan: false, impedanceSweep: false });
+    expect(s.cautions.map((c) => c.code)).not.toContain("part-above-melting");
+  });
+
+  it("checks the field of each operating point at that point's own frequency and reports the worst (no mixed pair)", () => {
+    // without the heat-up the study's operating points are exactly these three
+    const hot = mutate(loadExample("study-forging-bar.json"), "supply.voltage", "150 V");
+    const s = studyHeater(hot, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+    const field = s.cautions.filter((c) => c.code === "field-above-reference-level");
+    expect(field).toHaveLength(1);
+    const coil = s.description.coil;
+    if (coil.shape !== "solenoid") throw new Error("expected a solenoid");
+    const perAmp = Math.abs(fieldOnAxis({ kind: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns }, 1, 0.3));
+    const points = [s.emptyCoil, s.operating, ...(s.atTarget === null ? [] : [s.atTarget])];
+    const ratios = points.map((p) => exposureCheck({ fluxDensityRms: perAmp * p.coilCurrentRms, frequency: p.frequency, population: "general-public" }).ratio);
+    const worst = points[ratios.indexOf(Math.max(...ratios))];
+    // the reported flux density belongs to one operating point: B / I of that point is the coil's field per ampere
+    const b = field[0]?.value ?? 0;
+    expect(worst).toBeDefined();
+    expect(b / ((worst?.coilCurrentRms ?? 0) * perAmp)).toBeCloseTo(1, 9);
+    // the message names the worst point's own frequency (3 significant digits, kHz)
+    const khz = Number(/RMS at (\d+(?:\.\d+)?) kHz/u.exec(field[0]?.message ?? "")?.[1]);
+    expect(khz * 1e3).toBeCloseTo(Number((worst?.frequency ?? 0).toPrecision(3)), 6);
+  });
+});
