@@ -15,6 +15,23 @@ import type { ResolvedHeaterDescription } from "./read-description.js";
 /** Where a person is assumed to stand for the field-exposure check: 300 mm from the coil centre on its axis (an operator's reach, common practice). */
 const EXPOSURE_DISTANCE = 0.3;
 
+/** Harmonic power share above which the first-harmonic note is given (1 %). */
+const HARMONIC_NOTE_THRESHOLD = 0.01;
+
+/**
+ * Power the odd harmonics n = 3 … 99 of a square-wave voltage drive into a series R–L–C tank,
+ * relative to the fundamental's: Σ (1/n²) |Z(f)|² / |Z(nf)|² (the square wave's n-th harmonic
+ * has 1/n of the fundamental's amplitude; each harmonic's power is V²R/|Z|²).
+ */
+export function harmonicPowerShare(frequency: number, inductance: number, capacitance: number, resistance: number): number {
+  const w = 2 * Math.PI * frequency;
+  const z2 = (omega: number): number => resistance * resistance + (omega * inductance - 1 / (omega * capacitance)) ** 2;
+  const fundamental = z2(w);
+  let sum = 0;
+  for (let n = 3; n <= 99; n += 2) sum += fundamental / (n * n * z2(n * w));
+  return sum;
+}
+
 /** Part facts the cautions need. */
 interface PartFacts {
   readonly mass: number;
@@ -126,6 +143,30 @@ export function heaterCautions(
       unit: "K",
       source: `the melting temperature of the materials catalogue (${d.part.material.id})`,
     });
+  }
+  // a square-wave bridge driving a series tank far from resonance: the odd harmonics of the
+  // drive pass the tank too, and the first-harmonic model leaves their power out
+  if (d.inverter.kind === "voltage-fed-series") {
+    const C = d.capacitor.capacitance;
+    let worstShare = 0;
+    let worstRatio = 0;
+    for (const p of points) {
+      if (!(p.frequency > 0) || !(p.inductance > 0) || !(p.tankResistance > 0)) continue;
+      const share = harmonicPowerShare(p.frequency, p.inductance, C, p.tankResistance);
+      if (share > worstShare) {
+        worstShare = share;
+        worstRatio = p.frequency * 2 * Math.PI * Math.sqrt(p.inductance * C);
+      }
+    }
+    if (worstShare > HARMONIC_NOTE_THRESHOLD) {
+      validity.push({
+        code: "first-harmonic-stretched",
+        message:
+          `The bridge runs up to ${worstRatio.toPrecision(2)} × the loaded resonance; there the odd harmonics of its square-wave voltage drive ${(100 * worstShare).toPrecision(2)} % as much power into the tank as the fundamental ` +
+          "(harmonics 3 to 99 through the same series tank, coil resistance and inductance held at their fundamental values), which the first-harmonic model leaves out: powers and currents are low by about that much. Run closer to resonance (more capacitance or turns) for a better first-harmonic estimate.",
+        value: worstShare,
+      });
+    }
   }
   validity.push({
     code: "exposure-distance",

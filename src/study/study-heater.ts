@@ -448,9 +448,14 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
   let impedance: HeaterImpedanceSweep | null = null;
   if (options.impedanceSweep !== false) {
     const f0 = emptyCoil.frequency;
-    const count = 41;
+    // a decade around the empty coil's resonance, widened to show every operating point (a
+    // power-tracking bridge may run several times above resonance) with a 25 % margin
+    const running = allPoints.map((p) => p.frequency).filter((f) => f > 0);
+    const low = Math.log10(Math.min(f0 / Math.sqrt(10), ...running.map((f) => f / 1.25)));
+    const high = Math.log10(Math.max(f0 * Math.sqrt(10), ...running.map((f) => f * 1.25)));
+    const count = Math.max(41, Math.ceil(40 * (high - low)) + 1);
     const frequencies: number[] = [];
-    for (let i = 0; i < count; i++) frequencies.push(f0 * 10 ** (-0.5 + i / (count - 1)));
+    for (let i = 0; i < count; i++) frequencies.push(10 ** (low + ((high - low) * i) / (count - 1)));
     const tank = (L: number, R: number) =>
       d.inverter.kind === "current-fed-parallel"
         ? parallelNetwork(capacitorElement(d.capacitor.capacitance), inductorElement(L, R))
