@@ -133,6 +133,9 @@ const GRID_MINOR = "#eeeeee";
 /** Escapes text for use in SVG/XML character data and attribute values. */
 export function escapeXml(text: string): string {
   return text
+    // control characters are not allowed in XML 1.0: shown as \x1B-style text instead
+    // eslint-disable-next-line no-control-regex -- matching control characters is the point
+    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]/gu, (c) => `\\x${c.charCodeAt(0).toString(16).toUpperCase().padStart(2, "0")}`)
     .replace(/&/g, "&amp;")
     .replace(/</g, "&lt;")
     .replace(/>/g, "&gt;")
@@ -529,18 +532,32 @@ export function lineChart(options: LineChartOptions): string {
     out.push(`<text transform="translate(${r(width - 12)} ${r(top + plotH / 2)}) rotate(90)" text-anchor="middle" fill="${INK}">${escapeXml(withUnit(y2.label, y2Unit))}</text>`);
   }
 
-  // reference lines
+  // reference lines; their labels are placed so that none overprints another: a label that
+  // would overlap one already placed moves down a row (vertical lines) or along (horizontal)
+  const placed: { x0: number; x1: number; y0: number; y1: number }[] = [];
+  const labelWidth = (text: string): number => 6.6 * Array.from(text).length + 2;
+  const free = (box: { x0: number; x1: number; y0: number; y1: number }): boolean =>
+    placed.every((b) => box.x1 <= b.x0 || box.x0 >= b.x1 || box.y1 <= b.y0 || box.y0 >= b.y1);
   for (const ref of options.referenceLines ?? []) {
+    const w = labelWidth(ref.label);
     if (ref.axis === "x") {
       const x = px(ref.value);
       if (!(x >= left && x <= left + plotW)) continue;
       out.push(`<line class="reference" x1="${r(x)}" y1="${top}" x2="${r(x)}" y2="${r(top + plotH)}" stroke="${INK}" stroke-width="1" stroke-dasharray="3 3"/>`);
-      out.push(`<text x="${r(x + 4)}" y="${top + 14}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
+      // right of the line, or left of it near the right edge
+      const lx = x + 4 + w > left + plotW ? x - 4 - w : x + 4;
+      let row = 0;
+      while (row < 8 && !free({ x0: lx, x1: lx + w, y0: top + 3 + 13 * row, y1: top + 16 + 13 * row })) row++;
+      placed.push({ x0: lx, x1: lx + w, y0: top + 3 + 13 * row, y1: top + 16 + 13 * row });
+      out.push(`<text class="reference-label" x="${r(lx)}" y="${r(top + 14 + 13 * row)}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
     } else {
       const y = py(yAxis, ref.value);
       if (!(y >= top && y <= top + plotH)) continue;
       out.push(`<line class="reference" x1="${left}" y1="${r(y)}" x2="${r(left + plotW)}" y2="${r(y)}" stroke="${INK}" stroke-width="1" stroke-dasharray="3 3"/>`);
-      out.push(`<text x="${r(left + 6)}" y="${r(y - 4)}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
+      let lx = left + 6;
+      while (lx < left + plotW - w && !free({ x0: lx, x1: lx + w, y0: y - 15, y1: y - 2 })) lx += 12;
+      placed.push({ x0: lx, x1: lx + w, y0: y - 15, y1: y - 2 });
+      out.push(`<text class="reference-label" x="${r(lx)}" y="${r(y - 4)}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
     }
   }
 

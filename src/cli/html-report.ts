@@ -7,7 +7,7 @@ import { ZERO_CELSIUS } from "../units/index.js";
 import { barChart, escapeXml, lineChart } from "./chart.js";
 import type { ChartReferenceLine, ChartSeries } from "./chart.js";
 import { celsiusText, duration, percent, q } from "./format.js";
-import { lossEntries, operatingRows } from "./text-report.js";
+import { designRows, lossEntries, operatingRows } from "./text-report.js";
 
 const CSS = `
 body { font-family: 'DejaVu Sans', 'Helvetica Neue', Arial, sans-serif; color: #222; max-width: 60rem; margin: 2rem auto; padding: 0 1rem; line-height: 1.45; }
@@ -133,7 +133,47 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
       caption: "Power into the part (left axis) and operating frequency (right axis) against part temperature, each point a solved operating point; past the Curie point a steel part is no longer magnetic, which shows as a step in both.",
     });
   }
-  const losses = lossEntries(study.operating);
+  if (study.temperatureScan !== null && study.temperatureScan.temperatures.length > 1) {
+    const s = study.temperatureScan;
+    const t = s.temperatures.map(toC);
+    const curieLine: ChartReferenceLine[] = curie === null ? [] : [{ axis: "x", value: toC(curie), label: "Curie point" }];
+    plots.push({
+      svg: lineChart({
+        title: "Coil current and tank voltage against part temperature",
+        xLabel: "part temperature",
+        yLabel: "coil current (RMS)",
+        xUnit: "°C",
+        yUnit: "A",
+        series: [
+          { name: "coil current (RMS)", x: t, y: s.coilCurrentsRms, markers: false },
+          { name: "tank voltage (peak)", x: t, y: s.tankVoltagesPeak, axis: "secondary", markers: false },
+        ],
+        secondaryAxis: { label: "tank voltage (peak)", unit: "V" },
+        referenceLines: curieLine,
+        idPrefix: "current-voltage-scan",
+      }),
+      caption: "RMS coil current (left axis) and peak tank voltage (right axis) against part temperature: the stresses on the coil, capacitors and switches as the part heats.",
+    });
+    plots.push({
+      svg: lineChart({
+        title: "Efficiency and permeability against part temperature",
+        xLabel: "part temperature",
+        yLabel: "efficiency",
+        xUnit: "°C",
+        yUnit: "%",
+        series: [
+          { name: "efficiency (part / input)", x: t, y: s.efficiencies.map((e) => 100 * e), markers: false },
+          { name: "relative permeability μr", x: t, y: s.relativePermeabilities, axis: "secondary", markers: false },
+        ],
+        secondaryAxis: { label: "μr", unit: "" },
+        yRange: [0, 100],
+        referenceLines: curieLine,
+        idPrefix: "efficiency-scan",
+      }),
+      caption: "Overall efficiency (left axis) and the part's relative permeability used for the coupling (right axis) against part temperature; μr falls to 1 at the Curie point.",
+    });
+  }
+  const losses = lossEntries(study.operating, study.description.concentrator !== null);
   plots.push({
     svg: barChart({
       title: `Where the power goes (part at ${celsiusText(study.operating.partTemperature)})`,
@@ -179,6 +219,8 @@ export function studyHtmlReport(study: HeaterStudy, source?: string): string {
   for (const c of study.cautions) {
     parts.push(`<div class="caution ${c.severity}"><strong>${escapeXml(c.severity)}</strong> <code>${escapeXml(c.code)}</code>: ${escapeXml(c.message)} <span class="meta">(source: ${escapeXml(c.source)})</span></div>`);
   }
+  parts.push(`<h2>Design</h2>`);
+  parts.push(table(designRows(study)));
   parts.push(`<h2>Operating points</h2>`);
   parts.push(
     table(operatingRows(study.atTarget === null ? [study.emptyCoil, study.operating] : [study.emptyCoil, study.operating, study.atTarget]), [
@@ -194,7 +236,7 @@ export function studyHtmlReport(study: HeaterStudy, source?: string): string {
   const total = study.operating.inputPower;
   parts.push(
     table(
-      [...lossEntries(study.operating).map(([label, w]) => [label, q(w, "W"), percent(total > 0 ? w / total : null)]), ["total = input power", q(total, "W"), "100.0 %"]],
+      [...lossEntries(study.operating, d.concentrator !== null).map(([label, w]) => [label, q(w, "W"), percent(total > 0 ? w / total : null)]), ["total = input power", q(total, "W"), "100.0 %"]],
       ["place", "power", "share"],
     ),
   );
@@ -204,7 +246,7 @@ export function studyHtmlReport(study: HeaterStudy, source?: string): string {
       table([
         [`time to ${celsiusText(d.part.targetTemperature)}`, h.reachable ? duration(h.timeToTarget) : "not reached"],
         ["temperature the part would settle at", celsiusText(h.steadyStateTemperature)],
-        ["Curie point crossed at", duration(h.curieCrossingTime)],
+        ["Curie point crossed at", h.curieCrossingTime === null ? (study.part.curieTemperature === null ? "no Curie point (non-magnetic)" : "not crossed") : duration(h.curieCrossingTime)],
         ["energy from the supply", q(h.supplyEnergy, "J")],
         ["charge from the supply", `${(h.supplyCharge / 3600).toPrecision(3)} A·h`],
         ["heat into the part", q(h.energy.input, "J")],

@@ -4,7 +4,7 @@
  */
 import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterSweepRow, HeaterOperatingPoint } from "../study/index.js";
 import { reasonText } from "./design-error.js";
-import { area, celsiusText, duration, percent, q, textTable, wrap } from "./format.js";
+import { area, celsiusText, duration, percent, q, textTable, volume, wrap } from "./format.js";
 
 /** Rows comparing operating points side by side. */
 export function operatingRows(points: readonly HeaterOperatingPoint[]): string[][] {
@@ -32,36 +32,22 @@ export function operatingRows(points: readonly HeaterOperatingPoint[]): string[]
   ];
 }
 
-/** The loss breakdown as [place, power] pairs. */
-export function lossEntries(p: HeaterOperatingPoint): [string, number][] {
-  return [
+/** The loss breakdown as [place, power] pairs; the concentrator only when the design has one. */
+export function lossEntries(p: HeaterOperatingPoint, withConcentrator = true): [string, number][] {
+  const entries: [string, number][] = [
     ["part (useful heat)", p.losses.part],
     ["coil and leads", p.losses.coil],
     ["switches (conduction)", p.losses.switches],
     ["supply internal resistance", p.losses.supply],
     ["capacitor bank", p.losses.capacitors],
-    ["concentrator core", p.losses.core],
   ];
+  if (withConcentrator) entries.push(["concentrator core", p.losses.core]);
+  return entries;
 }
 
-/**
- * Renders a study as a readable text report (UTF-8, ≤ 100 columns).
- *
- * @param study - the study
- * @param source - where it came from (file name), printed under the title
- */
-export function studyTextReport(study: HeaterStudy, source?: string): string {
+/** The design as [what, value] rows (the DESIGN section of the text and HTML reports). */
+export function designRows(study: HeaterStudy): [string, string][] {
   const d = study.description;
-  const out: string[] = [];
-  out.push(`fluxwright heater study: ${study.title}`);
-  if (source !== undefined) out.push(`study file: ${source}`);
-  out.push("");
-  if (study.cautions.length > 0) {
-    out.push(`CAUTIONS (${study.cautions.length})`);
-    for (const c of study.cautions) out.push(wrap(`  [${c.severity}] ${c.code}: ${c.message}`));
-    out.push("");
-  }
-  out.push("DESIGN");
   const coil = d.coil;
   const coilText =
     coil.shape === "solenoid"
@@ -83,8 +69,7 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
         : p.shape === "tube"
           ? `tube ${q(2 * p.outerRadius, "m")} OD, wall ${q(p.wallThickness, "m")}, ${q(p.length, "m")} long`
           : `plate ${q(p.length, "m")} × ${q(p.width, "m")} × ${q(p.thickness, "m")}`;
-  out.push(
-    textTable([
+  const rows: [string, string][] = [
       ["supply", `${d.supply.kind}, ${q(d.supply.voltage, "V")}, internal ${q(d.supply.internalResistance, "Ω")}`],
       ["inverter", d.inverter.kind === "current-fed-parallel" ? "current-fed parallel (self-oscillating push-pull)" : `voltage-fed series, ${d.inverter.bridge} bridge, ${d.inverter.control === "fixed" ? `fixed ${q(d.inverter.frequency, "Hz")}` : `tracking ${q(d.inverter.targetPower, "W")}`}`],
       ["coil", coilText],
@@ -95,8 +80,33 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
       ["part", `${p.material.name}, ${partText}`],
       ["part mass, surface", `${q(study.part.mass, "kg")}, ${area(study.part.surfaceArea)}`],
       ["heat", `${celsiusText(p.startTemperature)} → ${celsiusText(p.targetTemperature)}${study.part.curieTemperature === null ? "" : ` (Curie point ${celsiusText(study.part.curieTemperature)})`}`],
-    ], undefined, "  ", 2),
-  );
+  ];
+  if (d.concentrator !== null) {
+    rows.splice(rows.length - 2, 0, ["concentrator", `${d.concentrator.materialId}, ${area(d.concentrator.crossSectionArea)} cross-section, ${volume(d.concentrator.volume)}`]);
+  }
+  rows.push(["surroundings", `${celsiusText(d.environment.ambientTemperature)}, convection ${Number(d.environment.convectionCoefficient.toPrecision(3))} W/(m²·K)`]);
+  return rows;
+}
+
+/**
+ * Renders a study as a readable text report (UTF-8, ≤ 100 columns).
+ *
+ * @param study - the study
+ * @param source - where it came from (file name), printed under the title
+ */
+export function studyTextReport(study: HeaterStudy, source?: string): string {
+  const d = study.description;
+  const out: string[] = [];
+  out.push(`fluxwright heater study: ${study.title}`);
+  if (source !== undefined) out.push(`study file: ${source}`);
+  out.push("");
+  if (study.cautions.length > 0) {
+    out.push(`CAUTIONS (${study.cautions.length})`);
+    for (const c of study.cautions) out.push(wrap(`  [${c.severity}] ${c.code}: ${c.message}`));
+    out.push("");
+  }
+  out.push("DESIGN");
+  out.push(textTable(designRows(study), undefined, "  ", 2));
   out.push("");
   out.push("OPERATING POINTS");
   out.push(
@@ -110,7 +120,7 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
   out.push(`  frequency shift by the part: ${q(study.frequencyShift, "Hz")}; drift during heat-up: ${q(study.frequencyDrift, "Hz")}`);
   out.push("");
   out.push(`WHERE THE POWER GOES (part at ${celsiusText(study.operating.partTemperature)})`);
-  const entries = lossEntries(study.operating);
+  const entries = lossEntries(study.operating, d.concentrator !== null);
   const total = study.operating.inputPower;
   out.push(
     textTable(
@@ -124,9 +134,9 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
     out.push("HEAT-UP");
     out.push(
       textTable([
-        [`time to ${celsiusText(p.targetTemperature)}`, h.reachable ? duration(h.timeToTarget) : "not reached"],
+        [`time to ${celsiusText(d.part.targetTemperature)}`, h.reachable ? duration(h.timeToTarget) : "not reached"],
         ["temperature the part would settle at", celsiusText(h.steadyStateTemperature)],
-        ["Curie point crossed at", h.curieCrossingTime === null ? "—" : duration(h.curieCrossingTime)],
+        ["Curie point crossed at", h.curieCrossingTime === null ? (study.part.curieTemperature === null ? "no Curie point (non-magnetic)" : "not crossed") : duration(h.curieCrossingTime)],
         ["energy from the supply", q(h.supplyEnergy, "J")],
         ["charge from the supply", `${q(h.supplyCharge, "C")} (${(h.supplyCharge / 3600).toPrecision(3)} A·h)`],
         ["heat into the part", q(h.energy.input, "J")],

@@ -107,6 +107,10 @@ export interface HeaterTemperatureScan {
   readonly relativePermeabilities: readonly number[];
   /** Inductance at the coil terminals [H]. */
   readonly inductances: readonly number[];
+  /** RMS coil current [A]. */
+  readonly coilCurrentsRms: readonly number[];
+  /** Peak tank (coil) voltage [V]. */
+  readonly tankVoltagesPeak: readonly number[];
 }
 
 /**
@@ -441,6 +445,8 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
       efficiencies: points.map((p) => p.efficiency),
       relativePermeabilities: points.map((p) => p.partRelativePermeability),
       inductances: points.map((p) => p.inductance),
+      coilCurrentsRms: points.map((p) => p.coilCurrentRms),
+      tankVoltagesPeak: points.map((p) => p.tankVoltagePeak),
     };
   }
 
