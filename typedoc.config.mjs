@@ -5,11 +5,11 @@ import { katexMarkdownItLoader } from "./scripts/typedoc-katex.mjs";
  * study), each named by the subpath it is imported from (`@module fluxwright/<name>` in its
  * index.ts) and carrying its guide from docs/ (`@document`). The README is the landing page.
  */
-const modules = ["core", "units", "special", "materials", "inductance", "conductors", "coreloss", "tank", "workpiece", "thermal", "safety", "study"];
+const modules = ["core", "units", "special", "materials", "inductance", "conductors", "coreloss", "tank", "workpiece", "thermal", "safety", "study", "report"];
 
 /** Categories in the order a designer needs them: the study first, special functions last. */
 const categoryOrder = [
-  "Guide", "Heater study", "Tanks", "Networks", "Inverters", "Capacitor banks", "Tolerances", "Workpiece", "Thermal",
+  "Guide", "Heater study", "Reports and charts", "Tanks", "Networks", "Inverters", "Capacitor banks", "Tolerances", "Workpiece", "Thermal",
   "Cautions", "Exposure", "Field", "Inductance", "Conductors", "Core loss", "Core materials", "Materials",
   "Parsing and formatting", "Conversions", "Unit types", "Constants", "Wire gauges", "Errors", "Validation",
   "Quadrature", "ODE", "Root finding", "Complex arithmetic", "Elliptic integrals", "Kelvin functions", "Bessel functions", "*",

@@ -8,8 +8,8 @@
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { dirname, relative, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { studyHtmlReport } from "../src/cli/html-report.js";
-import { studyTextReport } from "../src/cli/text-report.js";
+import { studyHtmlReport } from "../src/report/index.js";
+import { studyTextReport } from "../src/report/index.js";
 import { studyHeater } from "../src/index.js";
 import type { HeaterDescription } from "../src/index.js";
 

@@ -7,7 +7,7 @@
  * Run: npx tsx docs/examples/study-plots.ts [--write]
  */
 import { readFileSync, writeFileSync } from "node:fs";
-import { studyPlots } from "../../src/cli/html-report.js";
+import { studyPlots } from "../../src/report/index.js";
 import { studyHeater } from "../../src/index.js";
 import type { HeaterDescription } from "../../src/index.js";
 

@@ -7,10 +7,10 @@
 import { InputError, nearestName } from "../core/index.js";
 import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
 import type { HeaterDescription, HeaterGoal, HeaterLimits } from "../study/index.js";
-import { designErrorText } from "./design-error.js";
+import { designErrorText } from "../report/design-error.js";
 import { jsonSyntaxError } from "./json-error.js";
-import { studyHtmlReport } from "./html-report.js";
-import { optimisationTextReport, studyTextReport, sweepCsv, sweepTextReport } from "./text-report.js";
+import { studyHtmlReport } from "../report/index.js";
+import { optimisationTextReport, studyTextReport, sweepCsv, sweepTextReport } from "../report/index.js";
 
 /** What the commands need from the outside world. */
 export interface CliIo {

@@ -3,7 +3,9 @@
  * heat-up and the validity notes, in aligned tables with engineering units.
  */
 import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterSweepRow, HeaterOperatingPoint } from "../study/index.js";
+import { InputError } from "../core/index.js";
 import { reasonText } from "./design-error.js";
+import { requireStudy } from "./checks.js";
 import { area, celsiusText, duration, percent, q, textTable, volume, wrap } from "./format.js";
 
 /** Rows comparing operating points side by side. */
@@ -89,12 +91,34 @@ export function designRows(study: HeaterStudy): [string, string][] {
 }
 
 /**
- * Renders a study as a readable text report (UTF-8, ≤ 100 columns).
+ * Renders a study as a readable text report (UTF-8, ≤ 100 columns): cautions first, the
+ * design, operating points, where the power goes, the heat-up and the validity notes.
  *
- * @param study - the study
- * @param source - where it came from (file name), printed under the title
+ * @param study - a result of `studyHeater`
+ * @param source - where it came from (file name), printed under the title (optional)
+ * @returns the report as text
+ * @throws {@link InputError} when `study` is not a study result
+ * @example
+ * ```ts
+ * import { studyHeater } from "fluxwright";
+ * import type { HeaterDescription } from "fluxwright";
+ * import { studyTextReport } from "fluxwright/report";
+ * const design: HeaterDescription = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const text = studyTextReport(studyHeater(design, { heatUp: false }));
+ * console.log(text.includes("OPERATING POINTS")); // true
+ * ```
+ * @category Reports and charts
  */
 export function studyTextReport(study: HeaterStudy, source?: string): string {
+  requireStudy("studyTextReport", study);
   const d = study.description;
   const out: string[] = [];
   out.push(`fluxwright heater study: ${study.title}`);
@@ -154,6 +178,12 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
   return out.join("\n");
 }
 
+/** Throws InputError unless `sweep` looks like a result of sweepHeater. */
+function requireSweep(where: string, sweep: unknown): void {
+  const s = sweep as Partial<HeaterSweep> | null;
+  if (typeof s !== "object" || s === null || typeof s.field !== "string" || !Array.isArray(s.rows)) throw new InputError(where, "sweep", sweep, "", "a result of sweepHeater");
+}
+
 /** The cells of one sweep row: numbers blank when the row failed; the time "not reached" when it is not. */
 function sweepCells(r: HeaterSweepRow, heatUp: boolean, format: "text" | "csv"): string[] {
   const s = r.summary;
@@ -180,8 +210,22 @@ function sweepCells(r: HeaterSweepRow, heatUp: boolean, format: "text" | "csv"):
  * Renders a sweep as a text table: one row per value, failed rows with blank numbers and their
  * reason in the last column, an unreached target as "not reached", no time column without the
  * heat-up.
+ *
+ * @param sweep - a result of `sweepHeater`
+ * @param heatUp - whether the sweep ran the heat-up (default `true`): adds the time column
+ * @returns the table as text
+ * @throws {@link InputError} when `sweep` is not a sweep result
+ * @example
+ * ```ts
+ * import { sweepTextReport } from "fluxwright/report";
+ * const table = sweepTextReport({ field: "coil.turns", rows: [{ value: 0, summary: null, cautionCount: 0,
+ *   problem: "readHeaterDescription: coil.turns must be an integer ≥ 1, got 0" }] }, false);
+ * console.log(table.split("\n")[0]); // sweep of coil.turns: 0 of 1 values gave a design that runs
+ * ```
+ * @category Reports and charts
  */
 export function sweepTextReport(sweep: HeaterSweep, heatUp = true): string {
+  requireSweep("sweepTextReport", sweep);
   const header = [sweep.field, "frequency", "part power", "efficiency", "tank V peak", "coil I rms", "supply I", ...(heatUp ? ["time to target"] : []), "cautions", "reason (when no result)"];
   const rows = sweep.rows.map((r) => sweepCells(r, heatUp, "text"));
   const ok = sweep.rows.filter((r) => r.summary !== null).length;
@@ -194,17 +238,45 @@ function csvField(text: string): string {
 }
 
 /**
- * Renders a sweep as CSV (RFC 4180): a header line with SI units, SI numbers, blank cells where
- * a row has no result, `not reached` for an unreached target, and the reason.
+ * Renders a sweep as CSV (RFC 4180, CRLF line ends): a header line with SI units, SI numbers,
+ * blank cells where a row has no result, `not reached` for an unreached target, and the reason.
+ *
+ * @param sweep - a result of `sweepHeater`
+ * @param heatUp - whether the sweep ran the heat-up (default `true`): adds `time_to_target_s`
+ * @returns the CSV text
+ * @throws {@link InputError} when `sweep` is not a sweep result
+ * @example
+ * ```ts
+ * import { sweepCsv } from "fluxwright/report";
+ * const csv = sweepCsv({ field: "coil.turns", rows: [] }, false);
+ * console.log(csv.startsWith("coil.turns,frequency_Hz,")); // true
+ * ```
+ * @category Reports and charts
  */
 export function sweepCsv(sweep: HeaterSweep, heatUp = true): string {
+  requireSweep("sweepCsv", sweep);
   const header = [sweep.field, "frequency_Hz", "part_power_W", "efficiency", "tank_voltage_peak_V", "coil_current_rms_A", "supply_current_A", ...(heatUp ? ["time_to_target_s"] : []), "cautions", "reason"];
   const lines = [header, ...sweep.rows.map((r) => sweepCells(r, heatUp, "csv"))].map((cells) => cells.map(csvField).join(","));
   return `${lines.join("\r\n")}\r\n`;
 }
 
-/** Renders an optimisation result as text. */
+/**
+ * Renders an optimisation result as text: the best designs, why the others failed, and the
+ * search's warnings.
+ *
+ * @param r - a result of `optimizeHeater`
+ * @returns the report as text
+ * @throws {@link InputError} when `r` is not an optimisation result
+ * @example
+ * ```ts
+ * import { optimisationTextReport } from "fluxwright/report";
+ * const text = optimisationTextReport({ evaluated: 10, feasible: 0, best: [], rejected: [{ reason: "tank voltage above its limit", count: 10 }], warnings: [] });
+ * console.log(text.includes("WHY OTHERS FAILED")); // true
+ * ```
+ * @category Reports and charts
+ */
 export function optimisationTextReport(r: HeaterOptimization): string {
+  if (typeof r !== "object" || r === null || !Array.isArray(r.best) || !Array.isArray(r.rejected)) throw new InputError("optimisationTextReport", "result", r, "", "a result of optimizeHeater");
   const out: string[] = [];
   out.push(`candidates evaluated: ${r.evaluated}, within limits: ${r.feasible}`);
   out.push("");
@@ -227,6 +299,11 @@ export function optimisationTextReport(r: HeaterOptimization): string {
     ),
   );
   out.push("");
+  if (r.warnings.length > 0) {
+    out.push("WARNINGS");
+    for (const w of r.warnings) out.push(wrap(`  - ${w}`));
+    out.push("");
+  }
   if (r.rejected.length > 0) {
     out.push("WHY OTHERS FAILED");
     out.push(textTable(r.rejected.map((x) => [x.reason, String(x.count)]), ["reason", "candidates"]));

@@ -1,11 +1,11 @@
 import { describe, it, expect } from "vitest";
 import { studyHeater } from "../../src/index.js";
-import { studyHtmlReport } from "../../src/cli/html-report.js";
-import { studyTextReport } from "../../src/cli/text-report.js";
-import { area, volume } from "../../src/cli/format.js";
-import { lineChart } from "../../src/cli/chart.js";
+import { studyHtmlReport } from "../../src/report/html-report.js";
+import { studyTextReport } from "../../src/report/text-report.js";
+import { area, volume } from "../../src/report/format.js";
+import { lineChart } from "../../src/report/chart.js";
 import { loadExample, mutate } from "../study/cases.js";
-import { allText, findAll, parseXml } from "./xml.js";
+import { allText, findAll, parseXml } from "../cli/xml.js";
 
 const race = studyHeater(loadExample("study-bearing-race.json"));
 const html = studyHtmlReport(race, "race.json");

@@ -3,6 +3,7 @@
  * no network), written in XML-compatible HTML so that it parses both as HTML and as XML.
  */
 import type { HeaterStudy } from "../study/index.js";
+import { requireStudy } from "./checks.js";
 import { ZERO_CELSIUS } from "../units/index.js";
 import { barChart, escapeXml, lineChart } from "./chart.js";
 import type { ChartReferenceLine, ChartSeries } from "./chart.js";
@@ -43,8 +44,36 @@ function figure(svg: string, caption: string): string {
 const toC = (k: number): number => k - ZERO_CELSIUS;
 const degrees = (rad: number): number => (rad * 180) / Math.PI;
 
-/** The plots of a study report, as SVG strings with captions. */
+/**
+ * The plots of a study report, as SVG strings with captions: tank impedance magnitude and
+ * phase, the heat-up, power and frequency, coil current and tank voltage, efficiency and
+ * permeability against part temperature, and where the power goes. Plots whose data the study
+ * did not compute (`heatUp`, `temperatureScan`, `impedance` off) are left out.
+ *
+ * @param study - a result of `studyHeater`
+ * @returns the plots, each an `<svg>` string and a one-paragraph caption
+ * @throws {@link InputError} when `study` is not a study result
+ * @example
+ * ```ts
+ * import { studyHeater } from "fluxwright";
+ * import type { HeaterDescription } from "fluxwright";
+ * import { studyPlots } from "fluxwright/report";
+ * const design: HeaterDescription = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const plots = studyPlots(studyHeater(design, { heatUp: false }));
+ * console.log(plots.length, plots[0]?.svg.startsWith("<svg")); // 5 true
+ * ```
+ * @category Reports and charts
+ */
 export function studyPlots(study: HeaterStudy): { svg: string; caption: string }[] {
+  requireStudy("studyPlots", study);
   const plots: { svg: string; caption: string }[] = [];
   const refs: ChartReferenceLine[] = [
     { axis: "x", value: study.emptyCoil.frequency, label: "empty" },
@@ -189,12 +218,34 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
 
 /**
  * Renders a study as one self-contained HTML page (inline CSS and SVG; no scripts, no
- * external resources).
+ * external resources), in XML-compatible HTML: summary, cautions, design, operating points,
+ * plots, where the power goes, heat-up and validity notes.
  *
- * @param study - the study
- * @param source - the study file's name, shown under the title
+ * @param study - a result of `studyHeater`
+ * @param source - the study file's name, shown under the title (optional)
+ * @returns the page as text (UTF-8)
+ * @throws {@link InputError} when `study` is not a study result
+ * @example
+ * ```ts
+ * import { studyHeater } from "fluxwright";
+ * import type { HeaterDescription } from "fluxwright";
+ * import { studyHtmlReport } from "fluxwright/report";
+ * const design: HeaterDescription = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const page = studyHtmlReport(studyHeater(design, { heatUp: false }), "race.json");
+ * console.log(page.startsWith("<!DOCTYPE html>"), page.includes("<h2>Design</h2>")); // true true
+ * ```
+ * @category Reports and charts
  */
 export function studyHtmlReport(study: HeaterStudy, source?: string): string {
+  requireStudy("studyHtmlReport", study);
   const d = study.description;
   const parts: string[] = [];
   parts.push("<!DOCTYPE html>");

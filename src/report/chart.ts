@@ -9,8 +9,12 @@
  *
  * @packageDocumentation
  */
+import { InputError, requireObject } from "../core/index.js";
 
-/** One line of a {@link lineChart}. */
+/** One line of a {@link lineChart}.
+ *
+ * @category Reports and charts
+ */
 export interface ChartSeries {
   /** Name shown in the legend. */
   readonly name: string;
@@ -24,7 +28,10 @@ export interface ChartSeries {
   readonly markers?: boolean;
 }
 
-/** A vertical or horizontal reference line drawn across the plot, e.g. the Curie temperature. */
+/** A vertical or horizontal reference line drawn across the plot, e.g. the Curie temperature.
+ *
+ * @category Reports and charts
+ */
 export interface ChartReferenceLine {
   /** `"x"`: a vertical line at `value` on the x axis; `"y"`: a horizontal line on the primary y axis. */
   readonly axis: "x" | "y";
@@ -34,7 +41,10 @@ export interface ChartReferenceLine {
   readonly label: string;
 }
 
-/** The right-hand y axis of a {@link lineChart}, used by series with `axis: "secondary"`. */
+/** The right-hand y axis of a {@link lineChart}, used by series with `axis: "secondary"`.
+ *
+ * @category Reports and charts
+ */
 export interface ChartSecondaryAxis {
   /** Axis title. */
   readonly label: string;
@@ -44,7 +54,10 @@ export interface ChartSecondaryAxis {
   readonly log?: boolean;
 }
 
-/** Options of {@link lineChart}. */
+/** Options of {@link lineChart}.
+ *
+ * @category Reports and charts
+ */
 export interface LineChartOptions {
   /** Chart title, drawn at the top. */
   readonly title: string;
@@ -78,7 +91,10 @@ export interface LineChartOptions {
   readonly idPrefix?: string;
 }
 
-/** One bar of a {@link barChart}. */
+/** One bar of a {@link barChart}.
+ *
+ * @category Reports and charts
+ */
 export interface ChartBar {
   /** Category label, drawn left of the bar. */
   readonly label: string;
@@ -86,7 +102,10 @@ export interface ChartBar {
   readonly value: number;
 }
 
-/** Options of {@link barChart}. */
+/** Options of {@link barChart}.
+ *
+ * @category Reports and charts
+ */
 export interface BarChartOptions {
   /** Chart title. */
   readonly title: string;
@@ -417,16 +436,20 @@ function markerElement(index: number, x: number, y: number, colour: string): str
  * @param options - title, axis labels and units, scales, series
  * @returns an `<svg>` element as text (UTF-8, no external references)
  *
- * Usage (from a docs plot script):
+ * @throws {@link InputError} when `options` is not an object or `series` not an array
+ * @example
  * ```ts
- * import { lineChart } from "../../src/cli/chart.js";
+ * import { lineChart } from "fluxwright/report";
  * const svg = lineChart({ title: "Skin depth in copper", xLabel: "frequency", yLabel: "depth",
  *   xUnit: "Hz", yUnit: "m", xLog: true, yLog: true,
  *   series: [{ name: "copper, 20 °C", x: [1e3, 1e4, 1e5], y: [2.1e-3, 6.6e-4, 2.1e-4] }] });
  * console.log(svg.startsWith("<svg")); // true
  * ```
+ * @category Reports and charts
  */
 export function lineChart(options: LineChartOptions): string {
+  requireObject("lineChart", "options", options);
+  if (!Array.isArray(options.series)) throw new InputError("lineChart", "options.series", options.series, "", "an array of series");
   const width = Math.max(240, options.width ?? 720);
   const height = Math.max(180, options.height ?? 420);
   const series = options.series;
@@ -630,15 +653,19 @@ export function lineChart(options: LineChartOptions): string {
  * @param options - title, unit and bars
  * @returns an `<svg>` element as text
  *
- * Usage:
+ * @throws {@link InputError} when `options` is not an object or `bars` not an array
+ * @example
  * ```ts
- * import { barChart } from "../../src/cli/chart.js";
+ * import { barChart } from "fluxwright/report";
  * const svg = barChart({ title: "Where the power goes", valueLabel: "power", unit: "W",
  *   bars: [{ label: "part", value: 1200 }, { label: "coil", value: 180 }], showShare: true });
  * console.log(svg.includes("1.2 kW")); // true
  * ```
+ * @category Reports and charts
  */
 export function barChart(options: BarChartOptions): string {
+  requireObject("barChart", "options", options);
+  if (!Array.isArray(options.bars)) throw new InputError("barChart", "options.bars", options.bars, "", "an array of bars");
   const bars = options.bars;
   const unit = options.unit ?? "";
   const fontSize = 12;
