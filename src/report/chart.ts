@@ -449,7 +449,7 @@ function markerElement(index: number, x: number, y: number, colour: string): str
  */
 export function lineChart(options: LineChartOptions): string {
   requireObject("lineChart", "options", options);
-  if (!Array.isArray(options.series)) throw new InputError("lineChart", "options.series", options.series, "", "an array of series");
+  if (!Array.isArray((options as { series?: unknown }).series)) throw new InputError("lineChart", "options.series", options.series, "", "an array of series");
   const width = Math.max(240, options.width ?? 720);
   const height = Math.max(180, options.height ?? 420);
   const series = options.series;
@@ -665,7 +665,7 @@ export function lineChart(options: LineChartOptions): string {
  */
 export function barChart(options: BarChartOptions): string {
   requireObject("barChart", "options", options);
-  if (!Array.isArray(options.bars)) throw new InputError("barChart", "options.bars", options.bars, "", "an array of bars");
+  if (!Array.isArray((options as { bars?: unknown }).bars)) throw new InputError("barChart", "options.bars", options.bars, "", "an array of bars");
   const bars = options.bars;
   const unit = options.unit ?? "";
   const fontSize = 12;

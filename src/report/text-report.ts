@@ -276,7 +276,10 @@ export function sweepCsv(sweep: HeaterSweep, heatUp = true): string {
  * @category Reports and charts
  */
 export function optimisationTextReport(r: HeaterOptimization): string {
-  if (typeof r !== "object" || r === null || !Array.isArray(r.best) || !Array.isArray(r.rejected)) throw new InputError("optimisationTextReport", "result", r, "", "a result of optimizeHeater");
+  const given = r as unknown as { best?: unknown; rejected?: unknown } | null;
+  if (typeof given !== "object" || given === null || !Array.isArray(given.best) || !Array.isArray(given.rejected)) {
+    throw new InputError("optimisationTextReport", "result", r, "", "a result of optimizeHeater");
+  }
   const out: string[] = [];
   out.push(`candidates evaluated: ${r.evaluated}, within limits: ${r.feasible}`);
   out.push("");
