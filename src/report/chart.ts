@@ -428,7 +428,7 @@ function markerElement(index: number, x: number, y: number, colour: string): str
  * Draws a line chart as a self-contained SVG string.
  *
  * Axes may be linear or logarithmic (ticks at 1-2-5 steps or decades), tick labels carry SI
- * prefixes and the axis unit, each series gets a colour from {@link CHART_PALETTE}, a dash
+ * prefixes and the axis unit, each series gets a colour from a fixed palette, a dash
  * pattern and a marker shape, and the legend sits under the plot. Degenerate input never
  * throws: empty series draw empty axes with a note, a constant series gets a padded range,
  * and points that cannot be drawn (non-finite, or ≤ 0 on a log axis) break the line.
@@ -647,7 +647,7 @@ export function lineChart(options: LineChartOptions): string {
 /**
  * Draws a horizontal bar chart (one bar per category, e.g. losses by place) as an SVG string.
  * Each bar is labelled with its value (SI prefix and unit) and, with `showShare`, its share of
- * the total. Bars take colours from {@link CHART_PALETTE} in order; the value text makes the
+ * the total. Bars take colours from a fixed palette in order; the value text makes the
  * chart readable without colour. An empty list draws a "no data" note.
  *
  * @param options - title, unit and bars

@@ -45,6 +45,18 @@ const toC = (k: number): number => k - ZERO_CELSIUS;
 const degrees = (rad: number): number => (rad * 180) / Math.PI;
 
 /**
+ * One plot of a study report.
+ *
+ * @category Reports and charts
+ */
+export interface StudyPlot {
+  /** The plot, an `<svg>` element as text. */
+  readonly svg: string;
+  /** What it shows, one paragraph. */
+  readonly caption: string;
+}
+
+/**
  * The plots of a study report, as SVG strings with captions: tank impedance magnitude and
  * phase, the heat-up, power and frequency, coil current and tank voltage, efficiency and
  * permeability against part temperature, and where the power goes. Plots whose data the study
@@ -68,13 +80,13 @@ const degrees = (rad: number): number => (rad * 180) / Math.PI;
  *     height: "30 mm", targetTemperature: "120 °C" },
  * };
  * const plots = studyPlots(studyHeater(design, { heatUp: false }));
- * console.log(plots.length, plots[0]?.svg.startsWith("<svg")); // 5 true
+ * console.log(plots.length, plots[0]?.svg.startsWith("<svg")); // 6 true
  * ```
  * @category Reports and charts
  */
-export function studyPlots(study: HeaterStudy): { svg: string; caption: string }[] {
+export function studyPlots(study: HeaterStudy): StudyPlot[] {
   requireStudy("studyPlots", study);
-  const plots: { svg: string; caption: string }[] = [];
+  const plots: StudyPlot[] = [];
   const refs: ChartReferenceLine[] = [
     { axis: "x", value: study.emptyCoil.frequency, label: "empty" },
     { axis: "x", value: study.operating.frequency, label: "loaded" },

@@ -12,4 +12,5 @@
 export { lineChart, barChart } from "./chart.js";
 export type { ChartSeries, ChartReferenceLine, ChartSecondaryAxis, LineChartOptions, ChartBar, BarChartOptions } from "./chart.js";
 export { studyPlots, studyHtmlReport } from "./html-report.js";
+export type { StudyPlot } from "./html-report.js";
 export { studyTextReport, sweepTextReport, sweepCsv, optimisationTextReport } from "./text-report.js";
