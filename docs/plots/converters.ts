@@ -8,7 +8,7 @@
  * Run: npx tsx docs/plots/converters.ts
  */
 import { writeFileSync } from "node:fs";
-import { lineChart } from "../../src/cli/chart.js";
+import { lineChart } from "../../src/report/index.js";
 import { llcGain, llcOperatingPoint } from "../../src/index.js";
 
 const img = (name: string): URL => new URL(`../img/${name}`, import.meta.url);

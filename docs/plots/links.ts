@@ -9,7 +9,7 @@
  * Run: npx tsx docs/plots/links.ts
  */
 import { writeFileSync } from "node:fs";
-import { lineChart } from "../../src/cli/chart.js";
+import { lineChart } from "../../src/report/index.js";
 import { inductiveLink, padMutualInductance, spiralCoilInductance } from "../../src/index.js";
 
 const img = (name: string): URL => new URL(`../img/${name}`, import.meta.url);
