@@ -4,6 +4,7 @@
  * file (the message names the field path; no report is written), 3 a valid file whose design
  * cannot run, 4 an output that could not be written.
  */
+import { parseArgs as nodeParseArgs } from "node:util";
 import { InputError, nearestName } from "../core/index.js";
 import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
 import type { HeaterDescription, HeaterGoal, HeaterLimits } from "../study/index.js";
@@ -152,32 +153,49 @@ interface Parsed {
   flags: Map<string, string | true>;
 }
 
-/** Parses `--name value`, `--name=value` and boolean `--name` options; `-` is a positional (standard input). */
+/**
+ * Parses `--name value`, `--name=value` and boolean `--name` options with `node:util`'s
+ * `parseArgs` (its tokens, so that the messages stay ours); `-` is a positional (standard
+ * input), and so is any other argument that starts with a single dash except `-h`.
+ */
 function parseArgs(args: readonly string[], valued: readonly string[], booleans: readonly string[]): Parsed {
+  const options: Record<string, { type: "string" | "boolean"; short?: string }> = { help: { type: "boolean", short: "h" } };
+  for (const name of valued) options[name] = { type: "string" };
+  for (const name of booleans) options[name] = { type: "boolean" };
+  const { tokens } = nodeParseArgs({ args: [...args], options, strict: false, allowPositionals: true, tokens: true });
   const positional: string[] = [];
   const flags = new Map<string, string | true>();
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i] as string;
-    if (a === "-h" || a === "--help") {
+  const seen = new Set<number>();
+  const unknown = (raw: string, name: string): UsageError => {
+    const near = nearestName(name, [...valued, ...booleans]);
+    return new UsageError(`unknown option ${raw}${near === null ? "" : ` (did you mean --${near}?)`}`);
+  };
+  for (const token of tokens) {
+    if (token.kind === "positional") {
+      positional.push(token.value);
+      continue;
+    }
+    const raw = args[token.index] as string;
+    if (token.kind === "option-terminator") throw unknown(raw, "");
+    if (!raw.startsWith("--")) {
+      if (raw === "-h") flags.set("help", true);
+      // a lone dash word (a negative number, "-x") was a positional: keep it once, as written
+      else if (!seen.has(token.index)) positional.push(raw);
+      seen.add(token.index);
+      continue;
+    }
+    const name = token.name;
+    if (name === "help" && token.value === undefined) {
       flags.set("help", true);
-      continue;
+    } else if (valued.includes(name)) {
+      const value = token.value;
+      if (value === undefined || (!token.inlineValue && value.startsWith("--"))) throw new UsageError(`option --${name} needs a value`);
+      flags.set(name, value);
+    } else if (booleans.includes(name) && token.value === undefined) {
+      flags.set(name, true);
+    } else {
+      throw unknown(raw, name);
     }
-    if (a.startsWith("--")) {
-      const eq = a.indexOf("=");
-      const name = eq < 0 ? a.slice(2) : a.slice(2, eq);
-      if (valued.includes(name)) {
-        const value = eq < 0 ? args[++i] : a.slice(eq + 1);
-        if (value === undefined || (eq < 0 && value.startsWith("--"))) throw new UsageError(`option --${name} needs a value`);
-        flags.set(name, value);
-      } else if (booleans.includes(name) && eq < 0) {
-        flags.set(name, true);
-      } else {
-        const near = nearestName(name, [...valued, ...booleans]);
-        throw new UsageError(`unknown option ${a}${near === null ? "" : ` (did you mean --${near}?)`}`);
-      }
-      continue;
-    }
-    positional.push(a);
   }
   return { positional, flags };
 }
