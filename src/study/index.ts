@@ -74,8 +74,9 @@ export type {
   HeaterUnsolvedBand,
 } from "./study-heater.js";
 export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
-export { sweepHeater } from "./sweep-heater.js";
-export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep } from "./sweep-heater.js";
+export { sweepHeater, sweepHeaterStream } from "./sweep-heater.js";
+export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep, HeaterShard, HeaterSweepStreamOptions, HeaterSweepStreamRow } from "./sweep-heater.js";
+export type { HeaterPoolOptions, HeaterProgress } from "./worker-pool.js";
 export { optimizeHeater } from "./optimize-heater.js";
 export type {
   HeaterLimits,
