@@ -236,7 +236,7 @@ function checkShard(where: string, shard: unknown): HeaterShard | undefined {
  * @param sweep - `field` (dotted path) and `values`, as for {@link sweepHeater}
  * @param options - `workers` (0 … 256), `onProgress`, `signal`, `workerUrl`, `shard`
  * @returns an async iterator of rows, each with its `index`
- * @throws {@link InputError} (when iteration starts) for everything {@link sweepHeater} refuses,
+ * @throws {@link InputError} (at the call, before any design runs) for everything {@link sweepHeater} refuses,
  * for bad pool options (`workers` not an integer in [0, 256], `onProgress` not a function,
  * `signal` not an AbortSignal, unknown keys) and for a bad shard (`count` not an integer in
  * [1, 10⁶], `index` not in [1, count])
@@ -260,20 +260,22 @@ function checkShard(where: string, shard: unknown): HeaterShard | undefined {
  * ```
  * @category Heater study
  */
-export async function* sweepHeaterStream(description: HeaterDescription, sweep: HeaterSweepSpec, options: HeaterSweepStreamOptions): AsyncGenerator<HeaterSweepStreamRow, void, undefined> {
+export function sweepHeaterStream(description: HeaterDescription, sweep: HeaterSweepSpec, options: HeaterSweepStreamOptions): AsyncGenerator<HeaterSweepStreamRow, void, undefined> {
   const where = "sweepHeaterStream";
   const pool = checkPoolOptions(where, options, ["shard"]);
   const shard = checkShard(where, options.shard);
   const c = checkSweep(where, description, sweep);
   const [start, end] = shardRange(c.values.length, shard);
   const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
-  let index = start;
   function* values(): Generator<QuantityInput> {
     for (let i = start; i < end; i++) yield c.values[i] as QuantityInput;
   }
-  for await (const row of runPool({ kind: "sweep", context }, values(), end - start, sweepTask, pool, where)) {
-    yield { index: index++, ...(row as HeaterSweepRow) };
-  }
+  return (async function* rows(): AsyncGenerator<HeaterSweepStreamRow, void, undefined> {
+    let index = start;
+    for await (const row of runPool({ kind: "sweep", context }, values(), end - start, sweepTask, pool, where)) {
+      yield { index: index++, ...(row as HeaterSweepRow) };
+    }
+  })();
 }
 
 /**

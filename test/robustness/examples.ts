@@ -1019,6 +1019,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     quantityStrings: true,
     badString: "12 parsecs",
   },
+  sweepHeaterStream: {
+    args: () => [heater(), { field: "coil.turns", values: [5, 6], heatUp: false }, { workers: 0, shard: { index: 1, count: 2 } }],
+    skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
+    allow: [
+      { paths: ["1.values.*"], kinds: ["NaN", "Infinity", "-Infinity", "string", "zero", "negative"], reason: "a value the study rejects is reported in its row's `problem` (documented), not thrown" },
+      { paths: ["1.heatUp", "2.shard"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["2.workers"], kinds: ["zero"], reason: "workers: 0 runs on the calling thread (documented)" },
+    ],
+    quantityStrings: true,
+    badString: "12 parsecs",
+  },
   optimizeHeater: {
     args: () => [heater(), { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 }, {}],
     skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
