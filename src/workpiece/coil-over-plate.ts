@@ -85,12 +85,24 @@ export interface CoilOverPlateOptions {
  */
 export interface CoilOverPlateResult {
   /** Resistance added by the plate, the reflected resistance $\Delta R$ [Ω], ≥ 0. */
+  readonly reflectedResistance: number;
+  /**
+   * The same value as {@link CoilOverPlateResult.reflectedResistance} [Ω].
+   *
+   * @deprecated Use `reflectedResistance`; this field goes at 1.0.
+   */
   readonly resistanceChange: number;
   /** Reactance change $\Delta X$ [Ω] (negative when eddy currents shield, positive when magnetisation wins). */
   readonly reactanceChange: number;
   /** Inductance change $\Delta L = \Delta X/\omega$ [H]. */
   readonly inductanceChange: number;
-  /** Inductance of the same coil in air [H] (Dodd & Deeds' air-core integral). */
+  /** Inductance of the same coil in air, without the plate [H] (Dodd & Deeds' air-core integral). */
+  readonly emptyCoilInductance: number;
+  /**
+   * The same value as {@link CoilOverPlateResult.emptyCoilInductance} [H].
+   *
+   * @deprecated Use `emptyCoilInductance`; this field goes at 1.0.
+   */
   readonly airCoreInductance: number;
   /** Inductance with the plate, $L_0 + \Delta L$ [H]. */
   readonly inductance: number;
@@ -453,7 +465,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  *   plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
  *   frequency: 2e4,
  * });
- * console.log(r.resistanceChange.toPrecision(4)); // 0.02157
+ * console.log(r.reflectedResistance.toPrecision(4)); // 0.02157
  * console.log(r.inductanceChange < 0); // true
  * ```
  * @category Workpiece
@@ -513,9 +525,13 @@ function assembleResult(
     });
   }
   return {
+    reflectedResistance: dR,
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
     resistanceChange: dR,
     reactanceChange: dX,
     inductanceChange: dL,
+    emptyCoilInductance: l0,
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
     airCoreInductance: l0,
     inductance: l0 + dL,
     impedance: { re: dR, im: omega * (l0 + dL) },
@@ -598,8 +614,8 @@ function besselJ1Zeros(n: number): Float64Array {
  *   plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
  *   frequency: 2e4,
  * };
- * const a = coilOverPlate(options).resistanceChange;
- * const b = coilOverPlateTruncatedRegion(options).resistanceChange;
+ * const a = coilOverPlate(options).reflectedResistance;
+ * const b = coilOverPlateTruncatedRegion(options).reflectedResistance;
  * console.log(Math.abs(b / a - 1) < 1e-6); // true
  * ```
  * @category Workpiece

@@ -204,13 +204,13 @@ export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTempe
     const pc = checkPlateCoil(where, coil);
     const z = coilOverLayers(pc, layers, f);
     const base = {
-      reflectedResistance: z.resistanceChange,
+      reflectedResistance: z.reflectedResistance,
       reactanceChange: z.reactanceChange,
       inductanceChange: z.inductanceChange,
       skinDepth: z.skinDepth,
       validity: z.validity,
     };
-    r = rc === undefined ? base : { ...base, efficiency: rc + z.resistanceChange > 0 ? z.resistanceChange / (rc + z.resistanceChange) : 0 };
+    r = rc === undefined ? base : { ...base, efficiency: rc + z.reflectedResistance > 0 ? z.reflectedResistance / (rc + z.reflectedResistance) : 0 };
   } else {
     throw new InputError(where, "part.kind", kind, "", 'one of "bar", "tube", "plate"');
   }

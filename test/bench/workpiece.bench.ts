@@ -51,6 +51,6 @@ describe("workpiece", () => {
     check(slabInTangentialField(slabs[i++ & (N - 1)]!).powerPerArea);
   }, { time: 300 });
   bench("coilOverPlate (one frequency point)", () => {
-    check(coilOverPlate(plates[i++ & 63]!).resistanceChange);
+    check(coilOverPlate(plates[i++ & 63]!).reflectedResistance);
   }, { time: 300 });
 });

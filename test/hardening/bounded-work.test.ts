@@ -54,7 +54,7 @@ describe("bounded work", () => {
     const { value, seconds } = timed(() => coilOverPlateTruncatedRegion({ ...base, coil: { ...coil, liftOff: 0.4 } }));
     expect(seconds).toBeLessThan(10);
     const open = coilOverPlate({ ...base, coil: { ...coil, liftOff: 0.4 } });
-    expect(Math.abs(value.resistanceChange / open.resistanceChange - 1)).toBeLessThan(1e-3);
+    expect(Math.abs(value.reflectedResistance / open.reflectedResistance - 1)).toBeLessThan(1e-3);
     refusedQuickly(() => coilOverPlateTruncatedRegion({ ...base, coil: { ...coil, liftOff: 6 } }), /at most 20 × coil\.outerRadius/);
   });
 

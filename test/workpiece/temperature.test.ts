@@ -46,7 +46,7 @@ describe("workpieceCouplingAtTemperature", () => {
     const t = celsius(200);
     const plate = workpieceCouplingAtTemperature({ material: aluminiumAlloy, temperature: t, part: { kind: "plate", thickness: 0.003, coil: plateCoil }, frequency: 2e4 });
     const direct = coilOverPlate({ coil: plateCoil, plate: { thickness: 0.003, resistivity: resistivityAt(aluminiumAlloy, t), relativePermeability: 1 }, frequency: 2e4 });
-    expect(plate.reflectedResistance).toBe(direct.resistanceChange);
+    expect(plate.reflectedResistance).toBe(direct.reflectedResistance);
   });
 
   it("throws InputError for bad input", () => {

@@ -1,0 +1,37 @@
+/* eslint-disable @typescript-eslint/no-deprecated -- this file checks the deprecated names themselves */
+// Names renamed before 1.0 keep working until 1.0: a result carries the old field beside the
+// new one with the same value; an input accepts either name and refuses both at once.
+import { describe, expect, it } from "vitest";
+import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, InputError } from "../../src/index.js";
+import { renamedOption } from "../../src/core/renamed.js";
+
+describe("renamedOption", () => {
+  it("reads the current name, the former name, or neither", () => {
+    expect(renamedOption("f", "", { length: 2 }, "length", "height")).toBe(2);
+    expect(renamedOption("f", "", { height: 3 }, "length", "height")).toBe(3);
+    expect(renamedOption("f", "", {}, "length", "height")).toBeUndefined();
+  });
+  it("refuses both names at once, naming the former one", () => {
+    expect(() => renamedOption("f", "coil", { length: 2, height: 2 }, "length", "height")).toThrow(InputError);
+    expect(() => renamedOption("f", "coil", { length: 2, height: 2 }, "length", "height")).toThrow(/^f: coil\.height must be absent when length is given/);
+  });
+});
+
+describe("workpiece results carry the former field names", () => {
+  it("coilOverPlate: resistanceChange = reflectedResistance, airCoreInductance = emptyCoilInductance", () => {
+    const r = coilOverPlate({
+      coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 2e-3, height: 5e-3, turns: 10 },
+      plate: { thickness: 5e-3, resistivity: 2.8e-8, relativePermeability: 1 },
+      frequency: 20e3,
+    });
+    expect(r.resistanceChange).toBe(r.reflectedResistance);
+    expect(r.airCoreInductance).toBe(r.emptyCoilInductance);
+  });
+  it("encirclingCoilOverRod and its prepared form: resistanceChange = reflectedResistance", () => {
+    const coil = { innerRadius: 0.03, outerRadius: 0.035, length: 0.05, turns: 10 };
+    const r = encirclingCoilOverRod({ coil, rod: { radius: 0.02, resistivity: 2e-7, relativePermeability: 1 }, frequency: 10e3 });
+    expect(r.resistanceChange).toBe(r.reflectedResistance);
+    const c = prepareEncirclingCoilOverRod({ coil, rod: { radius: 0.02 } })(10e3, 2e-7, 1);
+    expect(c.resistanceChange).toBe(c.reflectedResistance);
+  });
+});
