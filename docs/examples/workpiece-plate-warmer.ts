@@ -22,7 +22,7 @@ function check(name: string, ok: boolean): void {
   if (!ok) throw new Error(name);
 }
 
-const coil = { innerRadius: 0.01, outerRadius: 0.06, liftOff: 0.005, height: 0.006, turns: 16 };
+const coil = { innerRadius: 0.01, outerRadius: 0.06, liftOff: 0.005, length: 0.006, turns: 16 };
 const t = celsius(20);
 const plate = {
   thickness: 0.004,

@@ -406,7 +406,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
   } else {
     if (part.shape !== "plate") throw new RangeError("unreachable: pancake coil over a non-plate part");
     const dc = props.conductorDiameter;
-    const geometry = { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, height: dc, turns: coil.turns };
+    const geometry = { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, length: dc, turns: coil.turns };
     const notes: ValidityNote[] = [
       {
         code: "plate-coupling",

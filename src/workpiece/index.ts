@@ -25,6 +25,7 @@ export type { SlabInTangentialFieldOptions, SlabInTangentialFieldResult } from "
 export { coilOverPlate, coilOverPlateTruncatedRegion } from "./coil-over-plate.js";
 export type {
   CoilAbovePlate,
+  CoilAbovePlateWithHeight,
   CoilOverPlateOptions,
   CoilOverPlateResult,
   CoilOverPlateTruncatedRegionOptions,

@@ -2,7 +2,7 @@
 // Names renamed before 1.0 keep working until 1.0: a result carries the old field beside the
 // new one with the same value; an input accepts either name and refuses both at once.
 import { describe, expect, it } from "vitest";
-import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, InputError } from "../../src/index.js";
+import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, InputError } from "../../src/index.js";
 import { renamedOption } from "../../src/core/renamed.js";
 
 describe("renamedOption", () => {
@@ -20,7 +20,7 @@ describe("renamedOption", () => {
 describe("workpiece results carry the former field names", () => {
   it("coilOverPlate: resistanceChange = reflectedResistance, airCoreInductance = emptyCoilInductance", () => {
     const r = coilOverPlate({
-      coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 2e-3, height: 5e-3, turns: 10 },
+      coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 2e-3, length: 5e-3, turns: 10 },
       plate: { thickness: 5e-3, resistivity: 2.8e-8, relativePermeability: 1 },
       frequency: 20e3,
     });
@@ -33,5 +33,22 @@ describe("workpiece results carry the former field names", () => {
     expect(r.resistanceChange).toBe(r.reflectedResistance);
     const c = prepareEncirclingCoilOverRod({ coil, rod: { radius: 0.02 } })(10e3, 2e-7, 1);
     expect(c.resistanceChange).toBe(c.reflectedResistance);
+  });
+});
+
+describe("a plate coil's axial extent: length, formerly height", () => {
+  const coil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 2e-3, length: 5e-3, turns: 10 };
+  const former = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 2e-3, height: 5e-3, turns: 10 };
+  const plate = { thickness: 5e-3, resistivity: 2.8e-8, relativePermeability: 1 };
+  it("coilOverPlate accepts height with the same result and refuses both", () => {
+    expect(coilOverPlate({ coil: former, plate, frequency: 20e3 }).inductance).toBe(coilOverPlate({ coil, plate, frequency: 20e3 }).inductance);
+    expect(() => coilOverPlate({ coil: { ...coil, height: 5e-3 }, plate, frequency: 20e3 })).toThrow(/coil\.height must be absent when length is given/);
+    expect(() => coilOverPlate({ coil: { ...former, height: -1 }, plate, frequency: 20e3 })).toThrow(/coil\.height must be/);
+  });
+  it("workpieceCouplingAtTemperature accepts part.coil.height and refuses both", () => {
+    const at = (c: typeof coil | typeof former) =>
+      workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), frequency: 10e3, part: { kind: "plate", thickness: 3e-3, coil: c } });
+    expect(at(former).reflectedResistance).toBe(at(coil).reflectedResistance);
+    expect(() => at({ ...coil, height: 5e-3 } as typeof coil)).toThrow(/part\.coil\.height must be absent/);
   });
 });

@@ -50,14 +50,14 @@ const stranded = (name: string, rMin: number, rMax: number, zMin: number, zMax: 
 
 describe("solveAxisymmetricField: coil over a plate (Dodd & Deeds 1968 via coilOverPlate; TEAM Workshop Problem 15)", () => {
   // TEAM Problem 15, problem 1 coil and plate (Burke; data as in test/workpiece/published-team15.test.ts)
-  const coil = { innerRadius: 6.15e-3, outerRadius: 12.4e-3, height: 6.15e-3, turns: 3790, liftOff: 0.88e-3 };
+  const coil = { innerRadius: 6.15e-3, outerRadius: 12.4e-3, length: 6.15e-3, turns: 3790, liftOff: 0.88e-3 };
   const rho = 1 / 3.06e7;
   const block = (resistivity: number): AxisymmetricFieldCoil => ({
     name: "probe",
     current: 1,
     resistivity,
     model: "stranded",
-    turns: { shape: { kind: "rectangle", rMin: coil.innerRadius, rMax: coil.outerRadius, zMin: coil.liftOff, zMax: coil.liftOff + coil.height }, count: coil.turns },
+    turns: { shape: { kind: "rectangle", rMin: coil.innerRadius, rMax: coil.outerRadius, zMin: coil.liftOff, zMax: coil.liftOff + coil.length }, count: coil.turns },
   });
   it("gives ΔR and ΔX of the TEAM 15 problem-1 coil over the 12.22 mm plate within 0.5 % at accuracy 1e-3", () => {
     const ref = coilOverPlate({ coil, plate: { thickness: 12.22e-3, resistivity: rho, relativePermeability: 1 }, frequency: 900 });
@@ -81,7 +81,7 @@ describe("solveAxisymmetricField: coil over a plate (Dodd & Deeds 1968 via coilO
     const rhoHs = 1e-7;
     const delta = Math.sqrt(rhoHs / (Math.PI * f * MU_0 * 20));
     const ref = coilOverPlate({ coil: { ...coil, turns: 100 }, plate: { thickness: Infinity, resistivity: rhoHs, relativePermeability: 20 }, frequency: f });
-    const c: AxisymmetricFieldCoil = { ...block(1e-12), turns: { shape: { kind: "rectangle", rMin: coil.innerRadius, rMax: coil.outerRadius, zMin: coil.liftOff, zMax: coil.liftOff + coil.height }, count: 100 } };
+    const c: AxisymmetricFieldCoil = { ...block(1e-12), turns: { shape: { kind: "rectangle", rMin: coil.innerRadius, rMax: coil.outerRadius, zMin: coil.liftOff, zMax: coil.liftOff + coil.length }, count: 100 } };
     const loaded = solveAxisymmetricField({
       frequency: f,
       coils: [c],
@@ -175,7 +175,7 @@ describe("solveAxisymmetricField: coils in air", () => {
     expect(rel(zab.im, zba.im)).toBeLessThan(1e-9);
     expect(Math.abs(zab.re - zba.re)).toBeLessThan(1e-9 * Math.abs(zab.im));
     // self-inductance against Dodd & Deeds' air-core integral (coilOverPlate.emptyCoilInductance)
-    const ref = coilOverPlate({ coil: { innerRadius: 10e-3, outerRadius: 14e-3, height: 4e-3, turns: 10, liftOff: 1 }, plate: { thickness: 1e-3, resistivity: 1, relativePermeability: 1 }, frequency: f });
+    const ref = coilOverPlate({ coil: { innerRadius: 10e-3, outerRadius: 14e-3, length: 4e-3, turns: 10, liftOff: 1 }, plate: { thickness: 1e-3, resistivity: 1, relativePermeability: 1 }, frequency: f });
     expect(rel(res.coils.a!.inductance, ref.emptyCoilInductance)).toBeLessThan(1e-3);
     // stranded DC resistance: ρ N² 2π r̄ / S (uniform density, fill factor 1)
     expect(rel(res.coils.a!.resistance, (1.75e-8 * 100 * 2 * Math.PI * 12e-3) / 16e-6)).toBeLessThan(1e-9);

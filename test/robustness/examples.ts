@@ -577,7 +577,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   coilOverPlate: {
     args: () => [
       {
-        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
         plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
         frequency: 2e4,
       },
@@ -585,7 +585,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [
       () => [
         {
-          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
           plate: [
             { thickness: 0.0005, resistivity: 1.7e-8, relativePermeability: 1 },
             { thickness: Infinity, resistivity: 2e-7, relativePermeability: 50 },
@@ -602,7 +602,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   coilOverPlateTruncatedRegion: {
     args: () => [
       {
-        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
         plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
         frequency: 2e4,
       },
@@ -751,7 +751,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
         {
           material: lowCarbonSteel,
           temperature: celsius(20),
-          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 } },
+          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 } },
           frequency: 2e4,
         },
       ],

@@ -100,7 +100,7 @@ describe("studyHeater: every number equals the module-level call it came from", 
     // power tracking reaches the target power in the tank (frequencyForPower)
     closeRel(inv.power, d.inverter.targetPower ?? 0, 1e-6);
     const c = coilOverPlate({
-      coil: { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, height: dc, turns: coil.turns },
+      coil: { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, length: dc, turns: coil.turns },
       plate: { thickness: d.part.thickness, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
       frequency: op.frequency,
     });

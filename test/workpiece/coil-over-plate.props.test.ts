@@ -25,7 +25,7 @@ function run(c: C, patch: Partial<{ resistivity: number; frequency: number; thic
     coil: {
       innerRadius: c.innerFraction * r2,
       outerRadius: r2,
-      height: c.heightRatio * r2,
+      length: c.heightRatio * r2,
       liftOff: patch.liftOff ?? c.liftOffRatio * r2,
       turns: c.turns,
     },
@@ -123,7 +123,7 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, (c) => {
         const r2 = c.outerRadius;
         const options = {
-          coil: { innerRadius: c.innerFraction * r2, outerRadius: r2, height: c.heightRatio * r2, liftOff: c.liftOffRatio * r2, turns: c.turns },
+          coil: { innerRadius: c.innerFraction * r2, outerRadius: r2, length: c.heightRatio * r2, liftOff: c.liftOffRatio * r2, turns: c.turns },
           plate: { thickness: c.thicknessRatio * r2, resistivity: c.resistivity, relativePermeability: c.relativePermeability },
           frequency: c.frequency,
         };

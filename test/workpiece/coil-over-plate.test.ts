@@ -6,7 +6,7 @@ import plate from "../fixtures/workpiece/plate.json" with { type: "json" };
 type Layer = { thickness: number | string; resistivity: number; relativePermeability: number };
 const layersOf = (ls: Layer[]) => ls.map((l) => ({ ...l, thickness: l.thickness === "Infinity" ? Infinity : Number(l.thickness) }));
 
-const coil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 };
+const coil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 };
 const aluminium = { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 };
 const steel = { thickness: 0.002, resistivity: 2e-7, relativePermeability: 100 };
 
@@ -24,7 +24,7 @@ describe("coilOverPlate", () => {
   it("computes the air-core inductance to 1e-6 of an independent evaluation of Dodd & Deeds' air-core integral (fixture plate.json)", () => {
     for (const a of plate.airCore) {
       const r = coilOverPlate({
-        coil: { innerRadius: a.innerRadius, outerRadius: a.outerRadius, height: a.height, turns: a.turns, liftOff: 0.001 },
+        coil: { innerRadius: a.innerRadius, outerRadius: a.outerRadius, length: a.height, turns: a.turns, liftOff: 0.001 },
         plate: aluminium,
         frequency: 1e3,
       });
@@ -38,7 +38,7 @@ describe("coilOverPlate", () => {
   it.skipIf(multilayer === undefined)("in the air-core limit equals multilayerCoilInductance of the inductance module to 1e-6", () => {
     for (const a of plate.airCore.filter((c) => c.innerRadius > 0)) {
       const far = coilOverPlate({
-        coil: { innerRadius: a.innerRadius, outerRadius: a.outerRadius, height: a.height, turns: a.turns, liftOff: 0.01 },
+        coil: { innerRadius: a.innerRadius, outerRadius: a.outerRadius, length: a.height, turns: a.turns, liftOff: 0.01 },
         plate: { thickness: 0.001, resistivity: 1e6, relativePermeability: 1 },
         frequency: 50,
       });
@@ -103,7 +103,7 @@ describe("coilOverPlate", () => {
       { ...ok, coil: { ...coil, innerRadius: -0.001 } },
       { ...ok, coil: { ...coil, outerRadius: 0.01 } },
       { ...ok, coil: { ...coil, liftOff: -1e-3 } },
-      { ...ok, coil: { ...coil, height: 0 } },
+      { ...ok, coil: { ...coil, length: 0 } },
       { ...ok, coil: { ...coil, turns: 0 } },
       { ...ok, plate: { ...aluminium, thickness: 0 } },
       { ...ok, plate: { ...aluminium, resistivity: -1 } },

@@ -23,12 +23,12 @@ import { coilOverPlate } from "../../src/index.js";
 // small inconsistency between the restated figures, not a property of this module.)
 const plate = { thickness: 12.22e-3, resistivity: 1 / 3.06e7, relativePermeability: 1 };
 const problem1 = {
-  coil: { innerRadius: 6.15e-3, outerRadius: 12.4e-3, height: 6.15e-3, turns: 3790, liftOff: 0.88e-3 },
+  coil: { innerRadius: 6.15e-3, outerRadius: 12.4e-3, length: 6.15e-3, turns: 3790, liftOff: 0.88e-3 },
   plate,
   frequency: 900,
 };
 const problem2 = {
-  coil: { innerRadius: 9.34e-3, outerRadius: 18.4e-3, height: 9.0e-3, turns: 408, liftOff: 2.03e-3 },
+  coil: { innerRadius: 9.34e-3, outerRadius: 18.4e-3, length: 9.0e-3, turns: 408, liftOff: 2.03e-3 },
   plate,
   frequency: 7000,
 };

@@ -12,7 +12,7 @@ import {
 } from "../../src/index.js";
 
 const coil = { innerRadius: 0.03, length: 0.3, turns: 20 };
-const plateCoil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 };
+const plateCoil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 };
 
 describe("workpieceCouplingAtTemperature", () => {
   it("reads resistivity and permeability from the materials module and delegates to barInLongCoil", () => {

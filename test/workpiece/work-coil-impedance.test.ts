@@ -124,7 +124,7 @@ describe("workCoilImpedance: limits against outside formulas", () => {
         part: { shape: "plate", radius: 1, gap: 0.004, ...plate },
       });
       const e = coilOverPlate({
-        coil: { innerRadius: radius - d / 2, outerRadius: radius + d / 2, liftOff: 0.004, height: d, turns: 1 },
+        coil: { innerRadius: radius - d / 2, outerRadius: radius + d / 2, liftOff: 0.004, length: d, turns: 1 },
         plate,
         frequency: 20e3,
       });
