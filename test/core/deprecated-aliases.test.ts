@@ -2,7 +2,7 @@
 // Names renamed before 1.0 keep working until 1.0: a result carries the old field beside the
 // new one with the same value; an input accepts either name and refuses both at once.
 import { describe, expect, it } from "vitest";
-import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, InputError } from "../../src/index.js";
+import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, InputError } from "../../src/index.js";
 import { renamedOption } from "../../src/core/renamed.js";
 
 describe("renamedOption", () => {
@@ -50,5 +50,20 @@ describe("a plate coil's axial extent: length, formerly height", () => {
       workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), frequency: 10e3, part: { kind: "plate", thickness: 3e-3, coil: c } });
     expect(at(former).reflectedResistance).toBe(at(coil).reflectedResistance);
     expect(() => at({ ...coil, height: 5e-3 })).toThrow(/part\.coil\.height must be absent/);
+  });
+});
+
+describe("round-wire windings: windowBreadth, formerly windingWidth", () => {
+  const o = { wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 };
+  const { windowBreadth, ...rest } = o;
+  const former = { ...rest, windingWidth: windowBreadth };
+  it("the three functions accept windingWidth with the same result", () => {
+    expect(roundWireWindingAcRatio(former)).toBe(roundWireWindingAcRatio(o));
+    expect(roundWireWindingAcRatioFerreira(former)).toBe(roundWireWindingAcRatioFerreira(o));
+    expect(roundWireWindingValidity({ ...former, windingWidth: 40e-3 })).toEqual(roundWireWindingValidity({ ...o, windowBreadth: 40e-3 }));
+  });
+  it("refuses both names and names the former one in its own errors", () => {
+    expect(() => roundWireWindingAcRatio({ ...o, windingWidth: 10e-3 })).toThrow(/windingWidth must be absent when windowBreadth is given/);
+    expect(() => roundWireWindingAcRatio({ ...former, windingWidth: 5e-3 })).toThrow(/windingWidth must be ≥/);
   });
 });

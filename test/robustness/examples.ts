@@ -418,17 +418,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     allow: [{ paths: ["0.construction.strandOuterDiameter"], kinds: ["undefined"], reason: OPTIONAL }],
   },
   roundWireWindingAcRatioFerreira: {
-    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 }],
   },
   roundWireWindingAcRatio: {
-    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 }],
   },
   roundWireAcRatio: { args: () => [{ diameter: 2e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
   roundWireAcRatioSweep: { args: () => [{ diameter: 2e-3, frequencies: [1e3, 20e3, 1e6], resistivity: 1.7241e-8 }] },
   skinDepth: { args: () => [{ resistivity: 1.7241e-8, frequency: 20e3 }] },
   tubeAcResistance: { args: () => [{ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
   roundWireWindingValidity: {
-    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windingWidth: 10e-3 }],
+    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 }],
   },
   litzWindingValidity: {
     args: () => [{ strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3, frequency: 100e3, resistivity: 1.7241e-8 }],
