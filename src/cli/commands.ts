@@ -5,7 +5,7 @@
  * cannot run, 4 an output that could not be written.
  */
 import { InputError, nearestName } from "../core/index.js";
-import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
+import { HeaterDescriptionError, optimiseHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
 import type { HeaterDescription, HeaterGoal, HeaterLimits } from "../study/index.js";
 import { designErrorText } from "../report/design-error.js";
 import { jsonSyntaxError } from "./json-error.js";
@@ -445,7 +445,7 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
   const started = Date.now();
   let result;
   try {
-    result = optimizeHeater(file.input as HeaterDescription, goal, {
+    result = optimiseHeater(file.input as HeaterDescription, goal, {
       onProgress: (done, total) => {
         if (total >= 1000) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
       },
@@ -455,7 +455,7 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
       reportInputError(io, file.name, e);
       return EXIT_USAGE;
     }
-    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimizeHeater: /u, "")} (from the command-line options)`);
+    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimiseHeater: /u, "")} (from the command-line options)`);
     return designFailure(io, "optimise", file, e);
   }
   io.stderr(`evaluated ${result.evaluated} candidates in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);

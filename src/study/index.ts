@@ -76,13 +76,16 @@ export type {
 export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
 export { sweepHeater } from "./sweep-heater.js";
 export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep } from "./sweep-heater.js";
-export { optimizeHeater } from "./optimize-heater.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- optimizeHeater kept until 1.0
+export { optimiseHeater, optimizeHeater } from "./optimize-heater.js";
 export type {
   HeaterLimits,
   HeaterSearchSpace,
   HeaterGoal,
   HeaterCandidate,
   HeaterRejection,
+  HeaterOptimisation,
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
   HeaterOptimization,
   HeaterSearchOptions,
 } from "./optimize-heater.js";

@@ -2,7 +2,7 @@
 // Names renamed before 1.0 keep working until 1.0: a result carries the old field beside the
 // new one with the same value; an input accepts either name and refuses both at once.
 import { describe, expect, it } from "vitest";
-import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, InputError } from "../../src/index.js";
+import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, optimiseHeater, optimizeHeater, InputError } from "../../src/index.js";
 import { renamedOption } from "../../src/core/renamed.js";
 
 describe("renamedOption", () => {
@@ -65,5 +65,11 @@ describe("round-wire windings: windowBreadth, formerly windingWidth", () => {
   it("refuses both names and names the former one in its own errors", () => {
     expect(() => roundWireWindingAcRatio({ ...o, windingWidth: 10e-3 })).toThrow(/windingWidth must be absent when windowBreadth is given/);
     expect(() => roundWireWindingAcRatio({ ...former, windingWidth: 5e-3 })).toThrow(/windingWidth must be ≥/);
+  });
+});
+
+describe("British spelling: optimiseHeater, formerly optimizeHeater", () => {
+  it("the former name is the same function", () => {
+    expect(optimizeHeater).toBe(optimiseHeater);
   });
 });

@@ -1019,7 +1019,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     quantityStrings: true,
     badString: "12 parsecs",
   },
-  optimizeHeater: {
+  optimiseHeater: {
     args: () => [heater(), { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 }, {}],
     skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
     allow: [
