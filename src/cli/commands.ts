@@ -6,8 +6,8 @@
  */
 import { parseArgs as nodeParseArgs } from "node:util";
 import { InputError, nearestName } from "../core/index.js";
-import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater, sweepHeaterStream } from "../study/index.js";
-import type { HeaterDescription, HeaterGoal, HeaterLimits, HeaterOptimization, HeaterShard, HeaterSweepRow } from "../study/index.js";
+import { HeaterDescriptionError, optimiseHeater, readHeaterDescription, studyHeater, sweepHeater, sweepHeaterStream } from "../study/index.js";
+import type { HeaterDescription, HeaterGoal, HeaterLimits, HeaterOptimisation, HeaterShard, HeaterSweepRow } from "../study/index.js";
 import { progressDisplay } from "./progress.js";
 import type { ProgressDisplay } from "./progress.js";
 import { mergeCommand, MERGE_HELP, SWEEP_ROWS_FORMAT, valuesDigest } from "./merge.js";
@@ -619,10 +619,10 @@ function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<n
       reportInputError(io, file.name, e);
       return EXIT_USAGE;
     }
-    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimizeHeater: /u, "")} (from the command-line options)`);
+    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimiseHeater: /u, "")} (from the command-line options)`);
     return designFailure(io, "optimise", file, e);
   };
-  const finish = (result: HeaterOptimization): number => {
+  const finish = (result: HeaterOptimisation): number => {
     if (!quiet) io.stderr(`evaluated ${result.evaluated} candidates in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
     for (const w of result.warnings) io.stderr(`fluxwright optimise: warning: ${w}\n`);
     io.stdout(parsed.flags.has("json") ? jsonOutput(io, "fluxwright-optimisation", file, result) : optimisationTextReport(result));
@@ -635,7 +635,7 @@ function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<n
       let last = { done: 0, total: 0 };
       let result;
       try {
-        result = await optimizeHeater(file.input as HeaterDescription, goal, {
+        result = await optimiseHeater(file.input as HeaterDescription, goal, {
           workers,
           onProgress: (p) => {
             last = p;
@@ -657,7 +657,7 @@ function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<n
   }
   let result;
   try {
-    result = optimizeHeater(file.input as HeaterDescription, goal, {
+    result = optimiseHeater(file.input as HeaterDescription, goal, {
       onProgress: (done, total) => {
         if (total >= 1000 && !quiet) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
       },

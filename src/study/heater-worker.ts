@@ -1,6 +1,6 @@
 /**
  * The worker script of the pool (`dist/study/heater-worker.js`): runs batches of sweep or
- * search items for `sweepHeater`/`optimizeHeater` with `workers ≥ 1`. It works as a
+ * search items for `sweepHeater`/`optimiseHeater` with `workers ≥ 1`. It works as a
  * `node:worker_threads` worker and as a module Web Worker. Not imported by the library: the
  * pool loads it by URL.
  *

@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys } from "../core/index.js";
+import { renamedOption } from "../core/renamed.js";
 import { specificHeatAt } from "../materials/index.js";
 import { formatQuantity, parseQuantity } from "../units/index.js";
 import { E12, E24 } from "../tank/index.js";
@@ -18,7 +19,7 @@ import { checkPoolOptions, runPool } from "./worker-pool.js";
 import type { HeaterPoolOptions } from "./worker-pool.js";
 import type { HeaterSummary } from "./summary.js";
 
-const WHERE = "optimizeHeater";
+const WHERE = "optimiseHeater";
 
 /**
  * Upper (and for frequency, lower) limits a design must respect. All optional.
@@ -42,14 +43,22 @@ export interface HeaterLimits {
   readonly minFrequency?: QuantityInput;
   /** Highest operating frequency [Hz]. */
   readonly maxFrequency?: QuantityInput;
-  /** Short form of `tankVoltagePeak` [V] (the smaller applies when both are given). */
+  /**
+   * Former short form of `tankVoltagePeak` [V]; giving both is refused.
+   *
+   * @deprecated Use `tankVoltagePeak`; this name goes at 1.0.
+   */
   readonly maxVoltage?: QuantityInput;
-  /** Short form of `coilCurrentRms` [A] (the smaller applies when both are given). */
+  /**
+   * Former short form of `coilCurrentRms` [A]; giving both is refused.
+   *
+   * @deprecated Use `coilCurrentRms`; this name goes at 1.0.
+   */
   readonly maxCurrent?: QuantityInput;
 }
 
 /**
- * Where {@link optimizeHeater} looks. Each list replaces the base description's value; absent
+ * Where {@link optimiseHeater} looks. Each list replaces the base description's value; absent
  * lists get a default range around it.
  *
  * @category Heater study
@@ -70,7 +79,7 @@ export interface HeaterSearchSpace {
 }
 
 /**
- * What {@link optimizeHeater} aims for: exactly one of `targetPower` or `targetTime`.
+ * What {@link optimiseHeater} aims for: exactly one of `targetPower` or `targetTime`.
  *
  * @category Heater study
  */
@@ -88,7 +97,7 @@ export interface HeaterGoal {
 }
 
 /**
- * One design found by {@link optimizeHeater}.
+ * One design found by {@link optimiseHeater}.
  *
  * @category Heater study
  */
@@ -122,11 +131,11 @@ export interface HeaterRejection {
 }
 
 /**
- * The result of {@link optimizeHeater}.
+ * The result of {@link optimiseHeater}.
  *
  * @category Heater study
  */
-export interface HeaterOptimization {
+export interface HeaterOptimisation {
   /** Candidates evaluated. */
   readonly evaluated: number;
   /** Candidates within every limit. */
@@ -183,7 +192,7 @@ const LIMIT_CHECKS: readonly [Exclude<keyof HeaterLimits, "maxVoltage" | "maxCur
 ];
 
 /**
- * Options of {@link optimizeHeater} that do not change its result.
+ * Options of {@link optimiseHeater} that do not change its result.
  *
  * @category Heater study
  */
@@ -221,7 +230,7 @@ export interface HeaterSearchOptions {
  * targets, a limit or search value is malformed, or `options` is not an object
  * @example
  * ```ts
- * import { optimizeHeater } from "fluxwright";
+ * import { optimiseHeater } from "fluxwright";
  * import type { HeaterDescription } from "fluxwright";
  * const base: HeaterDescription = {
  *   supply: { kind: "battery", voltage: "48 V" },
@@ -232,14 +241,14 @@ export interface HeaterSearchOptions {
  *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
  *     height: "30 mm", targetTemperature: "120 °C" },
  * };
- * const r = optimizeHeater(base, { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 });
+ * const r = optimiseHeater(base, { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 });
  * console.log(r.best.length <= 3, r.evaluated > 0); // true true
  * ```
  * @category Heater study
  */
-export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterPoolOptions): Promise<HeaterOptimization>;
-export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal, options?: HeaterSearchOptions): HeaterOptimization;
-export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterSearchOptions | HeaterPoolOptions = {}): HeaterOptimization | Promise<HeaterOptimization> {
+export function optimiseHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterPoolOptions): Promise<HeaterOptimisation>;
+export function optimiseHeater(description: HeaterDescription, goal: HeaterGoal, options?: HeaterSearchOptions): HeaterOptimisation;
+export function optimiseHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterSearchOptions | HeaterPoolOptions = {}): HeaterOptimisation | Promise<HeaterOptimisation> {
   if (typeof options !== "object" || options === null || Array.isArray(options)) throw new InputError(WHERE, "options", options, "", "an object");
   if ((options as { workers?: unknown }).workers !== undefined) {
     const pool = checkPoolOptions(WHERE, options as HeaterPoolOptions);
@@ -306,7 +315,7 @@ interface GroupResult {
   readonly feasible: readonly Feasible[];
 }
 
-/** Checks the goal against the base description and lays out the search (see optimizeHeater's `@throws`). */
+/** Checks the goal against the base description and lays out the search (see optimiseHeater's `@throws`). */
 function searchPlan(description: HeaterDescription, goal: HeaterGoal): SearchPlan {
   const base = readHeaterDescription(description);
   if (typeof goal !== "object" || goal === null) throw new InputError(WHERE, "goal", goal, "", "an object");
@@ -330,11 +339,11 @@ function searchPlan(description: HeaterDescription, goal: HeaterGoal): SearchPla
     const v = quantity(`goal.limits.${key}`, goal.limits?.[key], unit);
     if (v !== null) limits.set(key, v);
   }
-  // short aliases: maxVoltage = tankVoltagePeak, maxCurrent = coilCurrentRms
-  const maxVoltage = quantity("goal.limits.maxVoltage", goal.limits?.maxVoltage, "V");
-  const maxCurrent = quantity("goal.limits.maxCurrent", goal.limits?.maxCurrent, "A");
-  if (maxVoltage !== null) limits.set("tankVoltagePeak", Math.min(maxVoltage, limits.get("tankVoltagePeak") ?? Infinity));
-  if (maxCurrent !== null) limits.set("coilCurrentRms", Math.min(maxCurrent, limits.get("coilCurrentRms") ?? Infinity));
+  // deprecated short forms: maxVoltage = tankVoltagePeak, maxCurrent = coilCurrentRms (one name each)
+  for (const [former, name, unit] of [["maxVoltage", "tankVoltagePeak", "V"], ["maxCurrent", "coilCurrentRms", "A"]] as const) {
+    const v = quantity(`goal.limits.${former}`, goal.limits === undefined ? undefined : (renamedOption(WHERE, "goal.limits", goal.limits, name, former) as QuantityInput | undefined), unit);
+    if (v !== null) limits.set(name, v);
+  }
   const search = goal.search ?? {};
   const raw = structuredClone(description) as unknown as SearchPlan["raw"];
   const turnsList = search.turns ?? Array.from({ length: 2 * base.coil.turns - Math.max(1, Math.round(base.coil.turns / 2)) + 1 }, (_, i) => Math.max(1, Math.round(base.coil.turns / 2)) + i);
@@ -422,7 +431,7 @@ export function optimiseTask(context: unknown, items: readonly unknown[]): unkno
 }
 
 /** Ranks the feasible candidates of every coil (in the search's order) and picks the best. */
-function finishSearch(description: HeaterDescription, plan: SearchPlan, groups: readonly GroupResult[]): HeaterOptimization {
+function finishSearch(description: HeaterDescription, plan: SearchPlan, groups: readonly GroupResult[]): HeaterOptimisation {
   const base = readHeaterDescription(description);
   const { targetPower, targetTime, keep } = plan;
   const rejections = new Map<string, number>();
@@ -480,3 +489,19 @@ function finishSearch(description: HeaterDescription, plan: SearchPlan, groups: 
   }
   return { evaluated, feasible: feasible.length, best, rejected, warnings };
 }
+
+/**
+ * Former spelling of {@link optimiseHeater} (the public names use British spelling).
+ *
+ * @deprecated Use `optimiseHeater`; this name goes at 1.0.
+ * @category Heater study
+ */
+export const optimizeHeater: typeof optimiseHeater = optimiseHeater;
+
+/**
+ * Former spelling of {@link HeaterOptimisation}.
+ *
+ * @deprecated Use `HeaterOptimisation`; this name goes at 1.0.
+ * @category Heater study
+ */
+export type HeaterOptimization = HeaterOptimisation;

@@ -1,6 +1,6 @@
 /**
  * The worker pool behind the `workers` option of {@link sweepHeater} and
- * {@link optimizeHeater}: contiguous batches of items run on `node:worker_threads` workers in
+ * {@link optimiseHeater}: contiguous batches of items run on `node:worker_threads` workers in
  * Node or module Web Workers in browsers (and Deno, Bun), or on the calling thread
  * (`workers: 0`); results come back in item order, with a bounded number of items in flight.
  *

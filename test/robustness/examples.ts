@@ -418,17 +418,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     allow: [{ paths: ["0.construction.strandOuterDiameter"], kinds: ["undefined"], reason: OPTIONAL }],
   },
   roundWireWindingAcRatioFerreira: {
-    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 }],
   },
   roundWireWindingAcRatio: {
-    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 }],
   },
   roundWireAcRatio: { args: () => [{ diameter: 2e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
   roundWireAcRatioSweep: { args: () => [{ diameter: 2e-3, frequencies: [1e3, 20e3, 1e6], resistivity: 1.7241e-8 }] },
   skinDepth: { args: () => [{ resistivity: 1.7241e-8, frequency: 20e3 }] },
   tubeAcResistance: { args: () => [{ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
   roundWireWindingValidity: {
-    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windingWidth: 10e-3 }],
+    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 }],
   },
   litzWindingValidity: {
     args: () => [{ strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3, frequency: 100e3, resistivity: 1.7241e-8 }],
@@ -577,7 +577,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   coilOverPlate: {
     args: () => [
       {
-        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
         plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
         frequency: 2e4,
       },
@@ -585,7 +585,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [
       () => [
         {
-          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
           plate: [
             { thickness: 0.0005, resistivity: 1.7e-8, relativePermeability: 1 },
             { thickness: Infinity, resistivity: 2e-7, relativePermeability: 50 },
@@ -602,7 +602,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   coilOverPlateTruncatedRegion: {
     args: () => [
       {
-        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
         plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
         frequency: 2e4,
       },
@@ -751,7 +751,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
         {
           material: lowCarbonSteel,
           temperature: celsius(20),
-          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 } },
+          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 } },
           frequency: 2e4,
         },
       ],
@@ -1030,7 +1030,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     quantityStrings: true,
     badString: "12 parsecs",
   },
-  optimizeHeater: {
+  optimiseHeater: {
     args: () => [heater(), { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 }, {}],
     skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
     allow: [

@@ -10,7 +10,7 @@ import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { InputError, optimizeHeater, sweepHeater, sweepHeaterStream } from "../../src/index.js";
+import { InputError, optimiseHeater, sweepHeater, sweepHeaterStream } from "../../src/index.js";
 import type { HeaterProgress, HeaterSweepStreamRow } from "../../src/index.js";
 import { runPool } from "../../src/study/worker-pool.js";
 import { loadExample } from "./cases.js";
@@ -146,15 +146,15 @@ describe("bounded memory", () => {
   });
 });
 
-describe("optimizeHeater on the pool", () => {
+describe("optimiseHeater on the pool", () => {
   const goal = { targetPower: "1.5 kW", limits: { minFrequency: "20 kHz" }, search: { turns: [4, 5, 6, 7] }, keep: 3 };
   it("gives the single-thread result bit for bit for 0 and 2 workers", async () => {
-    const single = optimizeHeater(race, goal);
-    for (const workers of [0, 2]) expect(exact(await optimizeHeater(race, goal, { workers, workerUrl })), `workers: ${workers}`).toBe(exact(single));
+    const single = optimiseHeater(race, goal);
+    for (const workers of [0, 2]) expect(exact(await optimiseHeater(race, goal, { workers, workerUrl })), `workers: ${workers}`).toBe(exact(single));
   }, T);
 
   it("refuses unknown pool options with InputError", () => {
-    expect(() => optimizeHeater(race, goal, { workers: 1, threads: 2 } as never)).toThrow(InputError);
-    expect(() => optimizeHeater(race, goal, { workers: -1 })).toThrow(/workers/);
+    expect(() => optimiseHeater(race, goal, { workers: 1, threads: 2 } as never)).toThrow(InputError);
+    expect(() => optimiseHeater(race, goal, { workers: -1 })).toThrow(/workers/);
   });
 });
