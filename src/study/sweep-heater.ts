@@ -293,8 +293,7 @@ export function sweepHeaterStream(description: HeaterDescription, sweep: HeaterS
  *
  * @param description - the base design (see {@link HeaterDescription})
  * @param sweep - `field` (dotted path) and `values`
- * @param options - pool options: `workers` (0 … 256), `onProgress`, `signal`, `workerUrl`
- * @returns the table (a promise of it when `options` is given)
+ * @returns the table
  * @throws {@link InputError} when the base description is invalid, `field` is not a field of
  * the description (a typo such as `coil.turn`, with the nearest field suggested), a value is a
  * bare number for a field with a dimension under `requireUnits`, `field` is not a dotted path
@@ -318,6 +317,21 @@ export function sweepHeaterStream(description: HeaterDescription, sweep: HeaterS
  * @category Heater study
  */
 export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSpec): HeaterSweep;
+/**
+ * {@link sweepHeater} on a pool of `workers` threads (see {@link HeaterPoolOptions}): the same
+ * table, bit for bit and in order, for any number of workers, with progress (`onProgress`) and
+ * cancellation (`signal`: the promise rejects with its reason; {@link sweepHeaterStream} keeps
+ * the rows that finished).
+ *
+ * @param description - the base design (see {@link HeaterDescription})
+ * @param sweep - `field` (dotted path) and `values`
+ * @param options - pool options: `workers` (0 … 256), `onProgress`, `signal`, `workerUrl`
+ * @returns a promise of the table
+ * @throws {@link InputError} at the call for what the single-thread form refuses and for bad
+ * pool options (`workers` not an integer in [0, 256], `onProgress` not a function, `signal` not
+ * an AbortSignal, an unknown key)
+ * @category Heater study
+ */
 export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSpec, options: HeaterPoolOptions): Promise<HeaterSweep>;
 export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSpec, options?: HeaterPoolOptions): HeaterSweep | Promise<HeaterSweep> {
   const where = "sweepHeater";
