@@ -186,10 +186,15 @@ async function startWorker(url: URL | string, onMessage: (m: FromWorker) => void
   }
   const { Worker } = await importByName<NodeWorkerModule>("node:worker_threads");
   const href = url instanceof URL ? url.href : url.startsWith("file:") ? url : new URL(url, `file://${(globalThis as unknown as { process: { cwd(): string } }).process.cwd()}/`).href;
-  // a TypeScript entry (running from the source tree, in the tests) goes through tsx's loader
-  const w = href.endsWith(".ts")
-    ? new Worker(`import("tsx/esm/api").then((m) => { m.register(); return import(${JSON.stringify(href)}); }).catch((e) => { throw e; });`, { eval: true })
-    : new Worker(new URL(href));
+  // a TypeScript entry (running from the source tree, in the tests) goes through tsx's loader,
+  // found from the entry's own folder (the process may run anywhere)
+  let w: NodeWorkerLike;
+  if (href.endsWith(".ts")) {
+    const api = import.meta.resolve("tsx/esm/api");
+    w = new Worker(`import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(href)}); });`, { eval: true });
+  } else {
+    w = new Worker(new URL(href));
+  }
   let stopping = false;
   w.on("message", (m: never) => {
     onMessage(m);
