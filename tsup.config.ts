@@ -33,6 +33,20 @@ export default defineConfig([
     target: "es2022",
     treeshake: true,
     splitting: true,
+    // the worker pool finds its worker script from import.meta.url, which CJS gets from __filename
+    shims: true,
+  },
+  {
+    // the worker pool's script (loaded by URL, never imported): one self-contained ESM file that
+    // runs as a node:worker_threads worker and as a module Web Worker
+    entry: { "study/heater-worker": "src/study/heater-worker.ts" },
+    format: ["esm"],
+    sourcemap: false,
+    clean: false,
+    target: "es2022",
+    platform: "neutral",
+    splitting: false,
+    treeshake: true,
   },
   {
     entry: { "cli/main": "src/cli/main.ts" },

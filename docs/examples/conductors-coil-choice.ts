@@ -55,7 +55,7 @@ for (const frequency of [20e3, 200e3]) {
   // solid wire: skin + proximity of one layer of 8 turns across the coil length (Ferreira)
   const solidRdc = wireDcResistance({ resistivity: rho, length, diameter: solidDiameter });
   const solidFr = roundWireWindingAcRatioFerreira({
-    wireDiameter: solidDiameter, frequency, resistivity: rho, layers: 1, turnsPerLayer: turns, windingWidth: coilLength,
+    wireDiameter: solidDiameter, frequency, resistivity: rho, layers: 1, turnsPerLayer: turns, windowBreadth: coilLength,
   });
 
   // litz: strand skin + bundle + winding proximity (1-D field of the 8 turns across the coil length)

@@ -6,7 +6,7 @@
  * Run: npx tsx docs/examples/study-sweep-and-search.ts
  */
 import { readFileSync } from "node:fs";
-import { formatQuantity, optimizeHeater, sweepHeater } from "../../src/index.js";
+import { formatQuantity, optimiseHeater, sweepHeater } from "../../src/index.js";
 import type { HeaterDescription } from "../../src/index.js";
 
 const base = JSON.parse(readFileSync(new URL("./study-bearing-race.json", import.meta.url), "utf8")) as HeaterDescription;
@@ -20,7 +20,7 @@ for (const row of sweep.rows) {
 const f = sweep.rows.map((r) => r.summary?.frequency ?? 0);
 for (let i = 1; i < f.length; i++) if (!((f[i] ?? 0) < (f[i - 1] ?? 0))) throw new Error("frequency should fall as C rises");
 
-const search = optimizeHeater(base, {
+const search = optimiseHeater(base, {
   targetPower: "1.5 kW",
   limits: { minFrequency: "20 kHz", tankVoltagePeak: "200 V" },
   search: { turns: [4, 5, 6, 7], minCapacitance: "1 µF", maxCapacitance: "15 µF" },

@@ -22,7 +22,7 @@ function check(name: string, ok: boolean): void {
   if (!ok) throw new Error(name);
 }
 
-const coil = { innerRadius: 0.01, outerRadius: 0.06, liftOff: 0.005, height: 0.006, turns: 16 };
+const coil = { innerRadius: 0.01, outerRadius: 0.06, liftOff: 0.005, length: 0.006, turns: 16 };
 const t = celsius(20);
 const plate = {
   thickness: 0.004,
@@ -31,9 +31,9 @@ const plate = {
 };
 
 const r = coilOverPlate({ coil, plate, frequency: 25e3 });
-console.log(`air-core L0 ${(r.airCoreInductance * 1e6).toFixed(2)} µH, with plate ${(r.inductance * 1e6).toFixed(2)} µH`);
-console.log(`reflected resistance ${(r.resistanceChange * 1e3).toFixed(1)} mΩ, skin depth ${(r.skinDepth * 1e3).toFixed(3)} mm`);
-const power = powerInPart({ coilCurrentRms: 60, reflectedResistance: r.resistanceChange });
+console.log(`air-core L0 ${(r.emptyCoilInductance * 1e6).toFixed(2)} µH, with plate ${(r.inductance * 1e6).toFixed(2)} µH`);
+console.log(`reflected resistance ${(r.reflectedResistance * 1e3).toFixed(1)} mΩ, skin depth ${(r.skinDepth * 1e3).toFixed(3)} mm`);
+const power = powerInPart({ coilCurrentRms: 60, reflectedResistance: r.reflectedResistance });
 console.log(`power into the plate at 60 A RMS: ${power.toFixed(0)} W`);
 check("at 25 kHz shielding wins: the plate lowers the inductance", r.inductanceChange < 0);
 check("the plate is many skin depths thick at 25 kHz", plate.thickness > 10 * r.skinDepth);
@@ -50,6 +50,6 @@ check("above Curie the plate lowers L at every frequency", [10, 1e3, 1e5].every(
 
 // two methods
 const tree = coilOverPlateTruncatedRegion({ coil, plate, frequency: 25e3 });
-const diff = Math.hypot(tree.resistanceChange - r.resistanceChange, tree.reactanceChange - r.reactanceChange) / Math.hypot(r.resistanceChange, r.reactanceChange);
+const diff = Math.hypot(tree.reflectedResistance - r.reflectedResistance, tree.reactanceChange - r.reactanceChange) / Math.hypot(r.reflectedResistance, r.reactanceChange);
 console.log(`Dodd & Deeds vs truncated region: ${diff.toExponential(1)} of |ΔZ|`);
 check("the two methods agree to 3e-6", diff < 3e-6);

@@ -30,7 +30,7 @@ const series = [
   { name: "4 mm solid wire, isolated", y: frequencies.map((f) => roundWireAcRatio({ diameter: 4e-3, frequency: f, resistivity: rho })) },
   {
     name: "4 mm solid wire, 8 turns in 100 mm (Ferreira)",
-    y: frequencies.map((f) => roundWireWindingAcRatioFerreira({ wireDiameter: 4e-3, frequency: f, resistivity: rho, layers: 1, turnsPerLayer: 8, windingWidth: 0.1 })),
+    y: frequencies.map((f) => roundWireWindingAcRatioFerreira({ wireDiameter: 4e-3, frequency: f, resistivity: rho, layers: 1, turnsPerLayer: 8, windowBreadth: 0.1 })),
   },
   { name: "6 × 1 mm tube, isolated", y: frequencies.map((f) => tubeAcResistance({ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: f, resistivity: rho }) / tubeDc) },
   { name: "litz 1000 × 0.1 mm, isolated", y: frequencies.map((f) => litzAcRatio({ construction: litz, frequency: f, resistivity: rho })) },

@@ -4,11 +4,16 @@
  * file (the message names the field path; no report is written), 3 a valid file whose design
  * cannot run, 4 an output that could not be written.
  */
+import { parseArgs as nodeParseArgs } from "node:util";
 import { InputError, nearestName } from "../core/index.js";
-import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
-import type { HeaterDescription, HeaterGoal, HeaterLimits } from "../study/index.js";
+import { HeaterDescriptionError, optimiseHeater, readHeaterDescription, studyHeater, sweepHeater, sweepHeaterStream } from "../study/index.js";
+import type { HeaterDescription, HeaterGoal, HeaterLimits, HeaterOptimisation, HeaterShard, HeaterSweepRow } from "../study/index.js";
+import { progressDisplay } from "./progress.js";
+import type { ProgressDisplay } from "./progress.js";
+import { mergeCommand, MERGE_HELP, SWEEP_ROWS_FORMAT, valuesDigest } from "./merge.js";
 import { designErrorText } from "../report/design-error.js";
 import { jsonSyntaxError } from "./json-error.js";
+import { OutputError, UsageError } from "./errors.js";
 import { studyHtmlReport } from "../report/index.js";
 import { optimisationTextReport, studyTextReport, sweepCsv, sweepTextReport } from "../report/index.js";
 
@@ -33,6 +38,20 @@ export interface CliIo {
   readonly version?: string | undefined;
   /** Reads a file shipped in the package, by its path inside the package (`docs/examples/…`). */
   readonly readPackageFile?: (path: string) => string;
+  /** Whether standard error is a terminal: progress is a bar redrawn in place, else plain lines. */
+  readonly stderrIsTerminal?: boolean;
+  /**
+   * Worker threads for `sweep` and `optimise` when `--workers` is not given (the real command
+   * line: the core count). When absent, and without `--workers`, `--ndjson` or `--shard`, they
+   * run on the calling thread and `runCli` returns the exit status synchronously.
+   */
+  readonly defaultWorkers?: number;
+  /** Starts listening for an interrupt (Ctrl-C): its signal aborts the run; `stop` stops listening. */
+  readonly interrupt?: () => { readonly signal: AbortSignal; readonly stop: () => void };
+  /** Reads a text file line by line (`merge` of large shard outputs); default: `readFile`, split. */
+  readonly readLines?: (path: string) => AsyncIterable<string>;
+  /** Standard error without control characters escaped (set by `runCli`, for the progress bar). */
+  readonly rawStderr?: (text: string) => void;
 }
 
 /** Exit codes. */
@@ -45,6 +64,8 @@ export const EXIT_USAGE = 2;
 export const EXIT_DESIGN = 3;
 /** An output (report file, standard output) could not be written; an existing file is kept. */
 export const EXIT_OUTPUT = 4;
+/** Interrupted (Ctrl-C): what finished was written and the message says how far the run got. */
+export const EXIT_INTERRUPTED = 130;
 
 /** The format version of the JSON outputs (`--json`); raised when a field changes meaning or goes. */
 export const JSON_FORMAT_VERSION = 1;
@@ -59,6 +80,7 @@ Induction-heater design studies from a JSON study file.
 commands:
   study FILE [--json] [--html OUT]      run a study: text report, JSON, or an HTML report with plots
   sweep FILE --field PATH --values LIST  vary one field of the study file over values
+  merge SHARD...                         combine the NDJSON outputs of a sweep's shards
   optimise FILE --power W | --time S     search turns, capacitance and frequency for a goal
   new FILE [--example NAME]              write a starter study file to edit
   help [COMMAND]                         show help for a command
@@ -72,7 +94,7 @@ with its unit ("32 mm", "1.25 in", "4.7 µF", "850 °C"). The package ships thei
 (docs/heater-study.schema.json) and examples (docs/examples/study-*.json); "fluxwright new"
 writes one to start from.
 Exit status: 0 success, 1 unexpected failure, 2 bad usage or bad study file, 3 valid file but
-the design cannot run, 4 an output could not be written.
+the design cannot run, 4 an output could not be written, 130 interrupted (Ctrl-C).
 `;
 
 const HELP: Record<string, string> = {
@@ -93,7 +115,8 @@ options:
 A bad study file exits with status 2 and a message naming the field path; nothing is written.
 A valid file whose design cannot run exits with status 3 and says what to change.
 `,
-  sweep: `usage: fluxwright sweep FILE --field PATH --values LIST [--csv | --json] [--no-heat-up]
+  sweep: `usage: fluxwright sweep FILE --field PATH --values LIST [--csv | --json | --ndjson]
+                       [--no-heat-up] [--workers N] [--shard I/N] [--quiet]
 
 Varies one field of the study in FILE and prints a table of headline numbers per value.
 Rows whose design is invalid or cannot run are kept, with the reason in the last column.
@@ -103,11 +126,21 @@ options:
   --values LIST   comma-separated values, with units where the field has one:
                   "4,5,6" or "2.2 µF,3.3 µF"
   --no-heat-up    skip the heat-up (faster; no time-to-target column)
-  --csv           print the table as CSV (SI numbers, one header line)
+  --csv           print the table as CSV (SI numbers, one header line), row by row as the
+                  designs finish
   --json          print the sweep as JSON
+  --ndjson        print one JSON line per design as it finishes (after a header line): the
+                  output of a long sweep, and what "fluxwright merge" reads
+  --workers N     worker threads (default: one per core from 32 values on; 0 runs on the
+                  main thread)
+  --shard I/N     run only part I of N of the values (1 <= I <= N; needs --ndjson), for one
+                  task of a job array; "fluxwright merge" joins the parts
+  --quiet         no progress on standard error
   -h, --help      show this help
 
-Progress goes to standard error. Exits with status 3 when no value gave a design that runs.
+Progress goes to standard error: a bar on a terminal, a line every tenth otherwise. Ctrl-C stops
+the workers, keeps the rows that finished and says how far the sweep got (exit status 130).
+Exits with status 3 when no value gave a design that runs.
 `,
   optimise: `usage: fluxwright optimise FILE (--power W | --time S) [limits] [--keep N] [--json]
 
@@ -129,9 +162,12 @@ options:
   --max-frequency F      highest operating frequency
   --keep N               designs to report (default 5)
   --json                 print the result as JSON
+  --workers N            worker threads (default one per core; 0 runs on the main thread)
+  --quiet                no progress on standard error
   -h, --help             show this help
 
-Progress goes to standard error.
+Progress goes to standard error. Ctrl-C stops the search and says how far it got (exit status
+130; a search ranks its candidates at the end, so nothing is printed).
 `,
   new: `usage: fluxwright new FILE [--example NAME]
 
@@ -139,45 +175,58 @@ Writes a starter study file to FILE (never over an existing file) to edit and ru
 "fluxwright study FILE". NAME is one of: ${EXAMPLES.join(", ")} (default bearing-race).
 Its "$schema" names the published JSON Schema, so editors can check it wherever it is copied.
 `,
+  merge: MERGE_HELP,
 };
 
-/** A usage error (exit 2). */
-class UsageError extends Error {}
-
-/** An output that could not be written (exit 4). */
-class OutputError extends Error {}
 
 interface Parsed {
   positional: string[];
   flags: Map<string, string | true>;
 }
 
-/** Parses `--name value`, `--name=value` and boolean `--name` options; `-` is a positional (standard input). */
+/**
+ * Parses `--name value`, `--name=value` and boolean `--name` options with `node:util`'s
+ * `parseArgs` (its tokens, so that the messages stay ours); `-` is a positional (standard
+ * input), and so is any other argument that starts with a single dash except `-h`.
+ */
 function parseArgs(args: readonly string[], valued: readonly string[], booleans: readonly string[]): Parsed {
+  const options: Record<string, { type: "string" | "boolean"; short?: string }> = { help: { type: "boolean", short: "h" } };
+  for (const name of valued) options[name] = { type: "string" };
+  for (const name of booleans) options[name] = { type: "boolean" };
+  const { tokens } = nodeParseArgs({ args: [...args], options, strict: false, allowPositionals: true, tokens: true });
   const positional: string[] = [];
   const flags = new Map<string, string | true>();
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i] as string;
-    if (a === "-h" || a === "--help") {
+  const seen = new Set<number>();
+  const unknown = (raw: string, name: string): UsageError => {
+    const near = nearestName(name, [...valued, ...booleans]);
+    return new UsageError(`unknown option ${raw}${near === null ? "" : ` (did you mean --${near}?)`}`);
+  };
+  for (const token of tokens) {
+    if (token.kind === "positional") {
+      positional.push(token.value);
+      continue;
+    }
+    const raw = args[token.index] as string;
+    if (token.kind === "option-terminator") throw unknown(raw, "");
+    if (!raw.startsWith("--")) {
+      if (raw === "-h") flags.set("help", true);
+      // a lone dash word (a negative number, "-x") was a positional: keep it once, as written
+      else if (!seen.has(token.index)) positional.push(raw);
+      seen.add(token.index);
+      continue;
+    }
+    const name = token.name;
+    if (name === "help" && token.value === undefined) {
       flags.set("help", true);
-      continue;
+    } else if (valued.includes(name)) {
+      const value = token.value;
+      if (value === undefined || (!token.inlineValue && value.startsWith("--"))) throw new UsageError(`option --${name} needs a value`);
+      flags.set(name, value);
+    } else if (booleans.includes(name) && token.value === undefined) {
+      flags.set(name, true);
+    } else {
+      throw unknown(raw, name);
     }
-    if (a.startsWith("--")) {
-      const eq = a.indexOf("=");
-      const name = eq < 0 ? a.slice(2) : a.slice(2, eq);
-      if (valued.includes(name)) {
-        const value = eq < 0 ? args[++i] : a.slice(eq + 1);
-        if (value === undefined || (eq < 0 && value.startsWith("--"))) throw new UsageError(`option --${name} needs a value`);
-        flags.set(name, value);
-      } else if (booleans.includes(name) && eq < 0) {
-        flags.set(name, true);
-      } else {
-        const near = nearestName(name, [...valued, ...booleans]);
-        throw new UsageError(`unknown option ${a}${near === null ? "" : ` (did you mean --${near}?)`}`);
-      }
-      continue;
-    }
-    positional.push(a);
   }
   return { positional, flags };
 }
@@ -349,8 +398,43 @@ function splitList(text: string): (number | string)[] {
     .map((s) => (/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/u.test(s) ? Number(s) : s));
 }
 
-function sweepCommand(args: readonly string[], io: CliIo): number {
-  const parsed = parseArgs(args, ["field", "values"], ["json", "csv", "no-heat-up"]);
+/** The value of `--workers`, or undefined. */
+function workersOption(parsed: Parsed): number | undefined {
+  const text = parsed.flags.get("workers");
+  if (typeof text !== "string") return undefined;
+  const n = Number(text);
+  if (!/^\d+$/u.test(text.trim()) || !Number.isInteger(n) || n > 256) throw new UsageError(`--workers must be an integer from 0 to 256, got ${text}`);
+  return n;
+}
+
+/** The value of `--shard I/N`, or undefined. */
+function shardOption(parsed: Parsed): HeaterShard | undefined {
+  const text = parsed.flags.get("shard");
+  if (typeof text !== "string") return undefined;
+  const m = /^\s*(\d+)\s*\/\s*(\d+)\s*$/u.exec(text);
+  const index = Number(m?.[1]);
+  const count = Number(m?.[2]);
+  if (m === null || !(count >= 1 && count <= 1e6 && index >= 1 && index <= count)) throw new UsageError(`--shard must be I/N with 1 <= I <= N (e.g. 2/8), got ${text}`);
+  return { index, count };
+}
+
+/** A progress display for a command's run. */
+function displayFor(io: CliIo, what: string, quiet: boolean, plainLine?: Parameters<typeof progressDisplay>[2]): ProgressDisplay {
+  return progressDisplay({ write: io.rawStderr ?? io.stderr, terminal: io.stderrIsTerminal === true, quiet }, what, plainLine);
+}
+
+/** Maps a failure of a sweep to its message and exit status. */
+function sweepFailure(io: CliIo, file: StudyFile, e: unknown): number {
+  if (e instanceof HeaterDescriptionError) {
+    reportInputError(io, file.name, e);
+    return EXIT_USAGE;
+  }
+  if (e instanceof InputError && (e.where === "sweepHeater" || e.where === "sweepHeaterStream")) throw new UsageError(e.message.replace(/^sweepHeater(Stream)?: /u, "--"));
+  return designFailure(io, "sweep", file, e);
+}
+
+function sweepCommand(args: readonly string[], io: CliIo): number | Promise<number> {
+  const parsed = parseArgs(args, ["field", "values", "workers", "shard"], ["json", "csv", "ndjson", "no-heat-up", "quiet"]);
   if (parsed.flags.has("help")) {
     io.stdout(HELP.sweep as string);
     return EXIT_OK;
@@ -361,23 +445,27 @@ function sweepCommand(args: readonly string[], io: CliIo): number {
   if (typeof field !== "string") throw new UsageError("sweep needs --field PATH");
   if (typeof values !== "string") throw new UsageError("sweep needs --values LIST");
   if (parsed.flags.has("json") && parsed.flags.has("csv")) throw new UsageError("choose one of --json and --csv");
+  const formats = (["json", "csv", "ndjson"] as const).filter((f) => parsed.flags.has(f));
+  if (formats.length > 1) throw new UsageError(`choose one of ${formats.map((f) => `--${f}`).join(" and ")}`);
+  const workers = workersOption(parsed);
+  const shard = shardOption(parsed);
+  if (shard !== undefined && !parsed.flags.has("ndjson")) throw new UsageError("--shard needs --ndjson (fluxwright merge reads NDJSON)");
   const file = loadStudyFile(io, path);
   const bad = checkStudyFile(io, file);
   if (bad !== null) return bad;
   const list = splitList(values);
   if (list.length === 0) throw new UsageError("--values needs at least one value");
   const heatUp = !parsed.flags.has("no-heat-up");
-  io.stderr(`sweeping ${field} over ${list.length} value${list.length === 1 ? "" : "s"}…\n`);
+  const quiet = parsed.flags.has("quiet");
+  if (!quiet) io.stderr(`sweeping ${field} over ${list.length} value${list.length === 1 ? "" : "s"}${shard === undefined ? "" : ` (shard ${shard.index}/${shard.count})`}…\n`);
+  if (workers !== undefined || shard !== undefined || parsed.flags.has("ndjson") || io.defaultWorkers !== undefined) {
+    return sweepPooled(io, file, { field, list, heatUp, format: formats[0] ?? "text", workers, shard, quiet });
+  }
   let result;
   try {
     result = sweepHeater(file.input as HeaterDescription, { field, values: list, heatUp, requireUnits: true });
   } catch (e) {
-    if (e instanceof HeaterDescriptionError) {
-      reportInputError(io, file.name, e);
-      return EXIT_USAGE;
-    }
-    if (e instanceof InputError && e.where === "sweepHeater") throw new UsageError(e.message.replace(/^sweepHeater: /u, "--"));
-    return designFailure(io, "sweep", file, e);
+    return sweepFailure(io, file, e);
   }
   if (parsed.flags.has("json")) io.stdout(jsonOutput(io, "fluxwright-sweep", file, result));
   else if (parsed.flags.has("csv")) io.stdout(sweepCsv(result, heatUp));
@@ -389,11 +477,92 @@ function sweepCommand(args: readonly string[], io: CliIo): number {
   return EXIT_OK;
 }
 
-function optimiseCommand(args: readonly string[], io: CliIo): number {
+interface PooledSweep {
+  readonly field: string;
+  readonly list: readonly (number | string)[];
+  readonly heatUp: boolean;
+  readonly format: "text" | "json" | "csv" | "ndjson";
+  readonly workers: number | undefined;
+  readonly shard: HeaterShard | undefined;
+  readonly quiet: boolean;
+}
+
+/**
+ * A sweep on the worker pool: CSV and NDJSON rows are written as they finish (constant memory),
+ * text and JSON at the end; Ctrl-C keeps what finished.
+ */
+async function sweepPooled(io: CliIo, file: StudyFile, run: PooledSweep): Promise<number> {
+  const { field, list, heatUp, format, shard } = run;
+  const start = shard === undefined ? 0 : Math.floor(((shard.index - 1) * list.length) / shard.count);
+  const end = shard === undefined ? list.length : Math.floor((shard.index * list.length) / shard.count);
+  const count = end - start;
+  const workers = run.workers ?? (count >= 32 ? (io.defaultWorkers ?? 0) : 0);
+  const display = displayFor(io, "designs", run.quiet);
+  const interrupt = io.interrupt?.();
+  const rows: HeaterSweepRow[] = [];
+  let done = 0;
+  let runs = 0;
+  let headerWritten = false;
+  const csvHeader = sweepCsv({ field, rows: [] }, heatUp);
+  const header = (): void => {
+    if (headerWritten) return;
+    headerWritten = true;
+    if (format === "csv") io.stdout(csvHeader);
+    if (format === "ndjson") {
+      const head = {
+        format: SWEEP_ROWS_FORMAT,
+        formatVersion: JSON_FORMAT_VERSION,
+        fluxwright: io.version ?? "unknown",
+        field,
+        heatUp,
+        total: list.length,
+        valuesDigest: valuesDigest(list),
+        ...(shard === undefined ? {} : { shard, range: [start, end] }),
+        input: file.input,
+      };
+      io.stdout(`${JSON.stringify(head)}\n`);
+    }
+  };
+  try {
+    const options = { workers, onProgress: display.update, ...(interrupt === undefined ? {} : { signal: interrupt.signal }), ...(shard === undefined ? {} : { shard }) };
+    for await (const row of sweepHeaterStream(file.input as HeaterDescription, { field, values: list, heatUp, requireUnits: true }, options)) {
+      header();
+      done++;
+      if (row.summary !== null) runs++;
+      if (format === "ndjson") io.stdout(`${JSON.stringify(row)}\n`);
+      else if (format === "csv") io.stdout(sweepCsv({ field, rows: [row] }, heatUp).slice(csvHeader.length));
+      else rows.push({ value: row.value, summary: row.summary, cautionCount: row.cautionCount, problem: row.problem });
+    }
+    header();
+  } catch (e) {
+    display.end();
+    if (interrupt?.signal.aborted !== true) return sweepFailure(io, file, e);
+    header();
+    if (format === "json") io.stdout(jsonOutput(io, "fluxwright-sweep", file, { field, rows, interrupted: { done, total: count } }));
+    if (format === "text") io.stdout(sweepTextReport({ field, rows }, heatUp));
+    const first = start + 1;
+    io.stderr(
+      `fluxwright sweep: interrupted after ${done} of ${count} designs; ${done === 0 ? "no rows were written" : `the rows written (values ${first}–${start + done} of ${list.length}) are complete`}\n`,
+    );
+    return EXIT_INTERRUPTED;
+  } finally {
+    interrupt?.stop();
+  }
+  display.end();
+  if (format === "json") io.stdout(jsonOutput(io, "fluxwright-sweep", file, { field, rows }));
+  if (format === "text") io.stdout(sweepTextReport({ field, rows }, heatUp));
+  if (runs === 0 && shard === undefined) {
+    io.stderr(`fluxwright sweep: no value of ${field} gave a design that runs (reasons in the table)\n`);
+    return EXIT_DESIGN;
+  }
+  return EXIT_OK;
+}
+
+function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<number> {
   const parsed = parseArgs(
     args,
-    ["power", "time", "turns", "min-capacitance", "max-capacitance", "series", "max-tank-voltage", "max-coil-current", "max-supply-current", "min-frequency", "max-frequency", "keep"],
-    ["json"],
+    ["power", "time", "turns", "min-capacitance", "max-capacitance", "series", "max-tank-voltage", "max-coil-current", "max-supply-current", "min-frequency", "max-frequency", "keep", "workers"],
+    ["json", "quiet"],
   );
   if (parsed.flags.has("help")) {
     io.stdout(HELP.optimise as string);
@@ -441,27 +610,62 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
   const file = loadStudyFile(io, path);
   const bad = checkStudyFile(io, file);
   if (bad !== null) return bad;
-  io.stderr(`searching designs around ${file.name}…\n`);
+  const quiet = parsed.flags.has("quiet");
+  const workers = workersOption(parsed) ?? io.defaultWorkers;
+  if (!quiet) io.stderr(`searching designs around ${file.name}…\n`);
   const started = Date.now();
-  let result;
-  try {
-    result = optimizeHeater(file.input as HeaterDescription, goal, {
-      onProgress: (done, total) => {
-        if (total >= 1000) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
-      },
-    });
-  } catch (e) {
+  const failed = (e: unknown): number => {
     if (e instanceof HeaterDescriptionError) {
       reportInputError(io, file.name, e);
       return EXIT_USAGE;
     }
-    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimizeHeater: /u, "")} (from the command-line options)`);
+    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimiseHeater: /u, "")} (from the command-line options)`);
     return designFailure(io, "optimise", file, e);
+  };
+  const finish = (result: HeaterOptimisation): number => {
+    if (!quiet) io.stderr(`evaluated ${result.evaluated} candidates in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
+    for (const w of result.warnings) io.stderr(`fluxwright optimise: warning: ${w}\n`);
+    io.stdout(parsed.flags.has("json") ? jsonOutput(io, "fluxwright-optimisation", file, result) : optimisationTextReport(result));
+    return EXIT_OK;
+  };
+  if (workers !== undefined) {
+    return (async () => {
+      const display = displayFor(io, "candidates", quiet, (p) => (p.total >= 1000 ? `  ${p.done} / ${p.total} candidates (${Math.round((100 * p.done) / p.total)} %)\n` : null));
+      const interrupt = io.interrupt?.();
+      let last = { done: 0, total: 0 };
+      let result;
+      try {
+        result = await optimiseHeater(file.input as HeaterDescription, goal, {
+          workers,
+          onProgress: (p) => {
+            last = p;
+            display.update(p);
+          },
+          ...(interrupt === undefined ? {} : { signal: interrupt.signal }),
+        });
+      } catch (e) {
+        display.end();
+        if (interrupt?.signal.aborted !== true) return failed(e);
+        io.stderr(`fluxwright optimise: interrupted after ${last.done} of ${last.total} candidates; no designs are reported (the ranking needs every candidate)\n`);
+        return EXIT_INTERRUPTED;
+      } finally {
+        interrupt?.stop();
+      }
+      display.end();
+      return finish(result);
+    })();
   }
-  io.stderr(`evaluated ${result.evaluated} candidates in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
-  for (const w of result.warnings) io.stderr(`fluxwright optimise: warning: ${w}\n`);
-  io.stdout(parsed.flags.has("json") ? jsonOutput(io, "fluxwright-optimisation", file, result) : optimisationTextReport(result));
-  return EXIT_OK;
+  let result;
+  try {
+    result = optimiseHeater(file.input as HeaterDescription, goal, {
+      onProgress: (done, total) => {
+        if (total >= 1000 && !quiet) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
+      },
+    });
+  } catch (e) {
+    return failed(e);
+  }
+  return finish(result);
 }
 
 function newCommand(args: readonly string[], io: CliIo): number {
@@ -490,9 +694,10 @@ function newCommand(args: readonly string[], io: CliIo): number {
   return EXIT_OK;
 }
 
-const COMMANDS: Record<string, (args: readonly string[], io: CliIo) => number> = {
+const COMMANDS: Record<string, (args: readonly string[], io: CliIo) => number | Promise<number>> = {
   study: studyCommand,
   sweep: sweepCommand,
+  merge: (args, io) => mergeCommand(args, io, parseArgs),
   optimise: optimiseCommand,
   optimize: optimiseCommand,
   new: newCommand,
@@ -510,11 +715,13 @@ export function escapeControls(text: string): string {
 /**
  * Runs the command line with the given arguments (without the program name).
  *
- * @returns the exit status
+ * @returns the exit status; a promise of it for the commands that run on the worker pool or
+ * stream (`sweep` and `optimise` with `--workers`, `--ndjson`, `--shard` or `io.defaultWorkers`,
+ * and `merge`)
  */
-export function runCli(args: readonly string[], rawIo: CliIo): number {
+export function runCli(args: readonly string[], rawIo: CliIo): number | Promise<number> {
   // JSON outputs escape control characters themselves (\u001b); text outputs get them escaped here
-  const jsonMode = args.includes("--json");
+  const jsonMode = args.includes("--json") || args.includes("--ndjson") || (args[0] === "merge" && !args.includes("--csv"));
   const io: CliIo = {
     ...rawIo,
     stdout: (t) => {
@@ -523,6 +730,7 @@ export function runCli(args: readonly string[], rawIo: CliIo): number {
     stderr: (t) => {
       rawIo.stderr(escapeControls(t));
     },
+    rawStderr: rawIo.stderr,
   };
   const [command, ...rest] = args;
   if (command === undefined) {
@@ -553,9 +761,7 @@ export function runCli(args: readonly string[], rawIo: CliIo): number {
     io.stderr(`fluxwright: unknown command ${JSON.stringify(command)}${near === null ? "" : ` (did you mean "${near}"?)`}; try "fluxwright --help"\n`);
     return EXIT_USAGE;
   }
-  try {
-    return run(rest, io);
-  } catch (e) {
+  const failure = (e: unknown): number => {
     if (e instanceof UsageError) {
       io.stderr(`fluxwright ${command}: ${e.message}\n(see "fluxwright ${command} --help")\n`);
       return EXIT_USAGE;
@@ -570,5 +776,11 @@ export function runCli(args: readonly string[], rawIo: CliIo): number {
     }
     io.stderr(`fluxwright ${command}: failed: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`);
     return EXIT_FAILURE;
+  };
+  try {
+    const status = run(rest, io);
+    return typeof status === "number" ? status : status.catch(failure);
+  } catch (e) {
+    return failure(e);
   }
 }

@@ -2,10 +2,12 @@
  * The `fluxwright` command line: `fluxwright study FILE [--json] [--html OUT]`, `sweep`,
  * `optimise`, `new`, `help`. See `fluxwright --help`.
  */
-import { closeSync, existsSync, fsyncSync, openSync, readFileSync, realpathSync, renameSync, statSync, unlinkSync, writeSync } from "node:fs";
+import { closeSync, createReadStream, existsSync, fsyncSync, openSync, readFileSync, realpathSync, renameSync, statSync, unlinkSync, writeSync } from "node:fs";
+import { availableParallelism } from "node:os";
+import { createInterface } from "node:readline";
 import { basename, dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { EXIT_OUTPUT, runCli } from "./commands.js";
+import { EXIT_INTERRUPTED, EXIT_OUTPUT, runCli } from "./commands.js";
 
 /** The package root: this file is `src/cli/main.ts` or `dist/cli/main.js`, two levels down. */
 const packageRoot = fileURLToPath(new URL("../../", import.meta.url));
@@ -88,7 +90,21 @@ function streamFailed(stream: "standard output" | "standard error", error: NodeJ
 process.stdout.on("error", (error: NodeJS.ErrnoException) => streamFailed("standard output", error));
 process.stderr.on("error", (error: NodeJS.ErrnoException) => streamFailed("standard error", error));
 
-process.exitCode = runCli(process.argv.slice(2), {
+/**
+ * Ctrl-C during a pooled run: the first aborts it (the command writes what finished and says how
+ * far it got); a second one ends the process at once. Outside such runs SIGINT keeps its default.
+ */
+function interrupt(): { signal: AbortController["signal"]; stop: () => void } {
+  const controller = new AbortController();
+  const onSigint = (): void => {
+    if (controller.signal.aborted) process.exit(EXIT_INTERRUPTED);
+    controller.abort();
+  };
+  process.on("SIGINT", onSigint);
+  return { signal: controller.signal, stop: () => process.off("SIGINT", onSigint) };
+}
+
+const status = runCli(process.argv.slice(2), {
   stdout: (text) => {
     try {
       process.stdout.write(text);
@@ -109,4 +125,9 @@ process.exitCode = runCli(process.argv.slice(2), {
   samePath,
   version: packageVersion(),
   readPackageFile: (path) => readFileSync(join(packageRoot, path), "utf8"),
+  stderrIsTerminal: process.stderr.isTTY,
+  defaultWorkers: availableParallelism(),
+  interrupt,
+  readLines: (path) => createInterface({ input: createReadStream(path, "utf8"), crlfDelay: Infinity }),
 });
+process.exitCode = typeof status === "number" ? status : await status;

@@ -12,7 +12,8 @@ export { dowellFactor } from "./dowell.js";
 export type { DowellFactorOptions } from "./dowell.js";
 export * from "./round-wire.js";
 export { roundWireWindingAcRatio } from "./round-wire-winding.js";
-export type { RoundWireWindingOptions } from "./round-wire-winding.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- exported until 1.0
+export type { RoundWireWindingOptions, RoundWireWindingOptionsWithWidth } from "./round-wire-winding.js";
 export * from "./round-wire-winding-ferreira.js";
 export * from "./litz.js";
 export * from "./litz-sullivan.js";

@@ -7,7 +7,7 @@
 import { MU_0 } from "../units/index.js";
 import { wireProximityFactorKernel, wireSkinFactorKernel } from "./round-wire-kernels.js";
 import { checkWinding } from "./round-wire-winding.js";
-import type { RoundWireWindingOptions } from "./round-wire-winding.js";
+import type { RoundWireWindingOptions, RoundWireWindingOptionsWithWidth } from "./round-wire-winding.js";
 
 /**
  * Ferreira's AC-to-DC resistance ratio of a round-wire winding: skin and proximity losses of
@@ -44,12 +44,13 @@ import type { RoundWireWindingOptions } from "./round-wire-winding.js";
  * ```ts
  * import { roundWireWindingAcRatioFerreira } from "fluxwright";
  * const options = { wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8,
- *   layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 };
+ *   layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 };
  * console.log(roundWireWindingAcRatioFerreira(options)); // ≈ 13.15
  * ```
  * @category Conductors
  */
-export function roundWireWindingAcRatioFerreira(options: RoundWireWindingOptions): number {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name windingWidth is accepted until 1.0
+export function roundWireWindingAcRatioFerreira(options: RoundWireWindingOptions | RoundWireWindingOptionsWithWidth): number {
   const w = checkWinding("roundWireWindingAcRatioFerreira", options);
   const delta = Math.sqrt(w.resistivity / (Math.PI * w.frequency * MU_0));
   const q = w.diameter / (Math.SQRT2 * delta);

@@ -5,11 +5,12 @@
  * @packageDocumentation
  */
 import { InputError, requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { renamedOption } from "../core/renamed.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const WINDING_FIELDS: readonly string[] = Object.freeze(["wireDiameter", "frequency", "resistivity", "layers", "turnsPerLayer", "windingWidth"]);
+const WINDING_FIELDS: readonly string[] = Object.freeze(["wireDiameter", "frequency", "resistivity", "layers", "turnsPerLayer", "windowBreadth", "windingWidth"]);
 
 /** (π/4)^{3/4}: the equal-area square's side and porosity folded into one factor. */
 const EQUIVALENT_FOIL_FACTOR = Math.pow(Math.PI / 4, 0.75);
@@ -27,11 +28,26 @@ export interface RoundWireWindingOptions {
   /** Turns in each layer $N_l$, an integer ≥ 1. */
   readonly turnsPerLayer: number;
   /**
-   * Width of the winding (the window breadth the layer spans, along the field) [m], finite,
-   * > 0 and ≥ turnsPerLayer · wireDiameter (the wires must fit side by side).
+   * Breadth of the winding window the layer spans (along the field) [m], finite, > 0 and
+   * ≥ turnsPerLayer · wireDiameter (the wires must fit side by side).
+   */
+  readonly windowBreadth: number;
+}
+
+/**
+ * {@link RoundWireWindingOptions} given with the former name `windingWidth` for `windowBreadth`.
+ *
+ * @deprecated Give `windowBreadth` instead of `windingWidth`; accepted until 1.0.
+ * @category Conductors
+ */
+export type RoundWireWindingOptionsWithWidth = Omit<RoundWireWindingOptions, "windowBreadth"> & {
+  /**
+   * Breadth of the winding window [m].
+   *
+   * @deprecated Use `windowBreadth`.
    */
   readonly windingWidth: number;
-}
+};
 
 /** Checked winding inputs. @internal */
 export interface CheckedWinding {
@@ -47,7 +63,8 @@ export interface CheckedWinding {
  * Checks the options shared by the round-wire winding models.
  * @internal
  */
-export function checkWinding(where: string, options: RoundWireWindingOptions): CheckedWinding {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name is accepted until 1.0
+export function checkWinding(where: string, options: RoundWireWindingOptions | RoundWireWindingOptionsWithWidth): CheckedWinding {
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, WINDING_FIELDS);
   const diameter = requirePositive(where, "wireDiameter", options.wireDiameter, "m");
@@ -55,9 +72,10 @@ export function checkWinding(where: string, options: RoundWireWindingOptions): C
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const layers = requireInteger(where, "layers", options.layers, 1);
   const turnsPerLayer = requireInteger(where, "turnsPerLayer", options.turnsPerLayer, 1);
-  const width = requirePositive(where, "windingWidth", options.windingWidth, "m");
+  const breadthName = "windingWidth" in options && !("windowBreadth" in options) ? "windingWidth" : "windowBreadth";
+  const width = requirePositive(where, breadthName, renamedOption(where, "", options, "windowBreadth", "windingWidth"), "m");
   if (turnsPerLayer * diameter > width * (1 + 1e-12)) {
-    throw new InputError(where, "windingWidth", width, "m", `≥ turnsPerLayer · wireDiameter = ${turnsPerLayer * diameter}`);
+    throw new InputError(where, breadthName, width, "m", `≥ turnsPerLayer · wireDiameter = ${turnsPerLayer * diameter}`);
   }
   return { diameter, frequency, resistivity, layers, turnsPerLayer, width };
 }
@@ -78,7 +96,7 @@ export function checkWinding(where: string, options: RoundWireWindingOptions): C
  * wire (the square has the same area).
  *
  * Hard domain (throws {@link InputError}): all inputs finite and > 0, layers and
- * turnsPerLayer integers ≥ 1, windingWidth ≥ turnsPerLayer · wireDiameter. Validity: a
+ * turnsPerLayer integers ≥ 1, windowBreadth ≥ turnsPerLayer · wireDiameter. Validity: a
  * one-dimensional field (layers fill the window breadth, e.g. a transformer or an inductor
  * with a gapless core window), closely wound layers, d ≲ 1.5 δ. Against
  * {@link roundWireWindingAcRatioFerreira} (same inputs, porosity 0.9) it agrees within 4 % for
@@ -100,12 +118,13 @@ export function checkWinding(where: string, options: RoundWireWindingOptions): C
  * import { roundWireWindingAcRatio } from "fluxwright";
  * // 4 layers of 12 turns of 0.5 mm copper across 8 mm, 100 kHz
  * const options = { wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8,
- *   layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 };
+ *   layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 };
  * console.log(roundWireWindingAcRatio(options)); // ≈ 12.543
  * ```
  * @category Conductors
  */
-export function roundWireWindingAcRatio(options: RoundWireWindingOptions): number {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name windingWidth is accepted until 1.0
+export function roundWireWindingAcRatio(options: RoundWireWindingOptions | RoundWireWindingOptionsWithWidth): number {
   const w = checkWinding("roundWireWindingAcRatio", options);
   const delta = Math.sqrt(w.resistivity / (Math.PI * w.frequency * MU_0));
   const penetration = EQUIVALENT_FOIL_FACTOR * (w.diameter / delta) * Math.sqrt((w.diameter * w.turnsPerLayer) / w.width);

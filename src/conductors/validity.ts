@@ -6,7 +6,8 @@
  */
 import { requireKnownKeys, requireObject, type ValidityNote } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
-import type { RoundWireWindingOptions } from "./round-wire-winding.js";
+import type { RoundWireWindingOptions, RoundWireWindingOptionsWithWidth } from "./round-wire-winding.js";
+import { renamedOption } from "../core/renamed.js";
 import type { LitzWindingAcRatioOptions } from "./litz-sullivan.js";
 import { roundWireWindingAcRatio } from "./round-wire-winding.js";
 import { litzWindingAcRatio } from "./litz-sullivan.js";
@@ -15,7 +16,7 @@ import { litzWindingAcRatio } from "./litz-sullivan.js";
 const LITZ_WINDING_FIELDS: readonly string[] = Object.freeze(["strands", "strandDiameter", "turns", "windowBreadth", "frequency", "resistivity", "fieldFactor"]);
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const WINDING_FIELDS: readonly string[] = Object.freeze(["wireDiameter", "frequency", "resistivity", "layers", "turnsPerLayer", "windingWidth"]);
+const WINDING_FIELDS: readonly string[] = Object.freeze(["wireDiameter", "frequency", "resistivity", "layers", "turnsPerLayer", "windowBreadth", "windingWidth"]);
 
 function skin(resistivity: number, frequency: number): number {
   return Math.sqrt(resistivity / (Math.PI * frequency * MU_0));
@@ -42,12 +43,13 @@ function skin(resistivity: number, frequency: number): number {
  * ```ts
  * import { roundWireWindingValidity } from "fluxwright";
  * const notes = roundWireWindingValidity({ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8,
- *   layers: 4, turnsPerLayer: 8, windingWidth: 10e-3 });
+ *   layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 });
  * console.log(notes.map((n) => n.code)); // [ 'wire-thick-for-1d-models' ]
  * ```
  * @category Conductors
  */
-export function roundWireWindingValidity(options: RoundWireWindingOptions): ValidityNote[] {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name windingWidth is accepted until 1.0
+export function roundWireWindingValidity(options: RoundWireWindingOptions | RoundWireWindingOptionsWithWidth): ValidityNote[] {
   requireObject("roundWireWindingValidity", "options", options);
   requireKnownKeys("roundWireWindingValidity", "", options, WINDING_FIELDS);
   roundWireWindingAcRatio(options); // validates the inputs
@@ -61,7 +63,7 @@ export function roundWireWindingValidity(options: RoundWireWindingOptions): Vali
       limit: 1.5,
     });
   }
-  const porosity = (options.turnsPerLayer * options.wireDiameter) / options.windingWidth;
+  const porosity = (options.turnsPerLayer * options.wireDiameter) / (renamedOption("roundWireWindingValidity", "", options, "windowBreadth", "windingWidth") as number);
   if (porosity < 0.5) {
     notes.push({
       code: "loose-layer",

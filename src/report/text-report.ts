@@ -2,7 +2,7 @@
  * The plain-text report of a heater study: cautions first, then the operating points, losses,
  * heat-up and the validity notes, in aligned tables with engineering units.
  */
-import type { HeaterOptimization, HeaterStudy, HeaterSweep, HeaterSweepRow, HeaterOperatingPoint, HeaterRadialHeatUp } from "../study/index.js";
+import type { HeaterOptimisation, HeaterStudy, HeaterSweep, HeaterSweepRow, HeaterOperatingPoint, HeaterRadialHeatUp } from "../study/index.js";
 import { InputError } from "../core/index.js";
 import { reasonText } from "./design-error.js";
 import { requireStudy } from "./checks.js";
@@ -273,7 +273,7 @@ export function sweepCsv(sweep: HeaterSweep, heatUp = true): string {
  * Renders an optimisation result as text: the best designs, why the others failed, and the
  * search's warnings.
  *
- * @param r - a result of `optimizeHeater`
+ * @param r - a result of `optimiseHeater`
  * @returns the report as text
  * @throws {@link InputError} when `r` is not an optimisation result
  * @example
@@ -284,10 +284,10 @@ export function sweepCsv(sweep: HeaterSweep, heatUp = true): string {
  * ```
  * @category Reports and charts
  */
-export function optimisationTextReport(r: HeaterOptimization): string {
+export function optimisationTextReport(r: HeaterOptimisation): string {
   const given = r as unknown as { best?: unknown; rejected?: unknown } | null;
   if (typeof given !== "object" || given === null || !Array.isArray(given.best) || !Array.isArray(given.rejected)) {
-    throw new InputError("optimisationTextReport", "result", r, "", "a result of optimizeHeater");
+    throw new InputError("optimisationTextReport", "result", r, "", "a result of optimiseHeater");
   }
   const out: string[] = [];
   out.push(`candidates evaluated: ${r.evaluated}, within limits: ${r.feasible}`);

@@ -74,15 +74,19 @@ export type {
   HeaterUnsolvedBand,
 } from "./study-heater.js";
 export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
-export { sweepHeater } from "./sweep-heater.js";
-export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep } from "./sweep-heater.js";
-export { optimizeHeater } from "./optimize-heater.js";
+export { sweepHeater, sweepHeaterStream } from "./sweep-heater.js";
+export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep, HeaterShard, HeaterSweepStreamOptions, HeaterSweepStreamRow } from "./sweep-heater.js";
+export type { HeaterPoolOptions, HeaterProgress } from "./worker-pool.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- optimizeHeater kept until 1.0
+export { optimiseHeater, optimizeHeater } from "./optimize-heater.js";
 export type {
   HeaterLimits,
   HeaterSearchSpace,
   HeaterGoal,
   HeaterCandidate,
   HeaterRejection,
+  HeaterOptimisation,
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
   HeaterOptimization,
   HeaterSearchOptions,
 } from "./optimize-heater.js";

@@ -400,13 +400,13 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
       },
       coupling: (f, rho, mur) => {
         const z = evaluate(f, rho, mur);
-        return { reflectedResistance: n2 * z.resistanceChange, inductanceChange: n2 * z.inductanceChange, skinDepth: Math.sqrt((2 * rho) / (2 * Math.PI * f * MU_0 * mur)) };
+        return { reflectedResistance: n2 * z.reflectedResistance, inductanceChange: n2 * z.inductanceChange, skinDepth: Math.sqrt((2 * rho) / (2 * Math.PI * f * MU_0 * mur)) };
       },
     };
   } else {
     if (part.shape !== "plate") throw new RangeError("unreachable: pancake coil over a non-plate part");
     const dc = props.conductorDiameter;
-    const geometry = { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, height: dc, turns: coil.turns };
+    const geometry = { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, length: dc, turns: coil.turns };
     const notes: ValidityNote[] = [
       {
         code: "plate-coupling",
@@ -446,7 +446,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
       },
       coupling: (f, rho, mur) => {
         const r = coilOverPlate({ coil: geometry, plate: { thickness: part.thickness, resistivity: rho, relativePermeability: mur }, frequency: f });
-        return { reflectedResistance: r.resistanceChange, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
+        return { reflectedResistance: r.reflectedResistance, inductanceChange: r.inductanceChange, skinDepth: r.skinDepth };
       },
     };
   }

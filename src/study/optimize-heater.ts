@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys } from "../core/index.js";
+import { renamedOption } from "../core/renamed.js";
 import { specificHeatAt } from "../materials/index.js";
 import { formatQuantity, parseQuantity } from "../units/index.js";
 import { E12, E24 } from "../tank/index.js";
@@ -14,9 +15,11 @@ import type { HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import { studyHeater } from "./study-heater.js";
 import { summarise } from "./summary.js";
+import { checkPoolOptions, runPool } from "./worker-pool.js";
+import type { HeaterPoolOptions } from "./worker-pool.js";
 import type { HeaterSummary } from "./summary.js";
 
-const WHERE = "optimizeHeater";
+const WHERE = "optimiseHeater";
 
 /**
  * Upper (and for frequency, lower) limits a design must respect. All optional.
@@ -40,14 +43,22 @@ export interface HeaterLimits {
   readonly minFrequency?: QuantityInput;
   /** Highest operating frequency [Hz]. */
   readonly maxFrequency?: QuantityInput;
-  /** Short form of `tankVoltagePeak` [V] (the smaller applies when both are given). */
+  /**
+   * Former short form of `tankVoltagePeak` [V]; giving both is refused.
+   *
+   * @deprecated Use `tankVoltagePeak`; this name goes at 1.0.
+   */
   readonly maxVoltage?: QuantityInput;
-  /** Short form of `coilCurrentRms` [A] (the smaller applies when both are given). */
+  /**
+   * Former short form of `coilCurrentRms` [A]; giving both is refused.
+   *
+   * @deprecated Use `coilCurrentRms`; this name goes at 1.0.
+   */
   readonly maxCurrent?: QuantityInput;
 }
 
 /**
- * Where {@link optimizeHeater} looks. Each list replaces the base description's value; absent
+ * Where {@link optimiseHeater} looks. Each list replaces the base description's value; absent
  * lists get a default range around it.
  *
  * @category Heater study
@@ -68,7 +79,7 @@ export interface HeaterSearchSpace {
 }
 
 /**
- * What {@link optimizeHeater} aims for: exactly one of `targetPower` or `targetTime`.
+ * What {@link optimiseHeater} aims for: exactly one of `targetPower` or `targetTime`.
  *
  * @category Heater study
  */
@@ -86,7 +97,7 @@ export interface HeaterGoal {
 }
 
 /**
- * One design found by {@link optimizeHeater}.
+ * One design found by {@link optimiseHeater}.
  *
  * @category Heater study
  */
@@ -120,11 +131,11 @@ export interface HeaterRejection {
 }
 
 /**
- * The result of {@link optimizeHeater}.
+ * The result of {@link optimiseHeater}.
  *
  * @category Heater study
  */
-export interface HeaterOptimization {
+export interface HeaterOptimisation {
   /** Candidates evaluated. */
   readonly evaluated: number;
   /** Candidates within every limit. */
@@ -181,7 +192,7 @@ const LIMIT_CHECKS: readonly [Exclude<keyof HeaterLimits, "maxVoltage" | "maxCur
 ];
 
 /**
- * Options of {@link optimizeHeater} that do not change its result.
+ * Options of {@link optimiseHeater} that do not change its result.
  *
  * @category Heater study
  */
@@ -204,13 +215,22 @@ export interface HeaterSearchOptions {
  *
  * @param description - the base design
  * @param goal - target, limits, search space and how many designs to keep
- * @param options - `onProgress` callback (optional)
- * @returns the best designs and the rejection counts
+ * With `options.workers` (see {@link HeaterPoolOptions}) the candidates run on that many worker
+ * threads and the call returns a promise of the same result, identical bit for bit for any
+ * number of workers (the unit of work is one coil, whose capacitances are solved in order, each
+ * from the previous solution, exactly as on one thread); `onProgress` then receives
+ * `{ done, total, elapsed, eta }` and `signal` cancels the search (the promise rejects with the
+ * signal's reason). The finalists of a time goal run their heat-up on the calling thread.
+ *
+ * @param description - the base design
+ * @param goal - target, limits, search space and how many designs to keep
+ * @param options - `onProgress(evaluated, total)` (optional); or pool options with `workers`
+ * @returns the best designs and the rejection counts (a promise of them with `workers`)
  * @throws {@link InputError} when the base description is invalid, the goal has neither or both
  * targets, a limit or search value is malformed, or `options` is not an object
  * @example
  * ```ts
- * import { optimizeHeater } from "fluxwright";
+ * import { optimiseHeater } from "fluxwright";
  * import type { HeaterDescription } from "fluxwright";
  * const base: HeaterDescription = {
  *   supply: { kind: "battery", voltage: "48 V" },
@@ -221,17 +241,82 @@ export interface HeaterSearchOptions {
  *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
  *     height: "30 mm", targetTemperature: "120 °C" },
  * };
- * const r = optimizeHeater(base, { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 });
+ * const r = optimiseHeater(base, { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 });
  * console.log(r.best.length <= 3, r.evaluated > 0); // true true
  * ```
  * @category Heater study
  */
-export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
+export function optimiseHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterPoolOptions): Promise<HeaterOptimisation>;
+export function optimiseHeater(description: HeaterDescription, goal: HeaterGoal, options?: HeaterSearchOptions): HeaterOptimisation;
+export function optimiseHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterSearchOptions | HeaterPoolOptions = {}): HeaterOptimisation | Promise<HeaterOptimisation> {
   if (typeof options !== "object" || options === null || Array.isArray(options)) throw new InputError(WHERE, "options", options, "", "an object");
-  requireKnownKeys(WHERE, "options", options, ["onProgress"]);
-  if (options.onProgress !== undefined && typeof options.onProgress !== "function") {
-    throw new InputError(WHERE, "options.onProgress", options.onProgress, "", "a function");
+  if ((options as { workers?: unknown }).workers !== undefined) {
+    const pool = checkPoolOptions(WHERE, options as HeaterPoolOptions);
+    const plan = searchPlan(description, goal);
+    const items = groupItems(plan);
+    return (async () => {
+      const groups: GroupResult[] = [];
+      for await (const g of runPool({ kind: "optimise", context: plan }, items, items.length, optimiseTask, pool, WHERE, plan.capacitances.length)) groups.push(g as GroupResult);
+      return finishSearch(description, plan, groups);
+    })();
   }
+  requireKnownKeys(WHERE, "options", options, ["onProgress"]);
+  const onProgress = (options as HeaterSearchOptions).onProgress;
+  if (onProgress !== undefined && typeof onProgress !== "function") {
+    throw new InputError(WHERE, "options.onProgress", onProgress, "", "a function");
+  }
+  const plan = searchPlan(description, goal);
+  const items = groupItems(plan);
+  const total = items.length * plan.capacitances.length;
+  const progressStep = Math.max(1, Math.floor(total / 20));
+  let nextProgress = progressStep;
+  let evaluated = 0;
+  const groups = items.map((item) => {
+    const g = evaluateGroup(plan, item);
+    evaluated += plan.capacitances.length;
+    if (onProgress !== undefined && evaluated >= nextProgress) {
+      nextProgress = (Math.floor(evaluated / progressStep) + 1) * progressStep;
+      onProgress(evaluated, total);
+    }
+    return g;
+  });
+  return finishSearch(description, plan, groups);
+}
+
+/** Everything the candidates of a search need, checked; plain data (it goes to the workers). */
+interface SearchPlan {
+  readonly raw: Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
+  readonly limits: readonly (readonly [string, number])[];
+  readonly turnsList: readonly number[];
+  readonly capacitances: readonly number[];
+  readonly conductors: readonly HeaterConductor[];
+  readonly frequencies: readonly (number | null)[];
+  readonly targetPower: number | null;
+  readonly targetTime: number | null;
+  readonly keep: number;
+}
+
+/** One coil of the search: conductor (index into the plan's list), turns, frequency. */
+type GroupItem = readonly [number, number, number | null];
+
+/** A feasible candidate. */
+interface Feasible {
+  readonly turns: number;
+  readonly capacitance: number;
+  readonly conductor: number;
+  readonly frequency: number | null;
+  readonly point: HeaterOperatingPoint;
+  readonly variant: HeaterDescription;
+}
+
+/** What one coil's capacitances gave: rejections (reason, count, in order of first use) and the feasible candidates. */
+interface GroupResult {
+  readonly rejections: readonly (readonly [string, number])[];
+  readonly feasible: readonly Feasible[];
+}
+
+/** Checks the goal against the base description and lays out the search (see optimiseHeater's `@throws`). */
+function searchPlan(description: HeaterDescription, goal: HeaterGoal): SearchPlan {
   const base = readHeaterDescription(description);
   if (typeof goal !== "object" || goal === null) throw new InputError(WHERE, "goal", goal, "", "an object");
   const targetPower = quantity("goal.targetPower", goal.targetPower, "W");
@@ -254,13 +339,13 @@ export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal,
     const v = quantity(`goal.limits.${key}`, goal.limits?.[key], unit);
     if (v !== null) limits.set(key, v);
   }
-  // short aliases: maxVoltage = tankVoltagePeak, maxCurrent = coilCurrentRms
-  const maxVoltage = quantity("goal.limits.maxVoltage", goal.limits?.maxVoltage, "V");
-  const maxCurrent = quantity("goal.limits.maxCurrent", goal.limits?.maxCurrent, "A");
-  if (maxVoltage !== null) limits.set("tankVoltagePeak", Math.min(maxVoltage, limits.get("tankVoltagePeak") ?? Infinity));
-  if (maxCurrent !== null) limits.set("coilCurrentRms", Math.min(maxCurrent, limits.get("coilCurrentRms") ?? Infinity));
+  // deprecated short forms: maxVoltage = tankVoltagePeak, maxCurrent = coilCurrentRms (one name each)
+  for (const [former, name, unit] of [["maxVoltage", "tankVoltagePeak", "V"], ["maxCurrent", "coilCurrentRms", "A"]] as const) {
+    const v = quantity(`goal.limits.${former}`, goal.limits === undefined ? undefined : (renamedOption(WHERE, "goal.limits", goal.limits, name, former) as QuantityInput | undefined), unit);
+    if (v !== null) limits.set(name, v);
+  }
   const search = goal.search ?? {};
-  const raw = structuredClone(description) as unknown as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
+  const raw = structuredClone(description) as unknown as SearchPlan["raw"];
   const turnsList = search.turns ?? Array.from({ length: 2 * base.coil.turns - Math.max(1, Math.round(base.coil.turns / 2)) + 1 }, (_, i) => Math.max(1, Math.round(base.coil.turns / 2)) + i);
   turnsList.forEach((t, i) => {
     if (!Number.isInteger(t) || t < 1) throw new InputError(WHERE, `goal.search.turns[${i}]`, t, "", "an integer ≥ 1");
@@ -274,84 +359,94 @@ export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal,
   const frequencies: (number | null)[] = fixedSeries
     ? (search.frequencies ?? [base.inverter.kind === "voltage-fed-series" ? (base.inverter.frequency ?? 0) : 0]).map((f, i) => quantity(`goal.search.frequencies[${i}]`, f, "Hz") as number)
     : [null];
+  return { raw, limits: [...limits.entries()], turnsList, capacitances, conductors, frequencies, targetPower, targetTime, keep };
+}
 
-  const rejections = new Map<string, number>();
-  const reject = (reason: string): void => {
-    rejections.set(reason, (rejections.get(reason) ?? 0) + 1);
-  };
-  interface Feasible {
-    turns: number;
-    capacitance: number;
-    conductor: HeaterConductor;
-    frequency: number | null;
-    point: HeaterOperatingPoint;
-    empty: HeaterOperatingPoint | null;
-    variant: HeaterDescription;
-  }
-  const feasible: Feasible[] = [];
-  let evaluated = 0;
-  const total = conductors.length * turnsList.length * frequencies.length * capacitances.length;
-  const progressStep = Math.max(1, Math.floor(total / 20));
-  let nextProgress = progressStep;
-  const progress = (): void => {
-    if (options.onProgress !== undefined && evaluated >= nextProgress) {
-      nextProgress += progressStep;
-      options.onProgress(evaluated, total);
+/** The coils of the search, in the order of the loops conductor → turns → frequency. */
+function groupItems(plan: SearchPlan): GroupItem[] {
+  const items: GroupItem[] = [];
+  for (let c = 0; c < plan.conductors.length; c++) {
+    for (const turns of plan.turnsList) {
+      for (const frequency of plan.frequencies) items.push([c, turns, frequency]);
     }
+  }
+  return items;
+}
+
+/** Evaluates one coil over every capacitance of the plan. */
+function evaluateGroup(plan: SearchPlan, [c, turns, frequency]: GroupItem): GroupResult {
+  const { raw } = plan;
+  const limits = new Map(plan.limits);
+  const conductor = plan.conductors[c] as HeaterConductor;
+  const rejections = new Map<string, number>();
+  const reject = (reason: string, count = 1): void => {
+    rejections.set(reason, (rejections.get(reason) ?? 0) + count);
   };
+  const feasible: Feasible[] = [];
+  // the capacitance does not change the coil: read the coil once per (conductor, turns, frequency)
+  const coilVariant = { ...raw, coil: { ...raw.coil, turns, conductor } } as Record<string, unknown>;
+  if (frequency !== null) coilVariant.inverter = { ...raw.inverter, frequency };
+  let props;
+  try {
+    props = coilProperties(readHeaterDescription(coilVariant));
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+    // group by field and rule, without the candidate's own numbers
+    const rule = e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "").replace(/\s+/g, " ");
+    reject(`invalid design: ${e.parameter} must be ${rule}`, plan.capacitances.length);
+    return { rejections: [...rejections.entries()], feasible };
+  }
+  // continuation across capacitances of one coil: each candidate starts from the previous solution
+  let previous: HeaterOperatingPoint | null = null;
+  for (const capacitance of plan.capacitances) {
+    const variant = { ...coilVariant, capacitor: { ...raw.capacitor, capacitance } } as unknown as HeaterDescription;
+    let point: HeaterOperatingPoint;
+    try {
+      const d = readHeaterDescription(variant);
+      point = heaterOperatingPoint(d, d.part.startTemperature, true, props, previous);
+      previous = point;
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      reject(`no operating point: ${e.where}: ${e.parameter} must be ${e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "")}`);
+      continue;
+    }
+    let ok = true;
+    for (const [key, , reason, value, kind] of LIMIT_CHECKS) {
+      const limit = limits.get(key);
+      if (limit === undefined) continue;
+      const v = value(point);
+      if (kind === "max" ? v > limit : v < limit) {
+        reject(reason);
+        ok = false;
+      }
+    }
+    if (ok) feasible.push({ turns, capacitance, conductor: c, frequency, point, variant });
+  }
+  return { rejections: [...rejections.entries()], feasible };
+}
+
+/** The pool's task runner for searches: one {@link GroupResult} per coil. */
+export function optimiseTask(context: unknown, items: readonly unknown[]): unknown[] {
+  return items.map((item) => evaluateGroup(context as SearchPlan, item as GroupItem));
+}
+
+/** Ranks the feasible candidates of every coil (in the search's order) and picks the best. */
+function finishSearch(description: HeaterDescription, plan: SearchPlan, groups: readonly GroupResult[]): HeaterOptimisation {
+  const base = readHeaterDescription(description);
+  const { targetPower, targetTime, keep } = plan;
+  const rejections = new Map<string, number>();
+  const reject = (reason: string, count = 1): void => {
+    rejections.set(reason, (rejections.get(reason) ?? 0) + count);
+  };
+  const feasible: Feasible[] = [];
+  for (const g of groups) {
+    for (const [reason, count] of g.rejections) reject(reason, count);
+    for (const f of g.feasible) feasible.push(f);
+  }
+  const evaluated = groups.length * plan.capacitances.length;
   // the heat-up-time estimate: energy to heat the part over the cold part power (losses ignored)
   const cMid = specificHeatAt(base.part.material, (base.part.startTemperature + base.part.targetTemperature) / 2);
   const energyEstimate = (mass: number): number => mass * cMid * (base.part.targetTemperature - base.part.startTemperature);
-
-  for (const conductor of conductors) {
-    for (const turns of turnsList) {
-      for (const frequency of frequencies) {
-        // the capacitance does not change the coil: read the coil once per (conductor, turns, frequency)
-        const coilVariant = { ...raw, coil: { ...raw.coil, turns, conductor } } as Record<string, unknown>;
-        if (frequency !== null) coilVariant.inverter = { ...raw.inverter, frequency };
-        let props;
-        try {
-          props = coilProperties(readHeaterDescription(coilVariant));
-        } catch (e) {
-          if (!(e instanceof InputError)) throw e;
-          // group by field and rule, without the candidate's own numbers
-          const rule = e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "").replace(/\s+/g, " ");
-          for (let k = 0; k < capacitances.length; k++) reject(`invalid design: ${e.parameter} must be ${rule}`);
-          evaluated += capacitances.length;
-          progress();
-          continue;
-        }
-        // continuation across capacitances of one coil: each candidate starts from the previous solution
-        let previous: HeaterOperatingPoint | null = null;
-        for (const capacitance of capacitances) {
-          evaluated++;
-          progress();
-          const variant = { ...coilVariant, capacitor: { ...raw.capacitor, capacitance } } as unknown as HeaterDescription;
-          let point: HeaterOperatingPoint;
-          try {
-            const d = readHeaterDescription(variant);
-            point = heaterOperatingPoint(d, d.part.startTemperature, true, props, previous);
-            previous = point;
-          } catch (e) {
-            if (!(e instanceof InputError)) throw e;
-            reject(`no operating point: ${e.where}: ${e.parameter} must be ${e.expected.replace(/\s*=\s*[-+0-9.e]+/g, "")}`);
-            continue;
-          }
-          let ok = true;
-          for (const [key, , reason, value, kind] of LIMIT_CHECKS) {
-            const limit = limits.get(key);
-            if (limit === undefined) continue;
-            const v = value(point);
-            if (kind === "max" ? v > limit : v < limit) {
-              reject(reason);
-              ok = false;
-            }
-          }
-          if (ok) feasible.push({ turns, capacitance, conductor, frequency, point, empty: null, variant });
-        }
-      }
-    }
-  }
 
   // rank: Float64Array of scores
   const scores = new Float64Array(feasible.length);
@@ -377,7 +472,7 @@ export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal,
   const best: HeaterCandidate[] = chosen.slice(0, keep).map(({ f, score, timeToTarget, empty }) => ({
     turns: f.turns,
     capacitance: f.capacitance,
-    conductor: f.conductor,
+    conductor: plan.conductors[f.conductor] as HeaterConductor,
     switchingFrequency: f.frequency,
     summary: summarise(f.point, empty, timeToTarget),
     score,
@@ -394,3 +489,19 @@ export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal,
   }
   return { evaluated, feasible: feasible.length, best, rejected, warnings };
 }
+
+/**
+ * Former spelling of {@link optimiseHeater} (the public names use British spelling).
+ *
+ * @deprecated Use `optimiseHeater`; this name goes at 1.0.
+ * @category Heater study
+ */
+export const optimizeHeater: typeof optimiseHeater = optimiseHeater;
+
+/**
+ * Former spelling of {@link HeaterOptimisation}.
+ *
+ * @deprecated Use `HeaterOptimisation`; this name goes at 1.0.
+ * @category Heater study
+ */
+export type HeaterOptimization = HeaterOptimisation;

@@ -231,6 +231,12 @@ export interface HeaterStudy {
   /** Operating frequency with the part at its start temperature [Hz] (= `operating.frequency`). */
   readonly frequency: number;
   /** Operating frequency with the empty coil [Hz] (= `emptyCoil.frequency`). */
+  readonly emptyCoilFrequency: number;
+  /**
+   * The same value as `emptyCoilFrequency` [Hz].
+   *
+   * @deprecated Use `emptyCoilFrequency`; this field goes at 1.0.
+   */
   readonly frequencyWithoutPart: number;
   /** Power into the part at its start temperature [W] (= `operating.losses.part`). */
   readonly partPower: number;
@@ -729,6 +735,8 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
     operating,
     atTarget,
     frequency: operating.frequency,
+    emptyCoilFrequency: emptyCoil.frequency,
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
     frequencyWithoutPart: emptyCoil.frequency,
     partPower: operating.losses.part,
     inputPower: operating.inputPower,

@@ -6,6 +6,7 @@
  */
 import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
+import { renamedOption } from "../core/renamed.js";
 import type { Complex } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { besselJ0, besselJ1 } from "../special/index.js";
@@ -24,7 +25,7 @@ const MAX_TRUNCATED_LIFT_OFF = 20;
 const LAYER_FIELDS: readonly string[] = Object.freeze(["thickness", "resistivity", "relativePermeability"]);
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "height", "turns"]);
+const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "length", "turns", "height"]);
 
 /**
  * One conducting layer of a plate or layered half-space (top layer first).
@@ -53,11 +54,26 @@ export interface CoilAbovePlate {
   readonly outerRadius: number;
   /** Gap from the plate surface to the bottom of the winding [m], ≥ 0. */
   readonly liftOff: number;
-  /** Axial height of the winding [m], > 0. */
-  readonly height: number;
+  /** Axial length of the winding (its extent along the axis) [m], > 0. */
+  readonly length: number;
   /** Number of turns, an integer ≥ 1. */
   readonly turns: number;
 }
+
+/**
+ * A {@link CoilAbovePlate} given with its former field name `height` for the axial length.
+ *
+ * @deprecated Give `length` instead of `height`; accepted until 1.0.
+ * @category Workpiece
+ */
+export type CoilAbovePlateWithHeight = Omit<CoilAbovePlate, "length"> & {
+  /**
+   * Axial length of the winding [m], > 0.
+   *
+   * @deprecated Use `length`.
+   */
+  readonly height: number;
+};
 
 /**
  * Options of {@link coilOverPlate}.
@@ -66,7 +82,8 @@ export interface CoilAbovePlate {
  */
 export interface CoilOverPlateOptions {
   /** The coil, see {@link CoilAbovePlate}. */
-  readonly coil: CoilAbovePlate;
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- the former field name is accepted until 1.0
+  readonly coil: CoilAbovePlate | CoilAbovePlateWithHeight;
   /**
    * The conductor below the coil: one {@link PlateLayer} (a plate, or a half-space with
    * `thickness: Infinity`), or an array of layers from the top down (a coated part; air below
@@ -85,12 +102,24 @@ export interface CoilOverPlateOptions {
  */
 export interface CoilOverPlateResult {
   /** Resistance added by the plate, the reflected resistance $\Delta R$ [Ω], ≥ 0. */
+  readonly reflectedResistance: number;
+  /**
+   * The same value as {@link CoilOverPlateResult.reflectedResistance} [Ω].
+   *
+   * @deprecated Use `reflectedResistance`; this field goes at 1.0.
+   */
   readonly resistanceChange: number;
   /** Reactance change $\Delta X$ [Ω] (negative when eddy currents shield, positive when magnetisation wins). */
   readonly reactanceChange: number;
   /** Inductance change $\Delta L = \Delta X/\omega$ [H]. */
   readonly inductanceChange: number;
-  /** Inductance of the same coil in air [H] (Dodd & Deeds' air-core integral). */
+  /** Inductance of the same coil in air, without the plate [H] (Dodd & Deeds' air-core integral). */
+  readonly emptyCoilInductance: number;
+  /**
+   * The same value as {@link CoilOverPlateResult.emptyCoilInductance} [H].
+   *
+   * @deprecated Use `emptyCoilInductance`; this field goes at 1.0.
+   */
   readonly airCoreInductance: number;
   /** Inductance with the plate, $L_0 + \Delta L$ [H]. */
   readonly inductance: number;
@@ -183,9 +212,9 @@ function checkCoil(where: string, coil: unknown): CoilAbovePlate {
     throw new InputError(where, "coil.outerRadius", outerRadius, "m", `a finite number > coil.innerRadius (${innerRadius})`);
   }
   const liftOff = requireNonNegative(where, "coil.liftOff", c["liftOff"], "m");
-  const height = requirePositive(where, "coil.height", c["height"], "m");
+  const length = requirePositive(where, c["length"] === undefined && c["height"] !== undefined ? "coil.height" : "coil.length", renamedOption(where, "coil", c, "length", "height"), "m");
   const turns = requireInteger(where, "coil.turns", c["turns"], 1);
-  return { innerRadius, outerRadius, liftOff, height, turns };
+  return { innerRadius, outerRadius, liftOff, length, turns };
 }
 
 /** Layer data for the reflection coefficient: k = ωμ0μr/ρ, μr, thickness. */
@@ -271,9 +300,9 @@ export function reflectionInto(alpha: number, lay: LayerArrays, out: Float64Arra
 
 }
 
-/** Smallest scale of α on which the integrand changes (coil height and radius, skin and thin-sheet scales). */
+/** Smallest scale of α on which the integrand changes (coil length and radius, skin and thin-sheet scales). */
 function featureScale(coil: CoilAbovePlate, lay: LayerArrays): number {
-  let scale = Math.min(1 / coil.height, 1 / coil.outerRadius);
+  let scale = Math.min(1 / coil.length, 1 / coil.outerRadius);
   for (let i = 0; i < lay.k.length; i++) {
     const k = lay.k[i]!;
     const mu = lay.mu[i]!;
@@ -318,7 +347,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
   const r1 = coil.innerRadius;
   const r2 = coil.outerRadius;
   const l1 = coil.liftOff;
-  const h = coil.height;
+  const h = coil.length;
   const l2 = l1 + h;
   const lay = layerArrays(layers, omega);
   const scale = featureScale(coil, lay);
@@ -420,7 +449,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  * $\alpha = 40\pi/r_2$, plus the tails from the mean of $\chi^2$, and for $L_0$ the closed form
  * $\int_0^\infty \chi^2/\alpha^5\,d\alpha = \tfrac{1}{3}\left[\tfrac{r_2^4 - r_1^4}{4} - r_1^3(r_2 - r_1)\right]$.
  *
- * Hard domain (throws {@link InputError}): radii 0 ≤ innerRadius < outerRadius, height > 0,
+ * Hard domain (throws {@link InputError}): radii 0 ≤ innerRadius < outerRadius, length > 0,
  * liftOff ≥ 0, turns an integer ≥ 1, frequency > 0, each layer's thickness > 0 (only the last may
  * be `Infinity`), resistivity > 0, relativePermeability ≥ 1.
  * Validity: axisymmetric coil, plate laterally much wider than the coil (a few outer radii
@@ -431,7 +460,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  * Accuracy: ≤ 1e-6 relative to |ΔZ| and to $L_0$ vs an mpmath evaluation of the same integrals
  * (fixture `test/fixtures/workpiece/plate.json`); $L_0$ matches
  * `multilayerCoilInductance` of the inductance module within the same tolerance, and for thin
- * windings (height down to 10 nm, and the flat current-sheet limit it tends to) ≤ 1e-6 vs a scipy
+ * windings (length down to 10 nm, and the flat current-sheet limit it tends to) ≤ 1e-6 vs a scipy
  * quadrature (fixture `test/fixtures/workpiece/thin-air-core/`): $L_0$ is summed as one integrand
  * $\int q^2(\alpha h + e^{-\alpha h} - 1)/h^2\,d\alpha$, not as a difference of two $O(h)$ terms. About
  * 0.6 ms per frequency point (CPU time, random pancake geometries).
@@ -449,11 +478,11 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
  * import { coilOverPlate } from "fluxwright";
  * // pancake coil 20 turns, 10–30 mm radius, 4 mm above a 3 mm aluminium-alloy plate, 20 kHz
  * const r = coilOverPlate({
- *   coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+ *   coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
  *   plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
  *   frequency: 2e4,
  * });
- * console.log(r.resistanceChange.toPrecision(4)); // 0.02157
+ * console.log(r.reflectedResistance.toPrecision(4)); // 0.02157
  * console.log(r.inductanceChange < 0); // true
  * ```
  * @category Workpiece
@@ -488,12 +517,12 @@ function assembleResult(
 ): CoilOverPlateResult {
   const r1 = coil.innerRadius;
   const r2 = coil.outerRadius;
-  const n = coil.turns / ((r2 - r1) * coil.height);
+  const n = coil.turns / ((r2 - r1) * coil.length);
   const c = Math.PI * MU_0 * n * n;
   const dR = -omega * c * iIm;
   const dX = omega * c * iRe;
   const kClosed = ((r2 ** 4 - r1 ** 4) / 4 - r1 ** 3 * (r2 - r1)) / 3;
-  const l0 = airCore ?? 2 * c * (coil.height * kClosed + j);
+  const l0 = airCore ?? 2 * c * (coil.length * kClosed + j);
   const dL = dX / omega;
   const top = layers[0]!;
   const skinDepth = Math.sqrt((2 * top.resistivity) / (omega * MU_0 * top.relativePermeability));
@@ -513,9 +542,13 @@ function assembleResult(
     });
   }
   return {
+    reflectedResistance: dR,
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
     resistanceChange: dR,
     reactanceChange: dX,
     inductanceChange: dL,
+    emptyCoilInductance: l0,
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
     airCoreInductance: l0,
     inductance: l0 + dL,
     impedance: { re: dR, im: omega * (l0 + dL) },
@@ -532,7 +565,7 @@ function assembleResult(
 export interface CoilOverPlateTruncatedRegionOptions extends CoilOverPlateOptions {
   /**
    * Radius $b$ of the truncated region [m] (the field is set to zero there), > coil
-   * outerRadius; default 30 × the largest of outerRadius, liftOff + height and the material's
+   * outerRadius; default 30 × the largest of outerRadius, liftOff + length and the material's
    * longest length scale (e.g. $2\rho/(\omega\mu_0 t)$ of a thin sheet, capped at 3 × the
    * coil's size). The sums at $b$ and $2b$ are
    * extrapolated to $b \to \infty$.
@@ -594,12 +627,12 @@ function besselJ1Zeros(n: number): Float64Array {
  * ```ts
  * import { coilOverPlate, coilOverPlateTruncatedRegion } from "fluxwright";
  * const options = {
- *   coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+ *   coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
  *   plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
  *   frequency: 2e4,
  * };
- * const a = coilOverPlate(options).resistanceChange;
- * const b = coilOverPlateTruncatedRegion(options).resistanceChange;
+ * const a = coilOverPlate(options).reflectedResistance;
+ * const b = coilOverPlateTruncatedRegion(options).reflectedResistance;
  * console.log(Math.abs(b / a - 1) < 1e-6); // true
  * ```
  * @category Workpiece
@@ -614,7 +647,7 @@ export function coilOverPlateTruncatedRegion(options: CoilOverPlateTruncatedRegi
   }
   const layers = checkPlateLayers(where, options.plate);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
-  const size = Math.max(coil.outerRadius, coil.liftOff + coil.height);
+  const size = Math.max(coil.outerRadius, coil.liftOff + coil.length);
   const materialLength = Math.min(1 / featureScale(coil, layerArrays(layers, 2 * Math.PI * f)), 3 * size);
   const b =
     options.domainRadius === undefined
@@ -636,7 +669,7 @@ function truncatedRegionSums(coil: CoilAbovePlate, lay: LayerArrays, b: number):
   const r1 = coil.innerRadius;
   const r2 = coil.outerRadius;
   const l1 = coil.liftOff;
-  const h = coil.height;
+  const h = coil.length;
   const l2 = l1 + h;
   const gamma = new Float64Array(2);
   const aMax = (40 * Math.PI) / r2;

@@ -54,6 +54,12 @@ export interface RodRadii {
  */
 export interface EncirclingCoilChange {
   /** Resistance reflected into the coil, $\Delta R$ [Ω], ≥ 0. */
+  readonly reflectedResistance: number;
+  /**
+   * The same value as {@link EncirclingCoilChange.reflectedResistance} [Ω].
+   *
+   * @deprecated Use `reflectedResistance`; this field goes at 1.0.
+   */
   readonly resistanceChange: number;
   /** Reactance change $\Delta X$ [Ω]. */
   readonly reactanceChange: number;
@@ -137,7 +143,7 @@ function kMomentTailScaled(x: number): number {
  *   rod: { radius: 0.015 },
  * });
  * const r = change(1e3, 3e-8, 1);
- * console.log(r.resistanceChange > 0, r.inductanceChange < 0); // true true
+ * console.log(r.reflectedResistance > 0, r.inductanceChange < 0); // true true
  * ```
  * @category Workpiece
  */
@@ -281,7 +287,9 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
     }
     const coef = 8 * omega * MU_0 * windingDensity * windingDensity;
     const dX = coef * sumRe;
-    return { resistanceChange: -coef * sumIm, reactanceChange: dX, inductanceChange: dX / omega };
+    const dR = -coef * sumIm;
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- resistanceChange kept until 1.0
+    return { reflectedResistance: dR, resistanceChange: dR, reactanceChange: dX, inductanceChange: dX / omega };
   };
 }
 

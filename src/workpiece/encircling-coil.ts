@@ -87,6 +87,12 @@ export interface EncirclingCoilOverRodOptions {
  */
 export interface EncirclingCoilOverRodResult {
   /** Resistance reflected into the coil by the rod, $\Delta R$ [Ω], ≥ 0. */
+  readonly reflectedResistance: number;
+  /**
+   * The same value as {@link EncirclingCoilOverRodResult.reflectedResistance} [Ω].
+   *
+   * @deprecated Use `reflectedResistance`; this field goes at 1.0.
+   */
   readonly resistanceChange: number;
   /** Reactance change $\Delta X$ [Ω]. */
   readonly reactanceChange: number;
@@ -162,7 +168,7 @@ function kMomentTailScaled(x: number): number {
  *   rod: { radius: 0.015, resistivity: 3e-8, relativePermeability: 1 },
  *   frequency: 1e3,
  * });
- * console.log(r.resistanceChange > 0, r.inductanceChange < 0); // true true
+ * console.log(r.reflectedResistance > 0, r.inductanceChange < 0); // true true
  * ```
  * @category Workpiece
  */
@@ -248,6 +254,8 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
   const validity: ValidityNote[] = [];
   if (mur > 1) validity.push(constantPermeabilityNote(mur));
   return {
+    reflectedResistance: dR,
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
     resistanceChange: dR,
     reactanceChange: dX,
     inductanceChange: dX / omega,

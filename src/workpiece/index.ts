@@ -25,6 +25,8 @@ export type { SlabInTangentialFieldOptions, SlabInTangentialFieldResult } from "
 export { coilOverPlate, coilOverPlateTruncatedRegion } from "./coil-over-plate.js";
 export type {
   CoilAbovePlate,
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- exported until 1.0
+  CoilAbovePlateWithHeight,
   CoilOverPlateOptions,
   CoilOverPlateResult,
   CoilOverPlateTruncatedRegionOptions,

@@ -6,10 +6,11 @@
  */
 import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
+import { renamedOption } from "../core/renamed.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import { coilOverLayers } from "./coil-over-plate.js";
-import type { CoilAbovePlate } from "./coil-over-plate.js";
+import type { CoilAbovePlate, CoilAbovePlateWithHeight } from "./coil-over-plate.js";
 import { barCoupling, tubeCoupling } from "./long-coil.js";
 import type { LongCoil } from "./long-coil.js";
 import { checkPlateLayers } from "./coil-over-plate.js";
@@ -20,7 +21,7 @@ const BAR_PART_FIELDS: readonly string[] = Object.freeze(["kind", "radius", "coi
 const TUBE_PART_FIELDS: readonly string[] = Object.freeze(["kind", "outerRadius", "innerRadius", "coil"]);
 const PLATE_PART_FIELDS: readonly string[] = Object.freeze(["kind", "thickness", "coil"]);
 const LONG_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "length", "turns"]);
-const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "height", "turns"]);
+const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "length", "turns", "height"]);
 
 /**
  * A solid round bar in a long coil, for {@link workpieceCouplingAtTemperature}.
@@ -64,7 +65,8 @@ export interface HeatedPlate {
   /** Plate thickness [m], > 0 or `Infinity`. */
   readonly thickness: number;
   /** The coil above it, see {@link CoilAbovePlate}. */
-  readonly coil: CoilAbovePlate;
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- the former field name is accepted until 1.0
+  readonly coil: CoilAbovePlate | CoilAbovePlateWithHeight;
 }
 
 /**
@@ -204,13 +206,13 @@ export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTempe
     const pc = checkPlateCoil(where, coil);
     const z = coilOverLayers(pc, layers, f);
     const base = {
-      reflectedResistance: z.resistanceChange,
+      reflectedResistance: z.reflectedResistance,
       reactanceChange: z.reactanceChange,
       inductanceChange: z.inductanceChange,
       skinDepth: z.skinDepth,
       validity: z.validity,
     };
-    r = rc === undefined ? base : { ...base, efficiency: rc + z.resistanceChange > 0 ? z.resistanceChange / (rc + z.resistanceChange) : 0 };
+    r = rc === undefined ? base : { ...base, efficiency: rc + z.reflectedResistance > 0 ? z.reflectedResistance / (rc + z.reflectedResistance) : 0 };
   } else {
     throw new InputError(where, "part.kind", kind, "", 'one of "bar", "tube", "plate"');
   }
@@ -241,8 +243,8 @@ function checkPlateCoil(where: string, c: Record<string, unknown>): CoilAbovePla
   const outerRadius = requirePositive(where, "part.coil.outerRadius", c["outerRadius"], "m");
   if (!(outerRadius > innerRadius)) throw new InputError(where, "part.coil.outerRadius", outerRadius, "m", `a finite number > part.coil.innerRadius (${innerRadius})`);
   const liftOff = requireNonNegative(where, "part.coil.liftOff", c["liftOff"], "m");
-  const height = requirePositive(where, "part.coil.height", c["height"], "m");
+  const length = requirePositive(where, c["length"] === undefined && c["height"] !== undefined ? "part.coil.height" : "part.coil.length", renamedOption(where, "part.coil", c, "length", "height"), "m");
   const turns = c["turns"];
   if (typeof turns !== "number" || !Number.isInteger(turns) || turns < 1) throw new InputError(where, "part.coil.turns", turns, "", "an integer ≥ 1");
-  return { innerRadius, outerRadius, liftOff, height, turns };
+  return { innerRadius, outerRadius, liftOff, length, turns };
 }

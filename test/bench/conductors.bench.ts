@@ -42,11 +42,11 @@ describe("conductors", () => {
   }, { time: 300 });
   bench("roundWireWindingAcRatio", () => {
     i = (i + 1) & (N - 1);
-    check(roundWireWindingAcRatio({ wireDiameter: 0.5e-3, frequency: freqs[i] ?? 1, resistivity: rho, layers: layers[i] ?? 1, turnsPerLayer: 10, windingWidth: 6e-3 }));
+    check(roundWireWindingAcRatio({ wireDiameter: 0.5e-3, frequency: freqs[i] ?? 1, resistivity: rho, layers: layers[i] ?? 1, turnsPerLayer: 10, windowBreadth: 6e-3 }));
   }, { time: 300 });
   bench("roundWireWindingAcRatioFerreira", () => {
     i = (i + 1) & (N - 1);
-    check(roundWireWindingAcRatioFerreira({ wireDiameter: 0.5e-3, frequency: freqs[i] ?? 1, resistivity: rho, layers: layers[i] ?? 1, turnsPerLayer: 10, windingWidth: 6e-3 }));
+    check(roundWireWindingAcRatioFerreira({ wireDiameter: 0.5e-3, frequency: freqs[i] ?? 1, resistivity: rho, layers: layers[i] ?? 1, turnsPerLayer: 10, windowBreadth: 6e-3 }));
   }, { time: 300 });
   bench("litzWindingAcRatio", () => {
     i = (i + 1) & (N - 1);

@@ -4,7 +4,7 @@
  */
 import { bench, describe } from "vitest";
 import { readFileSync } from "node:fs";
-import { optimizeHeater, studyHeater } from "../../src/index.js";
+import { optimiseHeater, studyHeater } from "../../src/index.js";
 import type { HeaterConductor, HeaterDescription } from "../../src/index.js";
 
 const race = JSON.parse(readFileSync(new URL("../../docs/examples/study-bearing-race.json", import.meta.url), "utf8")) as HeaterDescription & {
@@ -42,8 +42,8 @@ describe("heater study", () => {
     const s = studyHeater(plateVariants[k++ % plateVariants.length] as HeaterDescription, { temperatureScan: false, impedanceSweep: false });
     check(s.heatUp?.finalTemperature ?? Number.NaN);
   }, { time: 300, iterations: 2 });
-  bench("optimizeHeater over 10 080 candidates (bearing race)", () => {
-    const r = optimizeHeater(race, {
+  bench("optimiseHeater over 10 080 candidates (bearing race)", () => {
+    const r = optimiseHeater(race, {
       targetPower: 1500,
       limits: { minFrequency: 20e3, tankVoltagePeak: 200 },
       search: { turns: [3, 4, 5, 6, 7, 8, 9, 10, 11, 12], capacitanceSeries: "E24", minCapacitance: 0.5e-6, maxCapacitance: 47e-6, conductors: OPTIMISER_CONDUCTORS },

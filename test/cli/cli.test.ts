@@ -59,7 +59,7 @@ describe("fluxwright study", () => {
 
   it("prints cautions first when there are any", () => {
     const m = memoryIo({ "race.json": read("study-bearing-race.json") });
-    runCli(["study", "race.json"], m.io);
+    void runCli(["study", "race.json"], m.io);
     const text = m.out();
     expect(text.indexOf("CAUTIONS")).toBeGreaterThan(-1);
     expect(text.indexOf("CAUTIONS")).toBeLessThan(text.indexOf("DESIGN"));

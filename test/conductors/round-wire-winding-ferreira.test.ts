@@ -16,7 +16,7 @@ describe("roundWireWindingAcRatioFerreira", () => {
     for (const row of data.rows) {
       const f = frequencyFor(row.diameterOverSkinDepth, d);
       const expected = row.acRatio + ((Math.PI * eta * eta * (4 * m * m - 1)) / 24) * row.proximity;
-      const fr = roundWireWindingAcRatioFerreira({ wireDiameter: d, frequency: f, resistivity: rho, layers: m, turnsPerLayer: 8, windingWidth: 10e-3 });
+      const fr = roundWireWindingAcRatioFerreira({ wireDiameter: d, frequency: f, resistivity: rho, layers: m, turnsPerLayer: 8, windowBreadth: 10e-3 });
       worst = Math.max(worst, Math.abs(fr / expected - 1));
     }
     expect(worst).toBeLessThan(data.meta.rtol);
@@ -30,7 +30,7 @@ describe("roundWireWindingAcRatioFerreira", () => {
       const m = 3;
       const eta = (10 * d) / 12e-3;
       const expected = row.acRatioOde + ((Math.PI * eta * eta * (4 * m * m - 1)) / 24) * row.proximityOde;
-      const fr = roundWireWindingAcRatioFerreira({ wireDiameter: d, frequency: f, resistivity: rho, layers: m, turnsPerLayer: 10, windingWidth: 12e-3 });
+      const fr = roundWireWindingAcRatioFerreira({ wireDiameter: d, frequency: f, resistivity: rho, layers: m, turnsPerLayer: 10, windowBreadth: 12e-3 });
       expect(Math.abs(fr / expected - 1)).toBeLessThan(1e-11);
     }
   });
@@ -41,7 +41,7 @@ describe("roundWireWindingAcRatioFerreira", () => {
     const f = 10;
     const eta = 0.5;
     const m = 2;
-    const fr = roundWireWindingAcRatioFerreira({ wireDiameter: d, frequency: f, resistivity: rho, layers: m, turnsPerLayer: 10, windingWidth: (10 * d) / eta });
+    const fr = roundWireWindingAcRatioFerreira({ wireDiameter: d, frequency: f, resistivity: rho, layers: m, turnsPerLayer: 10, windowBreadth: (10 * d) / eta });
     const omega = 2 * Math.PI * f;
     const g = (Math.PI * omega * omega * MU0 * MU0 * (d / 2) ** 4) / (8 * rho * rho); // P/(ρ H²)
     const skin = roundWireAcRatio({ diameter: d, frequency: f, resistivity: rho });
@@ -56,7 +56,7 @@ describe("roundWireWindingAcRatioFerreira", () => {
         fc.double({ min: 0.5, max: 1, noNaN: true, noDefaultInfinity: true }),
         (ratio, m, eta) => {
           const d = 1e-3;
-          const o = { wireDiameter: d, frequency: frequencyFor(ratio, d), resistivity: rho, layers: m, turnsPerLayer: 10, windingWidth: (10 * d) / eta };
+          const o = { wireDiameter: d, frequency: frequencyFor(ratio, d), resistivity: rho, layers: m, turnsPerLayer: 10, windowBreadth: (10 * d) / eta };
           const a = roundWireWindingAcRatioFerreira(o);
           const b = roundWireWindingAcRatio(o);
           expect(Math.abs(a / b - 1)).toBeLessThan(0.1);
@@ -70,7 +70,7 @@ describe("roundWireWindingAcRatioFerreira", () => {
     fc.assert(
       fc.property(fc.double({ min: 0.05, max: 1.5, noNaN: true, noDefaultInfinity: true }), fc.integer({ min: 1, max: 12 }), (ratio, m) => {
         const d = 1e-3;
-        const o = { wireDiameter: d, frequency: frequencyFor(ratio, d), resistivity: rho, layers: m, turnsPerLayer: 9, windingWidth: 10e-3 };
+        const o = { wireDiameter: d, frequency: frequencyFor(ratio, d), resistivity: rho, layers: m, turnsPerLayer: 9, windowBreadth: 10e-3 };
         expect(Math.abs(roundWireWindingAcRatioFerreira(o) / roundWireWindingAcRatio(o) - 1)).toBeLessThan(0.04);
       }),
       { seed: 1, numRuns: 200 },
@@ -84,7 +84,7 @@ describe("roundWireWindingAcRatioFerreira", () => {
         fc.integer({ min: 1, max: 20 }),
         (ratio, m) => {
           const d = 1e-3;
-          const o = { wireDiameter: d, frequency: frequencyFor(ratio, d), resistivity: rho, layers: m, turnsPerLayer: 8, windingWidth: 10e-3 };
+          const o = { wireDiameter: d, frequency: frequencyFor(ratio, d), resistivity: rho, layers: m, turnsPerLayer: 8, windowBreadth: 10e-3 };
           const a = roundWireWindingAcRatioFerreira(o);
           expect(a).toBeGreaterThanOrEqual(1);
           expect(roundWireWindingAcRatioFerreira({ ...o, layers: m + 1 })).toBeGreaterThan(a);
@@ -96,13 +96,13 @@ describe("roundWireWindingAcRatioFerreira", () => {
   });
 
   it("prints the TSDoc example value", () => {
-    const fr = roundWireWindingAcRatioFerreira({ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: rho, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 });
+    const fr = roundWireWindingAcRatioFerreira({ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: rho, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 });
     expect(fr.toPrecision(4)).toBe("13.15");
   });
 
   it("throws InputError on bad input", () => {
-    const ok = { wireDiameter: 1e-3, frequency: 1e4, resistivity: rho, layers: 2, turnsPerLayer: 10, windingWidth: 12e-3 };
-    expect(() => roundWireWindingAcRatioFerreira({ ...ok, windingWidth: 5e-3 })).toThrow(/windingWidth/);
+    const ok = { wireDiameter: 1e-3, frequency: 1e4, resistivity: rho, layers: 2, turnsPerLayer: 10, windowBreadth: 12e-3 };
+    expect(() => roundWireWindingAcRatioFerreira({ ...ok, windowBreadth: 5e-3 })).toThrow(/windowBreadth/);
     expect(() => roundWireWindingAcRatioFerreira({ ...ok, layers: -1 })).toThrow(InputError);
   });
 });

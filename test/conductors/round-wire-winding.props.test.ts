@@ -17,7 +17,7 @@ describe("roundWireWindingAcRatio properties", () => {
   it("Rac/Rdc ≥ 1, finite, and non-decreasing in frequency", () => {
     fc.assert(
       fc.property(winding, logUniform(1, 100), (w, k) => {
-        const o = { wireDiameter: w.wireDiameter, frequency: w.frequency, resistivity: rho, layers: w.layers, turnsPerLayer: w.turnsPerLayer, windingWidth: w.turnsPerLayer * w.wireDiameter * w.slack };
+        const o = { wireDiameter: w.wireDiameter, frequency: w.frequency, resistivity: rho, layers: w.layers, turnsPerLayer: w.turnsPerLayer, windowBreadth: w.turnsPerLayer * w.wireDiameter * w.slack };
         const a = roundWireWindingAcRatio(o);
         const b = roundWireWindingAcRatio({ ...o, frequency: o.frequency * k });
         expect(Number.isFinite(a)).toBe(true);
@@ -30,10 +30,10 @@ describe("roundWireWindingAcRatio properties", () => {
   it("grows with the number of layers and with tighter winding (porosity)", () => {
     fc.assert(
       fc.property(winding, (w) => {
-        const o = { wireDiameter: w.wireDiameter, frequency: w.frequency, resistivity: rho, layers: w.layers, turnsPerLayer: w.turnsPerLayer, windingWidth: w.turnsPerLayer * w.wireDiameter * w.slack };
+        const o = { wireDiameter: w.wireDiameter, frequency: w.frequency, resistivity: rho, layers: w.layers, turnsPerLayer: w.turnsPerLayer, windowBreadth: w.turnsPerLayer * w.wireDiameter * w.slack };
         const a = roundWireWindingAcRatio(o);
         expect(roundWireWindingAcRatio({ ...o, layers: o.layers + 1 })).toBeGreaterThan(a * (1 - 1e-15));
-        expect(roundWireWindingAcRatio({ ...o, windingWidth: o.windingWidth * 2 })).toBeLessThanOrEqual(a * (1 + 1e-15));
+        expect(roundWireWindingAcRatio({ ...o, windowBreadth: o.windowBreadth * 2 })).toBeLessThanOrEqual(a * (1 + 1e-15));
       }),
       { seed: 1, numRuns: 200 },
     );
@@ -41,7 +41,7 @@ describe("roundWireWindingAcRatio properties", () => {
   it("tends to 1 as the frequency tends to 0", () => {
     fc.assert(
       fc.property(winding, (w) => {
-        const o = { wireDiameter: w.wireDiameter, frequency: 1e-6, resistivity: rho, layers: w.layers, turnsPerLayer: w.turnsPerLayer, windingWidth: w.turnsPerLayer * w.wireDiameter * w.slack };
+        const o = { wireDiameter: w.wireDiameter, frequency: 1e-6, resistivity: rho, layers: w.layers, turnsPerLayer: w.turnsPerLayer, windowBreadth: w.turnsPerLayer * w.wireDiameter * w.slack };
         expect(roundWireWindingAcRatio(o) - 1).toBeLessThan(1e-6);
       }),
       { seed: 1, numRuns: 200 },

@@ -5,14 +5,14 @@ const rho = 1.7241e-8;
 
 describe("roundWireWindingValidity", () => {
   it("flags wires thicker than 1.5 δ in multilayer windings and loose layers", () => {
-    const o = { wireDiameter: 1e-3, frequency: 100e3, resistivity: rho, layers: 4, turnsPerLayer: 8, windingWidth: 10e-3 };
+    const o = { wireDiameter: 1e-3, frequency: 100e3, resistivity: rho, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 };
     expect(roundWireWindingValidity(o).map((n) => n.code)).toEqual(["wire-thick-for-1d-models"]);
     expect(roundWireWindingValidity({ ...o, layers: 1 })).toEqual([]);
     expect(roundWireWindingValidity({ ...o, frequency: 1e3 })).toEqual([]);
-    expect(roundWireWindingValidity({ ...o, frequency: 1e3, windingWidth: 40e-3 }).map((n) => n.code)).toEqual(["loose-layer"]);
+    expect(roundWireWindingValidity({ ...o, frequency: 1e3, windowBreadth: 40e-3 }).map((n) => n.code)).toEqual(["loose-layer"]);
   });
   it("throws InputError on bad input", () => {
-    expect(() => roundWireWindingValidity({ wireDiameter: 1e-3, frequency: 1e3, resistivity: rho, layers: 0, turnsPerLayer: 8, windingWidth: 10e-3 })).toThrow(InputError);
+    expect(() => roundWireWindingValidity({ wireDiameter: 1e-3, frequency: 1e3, resistivity: rho, layers: 0, turnsPerLayer: 8, windowBreadth: 10e-3 })).toThrow(InputError);
   });
 });
 

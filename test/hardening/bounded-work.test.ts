@@ -50,11 +50,11 @@ describe("bounded work", () => {
 
   it("coilOverPlateTruncatedRegion: lift-off 20 radii within seconds and close to coilOverPlate, 300 refused", () => {
     const base = { plate: { thickness: 0.005, resistivity: 2e-7, relativePermeability: 1 }, frequency: 1e4 };
-    const coil = { innerRadius: 0.01, outerRadius: 0.02, height: 0.005, turns: 10 };
+    const coil = { innerRadius: 0.01, outerRadius: 0.02, length: 0.005, turns: 10 };
     const { value, seconds } = timed(() => coilOverPlateTruncatedRegion({ ...base, coil: { ...coil, liftOff: 0.4 } }));
     expect(seconds).toBeLessThan(10);
     const open = coilOverPlate({ ...base, coil: { ...coil, liftOff: 0.4 } });
-    expect(Math.abs(value.resistanceChange / open.resistanceChange - 1)).toBeLessThan(1e-3);
+    expect(Math.abs(value.reflectedResistance / open.reflectedResistance - 1)).toBeLessThan(1e-3);
     refusedQuickly(() => coilOverPlateTruncatedRegion({ ...base, coil: { ...coil, liftOff: 6 } }), /at most 20 × coil\.outerRadius/);
   });
 

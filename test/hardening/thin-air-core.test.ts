@@ -16,15 +16,15 @@ describe("coilOverPlate air-core inductance of thin windings", () => {
     // fixture: test/fixtures/workpiece/thin-air-core/generate.py (scipy Bessel/Struve quadrature)
     for (const c of fixture.cases) {
       const height = c.height === 0 ? 1e-12 : c.height;
-      const r = coilOverPlate({ coil: { innerRadius: c.innerRadius, outerRadius: c.outerRadius, liftOff: 0.01, height, turns: c.turns }, plate, frequency: 1e4 });
-      expect(rel(r.airCoreInductance, c.airCoreInductance)).toBeLessThanOrEqual(fixture.meta.rtol);
+      const r = coilOverPlate({ coil: { innerRadius: c.innerRadius, outerRadius: c.outerRadius, liftOff: 0.01, length: height, turns: c.turns }, plate, frequency: 1e4 });
+      expect(rel(r.emptyCoilInductance, c.airCoreInductance)).toBeLessThanOrEqual(fixture.meta.rtol);
     }
   });
 
   it("agrees with multilayerCoilInductance (Bessel–Struve, its own fixture) for thin windings to 1e-6", () => {
     for (const height of [1e-2, 1e-3, 1e-4, 3e-5]) {
-      const coil = { innerRadius: 0.2, outerRadius: 0.3, liftOff: 0.01, height, turns: 10 };
-      const l0 = coilOverPlate({ coil, plate, frequency: 1e4 }).airCoreInductance;
+      const coil = { innerRadius: 0.2, outerRadius: 0.3, liftOff: 0.01, length: height, turns: 10 };
+      const l0 = coilOverPlate({ coil, plate, frequency: 1e4 }).emptyCoilInductance;
       expect(rel(l0, multilayerCoilInductance({ innerRadius: 0.2, outerRadius: 0.3, length: height, turns: 10 }))).toBeLessThan(1e-6);
     }
   });

@@ -9,7 +9,7 @@ import {
   InputError,
   fieldOnAxis,
   lumpedHeatUp,
-  optimizeHeater,
+  optimiseHeater,
   roundWireAcRatio,
   safetyCautions,
   solenoidInductance,
@@ -62,8 +62,8 @@ describe("misspelt options", () => {
     expect(m).toContain("coil[0].kind");
   });
 
-  it("optimizeHeater names goal.targetPower (not the parser's own parameter) for a bad quantity text", () => {
-    const m = messageOf(() => optimizeHeater(loadExample("study-bearing-race.json"), { targetPower: "abc" }));
-    expect(m).toMatch(/^optimizeHeater: goal\.targetPower must be/);
+  it("optimiseHeater names goal.targetPower (not the parser's own parameter) for a bad quantity text", () => {
+    const m = messageOf(() => optimiseHeater(loadExample("study-bearing-race.json"), { targetPower: "abc" }));
+    expect(m).toMatch(/^optimiseHeater: goal\.targetPower must be/);
   });
 });

@@ -426,17 +426,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     allow: [{ paths: ["0.construction.strandOuterDiameter"], kinds: ["undefined"], reason: OPTIONAL }],
   },
   roundWireWindingAcRatioFerreira: {
-    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 }],
   },
   roundWireWindingAcRatio: {
-    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windingWidth: 8e-3 }],
+    args: () => [{ wireDiameter: 0.5e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 12, windowBreadth: 8e-3 }],
   },
   roundWireAcRatio: { args: () => [{ diameter: 2e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
   roundWireAcRatioSweep: { args: () => [{ diameter: 2e-3, frequencies: [1e3, 20e3, 1e6], resistivity: 1.7241e-8 }] },
   skinDepth: { args: () => [{ resistivity: 1.7241e-8, frequency: 20e3 }] },
   tubeAcResistance: { args: () => [{ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
   roundWireWindingValidity: {
-    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windingWidth: 10e-3 }],
+    args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 }],
   },
   litzWindingValidity: {
     args: () => [{ strands: 100, strandDiameter: 0.1e-3, turns: 20, windowBreadth: 20e-3, frequency: 100e3, resistivity: 1.7241e-8 }],
@@ -612,7 +612,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   coilOverPlate: {
     args: () => [
       {
-        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
         plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
         frequency: 2e4,
       },
@@ -620,7 +620,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [
       () => [
         {
-          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+          coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
           plate: [
             { thickness: 0.0005, resistivity: 1.7e-8, relativePermeability: 1 },
             { thickness: Infinity, resistivity: 2e-7, relativePermeability: 50 },
@@ -637,7 +637,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   coilOverPlateTruncatedRegion: {
     args: () => [
       {
-        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 },
+        coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
         plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
         frequency: 2e4,
       },
@@ -786,7 +786,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
         {
           material: lowCarbonSteel,
           temperature: celsius(20),
-          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, height: 0.01, turns: 20 } },
+          part: { kind: "plate", thickness: 0.003, coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 } },
           frequency: 2e4,
         },
       ],
@@ -1054,7 +1054,18 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     quantityStrings: true,
     badString: "12 parsecs",
   },
-  optimizeHeater: {
+  sweepHeaterStream: {
+    args: () => [heater(), { field: "coil.turns", values: [5, 6], heatUp: false }, { workers: 0, shard: { index: 1, count: 2 } }],
+    skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
+    allow: [
+      { paths: ["1.values.*"], kinds: ["NaN", "Infinity", "-Infinity", "string", "zero", "negative"], reason: "a value the study rejects is reported in its row's `problem` (documented), not thrown" },
+      { paths: ["1.heatUp", "2.shard"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["2.workers"], kinds: ["zero"], reason: "workers: 0 runs on the calling thread (documented)" },
+    ],
+    quantityStrings: true,
+    badString: "12 parsecs",
+  },
+  optimiseHeater: {
     args: () => [heater(), { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 }, {}],
     skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
     allow: [

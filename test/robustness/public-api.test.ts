@@ -92,7 +92,9 @@ function show(v: unknown): string {
 
 describe("the robustness table", () => {
   it("has an entry for every exported function, so new exports are covered", () => {
-    const missing = functions.map(([name]) => name).filter((name) => !(name in EXAMPLES));
+    // a deprecated former name is the same function object as its new name: covered by that entry
+    const covered = new Set(functions.filter(([name]) => name in EXAMPLES).map(([, f]) => f));
+    const missing = functions.filter(([name, f]) => !(name in EXAMPLES) && !covered.has(f)).map(([name]) => name);
     expect(missing).toEqual([]);
   });
 

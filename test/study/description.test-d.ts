@@ -3,7 +3,7 @@
  * field, an unknown material id or a fixed-frequency inverter without its frequency do not
  * compile. Each `@ts-expect-error` fails the type check if the line below it compiles.
  */
-import { optimizeHeater, studyHeater, sweepHeater, lowCarbonSteel } from "../../src/index.js";
+import { optimiseHeater, studyHeater, sweepHeater, lowCarbonSteel } from "../../src/index.js";
 import type { HeaterDescription, PartMaterialId } from "../../src/index.js";
 
 const good: HeaterDescription = {
@@ -15,7 +15,7 @@ const good: HeaterDescription = {
 };
 export const study = studyHeater(good, { heatUp: false });
 export const sweep = sweepHeater(good, { field: "coil.turns", values: [5, 6] });
-export const search = (): unknown => optimizeHeater(good, { targetPower: "1 kW" });
+export const search = (): unknown => optimiseHeater(good, { targetPower: "1 kW" });
 // a material set from the catalogue in place of an id
 export const withSet: HeaterDescription = { ...good, part: { ...good.part, material: lowCarbonSteel } };
 export const id: PartMaterialId = "austeniticStainless";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { InputError, optimizeHeater, studyHeater } from "../../src/index.js";
+import { InputError, optimiseHeater, studyHeater } from "../../src/index.js";
 import type { HeaterDescription } from "../../src/index.js";
 
 /** The base heater of the studyHeater @example (48 V battery, 6-turn tube coil, steel ring). */
@@ -51,19 +51,19 @@ describe("studyHeater options", () => {
   });
 });
 
-describe("optimizeHeater options", () => {
+describe("optimiseHeater options", () => {
   const goal = { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 };
 
   it("throws InputError when options is null, a number or a string (null was a TypeError)", () => {
     for (const bad of [null, 42, "progress"]) {
-      const e = thrown(() => optimizeHeater(heater(), goal, bad as never));
+      const e = thrown(() => optimiseHeater(heater(), goal, bad as never));
       expect(e).toBeInstanceOf(InputError);
       expect((e as InputError).parameter).toBe("options");
     }
   });
 
   it("throws InputError when onProgress is given but is not a function (was a TypeError mid-search)", () => {
-    const e = thrown(() => optimizeHeater(heater(), goal, { onProgress: 1 as never }));
+    const e = thrown(() => optimiseHeater(heater(), goal, { onProgress: 1 as never }));
     expect(e).toBeInstanceOf(InputError);
     expect((e as InputError).parameter).toBe("options.onProgress");
   });

@@ -25,7 +25,7 @@ function run(c: C, patch: Partial<{ resistivity: number; frequency: number; thic
     coil: {
       innerRadius: c.innerFraction * r2,
       outerRadius: r2,
-      height: c.heightRatio * r2,
+      length: c.heightRatio * r2,
       liftOff: patch.liftOff ?? c.liftOffRatio * r2,
       turns: c.turns,
     },
@@ -43,7 +43,7 @@ describe("coilOverPlate properties", () => {
     fc.assert(
       fc.property(cases, (c) => {
         const r = run(c);
-        return r.resistanceChange >= 0 && Number.isFinite(r.reactanceChange) && r.airCoreInductance > 0 && Number.isFinite(r.inductance);
+        return r.reflectedResistance >= 0 && Number.isFinite(r.reactanceChange) && r.emptyCoilInductance > 0 && Number.isFinite(r.inductance);
       }),
       { seed: 1, numRuns: 200 },
     );
@@ -54,11 +54,11 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, logUniform(0.1, 10), (c, k) => {
         const a = run(c);
         const b = run(c, { scale: k });
-        const dz = Math.hypot(a.resistanceChange, a.reactanceChange);
+        const dz = Math.hypot(a.reflectedResistance, a.reactanceChange);
         return (
-          Math.abs(b.resistanceChange - k * a.resistanceChange) <= 1e-6 * k * dz &&
+          Math.abs(b.reflectedResistance - k * a.reflectedResistance) <= 1e-6 * k * dz &&
           Math.abs(b.reactanceChange - k * a.reactanceChange) <= 1e-6 * k * dz &&
-          Math.abs(b.airCoreInductance / (k * a.airCoreInductance) - 1) <= 1e-6
+          Math.abs(b.emptyCoilInductance / (k * a.emptyCoilInductance) - 1) <= 1e-6
         );
       }),
       { seed: 1, numRuns: 100 },
@@ -70,8 +70,8 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, (c) => {
         const nm = { ...c, relativePermeability: 1 };
         const r = run(nm, { resistivity: 1e6 });
-        const ref = 2 * Math.PI * c.frequency * r.airCoreInductance;
-        return Math.hypot(r.resistanceChange, r.reactanceChange) < 1e-6 * ref;
+        const ref = 2 * Math.PI * c.frequency * r.emptyCoilInductance;
+        return Math.hypot(r.reflectedResistance, r.reactanceChange) < 1e-6 * ref;
       }),
       { seed: 1, numRuns: 100 },
     );
@@ -82,7 +82,7 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, (c) => {
         const f = c.resistivity / (Math.PI * 4e-7 * Math.PI * (1e4 * c.outerRadius) ** 2);
         const r = run({ ...c, relativePermeability: 1 }, { frequency: f });
-        return Math.abs(r.inductanceChange) < 1e-6 * r.airCoreInductance && r.resistanceChange < 1e-6 * 2 * Math.PI * f * r.airCoreInductance;
+        return Math.abs(r.inductanceChange) < 1e-6 * r.emptyCoilInductance && r.reflectedResistance < 1e-6 * 2 * Math.PI * f * r.emptyCoilInductance;
       }),
       { seed: 1, numRuns: 100 },
     );
@@ -100,8 +100,8 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, (c) => {
         const half = run(c, { thickness: Infinity });
         const thick = run(c, { thickness: 40 * half.skinDepth });
-        const dz = Math.hypot(half.resistanceChange, half.reactanceChange);
-        return Math.abs(thick.resistanceChange - half.resistanceChange) <= 1e-6 * dz && Math.abs(thick.reactanceChange - half.reactanceChange) <= 1e-6 * dz;
+        const dz = Math.hypot(half.reflectedResistance, half.reactanceChange);
+        return Math.abs(thick.reflectedResistance - half.reflectedResistance) <= 1e-6 * dz && Math.abs(thick.reactanceChange - half.reactanceChange) <= 1e-6 * dz;
       }),
       { seed: 1, numRuns: 100 },
     );
@@ -112,7 +112,7 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, (c) => {
         const near = run(c);
         const far = run(c, { liftOff: c.liftOffRatio * c.outerRadius * 2 + 1e-4 });
-        return Math.hypot(far.resistanceChange, far.reactanceChange) < Math.hypot(near.resistanceChange, near.reactanceChange);
+        return Math.hypot(far.reflectedResistance, far.reactanceChange) < Math.hypot(near.reflectedResistance, near.reactanceChange);
       }),
       { seed: 1, numRuns: 100 },
     );
@@ -123,14 +123,14 @@ describe("coilOverPlate properties", () => {
       fc.property(cases, (c) => {
         const r2 = c.outerRadius;
         const options = {
-          coil: { innerRadius: c.innerFraction * r2, outerRadius: r2, height: c.heightRatio * r2, liftOff: c.liftOffRatio * r2, turns: c.turns },
+          coil: { innerRadius: c.innerFraction * r2, outerRadius: r2, length: c.heightRatio * r2, liftOff: c.liftOffRatio * r2, turns: c.turns },
           plate: { thickness: c.thicknessRatio * r2, resistivity: c.resistivity, relativePermeability: c.relativePermeability },
           frequency: c.frequency,
         };
         const a = coilOverPlate(options);
         const b = coilOverPlateTruncatedRegion(options);
-        const dz = Math.hypot(a.resistanceChange, a.reactanceChange);
-        return Math.hypot(b.resistanceChange - a.resistanceChange, b.reactanceChange - a.reactanceChange) <= 1e-3 * dz;
+        const dz = Math.hypot(a.reflectedResistance, a.reactanceChange);
+        return Math.hypot(b.reflectedResistance - a.reflectedResistance, b.reactanceChange - a.reactanceChange) <= 1e-3 * dz;
       }),
       { seed: 1, numRuns: 15 },
     );

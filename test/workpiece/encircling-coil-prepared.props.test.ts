@@ -15,7 +15,7 @@ describe("prepareEncirclingCoilOverRod invariants", () => {
           const coil = { innerRadius: radius * 1.3, outerRadius: radius * 1.4, length, turns: 1 };
           const one = prepareEncirclingCoilOverRod({ coil, rod: { radius } })(10 ** logF, 2e-7, 10 ** logMu);
           const many = prepareEncirclingCoilOverRod({ coil: { ...coil, turns }, rod: { radius } })(10 ** logF, 2e-7, 10 ** logMu);
-          return one.resistanceChange >= 0 && Math.abs(many.resistanceChange - turns * turns * one.resistanceChange) <= 1e-12 * many.resistanceChange;
+          return one.reflectedResistance >= 0 && Math.abs(many.reflectedResistance - turns * turns * one.reflectedResistance) <= 1e-12 * many.reflectedResistance;
         },
       ),
       { seed: 7, numRuns: 30 },
