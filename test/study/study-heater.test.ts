@@ -41,7 +41,7 @@ describe("studyHeater: every number equals the module-level call it came from", 
     const op = s.operating;
     expect(s.coil.inductance).toBe(solenoidInductance({ radius: coil.radius, length: coil.length, turns: coil.turns, wireDiameter: tube.outerDiameter }));
     expect(op.partResistivity).toBe(resistivityAt(d.part.material, d.part.startTemperature));
-    expect(op.partRelativePermeability).toBe(relativePermeabilityAt(d.part.material, { temperature: d.part.startTemperature, fieldStrength: op.surfaceFieldStrengthPeak }));
+    expect(op.partRelativePermeability).toBe(relativePermeabilityAt(d.part.material, { temperature: d.part.startTemperature, fieldStrengthPeak: op.surfaceFieldStrengthPeak }));
     // the inverter: exactly the module's numbers for the reported inputs
     const inv = currentFedParallelInverter({
       supplyVoltage: op.inverterInputVoltage,
