@@ -2,7 +2,7 @@
 // Names renamed before 1.0 keep working until 1.0: a result carries the old field beside the
 // new one with the same value; an input accepts either name and refuses both at once.
 import { describe, expect, it } from "vitest";
-import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, optimiseHeater, optimizeHeater, relativePermeabilityAt, steinmetzLoss, sinusoidalFluxWaveform, triangularFluxWaveform, trapezoidalFluxWaveform, fitSteinmetz, InputError } from "../../src/index.js";
+import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, optimiseHeater, optimizeHeater, relativePermeabilityAt, steinmetzLoss, sinusoidalFluxWaveform, triangularFluxWaveform, trapezoidalFluxWaveform, fitSteinmetz, couplingCoefficient, InputError } from "../../src/index.js";
 import { renamedOption } from "../../src/core/renamed.js";
 
 describe("renamedOption", () => {
@@ -94,5 +94,14 @@ describe("peak and RMS as suffixes: fluxDensityPeak and fieldStrengthPeak", () =
     const at = (o: object) => workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: t, frequency: 10e3, part, ...o });
     expect(at({ fieldStrength: 1e4 }).reflectedResistance).toBe(at({ fieldStrengthPeak: 1e4 }).reflectedResistance);
     expect(() => at({ fieldStrength: 1e4, fieldStrengthPeak: 1e4 })).toThrow(/workpieceCouplingAtTemperature: fieldStrength must be absent/);
+  });
+});
+
+describe("options objects: couplingCoefficient", () => {
+  it("the positional form gives the same value and the same checks", () => {
+    expect(couplingCoefficient(2e-6, 4e-6, 9e-6)).toBe(couplingCoefficient({ mutualInductance: 2e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 }));
+    expect(() => couplingCoefficient(7e-6, 4e-6, 9e-6)).toThrow(/couplingCoefficient: mutual must be at most/);
+    expect(() => couplingCoefficient({ mutualInductance: 7e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 })).toThrow(/couplingCoefficient: mutualInductance must be at most/);
+    expect(() => couplingCoefficient({ mutualInductance: 1e-6, selfInductance1: 4e-6, selfInductance2: 9e-6, mutual: 1 } as never)).toThrow(/mutual must be absent/);
   });
 });

@@ -49,8 +49,8 @@ describe("numeric range", () => {
   });
 
   it("couplingCoefficient keeps √L1·√L2 in range: k(0, 1e-170, 1e-170) = 0 and k(1e160, 1e160, 1e160) = 1 (definition)", () => {
-    expect(couplingCoefficient(0, 1e-170, 1e-170)).toBe(0);
-    expect(couplingCoefficient(1e160, 1e160, 1e160)).toBe(1);
+    expect(couplingCoefficient({ mutualInductance: 0, selfInductance1: 1e-170, selfInductance2: 1e-170 })).toBe(0);
+    expect(couplingCoefficient({ mutualInductance: 1e160, selfInductance1: 1e160, selfInductance2: 1e160 })).toBe(1);
   });
 
   it("seriesTank and parallelTank: f0 = 1/(2π√(LC)) with L·C beyond the double range (Thomson's formula)", () => {

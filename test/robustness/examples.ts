@@ -355,8 +355,8 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     ],
   },
   couplingCoefficient: {
-    args: () => [2e-6, 4e-6, 9e-6],
-    allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: "mutual inductance is signed (winding sense); k carries the sign" }],
+    args: () => [{ mutualInductance: 2e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 }],
+    allow: [{ paths: ["0.mutualInductance"], kinds: ["zero", "negative"], reason: "mutual inductance is signed (winding sense); k carries the sign" }],
   },
   loopInductance: {
     args: () => [{ loopRadius: 0.05, wireRadius: 0.001, currentDistribution: "surface" }],
