@@ -15,7 +15,7 @@ import { givenName, renamedOption } from "../core/renamed.js";
  * @deprecated Give `fluxDensityPeak`; `peakFluxDensity` is accepted until 1.0.
  * @category Core loss
  */
-export type WithPeakFluxDensity<T extends { readonly fluxDensityPeak: number }> = Omit<T, "fluxDensityPeak"> & {
+export type WithPeakFluxDensity<T extends object> = Omit<T, "fluxDensityPeak"> & {
   /**
    * Peak flux density [T].
    *
