@@ -49,7 +49,7 @@ const pIgse = igseLoss({ ...c, period, flux });
 const closed = (igseCoefficient(c) * swing ** (c.beta - c.alpha) * 2 * swing ** c.alpha * on ** (1 - c.alpha)) / period;
 expectClose("iGSE loss density [W/m³]", pIgse, closed, 1e-12);
 
-const pSine = steinmetzLoss({ ...c, frequency, peakFluxDensity: peak });
+const pSine = steinmetzLoss({ ...c, frequency, fluxDensityPeak: peak });
 console.log(`same peak as a sinusoid: ${pSine.toPrecision(6)} W/m³ (trapezoid/sinusoid = ${(pIgse / pSine).toFixed(3)})`);
 if (!(pIgse > pSine)) throw new Error("the steeper ramps of the trapezoid must lose more than the sinusoid");
 
@@ -60,7 +60,7 @@ expectClose("core loss at 80 °C [W]", watts, closed * hot * core.effectiveVolum
 // fit Steinmetz coefficients back from loss points (here generated from the same invented set)
 const points = [];
 for (const f of [25e3, 50e3, 100e3, 200e3]) {
-  for (const b of [0.05, 0.1, 0.2]) points.push({ frequency: f, peakFluxDensity: b, lossDensity: steinmetzLoss({ ...c, frequency: f, peakFluxDensity: b }) });
+  for (const b of [0.05, 0.1, 0.2]) points.push({ frequency: f, fluxDensityPeak: b, lossDensity: steinmetzLoss({ ...c, frequency: f, fluxDensityPeak: b }) });
 }
 const fit = fitSteinmetz(points);
 expectClose("fitted alpha", fit.alpha, c.alpha, 1e-9);

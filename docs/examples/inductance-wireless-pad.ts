@@ -31,7 +31,7 @@ const coil = { kind: "spiral" as const, innerRadius: pad.innerRadius, outerRadiu
 let previous = 1;
 for (const gap of [0.01, 0.02, 0.04, 0.08]) {
   const m = coaxialCoilMutualInductance(coil, coil, gap);
-  const k = couplingCoefficient(m, l, l);
+  const k = couplingCoefficient({ mutualInductance: m, selfInductance1: l, selfInductance2: l });
   console.log(`gap ${(gap * 1e3).toFixed(0)} mm: M ${(m * 1e6).toFixed(2)} µH, k ${k.toFixed(3)}`);
   check(`coupling falls with the gap (${gap * 1e3} mm)`, k < previous && k > 0);
   previous = k;

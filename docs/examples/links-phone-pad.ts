@@ -21,7 +21,7 @@ const rx = { innerRadius: 0.007, outerRadius: 0.016, turns: 12, wireDiameter: 0.
 const l1 = spiralCoilInductance(tx);
 const l2 = spiralCoilInductance(rx);
 const m = coaxialCoilMutualInductance({ kind: "spiral", innerRadius: tx.innerRadius, outerRadius: tx.outerRadius, turns: tx.turns }, { kind: "spiral", innerRadius: rx.innerRadius, outerRadius: rx.outerRadius, turns: rx.turns }, 0.005);
-const k = couplingCoefficient(m, l1, l2);
+const k = couplingCoefficient({ mutualInductance: m, selfInductance1: l1, selfInductance2: l2 });
 // coil resistances at 140 kHz (litz assumed; values of the kind a datasheet gives)
 const r1 = 0.09;
 const r2 = 0.08;

@@ -24,7 +24,7 @@ const l = spiralCoilInductance(pad);
 const spiral = { kind: "spiral" as const, innerRadius: pad.innerRadius, outerRadius: pad.outerRadius, turns: pad.turns };
 const nominalGap = 0.15;
 const m0 = coaxialCoilMutualInductance(spiral, spiral, nominalGap);
-console.log(`pad L ${(l * 1e6).toFixed(1)} µH, k at ${nominalGap * 1e3} mm: ${couplingCoefficient(m0, l, l).toFixed(3)}`);
+console.log(`pad L ${(l * 1e6).toFixed(1)} µH, k at ${nominalGap * 1e3} mm: ${couplingCoefficient({ mutualInductance: m0, selfInductance1: l, selfInductance2: l }).toFixed(3)}`);
 
 const base = {
   primaryInductance: l, secondaryInductance: l, primaryResistance: 0.05, secondaryResistance: 0.05, frequency: f,

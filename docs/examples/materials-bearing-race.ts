@@ -20,9 +20,9 @@ expectClose("resistivity at 800 °C [Ω·m]", resistivityAt(steel, celsius(800))
 
 // permeability in a strong surface field (20 kA/m) at 20 °C: 1 + 599 Ms/(Ms + 599 H), Ms = 1.9 T/μ0;
 // and none above the Curie point
-const mu20 = relativePermeabilityAt(steel, { temperature: celsius(20), fieldStrength: 20e3 });
+const mu20 = relativePermeabilityAt(steel, { temperature: celsius(20), fieldStrengthPeak: 20e3 });
 expectClose("relative permeability at 20 °C, 20 kA/m", mu20, 68.1267, 1e-5);
-const mu780 = relativePermeabilityAt(steel, { temperature: celsius(780), fieldStrength: 20e3 });
+const mu780 = relativePermeabilityAt(steel, { temperature: celsius(780), fieldStrengthPeak: 20e3 });
 console.log(`relative permeability at 780 °C = ${mu780}`);
 if (mu780 !== 1) throw new Error("permeability above Curie must be exactly 1");
 

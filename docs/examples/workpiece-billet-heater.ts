@@ -37,7 +37,7 @@ const rhoCu = ANNEALED_COPPER_RESISTIVITY * 1.08; // ~40 °C
 const deltaCu = Math.sqrt(rhoCu / (Math.PI * frequency * MU_0));
 const coilResistance = ((coil.turns ** 2) / coil.length) * 2 * Math.PI * coil.innerRadius * (rhoCu / deltaCu);
 const part = { kind: "bar" as const, radius, coil };
-const cold = workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), part, frequency, fieldStrength: 5e4, coilResistance });
+const cold = workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), part, frequency, fieldStrengthPeak: 5e4, coilResistance });
 const hot = workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(1000), part, frequency, coilResistance });
 console.log(`cold: μr ${cold.relativePermeability.toFixed(1)}, Rr ${cold.reflectedResistance.toExponential(3)} Ω, ΔL ${cold.inductanceChange.toExponential(3)} H, η ${cold.efficiency!.toFixed(3)}`);
 console.log(`hot:  μr ${hot.relativePermeability.toFixed(1)}, Rr ${hot.reflectedResistance.toExponential(3)} Ω, ΔL ${hot.inductanceChange.toExponential(3)} H, η ${hot.efficiency!.toFixed(3)}`);

@@ -27,7 +27,7 @@ const t = celsius(20);
 const plate = {
   thickness: 0.004,
   resistivity: resistivityAt(lowCarbonSteel, t),
-  relativePermeability: relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrength: 5e4 }),
+  relativePermeability: relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrengthPeak: 5e4 }),
 };
 
 const r = coilOverPlate({ coil, plate, frequency: 25e3 });

@@ -14,8 +14,8 @@ import { igseLoss, inventedExampleFerrite, steinmetzLoss, trapezoidalFluxWavefor
 const here = dirname(fileURLToPath(import.meta.url));
 const c = inventedExampleFerrite.steinmetz; // invented example coefficients
 const frequency = 100e3;
-const peakFluxDensity = 0.1;
-const sine = steinmetzLoss({ ...c, frequency, peakFluxDensity });
+const fluxDensityPeak = 0.1;
+const sine = steinmetzLoss({ ...c, frequency, fluxDensityPeak });
 const duties: number[] = [];
 for (let d = 0.05; d <= 0.951; d += 0.01) duties.push(d);
 
@@ -28,7 +28,7 @@ const svg = lineChart({
       name: "triangle, rising for D·T",
       x: duties,
       y: duties.map((d) => {
-        const w = triangularFluxWaveform({ peakFluxDensity, frequency, dutyCycle: d });
+        const w = triangularFluxWaveform({ fluxDensityPeak, frequency, dutyCycle: d });
         return igseLoss({ ...c, period: w.period, flux: w }) / sine;
       }),
     },
@@ -36,7 +36,7 @@ const svg = lineChart({
       name: "trapezoid, ramps for D·T/2 (zero-voltage intervals)",
       x: duties,
       y: duties.map((d) => {
-        const w = trapezoidalFluxWaveform({ peakFluxDensity, frequency, dutyCycle: d });
+        const w = trapezoidalFluxWaveform({ fluxDensityPeak, frequency, dutyCycle: d });
         return igseLoss({ ...c, period: w.period, flux: w }) / sine;
       }),
     },

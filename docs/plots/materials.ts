@@ -60,7 +60,7 @@ write(
     series: [1e3, 1e4, 1e5, 1e6].map((h) => ({
       name: `H = ${h >= 1e6 ? "1 MA/m" : `${h / 1e3} kA/m`}`,
       x: temps.map(toCelsius),
-      y: temps.map((t) => relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrength: h })),
+      y: temps.map((t) => relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrengthPeak: h })),
     })),
     referenceLines: [{ axis: "x", value: toCelsius(lowCarbonSteel.curieTemperature ?? 0), label: "Curie" }],
   }),

@@ -56,7 +56,7 @@ function efficiencyCurve(name: string, resistivity: number, relativePermeability
 const cold = celsius(20);
 const hot = celsius(900);
 const workingField = 5e4; // A/m amplitude at the bar surface, a typical through-heating field (invented for the figure)
-const steelColdMu = relativePermeabilityAt(lowCarbonSteel, { temperature: cold, fieldStrength: workingField });
+const steelColdMu = relativePermeabilityAt(lowCarbonSteel, { temperature: cold, fieldStrengthPeak: workingField });
 export const curves: EfficiencyCurve[] = [
   efficiencyCurve(`low-carbon steel 20 °C (μr ≈ ${steelColdMu.toFixed(0)})`, resistivityAt(lowCarbonSteel, cold), steelColdMu),
   efficiencyCurve("low-carbon steel 900 °C (above Curie)", resistivityAt(lowCarbonSteel, hot), 1),
@@ -75,7 +75,7 @@ const pancake = { innerRadius: 0.01, outerRadius: 0.06, liftOff: 0.005, height: 
 const steelPlate = (t: number, field: number) => ({
   thickness: 0.004,
   resistivity: resistivityAt(lowCarbonSteel, t),
-  relativePermeability: relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrength: field }),
+  relativePermeability: relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrengthPeak: field }),
 });
 export const plates = {
   "low-carbon steel 4 mm, 20 °C": steelPlate(cold, workingField),

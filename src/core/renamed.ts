@@ -35,3 +35,16 @@ export function renamedOption(where: string, path: string, options: object, name
   }
   return former;
 }
+
+/**
+ * The name under which a renamed option was given, for error messages: `formerName` when only
+ * the former name carries a value, else `name`.
+ *
+ * @param options - the options object
+ * @param name - the current name of the option
+ * @param formerName - the deprecated name kept until 1.0
+ */
+export function givenName(options: object, name: string, formerName: string): string {
+  const record = options as Record<string, unknown>;
+  return record[formerName] !== undefined && record[name] === undefined ? formerName : name;
+}

@@ -8,9 +8,11 @@ import { InputError, requireKnownKeys, requireObject, requirePositive } from "..
 import type { ValidityNote } from "../core/index.js";
 import type { SteinmetzTemperatureTerm } from "../materials/index.js";
 import { leastSquaresQr } from "./numeric.js";
+import { givenName, renamedOption } from "../core/renamed.js";
+import type { WithPeakFluxDensity } from "./waveforms.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const POINT_FIELDS: readonly string[] = Object.freeze(["frequency", "peakFluxDensity", "lossDensity", "temperature"]);
+const POINT_FIELDS: readonly string[] = Object.freeze(["frequency", "fluxDensityPeak", "lossDensity", "temperature", "peakFluxDensity"]);
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const FIT_FIELDS: readonly string[] = Object.freeze(["referenceTemperature"]);
@@ -24,7 +26,7 @@ export interface SteinmetzDataPoint {
   /** Frequency [Hz], > 0. */
   readonly frequency: number;
   /** Peak flux density [T], > 0. */
-  readonly peakFluxDensity: number;
+  readonly fluxDensityPeak: number;
   /** Measured loss density [W/m³], > 0. */
   readonly lossDensity: number;
   /** Core temperature [K], > 0; give it on every point or on none. */
@@ -98,15 +100,16 @@ const WHERE = "fitSteinmetz";
  * // synthetic points from invented coefficients k = 2.5, α = 1.45, β = 2.55
  * const points = [];
  * for (const frequency of [25e3, 50e3, 100e3, 200e3])
- *   for (const peakFluxDensity of [0.05, 0.1, 0.2])
- *     points.push({ frequency, peakFluxDensity, lossDensity: steinmetzLoss({ k: 2.5, alpha: 1.45, beta: 2.55, frequency, peakFluxDensity }) });
+ *   for (const fluxDensityPeak of [0.05, 0.1, 0.2])
+ *     points.push({ frequency, fluxDensityPeak, lossDensity: steinmetzLoss({ k: 2.5, alpha: 1.45, beta: 2.55, frequency, fluxDensityPeak }) });
  * const fit = fitSteinmetz(points);
  * console.log(fit.alpha.toFixed(6), fit.beta.toFixed(6)); // 1.450000 2.550000
  * ```
  * @category Core loss
  */
-export function fitSteinmetz(points: readonly SteinmetzDataPoint[], options: FitSteinmetzOptions = {}): SteinmetzFit {
-  if (!Array.isArray(points)) throw new InputError(WHERE, "points", points, "", "an array of { frequency, peakFluxDensity, lossDensity } points");
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+export function fitSteinmetz(points: readonly (SteinmetzDataPoint | WithPeakFluxDensity<SteinmetzDataPoint>)[], options: FitSteinmetzOptions = {}): SteinmetzFit {
+  if (!Array.isArray(points)) throw new InputError(WHERE, "points", points, "", "an array of { frequency, fluxDensityPeak, lossDensity } points");
   requireObject(WHERE, "options", options);
   requireKnownKeys(WHERE, "options", options, FIT_FIELDS);
   const n = points.length;
@@ -120,7 +123,7 @@ export function fitSteinmetz(points: readonly SteinmetzDataPoint[], options: Fit
     const p = requireObject(WHERE, `points[${i}]`, points[i]);
     requireKnownKeys(WHERE, `points[${i}]`, p, POINT_FIELDS);
     lf[i] = Math.log(requirePositive(WHERE, `points[${i}].frequency`, p.frequency, "Hz"));
-    lb[i] = Math.log(requirePositive(WHERE, `points[${i}].peakFluxDensity`, p.peakFluxDensity, "T"));
+    lb[i] = Math.log(requirePositive(WHERE, `points[${i}].${givenName(p, "fluxDensityPeak", "peakFluxDensity")}`, renamedOption(WHERE, `points[${i}]`, p, "fluxDensityPeak", "peakFluxDensity"), "T"));
     lp[i] = Math.log(requirePositive(WHERE, `points[${i}].lossDensity`, p.lossDensity, "W/m³"));
     if (p.temperature !== undefined) {
       temps[i] = requirePositive(WHERE, `points[${i}].temperature`, p.temperature, "K");
@@ -289,7 +292,7 @@ function checkSpan(lf: Float64Array, lb: Float64Array, validity: ValidityNote[])
     mb += b / n;
   }
   if (!(fMax > fMin)) throw new InputError(WHERE, "points[].frequency", Math.exp(fMin), "Hz", "not all equal (α cannot be determined from one frequency); all equal to");
-  if (!(bMax > bMin)) throw new InputError(WHERE, "points[].peakFluxDensity", Math.exp(bMin), "T", "not all equal (β cannot be determined from one flux density); all equal to");
+  if (!(bMax > bMin)) throw new InputError(WHERE, "points[].fluxDensityPeak", Math.exp(bMin), "T", "not all equal (β cannot be determined from one flux density); all equal to");
   let sff = 0;
   let sbb = 0;
   let sfb = 0;

@@ -124,7 +124,7 @@ const WHERE = "igseLoss";
  * ```ts
  * import { igseLoss, triangularFluxWaveform } from "fluxwright";
  * // invented example coefficients; 100 kHz triangle, 0.1 T peak, 30 % rising
- * const flux = triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3, dutyCycle: 0.3 });
+ * const flux = triangularFluxWaveform({ fluxDensityPeak: 0.1, frequency: 100e3, dutyCycle: 0.3 });
  * console.log(igseLoss({ k: 2.5, alpha: 1.45, beta: 2.55, period: flux.period, flux })); // ≈ 122414
  * ```
  * @category Core loss

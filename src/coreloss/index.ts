@@ -15,6 +15,8 @@ export type { IgseLossOptions } from "./igse.js";
 export type { FluxSamples, FluxPoint, FluxWaveform } from "./waveform-types.js";
 export { sinusoidalFluxWaveform, triangularFluxWaveform, trapezoidalFluxWaveform } from "./waveforms.js";
 export type { SinusoidalFluxOptions, TriangularFluxOptions, TrapezoidalFluxOptions } from "./waveforms.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- exported until 1.0
+export type { WithPeakFluxDensity } from "./waveforms.js";
 export { fluxDensityFromVoltSeconds, sinusoidalPeakFluxDensity, fluxWaveformFromVoltage } from "./volt-seconds.js";
 export type { VoltSecondsOptions, SinusoidalVoltageOptions, VoltageWaveformOptions } from "./volt-seconds.js";
 export { fitSteinmetz } from "./fit-steinmetz.js";

@@ -5,12 +5,14 @@
  */
 import { InputError, requireFinite, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { SteinmetzCoefficients, SteinmetzTemperatureTerm } from "../materials/index.js";
+import { givenName, renamedOption } from "../core/renamed.js";
+import type { WithPeakFluxDensity } from "./waveforms.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const TERM_FIELDS: readonly string[] = Object.freeze(["referenceTemperature", "linear", "quadratic"]);
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const STEINMETZ_FIELDS: readonly string[] = Object.freeze(["frequency", "peakFluxDensity", "k", "alpha", "beta"]);
+const STEINMETZ_FIELDS: readonly string[] = Object.freeze(["frequency", "fluxDensityPeak", "k", "alpha", "beta", "peakFluxDensity"]);
 
 /**
  * Options of {@link steinmetzLoss}: Steinmetz coefficients (SI) and the sinusoidal operating
@@ -22,7 +24,7 @@ export interface SteinmetzLossOptions extends SteinmetzCoefficients {
   /** Frequency of the sinusoidal flux [Hz], > 0. */
   readonly frequency: number;
   /** Peak (amplitude) flux density $\hat B$ [T], ≥ 0 (half the peak-to-peak swing). */
-  readonly peakFluxDensity: number;
+  readonly fluxDensityPeak: number;
 }
 
 /**
@@ -59,17 +61,18 @@ export function checkSteinmetzCoefficients(where: string, o: SteinmetzCoefficien
  * ```ts
  * import { steinmetzLoss } from "fluxwright";
  * // invented example coefficients
- * console.log(steinmetzLoss({ k: 2.5, alpha: 1.45, beta: 2.55, frequency: 100e3, peakFluxDensity: 0.1 })); // ≈ 125297
+ * console.log(steinmetzLoss({ k: 2.5, alpha: 1.45, beta: 2.55, frequency: 100e3, fluxDensityPeak: 0.1 })); // ≈ 125297
  * ```
  * @category Core loss
  */
-export function steinmetzLoss(options: SteinmetzLossOptions): number {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+export function steinmetzLoss(options: SteinmetzLossOptions | WithPeakFluxDensity<SteinmetzLossOptions>): number {
   const where = "steinmetzLoss";
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, STEINMETZ_FIELDS);
   checkSteinmetzCoefficients(where, options);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
-  const b = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
+  const b = requireNonNegative(where, givenName(options, "fluxDensityPeak", "peakFluxDensity"), renamedOption(where, "", options, "fluxDensityPeak", "peakFluxDensity"), "T");
   if (b === 0) return 0;
   const direct = options.k * Math.pow(f, options.alpha) * Math.pow(b, options.beta);
   if (direct > 0 && direct < Infinity) return direct;
@@ -77,7 +80,7 @@ export function steinmetzLoss(options: SteinmetzLossOptions): number {
   const logLoss = Math.log(options.k) + options.alpha * Math.log(f) + options.beta * Math.log(b);
   const loss = Math.exp(logLoss);
   if (loss === Infinity) {
-    throw new InputError(where, "frequency", f, "Hz", `a frequency for which (with peakFluxDensity ${b} T) the loss density k·f^α·B^β, e^${logLoss.toPrecision(4)} W/m³, lies within the double-precision range`);
+    throw new InputError(where, "frequency", f, "Hz", `a frequency for which (with fluxDensityPeak ${b} T) the loss density k·f^α·B^β, e^${logLoss.toPrecision(4)} W/m³, lies within the double-precision range`);
   }
   return loss;
 }

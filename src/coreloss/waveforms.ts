@@ -6,15 +6,32 @@
  */
 import { InputError, MAX_ARRAY_LENGTH, requireFinite, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { FluxWaveform } from "./waveform-types.js";
+import { givenName, renamedOption } from "../core/renamed.js";
+
+/**
+ * A core-loss options object (or data point) with the peak flux density under its former name
+ * `peakFluxDensity` instead of `fluxDensityPeak`.
+ *
+ * @deprecated Give `fluxDensityPeak`; `peakFluxDensity` is accepted until 1.0.
+ * @category Core loss
+ */
+export type WithPeakFluxDensity<T extends object> = Omit<T, "fluxDensityPeak"> & {
+  /**
+   * Peak flux density [T].
+   *
+   * @deprecated Use `fluxDensityPeak`.
+   */
+  readonly peakFluxDensity: number;
+};
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const TRAPEZOIDAL_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "frequency", "dutyCycle", "offset"]);
+const TRAPEZOIDAL_FIELDS: readonly string[] = Object.freeze(["fluxDensityPeak", "frequency", "dutyCycle", "offset", "peakFluxDensity"]);
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const TRIANGULAR_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "frequency", "dutyCycle", "offset"]);
+const TRIANGULAR_FIELDS: readonly string[] = Object.freeze(["fluxDensityPeak", "frequency", "dutyCycle", "offset", "peakFluxDensity"]);
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const SINUSOIDAL_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "frequency", "samples", "offset"]);
+const SINUSOIDAL_FIELDS: readonly string[] = Object.freeze(["fluxDensityPeak", "frequency", "samples", "offset", "peakFluxDensity"]);
 
 /**
  * Options of {@link sinusoidalFluxWaveform}.
@@ -23,7 +40,7 @@ const SINUSOIDAL_FIELDS: readonly string[] = Object.freeze(["peakFluxDensity", "
  */
 export interface SinusoidalFluxOptions {
   /** Amplitude $\hat B$ [T], ≥ 0. */
-  readonly peakFluxDensity: number;
+  readonly fluxDensityPeak: number;
   /** Frequency [Hz], > 0. */
   readonly frequency: number;
   /** Number of linear pieces per period, an integer ≥ 4 (default 256). */
@@ -53,16 +70,17 @@ export interface SinusoidalFluxOptions {
  * @example
  * ```ts
  * import { sinusoidalFluxWaveform } from "fluxwright";
- * const w = sinusoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 50e3, samples: 8 });
+ * const w = sinusoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 50e3, samples: 8 });
  * console.log(w.time.length, w.period); // 9 0.00002
  * ```
  * @category Core loss
  */
-export function sinusoidalFluxWaveform(options: SinusoidalFluxOptions): FluxWaveform {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+export function sinusoidalFluxWaveform(options: SinusoidalFluxOptions | WithPeakFluxDensity<SinusoidalFluxOptions>): FluxWaveform {
   const where = "sinusoidalFluxWaveform";
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, SINUSOIDAL_FIELDS);
-  const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
+  const peak = requireNonNegative(where, givenName(options, "fluxDensityPeak", "peakFluxDensity"), renamedOption(where, "", options, "fluxDensityPeak", "peakFluxDensity"), "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const samples = options.samples === undefined ? 256 : requireInteger(where, "samples", options.samples, 4);
   if (samples > MAX_ARRAY_LENGTH) throw new InputError(where, "samples", samples, "", `an integer between 4 and ${MAX_ARRAY_LENGTH}`);
@@ -92,7 +110,7 @@ export function sinusoidalFluxWaveform(options: SinusoidalFluxOptions): FluxWave
  */
 export interface TriangularFluxOptions {
   /** Half the peak-to-peak swing $\hat B$ [T], ≥ 0. */
-  readonly peakFluxDensity: number;
+  readonly fluxDensityPeak: number;
   /** Frequency [Hz], > 0. */
   readonly frequency: number;
   /** Fraction D of the period during which the flux rises, 0 < D < 1 (default 0.5: symmetric). */
@@ -121,16 +139,17 @@ export interface TriangularFluxOptions {
  * @example
  * ```ts
  * import { triangularFluxWaveform } from "fluxwright";
- * const w = triangularFluxWaveform({ peakFluxDensity: 0.2, frequency: 20e3, dutyCycle: 0.25 });
+ * const w = triangularFluxWaveform({ fluxDensityPeak: 0.2, frequency: 20e3, dutyCycle: 0.25 });
  * console.log(Array.from(w.fluxDensity)); // [ -0.2, 0.2, -0.2 ]
  * ```
  * @category Core loss
  */
-export function triangularFluxWaveform(options: TriangularFluxOptions): FluxWaveform {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+export function triangularFluxWaveform(options: TriangularFluxOptions | WithPeakFluxDensity<TriangularFluxOptions>): FluxWaveform {
   const where = "triangularFluxWaveform";
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, TRIANGULAR_FIELDS);
-  const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
+  const peak = requireNonNegative(where, givenName(options, "fluxDensityPeak", "peakFluxDensity"), renamedOption(where, "", options, "fluxDensityPeak", "peakFluxDensity"), "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const d = options.dutyCycle === undefined ? 0.5 : requireInRange(where, "dutyCycle", options.dutyCycle, "", 0, 1, "()");
   const offset = options.offset === undefined ? 0 : requireFinite(where, "offset", options.offset, "T");
@@ -149,7 +168,7 @@ export function triangularFluxWaveform(options: TriangularFluxOptions): FluxWave
  */
 export interface TrapezoidalFluxOptions {
   /** Half the peak-to-peak swing $\hat B$ [T], ≥ 0. */
-  readonly peakFluxDensity: number;
+  readonly fluxDensityPeak: number;
   /** Frequency [Hz], > 0. */
   readonly frequency: number;
   /**
@@ -183,16 +202,17 @@ export interface TrapezoidalFluxOptions {
  * @example
  * ```ts
  * import { trapezoidalFluxWaveform } from "fluxwright";
- * const w = trapezoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 1e3, dutyCycle: 0.5 });
+ * const w = trapezoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 1e3, dutyCycle: 0.5 });
  * console.log(Array.from(w.time)); // [ 0, 0.00025, 0.0005, 0.00075, 0.001 ]
  * ```
  * @category Core loss
  */
-export function trapezoidalFluxWaveform(options: TrapezoidalFluxOptions): FluxWaveform {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+export function trapezoidalFluxWaveform(options: TrapezoidalFluxOptions | WithPeakFluxDensity<TrapezoidalFluxOptions>): FluxWaveform {
   const where = "trapezoidalFluxWaveform";
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, TRAPEZOIDAL_FIELDS);
-  const peak = requireNonNegative(where, "peakFluxDensity", options.peakFluxDensity, "T");
+  const peak = requireNonNegative(where, givenName(options, "fluxDensityPeak", "peakFluxDensity"), renamedOption(where, "", options, "fluxDensityPeak", "peakFluxDensity"), "T");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const d = requireInRange(where, "dutyCycle", options.dutyCycle, "", 0, 1, "(]");
   const offset = options.offset === undefined ? 0 : requireFinite(where, "offset", options.offset, "T");

@@ -19,5 +19,6 @@ export { multilayerCoilInductance, multilayerCoilInductanceWheeler, brooksCoilIn
 export type { MultilayerCoilOptions, BrooksCoilOptions } from "./multilayer.js";
 export { spiralCoilInductance, spiralCoilInductanceWheeler, spiralCoilInductanceMohan } from "./spiral.js";
 export type { SpiralCoilOptions, SpiralCoilApproximationOptions } from "./spiral.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- couplingCoefficient keeps its positional form until 1.0
 export { coaxialCoilMutualInductance, couplingCoefficient } from "./coaxial.js";
-export type { CoaxialCoil, CoaxialLoop, CoaxialSolenoid, CoaxialMultilayerCoil, CoaxialSpiralCoil } from "./coaxial.js";
+export type { CoaxialCoil, CoaxialLoop, CoaxialSolenoid, CoaxialMultilayerCoil, CoaxialSpiralCoil, CouplingCoefficientOptions } from "./coaxial.js";

@@ -4,13 +4,14 @@
  *
  * @packageDocumentation
  */
+import { givenName, renamedOption } from "../core/renamed.js";
 import { requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import { checkPermeabilityModel } from "./check-material.js";
 import { MU_0 } from "../units/index.js";
 import type { ConductiveMaterial, PermeabilityModel } from "./types.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const CONDITION_FIELDS: readonly string[] = Object.freeze(["temperature", "fieldStrength"]);
+const CONDITION_FIELDS: readonly string[] = Object.freeze(["temperature", "fieldStrengthPeak", "fieldStrength"]);
 
 /** 20 °C in kelvin: the reference temperature of the permeability data. */
 const T20 = 293.15;
@@ -24,8 +25,14 @@ export interface PermeabilityConditions {
   /** Temperature [K], > 0. */
   readonly temperature: number;
   /**
-   * Amplitude of the magnetic field strength at the surface [A/m], ≥ 0. Omitted or 0: the
-   * low-field permeability.
+   * Amplitude (peak) of the magnetic field strength at the surface [A/m], ≥ 0. Omitted or 0:
+   * the low-field permeability.
+   */
+  readonly fieldStrengthPeak?: number;
+  /**
+   * Former name of `fieldStrengthPeak` [A/m]; giving both is refused.
+   *
+   * @deprecated Use `fieldStrengthPeak`; this name goes at 1.0.
    */
   readonly fieldStrength?: number;
 }
@@ -73,7 +80,7 @@ function saturationMagnetisation(model: PermeabilityModel, curie: number, t: num
  * (727 °C) and A3 is folded into the transition width.
  *
  * Hard domain (throws {@link InputError}): `material` or `conditions` not an object;
- * `temperature` not a finite number > 0; `fieldStrength` given but not a finite number ≥ 0.
+ * `temperature` not a finite number > 0; `fieldStrengthPeak` given but not a finite number ≥ 0.
  * Validity: fields from about 1 kA/m to 1 MA/m (the strong fields of induction heating).
  * Accuracy: the evaluation matches an independent mpmath evaluation of the model to ≤ 1e-12
  * relative; the model itself is an engineering approximation whose parameters are typical
@@ -92,7 +99,7 @@ function saturationMagnetisation(model: PermeabilityModel, curie: number, t: num
  * ```ts
  * import { relativePermeabilityAt, lowCarbonSteel, celsius } from "fluxwright";
  * console.log(relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(800) })); // 1
- * const cold = relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(20), fieldStrength: 1e5 });
+ * const cold = relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(20), fieldStrengthPeak: 1e5 });
  * console.log(cold.toFixed(1)); // 16.7
  * ```
  * @category Materials
@@ -102,10 +109,11 @@ export function relativePermeabilityAt(material: ConductiveMaterial, conditions:
   requireObject("relativePermeabilityAt", "conditions", conditions);
   requireKnownKeys("relativePermeabilityAt", "conditions", conditions, CONDITION_FIELDS);
   const t = requirePositive("relativePermeabilityAt", "conditions.temperature", conditions.temperature, "K");
+  const given = renamedOption("relativePermeabilityAt", "conditions", conditions, "fieldStrengthPeak", "fieldStrength");
   const h =
-    conditions.fieldStrength === undefined
+    given === undefined
       ? 0
-      : requireNonNegative("relativePermeabilityAt", "conditions.fieldStrength", conditions.fieldStrength, "A/m");
+      : requireNonNegative("relativePermeabilityAt", `conditions.${givenName(conditions, "fieldStrengthPeak", "fieldStrength")}`, given, "A/m");
   checkPermeabilityModel("relativePermeabilityAt", material);
   const model = material.permeability;
   const curie = material.curieTemperature;

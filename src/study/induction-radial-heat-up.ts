@@ -399,7 +399,7 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
       rho[i] = resistivityAt(material, temps[i]!);
       // first iterate: the new temperatures at the last solution's field (the surface field everywhere at the start)
       const h = solved ? (lastCurrent > 0 ? (field[i]! * current) / lastCurrent : 0) : surfacePeakPerAmpere * current;
-      mur[i] = relativePermeabilityAt(material, { temperature: temps[i]!, fieldStrength: h });
+      mur[i] = relativePermeabilityAt(material, { temperature: temps[i]!, fieldStrengthPeak: h });
     }
     const radii = faces.subarray(1, n + 1);
     let result = layeredCylinderInLongCoil({ coil, frequency: drive.frequency, innerRadius: bore, radii, resistivities: rho, relativePermeabilities: mur });
@@ -410,7 +410,7 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
       let change = 0;
       for (let i = 0; i < n; i++) {
         field[i] = peak * Math.sqrt(result.fieldRatios[i]! * result.fieldRatios[i + 1]!);
-        const wanted = relativePermeabilityAt(material, { temperature: temps[i]!, fieldStrength: field[i]! });
+        const wanted = relativePermeabilityAt(material, { temperature: temps[i]!, fieldStrengthPeak: field[i]! });
         // a shell's permeability matters in proportion to the field that reaches it
         change = Math.max(change, Math.abs(wanted / mur[i]! - 1) * result.fieldRatios[i + 1]!);
         mur[i] = wanted;

@@ -524,7 +524,7 @@ export function heaterOperatingPoint(
     if (d.concentrator === null || !(voltagePeak > 0) || !(current > 0)) return 0;
     const bPeak = sinusoidalPeakFluxDensity({ voltageRms: voltagePeak / Math.SQRT2, frequency: f, turns: d.coil.turns, coreArea: d.concentrator.crossSectionArea });
     const k = d.concentrator.material.steinmetz;
-    const loss = steinmetzLoss({ k: k.k, alpha: k.alpha, beta: k.beta, frequency: f, peakFluxDensity: bPeak }) * d.concentrator.volume;
+    const loss = steinmetzLoss({ k: k.k, alpha: k.alpha, beta: k.beta, frequency: f, fluxDensityPeak: bPeak }) * d.concentrator.volume;
     return loss / (current * current);
   }
 
@@ -532,7 +532,7 @@ export function heaterOperatingPoint(
     const notes: ValidityNote[] = [];
     // the coil's own impedance at f: the one place a frequency-dependent coil model plugs in
     const coilResistance = coilAcResistance(d, props, f, notes);
-    const mur = part ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrength: h }) : 1;
+    const mur = part ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrengthPeak: h }) : 1;
     const coupling = part && model !== null ? couple(f, mur) : null;
     const reflectedResistance = coupling?.reflectedResistance ?? 0;
     const inductanceChange = coupling?.inductanceChange ?? 0;

@@ -6,7 +6,7 @@
  */
 import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
-import { renamedOption } from "../core/renamed.js";
+import { givenName, renamedOption } from "../core/renamed.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import { coilOverLayers } from "./coil-over-plate.js";
@@ -16,7 +16,7 @@ import type { LongCoil } from "./long-coil.js";
 import { checkPlateLayers } from "./coil-over-plate.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const COUPLING_FIELDS: readonly string[] = Object.freeze(["material", "temperature", "part", "frequency", "fieldStrength", "coilResistance"]);
+const COUPLING_FIELDS: readonly string[] = Object.freeze(["material", "temperature", "part", "frequency", "fieldStrengthPeak", "coilResistance", "fieldStrength"]);
 const BAR_PART_FIELDS: readonly string[] = Object.freeze(["kind", "radius", "coil"]);
 const TUBE_PART_FIELDS: readonly string[] = Object.freeze(["kind", "outerRadius", "innerRadius", "coil"]);
 const PLATE_PART_FIELDS: readonly string[] = Object.freeze(["kind", "thickness", "coil"]);
@@ -92,8 +92,14 @@ export interface WorkpieceCouplingAtTemperatureOptions {
   /** Frequency [Hz], > 0. */
   readonly frequency: number;
   /**
-   * Amplitude of the surface magnetic field strength [A/m], ≥ 0, passed to the permeability
-   * model (saturation in strong fields); omitted: the low-field permeability.
+   * Amplitude (peak) of the surface magnetic field strength [A/m], ≥ 0, passed to the
+   * permeability model (saturation in strong fields); omitted: the low-field permeability.
+   */
+  readonly fieldStrengthPeak?: number;
+  /**
+   * Former name of `fieldStrengthPeak` [A/m]; giving both is refused.
+   *
+   * @deprecated Use `fieldStrengthPeak`; this name goes at 1.0.
    */
   readonly fieldStrength?: number;
   /** Coil winding resistance [Ω], ≥ 0; when given, `efficiency` is returned. */
@@ -140,7 +146,7 @@ export interface WorkpieceCouplingAtTemperatureResult {
  * The part is taken at one uniform temperature (the surface temperature is the usual
  * choice, since the power enters within a few skin depths).
  *
- * Hard domain (throws {@link InputError}): temperature > 0, frequency > 0, fieldStrength ≥ 0,
+ * Hard domain (throws {@link InputError}): temperature > 0, frequency > 0, fieldStrengthPeak ≥ 0,
  * coilResistance ≥ 0, and the hard domain of the underlying function; a temperature outside
  * the material's tabulated range throws from the materials module.
  * Validity: that of the underlying model, plus a uniform part temperature.
@@ -172,10 +178,11 @@ export function workpieceCouplingAtTemperature(options: WorkpieceCouplingAtTempe
   const temperature = requirePositive(where, "temperature", options.temperature, "K");
   const part = requireObject(where, "part", options.part);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
-  const h = options.fieldStrength === undefined ? undefined : requireNonNegative(where, "fieldStrength", options.fieldStrength, "A/m");
+  const given = renamedOption(where, "", options, "fieldStrengthPeak", "fieldStrength");
+  const h = given === undefined ? undefined : requireNonNegative(where, givenName(options, "fieldStrengthPeak", "fieldStrength"), given, "A/m");
   const rc = options.coilResistance === undefined ? undefined : requireNonNegative(where, "coilResistance", options.coilResistance, "Ω");
   const rho = resistivityAt(material, temperature);
-  const mur = relativePermeabilityAt(material, h === undefined ? { temperature } : { temperature, fieldStrength: h });
+  const mur = relativePermeabilityAt(material, h === undefined ? { temperature } : { temperature, fieldStrengthPeak: h });
   const kind = part["kind"];
   const coil = requireObject(where, "part.coil", part["coil"]);
   let r: {

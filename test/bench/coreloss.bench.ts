@@ -4,7 +4,7 @@ import { igseLoss, steinmetzLoss, trapezoidalFluxWaveform } from "../../src/core
 const N = 1024;
 const rnd = (lo: number, hi: number): number => lo + (hi - lo) * Math.random();
 const trapezoids = Array.from({ length: N }, () =>
-  trapezoidalFluxWaveform({ peakFluxDensity: rnd(0.01, 0.3), frequency: rnd(1e4, 5e5), dutyCycle: rnd(0.1, 0.95) }),
+  trapezoidalFluxWaveform({ fluxDensityPeak: rnd(0.01, 0.3), frequency: rnd(1e4, 5e5), dutyCycle: rnd(0.1, 0.95) }),
 );
 const minorLoops = Array.from({ length: N }, () => {
   const a = rnd(0.05, 0.2);
@@ -40,7 +40,7 @@ describe("coreloss", () => {
     "steinmetzLoss",
     () => {
       const c = coefficients[i++ & (N - 1)] as (typeof coefficients)[number];
-      check(steinmetzLoss({ k: c.k, alpha: c.alpha, beta: c.beta, frequency: 1e5 + i, peakFluxDensity: 0.1 }));
+      check(steinmetzLoss({ k: c.k, alpha: c.alpha, beta: c.beta, frequency: 1e5 + i, fluxDensityPeak: 0.1 }));
     },
     { time: 300 },
   );

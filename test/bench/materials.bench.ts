@@ -22,6 +22,6 @@ describe("materials", () => {
   }, { time: 300 });
   bench("relativePermeabilityAt", () => {
     const j = i++ & (N - 1);
-    check(relativePermeabilityAt(mats[j] as ConductiveMaterial, { temperature: temps[j] as number, fieldStrength: fields[j] as number }));
+    check(relativePermeabilityAt(mats[j] as ConductiveMaterial, { temperature: temps[j] as number, fieldStrengthPeak: fields[j] as number }));
   }, { time: 300 });
 });

@@ -2,7 +2,7 @@
 // Names renamed before 1.0 keep working until 1.0: a result carries the old field beside the
 // new one with the same value; an input accepts either name and refuses both at once.
 import { describe, expect, it } from "vitest";
-import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, optimiseHeater, optimizeHeater, InputError } from "../../src/index.js";
+import { coilOverPlate, encirclingCoilOverRod, prepareEncirclingCoilOverRod, workpieceCouplingAtTemperature, lowCarbonSteel, celsius, roundWireWindingAcRatio, roundWireWindingAcRatioFerreira, roundWireWindingValidity, optimiseHeater, optimizeHeater, relativePermeabilityAt, steinmetzLoss, sinusoidalFluxWaveform, triangularFluxWaveform, trapezoidalFluxWaveform, fitSteinmetz, couplingCoefficient, InputError } from "../../src/index.js";
 import { renamedOption } from "../../src/core/renamed.js";
 
 describe("renamedOption", () => {
@@ -71,5 +71,37 @@ describe("round-wire windings: windowBreadth, formerly windingWidth", () => {
 describe("British spelling: optimiseHeater, formerly optimizeHeater", () => {
   it("the former name is the same function", () => {
     expect(optimizeHeater).toBe(optimiseHeater);
+  });
+});
+
+describe("peak and RMS as suffixes: fluxDensityPeak and fieldStrengthPeak", () => {
+  const k = { k: 2.5, alpha: 1.45, beta: 2.55, frequency: 100e3 };
+  it("the core-loss functions accept peakFluxDensity with the same result and refuse both", () => {
+    expect(steinmetzLoss({ ...k, peakFluxDensity: 0.1 })).toBe(steinmetzLoss({ ...k, fluxDensityPeak: 0.1 }));
+    expect(() => steinmetzLoss({ ...k, fluxDensityPeak: 0.1, peakFluxDensity: 0.1 })).toThrow(/peakFluxDensity must be absent when fluxDensityPeak is given/);
+    expect(() => steinmetzLoss({ ...k, peakFluxDensity: -1 })).toThrow(/steinmetzLoss: peakFluxDensity must be/);
+    expect(sinusoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 50e3, samples: 8 })).toEqual(sinusoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 50e3, samples: 8 }));
+    expect(triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 50e3 })).toEqual(triangularFluxWaveform({ fluxDensityPeak: 0.1, frequency: 50e3 }));
+    expect(trapezoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 50e3, dutyCycle: 0.5 })).toEqual(trapezoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 50e3, dutyCycle: 0.5 }));
+    const points = [1e5, 2e5, 4e5].flatMap((frequency) => [0.05, 0.1, 0.2].map((b) => ({ frequency, b, lossDensity: steinmetzLoss({ ...k, frequency, fluxDensityPeak: b }) })));
+    expect(fitSteinmetz(points.map(({ b, ...p }) => ({ ...p, peakFluxDensity: b })))).toEqual(fitSteinmetz(points.map(({ b, ...p }) => ({ ...p, fluxDensityPeak: b }))));
+  });
+  it("relativePermeabilityAt and workpieceCouplingAtTemperature accept fieldStrength and refuse both", () => {
+    const t = celsius(20);
+    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrength: 1e5 })).toBe(relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrengthPeak: 1e5 }));
+    expect(() => relativePermeabilityAt(lowCarbonSteel, { temperature: t, fieldStrength: 1e5, fieldStrengthPeak: 1e5 })).toThrow(/conditions\.fieldStrength must be absent/);
+    const part = { kind: "bar", radius: 0.01, coil: { innerRadius: 0.02, length: 0.05, turns: 10 } } as const;
+    const at = (o: object) => workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: t, frequency: 10e3, part, ...o });
+    expect(at({ fieldStrength: 1e4 }).reflectedResistance).toBe(at({ fieldStrengthPeak: 1e4 }).reflectedResistance);
+    expect(() => at({ fieldStrength: 1e4, fieldStrengthPeak: 1e4 })).toThrow(/workpieceCouplingAtTemperature: fieldStrength must be absent/);
+  });
+});
+
+describe("options objects: couplingCoefficient", () => {
+  it("the positional form gives the same value and the same checks", () => {
+    expect(couplingCoefficient(2e-6, 4e-6, 9e-6)).toBe(couplingCoefficient({ mutualInductance: 2e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 }));
+    expect(() => couplingCoefficient(7e-6, 4e-6, 9e-6)).toThrow(/couplingCoefficient: mutual must be at most/);
+    expect(() => couplingCoefficient({ mutualInductance: 7e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 })).toThrow(/couplingCoefficient: mutualInductance must be at most/);
+    expect(() => couplingCoefficient({ mutualInductance: 1e-6, selfInductance1: 4e-6, selfInductance2: 9e-6, mutual: 1 } as never)).toThrow(/mutual must be absent/);
   });
 });

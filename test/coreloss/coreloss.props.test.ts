@@ -95,10 +95,10 @@ describe("core-loss invariants", () => {
   it("Steinmetz loss scales as f^α and B^β", () => {
     fc.assert(
       fc.property(coefficients, logUniform(1, 1e6), logUniform(1e-3, 2), logUniform(0.1, 10), (c, f, b, s) => {
-        const p = steinmetzLoss({ ...c, frequency: f, peakFluxDensity: b });
+        const p = steinmetzLoss({ ...c, frequency: f, fluxDensityPeak: b });
         return (
-          rel(steinmetzLoss({ ...c, frequency: f * s, peakFluxDensity: b }), p * s ** c.alpha) < 1e-13 &&
-          rel(steinmetzLoss({ ...c, frequency: f, peakFluxDensity: b * s }), p * s ** c.beta) < 1e-13
+          rel(steinmetzLoss({ ...c, frequency: f * s, fluxDensityPeak: b }), p * s ** c.alpha) < 1e-13 &&
+          rel(steinmetzLoss({ ...c, frequency: f, fluxDensityPeak: b * s }), p * s ** c.beta) < 1e-13
         );
       }),
       runs,
@@ -108,8 +108,8 @@ describe("core-loss invariants", () => {
   it("iGSE of a sampled sinusoid agrees with Steinmetz (within 5e-5 at 256 samples) for any coefficients", () => {
     fc.assert(
       fc.property(coefficients, logUniform(10, 1e6), logUniform(1e-3, 1.5), (c, f, b) => {
-        const w = sinusoidalFluxWaveform({ peakFluxDensity: b, frequency: f });
-        return rel(igseLoss({ ...c, period: w.period, flux: w }), steinmetzLoss({ ...c, frequency: f, peakFluxDensity: b })) < 1e-4;
+        const w = sinusoidalFluxWaveform({ fluxDensityPeak: b, frequency: f });
+        return rel(igseLoss({ ...c, period: w.period, flux: w }), steinmetzLoss({ ...c, frequency: f, fluxDensityPeak: b })) < 1e-4;
       }),
       runs,
     );
@@ -158,7 +158,7 @@ describe("core-loss invariants", () => {
       fc.property(coefficients, (c) => {
         const pts = [];
         for (const frequency of [1e3, 1e4, 1e5])
-          for (const peakFluxDensity of [0.01, 0.1, 0.5]) pts.push({ frequency, peakFluxDensity, lossDensity: steinmetzLoss({ ...c, frequency, peakFluxDensity }) });
+          for (const fluxDensityPeak of [0.01, 0.1, 0.5]) pts.push({ frequency, fluxDensityPeak, lossDensity: steinmetzLoss({ ...c, frequency, fluxDensityPeak }) });
         const fit = fitSteinmetz(pts);
         return rel(fit.alpha, c.alpha) < 1e-9 && rel(fit.beta, c.beta) < 1e-9 && rel(fit.k, c.k) < 1e-8;
       }),

@@ -9,8 +9,8 @@ const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 function grid(): SteinmetzDataPoint[] {
   const points: SteinmetzDataPoint[] = [];
   for (const frequency of [25e3, 50e3, 100e3, 200e3, 400e3]) {
-    for (const peakFluxDensity of [0.025, 0.05, 0.1, 0.2]) {
-      points.push({ frequency, peakFluxDensity, lossDensity: steinmetzLoss({ ...truth, frequency, peakFluxDensity }) });
+    for (const fluxDensityPeak of [0.025, 0.05, 0.1, 0.2]) {
+      points.push({ frequency, fluxDensityPeak, lossDensity: steinmetzLoss({ ...truth, frequency, fluxDensityPeak }) });
     }
   }
   return points;
@@ -86,7 +86,7 @@ describe("fitSteinmetz", () => {
   it("warns when the points span too narrow a range to determine α and β", () => {
     const points: SteinmetzDataPoint[] = [];
     for (const frequency of [90e3, 100e3, 110e3]) {
-      for (const peakFluxDensity of [0.09, 0.1, 0.12]) points.push({ frequency, peakFluxDensity, lossDensity: steinmetzLoss({ ...truth, frequency, peakFluxDensity }) });
+      for (const fluxDensityPeak of [0.09, 0.1, 0.12]) points.push({ frequency, fluxDensityPeak, lossDensity: steinmetzLoss({ ...truth, frequency, fluxDensityPeak }) });
     }
     const codes = fitSteinmetz(points).validity.map((v) => v.code);
     expect(codes).toContain("narrow-frequency-span");
@@ -101,9 +101,9 @@ describe("fitSteinmetz", () => {
   });
 
   it("throws InputError when α and β cannot be determined or input is bad", () => {
-    const one = (f: number, b: number): SteinmetzDataPoint => ({ frequency: f, peakFluxDensity: b, lossDensity: steinmetzLoss({ ...truth, frequency: f, peakFluxDensity: b }) });
+    const one = (f: number, b: number): SteinmetzDataPoint => ({ frequency: f, fluxDensityPeak: b, lossDensity: steinmetzLoss({ ...truth, frequency: f, fluxDensityPeak: b }) });
     expect(() => fitSteinmetz([one(1e5, 0.1), one(1e5, 0.2), one(1e5, 0.3)])).toThrow(/frequency/);
-    expect(() => fitSteinmetz([one(1e5, 0.1), one(2e5, 0.1), one(3e5, 0.1)])).toThrow(/peakFluxDensity/);
+    expect(() => fitSteinmetz([one(1e5, 0.1), one(2e5, 0.1), one(3e5, 0.1)])).toThrow(/fluxDensityPeak/);
     expect(() => fitSteinmetz([one(1e5, 0.1), one(2e5, 0.2), one(4e5, 0.4)])).toThrow(/collinear/);
     expect(() => fitSteinmetz([one(1e5, 0.1), one(2e5, 0.2)])).toThrow(InputError);
     expect(() => fitSteinmetz([one(1e5, 0.1), one(2e5, 0.2), { ...one(4e5, 0.1), lossDensity: 0 }])).toThrow(/lossDensity/);

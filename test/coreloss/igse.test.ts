@@ -43,16 +43,16 @@ describe("igseLoss", () => {
     for (const c of sinusoidData.cases) {
       const ki = igseCoefficient({ k: c.k, alpha: c.alpha, beta: c.beta });
       const igse = ki * (2 * c.peakFluxDensity) ** (c.beta - c.alpha) * c.integral * c.frequency;
-      const steinmetz = steinmetzLoss({ k: c.k, alpha: c.alpha, beta: c.beta, frequency: c.frequency, peakFluxDensity: c.peakFluxDensity });
+      const steinmetz = steinmetzLoss({ k: c.k, alpha: c.alpha, beta: c.beta, frequency: c.frequency, fluxDensityPeak: c.peakFluxDensity });
       expect(rel(igse, steinmetz)).toBeLessThanOrEqual(sinusoidData.meta.rtol);
     }
   });
 
   it("approaches the Steinmetz loss for a finely sampled sinusoid (within 5e-5 at 256 samples)", () => {
     const o = { k: 2.5, alpha: 1.45, beta: 2.55 };
-    const w = sinusoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3 });
+    const w = sinusoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 100e3 });
     const p = igseLoss({ ...o, period: w.period, flux: w });
-    expect(rel(p, steinmetzLoss({ ...o, frequency: 100e3, peakFluxDensity: 0.1 }))).toBeLessThan(5e-5);
+    expect(rel(p, steinmetzLoss({ ...o, frequency: 100e3, fluxDensityPeak: 0.1 }))).toBeLessThan(5e-5);
   });
 
   it("matches numerical time integration in mpmath for triangles, trapezoids and minor loops (fixture igse-waveforms.json)", () => {
@@ -64,7 +64,7 @@ describe("igseLoss", () => {
 
   it("gives the closed form k_i 2^(α+β) f^α B̂^β for a symmetric triangle (Venkatachalam et al. 2002, piecewise-linear form of the iGSE)", () => {
     const o = { k: 2.5, alpha: 1.45, beta: 2.55 };
-    const w = triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3 });
+    const w = triangularFluxWaveform({ fluxDensityPeak: 0.1, frequency: 100e3 });
     const expected = igseCoefficient(o) * 2 ** (o.alpha + o.beta) * 100e3 ** o.alpha * 0.1 ** o.beta;
     expect(rel(igseLoss({ ...o, period: w.period, flux: w }), expected)).toBeLessThan(1e-13);
   });
@@ -82,13 +82,13 @@ describe("igseLoss", () => {
 
   it("a trapezoid at D = 1 equals the symmetric triangle", () => {
     const o = { k: 2.5, alpha: 1.45, beta: 2.55 };
-    const a = trapezoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 1e5, dutyCycle: 1 });
-    const b = triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 1e5 });
+    const a = trapezoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 1e5, dutyCycle: 1 });
+    const b = triangularFluxWaveform({ fluxDensityPeak: 0.1, frequency: 1e5 });
     expect(igseLoss({ ...o, period: a.period, flux: a })).toBe(igseLoss({ ...o, period: b.period, flux: b }));
   });
 
   it("prints the documented example", () => {
-    const flux = triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3, dutyCycle: 0.3 });
+    const flux = triangularFluxWaveform({ fluxDensityPeak: 0.1, frequency: 100e3, dutyCycle: 0.3 });
     expect(igseLoss({ k: 2.5, alpha: 1.45, beta: 2.55, period: flux.period, flux }).toPrecision(6)).toBe("122414");
   });
 

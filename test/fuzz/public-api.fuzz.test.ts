@@ -89,7 +89,7 @@ const PROPERTIES: Readonly<Record<string, Property>> = {
   roundWireAcRatio: { monotone: { path: "0.frequency", sign: 1 } },
   dowellFactor: { monotone: { path: "0.penetrationRatio", sign: 1 } },
   // a loss density below the double range rounds to 0 (representable), so non-strict
-  steinmetzLoss: { monotone: { path: "0.peakFluxDensity", sign: 1 } },
+  steinmetzLoss: { monotone: { path: "0.fluxDensityPeak", sign: 1 } },
   multilayerCoilInductance: { positive: true },
   spiralCoilInductance: { positive: true },
   nagaokaCoefficient: { positive: true, monotone: { path: "0", sign: -1, strict: true } },

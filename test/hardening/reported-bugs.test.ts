@@ -102,7 +102,7 @@ describe("reported wrong answers", () => {
   it("huge array requests get an InputError naming the limit, not a plain RangeError", () => {
     const tank = seriesTank({ inductance: 1e-4, capacitance: 1e-6, resistance: 0.5 });
     expect(() => logSpacedFrequencies(1, 10, 1e12)).toThrow(InputError);
-    expect(() => sinusoidalFluxWaveform({ peakFluxDensity: 0.1, frequency: 1e3, samples: 1e12 })).toThrow(InputError);
+    expect(() => sinusoidalFluxWaveform({ fluxDensityPeak: 0.1, frequency: 1e3, samples: 1e12 })).toThrow(InputError);
     for (const length of [2 ** 40, -1, 1.5]) {
       expect(() => tankImpedanceSweep(tank, { length })).toThrow(InputError);
       expect(() => roundWireAcRatioSweep({ diameter: 1e-3, frequencies: { length }, resistivity: 1.7e-8 })).toThrow(InputError);

@@ -18,7 +18,7 @@ describe("coaxial coil properties", () => {
         expect(Math.abs(m12 / m21 - 1)).toBeLessThan(1e-8);
         const l1 = solenoidInductance({ radius: ra, length: la, turns: 10 });
         const l2 = spiralCoilInductance({ innerRadius: rb, outerRadius: outer, turns: n, wireDiameter: 0.9 * pitch });
-        const k = couplingCoefficient(m12, l1, l2);
+        const k = couplingCoefficient({ mutualInductance: m12, selfInductance1: l1, selfInductance2: l2 });
         expect(k).toBeGreaterThan(0);
         expect(k).toBeLessThanOrEqual(1);
       }),

@@ -86,15 +86,15 @@ describe("coaxialCoilMutualInductance", () => {
 
 describe("couplingCoefficient", () => {
   it("is M/√(L1 L2) and rejects |M| > √(L1 L2)", () => {
-    expect(couplingCoefficient(2e-6, 4e-6, 9e-6)).toBe(2e-6 / 6e-6);
-    expect(couplingCoefficient(-3e-6, 1e-6, 9e-6)).toBe(-1);
-    expect(() => couplingCoefficient(7e-6, 4e-6, 9e-6)).toThrow(InputError);
-    expect(() => couplingCoefficient(1e-6, 0, 9e-6)).toThrow(InputError);
-    expect(() => couplingCoefficient(NaN, 1, 1)).toThrow(InputError);
+    expect(couplingCoefficient({ mutualInductance: 2e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 })).toBe(2e-6 / 6e-6);
+    expect(couplingCoefficient({ mutualInductance: -3e-6, selfInductance1: 1e-6, selfInductance2: 9e-6 })).toBe(-1);
+    expect(() => couplingCoefficient({ mutualInductance: 7e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 })).toThrow(InputError);
+    expect(() => couplingCoefficient({ mutualInductance: 1e-6, selfInductance1: 0, selfInductance2: 9e-6 })).toThrow(InputError);
+    expect(() => couplingCoefficient({ mutualInductance: NaN, selfInductance1: 1, selfInductance2: 1 })).toThrow(InputError);
   });
 
   it("of two identical adjacent loops follows from Maxwell's formula", () => {
     const m = loopMutualInductance({ radius1: 0.05, radius2: 0.05, axialDistance: 0.01 });
-    expect(couplingCoefficient(m, 1e-6, 1e-6)).toBeCloseTo(m / 1e-6, 15);
+    expect(couplingCoefficient({ mutualInductance: m, selfInductance1: 1e-6, selfInductance2: 1e-6 })).toBeCloseTo(m / 1e-6, 15);
   });
 });

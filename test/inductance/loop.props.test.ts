@@ -38,7 +38,7 @@ describe("loop properties", () => {
         const z = 2 * rho * (1 + gap); // wires do not overlap
         const l = loopInductance({ loopRadius: a, wireRadius: rho });
         const m = loopMutualInductance({ radius1: a, radius2: a, axialDistance: z });
-        const k = couplingCoefficient(m, l, l);
+        const k = couplingCoefficient({ mutualInductance: m, selfInductance1: l, selfInductance2: l });
         expect(k).toBeGreaterThan(0);
         expect(k).toBeLessThanOrEqual(1);
       }),

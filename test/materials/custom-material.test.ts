@@ -54,7 +54,7 @@ describe("property readers reject a broken material of the caller's own with Inp
     ["thermalConductivityAt", lowCarbonSteel, "thermalConductivityTable.temperatures.1", (m) => thermalConductivityAt(m, 600)],
     ["specificHeatAt", lowCarbonSteel, "temperatureRange.min", (m) => specificHeatAt(m, 600)],
     ["specificEnthalpyChange", lowCarbonSteel, "temperatureRange.min", (m) => specificEnthalpyChange(m, { fromTemperature: 300, toTemperature: 900 })],
-    ["relativePermeabilityAt", lowCarbonSteel, "permeability.transitionWidth", (m) => relativePermeabilityAt(m, { temperature: 300, fieldStrength: 1e4 })],
+    ["relativePermeabilityAt", lowCarbonSteel, "permeability.transitionWidth", (m) => relativePermeabilityAt(m, { temperature: 300, fieldStrengthPeak: 1e4 })],
     ["relativePermeabilityAt", lowCarbonSteel, "curieTemperature", (m) => relativePermeabilityAt(m, { temperature: 300 })],
     ["saturationFluxDensityAt", lowCarbonSteel, "permeability.saturationFluxDensity", (m) => saturationFluxDensityAt(m, 300)],
   ];
@@ -78,6 +78,6 @@ describe("property readers reject a broken material of the caller's own with Inp
     // same numbers as the @examples of each reader
     expect(resistivityAt(copper, 373.15)).toBeCloseTo(2.2662e-8, 12);
     expect(thermalConductivityAt(lowCarbonSteel, 293.15)).toBeGreaterThan(0);
-    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: 293.15, fieldStrength: 1e5 }).toFixed(1)).toBe("16.7");
+    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: 293.15, fieldStrengthPeak: 1e5 }).toFixed(1)).toBe("16.7");
   });
 });

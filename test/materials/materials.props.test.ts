@@ -44,7 +44,7 @@ describe("material property invariants", () => {
           resistivityAt(m, t),
           specificHeatAt(m, t),
           thermalConductivityAt(m, t),
-          relativePermeabilityAt(m, { temperature: t, fieldStrength: h }),
+          relativePermeabilityAt(m, { temperature: t, fieldStrengthPeak: h }),
         ];
         return values.every((v) => Number.isFinite(v) && v > 0);
       }),
@@ -56,7 +56,7 @@ describe("material property invariants", () => {
     fc.assert(
       fc.property(magneticIndex, fc.double({ min: 0, max: 2000, noNaN: true, noDefaultInfinity: true }), logField, (i, dt, h) => {
         const m = (magnetic[i] as ConductiveMaterial);
-        return relativePermeabilityAt(m, { temperature: (m.curieTemperature as number) + dt, fieldStrength: h }) === 1;
+        return relativePermeabilityAt(m, { temperature: (m.curieTemperature as number) + dt, fieldStrengthPeak: h }) === 1;
       }),
       { seed: 1, numRuns: 200 },
     );
@@ -72,9 +72,9 @@ describe("material property invariants", () => {
         const hl = Math.min(h1, h2);
         const hh = Math.max(h1, h2);
         const bound = (m.permeability as PermeabilityModel).initialRelativePermeability;
-        const a = relativePermeabilityAt(m, { temperature: t1, fieldStrength: hl });
-        const b = relativePermeabilityAt(m, { temperature: t1, fieldStrength: hh });
-        const c = relativePermeabilityAt(m, { temperature: t2, fieldStrength: hl });
+        const a = relativePermeabilityAt(m, { temperature: t1, fieldStrengthPeak: hl });
+        const b = relativePermeabilityAt(m, { temperature: t1, fieldStrengthPeak: hh });
+        const c = relativePermeabilityAt(m, { temperature: t2, fieldStrengthPeak: hl });
         return a >= 1 && a <= bound && b <= a && c <= a;
       }),
       { seed: 1, numRuns: 200 },
@@ -84,8 +84,8 @@ describe("material property invariants", () => {
   it("permeability is continuous through the start of the Curie transition", () => {
     for (const m of magnetic) {
       const start = (m.curieTemperature as number) - (m.permeability as PermeabilityModel).transitionWidth;
-      const below = relativePermeabilityAt(m, { temperature: start - 1e-6, fieldStrength: 1e4 });
-      const above = relativePermeabilityAt(m, { temperature: start + 1e-6, fieldStrength: 1e4 });
+      const below = relativePermeabilityAt(m, { temperature: start - 1e-6, fieldStrengthPeak: 1e4 });
+      const above = relativePermeabilityAt(m, { temperature: start + 1e-6, fieldStrengthPeak: 1e4 });
       expect(Math.abs(below - above) / below).toBeLessThan(1e-6);
     }
   });

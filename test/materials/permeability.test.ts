@@ -18,7 +18,7 @@ describe("relativePermeabilityAt", () => {
     for (const c of data.cases) {
       const got = relativePermeabilityAt(sets[c.material as keyof typeof sets], {
         temperature: c.temperature,
-        fieldStrength: c.fieldStrength,
+        fieldStrengthPeak: c.fieldStrength,
       });
       expect(Math.abs(got - c.relativePermeability) / c.relativePermeability).toBeLessThanOrEqual(data.meta.rtol);
     }
@@ -28,36 +28,36 @@ describe("relativePermeabilityAt", () => {
     for (const m of [lowCarbonSteel, mediumCarbonSteel, ferriticStainless]) {
       const tc = m.curieTemperature as number;
       expect(relativePermeabilityAt(m, { temperature: tc })).toBe(1);
-      expect(relativePermeabilityAt(m, { temperature: tc + 0.5, fieldStrength: 10 })).toBe(1);
+      expect(relativePermeabilityAt(m, { temperature: tc + 0.5, fieldStrengthPeak: 10 })).toBe(1);
     }
   });
 
   it("is exactly 1 for non-magnetic materials", () => {
     expect(relativePermeabilityAt(copper, { temperature: 300 })).toBe(1);
-    expect(relativePermeabilityAt(austeniticStainless, { temperature: 300, fieldStrength: 1e4 })).toBe(1);
+    expect(relativePermeabilityAt(austeniticStainless, { temperature: 300, fieldStrengthPeak: 1e4 })).toBe(1);
   });
 
   it("equals the low-field value without a field strength", () => {
     expect(relativePermeabilityAt(lowCarbonSteel, { temperature: 300 })).toBe(1000);
-    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: 300, fieldStrength: 0 })).toBe(1000);
+    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: 300, fieldStrengthPeak: 0 })).toBe(1000);
   });
 
   it("approaches the saturated limit 1 + Bs/(μ0 H) in strong fields (B = μ0(H + Ms), common practice)", () => {
     const h = 1e7;
     const expected = 1 + 2.0 / MU_0 / h;
-    const got = relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(20), fieldStrength: h });
+    const got = relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(20), fieldStrengthPeak: h });
     expect(Math.abs(got - expected) / expected).toBeLessThan(2e-3);
   });
 
   it("prints the documented examples", () => {
     expect(relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(800) })).toBe(1);
-    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(20), fieldStrength: 1e5 }).toFixed(1)).toBe("16.7");
+    expect(relativePermeabilityAt(lowCarbonSteel, { temperature: celsius(20), fieldStrengthPeak: 1e5 }).toFixed(1)).toBe("16.7");
   });
 
   it("throws InputError for bad conditions", () => {
     expect(() => relativePermeabilityAt(lowCarbonSteel, { temperature: 0 })).toThrow(InputError);
-    expect(() => relativePermeabilityAt(lowCarbonSteel, { temperature: 300, fieldStrength: -1 })).toThrow(/fieldStrength/);
-    expect(() => relativePermeabilityAt(lowCarbonSteel, { temperature: 300, fieldStrength: Number.NaN })).toThrow(InputError);
+    expect(() => relativePermeabilityAt(lowCarbonSteel, { temperature: 300, fieldStrengthPeak: -1 })).toThrow(/conditions\.fieldStrengthPeak/);
+    expect(() => relativePermeabilityAt(lowCarbonSteel, { temperature: 300, fieldStrengthPeak: Number.NaN })).toThrow(InputError);
     expect(() => relativePermeabilityAt(lowCarbonSteel, null as never)).toThrow(InputError);
   });
 });

@@ -72,7 +72,7 @@ function opaque<T extends object>(v: T): T {
 
 const SERIES_TANK = opaque(seriesTank({ inductance: 100e-6, capacitance: 1e-6, resistance: 0.5 }));
 const PARALLEL_TANK = opaque(parallelTank({ inductance: 1e-6, capacitance: 2e-6, coilResistance: 0.01 }));
-const FLUX = opaque(triangularFluxWaveform({ peakFluxDensity: 0.1, frequency: 100e3, dutyCycle: 0.3 }));
+const FLUX = opaque(triangularFluxWaveform({ fluxDensityPeak: 0.1, frequency: 100e3, dutyCycle: 0.3 }));
 const R1 = opaque(resistorElement(1));
 const R2 = opaque(resistorElement(2));
 const R50 = opaque(resistorElement(50));
@@ -332,10 +332,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   // ---------------------------------------------------------------- materials
   specificEnthalpyChange: { args: () => [lowCarbonSteel, { fromTemperature: celsius(20), toTemperature: celsius(200) }] },
   relativePermeabilityAt: {
-    args: () => [lowCarbonSteel, { temperature: celsius(20), fieldStrength: 1e5 }],
+    args: () => [lowCarbonSteel, { temperature: celsius(20), fieldStrengthPeak: 1e5 }],
     allow: [
-      { paths: ["1.fieldStrength"], kinds: ["undefined"], reason: OPTIONAL },
-      { paths: ["1.fieldStrength"], kinds: ["zero"], reason: "zero field is in the domain (initial permeability)" },
+      { paths: ["1.fieldStrengthPeak"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["1.fieldStrengthPeak"], kinds: ["zero"], reason: "zero field is in the domain (initial permeability)" },
     ],
   },
   saturationFluxDensityAt: { args: () => [lowCarbonSteel, celsius(20)] },
@@ -357,8 +357,8 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     ],
   },
   couplingCoefficient: {
-    args: () => [2e-6, 4e-6, 9e-6],
-    allow: [{ paths: ["0"], kinds: ["zero", "negative"], reason: "mutual inductance is signed (winding sense); k carries the sign" }],
+    args: () => [{ mutualInductance: 2e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 }],
+    allow: [{ paths: ["0.mutualInductance"], kinds: ["zero", "negative"], reason: "mutual inductance is signed (winding sense); k carries the sign" }],
   },
   loopInductance: {
     args: () => [{ loopRadius: 0.05, wireRadius: 0.001, currentDistribution: "surface" }],
@@ -455,17 +455,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   fitSteinmetz: {
     args: () => [
       [25e3, 50e3, 100e3, 200e3].flatMap((frequency) =>
-        [0.05, 0.1, 0.2].map((peakFluxDensity) => ({
+        [0.05, 0.1, 0.2].map((fluxDensityPeak) => ({
           frequency,
-          peakFluxDensity,
-          lossDensity: 2.5 * frequency ** 1.45 * peakFluxDensity ** 2.55,
+          fluxDensityPeak,
+          lossDensity: 2.5 * frequency ** 1.45 * fluxDensityPeak ** 2.55,
         })),
       ),
     ],
   },
   igseCoefficient: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55 }] },
   igseLoss: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55, period: FLUX.period, flux: FLUX }] },
-  steinmetzLoss: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55, frequency: 100e3, peakFluxDensity: 0.1 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "no flux, no loss: B ≥ 0" }] },
+  steinmetzLoss: { args: () => [{ k: 2.5, alpha: 1.45, beta: 2.55, frequency: 100e3, fluxDensityPeak: 0.1 }], allow: [{ paths: ["0.fluxDensityPeak"], kinds: ["zero"], reason: "no flux, no loss: B ≥ 0" }] },
   steinmetzTemperatureFactor: {
     args: () => [{ referenceTemperature: 373.15, linear: 2e-3, quadratic: 1e-4 }, 363.15],
     allow: [{ paths: ["0.linear", "0.quadratic"], kinds: ["zero", "negative"], reason: SIGNED + " (fitted coefficients)" }],
@@ -485,9 +485,9 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       { paths: ["0.time.0"], kinds: ["zero"], reason: "the time axis may start at 0; only its increase is required" },
     ],
   },
-  sinusoidalFluxWaveform: { args: () => [{ peakFluxDensity: 0.1, frequency: 50e3, samples: 8 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }, { paths: ["0.samples"], kinds: ["undefined"], reason: OPTIONAL }] },
-  triangularFluxWaveform: { args: () => [{ peakFluxDensity: 0.2, frequency: 20e3, dutyCycle: 0.25 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }, { paths: ["0.dutyCycle"], kinds: ["undefined"], reason: OPTIONAL }] },
-  trapezoidalFluxWaveform: { args: () => [{ peakFluxDensity: 0.1, frequency: 1e3, dutyCycle: 0.5 }], allow: [{ paths: ["0.peakFluxDensity"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }] },
+  sinusoidalFluxWaveform: { args: () => [{ fluxDensityPeak: 0.1, frequency: 50e3, samples: 8 }], allow: [{ paths: ["0.fluxDensityPeak"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }, { paths: ["0.samples"], kinds: ["undefined"], reason: OPTIONAL }] },
+  triangularFluxWaveform: { args: () => [{ fluxDensityPeak: 0.2, frequency: 20e3, dutyCycle: 0.25 }], allow: [{ paths: ["0.fluxDensityPeak"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }, { paths: ["0.dutyCycle"], kinds: ["undefined"], reason: OPTIONAL }] },
+  trapezoidalFluxWaveform: { args: () => [{ fluxDensityPeak: 0.1, frequency: 1e3, dutyCycle: 0.5 }], allow: [{ paths: ["0.fluxDensityPeak"], kinds: ["zero"], reason: "peak flux density ≥ 0 (zero flux: no loss)" }] },
 
   // ---------------------------------------------------------------- tank
   capacitorBank: {

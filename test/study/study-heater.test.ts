@@ -41,7 +41,7 @@ describe("studyHeater: every number equals the module-level call it came from", 
     const op = s.operating;
     expect(s.coil.inductance).toBe(solenoidInductance({ radius: coil.radius, length: coil.length, turns: coil.turns, wireDiameter: tube.outerDiameter }));
     expect(op.partResistivity).toBe(resistivityAt(d.part.material, d.part.startTemperature));
-    expect(op.partRelativePermeability).toBe(relativePermeabilityAt(d.part.material, { temperature: d.part.startTemperature, fieldStrength: op.surfaceFieldStrengthPeak }));
+    expect(op.partRelativePermeability).toBe(relativePermeabilityAt(d.part.material, { temperature: d.part.startTemperature, fieldStrengthPeak: op.surfaceFieldStrengthPeak }));
     // the inverter: exactly the module's numbers for the reported inputs
     const inv = currentFedParallelInverter({
       supplyVoltage: op.inverterInputVoltage,
@@ -182,9 +182,10 @@ describe("studyHeater: the frequency shift of a ferromagnetic part and its rever
     const curie = s.part.curieTemperature ?? 0;
     const below = scan.frequencies.filter((_, i) => (scan.temperatures[i] ?? 0) < curie - 100);
     const above = scan.frequencies.filter((_, i) => (scan.temperatures[i] ?? 0) > curie);
+    expect(below.length).toBeGreaterThan(0);
+    expect(above.length).toBeGreaterThan(0);
     for (const f of below) expect(f).toBeLessThan(s.emptyCoil.frequency);
     for (const f of above) expect(f).toBeGreaterThan(s.emptyCoil.frequency);
-    expect(above.length).toBeGreaterThan(0);
   });
 
   it("a non-magnetic part (austenitic stainless) always raises the frequency", () => {

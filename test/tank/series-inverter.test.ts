@@ -88,8 +88,20 @@ describe("frequencyForPower", () => {
       expect(op.power / power).toBeCloseTo(1, 9);
       expect(op.zeroVoltageSwitching || Math.abs(op.phase) < 1e-9).toBe(true);
     }
-    const f = frequencyForPower({ ...tank, power: 3478.608603739001 });
-    expect(f).toBeCloseTo(38e3, 3); // the seriesInverter example's operating point
+  });
+
+  it("matches the first-harmonic frequency solved by hand on the inductive side", () => {
+    // Hand derivation (first harmonic, Erickson & Maksimović ch. 19): the half bridge's square
+    // wave 0…Vdc has a fundamental of peak V1 = 2·Vdc/π; P = V1²·R / (2·|Z|²) with
+    // |Z|² = R² + X², so X = √(V1²·R/(2P) − R²); on the inductive side ωL − 1/(ωC) = X, whose
+    // positive root is ω = (X + √(X² + 4L/C)) / (2L).
+    const { supplyVoltage: vdc, inductance: l, capacitance: c, resistance: r } = tank;
+    for (const power of [500, 2000, 4000]) {
+      const v1 = (2 * vdc) / Math.PI;
+      const x = Math.sqrt((v1 * v1 * r) / (2 * power) - r * r);
+      const omega = (x + Math.sqrt(x * x + (4 * l) / c)) / (2 * l);
+      expect(Math.abs(frequencyForPower({ ...tank, power }) / (omega / (2 * Math.PI)) - 1)).toBeLessThan(1e-9);
+    }
   });
 
   it("returns the resonant frequency at the maximum power and throws InputError above it", () => {

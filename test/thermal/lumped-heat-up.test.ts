@@ -1,5 +1,5 @@
 import { describe, it, expect } from "vitest";
-import { lumpedHeatUp, InputError, lowCarbonSteel, specificHeatAt, STEFAN_BOLTZMANN, celsius } from "../../src/index.js";
+import { lumpedHeatUp, InputError, lowCarbonSteel, STEFAN_BOLTZMANN, celsius } from "../../src/index.js";
 
 const base = {
   mass: 0.05,
@@ -123,8 +123,15 @@ describe("lumpedHeatUp: energy balance ∫P dt = stored + convection + radiation
     expect(r.reachable).toBe(true);
     const e = r.energy;
     expect(Math.abs(e.imbalance)).toBeLessThan(1e-6 * e.input);
-    // Stored energy is the quadrature of c(T), independent of the ODE: check one slice by hand.
-    expect(specificHeatAt(lowCarbonSteel, celsius(735))).toBeGreaterThan(4000);
+    // Stored energy by hand: m ∫ c(θ) dθ from 20 °C to 900 °C over the three pieces of
+    // EN 1993-1-2:2005 eq. (3.2), integrated in closed form:
+    //   20…600 °C:  [425θ + 0.773θ²/2 − 1.69e-3·θ³/3 + 2.22e-6·θ⁴/4]
+    //   600…735 °C: 666·135 + 13002·ln(138/3)
+    //   735…900 °C: 545·165 + 17820·ln(169/4)
+    const cubic = (t: number): number => 425 * t + (0.773 * t ** 2) / 2 - (1.69e-3 * t ** 3) / 3 + (2.22e-6 * t ** 4) / 4;
+    const byHand = cubic(600) - cubic(20) + 666 * 135 + 13002 * Math.log(138 / 3) + 545 * 165 + 17820 * Math.log(169 / 4);
+    expect(r.finalTemperature).toBeCloseTo(celsius(900), 9);
+    expect(Math.abs(e.stored / byHand - 1)).toBeLessThan(1e-9);
   });
 
   it("power falling to zero above the Curie point stops the rise there (temperature-dependent power)", () => {

@@ -36,7 +36,7 @@ describe("workpieceCouplingAtTemperature", () => {
 
   it("passes the field strength to the permeability model (saturation lowers mu_r)", () => {
     const lo = workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), part: { kind: "bar", radius: 0.02, coil }, frequency: 1e4 });
-    const hi = workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), part: { kind: "bar", radius: 0.02, coil }, frequency: 1e4, fieldStrength: 1e5 });
+    const hi = workpieceCouplingAtTemperature({ material: lowCarbonSteel, temperature: celsius(20), part: { kind: "bar", radius: 0.02, coil }, frequency: 1e4, fieldStrengthPeak: 1e5 });
     expect(hi.relativePermeability).toBeLessThan(lo.relativePermeability);
   });
 
@@ -55,7 +55,7 @@ describe("workpieceCouplingAtTemperature", () => {
     expect(() => workpieceCouplingAtTemperature({ ...ok, part: { kind: "cone", coil } as never })).toThrow(InputError);
     expect(() => workpieceCouplingAtTemperature({ ...ok, part: { ...ok.part, radius: 0.05 } })).toThrow(InputError);
     expect(() => workpieceCouplingAtTemperature({ ...ok, frequency: 0 })).toThrow(InputError);
-    expect(() => workpieceCouplingAtTemperature({ ...ok, fieldStrength: -5 })).toThrow(InputError);
+    expect(() => workpieceCouplingAtTemperature({ ...ok, fieldStrengthPeak: -5 })).toThrow(InputError);
     expect(() => workpieceCouplingAtTemperature({ ...ok, material: null as never })).toThrow(InputError);
   });
 });
