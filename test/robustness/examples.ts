@@ -1032,4 +1032,39 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     quantityStrings: true,
     badString: "12 parsecs",
   },
+
+  // ---------------------------------------------------------------- cores
+  effectiveCoreParameters: { args: () => [{ sections: [{ length: 0.04, area: 1e-4 }, { length: 0.02, area: 2e-4 }] }] },
+  toroidCore: { args: () => [{ innerDiameter: 0.02, outerDiameter: 0.04, height: 0.01 }] },
+  eCore: { args: () => [{ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }] },
+  planarECore: {
+    args: () => [{ width: 0.043, height: 0.0095, depth: 0.028, windowWidth: 0.035, centreLegWidth: 0.0081, windowHeight: 0.0054, mate: "plate", plateThickness: 0.0041 }],
+    variants: [() => [{ width: 0.043, height: 0.0095, depth: 0.028, windowWidth: 0.035, centreLegWidth: 0.0081, windowHeight: 0.0054 }]],
+    allow: [{ paths: ["0.mate", "0.plateThickness"], kinds: ["undefined"], reason: OPTIONAL + " (mate E; plate as thick as the yoke)" }],
+  },
+  roundLegECore: { args: () => [{ width: 0.039, height: 0.02, depth: 0.0128, windowWidth: 0.03, centreLegWidth: 0.0128, windowHeight: 0.0142 }] },
+  potCore: {
+    args: () => [{ outerDiameter: 0.022, windowOuterDiameter: 0.018, postDiameter: 0.0092, postHoleDiameter: 0.002, height: 0.0058, windowHeight: 0.0036 }],
+    allow: [
+      { paths: ["0.postHoleDiameter"], kinds: ["undefined", "zero"], reason: OPTIONAL + " (solid post; a hole of 0 is a solid post)" },
+    ],
+  },
+  uCore: { args: () => [{ width: 0.06, height: 0.03, depth: 0.016, legWidth: 0.016, windowHeight: 0.02 }] },
+  naturalConvectionCoefficient: {
+    args: () => [{ height: 0.71, surfaceTemperature: 505, ambientTemperature: 296, air: { kinematicViscosity: 26.41e-6, thermalConductivity: 0.0338, thermalDiffusivity: 38.3e-6 } }],
+    allow: [{ paths: ["0.air"], kinds: ["undefined"], reason: OPTIONAL + " (dry air table)" }],
+  },
+  componentTemperatureRise: {
+    args: () => [{ power: 2, ambientTemperature: 313.15, surfaceArea: 0.006, height: 0.03, emissivity: 0.9 }],
+    variants: [() => [{ power: 2, ambientTemperature: 313.15, thermalResistance: 20 }]],
+    allow: [
+      { paths: ["0.power", "0.emissivity"], kinds: ["zero"], reason: "no loss and a non-radiating surface are in the domain (≥ 0)" },
+      { paths: ["0.emissivity", "0.air"], kinds: ["undefined"], reason: OPTIONAL + " (emissivity 0.9, dry air table)" },
+    ],
+    nonFinite: {
+      convectionCoefficient: "null when a thermal resistance replaces the surface model (documented)",
+      convectedPower: "null when a thermal resistance replaces the surface model (documented)",
+      radiatedPower: "null when a thermal resistance replaces the surface model (documented)",
+    },
+  },
 };
