@@ -5,5 +5,27 @@
  *
  * @module transformers
  */
-export * from "./leakage.js";
-export * from "./winding-resistance.js";
+export { leakageInductance } from "./leakage.js";
+export type { LeakageLayer, LeakageInductanceOptions } from "./leakage.js";
+export { transformerWindingResistance } from "./winding-resistance.js";
+export type {
+  RoundLayerConductor,
+  FoilLayerConductor,
+  LitzLayerConductor,
+  LayerConductor,
+  WindingLayer,
+  TransformerWindingResistanceOptions,
+  WindingResistance,
+  LayerResistance,
+  TransformerWindingResistance,
+} from "./winding-resistance.js";
+export * from "./turns.js";
+export { transformerDesign } from "./design.js";
+export type {
+  TransformerCore,
+  TransformerDesignWinding,
+  TransformerDesignOptions,
+  TransformerCandidate,
+  TransformerLosses,
+  TransformerDesign,
+} from "./design.js";

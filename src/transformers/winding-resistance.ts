@@ -124,8 +124,8 @@ export interface TransformerWindingResistance {
   readonly validity: readonly ValidityNote[];
 }
 
-/** Checked layer. */
-interface Layer {
+/** Checked layer. @internal */
+export interface Layer {
   winding: 0 | 1;
   turns: number;
   kind: (typeof KINDS)[number];
@@ -145,8 +145,15 @@ function checkLayer(where: string, i: number, layer: Record<string, unknown>, w:
   requireKnownKeys(where, `layers[${i}]`, layer, LAYER_FIELDS);
   const turns = requireInteger(where, `layers[${i}].turns`, layer.turns, 1);
   const length = layer.meanTurnLength === undefined ? defaultLength : requirePositive(where, `layers[${i}].meanTurnLength`, layer.meanTurnLength, "m");
-  const path = `layers[${i}].conductor`;
-  const c = requireObject(where, path, layer.conductor);
+  return checkConductor(where, `layers[${i}].conductor`, `layers[${i}].turns`, layer.conductor, turns, w, breadth, length);
+}
+
+/**
+ * Checks a layer conductor and returns the checked layer.
+ * @internal
+ */
+export function checkConductor(where: string, path: string, turnsPath: string, conductor: unknown, turns: number, w: 0 | 1, breadth: number, length: number): Layer {
+  const c = requireObject(where, path, conductor);
   const kind = requireOneOf(where, `${path}.kind`, c.kind, KINDS);
   if (kind === "round") {
     requireKnownKeys(where, path, c, ROUND_FIELDS);
@@ -154,13 +161,13 @@ function checkLayer(where: string, i: number, layer: Record<string, unknown>, w:
     const outer = c.outerDiameter === undefined ? d : requirePositive(where, `${path}.outerDiameter`, c.outerDiameter, "m");
     if (outer < d) throw new InputError(where, `${path}.outerDiameter`, outer, "m", `≥ diameter = ${d}`);
     if (turns * outer > breadth * (1 + 1e-12)) {
-      throw new InputError(where, `layers[${i}].turns`, turns, "", `turns · outerDiameter ≤ windowBreadth (at most ${Math.floor(breadth / outer)})`);
+      throw new InputError(where, turnsPath, turns, "", `turns · outerDiameter ≤ windowBreadth (at most ${Math.floor(breadth / outer)})`);
     }
     return { winding: w, turns, kind, build: outer, copperArea: (Math.PI * d * d) / 4, layFactor: 1, meanTurnLength: length, size: d, extra: 0, bundleTerm: 0 };
   }
   if (kind === "foil") {
     requireKnownKeys(where, path, c, FOIL_FIELDS);
-    if (turns !== 1) throw new InputError(where, `layers[${i}].turns`, turns, "", "1 for a foil layer (one turn per layer)");
+    if (turns !== 1) throw new InputError(where, turnsPath, turns, "", "1 for a foil layer (one turn per layer)");
     const h = requirePositive(where, `${path}.thickness`, c.thickness, "m");
     const width = c.width === undefined ? breadth : requirePositive(where, `${path}.width`, c.width, "m");
     if (width > breadth * (1 + 1e-12)) throw new InputError(where, `${path}.width`, width, "m", `≤ windowBreadth = ${breadth}`);
@@ -177,7 +184,7 @@ function checkLayer(where: string, i: number, layer: Record<string, unknown>, w:
     throw e;
   }
   if (turns * g.outerDiameter > breadth * (1 + 1e-12)) {
-    throw new InputError(where, `layers[${i}].turns`, turns, "", `turns · litz outer diameter ≤ windowBreadth (at most ${Math.floor(breadth / g.outerDiameter)})`);
+    throw new InputError(where, turnsPath, turns, "", `turns · litz outer diameter ≤ windowBreadth (at most ${Math.floor(breadth / g.outerDiameter)})`);
   }
   const n = construction.strands;
   const ds = construction.strandDiameter;
@@ -269,7 +276,11 @@ export function transformerWindingResistance(options: TransformerWindingResistan
   return stackResistance({ frequency, resistivity, breadth }, layers, spacers, windingTurns);
 }
 
-function stackResistance(
+/**
+ * Resistance and leakage of a checked stack.
+ * @internal
+ */
+export function stackResistance(
   o: { frequency: number; resistivity: number; breadth: number },
   layers: readonly Layer[],
   spacers: Float64Array,
