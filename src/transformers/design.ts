@@ -17,7 +17,7 @@ import {
   voltageCaution,
 } from "../core/index.js";
 import { componentTemperatureRise } from "../cores/index.js";
-import type { ComponentTemperatureRise } from "../cores/index.js";
+import type { AirProperties, ComponentTemperatureRise } from "../cores/index.js";
 import { igseLoss, steinmetzLoss, triangularFluxWaveform } from "../coreloss/index.js";
 import type { SteinmetzCoefficients } from "../materials/index.js";
 import { checkConductor, stackResistance } from "./winding-resistance.js";
@@ -55,6 +55,33 @@ export interface TransformerCore {
   readonly meanTurnLength: number;
 }
 
+/** Whole turns of the two windings. @category Transformers */
+export interface TransformerTurnCounts {
+  /** Primary turns $N_0$, an integer ≥ 1. */
+  readonly primary: number;
+  /** Secondary turns $N_1$, an integer ≥ 1. */
+  readonly secondary: number;
+}
+
+/**
+ * How the heat of {@link transformerDesign} leaves: a thermal resistance alone, or a surface for
+ * natural convection and radiation (as {@link componentTemperatureRise}).
+ *
+ * @category Transformers
+ */
+export interface TransformerThermal {
+  /** Thermal resistance surface-to-ambient [K/W], finite and > 0 (instead of the surface model). */
+  readonly thermalResistance?: number;
+  /** Outer surface exchanging heat [m²], finite and > 0 (e.g. a core shape's `surfaceArea`). */
+  readonly surfaceArea?: number;
+  /** Height of the component as it stands (convection length) [m], finite and > 0; with `surfaceArea`. */
+  readonly height?: number;
+  /** Total hemispherical emissivity [-], 0 … 1 (default as {@link componentTemperatureRise}). */
+  readonly emissivity?: number;
+  /** Air property override, as {@link componentTemperatureRise}. */
+  readonly air?: AirProperties;
+}
+
 /** One winding of {@link transformerDesign}. @category Transformers */
 export interface TransformerDesignWinding {
   /** The conductor of every layer of this winding (round wire, foil or litz). */
@@ -76,7 +103,7 @@ export interface TransformerDesignOptions {
   /** Wanted turns ratio $N_0/N_1$, finite and > 0; the secondary turns are whole and the primary's the nearest whole number. */
   readonly turnsRatio: number;
   /** Fixed turns (integers ≥ 1) instead of the search; the flux limit then only raises a caution. */
-  readonly turns?: { readonly primary: number; readonly secondary: number };
+  readonly turns?: TransformerTurnCounts;
   /** The core. */
   readonly core: TransformerCore;
   /** Steinmetz coefficients of the core material, $p_v = k f^\alpha \hat B^\beta$ [W/m³]. */
@@ -105,18 +132,14 @@ export interface TransformerDesignOptions {
    * How the heat leaves: `{ thermalResistance }` [K/W], or `{ surfaceArea, height, emissivity?, air? }`
    * for natural convection and radiation, as {@link componentTemperatureRise}.
    */
-  readonly thermal: {
-    readonly thermalResistance?: number;
-    readonly surfaceArea?: number;
-    readonly height?: number;
-    readonly emissivity?: number;
-    readonly air?: { readonly kinematicViscosity: number; readonly thermalConductivity: number; readonly thermalDiffusivity: number };
-  };
+  readonly thermal: TransformerThermal;
 }
 
 /** A candidate turn count the search looked at. @category Transformers */
 export interface TransformerCandidate {
+  /** Primary turns tried. */
   readonly primaryTurns: number;
+  /** Secondary turns tried. */
   readonly secondaryTurns: number;
   /** Peak flux density [T]. */
   readonly peakFluxDensity: number;
@@ -128,16 +151,20 @@ export interface TransformerCandidate {
 
 /** Losses by place [W]. @category Transformers */
 export interface TransformerLosses {
+  /** Core loss [W]. */
   readonly core: number;
+  /** Primary winding loss $I_0^2 R_{\mathrm{ac},0}$ [W]. */
   readonly primaryCopper: number;
+  /** Secondary winding loss $I_1^2 R_{\mathrm{ac},1}$ [W]. */
   readonly secondaryCopper: number;
+  /** Sum [W]. */
   readonly total: number;
 }
 
 /** Result of {@link transformerDesign}. @category Transformers */
 export interface TransformerDesign {
   /** Chosen (or given) whole turns. */
-  readonly turns: { readonly primary: number; readonly secondary: number };
+  readonly turns: TransformerTurnCounts;
   /** Peak flux density [T]. */
   readonly peakFluxDensity: number;
   /** Losses by place [W]. */

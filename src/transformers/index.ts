@@ -23,6 +23,8 @@ export * from "./turns.js";
 export { transformerDesign } from "./design.js";
 export type {
   TransformerCore,
+  TransformerTurnCounts,
+  TransformerThermal,
   TransformerDesignWinding,
   TransformerDesignOptions,
   TransformerCandidate,

@@ -26,6 +26,7 @@ const EQUIVALENT_FOIL_FACTOR = Math.pow(Math.PI / 4, 0.75);
 
 /** A layer of round wire: `turns` wires side by side across the window breadth. @category Transformers */
 export interface RoundLayerConductor {
+  /** Round wire. */
   readonly kind: "round";
   /** Diameter of the bare copper [m], finite and > 0. */
   readonly diameter: number;
@@ -35,6 +36,7 @@ export interface RoundLayerConductor {
 
 /** A layer of foil: one turn of foil per layer. @category Transformers */
 export interface FoilLayerConductor {
+  /** Foil (or strip). */
   readonly kind: "foil";
   /** Foil thickness [m], finite and > 0: the layer's build across the window. */
   readonly thickness: number;
@@ -44,6 +46,7 @@ export interface FoilLayerConductor {
 
 /** A layer of litz wire: `turns` bundles side by side across the window breadth. @category Transformers */
 export interface LitzLayerConductor {
+  /** Litz wire. */
   readonly kind: "litz";
   /** The litz construction (see {@link litzGeometry}); its outer diameter is the layer's build. */
   readonly construction: LitzConstruction;

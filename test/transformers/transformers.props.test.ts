@@ -55,9 +55,9 @@ describe("leakageInductance properties", () => {
 });
 
 const conductorArb: fc.Arbitrary<LayerConductor> = fc.oneof(
-  logUniform(2e-5, 1e-3).map((d) => ({ kind: "round", diameter: d })),
-  logUniform(1e-5, 1e-3).map((h) => ({ kind: "foil", thickness: h })),
-  fc.tuple(fc.integer({ min: 1, max: 200 }), logUniform(3e-5, 2e-4)).map(([n, d]) => ({ kind: "litz", construction: { strands: n, strandDiameter: d } })),
+  logUniform(2e-5, 1e-3).map((d) => ({ kind: "round" as const, diameter: d })),
+  logUniform(1e-5, 1e-3).map((h) => ({ kind: "foil" as const, thickness: h })),
+  fc.tuple(fc.integer({ min: 1, max: 200 }), logUniform(3e-5, 2e-4)).map(([n, d]) => ({ kind: "litz" as const, construction: { strands: n, strandDiameter: d } })),
 );
 
 const windingStackArb = fc
