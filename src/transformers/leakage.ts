@@ -123,7 +123,7 @@ export function checkLeakageStack(
  * @returns leakage inductance referred to the primary [H]
  * @throws {@link InputError} on bad input
  * @see P. L. Dowell, "Effects of eddy currents in transformer windings", Proc. IEE 113(8), 1387–1394 (1966) (the 1-D MMF picture of interleaved windings).
- * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §13.4.3 (MMF diagrams, interleaving).
+ * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §13.4.3 (MMF diagrams, interleaving; section from memory).
  * @example
  * ```ts
  * import { leakageInductance } from "fluxwright";

@@ -55,7 +55,7 @@ export interface TransformerTurns {
  * @param options - {@link TransformerTurnsOptions}: λ [V·s], $\hat B_\mathrm{max}$ [T], $A_e$ [m²]
  * @returns {@link TransformerTurns}: whole turns, exact turns, peak flux density [T]
  * @throws {@link InputError} on bad input
- * @see Faraday's law; the EMF equation $V_\mathrm{rms} = 4.44 f N \hat B A_e$ (common practice, e.g. Erickson & Maksimović 2001, §15.2).
+ * @see Faraday's law; the EMF equation $V_\mathrm{rms} = 4.44 f N \hat B A_e$ (common practice, e.g. Erickson & Maksimović 2001, §15.2, section from memory).
  * @example
  * ```ts
  * import { transformerTurns } from "fluxwright";
@@ -162,8 +162,8 @@ function checkSteinmetz(where: string, value: unknown): SteinmetzCoefficients {
  * @param options - {@link TransformerFluxOptimumOptions}
  * @returns {@link TransformerFluxOptimum}: flux density [T], turns, losses [W]
  * @throws {@link InputError} on bad input
- * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §15.1–15.2 (copper loss with optimal window allocation and the loss-minimising flux density).
- * @see W. G. Hurley, W. H. Wölfle, Transformers and Inductors for Power Electronics (Wiley, 2013), ch. 4 (the same optimum, core loss = (2/β) × copper loss).
+ * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §15.1–15.2 (copper loss with optimal window allocation and the loss-minimising flux density; sections from memory).
+ * @see W. G. Hurley, W. H. Wölfle, Transformers and Inductors for Power Electronics (Wiley, 2013), ch. 4 (the same optimum, core loss = (2/β) × copper loss; chapter from memory).
  * @example
  * ```ts
  * import { transformerFluxOptimum } from "fluxwright";

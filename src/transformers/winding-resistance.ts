@@ -240,7 +240,7 @@ export function checkConductor(where: string, path: string, turnsPath: string, c
  * @returns {@link TransformerWindingResistance}
  * @throws {@link InputError} on bad input
  * @see P. L. Dowell, "Effects of eddy currents in transformer windings", Proc. IEE 113(8), 1387–1394 (1966) (layer solution, porosity).
- * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §13.4.3, eq. (13.47) (the per-layer loss with surface MMFs; interleaving).
+ * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §13.4.3 (the per-layer loss with surface MMFs; interleaving; section and equation recalled from memory, not checked).
  * @see J. A. Ferreira, "Improved analytical modeling of conductive losses in magnetic components", IEEE Trans. Power Electron. 9(1), 127–131 (1994) (skin and proximity terms).
  * @example
  * ```ts
