@@ -7,6 +7,10 @@
  */
 import {
   barInLongCoil,
+  eCore,
+  gappedInductor,
+  inductorDesign,
+  inventedExampleFerrite,
   coilOverPlate,
   dowellFactor,
   ellipticE,
@@ -73,6 +77,21 @@ const plates = Array.from({ length: 64 }, () => ({
   frequency: logUniform(1e3, 1e5),
 }));
 
+const gappedCores = Array.from({ length: N }, (_, i) => ({
+  core: {
+    effectiveArea: logUniform(2e-5, 4e-4), effectivePathLength: logUniform(0.03, 0.15), relativePermeability: 1000 + 2000 * random(),
+    legShape: "rectangular" as const, legWidth: 0.012 + 0.008 * random(), legDepth: 0.012 + 0.008 * random(), windowHeight: 0.02 + 0.02 * random(),
+  },
+  turns: turns[i]!, gapLength: logUniform(5e-5, 1.5e-3), fringing: "muhlethaler" as const, current: 3,
+}));
+const designCore = eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 });
+const designs = Array.from({ length: 64 }, () => ({
+  inductance: logUniform(50e-6, 150e-6), frequency: logUniform(50e3, 200e3), core: designCore, material: inventedExampleFerrite,
+  current: { kind: "triangular" as const, average: 2 + 4 * random(), ripple: 0.5 + 1.5 * random(), dutyCycle: 0.2 + 0.6 * random() },
+  conductor: { kind: "litz" as const, strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+  ambientTemperature: 313.15,
+}));
+
 const cases: Case[] = [
   // The target counts evaluations of K and E together: one pair is two evaluations.
   { name: "ellipticK + ellipticE (evaluations, 2 per pair)", target: 30e6, unit: "per second", n: 4e6, evaluationsPerCall: 2, run: (i) => ellipticK(m[i & mask]!) + ellipticE(m[i & mask]!) },
@@ -84,6 +103,8 @@ const cases: Case[] = [
   { name: "roundWireAcRatio", target: 3e6, unit: "per second", n: 2e6, run: (i) => roundWireAcRatio(wires[i & mask]!) },
   { name: "igseLoss (4 segments)", target: 2e6, unit: "per second", n: 2e6, run: (i) => igseLoss(waveforms[i & 1023]!) },
   { name: "barInLongCoil", target: 1e6, unit: "per second", n: 1e6, run: (i) => barInLongCoil(bars[i & mask]!).reflectedResistance },
+  { name: "gappedInductor (Mühlethaler fringing)", target: 10e6, unit: "per second", n: 4e6, run: (i) => gappedInductor(gappedCores[i & mask]!).inductance },
+  { name: "inductorDesign (E core, litz, triangle)", target: 1, unit: "ms per call", n: 500, run: (i) => inductorDesign(designs[i & 63]!).totalLoss },
   { name: "coilOverPlate (1e-6 relative)", target: 1, unit: "ms per call", n: 200, run: (i) => coilOverPlate(plates[i & 63]!).resistanceChange },
 ];
 

@@ -16,3 +16,9 @@ export type {
   ComponentTemperatureRiseOptions,
   ComponentTemperatureRise,
 } from "./temperature-rise.js";
+export { gappedInductor, gapLengthForInductance } from "./gapped-inductor.js";
+export type { GappedCore, GappedInductorOptions, GappedInductor, GapLengthForInductanceOptions } from "./gapped-inductor.js";
+export { inductorDesign } from "./inductor-design.js";
+export type { InductorDesignOptions, InductorDesign, TriangularCurrent, SampledCurrent, InductorConductor } from "./inductor-design.js";
+export { inductorCoreSearch } from "./core-search.js";
+export type { CoreCandidate, InductorCoreSearchOptions, FeasibleCore, RejectedCore, InductorCoreSearch } from "./core-search.js";

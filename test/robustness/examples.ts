@@ -7,6 +7,8 @@
 import {
   austeniticStainless,
   celsius,
+  eCore,
+  inventedExampleFerrite,
   complex,
   copper,
   InputError,
@@ -1053,6 +1055,74 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   naturalConvectionCoefficient: {
     args: () => [{ height: 0.71, surfaceTemperature: 505, ambientTemperature: 296, air: { kinematicViscosity: 26.41e-6, thermalConductivity: 0.0338, thermalDiffusivity: 38.3e-6 } }],
     allow: [{ paths: ["0.air"], kinds: ["undefined"], reason: OPTIONAL + " (dry air table)" }],
+  },
+  gappedInductor: {
+    args: () => [{ core: { effectiveArea: 9.7e-5, effectivePathLength: 0.0686, relativePermeability: 2000, gapArea: 9.6e-5, legShape: "round", legWidth: 0.0111, windowHeight: 0.0222, saturationFluxDensity: 0.35 }, turns: 30, gapLength: 0.8e-3, fringing: "muhlethaler", current: 4 }],
+    variants: [
+      () => [{ core: { effectiveArea: 1e-4, effectivePathLength: 0.08, relativePermeability: 2500, legShape: "rectangular", legWidth: 0.01, legDepth: 0.01, windowHeight: 0.02 }, turns: 20, gapLength: 1e-3, fringing: "muhlethaler" }],
+      () => [{ core: { effectiveArea: 1e-4, effectivePathLength: 0.08, relativePermeability: 2500, windowHeight: 0.02 }, turns: 20, gapLength: 1e-3, fringing: "mclyman" }],
+      () => [{ core: { effectiveArea: 1e-4, effectivePathLength: 0.08, relativePermeability: 2500 }, turns: 20, gapLength: 1e-3, fringing: "none" }],
+    ],
+    allow: [
+      { paths: ["0.gapLength", "0.current"], kinds: ["zero"], reason: "no gap and no current are in the domain (≥ 0)" },
+      { paths: ["0.current", "0.core.gapArea", "0.core.legShape", "0.core.saturationFluxDensity", "0.core.legDepth", "0.core.windowHeight", "0.core.legWidth"], kinds: ["undefined"], reason: OPTIONAL + " (no flux or saturation current; gap area = A_e; rectangular leg); leg and window only needed by the fringing models" },
+    ],
+    nonFinite: {
+      peakFluxDensity: "null without a current (documented)",
+      saturationCurrent: "null without a saturation flux density (documented)",
+    },
+  },
+  gapLengthForInductance: {
+    args: () => [{ core: { effectiveArea: 9.7e-5, effectivePathLength: 0.0686, relativePermeability: 2000, legShape: "round", legWidth: 0.0111, windowHeight: 0.0222 }, turns: 30, inductance: 150e-6, fringing: "muhlethaler" }],
+    allow: [
+      { paths: ["0.core.legShape"], kinds: ["undefined"], reason: OPTIONAL + " (rectangular: then legDepth is needed and its absence throws)" },
+    ],
+  },
+  inductorDesign: {
+    args: () => [{
+      inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15, maxFluxDensityRatio: 0.7,
+      core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+      current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+      conductor: { kind: "litz", strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+    }],
+    variants: [
+      () => [{
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15,
+        core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+        current: { kind: "samples", time: [0, 4e-6, 1e-5], current: [4, 6, 4] },
+        conductor: { kind: "round", diameter: 1e-3 },
+      }],
+      () => [{
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15,
+        core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+        current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+        conductor: { kind: "foil", thickness: 0.1e-3 },
+      }],
+    ],
+    skip: { paths: ["0.material*"], reason: "a material record passed through (checked by the materials suite)" },
+    allow: [
+      { paths: ["0.current.average"], kinds: ["zero", "negative"], reason: SIGNED + " (the DC level of the current)" },
+      { paths: ["0.current.ripple", "0.windingClearance", "0.conductor.insulationThickness"], kinds: ["zero"], reason: "no ripple, a winding on the leg and no interlayer insulation are in the domain (≥ 0)" },
+      { paths: ["0.maxFluxDensityRatio", "0.turns", "0.fringing", "0.maxWindowFill", "0.windingClearance", "0.emissivity", "0.maxSurfaceTemperature", "0.conductor.outerDiameter", "0.conductor.resistivity", "0.conductor.insulationThickness"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.emissivity"], kinds: ["zero"], reason: "a non-radiating surface is in the domain (0 … 1)" },
+      { paths: ["0.current.current.0", "0.current.time.1", "0.current.current.1"], kinds: ["zero", "negative"], reason: SIGNED + " (a sample of the current, or an interior time keeping the order)" },
+      { paths: ["0.current.time.0"], kinds: ["zero"], reason: "the first time is 0 by definition" },
+      { paths: ["0.core.c1", "0.core.c2", "0.core.minimumArea"], kinds: ["undefined"], reason: OPTIONAL + " (core constants not used; narrowest section = A_e)" },
+    ],
+  },
+  inductorCoreSearch: {
+    args: () => [{
+      specification: {
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15, maxFluxDensityRatio: 0.7,
+        current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+        conductor: { kind: "litz", strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+      },
+      cores: [{ name: "large", core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }) }],
+    }],
+    skip: { paths: ["0.specification*", "0.cores.0.core*"], reason: "each candidate goes through inductorDesign, checked there; a bad specification rejects the candidate with the reason (documented)" },
+    allow: [
+      { paths: ["0.rankBy", "0.maxTemperatureRise"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
   },
   componentTemperatureRise: {
     args: () => [{ power: 2, ambientTemperature: 313.15, surfaceArea: 0.006, height: 0.03, emissivity: 0.9 }],
