@@ -40,8 +40,10 @@ const CHECKED_GAP_TO_WINDOW = 0.23;
 const NO_NOTES: readonly ValidityNote[] = Object.freeze([]);
 
 /**
- * The magnetic description of a gapped core. A {@link CoreShape} carries every field except
- * `relativePermeability` and `saturationFluxDensity` (spread it and add those).
+ * The magnetic description of a gapped core. From a {@link CoreShape} `s`: `{ effectiveArea:
+ * s.effectiveArea, effectivePathLength: s.effectivePathLength, gapArea: s.legArea, legShape:
+ * s.legShape, legWidth: s.legWidth, legDepth: s.legDepth, windowHeight: s.windowHeight }` plus the
+ * material's `relativePermeability` (and `saturationFluxDensity`).
  *
  * @category Cores
  */

@@ -366,6 +366,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   },
   loopMutualInductance: {
     args: () => [{ radius1: 0.1, radius2: 0.1, axialDistance: 0.1 }],
+    variants: [() => [{ radius1: 0.1, radius2: 0.08, axialDistance: 0.05, lateralOffset: 0.04, tilt: 0.3 }]],
+    allow: [
+      { paths: ["0.lateralOffset"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (0 is the coaxial case)" },
+      { paths: ["0.axialDistance"], kinds: ["zero"], reason: "coplanar filaments of different radii (or offset) are valid; only coinciding ones throw" },
+      { paths: ["0.tilt"], kinds: ["zero", "negative", "undefined"], reason: "optional angle in [−π, π]; 0 and negative tilts are valid" },
+    ],
   },
   multilayerCoilInductance: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
   multilayerCoilInductanceWheeler: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
@@ -544,6 +550,33 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: 60e-6, resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 5 }],
     variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
     allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
+  },
+  seriesSeriesSplitting: {
+    args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, secondaryResistance: 0.08, loadResistance: 5, resonantFrequency: 100e3 }],
+    allow: [{ paths: ["0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (a lossless secondary coil)" }],
+  },
+  linkFrequencySweep: {
+    args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 100e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }, [90e3, 100e3, 115e3]],
+    allow: [{ paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" }],
+  },
+  padMutualInductance: {
+    args: () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.04 }],
+    variants: [
+      () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, backingPlate: { material: "ferrite", gap: 0.005, relativePermeability: 1000 } }],
+      () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.05, turns: 1 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.02, backingPlate: { material: "aluminium", gap: 0.01 } }],
+    ],
+    allow: [
+      { paths: ["0.lateralOffset"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (0 is the coaxial case)" },
+      { paths: ["0.backingPlate", "0.backingPlate.relativePermeability"], kinds: ["undefined"], reason: "optional: no plate; ferrite µr defaults to 2000" },
+    ],
+  },
+  llcDesign: {
+    args: () => [{ inputVoltage: { min: 340, nominal: 390, max: 410 }, outputVoltage: 19.5, outputPower: 65, resonantFrequency: 100e3, bridge: "half" }],
+    variants: [() => [{ inputVoltage: { min: 40, nominal: 48, max: 56 }, outputVoltage: 12, outputPower: 300, resonantFrequency: 200e3, bridge: "full", inductanceRatio: 4, gainMargin: 1.15, lightLoadFraction: 0.3, capacitorSeries: "E12", rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 300e-12 }]],
+    allow: [
+      { paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" },
+      { paths: ["0.inductanceRatio", "0.gainMargin", "0.lightLoadFraction"], kinds: ["undefined"], reason: "optional with documented defaults (6, 1.1, 0.2)" },
+    ],
   },
   seriesResonantOperatingPoint: {
     args: () => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 20e-6, resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6 }],
