@@ -4,6 +4,7 @@ import { defineConfig } from "tsup";
 export const modules = [
   "core", "units", "special", "materials", "inductance", "conductors", "coreloss",
   "tank", "workpiece", "thermal", "field", "safety", "converters", "links", "study", "report", "cores",
+  "transformers",
 ] as const;
 
 const entry: Record<string, string> = { index: "src/index.ts" };

@@ -19,5 +19,6 @@ export * from "./field/index.js";
 export * from "./cores/index.js";
 export * from "./safety/index.js";
 export * from "./converters/index.js";
+export * from "./transformers/index.js";
 export * from "./links/index.js";
 export * from "./study/index.js";

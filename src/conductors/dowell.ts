@@ -90,7 +90,20 @@ export function dowellFactor(options: DowellFactorOptions): number {
  * @internal
  */
 export function dowellFactorKernel(delta: number, layers: number): number {
-  const proximityWeight = (2 * (layers * layers - 1)) / 3;
+  return dowellLayerKernel(delta, (2 * (layers * layers - 1)) / 3);
+}
+
+/**
+ * Dowell's layer factor with a general proximity weight, $\Delta[\varsigma_1 + w\,\varsigma_2]$
+ * (Δ > 0, w finite, unchecked). With $w = 2(m^2-1)/3$ it is {@link dowellFactorKernel}; one
+ * layer whose surface magnetomotive forces are a and c (signed) has $w = 2ac/(c-a)^2$.
+ *
+ * @param delta - Δ = h/δ
+ * @param proximityWeight - w
+ * @returns the factor
+ * @internal
+ */
+export function dowellLayerKernel(delta: number, proximityWeight: number): number {
   if (delta <= 1) {
     const t = delta * delta * delta * delta;
     const p1 = 1 + t * (0.13333333333333333 + t * (0.0007054673721340388 + t * (6.577784355562133e-07 + t * (1.8425166262078804e-10 + t * (2.0523716248486557e-14 + t * (1.0816187746237974e-18))))));
