@@ -19,7 +19,7 @@ import {
 import type { Caution, ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { specificHeatAt, thermalConductivityAt } from "../materials/index.js";
-import { STEFAN_BOLTZMANN } from "../units/index.js";
+import { STEFAN_BOLTZMANN, ZERO_CELSIUS } from "../units/index.js";
 import { gaussLegendreRule, gaussLegendrePanel, solveTridiagonal } from "../special/internal.js";
 import { checkSurface, effectiveCoefficient } from "./surface-loss.js";
 
@@ -697,7 +697,7 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
         code: "part-above-melting",
         severity: "danger",
         message:
-          `The part reaches ${(highest - 273.15).toFixed(0)} °C, at or above the melting temperature of ${material.name} (${(material.meltingTemperature - 273.15).toFixed(0)} °C): molten metal can drip, spatter and burn (the model has no phase change, so the temperatures above melting are not physical). ` +
+          `The part reaches ${(highest - ZERO_CELSIUS).toFixed(0)} °C, at or above the melting temperature of ${material.name} (${(material.meltingTemperature - ZERO_CELSIUS).toFixed(0)} °C): molten metal can drip, spatter and burn (the model has no phase change, so the temperatures above melting are not physical). ` +
           `Switch off earlier (stopAt, a temperature-controlled or timed cut-off) or lower the power. ${DEFER_TO_CODES}`,
         value: highest,
         limit: material.meltingTemperature,
