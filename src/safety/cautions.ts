@@ -6,6 +6,7 @@
  */
 import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { Caution } from "../core/index.js";
+import { bySeverity } from "../core/caution.js";
 import { voltageCaution } from "../core/extra-low-voltage.js";
 import { ZERO_CELSIUS, formatQuantity } from "../units/index.js";
 // The extra-low-voltage caution is shared with the tank module, so it lives in core; this
@@ -430,8 +431,7 @@ export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
       ),
     );
   }
-  const order = { danger: 0, warning: 1, info: 2 } as const;
-  return cautions.filter((c): c is Caution => c !== null).sort((a, b) => order[a.severity] - order[b.severity]);
+  return cautions.filter((c): c is Caution => c !== null).sort(bySeverity);
 }
 
 /** An optional text option: its value, or the fallback when absent; InputError when not a string. */
