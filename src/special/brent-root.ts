@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys } from "../core/index.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const BRENT_FIELDS: readonly string[] = Object.freeze(["tolerance", "maxIterations"]);
@@ -67,9 +67,7 @@ export function brentRoot(
   if (!(tolerance >= 0 && Number.isFinite(tolerance))) {
     throw new InputError(where, "options.tolerance", tolerance, "", "a finite number ≥ 0");
   }
-  if (!(Number.isInteger(maxIterations) && maxIterations >= 1)) {
-    throw new InputError(where, "options.maxIterations", maxIterations, "", "an integer ≥ 1");
-  }
+  requireInteger(where, "options.maxIterations", maxIterations, 1);
 
   const a = lower;
   const b = upper;
