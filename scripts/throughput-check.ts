@@ -117,7 +117,11 @@ const lines: string[] = [];
 const started = performance.now();
 for (const c of cases) {
   const floor = FLOORS[c.name];
-  if (floor === undefined) throw new Error(`no floor for ${c.name}`);
+  if (floor === undefined) {
+    // a case added to throughput-cases.ts without a floor yet: reported, not checked
+    lines.push(`${c.name.padEnd(48)} ratio ${measure(c).toPrecision(3).padStart(9)}   no floor yet (not checked)`);
+    continue;
+  }
   // A case below its floor is measured again (up to three attempts in all): V8's tiering under
   // a loaded machine now and then leaves one attempt far slower (seen: 1 case in 10 per run,
   // up to 25×); a real slowdown stays below the floor in every attempt.

@@ -8,9 +8,11 @@
 import { cases } from "./throughput-cases.js";
 
 const markdown = process.argv.includes("--markdown");
+const only = process.argv.find((a) => a.startsWith("--only="))?.slice("--only=".length);
 const rows: string[] = [];
 let failed = false;
 for (const c of cases) {
+  if (only !== undefined && !c.name.startsWith(only)) continue;
   let best = Infinity;
   for (let round = 0; round < 5; round++) {
     let sink = 0;
