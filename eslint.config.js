@@ -15,7 +15,7 @@ const LAYERS = [
   ["materials"],
   ["inductance", "conductors", "coreloss"],
   ["tank", "workpiece", "thermal", "safety"],
-  ["converters", "links", "field"],
+  ["converters", "links", "field", "cores"],
   ["study"],
   ["report"],
   ["cli"],
@@ -33,7 +33,7 @@ const layering = LAYERS.flatMap((layer, level) =>
             patterns: [
               {
                 regex: `^(\\.\\./)+(${forbidden.join("|")})/`,
-                message: `src/${folder} may import only from a lower layer (DEVELOPERS.md: core, units, special ← materials ← inductance, conductors, coreloss ← tank, workpiece, thermal, safety ← converters, links, field ← study ← report ← cli).`,
+                message: `src/${folder} may import only from a lower layer (DEVELOPERS.md: core, units, special ← materials ← inductance, conductors, coreloss ← tank, workpiece, thermal, safety ← converters, links, field, cores ← study ← report ← cli).`,
               },
             ],
           },
