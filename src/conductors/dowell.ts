@@ -74,9 +74,7 @@ export function dowellFactor(options: DowellFactorOptions): number {
   if (typeof delta !== "number" || !(delta > 0) || delta === Infinity) {
     requirePositive("dowellFactor", "penetrationRatio", delta, "");
   }
-  if (typeof layers !== "number" || !Number.isInteger(layers) || layers < 1) {
-    requireInteger("dowellFactor", "layers", layers, 1);
-  }
+  requireInteger("dowellFactor", "layers", layers, 1);
   return dowellFactorKernel(delta, layers);
 }
 

@@ -59,3 +59,14 @@ export interface ValidityNote {
  * @category Cautions
  */
 export const DEFER_TO_CODES = "Consult local codes and licensed practice.";
+
+/** Rank of each severity, most serious first (internal: sorting cautions). */
+const SEVERITY_RANK: Readonly<Record<CautionSeverity, number>> = Object.freeze({ danger: 0, warning: 1, info: 2 });
+
+/**
+ * Comparator that orders cautions danger before warning before info (stable within a
+ * severity). The one severity ranking of the library; not part of the public API.
+ */
+export function bySeverity(a: Caution, b: Caution): number {
+  return SEVERITY_RANK[a.severity] - SEVERITY_RANK[b.severity];
+}

@@ -7,7 +7,7 @@
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { SteinmetzTemperatureTerm } from "../materials/index.js";
-import { leastSquaresQr } from "./numeric.js";
+import { leastSquaresQr } from "../special/internal.js";
 import { givenName, renamedOption } from "../core/renamed.js";
 import type { WithPeakFluxDensity } from "./waveforms.js";
 

@@ -6,7 +6,7 @@
  */
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { SteinmetzCoefficients } from "../materials/index.js";
-import { logGamma } from "./numeric.js";
+import { logGamma } from "../special/internal.js";
 import { checkSteinmetzCoefficients } from "./steinmetz.js";
 import type { FluxPoint, FluxSamples } from "./waveform-types.js";
 

@@ -8,7 +8,11 @@ import { InputError, requireFinite, requireInteger, requireNonNegative, requireO
   requireKnownKeys, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { maxwellOverMu0 } from "./kernels.js";
-import { integrate, integrateAbsolute, integrateSingularAtStart } from "./quadrature.js";
+import {
+  gaussLegendreAdaptive as integrate,
+  gaussLegendreAdaptiveAbsolute as integrateAbsolute,
+  gaussLegendreAdaptiveSingularAtStart as integrateSingularAtStart,
+} from "../special/internal.js";
 
 /** Accepted fields of each coil kind (misspelt ones are rejected, not ignored). */
 const COIL_FIELDS: Readonly<Record<"loop" | "solenoid" | "multilayer" | "spiral", readonly string[]>> = Object.freeze({

@@ -21,7 +21,7 @@
  * into the caller (each piece stays under V8's 460-byte bytecode inlining limit, and a public
  * function with all its pieces under the 920-byte cumulative limit): a call that is not inlined
  * costs more than the arithmetic, as its double result has to be boxed. The coefficients come
- * from test/fixtures/inductance/kernels-coefficients.py (mpmath). The public functions are
+ * from scripts/precompute/inductance-kernel-coefficients.py (mpmath). The public functions are
  * cross-checked against mpmath fixtures and against `ellipticK`/`ellipticE` in the tests.
  *
  * @packageDocumentation

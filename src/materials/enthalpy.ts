@@ -4,6 +4,7 @@
  *
  * @packageDocumentation
  */
+import { ZERO_CELSIUS } from "../units/index.js";
 import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { checkSpecificHeatModel } from "./check-material.js";
 import { specificHeatAt } from "./specific-heat.js";
@@ -77,7 +78,7 @@ export function specificEnthalpyChange(material: ConductiveMaterial, interval: E
   const model = material.specificHeat;
   const breaks: number[] = [lo, hi, min, max];
   if (model.kind === "table") breaks.push(...model.table.temperatures);
-  else for (const c of [20, 600, 735, 900]) breaks.push(c + 273.15);
+  else for (const c of [20, 600, 735, 900]) breaks.push(c + ZERO_CELSIUS);
   const points = breaks.filter((t) => t >= lo && t <= hi).sort((a, b) => a - b);
   let sum = 0;
   for (let i = 1; i < points.length; i++) {
@@ -88,9 +89,9 @@ export function specificEnthalpyChange(material: ConductiveMaterial, interval: E
       // linear (or constant) between breakpoints: the trapezoid is exact
       sum += 0.5 * (specificHeatAt(material, a) + specificHeatAt(material, b)) * (b - a);
     } else {
-      const mid = 0.5 * (a + b) - 273.15;
-      const thetaA = a - 273.15;
-      const thetaB = b - 273.15;
+      const mid = 0.5 * (a + b) - ZERO_CELSIUS;
+      const thetaA = a - ZERO_CELSIUS;
+      const thetaB = b - ZERO_CELSIUS;
       if (mid < 20) sum += specificHeatAt(material, a) * (b - a);
       else sum += en1993Antiderivative(thetaB, mid) - en1993Antiderivative(thetaA, mid);
     }

@@ -3,6 +3,7 @@
  *
  * @packageDocumentation
  */
+import { ZERO_CELSIUS } from "../units/index.js";
 import type { TemperatureTable } from "./types.js";
 
 /**
@@ -46,7 +47,7 @@ export function tableFromCelsius(
   source: string,
 ): TemperatureTable {
   return Object.freeze({
-    temperatures: Object.freeze(celsiusTemperatures.map((c) => c + 273.15)),
+    temperatures: Object.freeze(celsiusTemperatures.map((c) => c + ZERO_CELSIUS)),
     values: Object.freeze(values.map((v) => v / divisor)),
     source,
   });

@@ -4,6 +4,7 @@
  *
  * @packageDocumentation
  */
+import { ZERO_CELSIUS } from "../units/index.js";
 import { requireObject, requirePositive } from "../core/index.js";
 import { checkSpecificHeatModel } from "./check-material.js";
 import { interpolateTemperatureTable } from "./interpolate.js";
@@ -71,5 +72,5 @@ export function specificHeatAt(material: ConductiveMaterial, temperature: number
   const t = temperature < range.min ? range.min : temperature > range.max ? range.max : temperature;
   const model = material.specificHeat;
   if (model.kind === "table") return interpolateTemperatureTable(model.table, t);
-  return carbonSteelSpecificHeatEn1993(t - 273.15);
+  return carbonSteelSpecificHeatEn1993(t - ZERO_CELSIUS);
 }

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { ANNEALED_COPPER_RESISTIVITY } from "../units/index.js";
+import { ANNEALED_COPPER_RESISTIVITY, ZERO_CELSIUS } from "../units/index.js";
 import { interpolateTemperatureTable, tableFromCelsius } from "./interpolate.js";
 import { carbonSteelSpecificHeatEn1993 } from "./specific-heat.js";
 import type { ConductiveMaterial, PermeabilityModel, TemperatureTable } from "./types.js";
@@ -410,7 +410,7 @@ export const titaniumAlloy: ConductiveMaterial = Object.freeze({
   thermalConductivityTable: titaniumConductivity,
   emissivity: Object.freeze({ min: 0.2, max: 0.8, typical: 0.5, source: "typical, from memory" }),
   meltingTemperature: 1877,
-  temperatureRange: Object.freeze({ min: 293.15, max: 1273.15 }),
+  temperatureRange: Object.freeze({ min: ZERO_CELSIUS + 20, max: ZERO_CELSIUS + 1000 }),
   magnetic: false,
   sources: Object.freeze([
     `resistivity: ${titaniumResistivity.source}`,

@@ -4,7 +4,7 @@
  * what to change.
  */
 import type { InputError } from "../core/index.js";
-import { formatQuantity } from "../units/index.js";
+import { ZERO_CELSIUS, formatQuantity } from "../units/index.js";
 
 /** The units an inner message may end its `expected` part with. */
 const UNITS = ["Ω", "W", "V", "A", "Hz", "F", "H", "m", "K", "s", "J"];
@@ -25,7 +25,7 @@ interface Limit {
 function formatNumber(text: string, unit: string): string {
   const v = Number(text);
   if (!Number.isFinite(v)) return text;
-  if (unit === "K") return `${Number((v - 273.15).toPrecision(4))} °C`;
+  if (unit === "K") return `${Number((v - ZERO_CELSIUS).toPrecision(4))} °C`;
   return unit === "" ? String(Number(v.toPrecision(4))) : formatQuantity(v, unit, { digits: 4 });
 }
 

@@ -6,8 +6,9 @@
  */
 import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { Caution } from "../core/index.js";
+import { bySeverity } from "../core/caution.js";
 import { voltageCaution } from "../core/extra-low-voltage.js";
-import { formatQuantity } from "../units/index.js";
+import { ZERO_CELSIUS, formatQuantity } from "../units/index.js";
 // The extra-low-voltage caution is shared with the tank module, so it lives in core; this
 // module re-exports it as part of the safety inventory.
 export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "../core/extra-low-voltage.js";
@@ -141,17 +142,17 @@ export function contactBurnThreshold(contactTime: number): number {
   const t = requirePositive("contactBurnThreshold", "contactTime", contactTime, "s");
   const first = BURN_THRESHOLDS[0]!;
   const last = BURN_THRESHOLDS[BURN_THRESHOLDS.length - 1]!;
-  if (t <= first[0]) return first[1] + 273.15;
-  if (t >= last[0]) return last[1] + 273.15;
+  if (t <= first[0]) return first[1] + ZERO_CELSIUS;
+  if (t >= last[0]) return last[1] + ZERO_CELSIUS;
   for (let i = 1; i < BURN_THRESHOLDS.length; i++) {
     const [t1, c1] = BURN_THRESHOLDS[i]!;
     if (t <= t1) {
       const [t0, c0] = BURN_THRESHOLDS[i - 1]!;
       const w = Math.log(t / t0) / Math.log(t1 / t0);
-      return c0 + w * (c1 - c0) + 273.15;
+      return c0 + w * (c1 - c0) + ZERO_CELSIUS;
     }
   }
-  return last[1] + 273.15;
+  return last[1] + ZERO_CELSIUS;
 }
 
 /**
@@ -197,12 +198,12 @@ export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOpti
     options.contactTime === undefined ? 1 : requirePositive(where, "contactTime", options.contactTime, "s");
   const location = optionalText(where, "location", options.location, "part");
   const brief = contactBurnThreshold(1);
-  const celsiusText = `${round(temperature - 273.15)} °C`;
+  const celsiusText = `${round(temperature - ZERO_CELSIUS)} °C`;
   if (temperature > brief) {
     return {
       code: "hot-surface-burn",
       severity: "danger",
-      message: `The ${location} reaches ${celsiusText}, above the ${round(brief - 273.15)} °C at which a one-second touch of bare metal burns the skin. Guard it, mark it hot, and handle it with tools or heat-resistant gloves until it has cooled. ${DEFER_TO_CODES}`,
+      message: `The ${location} reaches ${celsiusText}, above the ${round(brief - ZERO_CELSIUS)} °C at which a one-second touch of bare metal burns the skin. Guard it, mark it hot, and handle it with tools or heat-resistant gloves until it has cooled. ${DEFER_TO_CODES}`,
       value: temperature,
       limit: brief,
       unit: "K",
@@ -214,7 +215,7 @@ export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOpti
     return {
       code: "hot-surface-contact",
       severity: "warning",
-      message: `The ${location} reaches ${celsiusText}, above the ${round(threshold - 273.15)} °C at which ${round(contactTime)} s of contact with bare metal burns the skin. Keep contact short or guard the surface. ${DEFER_TO_CODES}`,
+      message: `The ${location} reaches ${celsiusText}, above the ${round(threshold - ZERO_CELSIUS)} °C at which ${round(contactTime)} s of contact with bare metal burns the skin. Keep contact short or guard the surface. ${DEFER_TO_CODES}`,
       value: temperature,
       limit: threshold,
       unit: "K",
@@ -430,8 +431,7 @@ export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
       ),
     );
   }
-  const order = { danger: 0, warning: 1, info: 2 } as const;
-  return cautions.filter((c): c is Caution => c !== null).sort((a, b) => order[a.severity] - order[b.severity]);
+  return cautions.filter((c): c is Caution => c !== null).sort(bySeverity);
 }
 
 /** An optional text option: its value, or the fallback when absent; InputError when not a string. */

@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys } from "../core/index.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const BRENT_FIELDS: readonly string[] = Object.freeze(["tolerance", "maxIterations"]);
@@ -67,14 +67,12 @@ export function brentRoot(
   if (!(tolerance >= 0 && Number.isFinite(tolerance))) {
     throw new InputError(where, "options.tolerance", tolerance, "", "a finite number ≥ 0");
   }
-  if (!(Number.isInteger(maxIterations) && maxIterations >= 1)) {
-    throw new InputError(where, "options.maxIterations", maxIterations, "", "an integer ≥ 1");
-  }
+  requireInteger(where, "options.maxIterations", maxIterations, 1);
 
-  let a = lower;
-  let b = upper;
-  let fa = f(a);
-  let fb = f(b);
+  const a = lower;
+  const b = upper;
+  const fa = f(a);
+  const fb = f(b);
   if (Number.isNaN(fa)) throw new InputError(where, "f(lower)", fa, "", "a number (not NaN)");
   if (Number.isNaN(fb)) throw new InputError(where, "f(upper)", fb, "", "a number (not NaN)");
   if (fa === 0) return a;
@@ -88,6 +86,47 @@ export function brentRoot(
       "a bracket where f changes sign",
     );
   }
+  const root = brentBracketed(f, a, b, fa, fb, tolerance, maxIterations, false);
+  if (Number.isNaN(root)) {
+    if (brentNaNAt === null) throw new InputError(where, "options.maxIterations", maxIterations, "", "large enough to converge");
+    throw new InputError(where, `f(${brentNaNAt})`, NaN, "", "a number (not NaN)");
+  }
+  return root;
+}
+
+/** Where the last {@link brentBracketed} call met a NaN value of f (null: it ran out of iterations). */
+let brentNaNAt: number | null = null;
+
+/**
+ * Brent's iteration on a bracket [a, b] whose end values fa, fb (neither zero) have opposite
+ * signs; allocation-free. Returns the root estimate b, or with `sameSideAsB` the end of the final
+ * bracket (within the tolerance) on the side where f has the sign of the initial fb: the point
+ * where a crossing from a's side to b's side has happened. Returns NaN when f gives NaN or the
+ * iterations run out (for the caller to report). Used by {@link brentRoot} and by the event
+ * location of `solveOde`.
+ *
+ * @param f - the function
+ * @param a - one end of the bracket
+ * @param b - the other end
+ * @param fa - f(a)
+ * @param fb - f(b)
+ * @param tolerance - absolute tolerance on x, ≥ 0
+ * @param maxIterations - iteration cap
+ * @param sameSideAsB - return the final bracket's end on b's side instead of the best estimate
+ * @returns the root (see above) or NaN
+ */
+export function brentBracketed(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  fa: number,
+  fb: number,
+  tolerance: number,
+  maxIterations: number,
+  sameSideAsB: boolean,
+): number {
+  brentNaNAt = null;
+  const positiveSide = fb > 0;
   const eps = Number.EPSILON;
   let c = a;
   let fc = fa;
@@ -110,7 +149,7 @@ export function brentRoot(
     }
     const tol = 2 * eps * Math.abs(b) + 0.5 * tolerance;
     const m = 0.5 * (c - b);
-    if (Math.abs(m) <= tol || fb === 0) return b;
+    if (Math.abs(m) <= tol || fb === 0) return !sameSideAsB || fb === 0 || fb > 0 === positiveSide ? b : c;
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
       // Interpolation: secant when only two distinct points, else inverse quadratic.
       let p: number;
@@ -142,7 +181,11 @@ export function brentRoot(
     fa = fb;
     b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
     fb = f(b);
-    if (Number.isNaN(fb)) throw new InputError(where, `f(${b})`, fb, "", "a number (not NaN)");
+    if (Number.isNaN(fb)) {
+      brentNaNAt = b;
+      return NaN;
+    }
   }
-  throw new InputError(where, "options.maxIterations", maxIterations, "", "large enough to converge");
+  if (!sameSideAsB) return NaN;
+  return fb > 0 === positiveSide ? b : c;
 }

@@ -78,5 +78,6 @@ export {
 export type { KelvinFunctions } from "./kelvin.js";
 export * from "./ode.js";
 export { solveDense } from "./dense-solve.js";
+export { logSpacedFrequencies } from "./log-spaced.js";
 export { factorComplexSymmetric, latticeNestedDissection } from "./sparse-ldl.js";
 export type { ComplexSparseMatrix, ComplexSymmetricFactor, LatticeNestedDissectionOptions } from "./sparse-ldl.js";

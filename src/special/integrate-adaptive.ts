@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys } from "../core/index.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const ADAPTIVE_FIELDS: readonly string[] = Object.freeze(["relativeTolerance", "absoluteTolerance", "maxSubintervals"]);
@@ -171,9 +171,7 @@ export function integrateAdaptive(
   if (!Number.isFinite(b)) throw new InputError(where, "b", b, "", "a finite number");
   const { rel, abs } = readTolerances(where, options);
   const maxSubintervals = options.maxSubintervals ?? 500;
-  if (!(Number.isInteger(maxSubintervals) && maxSubintervals >= 1)) {
-    throw new InputError(where, "options.maxSubintervals", maxSubintervals, "", "an integer ≥ 1");
-  }
+  requireInteger(where, "options.maxSubintervals", maxSubintervals, 1);
   return integrateGk(f, a, b, rel, abs, maxSubintervals);
 }
 

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys } from "../core/index.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const INFINITY_FIELDS: readonly string[] = Object.freeze(["relativeTolerance", "absoluteTolerance", "intervalLength", "maxIntervals", "maxSubintervals"]);
@@ -122,12 +122,8 @@ export function integrateToInfinity(
   if (!(intervalLength > 0 && Number.isFinite(intervalLength))) {
     throw new InputError(where, "options.intervalLength", intervalLength, "", "a finite number > 0");
   }
-  if (!(Number.isInteger(maxIntervals) && maxIntervals >= 4)) {
-    throw new InputError(where, "options.maxIntervals", maxIntervals, "", "an integer ≥ 4");
-  }
-  if (!(Number.isInteger(maxSubintervals) && maxSubintervals >= 1)) {
-    throw new InputError(where, "options.maxSubintervals", maxSubintervals, "", "an integer ≥ 1");
-  }
+  requireInteger(where, "options.maxIntervals", maxIntervals, 4);
+  requireInteger(where, "options.maxSubintervals", maxSubintervals, 1);
 
   const sums: number[] = [];
   let first = 0; // start of the current ε window (reset when the interval length changes)

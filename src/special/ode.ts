@@ -7,6 +7,7 @@
  * @packageDocumentation
  */
 import { InputError, requireFinite, requirePositive, requireInteger, requireKnownKeys } from "../core/index.js";
+import { brentBracketed } from "./brent-root.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const ODE_FIELDS: readonly string[] = Object.freeze(["start", "end", "relativeTolerance", "absoluteTolerance", "initialStep", "maxStep", "maxSteps", "recordSteps", "outputTimes", "dense", "event", "eventDirection", "eventTolerance"]);
@@ -504,7 +505,10 @@ export function solveOde(
         };
         const thetaTolerance =
           eventTolerance > 0 ? eventTolerance / h : (4 * Number.EPSILON * Math.max(Math.abs(t), Math.abs(tNew))) / h;
-        const theta = gNew === 0 ? 1 : bracketedRoot(g, 0, 1, gOld, gNew, Math.max(thetaTolerance, 1e-15));
+        // Brent's method, returning the bracket end past the crossing so that the event has happened
+        // (a NaN of the event function ends the search at the step's end).
+        const located = gNew === 0 ? 1 : brentBracketed(g, 0, 1, gOld, gNew, Math.max(thetaTolerance, 1e-15), 200, true);
+        const theta = Number.isNaN(located) ? 1 : located;
         eventTime = theta === 1 ? tNew : t + theta * hs;
         interpolate(theta, scratch);
         if (theta === 1) scratch.set(yNew);
@@ -621,41 +625,4 @@ export function solveOde(
       sample,
     };
   }
-}
-
-/**
- * Root of a continuous function on [a, b] given values of opposite sign (or a zero) at the ends:
- * Illinois-modified regula falsi, with bisection whenever it stalls. Tolerance on x.
- */
-function bracketedRoot(
-  f: (x: number) => number,
-  a: number,
-  b: number,
-  fa: number,
-  fb: number,
-  tolerance: number,
-): number {
-  if (fa === 0) return a;
-  if (fb === 0) return b;
-  let side = 0;
-  for (let iteration = 0; iteration < 200; iteration++) {
-    if (Math.abs(b - a) <= tolerance) break;
-    let x = (a * fb - b * fa) / (fb - fa);
-    if (!(x > Math.min(a, b) && x < Math.max(a, b)) || iteration % 8 === 7) x = 0.5 * (a + b);
-    const fx = f(x);
-    if (fx === 0) return x;
-    if ((fx > 0) === (fb > 0)) {
-      b = x;
-      fb = fx;
-      if (side === 1) fa *= 0.5;
-      side = 1;
-    } else {
-      a = x;
-      fa = fx;
-      if (side === -1) fb *= 0.5;
-      side = -1;
-    }
-  }
-  // Return the end of the bracket on the far side of the crossing, so the event has happened.
-  return b;
 }

@@ -6,7 +6,7 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireInteger } from "../core/index.js";
 
 /**
  * A square sparse matrix in compressed-column form with complex entries; for
@@ -91,7 +91,7 @@ export interface ComplexSymmetricFactor {
 export function factorComplexSymmetric(matrix: ComplexSparseMatrix, ordering?: Int32Array): ComplexSymmetricFactor {
   const where = "factorComplexSymmetric";
   const n = matrix.size;
-  if (!Number.isInteger(n) || n < 1) throw new InputError(where, "matrix.size", n, "", "an integer ≥ 1");
+  requireInteger(where, "matrix.size", n, 1);
   const Ap = matrix.columnStarts;
   const Ai = matrix.rowIndices;
   const Axr = matrix.re;
@@ -332,9 +332,9 @@ export function latticeNestedDissection(options: LatticeNestedDissectionOptions)
   const nx = options.columns;
   const ny = options.rows;
   const step = options.step ?? 1;
-  if (!Number.isInteger(nx) || nx < 1) throw new InputError(where, "columns", nx, "", "an integer ≥ 1");
-  if (!Number.isInteger(ny) || ny < 1) throw new InputError(where, "rows", ny, "", "an integer ≥ 1");
-  if (!Number.isInteger(step) || step < 1) throw new InputError(where, "step", step, "", "an integer ≥ 1");
+  requireInteger(where, "columns", nx, 1);
+  requireInteger(where, "rows", ny, 1);
+  requireInteger(where, "step", step, 1);
   let map = options.unknownOf;
   if (map === undefined) {
     map = new Int32Array(nx * ny);

@@ -22,6 +22,7 @@ import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import { fieldNearCoil } from "../safety/index.js";
 import type { FieldSolenoid } from "../safety/index.js";
 import { integrateAdaptive } from "../special/index.js";
+import { andersonStep } from "../special/internal.js";
 import {
   capacitorSeriesResistance,
   currentFedParallelInverterWithSource,
@@ -656,7 +657,10 @@ export function heaterOperatingPoint(
       if (!(error instanceof InputError)) throw error;
       return null;
     }
-    let previous: { g0: number; g1: number; x0: number; x1: number; fScale: number; hScale: number } | null = null;
+    let previous = false;
+    let previousX = [0, 0];
+    let previousG = [0, 0];
+    const next = [0, 0];
     let iterations = 1;
     for (; iterations < 80; iterations++) {
       const newField = fieldOf(s);
@@ -665,31 +669,22 @@ export function heaterOperatingPoint(
       const nextCore = d.concentrator === null ? 0 : evaluateCoreResistance(s.frequency, s.coilCurrentRms, s.tankVoltagePeak);
       const dc = Math.abs(nextCore - e.coreResistance) / e.tankResistance;
       if (df < 1e-10 && dh < 1e-9 && dc < 1e-11 && iterations > 1) return { e, s, iterations, converged: true };
-      const fScale = frequency;
-      const hScale = Math.max(newField, 1);
-      const g0 = s.frequency / fScale;
-      const g1 = newField / hScale;
-      const r0 = g0 - frequency / fScale;
-      const r1 = g1 - field / hScale;
       let nextFrequency = s.frequency;
       let nextField = newField;
-      if (previous !== null) {
-        const d0 = r0 - (previous.g0 - previous.x0) * (previous.fScale / fScale);
-        const d1 = r1 - (previous.g1 - previous.x1) * (previous.hScale / hScale);
-        const dg0 = g0 - previous.g0 * (previous.fScale / fScale);
-        const dg1 = g1 - previous.g1 * (previous.hScale / hScale);
-        const denominator = d0 * d0 + d1 * d1;
-        if (denominator > 0) {
-          const gamma = (r0 * d0 + r1 * d1) / denominator;
-          const candidateFrequency = (g0 - gamma * dg0) * fScale;
-          const candidateField = (g1 - gamma * dg1) * hScale;
-          if (candidateFrequency > 0.8 * s.frequency && candidateFrequency < 1.25 * s.frequency && candidateField >= 0 && Number.isFinite(candidateField)) {
-            nextFrequency = candidateFrequency;
-            nextField = candidateField;
-          }
+      // Anderson acceleration (depth 1) over (frequency, field), each scaled by its size
+      const x = [frequency, field];
+      const g = [s.frequency, newField];
+      if (previous && andersonStep(2, x, g, previousX, previousG, [frequency, Math.max(newField, 1)], next)) {
+        const candidateFrequency = next[0]!;
+        const candidateField = next[1]!;
+        if (candidateFrequency > 0.8 * s.frequency && candidateFrequency < 1.25 * s.frequency && candidateField >= 0 && Number.isFinite(candidateField)) {
+          nextFrequency = candidateFrequency;
+          nextField = candidateField;
         }
       }
-      previous = { g0, g1, x0: frequency / fScale, x1: field / hScale, fScale, hScale };
+      previousX = x;
+      previousG = g;
+      previous = true;
       coilCurrent = s.coilCurrentRms;
       coilVoltagePeak = s.tankVoltagePeak;
       const good = { frequency, field };
@@ -709,7 +704,7 @@ export function heaterOperatingPoint(
           if (!(error instanceof InputError)) throw error;
           nextFrequency = 0.5 * (nextFrequency + good.frequency);
           nextField = 0.5 * (nextField + good.field);
-          previous = null;
+          previous = false;
         }
       }
       if (!accepted) return null;

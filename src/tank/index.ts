@@ -6,6 +6,8 @@
  * @document ../../docs/tanks.md
  * @module fluxwright/tank
  */
+export * from "./network-types.js";
+export * from "./network-elements.js";
 export * from "./network.js";
 export * from "./series-tank.js";
 export * from "./parallel-tank.js";

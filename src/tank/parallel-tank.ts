@@ -5,7 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
-import type { TankNetwork } from "./network.js";
+import type { TankNetwork } from "./network-types.js";
 import { requireRepresentable, tankNetworkUnchecked } from "./tank-network-internal.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */

@@ -4,7 +4,7 @@
  * @packageDocumentation
  */
 import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
-import type { TankNetwork } from "./network.js";
+import type { TankNetwork } from "./network-types.js";
 import { requireRepresentable, tankNetworkUnchecked } from "./tank-network-internal.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */

@@ -4,7 +4,7 @@
  * @packageDocumentation
  */
 import { InputError } from "../core/index.js";
-import type { TankCapacitor, TankInductor, TankNetwork } from "./network.js";
+import type { TankCapacitor, TankInductor, TankNetwork } from "./network-types.js";
 
 /**
  * Builds the two-terminal network of a series or parallel tank from already-validated values,

@@ -19,8 +19,11 @@ import {
 import type { Caution, ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { specificHeatAt, thermalConductivityAt } from "../materials/index.js";
-import { STEFAN_BOLTZMANN } from "../units/index.js";
+import { STEFAN_BOLTZMANN, ZERO_CELSIUS } from "../units/index.js";
+import { gaussLegendreRule, gaussLegendrePanel, solveTridiagonal } from "../special/internal.js";
 import { checkSurface, effectiveCoefficient } from "./surface-loss.js";
+
+const RULE_8 = gaussLegendreRule(8);
 
 /**
  * Options of {@link radialHeatUp}.
@@ -694,7 +697,7 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
         code: "part-above-melting",
         severity: "danger",
         message:
-          `The part reaches ${(highest - 273.15).toFixed(0)} °C, at or above the melting temperature of ${material.name} (${(material.meltingTemperature - 273.15).toFixed(0)} °C): molten metal can drip, spatter and burn (the model has no phase change, so the temperatures above melting are not physical). ` +
+          `The part reaches ${(highest - ZERO_CELSIUS).toFixed(0)} °C, at or above the melting temperature of ${material.name} (${(material.meltingTemperature - ZERO_CELSIUS).toFixed(0)} °C): molten metal can drip, spatter and burn (the model has no phase change, so the temperatures above melting are not physical). ` +
           `Switch off earlier (stopAt, a temperature-controlled or timed cut-off) or lower the power. ${DEFER_TO_CODES}`,
         value: highest,
         limit: material.meltingTemperature,
@@ -817,42 +820,11 @@ function generationShares(
       // ∫_a^b r e^{β(r−R)} dr = [e^{β(r−R)} (r − 1/β)/β]_a^b
       w = (Math.exp(beta * (b - size)) * (b - 1 / beta) - Math.exp(beta * (a - size)) * (a - 1 / beta)) / beta;
     } else {
-      w = gaussLegendre8((r) => r * Math.exp(beta * (r - size)), a, b);
+      w = gaussLegendrePanel((r) => r * Math.exp(beta * (r - size)), a, b, RULE_8);
     }
     share[i] = w;
     total += w;
   }
   for (let i = 0; i <= n; i++) share[i] = share[i]! / total;
   return share;
-}
-
-const GL_NODES = [0.1834346424956498, 0.525532409916329, 0.7966664774136267, 0.9602898564975363];
-const GL_WEIGHTS = [0.362683783378362, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763];
-
-function gaussLegendre8(f: (x: number) => number, a: number, b: number): number {
-  const c = 0.5 * (a + b);
-  const h = 0.5 * (b - a);
-  let s = 0;
-  for (let i = 0; i < 4; i++) s += GL_WEIGHTS[i]! * (f(c - h * GL_NODES[i]!) + f(c + h * GL_NODES[i]!));
-  return s * h;
-}
-
-/** Thomas algorithm for a tridiagonal system (diagonally dominant here, no pivoting needed). */
-function solveTridiagonal(
-  lower: Float64Array,
-  diag: Float64Array,
-  upper: Float64Array,
-  rhs: Float64Array,
-  out: Float64Array,
-  work: Float64Array,
-  size: number,
-): void {
-  let beta = diag[0]!;
-  out[0] = rhs[0]! / beta;
-  for (let i = 1; i < size; i++) {
-    work[i] = upper[i - 1]! / beta;
-    beta = diag[i]! - lower[i]! * work[i]!;
-    out[i] = (rhs[i]! - lower[i]! * out[i - 1]!) / beta;
-  }
-  for (let i = size - 2; i >= 0; i--) out[i] = out[i]! - work[i + 1]! * out[i + 1]!;
 }

@@ -10,7 +10,8 @@ import { renamedOption } from "../core/renamed.js";
 import type { Complex } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { besselJ0, besselJ1 } from "../special/index.js";
-import { besselJ1MomentOverCube, gaussLegendreRule } from "./kernels.js";
+import { exponentialIntegralE5, gaussLegendreRule } from "../special/internal.js";
+import { besselJ1MomentOverCube } from "./kernels.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const TRUNCATED_FIELDS: readonly string[] = Object.freeze(["domainRadius", "coil", "plate", "frequency"]);
@@ -137,43 +138,6 @@ const AIR_CORE_REACH = 4;
 const RULE = gaussLegendreRule(PANEL_NODES);
 const GL_NODES = RULE.nodes;
 const GL_WEIGHTS = RULE.weights;
-
-/** Exponential integral E_5(x) for x ≥ 0 (≈ 1e-12 absolute; only used for tail corrections). */
-function expIntegral5(x: number): number {
-  if (x === 0) return 0.25;
-  if (x > 700) return 0;
-  let e1: number;
-  if (x <= 1) {
-    let sum = 0;
-    let term = 1;
-    for (let k = 1; k < 40; k++) {
-      term *= -x / k;
-      sum += term / k;
-      if (Math.abs(term) < 1e-18) break;
-    }
-    e1 = -0.5772156649015329 - Math.log(x) - sum;
-  } else {
-    // modified Lentz continued fraction for E1
-    let b = x + 1;
-    let c = 1e300;
-    let d = 1 / b;
-    let h = d;
-    for (let i = 1; i < 200; i++) {
-      const an = -i * i;
-      b += 2;
-      d = 1 / (an * d + b);
-      c = b + an / c;
-      const del = c * d;
-      h *= del;
-      if (Math.abs(del - 1) < 1e-16) break;
-    }
-    e1 = h * Math.exp(-x);
-  }
-  const ex = Math.exp(-x);
-  let en = e1;
-  for (let n = 1; n < 5; n++) en = (ex - x * en) / n;
-  return en;
-}
 
 /** Checked layer list of a plate option (shared with the temperature helper). */
 export function checkPlateLayers(where: string, plate: unknown): PlateLayer[] {
@@ -334,7 +298,7 @@ function airCoreTail(x0: number): number {
   if (x0 < 0.1) {
     return 1 / (4 * x0 * x0) - 1 / (6 * x0) + (DIGAMMA_5 - Math.log(x0)) / 24 + x0 * (1 / 120 + x0 * (-1 / 1440 + x0 / 15120));
   }
-  return (x0 / 3 - 0.25 + expIntegral5(x0)) / x0 ** 4;
+  return (x0 / 3 - 0.25 + exponentialIntegralE5(x0)) / x0 ** 4;
 }
 
 /**
@@ -416,7 +380,7 @@ function doddDeedsIntegrals(coil: CoilAbovePlate, layers: readonly PlateLayer[],
   sumJ += ((r1 + r2) / Math.PI) * h * h * airCoreTail(aAir * h);
   if (aMax < aExp) {
     reflectionInto(aMax, lay, gamma);
-    const tail = c * (expIntegral5(2 * aMax * l1) - 2 * expIntegral5(aMax * (l1 + l2)) + expIntegral5(2 * aMax * l2));
+    const tail = c * (exponentialIntegralE5(2 * aMax * l1) - 2 * exponentialIntegralE5(aMax * (l1 + l2)) + exponentialIntegralE5(2 * aMax * l2));
     sumRe += tail * gamma[0]!;
     sumIm += tail * gamma[1]!;
   }
@@ -698,10 +662,10 @@ function truncatedRegionSums(coil: CoilAbovePlate, lay: LayerArrays, b: number):
   // tails beyond the last eigenvalue, as in coilOverPlate (the spacing π/b is fine there)
   const last = zeros[count - 1]! / b + Math.PI / (2 * b);
   const c = (r1 + r2) / (Math.PI * last ** 4);
-  sumJ += c * (expIntegral5(last * h) - 0.25 + (last * h) / 3);
+  sumJ += c * (exponentialIntegralE5(last * h) - 0.25 + (last * h) / 3);
   if (last < aExp) {
     reflectionInto(last, lay, gamma);
-    const tail = c * (expIntegral5(2 * last * l1) - 2 * expIntegral5(last * (l1 + l2)) + expIntegral5(2 * last * l2));
+    const tail = c * (exponentialIntegralE5(2 * last * l1) - 2 * exponentialIntegralE5(last * (l1 + l2)) + exponentialIntegralE5(2 * last * l2));
     sumRe += tail * gamma[0]!;
     sumIm += tail * gamma[1]!;
   }

@@ -19,7 +19,7 @@ import {
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import type { EncirclingCoil } from "./encircling-coil.js";
-import { gaussLegendreRule } from "./kernels.js";
+import { gaussLegendreRule } from "../special/internal.js";
 
 /**
  * Geometry of {@link prepareEncirclingCoilOverRod}: the coil as in

@@ -18,7 +18,7 @@ import {
   besselK1Scaled,
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
-import { gaussLegendreRule } from "./kernels.js";
+import { gaussLegendreRule } from "../special/internal.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */

@@ -1,47 +1,17 @@
 /**
  * Private numerical kernels of the workpiece module (not exported from the package):
- * Gauss–Legendre rules and the radial coil integral $\int_0^x t J_1(t)\,dt$.
+ * the radial coil integral $\int_0^x t J_1(t)\,dt$.
  *
  * @packageDocumentation
  */
 import { besselJ0, besselJ1 } from "../special/index.js";
+import { gaussLegendreRule } from "../special/internal.js";
 
-/** Nodes and weights of an n-point Gauss–Legendre rule on [-1, 1] (Newton on P_n; ≤ 1e-15). */
-export function gaussLegendreRule(n: number): { nodes: Float64Array; weights: Float64Array } {
-  const nodes = new Float64Array(n);
-  const weights = new Float64Array(n);
-  const m = (n + 1) >> 1;
-  for (let i = 0; i < m; i++) {
-    let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    for (let iter = 0; iter < 100; iter++) {
-      let p0 = 1;
-      let p1 = x;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      const dx = p1 / ((n * (x * p1 - p0)) / (x * x - 1));
-      x -= dx;
-      if (Math.abs(dx) < 1e-16) break;
-    }
-    // recompute derivative at the converged node for the weight
-    let p0 = 1;
-    let p1 = x;
-    for (let k = 2; k <= n; k++) {
-      const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-      p0 = p1;
-      p1 = p2;
-    }
-    const dp = (n * (x * p1 - p0)) / (x * x - 1);
-    const w = 2 / ((1 - x * x) * dp * dp);
-    nodes[i] = -x;
-    nodes[n - 1 - i] = x;
-    weights[i] = w;
-    weights[n - 1 - i] = w;
-  }
-  return { nodes, weights };
-}
+/**
+ * Re-exported from the numerical toolkit for the work-coil files, which import it from here.
+ * New code imports it from `special/internal.ts`.
+ */
+export { gaussLegendreRule };
 
 const STRUVE_RULE = gaussLegendreRule(20);
 

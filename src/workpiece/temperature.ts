@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { givenName, renamedOption } from "../core/renamed.js";
 import type { ConductiveMaterial } from "../materials/index.js";
@@ -239,8 +239,7 @@ function checkCoil(where: string, c: Record<string, unknown>): LongCoil {
   requireKnownKeys(where, "part.coil", c, LONG_COIL_FIELDS);
   const innerRadius = requirePositive(where, "part.coil.innerRadius", c["innerRadius"], "m");
   const length = requirePositive(where, "part.coil.length", c["length"], "m");
-  const turns = c["turns"];
-  if (typeof turns !== "number" || !Number.isInteger(turns) || turns < 1) throw new InputError(where, "part.coil.turns", turns, "", "an integer ≥ 1");
+  const turns = requireInteger(where, "part.coil.turns", c["turns"], 1);
   return { innerRadius, length, turns };
 }
 
@@ -251,7 +250,6 @@ function checkPlateCoil(where: string, c: Record<string, unknown>): CoilAbovePla
   if (!(outerRadius > innerRadius)) throw new InputError(where, "part.coil.outerRadius", outerRadius, "m", `a finite number > part.coil.innerRadius (${innerRadius})`);
   const liftOff = requireNonNegative(where, "part.coil.liftOff", c["liftOff"], "m");
   const length = requirePositive(where, c["length"] === undefined && c["height"] !== undefined ? "part.coil.height" : "part.coil.length", renamedOption(where, "part.coil", c, "length", "height"), "m");
-  const turns = c["turns"];
-  if (typeof turns !== "number" || !Number.isInteger(turns) || turns < 1) throw new InputError(where, "part.coil.turns", turns, "", "an integer ≥ 1");
+  const turns = requireInteger(where, "part.coil.turns", c["turns"], 1);
   return { innerRadius, outerRadius, liftOff, length, turns };
 }

@@ -1,9 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { coaxialCoilMutualInductance, couplingCoefficient, solenoidInductance, spiralCoilInductance } from "../../src/inductance/index.js";
-
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 describe("coaxial coil properties", () => {
   it("M12 = M21 and |k| ≤ 1 for a solenoid and a pancake spiral in any position", () => {

@@ -1,9 +1,8 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { multilayerCoilInductance } from "../../src/inductance/index.js";
+import { logUniform } from "../support/arbitraries.js";
 
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
 // each exact evaluation takes tens of milliseconds: fewer runs than elsewhere keep the suite fast
 const opts = { seed: 1, numRuns: 5 };
 

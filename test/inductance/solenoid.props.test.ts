@@ -1,9 +1,8 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { nagaokaCoefficient, solenoidInductance } from "../../src/inductance/index.js";
+import { logUniform } from "../support/arbitraries.js";
 
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
 const opts = { seed: 1, numRuns: 200 };
 
 describe("solenoid properties", () => {

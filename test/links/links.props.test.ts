@@ -1,8 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { inductiveLink, maximumLinkEfficiency, optimalLoadResistance } from "../../src/index.js";
-
-const logUniform = (lo: number, hi: number) => fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 describe("inductive link properties", () => {
   it("efficiency lies in (0, 1], power is conserved, and no link beats the kQ limit", () => {

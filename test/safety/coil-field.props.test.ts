@@ -1,9 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { fieldNearCoil, fieldOnAxis } from "../../src/index.js";
-
-const logUniform = (lo: number, hi: number): fc.Arbitrary<number> =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 const loop = fc.record({ radius: logUniform(1e-3, 1), position: fc.double({ min: -0.5, max: 0.5, noNaN: true, noDefaultInfinity: true }) });
 

@@ -1,9 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { solveOde } from "../../src/index.js";
-
-const logUniform = (lo: number, hi: number): fc.Arbitrary<number> =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 describe("solveOde properties", () => {
   it("linear decay y' = −k y: relative error at the end within 1e-7 for any rate and span (rtol 1e-10)", () => {

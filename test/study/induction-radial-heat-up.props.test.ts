@@ -1,9 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { austeniticStainless, celsius, inductionRadialHeatUp, lowCarbonSteel } from "../../src/index.js";
-
-const logUniform = (lo: number, hi: number): fc.Arbitrary<number> =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 // skin-depth-concentrated power: radius several skin depths (frequency high enough)
 const scenario = fc.record({

@@ -1,9 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { lumpedHeatUp, steadyStateTemperature, STEFAN_BOLTZMANN } from "../../src/index.js";
-
-const logUniform = (lo: number, hi: number): fc.Arbitrary<number> =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 const part = fc.record({
   mass: logUniform(0.01, 10),

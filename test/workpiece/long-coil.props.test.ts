@@ -1,9 +1,7 @@
 import { describe, it } from "vitest";
 import fc from "fast-check";
 import { barInLongCoil, MU_0, tubeInLongCoil } from "../../src/index.js";
-
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true, noDefaultInfinity: true }).map(Math.exp);
+import { logUniform } from "../support/arbitraries.js";
 
 const options = fc.record({
   innerRadius: logUniform(1e-3, 0.5),

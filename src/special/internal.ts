@@ -1,0 +1,23 @@
+/**
+ * The library's own numerical toolkit: kernels that several modules share but that are not
+ * part of the public API (no input validation beyond what their callers guarantee; they may
+ * return NaN outside their domain). Modules import them from here, never from a private copy.
+ * Each has a fixture from an outside reference in `test/fixtures/toolkit/` and its accuracy in
+ * its file's header.
+ *
+ * @packageDocumentation
+ */
+export {
+  gaussLegendreRule,
+  gaussLegendrePanel,
+  gaussLegendreAdaptive,
+  gaussLegendreAdaptiveAbsolute,
+  gaussLegendreAdaptiveSingularAtStart,
+} from "./gauss-legendre.js";
+export type { GaussLegendreRule } from "./gauss-legendre.js";
+export { logGamma } from "./log-gamma.js";
+export { leastSquaresQr } from "./least-squares.js";
+export { exponentialIntegralE5 } from "./exponential-integral.js";
+export { solveTridiagonal } from "./tridiagonal.js";
+export { andersonStep } from "./anderson.js";
+export { splitmix32, Xoshiro128, NormalDeviates } from "./random.js";
