@@ -3,10 +3,24 @@ import { defineConfig } from "tsup";
 /** The module folders published as subpaths (`fluxwright/<name>`), besides the root. */
 export const modules = [
   "core", "units", "special", "materials", "inductance", "conductors", "coreloss",
-  "tank", "workpiece", "thermal", "field", "safety", "converters", "links", "study",
+  "tank", "workpiece", "thermal", "field", "safety", "converters", "links", "study", "report",
 ] as const;
 
 const entry: Record<string, string> = { index: "src/index.ts" };
+
+/**
+ * What ships (see DEVELOPERS.md, "What the package ships"): readable, unminified ESM and CJS
+ * with `.d.ts` carrying the TSDoc, and no source maps (they pointed at `src/`, which does not
+ * ship, and were two thirds of the unpacked size). The command line imports the library's own
+ * module entries (`../study/index.js`, …) instead of bundling a second copy of them.
+ */
+const libraryImportsStayExternal = {
+  name: "library-imports-stay-external",
+  setup(build: { onResolve: (o: { filter: RegExp }, f: (a: { path: string }) => { path: string; external: boolean }) => void }) {
+    // src/cli/*.ts reach the library only through `../<module>/index.js`, which dist/ has too
+    build.onResolve({ filter: /^\.\.\/[a-z]+\/index\.js$/ }, (a) => ({ path: a.path, external: true }));
+  },
+};
 for (const m of modules) entry[`${m}/index`] = `src/${m}/index.ts`;
 
 export default defineConfig([
@@ -14,7 +28,7 @@ export default defineConfig([
     entry,
     format: ["esm", "cjs"],
     dts: { compilerOptions: { ignoreDeprecations: "6.0" } },
-    sourcemap: true,
+    sourcemap: false,
     clean: true,
     target: "es2022",
     treeshake: true,
@@ -23,10 +37,11 @@ export default defineConfig([
   {
     entry: { "cli/main": "src/cli/main.ts" },
     format: ["esm"],
-    sourcemap: true,
+    sourcemap: false,
     clean: false,
     target: "es2022",
     platform: "node",
     banner: { js: "#!/usr/bin/env node" },
+    esbuildPlugins: [libraryImportsStayExternal],
   },
 ]);

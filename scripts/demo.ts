@@ -8,16 +8,17 @@
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { dirname, relative, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { studyHtmlReport } from "../src/cli/html-report.js";
-import { studyTextReport } from "../src/cli/text-report.js";
+import { studyHtmlReport } from "../src/report/index.js";
+import { studyTextReport } from "../src/report/index.js";
 import { studyHeater } from "../src/index.js";
+import type { HeaterDescription } from "../src/index.js";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 const studyFile = resolve(process.argv[2] ?? resolve(root, "docs/examples/study-bearing-race.json"));
 const output = resolve(process.argv[3] ?? resolve(root, "docs/report/bearing-race.html"));
 const shown = relative(process.cwd(), studyFile) || studyFile;
 
-const study = studyHeater(JSON.parse(readFileSync(studyFile, "utf8")));
+const study = studyHeater(JSON.parse(readFileSync(studyFile, "utf8")) as HeaterDescription);
 process.stdout.write(studyTextReport(study, shown));
 mkdirSync(dirname(output), { recursive: true });
 writeFileSync(output, studyHtmlReport(study, relative(root, studyFile)), "utf8");

@@ -7,9 +7,10 @@
  */
 import { readFileSync } from "node:fs";
 import { formatQuantity, studyHeater, toCelsius } from "../../src/index.js";
+import type { HeaterDescription } from "../../src/index.js";
 
 const file = new URL("./study-bearing-race.json", import.meta.url);
-const study = studyHeater(JSON.parse(readFileSync(file, "utf8")));
+const study = studyHeater(JSON.parse(readFileSync(file, "utf8")) as HeaterDescription);
 const op = study.operating;
 
 console.log(study.title);

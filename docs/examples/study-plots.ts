@@ -7,10 +7,11 @@
  * Run: npx tsx docs/examples/study-plots.ts [--write]
  */
 import { readFileSync, writeFileSync } from "node:fs";
-import { studyPlots } from "../../src/cli/html-report.js";
+import { studyPlots } from "../../src/report/index.js";
 import { studyHeater } from "../../src/index.js";
+import type { HeaterDescription } from "../../src/index.js";
 
-const study = studyHeater(JSON.parse(readFileSync(new URL("./study-forging-bar.json", import.meta.url), "utf8")));
+const study = studyHeater(JSON.parse(readFileSync(new URL("./study-forging-bar.json", import.meta.url), "utf8")) as HeaterDescription);
 const curie = study.part.curieTemperature;
 const h = study.heatUp;
 if (curie === null || h === null || h.curieCrossingTime === null) throw new Error("the forging bar should cross its Curie point");

@@ -7,8 +7,9 @@
  */
 import { readFileSync } from "node:fs";
 import { formatQuantity, optimizeHeater, sweepHeater } from "../../src/index.js";
+import type { HeaterDescription } from "../../src/index.js";
 
-const base = JSON.parse(readFileSync(new URL("./study-bearing-race.json", import.meta.url), "utf8")) as unknown;
+const base = JSON.parse(readFileSync(new URL("./study-bearing-race.json", import.meta.url), "utf8")) as HeaterDescription;
 
 const sweep = sweepHeater(base, { field: "capacitor.capacitance", values: ["2.2 µF", "3.3 µF", "4.7 µF", "6.8 µF"], heatUp: false });
 for (const row of sweep.rows) {

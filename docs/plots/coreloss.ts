@@ -8,7 +8,7 @@
 import { writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { lineChart } from "../../src/cli/chart.js";
+import { lineChart } from "../../src/report/index.js";
 import { igseLoss, inventedExampleFerrite, steinmetzLoss, trapezoidalFluxWaveform, triangularFluxWaveform } from "../../src/index.js";
 
 const here = dirname(fileURLToPath(import.meta.url));

@@ -9,7 +9,7 @@
  * Run: npx tsx docs/plots/special.ts
  */
 import { writeFileSync } from "node:fs";
-import { lineChart } from "../../src/cli/chart.js";
+import { lineChart } from "../../src/report/index.js";
 import { kelvinFunctions } from "../../src/index.js";
 import data from "../../test/fixtures/special/kelvin.json" with { type: "json" };
 

@@ -9,7 +9,7 @@
  * Run: npx tsx docs/plots/tank.ts
  */
 import { writeFileSync } from "node:fs";
-import { lineChart } from "../../src/cli/chart.js";
+import { lineChart } from "../../src/report/index.js";
 import { logSpacedFrequencies, parallelTank, seriesInverter, tankImpedanceSweep } from "../../src/index.js";
 
 const img = (name: string): URL => new URL(`../img/${name}`, import.meta.url);

@@ -6,7 +6,7 @@
  * Run: npx tsx docs/plots/workpiece.ts
  */
 import { writeFileSync } from "node:fs";
-import { lineChart } from "../../src/cli/chart.js";
+import { lineChart } from "../../src/report/index.js";
 import {
   aluminiumAlloy,
   ANNEALED_COPPER_RESISTIVITY,

@@ -1,13 +1,16 @@
 /**
  * The `fluxwright` subcommands, written against a small I/O interface so that tests can run
- * them in-process. Exit codes: 0 success, 1 the computation failed, 2 bad usage or a bad study
- * file (the message names the field path; no report is written).
+ * them in-process. Exit codes: 0 success, 1 an unexpected failure, 2 bad usage or a bad study
+ * file (the message names the field path; no report is written), 3 a valid file whose design
+ * cannot run, 4 an output that could not be written.
  */
-import { InputError } from "../core/index.js";
-import { HeaterDescriptionError, optimizeHeater, studyHeater, sweepHeater } from "../study/index.js";
-import type { HeaterGoal, HeaterLimits } from "../study/index.js";
-import { studyHtmlReport } from "./html-report.js";
-import { optimisationTextReport, studyTextReport, sweepTextReport } from "./text-report.js";
+import { InputError, nearestName } from "../core/index.js";
+import { HeaterDescriptionError, optimizeHeater, readHeaterDescription, studyHeater, sweepHeater } from "../study/index.js";
+import type { HeaterDescription, HeaterGoal, HeaterLimits } from "../study/index.js";
+import { designErrorText } from "../report/design-error.js";
+import { jsonSyntaxError } from "./json-error.js";
+import { studyHtmlReport } from "../report/index.js";
+import { optimisationTextReport, studyTextReport, sweepCsv, sweepTextReport } from "../report/index.js";
 
 /** What the commands need from the outside world. */
 export interface CliIo {
@@ -17,8 +20,19 @@ export interface CliIo {
   readonly stderr: (text: string) => void;
   /** Reads a UTF-8 file; throws with `code: "ENOENT"` etc. on failure. */
   readonly readFile: (path: string) => string;
-  /** Writes a UTF-8 file. */
+  /**
+   * Writes a UTF-8 file. The real one writes a temporary file beside the target and renames it,
+   * so a failure leaves the old file as it was; it throws with `code` (`ENOENT`, `ENOSPC`, …).
+   */
   readonly writeFile: (path: string, text: string) => void;
+  /** Reads all of standard input (for the file name `-`). */
+  readonly readStdin?: () => string;
+  /** Whether two paths name the same file (default: equal strings). */
+  readonly samePath?: (a: string, b: string) => boolean;
+  /** The package version (`--version`, and in every JSON output). */
+  readonly version?: string | undefined;
+  /** Reads a file shipped in the package, by its path inside the package (`docs/examples/…`). */
+  readonly readPackageFile?: (path: string) => string;
 }
 
 /** Exit codes. */
@@ -27,6 +41,16 @@ export const EXIT_OK = 0;
 export const EXIT_FAILURE = 1;
 /** Bad usage or a bad study file. */
 export const EXIT_USAGE = 2;
+/** A valid study file whose design cannot run (the message says which limit and what to change). */
+export const EXIT_DESIGN = 3;
+/** An output (report file, standard output) could not be written; an existing file is kept. */
+export const EXIT_OUTPUT = 4;
+
+/** The format version of the JSON outputs (`--json`); raised when a field changes meaning or goes. */
+export const JSON_FORMAT_VERSION = 1;
+
+/** The shipped example study files (`fluxwright new FILE --example NAME`). */
+const EXAMPLES = ["bearing-race", "forging-bar", "plate-warmer"] as const;
 
 const MAIN_HELP = `usage: fluxwright <command> [options]
 
@@ -36,39 +60,54 @@ commands:
   study FILE [--json] [--html OUT]      run a study: text report, JSON, or an HTML report with plots
   sweep FILE --field PATH --values LIST  vary one field of the study file over values
   optimise FILE --power W | --time S     search turns, capacitance and frequency for a goal
+  new FILE [--example NAME]              write a starter study file to edit
   help [COMMAND]                         show help for a command
 
-Study files: see docs/heater-study.schema.json and docs/examples/study-*.json.
-Exit status: 0 success, 1 computation failed, 2 bad usage or bad study file.
+options:
+  -h, --help      show help
+  -V, --version   print the version
+
+FILE may be - for standard input. Study files are JSON; every quantity with a dimension is text
+with its unit ("32 mm", "1.25 in", "4.7 µF", "850 °C"). The package ships their JSON Schema
+(docs/heater-study.schema.json) and examples (docs/examples/study-*.json); "fluxwright new"
+writes one to start from.
+Exit status: 0 success, 1 unexpected failure, 2 bad usage or bad study file, 3 valid file but
+the design cannot run, 4 an output could not be written.
 `;
 
 const HELP: Record<string, string> = {
   study: `usage: fluxwright study FILE [--json] [--html OUT] [--quiet]
 
-Runs the heater study in FILE (JSON; quantities as SI numbers or text such as "30 mm") and
-prints a text report: cautions first, the design, operating points empty / cold / at target,
-where the power goes, the heat-up and the validity notes.
+Runs the heater study in FILE (JSON, or - for standard input; quantities as text with units
+such as "30 mm") and prints a text report: cautions first, the design, operating points
+empty / cold / at target, where the power goes, the heat-up and the validity notes.
 
 options:
-  --json        print the full study result as JSON instead of the text report
-  --html OUT    also write a self-contained HTML report with plots to OUT
+  --json        print the full study result as JSON instead of the text report (it carries
+                the study file as "input", so it can be read back as FILE)
+  --html OUT    also write a self-contained HTML report with plots to OUT (never over FILE;
+                written to a temporary file and renamed, so a failure keeps the old OUT)
   --quiet       with --html: print only the report's path
   -h, --help    show this help
 
 A bad study file exits with status 2 and a message naming the field path; nothing is written.
+A valid file whose design cannot run exits with status 3 and says what to change.
 `,
-  sweep: `usage: fluxwright sweep FILE --field PATH --values LIST [--json] [--no-heat-up]
+  sweep: `usage: fluxwright sweep FILE --field PATH --values LIST [--csv | --json] [--no-heat-up]
 
-Varies one numeric field of the study in FILE and prints a table of headline numbers per value.
+Varies one field of the study in FILE and prints a table of headline numbers per value.
+Rows whose design is invalid or cannot run are kept, with the reason in the last column.
 
 options:
   --field PATH    dotted field path, e.g. coil.turns, capacitor.capacitance, supply.voltage
-  --values LIST   comma-separated values, SI numbers or quantities: "4,5,6" or "2.2 µF,3.3 µF"
-  --no-heat-up    skip the heat-up (faster; no time to target)
+  --values LIST   comma-separated values, with units where the field has one:
+                  "4,5,6" or "2.2 µF,3.3 µF"
+  --no-heat-up    skip the heat-up (faster; no time-to-target column)
+  --csv           print the table as CSV (SI numbers, one header line)
   --json          print the sweep as JSON
   -h, --help      show this help
 
-Progress goes to standard error.
+Progress goes to standard error. Exits with status 3 when no value gave a design that runs.
 `,
   optimise: `usage: fluxwright optimise FILE (--power W | --time S) [limits] [--keep N] [--json]
 
@@ -94,17 +133,26 @@ options:
 
 Progress goes to standard error.
 `,
+  new: `usage: fluxwright new FILE [--example NAME]
+
+Writes a starter study file to FILE (never over an existing file) to edit and run with
+"fluxwright study FILE". NAME is one of: ${EXAMPLES.join(", ")} (default bearing-race).
+Its "$schema" names the published JSON Schema, so editors can check it wherever it is copied.
+`,
 };
 
 /** A usage error (exit 2). */
 class UsageError extends Error {}
+
+/** An output that could not be written (exit 4). */
+class OutputError extends Error {}
 
 interface Parsed {
   positional: string[];
   flags: Map<string, string | true>;
 }
 
-/** Parses `--name value`, `--name=value` and boolean `--name` options. */
+/** Parses `--name value`, `--name=value` and boolean `--name` options; `-` is a positional (standard input). */
 function parseArgs(args: readonly string[], valued: readonly string[], booleans: readonly string[]): Parsed {
   const positional: string[] = [];
   const flags = new Map<string, string | true>();
@@ -124,7 +172,8 @@ function parseArgs(args: readonly string[], valued: readonly string[], booleans:
       } else if (booleans.includes(name) && eq < 0) {
         flags.set(name, true);
       } else {
-        throw new UsageError(`unknown option ${a}`);
+        const near = nearestName(name, [...valued, ...booleans]);
+        throw new UsageError(`unknown option ${a}${near === null ? "" : ` (did you mean --${near}?)`}`);
       }
       continue;
     }
@@ -133,32 +182,134 @@ function parseArgs(args: readonly string[], valued: readonly string[], booleans:
   return { positional, flags };
 }
 
-/** Reads and parses a study file, or throws a UsageError with a useful message. */
-function loadStudyFile(io: CliIo, path: string): unknown {
+/** Words for the usual file-system error codes. */
+const FS_ERRORS: Readonly<Record<string, string>> = {
+  ENOENT: "no such file or directory",
+  EACCES: "permission denied",
+  EPERM: "operation not permitted",
+  EISDIR: "is a directory",
+  ENOTDIR: "a parent is not a directory",
+  ENOSPC: "no space left on the device",
+  EDQUOT: "disk quota exceeded",
+  EFBIG: "file too large (file-size limit)",
+  EROFS: "read-only file system",
+  EEXIST: "the file already exists",
+};
+
+/** `no such file or directory (ENOENT)` from an error thrown by the file system. */
+function fsReason(e: unknown): string {
+  const code = (e as { code?: unknown }).code;
+  if (typeof code !== "string") return e instanceof Error ? e.message : String(e);
+  return `${FS_ERRORS[code] ?? "failed"} (${code})`;
+}
+
+/** Line and column (1-based) of a character offset in a text. */
+function lineColumn(text: string, offset: number): { line: number; column: number } {
+  const before = text.slice(0, Math.max(0, Math.min(offset, text.length)));
+  const lines = before.split("\n");
+  return { line: lines.length, column: Array.from(lines[lines.length - 1] ?? "").length + 1 };
+}
+
+/** The kinds of JSON output, each carrying the study file it was computed from as `input`. */
+const OUTPUT_FORMATS = ["fluxwright-study", "fluxwright-sweep", "fluxwright-optimisation"];
+
+/** A study file read and parsed: the parsed JSON, and where it came from for messages. */
+interface StudyFile {
+  readonly name: string;
+  readonly input: unknown;
+}
+
+/**
+ * Reads and parses a study file (`-` is standard input; a UTF-8 byte-order mark is skipped; the
+ * JSON output of `study`, `sweep` or `optimise` is read back through the study file it carries),
+ * or throws a UsageError with a useful message: JSON syntax errors give line and column.
+ */
+function loadStudyFile(io: CliIo, path: string): StudyFile {
+  const name = path === "-" ? "(standard input)" : path;
   let text: string;
   try {
-    text = io.readFile(path);
+    if (path === "-") {
+      if (io.readStdin === undefined) throw new UsageError("standard input is not available here");
+      text = io.readStdin();
+    } else {
+      text = io.readFile(path);
+    }
   } catch (e) {
-    const code = (e as { code?: string }).code;
-    throw new UsageError(`cannot read ${path}${code === undefined ? "" : ` (${code})`}`);
+    if (e instanceof UsageError) throw e;
+    throw new UsageError(`cannot read ${name}: ${fsReason(e)}`);
   }
+  if (text.startsWith("\uFEFF")) text = text.slice(1);
+  let parsed: unknown;
   try {
-    return JSON.parse(text) as unknown;
+    parsed = JSON.parse(text) as unknown;
   } catch (e) {
-    throw new UsageError(`${path} is not valid JSON: ${(e as Error).message}`);
+    const found = jsonSyntaxError(text);
+    const where = lineColumn(text, found?.offset ?? text.length);
+    const reason = found?.reason ?? (e as Error).message;
+    const source = text.split("\n")[where.line - 1] ?? "";
+    const caret = `${" ".repeat(Math.max(0, where.column - 1))}^`;
+    throw new UsageError(`${name}:${where.line}:${where.column}: not valid JSON: ${reason}\n    ${source}\n    ${caret}`);
   }
+  if (typeof parsed === "object" && parsed !== null && OUTPUT_FORMATS.includes((parsed as { format?: string }).format ?? "")) {
+    const inner = (parsed as { input?: unknown }).input;
+    if (inner === undefined) throw new UsageError(`${name}: a ${(parsed as { format: string }).format} output without its "input" study file`);
+    return { name, input: inner };
+  }
+  return { name, input: parsed };
 }
 
 /** Prints a description error with every problem, one per line. */
-function reportInputError(io: CliIo, path: string, e: InputError): void {
+function reportInputError(io: CliIo, file: string, e: InputError): void {
   const problems = e instanceof HeaterDescriptionError ? e.problems : [e];
-  io.stderr(`fluxwright: ${path}: invalid study file (${problems.length} problem${problems.length === 1 ? "" : "s"}):\n`);
-  for (const p of problems) io.stderr(`  ${p.parameter}: ${p.message.replace(/^[^:]*: /, "")}\n`);
+  io.stderr(`fluxwright: ${file}: invalid study file (${problems.length} problem${problems.length === 1 ? "" : "s"}):\n`);
+  for (const p of problems) io.stderr(`  ${p.parameter}: ${p.message.replace(/^[^:]*: /u, "")}\n`);
+}
+
+/** Checks a study file as a file must be (units on every quantity with a dimension); returns an exit status or null. */
+function checkStudyFile(io: CliIo, file: StudyFile): number | null {
+  try {
+    readHeaterDescription(file.input, { requireUnits: true });
+    return null;
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+    reportInputError(io, file.name, e);
+    return EXIT_USAGE;
+  }
 }
 
 function single(parsed: Parsed, command: string): string {
   if (parsed.positional.length !== 1) throw new UsageError(`${command} takes exactly one study file, got ${parsed.positional.length}`);
   return parsed.positional[0] as string;
+}
+
+/** Writes an output file, never over the input, atomically (see CliIo.writeFile); OutputError on failure. */
+function writeOutput(io: CliIo, what: string, path: string, text: string, input: string): void {
+  const same = io.samePath ?? ((a: string, b: string) => a === b);
+  if (input !== "-" && same(path, input)) throw new UsageError(`refusing to write the ${what} over the study file ${path}: choose another output path`);
+  try {
+    io.writeFile(path, text);
+  } catch (e) {
+    throw new OutputError(`cannot write the ${what} to ${path}: ${fsReason(e)}; nothing was changed there`);
+  }
+}
+
+/** JSON text for an output: the envelope (format, versions, the input study file) and the result. */
+function jsonOutput(io: CliIo, format: string, file: StudyFile, result: object): string {
+  const envelope = { format, formatVersion: JSON_FORMAT_VERSION, fluxwright: io.version ?? "unknown", input: file.input, ...result };
+  return `${JSON.stringify(envelope, null, 2)}\n`;
+}
+
+/** Handles an InputError of a study run on a valid file: an impossible design (exit 3). */
+function designFailure(io: CliIo, command: string, file: StudyFile, e: unknown): number {
+  if (e instanceof HeaterDescriptionError) {
+    reportInputError(io, file.name, e);
+    return EXIT_USAGE;
+  }
+  if (e instanceof InputError) {
+    io.stderr(designErrorText(command, file.name, e, file.input));
+    return EXIT_DESIGN;
+  }
+  throw e;
 }
 
 function studyCommand(args: readonly string[], io: CliIo): number {
@@ -167,30 +318,26 @@ function studyCommand(args: readonly string[], io: CliIo): number {
     io.stdout(HELP.study as string);
     return EXIT_OK;
   }
-  const file = single(parsed, "study");
-  const input = loadStudyFile(io, file);
+  const path = single(parsed, "study");
+  const html = parsed.flags.get("html");
+  const same = io.samePath ?? ((a: string, b: string) => a === b);
+  if (typeof html === "string" && path !== "-" && same(html, path)) throw new UsageError(`refusing to write the HTML report over the study file ${html}: choose another output path`);
+  const file = loadStudyFile(io, path);
+  const bad = checkStudyFile(io, file);
+  if (bad !== null) return bad;
   let study;
   try {
-    study = studyHeater(input);
+    study = studyHeater(file.input as HeaterDescription);
   } catch (e) {
-    if (e instanceof HeaterDescriptionError) {
-      reportInputError(io, file, e);
-      return EXIT_USAGE;
-    }
-    if (e instanceof InputError) {
-      io.stderr(`fluxwright study: ${file}: the design cannot be studied: ${e.expected}\n`);
-      return EXIT_FAILURE;
-    }
-    throw e;
-  }
-  const html = parsed.flags.get("html");
-  if (typeof html === "string") {
-    io.writeFile(html, studyHtmlReport(study, file));
+    return designFailure(io, "study", file, e);
   }
   const json = parsed.flags.has("json");
-  if (json) io.stdout(`${JSON.stringify(study, null, 2)}\n`);
-  else if (!(parsed.flags.has("quiet") && typeof html === "string")) io.stdout(studyTextReport(study, file));
-  if (typeof html === "string") (json ? io.stderr : io.stdout)(`HTML report written to ${html}\n`);
+  if (json) io.stdout(jsonOutput(io, "fluxwright-study", file, study));
+  else if (!(parsed.flags.has("quiet") && typeof html === "string")) io.stdout(studyTextReport(study, file.name));
+  if (typeof html === "string") {
+    writeOutput(io, "HTML report", html, studyHtmlReport(study, file.name), path);
+    (json ? io.stderr : io.stdout)(`HTML report written to ${html}\n`);
+  }
   return EXIT_OK;
 }
 
@@ -199,34 +346,46 @@ function splitList(text: string): (number | string)[] {
     .split(",")
     .map((s) => s.trim())
     .filter((s) => s !== "")
-    .map((s) => (/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(s) ? Number(s) : s));
+    .map((s) => (/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/u.test(s) ? Number(s) : s));
 }
 
 function sweepCommand(args: readonly string[], io: CliIo): number {
-  const parsed = parseArgs(args, ["field", "values"], ["json", "no-heat-up"]);
+  const parsed = parseArgs(args, ["field", "values"], ["json", "csv", "no-heat-up"]);
   if (parsed.flags.has("help")) {
     io.stdout(HELP.sweep as string);
     return EXIT_OK;
   }
-  const file = single(parsed, "sweep");
+  const path = single(parsed, "sweep");
   const field = parsed.flags.get("field");
   const values = parsed.flags.get("values");
   if (typeof field !== "string") throw new UsageError("sweep needs --field PATH");
   if (typeof values !== "string") throw new UsageError("sweep needs --values LIST");
-  const input = loadStudyFile(io, file);
+  if (parsed.flags.has("json") && parsed.flags.has("csv")) throw new UsageError("choose one of --json and --csv");
+  const file = loadStudyFile(io, path);
+  const bad = checkStudyFile(io, file);
+  if (bad !== null) return bad;
   const list = splitList(values);
-  io.stderr(`sweeping ${field} over ${list.length} values…\n`);
+  if (list.length === 0) throw new UsageError("--values needs at least one value");
+  const heatUp = !parsed.flags.has("no-heat-up");
+  io.stderr(`sweeping ${field} over ${list.length} value${list.length === 1 ? "" : "s"}…\n`);
   let result;
   try {
-    result = sweepHeater(input, { field, values: list, heatUp: !parsed.flags.has("no-heat-up") });
+    result = sweepHeater(file.input as HeaterDescription, { field, values: list, heatUp, requireUnits: true });
   } catch (e) {
-    if (e instanceof InputError) {
-      reportInputError(io, file, e);
+    if (e instanceof HeaterDescriptionError) {
+      reportInputError(io, file.name, e);
       return EXIT_USAGE;
     }
-    throw e;
+    if (e instanceof InputError && e.where === "sweepHeater") throw new UsageError(e.message.replace(/^sweepHeater: /u, "--"));
+    return designFailure(io, "sweep", file, e);
   }
-  io.stdout(parsed.flags.has("json") ? `${JSON.stringify(result, null, 2)}\n` : sweepTextReport(result));
+  if (parsed.flags.has("json")) io.stdout(jsonOutput(io, "fluxwright-sweep", file, result));
+  else if (parsed.flags.has("csv")) io.stdout(sweepCsv(result, heatUp));
+  else io.stdout(sweepTextReport(result, heatUp));
+  if (result.rows.every((r) => r.summary === null)) {
+    io.stderr(`fluxwright sweep: no value of ${field} gave a design that runs (reasons in the table)\n`);
+    return EXIT_DESIGN;
+  }
   return EXIT_OK;
 }
 
@@ -240,7 +399,7 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
     io.stdout(HELP.optimise as string);
     return EXIT_OK;
   }
-  const file = single(parsed, "optimise");
+  const path = single(parsed, "optimise");
   const text = (name: string): string | undefined => {
     const v = parsed.flags.get(name);
     return typeof v === "string" ? v : undefined;
@@ -279,25 +438,55 @@ function optimiseCommand(args: readonly string[], io: CliIo): number {
     search,
     ...(keep === undefined ? {} : { keep }),
   } as HeaterGoal;
-  const input = loadStudyFile(io, file);
-  io.stderr(`searching designs around ${file}…\n`);
+  const file = loadStudyFile(io, path);
+  const bad = checkStudyFile(io, file);
+  if (bad !== null) return bad;
+  io.stderr(`searching designs around ${file.name}…\n`);
   const started = Date.now();
   let result;
   try {
-    result = optimizeHeater(input, goal, {
+    result = optimizeHeater(file.input as HeaterDescription, goal, {
       onProgress: (done, total) => {
         if (total >= 1000) io.stderr(`  ${done} / ${total} candidates (${Math.round((100 * done) / total)} %)\n`);
       },
     });
   } catch (e) {
-    if (e instanceof InputError) {
-      reportInputError(io, file, e);
+    if (e instanceof HeaterDescriptionError) {
+      reportInputError(io, file.name, e);
       return EXIT_USAGE;
     }
-    throw e;
+    if (e instanceof InputError && e.parameter.startsWith("goal")) throw new UsageError(`${e.message.replace(/^optimizeHeater: /u, "")} (from the command-line options)`);
+    return designFailure(io, "optimise", file, e);
   }
   io.stderr(`evaluated ${result.evaluated} candidates in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
-  io.stdout(parsed.flags.has("json") ? `${JSON.stringify(result, null, 2)}\n` : optimisationTextReport(result));
+  for (const w of result.warnings) io.stderr(`fluxwright optimise: warning: ${w}\n`);
+  io.stdout(parsed.flags.has("json") ? jsonOutput(io, "fluxwright-optimisation", file, result) : optimisationTextReport(result));
+  return EXIT_OK;
+}
+
+function newCommand(args: readonly string[], io: CliIo): number {
+  const parsed = parseArgs(args, ["example"], []);
+  if (parsed.flags.has("help")) {
+    io.stdout(HELP.new as string);
+    return EXIT_OK;
+  }
+  if (parsed.positional.length !== 1) throw new UsageError(`new takes exactly one output file, got ${parsed.positional.length}`);
+  const path = parsed.positional[0] as string;
+  const example = parsed.flags.get("example") ?? "bearing-race";
+  if (typeof example !== "string" || !(EXAMPLES as readonly string[]).includes(example)) {
+    throw new UsageError(`--example must be one of ${EXAMPLES.join(", ")}, got ${String(example)}`);
+  }
+  if (io.readPackageFile === undefined) throw new UsageError("the shipped examples are not available here");
+  let exists = true;
+  try {
+    io.readFile(path);
+  } catch {
+    exists = false;
+  }
+  if (exists) throw new UsageError(`${path} already exists; choose a new file name`);
+  const text = io.readPackageFile(`docs/examples/study-${example}.json`);
+  writeOutput(io, "study file", path, text, "-");
+  io.stdout(`study file written to ${path}; run it with: fluxwright study ${path}\n`);
   return EXIT_OK;
 }
 
@@ -306,14 +495,35 @@ const COMMANDS: Record<string, (args: readonly string[], io: CliIo) => number> =
   sweep: sweepCommand,
   optimise: optimiseCommand,
   optimize: optimiseCommand,
+  new: newCommand,
 };
+
+/**
+ * Terminal control characters (C0 except tab, newline and the CR of a CRLF; DEL; C1) written as `\x1B`-style
+ * escapes, so a title or a file name cannot move the cursor, recolour or clear the terminal.
+ */
+export function escapeControls(text: string): string {
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point
+  return text.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]|\r(?!\n)/gu, (c) => `\\x${c.charCodeAt(0).toString(16).toUpperCase().padStart(2, "0")}`);
+}
 
 /**
  * Runs the command line with the given arguments (without the program name).
  *
  * @returns the exit status
  */
-export function runCli(args: readonly string[], io: CliIo): number {
+export function runCli(args: readonly string[], rawIo: CliIo): number {
+  // JSON outputs escape control characters themselves (\u001b); text outputs get them escaped here
+  const jsonMode = args.includes("--json");
+  const io: CliIo = {
+    ...rawIo,
+    stdout: (t) => {
+      rawIo.stdout(jsonMode ? t.replace(/[\u007F-\u009F]/gu, (c) => `\\u00${c.charCodeAt(0).toString(16).toUpperCase()}`) : escapeControls(t));
+    },
+    stderr: (t) => {
+      rawIo.stderr(escapeControls(t));
+    },
+  };
   const [command, ...rest] = args;
   if (command === undefined) {
     io.stderr(MAIN_HELP);
@@ -334,12 +544,13 @@ export function runCli(args: readonly string[], io: CliIo): number {
     return EXIT_OK;
   }
   if (command === "--version" || command === "-V") {
-    io.stdout("fluxwright\n");
+    io.stdout(`fluxwright ${io.version ?? "(version unknown)"}\n`);
     return EXIT_OK;
   }
   const run = COMMANDS[command];
   if (run === undefined) {
-    io.stderr(`fluxwright: unknown command ${JSON.stringify(command)}; try "fluxwright --help"\n`);
+    const near = nearestName(command, Object.keys(COMMANDS));
+    io.stderr(`fluxwright: unknown command ${JSON.stringify(command)}${near === null ? "" : ` (did you mean "${near}"?)`}; try "fluxwright --help"\n`);
     return EXIT_USAGE;
   }
   try {
@@ -348,6 +559,10 @@ export function runCli(args: readonly string[], io: CliIo): number {
     if (e instanceof UsageError) {
       io.stderr(`fluxwright ${command}: ${e.message}\n(see "fluxwright ${command} --help")\n`);
       return EXIT_USAGE;
+    }
+    if (e instanceof OutputError) {
+      io.stderr(`fluxwright ${command}: ${e.message}\n`);
+      return EXIT_OUTPUT;
     }
     if (e instanceof InputError) {
       io.stderr(`fluxwright ${command}: ${e.message}\n`);

@@ -1,7 +1,10 @@
 /**
  * Conductor resistance: DC resistance, skin depth, round-wire skin effect, Dowell layered windings, litz wire and copper tube.
  *
- * @module conductors
+ * Import from `fluxwright/conductors` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/conductors.md
+ * @module fluxwright/conductors
  */
 export * from "./skin-depth.js";
 export * from "./dc-resistance.js";

@@ -2,7 +2,9 @@
  * Shared foundations: the {@link InputError} type, the validation helpers every module uses,
  * and the caution and validity records that result objects carry.
  *
- * @module core
+ * Import from `fluxwright/core` (or from `fluxwright`, which re-exports every module).
+ *
+ * @module fluxwright/core
  */
 export { InputError } from "./input-error.js";
 export {

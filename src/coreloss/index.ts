@@ -3,7 +3,10 @@
  * waveform builders, flux density from volt-seconds, coefficient fitting with a temperature
  * term, and effective core dimensions.
  *
- * @module coreloss
+ * Import from `fluxwright/coreloss` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/coreloss.md
+ * @module fluxwright/coreloss
  */
 export { steinmetzLoss, steinmetzTemperatureFactor } from "./steinmetz.js";
 export type { SteinmetzLossOptions } from "./steinmetz.js";

@@ -5,7 +5,10 @@
  * `spiralCoilInductance`, `loopMutualInductance`, `coaxialCoilMutualInductance`); the classic
  * approximations sit beside them under their authors' names, each with its measured error.
  *
- * @module inductance
+ * Import from `fluxwright/inductance` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/inductance.md
+ * @module fluxwright/inductance
  */
 export { nagaokaCoefficient, solenoidInductance, solenoidInductanceWheeler } from "./solenoid.js";
 export type { SolenoidInductanceOptions, SolenoidInductanceWheelerOptions } from "./solenoid.js";

@@ -41,8 +41,8 @@ export const MU_0_HALF_PI = (MU_0 * Math.PI) / 2;
  *   polynomials of K and E combined as $P = \tfrac{1+m_1}{2}P_K - P_E$,
  *   $Q = \tfrac{1+m_1}{2}Q_K - m_1 Q_E$; the bracket loses at most a factor ≈ 10 to
  *   cancellation there (m = 0.7).
- * - m ≤ 0.7: the quadratic transformation of $(1-m/2)K - E = \frac{\pi m^2}{32}\,
- *   {}_2F_1(\tfrac32,\tfrac32;3;m)$ (DLMF 15.8.13, $c = 2b$) gives
+ * - m ≤ 0.7: the quadratic transformation of
+ *   $(1-m/2)K - E = \frac{\pi m^2}{32}\, {}_2F_1(\tfrac32,\tfrac32;3;m)$ (DLMF 15.8.13, $c = 2b$) gives
  *   $M/\mu_0 = \frac{\pi}{8}\,u^2\sqrt{D}\;{}_2F_1(\tfrac34,\tfrac54;2;u^2)$ with
  *   $D = a^2 + b^2 + z^2$ and $u = 2ab/D = m/(2-m) \le 7/13$; the ${}_2F_1$ (≥ 1, positive
  *   series) by a degree-15 polynomial on $0 \le u^2 \le 49/169$.

@@ -160,7 +160,8 @@ function solenoidInductanceChecked(options: SolenoidInductanceOptions): number {
   const wire = requirePositive(where, "wireDiameter", d, "m");
   if (!Number.isInteger(n)) throw new InputError(where, "turns", n, "", "an integer ≥ 1 when wireDiameter is given");
   const pitch = l / n;
-  if (wire > pitch) {
+  // relative tolerance (1e-12): touching turns stay allowed through the rounding of length / turns
+  if (wire > pitch * (1 + 1e-12)) {
     throw new InputError(where, "wireDiameter", wire, "m", `at most the pitch length/turns = ${pitch} (turns would overlap)`);
   }
   if (!(wire < 2 * a)) throw new InputError(where, "wireDiameter", wire, "m", `less than the coil diameter ${2 * a}`);

@@ -33,6 +33,8 @@ export interface SpiralCoilOptions {
 
 /** Most turns of the exact sum (N² cost: about 0.15 s at this count on one core). */
 const MAX_SPIRAL_TURNS = 3000;
+/** Relative tolerance of geometric limits: touching turns stay allowed through the rounding of computed lengths. */
+const GEOMETRY_RTOL = 1e-12;
 
 function readSpiral(where: string, options: SpiralCoilOptions, needWire: boolean): { r1: number; r2: number; n: number; wire: number; pitch: number } {
   requireObject(where, "options", options);
@@ -47,7 +49,8 @@ function readSpiral(where: string, options: SpiralCoilOptions, needWire: boolean
   }
   const pitch = n === 1 ? wire : (r2 - r1) / (n - 1);
   if (Number.isNaN(wire)) return { r1, r2, n, wire, pitch };
-  if (wire > pitch) throw new InputError(where, "wireDiameter", wire, "m", `at most the pitch ${pitch} (turns would overlap)`);
+  // relative tolerance: a pitch computed from radii (0.0019999999999999996 for 2 mm) still lets 2 mm wire touch
+  if (wire > pitch * (1 + GEOMETRY_RTOL)) throw new InputError(where, "wireDiameter", wire, "m", `at most the pitch ${pitch} (turns would overlap)`);
   if (!(wire < 2 * r1)) throw new InputError(where, "wireDiameter", wire, "m", `less than 2 × innerRadius (${2 * r1})`);
   return { r1, r2, n, wire, pitch };
 }

@@ -12,7 +12,10 @@
  * {@link specificEnthalpyChange} and
  * {@link saturationFluxDensityAt}.
  *
- * @module materials
+ * Import from `fluxwright/materials` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/materials.md
+ * @module fluxwright/materials
  */
 export type {
   ConductiveMaterial,

@@ -7,6 +7,7 @@
 import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import type { Caution } from "../core/index.js";
 import { voltageCaution } from "../core/extra-low-voltage.js";
+import { formatQuantity } from "../units/index.js";
 // The extra-low-voltage caution is shared with the tank module, so it lives in core; this
 // module re-exports it as part of the safety inventory.
 export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "../core/extra-low-voltage.js";
@@ -79,7 +80,7 @@ export function storedEnergyCaution(options: StoredEnergyCautionOptions): Cautio
     return {
       code: "stored-energy-hazard",
       severity: "danger",
-      message: `The capacitors store ${round(energy)} J at ${round(v)} V peak, above the ${ENERGY_HAZARD_LEVEL} J energy-hazard level: a short circuit can arc, burn and weld, and the charge can remain after switch-off. Fit a bleeder resistor and verify discharge before work. ${DEFER_TO_CODES}`,
+      message: `The capacitors store ${qty(energy, "J")} at ${qty(v, "V")} peak, above the ${ENERGY_HAZARD_LEVEL} J energy-hazard level: a short circuit can arc, burn and weld, and the charge can remain after switch-off. Fit a bleeder resistor and verify discharge before work. ${DEFER_TO_CODES}`,
       value: energy,
       limit: ENERGY_HAZARD_LEVEL,
       unit: "J",
@@ -90,7 +91,7 @@ export function storedEnergyCaution(options: StoredEnergyCautionOptions): Cautio
     return {
       code: "stored-energy-shock",
       severity: "warning",
-      message: `The capacitors store ${round(energy)} J at ${round(v)} V peak, more than the ${DISCHARGE_ENERGY_LIMIT * 1000} mJ allowed to discharge through a person from an accessible part: the charge can give a painful or harmful shock after switch-off. Fit a bleeder resistor. ${DEFER_TO_CODES}`,
+      message: `The capacitors store ${qty(energy, "J")} at ${qty(v, "V")} peak, more than the ${DISCHARGE_ENERGY_LIMIT * 1000} mJ allowed to discharge through a person from an accessible part: the charge can give a painful or harmful shock after switch-off. Fit a bleeder resistor. ${DEFER_TO_CODES}`,
       value: energy,
       limit: DISCHARGE_ENERGY_LIMIT,
       unit: "J",
@@ -252,7 +253,7 @@ export function audibleFrequencyCaution(frequency: number): Caution | null {
   return {
     code: "audible-frequency",
     severity: "warning",
-    message: `The operating frequency of ${round(f)} Hz is audible: expect whistling or humming from the coil, capacitors and part, loud at high power. Consider hearing protection or a frequency above 20 kHz. ${DEFER_TO_CODES}`,
+    message: `The operating frequency of ${qty(f, "Hz")} is audible: expect whistling or humming from the coil, capacitors and part, loud at high power. Consider hearing protection or a frequency above 20 kHz. ${DEFER_TO_CODES}`,
     value: f,
     limit: AUDIBLE_LIMIT,
     unit: "Hz",
@@ -304,7 +305,7 @@ export function exposureCaution(options: ExposureCautionOptions): Caution | null
   return {
     code: "field-above-reference-level",
     severity: "warning",
-    message: `The magnetic flux density of ${formatTesla(options.fluxDensityRms)} RMS at ${round(options.frequency)} Hz is ${round(check.ratio)} times the ICNIRP 2010 reference level for ${who} (${formatTesla(check.referenceLevel)}). Keep people further from the coil or assess the exposure in detail; people with implanted medical devices need separate advice. ${DEFER_TO_CODES}`,
+    message: `The magnetic flux density of ${formatTesla(options.fluxDensityRms)} RMS at ${qty(options.frequency, "Hz")} is ${round(check.ratio)} times the ICNIRP 2010 reference level for ${who} (${formatTesla(check.referenceLevel)}). Keep people further from the coil or assess the exposure in detail; people with implanted medical devices need separate advice. ${DEFER_TO_CODES}`,
     value: options.fluxDensityRms,
     limit: check.referenceLevel,
     unit: "T",
@@ -441,6 +442,11 @@ function optionalText(where: string, parameter: string, value: unknown, fallback
 }
 
 /** Three significant digits, plain notation where sensible. */
+/** A quantity with SI prefix and 3 significant digits, as every report prints them (`30.1 kHz`, `1.48 kV`). */
+function qty(value: number, unit: string): string {
+  return formatQuantity(value, unit, { digits: 3 });
+}
+
 function round(value: number): string {
   if (value === 0) return "0";
   const a = Math.abs(value);

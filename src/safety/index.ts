@@ -1,7 +1,10 @@
 /**
  * Safety: magnetic field exposure against reference levels, and cautions for voltage, stored energy and hot surfaces.
  *
- * @module safety
+ * Import from `fluxwright/safety` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/safety.md
+ * @module fluxwright/safety
  */
 export { fieldOnAxis, fieldNearCoil } from "./coil-field.js";
 export type {

@@ -2,7 +2,10 @@
  * Special functions and numerical kernels: complete elliptic integrals, Bessel and Kelvin
  * functions, complex arithmetic, quadrature, root finding and ODE integration.
  *
- * @module special
+ * Import from `fluxwright/special` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/special.md
+ * @module fluxwright/special
  */
 export { ellipticK, ellipticE, ellipticKFromComplement, ellipticEFromComplement } from "./elliptic.js";
 export {

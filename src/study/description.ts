@@ -17,6 +17,35 @@ import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
 export type QuantityInput = number | string;
 
 /**
+ * Ids of the conductor materials of the catalogue a coil may be wound from.
+ *
+ * @category Heater study
+ */
+export type ConductorMaterialId = "copper" | "aluminium" | "silver";
+
+/**
+ * Ids of the workpiece materials of the catalogue (`conductiveMaterials`).
+ *
+ * @category Heater study
+ */
+export type PartMaterialId =
+  | ConductorMaterialId
+  | "lowCarbonSteel"
+  | "mediumCarbonSteel"
+  | "austeniticStainless"
+  | "ferriticStainless"
+  | "aluminiumAlloy"
+  | "brass"
+  | "titaniumAlloy";
+
+/**
+ * Ids of the (invented example) core materials a concentrator may be made of.
+ *
+ * @category Heater study
+ */
+export type ConcentratorMaterialId = "inventedExampleFerrite" | "inventedExampleIronPowder";
+
+/**
  * The DC source feeding the inverter.
  *
  * @category Heater study
@@ -50,27 +79,59 @@ export interface CurrentFedParallelInverterDescription {
 }
 
 /**
- * A voltage-fed half or full bridge driving a series tank at a fixed switching frequency, or at
- * the frequency (above resonance, zero-voltage switching side) that delivers a target power.
+ * Fields every voltage-fed series inverter has.
  *
  * @category Heater study
  */
-export interface SeriesInverterDescription {
+export interface SeriesInverterCommon {
   /** Topology tag. */
   readonly kind: "voltage-fed-series";
   /** `"half"` or `"full"` bridge. */
   readonly bridge: "half" | "full";
-  /** `"fixed"`: run at `frequency`; `"power-tracking"`: find the frequency delivering `targetPower`. */
-  readonly control: "fixed" | "power-tracking";
-  /** Switching frequency [Hz], > 0; required when `control` is `"fixed"`. */
-  readonly frequency?: QuantityInput;
-  /** Power into the tank [W], > 0; required when `control` is `"power-tracking"`. */
-  readonly targetPower?: QuantityInput;
   /** On-state resistance of each switch [Ω], ≥ 0. */
   readonly switchOnResistance: QuantityInput;
   /** Voltage rating of the switches [V], > 0. Optional. */
   readonly switchVoltageRating?: QuantityInput;
 }
+
+/**
+ * A voltage-fed bridge switching at a fixed frequency: the frequency is required.
+ *
+ * @category Heater study
+ */
+export interface FixedFrequencySeriesInverterDescription extends SeriesInverterCommon {
+  /** Run at `frequency`. */
+  readonly control: "fixed";
+  /** Switching frequency [Hz], > 0. */
+  readonly frequency: QuantityInput;
+  /** Not with fixed-frequency control. */
+  readonly targetPower?: never;
+}
+
+/**
+ * A voltage-fed bridge that finds the frequency (above resonance, zero-voltage switching side)
+ * delivering a target power: the power is required.
+ *
+ * @category Heater study
+ */
+export interface PowerTrackingSeriesInverterDescription extends SeriesInverterCommon {
+  /** Find the frequency delivering `targetPower`. */
+  readonly control: "power-tracking";
+  /** Power into the tank [W], > 0. */
+  readonly targetPower: QuantityInput;
+  /** Not with power tracking (the study finds it). */
+  readonly frequency?: never;
+}
+
+/**
+ * A voltage-fed half or full bridge driving a series tank at a fixed switching frequency, or at
+ * the frequency (above resonance, zero-voltage switching side) that delivers a target power.
+ * The type requires the frequency with `control: "fixed"` and the power with
+ * `control: "power-tracking"`.
+ *
+ * @category Heater study
+ */
+export type SeriesInverterDescription = FixedFrequencySeriesInverterDescription | PowerTrackingSeriesInverterDescription;
 
 /**
  * The inverter topology and its switches.
@@ -90,7 +151,7 @@ export interface SolidConductorDescription {
   /** Wire diameter [m], > 0. */
   readonly diameter: QuantityInput;
   /** Conductor material id from the materials catalogue (`"copper"`, `"aluminium"`, `"silver"`) or a material set; default `"copper"`. */
-  readonly material?: string | ConductiveMaterial;
+  readonly material?: ConductorMaterialId | ConductiveMaterial;
 }
 
 /**
@@ -108,7 +169,7 @@ export interface LitzConductorDescription {
   /** Outer diameter of the bundle [m], > 0; default from a packing factor of 0.5 (common practice). */
   readonly outerDiameter?: QuantityInput;
   /** Conductor material id or a material set; default `"copper"`. */
-  readonly material?: string | ConductiveMaterial;
+  readonly material?: ConductorMaterialId | ConductiveMaterial;
 }
 
 /**
@@ -124,7 +185,7 @@ export interface TubeConductorDescription {
   /** Wall thickness [m], > 0 and less than half the outer diameter. */
   readonly wallThickness: QuantityInput;
   /** Conductor material id or a material set; default `"copper"`. */
-  readonly material?: string | ConductiveMaterial;
+  readonly material?: ConductorMaterialId | ConductiveMaterial;
 }
 
 /**
@@ -212,7 +273,7 @@ export interface HeaterCapacitorBank {
  */
 export interface HeaterConcentrator {
   /** Core material id: `"inventedExampleFerrite"` or `"inventedExampleIronPowder"` (invented example sets), or in code a core material set. */
-  readonly material: string | CoreMaterial;
+  readonly material: ConcentratorMaterialId | CoreMaterial;
   /** Cross-section the coil's flux passes through [m²], > 0. */
   readonly crossSectionArea: QuantityInput;
   /** Volume of magnetic material [m³], > 0. */
@@ -222,7 +283,7 @@ export interface HeaterConcentrator {
 /** Fields shared by every part shape. @category Heater study */
 export interface PartCommon {
   /** Material id from the materials catalogue (`"lowCarbonSteel"`, `"mediumCarbonSteel"`, `"austeniticStainless"`, …), or in code a material set such as the exported `lowCarbonSteel`. */
-  readonly material: string | ConductiveMaterial;
+  readonly material: PartMaterialId | ConductiveMaterial;
   /** Temperature at the start of heating [K], > 0; default the ambient temperature. */
   readonly startTemperature?: QuantityInput;
   /** Temperature to reach [K], > start temperature. */

@@ -1,7 +1,10 @@
 /**
  * The heater study: one description of a design in, every number a designer needs out.
  *
- * @module study
+ * Import from `fluxwright/study` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/study.md
+ * @module fluxwright/study
  */
 export type {
   QuantityInput,
@@ -26,8 +29,15 @@ export type {
   HeaterPart,
   HeaterEnvironment,
   HeaterDescription,
+  ConductorMaterialId,
+  PartMaterialId,
+  ConcentratorMaterialId,
+  SeriesInverterCommon,
+  FixedFrequencySeriesInverterDescription,
+  PowerTrackingSeriesInverterDescription,
 } from "./description.js";
 export { readHeaterDescription, HeaterDescriptionError } from "./read-description.js";
+export type { ReadHeaterDescriptionOptions } from "./read-description.js";
 export type {
   ResolvedSupply,
   ResolvedCurrentFedInverter,

@@ -142,7 +142,11 @@ export interface HeaterOperatingPoint {
   readonly validity: readonly ValidityNote[];
 }
 
-/** The empty coil's fixed properties (independent of frequency and part). */
+/**
+ * The empty coil's fixed properties (independent of frequency and part).
+ *
+ * @category Heater study
+ */
 export interface CoilProperties {
   /** Inductance of the empty coil [H]. */
   readonly inductance: number;

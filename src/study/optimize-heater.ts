@@ -6,7 +6,7 @@
  */
 import { InputError, requireKnownKeys } from "../core/index.js";
 import { specificHeatAt } from "../materials/index.js";
-import { parseQuantity } from "../units/index.js";
+import { formatQuantity, parseQuantity } from "../units/index.js";
 import { E12, E24 } from "../tank/index.js";
 import type { HeaterConductor, HeaterDescription, QuantityInput } from "./description.js";
 import { coilProperties, heaterOperatingPoint } from "./operating-point.js";
@@ -133,6 +133,11 @@ export interface HeaterOptimization {
   readonly best: readonly HeaterCandidate[];
   /** Why the others failed, most common first. */
   readonly rejected: readonly HeaterRejection[];
+  /**
+   * What makes the ranking misleading, in words (empty when nothing does): e.g. a part-power
+   * goal for a power-tracking inverter, whose tank power the searched variables do not change.
+   */
+  readonly warnings: readonly string[];
 }
 
 function quantity(path: string, value: QuantityInput | undefined, unit: string): number | null {
@@ -206,7 +211,8 @@ export interface HeaterSearchOptions {
  * @example
  * ```ts
  * import { optimizeHeater } from "fluxwright";
- * const base = {
+ * import type { HeaterDescription } from "fluxwright";
+ * const base: HeaterDescription = {
  *   supply: { kind: "battery", voltage: "48 V" },
  *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
  *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
@@ -220,7 +226,7 @@ export interface HeaterSearchOptions {
  * ```
  * @category Heater study
  */
-export function optimizeHeater(description: unknown, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
+export function optimizeHeater(description: HeaterDescription, goal: HeaterGoal, options: HeaterSearchOptions = {}): HeaterOptimization {
   if (typeof options !== "object" || options === null || Array.isArray(options)) throw new InputError(WHERE, "options", options, "", "an object");
   requireKnownKeys(WHERE, "options", options, ["onProgress"]);
   if (options.onProgress !== undefined && typeof options.onProgress !== "function") {
@@ -254,7 +260,7 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
   if (maxVoltage !== null) limits.set("tankVoltagePeak", Math.min(maxVoltage, limits.get("tankVoltagePeak") ?? Infinity));
   if (maxCurrent !== null) limits.set("coilCurrentRms", Math.min(maxCurrent, limits.get("coilCurrentRms") ?? Infinity));
   const search = goal.search ?? {};
-  const raw = structuredClone(description) as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
+  const raw = structuredClone(description) as unknown as Record<string, unknown> & { coil: Record<string, unknown>; capacitor: Record<string, unknown>; inverter: Record<string, unknown> };
   const turnsList = search.turns ?? Array.from({ length: 2 * base.coil.turns - Math.max(1, Math.round(base.coil.turns / 2)) + 1 }, (_, i) => Math.max(1, Math.round(base.coil.turns / 2)) + i);
   turnsList.forEach((t, i) => {
     if (!Number.isInteger(t) || t < 1) throw new InputError(WHERE, `goal.search.turns[${i}]`, t, "", "an integer ≥ 1");
@@ -378,5 +384,13 @@ export function optimizeHeater(description: unknown, goal: HeaterGoal, options: 
     description: f.variant,
   }));
   const rejected = [...rejections.entries()].map(([reason, count]) => ({ reason, count })).sort((a, b) => b.count - a.count);
-  return { evaluated, feasible: feasible.length, best, rejected };
+  const warnings: string[] = [];
+  if (targetPower !== null && base.inverter.kind === "voltage-fed-series" && base.inverter.control === "power-tracking" && base.inverter.targetPower !== null) {
+    warnings.push(
+      `the goal is a part power of ${formatQuantity(targetPower, "W", { digits: 4 })}, but the inverter holds the tank power at inverter.targetPower = ${formatQuantity(base.inverter.targetPower, "W", { digits: 4 })}; ` +
+        "the searched turns and capacitance change only the efficiency, so the designs closest to the goal are the least efficient ones. " +
+        "Set inverter.targetPower to the goal divided by the efficiency you expect, and search for a heat-up time (or compare efficiencies) instead.",
+    );
+  }
+  return { evaluated, feasible: feasible.length, best, rejected, warnings };
 }

@@ -4,11 +4,12 @@
  *
  * @packageDocumentation
  */
-import { InputError } from "../core/index.js";
+import { InputError, requireKnownKeys } from "../core/index.js";
 import { conductiveMaterials, inventedExampleFerrite, inventedExampleIronPowder } from "../materials/index.js";
 import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
 import { checkConductiveMaterial } from "../materials/check-material.js";
-import { celsius, parseQuantity } from "../units/index.js";
+import { celsius, formatQuantity, parseQuantity, ZERO_CELSIUS } from "../units/index.js";
+import { canonicalUnit } from "../units/unit-symbols.js";
 
 const WHERE = "readHeaterDescription";
 
@@ -289,10 +290,63 @@ const CORE_MATERIALS: Readonly<Record<string, CoreMaterial>> = {
 
 /** Problems collected before the reader stops (a huge malformed file would list millions). */
 const MAX_PROBLEMS = 200;
+/** Text that is only a number: it says nothing of its unit. */
+const BARE_NUMBER_TEXT = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/u;
+/** Lengths in inches or mils (`"1.25 in"`, `"40 mil"`), which the units module converts exactly (1 in = 25.4 mm). */
+const INCH_TEXT = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(in|inch|inches|mil|mils)\s*$/u;
+
+/** The unit a person would most likely write for each SI unit, for examples in messages. */
+const EXAMPLE_UNIT: Readonly<Record<string, string>> = {
+  m: "mm", F: "µF", H: "µH", V: "V", Ω: "mΩ", A: "A", Hz: "kHz", W: "W", K: "°C", "m²": "cm²", "m³": "cm³", "W/(m²·K)": "W/(m²·K)",
+};
+
+/** An example text for a quantity in `unit`. */
+function unitExample(unit: string): string {
+  return { m: "30 mm", F: "4.7 µF", H: "200 µH", V: "24 V", Ω: "10 mΩ", A: "50 A", Hz: "25 kHz", W: "1.5 kW", K: "20 °C", "m²": "6 cm²", "m³": "30 cm³", "W/(m²·K)": "10 W/(m²·K)", "": "0.5" }[unit] ?? "1";
+}
+
+/** The message for a bare number where a unit is needed: shows the fix with the number as written. */
+function bareNumberFix(value: number, unit: string): string {
+  const likely = EXAMPLE_UNIT[unit] ?? unit;
+  const written = Number.isFinite(value) ? String(value) : "1";
+  const alternative = likely === unit ? "" : ` or "${written} ${unit}"`;
+  return `a quantity with its unit, e.g. "${written} ${likely}"${alternative} (a bare number has no unit in a study file)`;
+}
+
+/**
+ * A limit for a message, in the unit the user wrote for the field (`"30 mm"` → mm, `"850 °C"`
+ * → °C, `"1.25 in"` → in), else with an SI prefix; 4 significant digits, the unit after the number.
+ */
+function limitText(value: number, unit: string, written: unknown): string {
+  const digits = (x: number): string => String(Number(x.toPrecision(4)));
+  if (!Number.isFinite(value)) return String(value);
+  if (typeof written === "string") {
+    const inch = INCH_TEXT.exec(written);
+    if (inch !== null && unit === "m") {
+      const mil = inch[2]?.startsWith("mil") === true;
+      return `${digits(value / (mil ? 2.54e-5 : 0.0254))} ${mil ? "mil" : "in"}`;
+    }
+    const suffix = /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*(\S.*?)\s*$/u.exec(written)?.[1];
+    if (suffix !== undefined) {
+      if (unit === "K" && canonicalUnit(suffix) === "°C") return `${digits(value - ZERO_CELSIUS)} °C`;
+      try {
+        const scale = parseQuantity(`1 ${suffix}`, unit);
+        if (unit !== "K" && scale > 0) return `${digits(value / scale)} ${suffix}`;
+      } catch {
+        // not a unit we can scale to: fall through to the prefixed SI form
+      }
+    }
+  }
+  if (unit === "K") return `${digits(value - ZERO_CELSIUS)} °C`;
+  return formatQuantity(value, unit, { digits: 4 });
+}
 
 /** The reader: converts and checks fields, recording problems instead of stopping at the first. */
 class Reader {
   readonly problems: InputError[] = [];
+
+  /** Refuse bare numbers for quantities with a dimension (study files). */
+  constructor(readonly requireUnits = false) {}
 
   fail(path: string, value: unknown, unit: string, expected: string): number {
     this.problems.push(new InputError(WHERE, path, value, unit, expected));
@@ -326,26 +380,33 @@ class Reader {
     return value as T;
   }
 
-  /** A quantity: a number in SI, or text in `unit` (parsed by parseQuantity). NaN after a problem. */
+  /**
+   * A quantity: text with a unit (`"30 mm"`, `"1.25 in"`, `"850 °C"`), or a number in SI. With
+   * `requireUnits` (study files) a bare number is refused where the field has a dimension; text
+   * that is only a number (`"2.2"`) is refused everywhere a unit is expected. NaN after a problem.
+   */
   quantity(path: string, value: unknown, unit: string, check: "positive" | "non-negative", required = true): number {
     if (value === undefined) {
       return required ? this.fail(path, value, unit, check === "positive" ? "a finite number > 0" : "a finite number ≥ 0") : Number.NaN;
     }
     let v: number;
     if (typeof value === "number") {
+      if (this.requireUnits && unit !== "") return this.fail(path, value, "", bareNumberFix(value, unit));
       v = value;
     } else if (typeof value === "string") {
+      if (unit !== "" && BARE_NUMBER_TEXT.test(value)) return this.fail(path, value, "", bareNumberFix(Number(value.trim()), unit));
+      const inch = unit === "m" ? INCH_TEXT.exec(value) : null;
       try {
-        v = parseQuantity(value, unit);
+        v = inch === null ? parseQuantity(value, unit) : (Number(inch[1]) * 254) / (inch[2]?.startsWith("mil") === true ? 1e7 : 1e4);
       } catch (e) {
         if (!(e instanceof InputError)) throw e;
         // a well-formed temperature below absolute zero: out of range, not unreadable
         if (e.expected.includes("absolute zero")) return this.fail(path, value, unit, check === "positive" ? "a finite number > 0" : "a finite number ≥ 0");
-        const example = { m: "30 mm", F: "4.7 µF", H: "200 µH", V: "24 V", Ω: "10 mΩ", A: "50 A", Hz: "25 kHz", W: "1.5 kW", K: "20 °C", "m²": "1e-4 m²", "m³": "2e-6 m³", "": "0.5" }[unit] ?? "1";
+        const example = unitExample(unit);
         return this.fail(path, value, "", unit === "" ? `a number, e.g. "${example}"` : `a quantity in ${unit}, e.g. "${example}"`);
       }
     } else {
-      return this.fail(path, value, unit, unit === "" ? "a number" : "a number (SI) or a quantity text");
+      return this.fail(path, value, "", unit === "" ? "a number" : `a quantity text with its unit, e.g. "${unitExample(unit)}"`);
     }
     if (!Number.isFinite(v)) return this.fail(path, value, unit, "a finite number");
     if (check === "positive" && !(v > 0)) return this.fail(path, value, unit, "a finite number > 0");
@@ -359,13 +420,6 @@ class Reader {
 
   optionalOrNull(path: string, value: unknown, unit: string): number | null {
     return value === undefined ? null : this.quantity(path, value, unit, "positive");
-  }
-
-  /** A plain non-negative number (no text form), e.g. a convection coefficient. */
-  plainNumber(path: string, value: unknown, unit: string, fallback: number): number {
-    if (value === undefined) return fallback;
-    if (typeof value !== "number" || !Number.isFinite(value) || value < 0) return this.fail(path, value, unit, "a finite number ≥ 0");
-    return value;
   }
 
   integer(path: string, value: unknown, min: number): number {
@@ -421,8 +475,8 @@ function readConductor(rd: Reader, path: string, value: unknown): ResolvedConduc
     // default bundle diameter: copper area over a packing factor of 0.5 (common practice for served litz)
     const packed = strandDiameter * Math.sqrt(strands / 0.5);
     const outerDiameter = rd.optional(`${path}.outerDiameter`, o.outerDiameter, "m", "positive", packed);
-    if (outerDiameter < strandDiameter * Math.sqrt(strands)) {
-      rd.fail(`${path}.outerDiameter`, o.outerDiameter, "m", `≥ strandDiameter × √strands = ${strandDiameter * Math.sqrt(strands)}`);
+    if (outerDiameter < strandDiameter * Math.sqrt(strands) * (1 - 1e-12)) {
+      rd.fail(`${path}.outerDiameter`, o.outerDiameter, "", `≥ strandDiameter × √strands = ${limitText(strandDiameter * Math.sqrt(strands), "m", o.outerDiameter)}`);
     }
     return material === undefined ? undefined : { kind, strands, strandDiameter, outerDiameter, material };
   }
@@ -430,7 +484,7 @@ function readConductor(rd: Reader, path: string, value: unknown): ResolvedConduc
     extra(["outerDiameter", "wallThickness"]);
     const outerDiameter = rd.quantity(`${path}.outerDiameter`, o.outerDiameter, "m", "positive");
     const wallThickness = rd.quantity(`${path}.wallThickness`, o.wallThickness, "m", "positive");
-    if (wallThickness * 2 >= outerDiameter) rd.fail(`${path}.wallThickness`, o.wallThickness, "m", `< outerDiameter / 2 = ${outerDiameter / 2}`);
+    if (wallThickness * 2 >= outerDiameter) rd.fail(`${path}.wallThickness`, o.wallThickness, "", `< outerDiameter / 2 = ${limitText(outerDiameter / 2, "m", o.wallThickness)}`);
     return material === undefined ? undefined : { kind, outerDiameter, wallThickness, material };
   }
   return undefined;
@@ -457,8 +511,8 @@ function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
     forbid(["innerRadius", "outerRadius", "liftOff"]);
     const radius = rd.quantity("coil.radius", o.radius, "m", "positive");
     const length = rd.quantity("coil.length", o.length, "m", "positive");
-    if (length / turns < d * (1 - 1e-12)) rd.fail("coil.length", o.length, "m", `≥ turns × conductor diameter = ${turns * d} (turns would overlap)`);
-    if (radius < d / 2) rd.fail("coil.radius", o.radius, "m", `≥ half the conductor diameter = ${d / 2}`);
+    if (length / turns < d * (1 - 1e-12)) rd.fail("coil.length", o.length, "", `≥ turns × conductor diameter = ${limitText(turns * d, "m", o.length)} (turns would overlap)`);
+    if (radius < (d / 2) * (1 - 1e-12)) rd.fail("coil.radius", o.radius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.radius)}`);
     return conductor === undefined ? undefined : { shape, radius, length, turns, conductor, leadLength, temperature };
   }
   if (shape === "pancake") {
@@ -466,11 +520,11 @@ function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
     const innerRadius = rd.quantity("coil.innerRadius", o.innerRadius, "m", "positive");
     const outerRadius = rd.quantity("coil.outerRadius", o.outerRadius, "m", "positive");
     const liftOff = rd.quantity("coil.liftOff", o.liftOff, "m", "non-negative");
-    if (turns > 1 && !(outerRadius > innerRadius)) rd.fail("coil.outerRadius", o.outerRadius, "m", `> coil.innerRadius = ${innerRadius}`);
+    if (turns > 1 && !(outerRadius > innerRadius)) rd.fail("coil.outerRadius", o.outerRadius, "", `> coil.innerRadius = ${limitText(innerRadius, "m", o.outerRadius)}`);
     if (turns > 1 && (outerRadius - innerRadius) / (turns - 1) < d * (1 - 1e-12)) {
-      rd.fail("coil.outerRadius", o.outerRadius, "m", `≥ innerRadius + (turns − 1) × conductor diameter = ${innerRadius + (turns - 1) * d} (turns would overlap)`);
+      rd.fail("coil.outerRadius", o.outerRadius, "", `≥ innerRadius + (turns − 1) × conductor diameter = ${limitText(innerRadius + (turns - 1) * d, "m", o.outerRadius)} (turns would overlap)`);
     }
-    if (innerRadius < d / 2) rd.fail("coil.innerRadius", o.innerRadius, "m", `≥ half the conductor diameter = ${d / 2}`);
+    if (innerRadius < (d / 2) * (1 - 1e-12)) rd.fail("coil.innerRadius", o.innerRadius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.innerRadius)}`);
     return conductor === undefined ? undefined : { shape, innerRadius, outerRadius, turns, liftOff, conductor, leadLength, temperature };
   }
   return undefined;
@@ -518,9 +572,9 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
   const material = rd.material("part.material", o.material, MATERIAL_IDS);
   const startTemperature = rd.optional("part.startTemperature", o.startTemperature, "K", "positive", ambient);
   const targetTemperature = rd.quantity("part.targetTemperature", o.targetTemperature, "K", "positive");
-  if (targetTemperature <= startTemperature) rd.fail("part.targetTemperature", o.targetTemperature, "K", `> part.startTemperature = ${startTemperature}`);
+  if (targetTemperature <= startTemperature) rd.fail("part.targetTemperature", o.targetTemperature, "", `> part.startTemperature = ${limitText(startTemperature, "K", o.targetTemperature)}`);
   if (material !== undefined && targetTemperature >= material.meltingTemperature) {
-    rd.fail("part.targetTemperature", o.targetTemperature, "K", `< the melting temperature of ${material.name} = ${material.meltingTemperature}`);
+    rd.fail("part.targetTemperature", o.targetTemperature, "", `< the melting temperature of ${material.name} = ${limitText(material.meltingTemperature, "K", o.targetTemperature)}`);
   }
   const emissivity = rd.ratio("part.emissivity", o.emissivity, 0, 1, true, material?.emissivity.typical ?? 0.5);
   const fields: Record<string, readonly string[]> = {
@@ -563,18 +617,32 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
     case "tube": {
       const outerRadius = dim("outerRadius");
       const wallThickness = dim("wallThickness");
-      if (wallThickness >= outerRadius) rd.fail("part.wallThickness", o.wallThickness, "m", `< part.outerRadius = ${outerRadius}`);
+      if (wallThickness >= outerRadius) rd.fail("part.wallThickness", o.wallThickness, "", `< part.outerRadius = ${limitText(outerRadius, "m", o.wallThickness)}`);
       return { ...common, shape, outerRadius, wallThickness, length: dim("length") };
     }
     case "ring": {
       const outerRadius = dim("outerRadius");
       const innerRadius = dim("innerRadius");
-      if (innerRadius >= outerRadius) rd.fail("part.innerRadius", o.innerRadius, "m", `< part.outerRadius = ${outerRadius}`);
+      if (innerRadius >= outerRadius) rd.fail("part.innerRadius", o.innerRadius, "", `< part.outerRadius = ${limitText(outerRadius, "m", o.innerRadius)}`);
       return { ...common, shape, outerRadius, innerRadius, height: dim("height") };
     }
     case "plate":
       return { ...common, shape, length: dim("length"), width: dim("width"), thickness: dim("thickness") };
   }
+}
+
+/**
+ * Options of {@link readHeaterDescription}.
+ *
+ * @category Heater study
+ */
+export interface ReadHeaterDescriptionOptions {
+  /**
+   * Refuse a bare number for a quantity with a dimension (`"radius": 32` must be written
+   * `"32 mm"`), as study files must: the command line reads files this way. Default `false`:
+   * descriptions built in code may give SI numbers.
+   */
+  readonly requireUnits?: boolean;
 }
 
 /**
@@ -594,6 +662,7 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
  * pancake coil takes plates).
  *
  * @param input - the description (e.g. `JSON.parse` of a study file)
+ * @param options - `requireUnits: true` refuses bare numbers for quantities with a dimension
  * @returns the resolved description
  * @throws {@link HeaterDescriptionError} (an {@link InputError} whose `parameter` is the field
  * path of the first problem and whose `problems` lists them all), e.g.
@@ -609,8 +678,10 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
  * ```
  * @category Heater study
  */
-export function readHeaterDescription(input: unknown): ResolvedHeaterDescription {
-  const rd = new Reader();
+export function readHeaterDescription(input: unknown, options: ReadHeaterDescriptionOptions = {}): ResolvedHeaterDescription {
+  requireKnownKeys(WHERE, "options", options, ["requireUnits"]);
+  if (options.requireUnits !== undefined && typeof options.requireUnits !== "boolean") throw new InputError(WHERE, "options.requireUnits", options.requireUnits, "", "a boolean");
+  const rd = new Reader(options.requireUnits === true);
   const top = rd.object("", input, ["$schema", "title", "notes", "supply", "inverter", "coil", "capacitor", "concentrator", "part", "environment"]);
   if (top === undefined) throw new HeaterDescriptionError([new InputError(WHERE, "description", input, "", "an object")]);
   if (top.title !== undefined && typeof top.title !== "string") rd.fail("title", top.title, "", "a string");
@@ -665,7 +736,7 @@ export function readHeaterDescription(input: unknown): ResolvedHeaterDescription
     if (eo !== undefined) {
       environment = {
         ambientTemperature: rd.optional("environment.ambientTemperature", eo.ambientTemperature, "K", "positive", celsius(20)),
-        convectionCoefficient: rd.plainNumber("environment.convectionCoefficient", eo.convectionCoefficient, "W/(m²·K)", 10),
+        convectionCoefficient: rd.optional("environment.convectionCoefficient", eo.convectionCoefficient, "W/(m²·K)", "non-negative", 10),
       };
     }
   }
@@ -678,7 +749,9 @@ export function readHeaterDescription(input: unknown): ResolvedHeaterDescription
     if (coil.shape === "solenoid" && part.shape !== "plate") {
       const outer = part.shape === "bar" ? part.radius : part.outerRadius;
       const bore = coil.radius - conductorOuterDiameter(coil.conductor) / 2;
-      if (outer >= bore) rd.fail(part.shape === "bar" ? "part.radius" : "part.outerRadius", outer, "m", `< the coil's bore radius (coil.radius − conductor diameter / 2) = ${bore}`);
+      const key = part.shape === "bar" ? "radius" : "outerRadius";
+      const written = (top.part as Record<string, unknown>)[key];
+      if (outer >= bore) rd.fail(`part.${key}`, written, "", `< the coil's bore radius (coil.radius − conductor diameter / 2) = ${limitText(bore, "m", written)}`);
     }
   }
 

@@ -17,6 +17,7 @@ import { NoOscillationError, coilImpedanceAt, coilProperties, heaterOperatingPoi
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
 import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
+import type { HeaterDescription } from "./description.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints", "radialHeatUp"]);
@@ -182,6 +183,10 @@ export interface HeaterTemperatureScan {
   readonly inductances: readonly number[];
   /** Bands of temperature without an operating point, lowest first (their points are left out above). */
   readonly unsolvedBands: readonly HeaterUnsolvedBand[];
+  /** RMS coil current [A]. */
+  readonly coilCurrentsRms: readonly number[];
+  /** Peak tank (coil) voltage [V]. */
+  readonly tankVoltagesPeak: readonly number[];
 }
 
 /**
@@ -510,7 +515,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * ```
  * @category Heater study
  */
-export function studyHeater(description: unknown, options: StudyHeaterOptions = {}): HeaterStudy {
+export function studyHeater(description: HeaterDescription, options: StudyHeaterOptions = {}): HeaterStudy {
   requireObject("studyHeater", "options", options);
   requireKnownKeys("studyHeater", "options", options, STUDY_OPTION_FIELDS);
   const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
@@ -642,6 +647,8 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       relativePermeabilities: points.map((p) => p.partRelativePermeability),
       inductances: points.map((p) => p.inductance),
       unsolvedBands: curve.bands,
+      coilCurrentsRms: points.map((p) => p.coilCurrentRms),
+      tankVoltagesPeak: points.map((p) => p.tankVoltagePeak),
     };
   }
 
@@ -649,9 +656,14 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
   let impedance: HeaterImpedanceSweep | null = null;
   if (options.impedanceSweep !== false) {
     const f0 = emptyCoil.frequency;
-    const count = 41;
+    // a decade around the empty coil's resonance, widened to show every operating point (a
+    // power-tracking bridge may run several times above resonance) with a 25 % margin
+    const running = allPoints.map((p) => p.frequency).filter((f) => f > 0);
+    const low = Math.log10(Math.min(f0 / Math.sqrt(10), ...running.map((f) => f / 1.25)));
+    const high = Math.log10(Math.max(f0 * Math.sqrt(10), ...running.map((f) => f * 1.25)));
+    const count = Math.max(41, Math.ceil(40 * (high - low)) + 1);
     const frequencies: number[] = [];
-    for (let i = 0; i < count; i++) frequencies.push(f0 * 10 ** (-0.5 + i / (count - 1)));
+    for (let i = 0; i < count; i++) frequencies.push(10 ** (low + ((high - low) * i) / (count - 1)));
     const tank = (L: number, R: number) =>
       d.inverter.kind === "current-fed-parallel"
         ? parallelNetwork(capacitorElement(d.capacitor.capacitance), inductorElement(L, R))
@@ -684,7 +696,7 @@ export function studyHeater(description: unknown, options: StudyHeaterOptions = 
       value: bands[0]?.from ?? 0,
     });
   }
-  const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity);
+  const cautions = heaterCautions(d, facts, allPoints, heatUp?.finalTemperature ?? part.targetTemperature, validity, heatUp?.steadyStateTemperature ?? null);
   // the operating points' own cautions (tank voltage, hard switching) join the list once per code:
   // the safety module's caution of the same code, or the first point's, stands for the rest
   const latched = bands.filter((band) => band.noOscillation);
@@ -792,7 +804,7 @@ function radialPart(
   }
   validity.push({
     code: "radial-heat-up",
-    message: `Surface and core from the radial model: the power by depth is the exact long-coil field in ${r.positions.length} shells with their own ρ(T) and μr(T, H), at the coil current and frequency of the operating point at the surface temperature, scaled by the study's finite-coil over long-coil power for the part uniform at that temperature (the tank's response to the profile is not followed); the profile changed the power by up to ${(100 * deviation).toPrecision(2)} % against the part uniform at its surface temperature in this run; the power is spread over the part's length (an axial average) and its ends${bore > 0 ? " and bore are" : " are"} taken as insulated.`,
+    message: `Surface and core from the radial model: the power by depth is the exact long-coil field in ${r.positions.length} shells with their own ρ(T) and μr(T, H), at the coil current and frequency of the operating point at the surface temperature, scaled by the study's finite-coil over long-coil power for the part uniform at that temperature (the tank's response to the profile is not followed); the profile changed the power by up to ${Number((100 * deviation).toPrecision(2)).toString()} % against the part uniform at its surface temperature in this run; the power is spread over the part's length (an axial average) and its ends${bore > 0 ? " and bore are" : " are"} taken as insulated.`,
     value: deviation,
   });
   for (const note of r.validity) if (note.code !== "short-coil") validity.push(note);

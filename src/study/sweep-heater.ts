@@ -3,8 +3,10 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireKnownKeys } from "../core/index.js";
-import type { QuantityInput } from "./description.js";
+import { InputError, nearestName, requireKnownKeys } from "../core/index.js";
+import { HeaterDescriptionError, readHeaterDescription } from "./read-description.js";
+import type { HeaterDescription, QuantityInput } from "./description.js";
+import type { ReadHeaterDescriptionOptions } from "./read-description.js";
 import { studyHeater } from "./study-heater.js";
 import { summarise } from "./summary.js";
 import type { HeaterSummary } from "./summary.js";
@@ -21,6 +23,11 @@ export interface HeaterSweepSpec {
   readonly values: readonly QuantityInput[];
   /** Also run the electro-thermal heat-up for each value (default `true`). */
   readonly heatUp?: boolean;
+  /**
+   * Read the description and the values as a study file is read (default `false`): a bare
+   * number for a field with a dimension is refused (see {@link ReadHeaterDescriptionOptions}).
+   */
+  readonly requireUnits?: boolean;
 }
 
 /**
@@ -49,6 +56,17 @@ export interface HeaterSweep {
   readonly field: string;
   /** One row per value, in the order given. */
   readonly rows: readonly HeaterSweepRow[];
+}
+
+/** The problems of a description (empty when it reads). */
+function problemsOf(description: unknown, options: ReadHeaterDescriptionOptions): readonly InputError[] {
+  try {
+    readHeaterDescription(description, options);
+    return [];
+  } catch (e) {
+    if (e instanceof HeaterDescriptionError) return e.problems;
+    throw e;
+  }
 }
 
 /** Whether the path names a field whose parent object exists in the description. */
@@ -81,12 +99,15 @@ function setField(root: unknown, path: string, value: unknown): unknown {
  * @param description - the base design (see {@link HeaterDescription})
  * @param sweep - `field` (dotted path) and `values`
  * @returns the table
- * @throws {@link InputError} when the base description is invalid, `field` is not a dotted path
+ * @throws {@link InputError} when the base description is invalid, `field` is not a field of
+ * the description (a typo such as `coil.turn`, with the nearest field suggested), a value is a
+ * bare number for a field with a dimension under `requireUnits`, `field` is not a dotted path
  * to a numeric field, or `values` is empty or holds something other than numbers and strings
  * @example
  * ```ts
  * import { sweepHeater } from "fluxwright";
- * const base = {
+ * import type { HeaterDescription } from "fluxwright";
+ * const base: HeaterDescription = {
  *   supply: { kind: "battery", voltage: "48 V" },
  *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
  *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
@@ -100,10 +121,10 @@ function setField(root: unknown, path: string, value: unknown): unknown {
  * ```
  * @category Heater study
  */
-export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): HeaterSweep {
+export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSpec): HeaterSweep {
   const where = "sweepHeater";
   if (typeof sweep !== "object" || sweep === null) throw new InputError(where, "sweep", sweep, "", "an object { field, values }");
-  requireKnownKeys(where, "sweep", sweep, ["field", "values", "heatUp"]);
+  requireKnownKeys(where, "sweep", sweep, ["field", "values", "heatUp", "requireUnits"]);
   if (typeof sweep.field !== "string" || !/^[A-Za-z]\w*(\.[A-Za-z]\w*)*$/.test(sweep.field)) {
     throw new InputError(where, "field", sweep.field, "", "a dotted field path such as \"coil.turns\"");
   }
@@ -112,11 +133,30 @@ export function sweepHeater(description: unknown, sweep: HeaterSweepSpec): Heate
   values.forEach((v, i) => {
     if (typeof v !== "number" && typeof v !== "string") throw new InputError(where, `values[${i}]`, v, "", "a number or a quantity text");
   });
+  if (sweep.requireUnits !== undefined && typeof sweep.requireUnits !== "boolean") throw new InputError(where, "requireUnits", sweep.requireUnits, "", "a boolean");
+  const requireUnits = sweep.requireUnits === true;
   // the base must be valid (otherwise every row would carry the same problem)
+  readHeaterDescription(description, { requireUnits });
   studyHeater(description, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+  // a field the description does not have (a typo such as coil.turn) would fail every row: refuse it
+  values.forEach((value, i) => {
+    const problems = problemsOf(setField(description, sweep.field, value), { requireUnits });
+    for (const p of problems) {
+      if (p.parameter !== sweep.field) continue;
+      const known = /known fields: (.*)\)$/u.exec(p.expected)?.[1]?.split(", ");
+      if (known !== undefined || p.expected.startsWith("absent")) {
+        const parent = sweep.field.split(".").slice(0, -1).join(".");
+        const near = known === undefined ? null : nearestName(sweep.field.split(".").pop() ?? "", known);
+        const hint = near !== null ? ` (did you mean ${JSON.stringify(parent === "" ? near : `${parent}.${near}`)}?)` : known === undefined ? ` (${p.expected})` : ` (fields there: ${known.join(", ")})`;
+        throw new InputError(where, "field", sweep.field, "", `a field of the description${hint}`);
+      }
+      if (p.expected.includes("a bare number has no unit")) throw new InputError(where, `values[${i}]`, value, "", p.expected);
+    }
+  });
   const rows: HeaterSweepRow[] = values.map((value: QuantityInput): HeaterSweepRow => {
-    const variant = setField(description, sweep.field, value);
+    const variant = setField(description, sweep.field, value) as HeaterDescription;
     try {
+      if (requireUnits) readHeaterDescription(variant, { requireUnits });
       const s = studyHeater(variant, { heatUp: sweep.heatUp !== false, radialHeatUp: false, temperatureScan: false, impedanceSweep: false });
       return { value, summary: summarise(s.operating, s.emptyCoil, s.heatUp?.timeToTarget ?? null), cautionCount: s.cautions.length, problem: null };
     } catch (e) {

@@ -1,7 +1,10 @@
 /**
  * Resonant tanks and inverter operating points: series, parallel, LCL and LCC networks, stresses and capacitor banks.
  *
- * @module tank
+ * Import from `fluxwright/tank` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/tanks.md
+ * @module fluxwright/tank
  */
 export * from "./network.js";
 export * from "./series-tank.js";

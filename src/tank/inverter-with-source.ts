@@ -209,7 +209,7 @@ export function seriesInverterWithSource(options: SeriesInverterWithSourceOption
     if (rs > 0) {
       const maxSource = (vs * vs) / (4 * rs);
       if (p > maxSource) {
-        throw new InputError(where, "power", p, "", `≤ ${maxSource} W, the most a ${vs} V source behind ${rs} Ω delivers to any load (V²/4R)`);
+        throw new InputError(where, "power", p, "W", `a finite number ≤ ${maxSource} (the most a ${Number(vs.toPrecision(4))} V source behind ${Number(rs.toPrecision(4))} Ω delivers to any load, V²/4R)`);
       }
       vin = 0.5 * (vs + Math.sqrt(Math.max(0, vs * vs - 4 * rs * p)));
     } else {
@@ -218,7 +218,7 @@ export function seriesInverterWithSource(options: SeriesInverterWithSourceOption
     const v1 = ((bridge === "half" ? 2 : 4) * vin) / Math.PI;
     const maxTank = (v1 * v1) / (2 * tankResistance);
     if (p > maxTank) {
-      throw new InputError(where, "power", p, "", `≤ ${maxTank} W, the tank's power at resonance with ${vin} V at the inverter input`);
+      throw new InputError(where, "power", p, "W", `a finite number ≤ ${maxTank} (the tank's power at resonance with ${Number(vin.toPrecision(4))} V at the inverter input)`);
     }
     const fs = frequencyForPower({ ...tank, supplyVoltage: vin, power: p });
     op = seriesInverter({ ...tank, supplyVoltage: vin, switchingFrequency: fs });

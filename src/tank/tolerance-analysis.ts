@@ -173,8 +173,8 @@ function rotl(x: number, k: number): number {
 
 /**
  * Monte Carlo of a tank's resonant frequency and current with component tolerances and
- * temperature coefficients. Each sample draws independent relative deviations $\delta_L,
- * \delta_C, \delta_R$ (uniform in ±tolerance, or normal with σ = tolerance/3) and one common
+ * temperature coefficients. Each sample draws independent relative deviations
+ * $\delta_L, \delta_C, \delta_R$ (uniform in ±tolerance, or normal with σ = tolerance/3) and one common
  * temperature change $\Delta T$ (uniform in [min, max]):
  *
  * $$

@@ -1,7 +1,10 @@
 /**
  * Heat-up of the part: lumped and 1-D conduction models, time to temperature.
  *
- * @module thermal
+ * Import from `fluxwright/thermal` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/thermal.md
+ * @module fluxwright/thermal
  */
 export { lumpedHeatUp } from "./lumped-heat-up.js";
 export type { LumpedHeatUpOptions, LumpedHeatUpResult, LumpedEnergyBalance } from "./lumped-heat-up.js";

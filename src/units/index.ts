@@ -2,7 +2,10 @@
  * SI prefixes, parsing and formatting of quantities, branded unit types, conversions,
  * physical constants and wire gauges.
  *
- * @module units
+ * Import from `fluxwright/units` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/units.md
+ * @module fluxwright/units
  */
 export * from "./constants.js";
 export * from "./quantities.js";

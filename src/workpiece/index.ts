@@ -4,7 +4,10 @@
  * around a rod (Dodd, Deeds & Luquire), a coil above a layered plate (Dodd & Deeds), coil
  * efficiency, and coupling re-evaluated at the part's temperature.
  *
- * @module workpiece
+ * Import from `fluxwright/workpiece` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/workpiece.md
+ * @module fluxwright/workpiece
  */
 export { bakerFunctions, bakerFunctionsAsymptotic } from "./baker.js";
 export type { BakerFunctions } from "./baker.js";

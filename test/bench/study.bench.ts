@@ -5,9 +5,9 @@
 import { bench, describe } from "vitest";
 import { readFileSync } from "node:fs";
 import { optimizeHeater, studyHeater } from "../../src/index.js";
-import type { HeaterConductor } from "../../src/index.js";
+import type { HeaterConductor, HeaterDescription } from "../../src/index.js";
 
-const race = JSON.parse(readFileSync(new URL("../../docs/examples/study-bearing-race.json", import.meta.url), "utf8")) as Record<string, unknown> & {
+const race = JSON.parse(readFileSync(new URL("../../docs/examples/study-bearing-race.json", import.meta.url), "utf8")) as HeaterDescription & {
   supply: Record<string, unknown>;
 };
 // random supply voltages prepared beforehand (36–60 V)
@@ -31,15 +31,15 @@ export const OPTIMISER_CONDUCTORS: HeaterConductor[] = [
 
 describe("heater study", () => {
   bench("studyHeater, single operating point (bearing race)", () => {
-    const s = studyHeater(variants[k++ % variants.length], { heatUp: false, temperatureScan: false, impedanceSweep: false });
+    const s = studyHeater(variants[k++ % variants.length] as HeaterDescription, { heatUp: false, temperatureScan: false, impedanceSweep: false });
     check(s.operating.frequency);
   }, { time: 300 });
   bench("studyHeater with the electro-thermal heat-up to target (bearing race)", () => {
-    const s = studyHeater(variants[k++ % variants.length], { temperatureScan: false, impedanceSweep: false });
+    const s = studyHeater(variants[k++ % variants.length] as HeaterDescription, { temperatureScan: false, impedanceSweep: false });
     check(s.heatUp?.timeToTarget ?? Number.NaN);
   }, { time: 300 });
   bench("studyHeater with the heat-up (plate warmer: pancake over a steel plate)", () => {
-    const s = studyHeater(plateVariants[k++ % plateVariants.length], { temperatureScan: false, impedanceSweep: false });
+    const s = studyHeater(plateVariants[k++ % plateVariants.length] as HeaterDescription, { temperatureScan: false, impedanceSweep: false });
     check(s.heatUp?.finalTemperature ?? Number.NaN);
   }, { time: 300, iterations: 2 });
   bench("optimizeHeater over 10 080 candidates (bearing race)", () => {

@@ -7,6 +7,7 @@ import { fileURLToPath } from "node:url";
 import { runCli } from "../../src/cli/commands.js";
 import type { CliIo } from "../../src/cli/commands.js";
 import { studyHeater } from "../../src/index.js";
+import type { HeaterDescription } from "../../src/index.js";
 import { mutate } from "../study/cases.js";
 import { findAll, parseXml } from "./xml.js";
 
@@ -40,7 +41,11 @@ describe("fluxwright study", () => {
     const text = read("study-bearing-race.json");
     const m = memoryIo({ "race.json": text });
     expect(runCli(["study", "race.json", "--json"], m.io)).toBe(0);
-    expect(JSON.parse(m.out())).toEqual(JSON.parse(JSON.stringify(studyHeater(JSON.parse(text)))));
+    const printed = JSON.parse(m.out()) as Record<string, unknown>;
+    const { format, formatVersion, fluxwright, input, ...study } = printed;
+    expect([format, formatVersion, fluxwright]).toEqual(["fluxwright-study", 1, "unknown"]);
+    expect(input).toEqual(JSON.parse(text));
+    expect(study).toEqual(JSON.parse(JSON.stringify(studyHeater(JSON.parse(text) as HeaterDescription))));
   });
 
   it("runs every example study file (exit 0, a text report with the key sections)", () => {
@@ -100,12 +105,26 @@ describe("fluxwright study", () => {
     expect(m.err()).toContain("part.thickness");
   });
 
-  it("a valid file whose design cannot run exits 1 with the reason, writing no report", () => {
+  it("a valid file whose design cannot run exits 3 with the limit formatted and what to change, writing no report", () => {
     const damped = mutate(mutate(JSON.parse(read("study-bearing-race.json")), "capacitor.capacitance", "1 F"), "coil.turns", 1);
     const m = memoryIo({ "damped.json": JSON.stringify(damped) });
-    expect(runCli(["study", "damped.json", "--html", "out.html"], m.io)).toBe(1);
-    expect(m.err()).toContain("the design cannot be studied");
+    expect(runCli(["study", "damped.json", "--html", "out.html"], m.io)).toBe(3);
+    const err = m.err();
+    expect(err).toContain("the file is valid but the design cannot run");
+    // prefixes and at most 4 significant digits, the unit right after the number
+    expect(err).toMatch(/< √\(L\/C\) = \d+(\.\d{1,3})? [mµ]Ω \(otherwise/);
+    expect(err).not.toMatch(/\d{6,}/);
+    expect(err).toMatch(/what to change: .*capacitor\.capacitance, now "1 F": fewer µF/);
     expect(m.written.size).toBe(0);
+  });
+
+  it("a power the bridge cannot deliver exits 3, quoting the target as written and the limit in W", () => {
+    const greedy = mutate(JSON.parse(read("study-plate-warmer.json")), "inverter.targetPower", "5 kW");
+    const m = memoryIo({ "greedy.json": JSON.stringify(greedy) });
+    expect(runCli(["study", "greedy.json"], m.io)).toBe(3);
+    expect(m.err()).toMatch(/≤ \d+(\.\d+)? k?W \(the tank's power at resonance with \d+(\.\d+)? V at the inverter input\), but it is 5 kW/);
+    expect(m.err()).toContain('Lower inverter.targetPower, now "5 kW"');
+    expect(m.err()).not.toMatch(/\d{6,}/);
   });
 
   it("a missing file, invalid JSON, or a wrong argument count exit 2", () => {

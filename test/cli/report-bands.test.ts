@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { studyHeater } from "../../src/index.js";
 import type { HeaterStudy } from "../../src/index.js";
-import { studyHtmlReport } from "../../src/cli/html-report.js";
-import { studyTextReport } from "../../src/cli/text-report.js";
+import { studyHtmlReport } from "../../src/report/html-report.js";
+import { studyTextReport } from "../../src/report/text-report.js";
 import { loadExample } from "../study/cases.js";
 
 // a band put into a real study (the demos have none): the reports must mark it

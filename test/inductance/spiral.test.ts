@@ -1,6 +1,7 @@
 import { describe, it, expect } from "vitest";
 import { InputError, MU_0 } from "../../src/index.js";
 import {
+  solenoidInductance,
   loopInductance,
   loopMutualInductance,
   spiralCoilInductance,
@@ -69,5 +70,23 @@ describe("spiralCoilInductance", () => {
     }
     expect(() => spiralCoilInductanceWheeler({ innerRadius: 0.02, outerRadius: 0.02, turns: 1 })).toThrow(InputError);
     expect(() => spiralCoilInductanceMohan({ innerRadius: 0.02, outerRadius: 0.05, turns: 3, wireDiameter: 0.02 })).toThrow(InputError);
+  });
+});
+
+describe("geometric limits compare with a relative tolerance", () => {
+  it("accepts touching turns whose computed pitch rounds below the wire (15 mm, 15 turns at 2 mm pitch, 2 mm wire)", () => {
+    // (0.043 − 0.015) / 14 = 0.0019999999999999996 in binary floating point (IEEE 754 rounding, checked by hand)
+    expect((0.043 - 0.015) / 14).toBeLessThan(0.002);
+    const touching = spiralCoilInductance({ innerRadius: 0.015, outerRadius: 0.015 + 14 * 0.002, turns: 15, wireDiameter: 0.002 });
+    const apart = spiralCoilInductance({ innerRadius: 0.015, outerRadius: 0.015 + 14 * 0.002, turns: 15, wireDiameter: 0.0019 });
+    expect(touching).toBeGreaterThan(0);
+    // a thicker wire has a smaller self-inductance per ring (Rosa's GMD correction), so touching < apart
+    expect(touching).toBeLessThan(apart);
+    expect(() => spiralCoilInductance({ innerRadius: 0.015, outerRadius: 0.043, turns: 15, wireDiameter: 0.00201 })).toThrow(InputError);
+  });
+
+  it("solenoid: touching turns when length / turns rounds below the wire (0.3 m / 3 turns of 0.1 m)", () => {
+    expect(0.3 / 3).toBeLessThan(0.1); // 0.09999999999999999 (IEEE 754 rounding)
+    expect(solenoidInductance({ radius: 0.2, length: 0.3, turns: 3, wireDiameter: 0.1 })).toBeGreaterThan(0);
   });
 });

@@ -3,14 +3,21 @@
  * test, the schema test and the CLI test.
  */
 import { readFileSync } from "node:fs";
+import type { HeaterDescription } from "../../src/index.js";
+
+/**
+ * A study file as read at run time: typed as a description for the study functions (which check
+ * every field at run time) and as a record for reaching into it.
+ */
+export type StudyFileObject = HeaterDescription & Record<string, unknown>;
 
 /** Loads a demo study file from docs/examples. */
-export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json"): Record<string, unknown> {
-  return JSON.parse(readFileSync(new URL(`../../docs/examples/${name}`, import.meta.url), "utf8")) as Record<string, unknown>;
+export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json"): StudyFileObject {
+  return JSON.parse(readFileSync(new URL(`../../docs/examples/${name}`, import.meta.url), "utf8")) as StudyFileObject;
 }
 
 /** Returns a deep copy of `base` with the field at `path` set to `value` (deleted when `value` is `undefined`). */
-export function mutate(base: unknown, path: string, value: unknown): Record<string, unknown> {
+export function mutate(base: unknown, path: string, value: unknown): StudyFileObject {
   const copy = structuredClone(base) as Record<string, unknown>;
   const keys = path.split(".");
   let node = copy;
@@ -18,7 +25,7 @@ export function mutate(base: unknown, path: string, value: unknown): Record<stri
   const last = keys[keys.length - 1] as string;
   if (value === undefined) Reflect.deleteProperty(node, last);
   else node[last] = value;
-  return copy;
+  return copy as StudyFileObject;
 }
 
 /** One malformed case. */
@@ -55,10 +62,10 @@ export const MALFORMED: readonly MalformedCase[] = [
   // wrong type
   { fault: "wrong type", file: R, path: "coil.turns", value: "six", message: "coil.turns must be an integer ≥ 1, got \"six\"", schema: true },
   { fault: "wrong type", file: R, path: "coil", value: [1, 2], message: "coil must be an object, got an array of length 2", schema: true },
-  { fault: "wrong type", file: R, path: "supply.voltage", value: true, message: "supply.voltage must be a number (SI) or a quantity text V, got true", schema: true },
+  { fault: "wrong type", file: R, path: "supply.voltage", value: true, message: "supply.voltage must be a quantity text with its unit, e.g. \"24 V\", got true", schema: true },
   { fault: "wrong type", file: R, path: "title", value: 7, message: "title must be a string, got 7", schema: true },
   { fault: "wrong type", file: P, path: "coil.conductor.strands", value: 10.5, message: "coil.conductor.strands must be an integer ≥ 1, got 10.5", schema: true },
-  { fault: "wrong type", file: R, path: "environment.convectionCoefficient", value: "10 W", message: "environment.convectionCoefficient must be a finite number ≥ 0 W/(m²·K), got \"10 W\"", schema: true },
+  { fault: "wrong type", file: R, path: "environment.convectionCoefficient", value: "10 W", message: "environment.convectionCoefficient must be a quantity in W/(m²·K), e.g. \"10 W/(m²·K)\", got \"10 W\"", schema: true },
   { fault: "wrong type", file: R, path: "supply.kind", value: "mains", message: "supply.kind must be one of \"battery\", \"dc-bus\", got \"mains\"", schema: true },
   { fault: "wrong type", file: R, path: "part.material", value: "unobtainium", message: "part.material must be one of", schema: true },
   // wrong unit

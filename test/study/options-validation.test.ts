@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { InputError, optimizeHeater, studyHeater } from "../../src/index.js";
+import type { HeaterDescription } from "../../src/index.js";
 
 /** The base heater of the studyHeater @example (48 V battery, 6-turn tube coil, steel ring). */
-function heater(): Record<string, unknown> {
+function heater(): HeaterDescription & Record<string, unknown> {
   return {
     supply: { kind: "battery", voltage: "48 V", internalResistance: "40 mΩ" },
     inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },

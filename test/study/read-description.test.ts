@@ -1,5 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { HeaterDescriptionError, InputError, inventedExampleFerrite, lowCarbonSteel, readHeaterDescription, silver } from "../../src/index.js";
+import type { ConductorMaterialId, PartMaterialId } from "../../src/index.js";
 import { loadExample, MALFORMED, mutate } from "./cases.js";
 
 describe("readHeaterDescription on the demo study files", () => {
@@ -99,5 +100,81 @@ describe("readHeaterDescription on malformed study files: every class of fault n
       expect(paths).toEqual(expect.arrayContaining(["supply.voltage", "coil.turns", "part.height"]));
       expect(paths.indexOf("supply.voltage")).toBeLessThan(paths.indexOf("coil.turns"));
     }
+  });
+});
+
+describe("readHeaterDescription with requireUnits (how study files are read)", () => {
+  const problemsOf = (input: unknown): InputError[] => {
+    try {
+      readHeaterDescription(input, { requireUnits: true });
+    } catch (e) {
+      if (e instanceof HeaterDescriptionError) return [...e.problems];
+      throw e;
+    }
+    return [];
+  };
+
+  it("refuses a bare number for a quantity with a dimension, naming the field and showing the fix", () => {
+    const race = loadExample("study-bearing-race.json");
+    const cases: [string, unknown, string][] = [
+      ["coil.radius", 32, `"32 mm" or "32 m"`],
+      ["part.targetTemperature", 1150, `"1150 °C" or "1150 K"`],
+      ["capacitor.capacitance", 2.2, `"2.2 µF" or "2.2 F"`],
+      ["environment.convectionCoefficient", 10, `"10 W/(m²·K)"`],
+    ];
+    for (const [path, value, fix] of cases) {
+      const problems = problemsOf(mutate(race, path, value));
+      expect(problems.map((p) => p.parameter), path).toEqual([path]);
+      expect(problems[0]?.message).toContain(fix);
+      expect(problems[0]?.message).toContain("a bare number has no unit in a study file");
+    }
+  });
+
+  it("refuses text that is only a number (\"2.2\" for a capacitance) even without requireUnits", () => {
+    const input = mutate(loadExample("study-bearing-race.json"), "capacitor.capacitance", "2.2");
+    expect(() => readHeaterDescription(input)).toThrow(/capacitor\.capacitance must be a quantity with its unit, e\.g\. "2\.2 µF"/);
+  });
+
+  it("keeps plain numbers for counts and ratios (turns, strands, dissipation factor, emissivity)", () => {
+    expect(problemsOf(loadExample("study-plate-warmer.json"))).toEqual([]);
+  });
+
+  it("accepts every length unit the units module converts: inches and mils (1 in = 25.4 mm exactly, NIST SP 811 B.8)", () => {
+    const race = loadExample("study-bearing-race.json");
+    const d = readHeaterDescription(mutate(race, "coil.radius", "3 in"), { requireUnits: true });
+    if (d.coil.shape !== "solenoid") throw new Error("expected a solenoid");
+    expect(d.coil.radius).toBe(0.0762);
+    const w = readHeaterDescription(mutate(race, "coil.leadLength", "500 mil"), { requireUnits: true });
+    expect(w.coil.leadLength).toBeCloseTo(0.0127, 15);
+  });
+
+  it("accepts the convection coefficient as text in W/(m²·K)", () => {
+    const d = readHeaterDescription(mutate(loadExample("study-bearing-race.json"), "environment.convectionCoefficient", "25 W/(m2·K)"), { requireUnits: true });
+    expect(d.environment.convectionCoefficient).toBe(25);
+  });
+
+  it("quotes limits in the unit the user wrote, 4 significant digits, unit after the number", () => {
+    const race = loadExample("study-bearing-race.json");
+    const [tooHot] = problemsOf(mutate(race, "part.targetTemperature", "1600 °C"));
+    expect(tooHot?.message).toMatch(/melting temperature of .* = 1\d{3}(\.\d)? °C, got "1600 °C"$/);
+    const [short] = problemsOf(mutate(race, "coil.length", "1 in"));
+    expect(short?.message).toMatch(/≥ turns × conductor diameter = 1\.417 in \(turns would overlap\), got "1 in"$/);
+  });
+
+  it("rejects unknown options", () => {
+    expect(() => readHeaterDescription(loadExample("study-bearing-race.json"), { requireUnit: true } as never)).toThrow(InputError);
+  });
+});
+
+describe("the material-id types match the catalogue", () => {
+  it("PartMaterialId lists exactly the ids of conductiveMaterials, ConductorMaterialId the coil conductors", async () => {
+    const { conductiveMaterials } = await import("../../src/index.js");
+    const partIds = {
+      copper: true, aluminium: true, silver: true, lowCarbonSteel: true, mediumCarbonSteel: true, austeniticStainless: true,
+      ferriticStainless: true, aluminiumAlloy: true, brass: true, titaniumAlloy: true,
+    } satisfies Record<PartMaterialId, true>;
+    expect(Object.keys(partIds).sort()).toEqual(conductiveMaterials.map((m) => m.id).sort());
+    const conductorIds = { copper: true, aluminium: true, silver: true } satisfies Record<ConductorMaterialId, true>;
+    for (const id of Object.keys(conductorIds)) expect(conductiveMaterials.some((m) => m.id === id)).toBe(true);
   });
 });

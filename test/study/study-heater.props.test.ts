@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { InputError, readHeaterDescription, studyHeater } from "../../src/index.js";
-import type { HeaterStudy } from "../../src/index.js";
+import type { HeaterDescription, HeaterStudy } from "../../src/index.js";
 import { NoOscillationError, coilProperties, heaterOperatingPoint } from "../../src/study/operating-point.js";
 import { loadExample, mutate } from "./cases.js";
 
@@ -13,7 +13,7 @@ const reached = new Map<string, number>();
 let current = "";
 const study = (d: unknown, options: object = quick): HeaterStudy | null => {
   try {
-    const s = studyHeater(d, options);
+    const s = studyHeater(d as HeaterDescription, options);
     reached.set(current, (reached.get(current) ?? 0) + 1);
     return s;
   } catch (e) {

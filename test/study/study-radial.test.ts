@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import { readHeaterDescription, studyHeater } from "../../src/index.js";
-import { studyTextReport } from "../../src/cli/text-report.js";
-import { studyPlots } from "../../src/cli/html-report.js";
+import type { HeaterDescription } from "../../src/index.js";
+import { studyTextReport } from "../../src/report/text-report.js";
+import { studyPlots } from "../../src/report/html-report.js";
 import { loadExample, mutate } from "./cases.js";
 import { checkSchema } from "./schema-check.js";
 
@@ -10,7 +11,7 @@ const schema = JSON.parse(readFileSync(new URL("../../docs/heater-study.schema.j
 const bar = loadExample("study-forging-bar.json");
 const run = (location: "mean" | "surface" | "core", extra: Record<string, unknown> = {}) =>
   studyHeater(
-    { ...bar, part: { ...(bar["part"] as Record<string, unknown>), targetLocation: location, ...extra } },
+    { ...bar, part: { ...(bar.part as unknown as Record<string, unknown>), targetLocation: location, ...extra } } as unknown as HeaterDescription,
     { temperatureScan: false, impedanceSweep: false },
   );
 

@@ -37,7 +37,7 @@ describe("sweepHeater", () => {
     expect(() => sweepHeater(race, { field: "coil.turns", values: [] })).toThrow(/values must be a non-empty array/);
     expect(() => sweepHeater(race, { field: "coil.conductor", values: [1] })).toThrow(/numeric field/);
     expect(() => sweepHeater(race, { field: "nothing.here", values: [1] })).toThrow(/field must be/);
-    expect(() => sweepHeater({ ...race, coil: 5 }, { field: "supply.voltage", values: [1] })).toThrow(/coil must be an object/);
+    expect(() => sweepHeater({ ...race, coil: 5 } as never, { field: "supply.voltage", values: [1] })).toThrow(/coil must be an object/);
   });
 });
 

@@ -45,7 +45,7 @@ describe("seriesInverterWithSource", () => {
 
   it("refuses a power the source cannot deliver, naming the limit V²/(4R) (maximum power transfer, from memory)", () => {
     // 24 V behind 5 Ω: at most 24²/20 = 28.8 W into any load
-    expect(() => seriesInverterWithSource({ sourceVoltage: 24, sourceResistance: 5, ...tank, power: 250 })).toThrow(/≤ 28\.8 W, the most a 24 V source behind 5 Ω delivers/);
+    expect(() => seriesInverterWithSource({ sourceVoltage: 24, sourceResistance: 5, ...tank, power: 250 })).toThrow(/≤ 28\.8 \(the most a 24 V source behind 5 Ω delivers/);
     expect(() => seriesInverterWithSource({ sourceVoltage: 24, sourceResistance: 20, ...tank, power: 250 })).toThrow(InputError);
     // and a power above the tank's resonance power at the input voltage: V1²/(2R) = (4·24/π)²/0.6 = 1556 W
     expect(() => seriesInverterWithSource({ sourceVoltage: 24, sourceResistance: 0, ...tank, power: 2000 })).toThrow(/the tank's power at resonance/);

@@ -3,11 +3,12 @@
  * no network), written in XML-compatible HTML so that it parses both as HTML and as XML.
  */
 import type { HeaterStudy } from "../study/index.js";
+import { requireStudy } from "./checks.js";
 import { ZERO_CELSIUS } from "../units/index.js";
 import { barChart, escapeXml, lineChart } from "./chart.js";
 import type { ChartReferenceLine, ChartSeries } from "./chart.js";
 import { celsiusText, duration, percent, q } from "./format.js";
-import { lossEntries, operatingRows } from "./text-report.js";
+import { designRows, lossEntries, operatingRows } from "./text-report.js";
 
 const CSS = `
 body { font-family: 'DejaVu Sans', 'Helvetica Neue', Arial, sans-serif; color: #222; max-width: 60rem; margin: 2rem auto; padding: 0 1rem; line-height: 1.45; }
@@ -43,9 +44,49 @@ function figure(svg: string, caption: string): string {
 const toC = (k: number): number => k - ZERO_CELSIUS;
 const degrees = (rad: number): number => (rad * 180) / Math.PI;
 
-/** The plots of a study report, as SVG strings with captions. */
-export function studyPlots(study: HeaterStudy): { svg: string; caption: string }[] {
-  const plots: { svg: string; caption: string }[] = [];
+/**
+ * One plot of a study report.
+ *
+ * @category Reports and charts
+ */
+export interface StudyPlot {
+  /** The plot, an `<svg>` element as text. */
+  readonly svg: string;
+  /** What it shows, one paragraph. */
+  readonly caption: string;
+}
+
+/**
+ * The plots of a study report, as SVG strings with captions: tank impedance magnitude and
+ * phase, the heat-up, power and frequency, coil current and tank voltage, efficiency and
+ * permeability against part temperature, and where the power goes. Plots whose data the study
+ * did not compute (`heatUp`, `temperatureScan`, `impedance` off) are left out.
+ *
+ * @param study - a result of `studyHeater`
+ * @returns the plots, each an `<svg>` string and a one-paragraph caption
+ * @throws {@link InputError} when `study` is not a study result
+ * @example
+ * ```ts
+ * import { studyHeater } from "fluxwright";
+ * import type { HeaterDescription } from "fluxwright";
+ * import { studyPlots } from "fluxwright/report";
+ * const design: HeaterDescription = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const plots = studyPlots(studyHeater(design, { heatUp: false }));
+ * console.log(plots.length, plots[0]?.svg.startsWith("<svg")); // 6 true
+ * ```
+ * @category Reports and charts
+ */
+export function studyPlots(study: HeaterStudy): StudyPlot[] {
+  requireStudy("studyPlots", study);
+  const plots: StudyPlot[] = [];
   const refs: ChartReferenceLine[] = [
     { axis: "x", value: study.emptyCoil.frequency, label: "empty" },
     { axis: "x", value: study.operating.frequency, label: "loaded" },
@@ -167,7 +208,47 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
       caption: `Power into the part (left axis) and operating frequency (right axis) against part temperature, each point a solved operating point; past the Curie point a steel part is no longer magnetic, which shows as a step in both.${bands.length === 0 ? "" : ` The heater has no operating point at ${bands.map((b) => `${celsiusText(b.from)}–${celsiusText(b.to)}`).join(", ")}: no line is drawn there and the heat-up counts no power.`}`,
     });
   }
-  const losses = lossEntries(study.operating);
+  if (study.temperatureScan !== null && study.temperatureScan.temperatures.length > 1) {
+    const s = study.temperatureScan;
+    const t = s.temperatures.map(toC);
+    const curieLine: ChartReferenceLine[] = curie === null ? [] : [{ axis: "x", value: toC(curie), label: "Curie point" }];
+    plots.push({
+      svg: lineChart({
+        title: "Coil current and tank voltage against part temperature",
+        xLabel: "part temperature",
+        yLabel: "coil current (RMS)",
+        xUnit: "°C",
+        yUnit: "A",
+        series: [
+          { name: "coil current (RMS)", x: t, y: s.coilCurrentsRms, markers: false },
+          { name: "tank voltage (peak)", x: t, y: s.tankVoltagesPeak, axis: "secondary", markers: false },
+        ],
+        secondaryAxis: { label: "tank voltage (peak)", unit: "V" },
+        referenceLines: curieLine,
+        idPrefix: "current-voltage-scan",
+      }),
+      caption: "RMS coil current (left axis) and peak tank voltage (right axis) against part temperature: the stresses on the coil, capacitors and switches as the part heats.",
+    });
+    plots.push({
+      svg: lineChart({
+        title: "Efficiency and permeability against part temperature",
+        xLabel: "part temperature",
+        yLabel: "efficiency",
+        xUnit: "°C",
+        yUnit: "%",
+        series: [
+          { name: "efficiency (part / input)", x: t, y: s.efficiencies.map((e) => 100 * e), markers: false },
+          { name: "relative permeability μr", x: t, y: s.relativePermeabilities, axis: "secondary", markers: false },
+        ],
+        secondaryAxis: { label: "μr", unit: "" },
+        yRange: [0, 100],
+        referenceLines: curieLine,
+        idPrefix: "efficiency-scan",
+      }),
+      caption: "Overall efficiency (left axis) and the part's relative permeability used for the coupling (right axis) against part temperature; μr falls to 1 at the Curie point.",
+    });
+  }
+  const losses = lossEntries(study.operating, study.description.concentrator !== null);
   plots.push({
     svg: barChart({
       title: `Where the power goes (part at ${celsiusText(study.operating.partTemperature)})`,
@@ -183,12 +264,34 @@ export function studyPlots(study: HeaterStudy): { svg: string; caption: string }
 
 /**
  * Renders a study as one self-contained HTML page (inline CSS and SVG; no scripts, no
- * external resources).
+ * external resources), in XML-compatible HTML: summary, cautions, design, operating points,
+ * plots, where the power goes, heat-up and validity notes.
  *
- * @param study - the study
- * @param source - the study file's name, shown under the title
+ * @param study - a result of `studyHeater`
+ * @param source - the study file's name, shown under the title (optional)
+ * @returns the page as text (UTF-8)
+ * @throws {@link InputError} when `study` is not a study result
+ * @example
+ * ```ts
+ * import { studyHeater } from "fluxwright";
+ * import type { HeaterDescription } from "fluxwright";
+ * import { studyHtmlReport } from "fluxwright/report";
+ * const design: HeaterDescription = {
+ *   supply: { kind: "battery", voltage: "48 V" },
+ *   inverter: { kind: "current-fed-parallel", chokeInductance: "100 µH", switchOnResistance: "8 mΩ" },
+ *   coil: { shape: "solenoid", radius: "75 mm", length: "48 mm", turns: 6,
+ *     conductor: { kind: "tube", outerDiameter: "6 mm", wallThickness: "1 mm" } },
+ *   capacitor: { capacitance: "4 µF" },
+ *   part: { shape: "ring", material: "lowCarbonSteel", outerRadius: "62 mm", innerRadius: "50 mm",
+ *     height: "30 mm", targetTemperature: "120 °C" },
+ * };
+ * const page = studyHtmlReport(studyHeater(design, { heatUp: false }), "race.json");
+ * console.log(page.startsWith("<!DOCTYPE html>"), page.includes("<h2>Design</h2>")); // true true
+ * ```
+ * @category Reports and charts
  */
 export function studyHtmlReport(study: HeaterStudy, source?: string): string {
+  requireStudy("studyHtmlReport", study);
   const d = study.description;
   const parts: string[] = [];
   parts.push("<!DOCTYPE html>");
@@ -213,6 +316,8 @@ export function studyHtmlReport(study: HeaterStudy, source?: string): string {
   for (const c of study.cautions) {
     parts.push(`<div class="caution ${c.severity}"><strong>${escapeXml(c.severity)}</strong> <code>${escapeXml(c.code)}</code>: ${escapeXml(c.message)} <span class="meta">(source: ${escapeXml(c.source)})</span></div>`);
   }
+  parts.push(`<h2>Design</h2>`);
+  parts.push(table(designRows(study)));
   parts.push(`<h2>Operating points</h2>`);
   parts.push(
     table(operatingRows(study.atTarget === null ? [study.emptyCoil, study.operating] : [study.emptyCoil, study.operating, study.atTarget]), [
@@ -228,7 +333,7 @@ export function studyHtmlReport(study: HeaterStudy, source?: string): string {
   const total = study.operating.inputPower;
   parts.push(
     table(
-      [...lossEntries(study.operating).map(([label, w]) => [label, q(w, "W"), percent(total > 0 ? w / total : null)]), ["total = input power", q(total, "W"), "100.0 %"]],
+      [...lossEntries(study.operating, d.concentrator !== null).map(([label, w]) => [label, q(w, "W"), percent(total > 0 ? w / total : null)]), ["total = input power", q(total, "W"), "100.0 %"]],
       ["place", "power", "share"],
     ),
   );
@@ -238,7 +343,7 @@ export function studyHtmlReport(study: HeaterStudy, source?: string): string {
       table([
         [`time to ${celsiusText(d.part.targetTemperature)}`, h.reachable ? duration(h.timeToTarget) : "not reached"],
         ["temperature the part would settle at", celsiusText(h.steadyStateTemperature)],
-        ["Curie point crossed at", duration(h.curieCrossingTime)],
+        ["Curie point crossed at", h.curieCrossingTime === null ? (study.part.curieTemperature === null ? "no Curie point (non-magnetic)" : "not crossed") : duration(h.curieCrossingTime)],
         ["energy from the supply", q(h.supplyEnergy, "J")],
         ["charge from the supply", `${(h.supplyCharge / 3600).toPrecision(3)} A·h`],
         ["heat into the part", q(h.energy.input, "J")],

@@ -9,8 +9,12 @@
  *
  * @packageDocumentation
  */
+import { InputError, requireObject } from "../core/index.js";
 
-/** One line of a {@link lineChart}. */
+/** One line of a {@link lineChart}.
+ *
+ * @category Reports and charts
+ */
 export interface ChartSeries {
   /** Name shown in the legend. */
   readonly name: string;
@@ -24,7 +28,10 @@ export interface ChartSeries {
   readonly markers?: boolean;
 }
 
-/** A vertical or horizontal reference line drawn across the plot, e.g. the Curie temperature. */
+/** A vertical or horizontal reference line drawn across the plot, e.g. the Curie temperature.
+ *
+ * @category Reports and charts
+ */
 export interface ChartReferenceLine {
   /** `"x"`: a vertical line at `value` on the x axis; `"y"`: a horizontal line on the primary y axis. */
   readonly axis: "x" | "y";
@@ -34,7 +41,10 @@ export interface ChartReferenceLine {
   readonly label: string;
 }
 
-/** The right-hand y axis of a {@link lineChart}, used by series with `axis: "secondary"`. */
+/** The right-hand y axis of a {@link lineChart}, used by series with `axis: "secondary"`.
+ *
+ * @category Reports and charts
+ */
 export interface ChartSecondaryAxis {
   /** Axis title. */
   readonly label: string;
@@ -44,7 +54,10 @@ export interface ChartSecondaryAxis {
   readonly log?: boolean;
 }
 
-/** Options of {@link lineChart}. */
+/** Options of {@link lineChart}.
+ *
+ * @category Reports and charts
+ */
 export interface LineChartOptions {
   /** Chart title, drawn at the top. */
   readonly title: string;
@@ -78,7 +91,10 @@ export interface LineChartOptions {
   readonly idPrefix?: string;
 }
 
-/** One bar of a {@link barChart}. */
+/** One bar of a {@link barChart}.
+ *
+ * @category Reports and charts
+ */
 export interface ChartBar {
   /** Category label, drawn left of the bar. */
   readonly label: string;
@@ -86,7 +102,10 @@ export interface ChartBar {
   readonly value: number;
 }
 
-/** Options of {@link barChart}. */
+/** Options of {@link barChart}.
+ *
+ * @category Reports and charts
+ */
 export interface BarChartOptions {
   /** Chart title. */
   readonly title: string;
@@ -133,6 +152,9 @@ const GRID_MINOR = "#eeeeee";
 /** Escapes text for use in SVG/XML character data and attribute values. */
 export function escapeXml(text: string): string {
   return text
+    // control characters are not allowed in XML 1.0: shown as \x1B-style text instead
+    // eslint-disable-next-line no-control-regex -- matching control characters is the point
+    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]/gu, (c) => `\\x${c.charCodeAt(0).toString(16).toUpperCase().padStart(2, "0")}`)
     .replace(/&/g, "&amp;")
     .replace(/</g, "&lt;")
     .replace(/>/g, "&gt;")
@@ -406,7 +428,7 @@ function markerElement(index: number, x: number, y: number, colour: string): str
  * Draws a line chart as a self-contained SVG string.
  *
  * Axes may be linear or logarithmic (ticks at 1-2-5 steps or decades), tick labels carry SI
- * prefixes and the axis unit, each series gets a colour from {@link CHART_PALETTE}, a dash
+ * prefixes and the axis unit, each series gets a colour from a fixed palette, a dash
  * pattern and a marker shape, and the legend sits under the plot. Degenerate input never
  * throws: empty series draw empty axes with a note, a constant series gets a padded range,
  * and points that cannot be drawn (non-finite, or ≤ 0 on a log axis) break the line.
@@ -414,16 +436,20 @@ function markerElement(index: number, x: number, y: number, colour: string): str
  * @param options - title, axis labels and units, scales, series
  * @returns an `<svg>` element as text (UTF-8, no external references)
  *
- * Usage (from a docs plot script):
+ * @throws {@link InputError} when `options` is not an object or `series` not an array
+ * @example
  * ```ts
- * import { lineChart } from "../../src/cli/chart.js";
+ * import { lineChart } from "fluxwright/report";
  * const svg = lineChart({ title: "Skin depth in copper", xLabel: "frequency", yLabel: "depth",
  *   xUnit: "Hz", yUnit: "m", xLog: true, yLog: true,
  *   series: [{ name: "copper, 20 °C", x: [1e3, 1e4, 1e5], y: [2.1e-3, 6.6e-4, 2.1e-4] }] });
  * console.log(svg.startsWith("<svg")); // true
  * ```
+ * @category Reports and charts
  */
 export function lineChart(options: LineChartOptions): string {
+  requireObject("lineChart", "options", options);
+  if (!Array.isArray((options as { series?: unknown }).series)) throw new InputError("lineChart", "options.series", options.series, "", "an array of series");
   const width = Math.max(240, options.width ?? 720);
   const height = Math.max(180, options.height ?? 420);
   const series = options.series;
@@ -529,18 +555,32 @@ export function lineChart(options: LineChartOptions): string {
     out.push(`<text transform="translate(${r(width - 12)} ${r(top + plotH / 2)}) rotate(90)" text-anchor="middle" fill="${INK}">${escapeXml(withUnit(y2.label, y2Unit))}</text>`);
   }
 
-  // reference lines
+  // reference lines; their labels are placed so that none overprints another: a label that
+  // would overlap one already placed moves down a row (vertical lines) or along (horizontal)
+  const placed: { x0: number; x1: number; y0: number; y1: number }[] = [];
+  const labelWidth = (text: string): number => 6.6 * Array.from(text).length + 2;
+  const free = (box: { x0: number; x1: number; y0: number; y1: number }): boolean =>
+    placed.every((b) => box.x1 <= b.x0 || box.x0 >= b.x1 || box.y1 <= b.y0 || box.y0 >= b.y1);
   for (const ref of options.referenceLines ?? []) {
+    const w = labelWidth(ref.label);
     if (ref.axis === "x") {
       const x = px(ref.value);
       if (!(x >= left && x <= left + plotW)) continue;
       out.push(`<line class="reference" x1="${r(x)}" y1="${top}" x2="${r(x)}" y2="${r(top + plotH)}" stroke="${INK}" stroke-width="1" stroke-dasharray="3 3"/>`);
-      out.push(`<text x="${r(x + 4)}" y="${top + 14}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
+      // right of the line, or left of it near the right edge
+      const lx = x + 4 + w > left + plotW ? x - 4 - w : x + 4;
+      let row = 0;
+      while (row < 8 && !free({ x0: lx, x1: lx + w, y0: top + 3 + 13 * row, y1: top + 16 + 13 * row })) row++;
+      placed.push({ x0: lx, x1: lx + w, y0: top + 3 + 13 * row, y1: top + 16 + 13 * row });
+      out.push(`<text class="reference-label" x="${r(lx)}" y="${r(top + 14 + 13 * row)}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
     } else {
       const y = py(yAxis, ref.value);
       if (!(y >= top && y <= top + plotH)) continue;
       out.push(`<line class="reference" x1="${left}" y1="${r(y)}" x2="${r(left + plotW)}" y2="${r(y)}" stroke="${INK}" stroke-width="1" stroke-dasharray="3 3"/>`);
-      out.push(`<text x="${r(left + 6)}" y="${r(y - 4)}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
+      let lx = left + 6;
+      while (lx < left + plotW - w && !free({ x0: lx, x1: lx + w, y0: y - 15, y1: y - 2 })) lx += 12;
+      placed.push({ x0: lx, x1: lx + w, y0: y - 15, y1: y - 2 });
+      out.push(`<text class="reference-label" x="${r(lx)}" y="${r(y - 4)}" fill="${INK}" font-size="11">${escapeXml(ref.label)}</text>`);
     }
   }
 
@@ -607,21 +647,25 @@ export function lineChart(options: LineChartOptions): string {
 /**
  * Draws a horizontal bar chart (one bar per category, e.g. losses by place) as an SVG string.
  * Each bar is labelled with its value (SI prefix and unit) and, with `showShare`, its share of
- * the total. Bars take colours from {@link CHART_PALETTE} in order; the value text makes the
+ * the total. Bars take colours from a fixed palette in order; the value text makes the
  * chart readable without colour. An empty list draws a "no data" note.
  *
  * @param options - title, unit and bars
  * @returns an `<svg>` element as text
  *
- * Usage:
+ * @throws {@link InputError} when `options` is not an object or `bars` not an array
+ * @example
  * ```ts
- * import { barChart } from "../../src/cli/chart.js";
+ * import { barChart } from "fluxwright/report";
  * const svg = barChart({ title: "Where the power goes", valueLabel: "power", unit: "W",
  *   bars: [{ label: "part", value: 1200 }, { label: "coil", value: 180 }], showShare: true });
  * console.log(svg.includes("1.2 kW")); // true
  * ```
+ * @category Reports and charts
  */
 export function barChart(options: BarChartOptions): string {
+  requireObject("barChart", "options", options);
+  if (!Array.isArray((options as { bars?: unknown }).bars)) throw new InputError("barChart", "options.bars", options.bars, "", "an array of bars");
   const bars = options.bars;
   const unit = options.unit ?? "";
   const fontSize = 12;

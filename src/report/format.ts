@@ -18,10 +18,23 @@ export function celsiusText(kelvin: number | null | undefined, digits = 4): stri
   return `${Math.abs(rounded) < 1e-9 ? 0 : Number(rounded.toFixed(1))} °C`;
 }
 
-/** An area in m² without prefix (a prefix on a squared unit reads ambiguously): `0.0147 m²`. */
+/**
+ * An area in the unit that keeps the number between 1 and 10 000 (mm², cm² or m²), 4
+ * significant digits: `785.4 mm²`, `147 cm²`, `1.2 m²` (never `785400 µm²`).
+ */
 export function area(value: number | null | undefined): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return "—";
-  return `${Number(value.toPrecision(3))} m²`;
+  const a = Math.abs(value);
+  const [scale, unit] = a === 0 || a >= 1 ? [1, "m²"] : a >= 1e-4 ? [1e-4, "cm²"] : [1e-6, "mm²"];
+  return `${Number((value / scale).toPrecision(4))} ${unit}`;
+}
+
+/** A volume in mm³, cm³ or m³ (as {@link area}), 4 significant digits. */
+export function volume(value: number | null | undefined): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  const a = Math.abs(value);
+  const [scale, unit] = a === 0 || a >= 1 ? [1, "m³"] : a >= 1e-6 ? [1e-6, "cm³"] : [1e-9, "mm³"];
+  return `${Number((value / scale).toPrecision(4))} ${unit}`;
 }
 
 /** A percentage with one decimal (`87.3 %`). */

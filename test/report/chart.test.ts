@@ -8,8 +8,8 @@ import {
   lineChart,
   linearTicks,
   logTicks,
-} from "../../src/cli/chart.js";
-import { allText, findAll, parseXml } from "./xml.js";
+} from "../../src/report/chart.js";
+import { allText, findAll, parseXml } from "../cli/xml.js";
 
 const seriesPaths = (svg: string) => findAll(parseXml(svg), "path").filter((p) => p.attributes.class === "series");
 
