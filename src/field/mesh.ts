@@ -18,6 +18,8 @@ export interface MeshBody {
   readonly shape: MeshShape;
   /** Element size wanted at the body's boundary [m] (skin depth and geometry). */
   readonly surfaceSize: number;
+  /** Sizes along a rectangle's edges rMin, rMax, zMin, zMax [m] (default `surfaceSize` on each). */
+  readonly edgeSizes?: readonly [number, number, number, number] | undefined;
 }
 
 /** A circle's block: the square around it in which grid nodes are moved. */
@@ -193,8 +195,9 @@ export function buildLatticeMesh(
     const s = body.shape;
     const h = body.surfaceSize;
     if (s.kind === "rectangle") {
-      rMarks.push({ x: s.rMin, h: s.rMin > 0 ? h : Infinity, keep: true }, { x: s.rMax, h, keep: true });
-      zMarks.push({ x: s.zMin, h, keep: true }, { x: s.zMax, h, keep: true });
+      const e = body.edgeSizes ?? [h, h, h, h];
+      rMarks.push({ x: s.rMin, h: s.rMin > 0 ? e[0] : Infinity, keep: true }, { x: s.rMax, h: e[1], keep: true });
+      zMarks.push({ x: s.zMin, h: e[2], keep: true }, { x: s.zMax, h: e[3], keep: true });
     } else {
       const a = s.radius;
       const ai = s.innerRadius;

@@ -425,7 +425,9 @@ function change(a: SolverSolution, b: SolverSolution, nc: number): number {
  * Method: six-node isoparametric triangles on a graded grid whose lines follow every
  * rectangle edge and are bent into circles around each round conductor; the element size at
  * a conductor's surface is half a skin depth (and a third of its smallest dimension), growing
- * geometrically away from it; the outer boundary ($A = 0$) lies at least 12 times the size of
+ * geometrically away from it; along an edge of a part at distance D from the nearest coil (of
+ * size S) the surface size grows as $(D/S)^{1.5}$ (the far edge's share of the error stays no
+ * larger than a near one's); the outer boundary ($A = 0$) lies at least 12 times the size of
  * the arrangement away. The sparse system is factorised once ({@link factorComplexSymmetric},
  * nested-dissection order); the solid-turn voltages come from a small dense Schur complement.
  * The mesh is refined by $\sqrt2$ in element size until the self-resistance and

@@ -214,13 +214,17 @@ export function solveOnce(problem: SolverProblem, disc: Discretisation): SolverS
   };
   const xRe: Float64Array[] = [];
   const xIm: Float64Array[] = [];
-  for (const bi of solidList) {
-    const re = new Float64Array(n);
-    const im = new Float64Array(n);
-    toUnknown(bodyVec[bi]!, re);
-    factor.solve(re, im);
-    xRe.push(re);
-    xIm.push(im);
+  if (ns > 0) {
+    // all solid-turn right-hand sides in one pass over the factor
+    const blockRe = new Float64Array(ns * n);
+    const blockIm = new Float64Array(ns * n);
+    solidList.forEach((bi, a) => {
+      const re = blockRe.subarray(a * n, (a + 1) * n);
+      toUnknown(bodyVec[bi]!, re);
+      xRe.push(re);
+      xIm.push(blockIm.subarray(a * n, (a + 1) * n));
+    });
+    factor.solveMany(blockRe, blockIm, ns);
   }
   // Cᵀ X (ns × ns) and the Schur matrix G − jω CᵀX
   const dotLat = (vec: Float64Array, re: Float64Array, im: Float64Array): [number, number] => {
@@ -354,6 +358,54 @@ export function solveOnce(problem: SolverProblem, disc: Discretisation): SolverS
   };
 }
 
+/** Exponent of the edge-size growth with distance from the coils (see {@link regionEdgeSizes}). */
+const EDGE_DISTANCE_POWER = 1.5;
+
+/**
+ * Element sizes wanted along the four edges (rMin, rMax, zMin, zMax) of a conducting region's
+ * rectangle: the skin-depth size `h` where a coil is near, growing as $(D/S)^{1.5}$ with the
+ * distance D of the edge from the nearest coil (S: that coil's size), capped by the geometric
+ * size. Far from every coil the field, and the power an under-resolved skin layer would
+ * misplace, fall as $(S/D)^6$ in air; the error of quadratic elements grows as $(h/\delta)^4$,
+ * so this size keeps a far edge's share of the error no larger than a near one's. Undefined
+ * (one size everywhere) for coil turns and non-conducting regions.
+ */
+function regionEdgeSizes(problem: SolverProblem, b: SolverBody, h: number, hGeom: number): [number, number, number, number] | undefined {
+  const s = b.shape;
+  if (b.role !== "region" || b.sigma === 0 || s.kind !== "rectangle") return undefined;
+  const coilBoxes: [number, number, number, number][] = [];
+  for (const c of problem.bodies) {
+    if (c.role === "region") continue;
+    const cs = c.shape;
+    const bx: [number, number, number, number] =
+      cs.kind === "rectangle" ? [cs.rMin, cs.rMax, cs.zMin, cs.zMax] : [cs.r - cs.radius, cs.r + cs.radius, cs.z - cs.radius, cs.z + cs.radius];
+    const k = c.owner;
+    const cur = coilBoxes[k];
+    coilBoxes[k] = cur ? [Math.min(cur[0], bx[0]), Math.max(cur[1], bx[1]), Math.min(cur[2], bx[2]), Math.max(cur[3], bx[3])] : bx;
+  }
+  // edges as segments [r0, r1, z0, z1]
+  const edges: [number, number, number, number][] = [
+    [s.rMin, s.rMin, s.zMin, s.zMax],
+    [s.rMax, s.rMax, s.zMin, s.zMax],
+    [s.rMin, s.rMax, s.zMin, s.zMin],
+    [s.rMin, s.rMax, s.zMax, s.zMax],
+  ];
+  const out: [number, number, number, number] = [h, h, h, h];
+  edges.forEach((e, k) => {
+    let factor = Infinity;
+    for (const c of coilBoxes) {
+      if (!c) continue;
+      const dr = Math.max(0, c[0] - e[1], e[0] - c[1]);
+      const dz = Math.max(0, c[2] - e[3], e[2] - c[3]);
+      const dist = Math.hypot(dr, dz);
+      const size = Math.max(c[1] - c[0], c[3] - c[2]);
+      factor = Math.min(factor, Math.max(1, Math.pow(dist / size, EDGE_DISTANCE_POWER)));
+    }
+    if (Number.isFinite(factor)) out[k] = Math.max(h, Math.min(h * factor, hGeom));
+  });
+  return out;
+}
+
 /** Meshes the problem at the given density and assembles the finite-element system. */
 export function assembleSystem(problem: SolverProblem, disc: Discretisation): AssembledSystem {
   const omega = 2 * Math.PI * problem.frequency;
@@ -369,7 +421,7 @@ export function assembleSystem(problem: SolverProblem, disc: Discretisation): As
       const delta = Math.sqrt(2 / (omega * MU_0 * b.mur * b.sigma));
       h = Math.min(h, (0.5 * delta) / d);
     }
-    return { shape: s, surfaceSize: h };
+    return { shape: s, surfaceSize: h, edgeSizes: regionEdgeSizes(problem, b, h, dim / (3 * d)) };
   });
   const ext = problem.extent;
   const size = Math.max(ext.rMax, ext.zMax - ext.zMin);
@@ -399,6 +451,8 @@ export function assembleSystem(problem: SolverProblem, disc: Discretisation): As
   const P = newPoints();
   const kRe = new Float64Array(36);
   const kIm = new Float64Array(36);
+  const gR = new Float64Array(6);
+  const gZ = new Float64Array(6);
   const colCount = new Int32Array(n + 1);
   for (let t = 0; t < nTri; t++) {
     for (let a = 0; a < 6; a++) {
@@ -430,14 +484,22 @@ export function assembleSystem(problem: SolverProblem, disc: Discretisation): As
       const r = P.r[q]!;
       const w = P.w[q]!;
       const N = QN[q]!;
+      const invR = 1 / r;
+      // B of each shape function: B_r = −∂N/∂z, B_z = ∂N/∂r + N/r
       for (let a = 0; a < 6; a++) {
-        const bra = -P.nz[q * 6 + a]!;
-        const bza = P.nr[q * 6 + a]! + N[a]! / r;
-        for (let b = a; b < 6; b++) {
-          const brb = -P.nz[q * 6 + b]!;
-          const bzb = P.nr[q * 6 + b]! + N[b]! / r;
-          kRe[a * 6 + b] = kRe[a * 6 + b]! + w * nu * (bra * brb + bza * bzb) * r;
-          if (sig > 0) kIm[a * 6 + b] = kIm[a * 6 + b]! + w * omega * sig * N[a]! * N[b]! * r;
+        gR[a] = -P.nz[q * 6 + a]!;
+        gZ[a] = P.nr[q * 6 + a]! + N[a]! * invR;
+      }
+      const ks = w * nu * r;
+      const km = w * omega * sig * r;
+      for (let a = 0; a < 6; a++) {
+        const bra = gR[a]!;
+        const bza = gZ[a]!;
+        const o = a * 6;
+        for (let b = a; b < 6; b++) kRe[o + b] = kRe[o + b]! + ks * (bra * gR[b]! + bza * gZ[b]!);
+        if (km > 0) {
+          const na = km * N[a]!;
+          for (let b = a; b < 6; b++) kIm[o + b] = kIm[o + b]! + na * N[b]!;
         }
       }
       if (body) {
