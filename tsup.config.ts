@@ -3,7 +3,7 @@ import { defineConfig } from "tsup";
 /** The module folders published as subpaths (`fluxwright/<name>`), besides the root. */
 export const modules = [
   "core", "units", "special", "materials", "inductance", "conductors", "coreloss",
-  "tank", "workpiece", "thermal", "field", "safety", "converters", "links", "study", "report",
+  "tank", "workpiece", "thermal", "field", "safety", "converters", "links", "study", "report", "cores",
 ] as const;
 
 const entry: Record<string, string> = { index: "src/index.ts" };

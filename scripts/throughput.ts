@@ -7,12 +7,19 @@
  */
 import {
   barInLongCoil,
+  eCore,
+  gappedInductor,
+  inductorDesign,
+  inventedExampleFerrite,
   coilOverPlate,
   dowellFactor,
   ellipticE,
   ellipticK,
   igseLoss,
+  inductiveLink,
   kelvinFunctions,
+  llcGain,
+  llcOperatingPoint,
   loopMutualInductance,
   roundWireAcRatio,
   solenoidInductance,
@@ -73,6 +80,47 @@ const plates = Array.from({ length: 64 }, () => ({
   frequency: logUniform(1e3, 1e5),
 }));
 
+const gains = Array.from({ length: N }, () => ({ inductanceRatio: logUniform(2, 20), qualityFactor: logUniform(0.05, 3), normalisedFrequency: logUniform(0.3, 3) }));
+const llcPoints = Array.from({ length: 1024 }, () => {
+  const lr = 60e-6;
+  const cr = 24e-9;
+  const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cr));
+  const zr = Math.sqrt(lr / cr);
+  return {
+    bridge: "half" as const, inputVoltage: 390, turnsRatio: 8, resonantInductance: lr, resonantCapacitance: cr,
+    magnetisingInductance: logUniform(3, 10) * lr, switchingFrequency: logUniform(0.45, 1.6) * fr,
+    loadResistance: (Math.PI * Math.PI * zr) / (8 * 64 * logUniform(0.15, 1)),
+  };
+});
+const compensations = ["series-series", "series-parallel", "parallel-series", "parallel-parallel", "lcc-series", "double-lcc"] as const;
+const linkCases = Array.from({ length: N }, (_, i) => {
+  const primaryInductance = logUniform(5e-6, 500e-6);
+  const secondaryInductance = logUniform(5e-6, 500e-6);
+  const compensation = compensations[i % 6] ?? "series-series";
+  return {
+    primaryInductance, secondaryInductance,
+    mutualInductance: logUniform(0.01, 0.5) * Math.sqrt(primaryInductance * secondaryInductance),
+    primaryResistance: logUniform(0.01, 1), secondaryResistance: logUniform(0.01, 1), frequency: logUniform(20e3, 7e6),
+    compensation, loadResistance: logUniform(1, 100), sourceVoltage: 10,
+    ...(compensation === "lcc-series" || compensation === "double-lcc" ? { primaryFilterInductance: 0.3 * primaryInductance } : {}),
+    ...(compensation === "double-lcc" ? { secondaryFilterInductance: 0.3 * secondaryInductance } : {}),
+  };
+});
+const gappedCores = Array.from({ length: N }, (_, i) => ({
+  core: {
+    effectiveArea: logUniform(2e-5, 4e-4), effectivePathLength: logUniform(0.03, 0.15), relativePermeability: 1000 + 2000 * random(),
+    legShape: "rectangular" as const, legWidth: 0.012 + 0.008 * random(), legDepth: 0.012 + 0.008 * random(), windowHeight: 0.02 + 0.02 * random(),
+  },
+  turns: turns[i]!, gapLength: logUniform(5e-5, 1.5e-3), fringing: "muhlethaler" as const, current: 3,
+}));
+const designCore = eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 });
+const designs = Array.from({ length: 64 }, () => ({
+  inductance: logUniform(50e-6, 150e-6), frequency: logUniform(50e3, 200e3), core: designCore, material: inventedExampleFerrite,
+  current: { kind: "triangular" as const, average: 2 + 4 * random(), ripple: 0.5 + 1.5 * random(), dutyCycle: 0.2 + 0.6 * random() },
+  conductor: { kind: "litz" as const, strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+  ambientTemperature: 313.15,
+}));
+
 const cases: Case[] = [
   // The target counts evaluations of K and E together: one pair is two evaluations.
   { name: "ellipticK + ellipticE (evaluations, 2 per pair)", target: 30e6, unit: "per second", n: 4e6, evaluationsPerCall: 2, run: (i) => ellipticK(m[i & mask]!) + ellipticE(m[i & mask]!) },
@@ -84,13 +132,20 @@ const cases: Case[] = [
   { name: "roundWireAcRatio", target: 3e6, unit: "per second", n: 2e6, run: (i) => roundWireAcRatio(wires[i & mask]!) },
   { name: "igseLoss (4 segments)", target: 2e6, unit: "per second", n: 2e6, run: (i) => igseLoss(waveforms[i & 1023]!) },
   { name: "barInLongCoil", target: 1e6, unit: "per second", n: 1e6, run: (i) => barInLongCoil(bars[i & mask]!).reflectedResistance },
+  { name: "gappedInductor (Mühlethaler fringing)", target: 10e6, unit: "per second", n: 4e6, run: (i) => gappedInductor(gappedCores[i & mask]!).inductance },
+  { name: "inductorDesign (E core, litz, triangle)", target: 1, unit: "ms per call", n: 500, run: (i) => inductorDesign(designs[i & 63]!).totalLoss },
   { name: "coilOverPlate (1e-6 relative)", target: 1, unit: "ms per call", n: 200, run: (i) => coilOverPlate(plates[i & 63]!).resistanceChange },
+  { name: "llcGain", target: 30e6, unit: "per second", n: 4e6, run: (i) => llcGain(gains[i & mask]!) },
+  { name: "llcOperatingPoint (3 ≤ L_n ≤ 10, 0.15 ≤ Q ≤ 1, 0.45 ≤ f_n ≤ 1.6)", target: 100e3, unit: "per second", n: 20e3, run: (i) => llcOperatingPoint(llcPoints[i & 1023]!).gain },
+  { name: "inductiveLink (six compensations)", target: 5e6, unit: "per second", n: 1e6, run: (i) => inductiveLink(linkCases[i & mask]!).efficiency },
 ];
 
 const markdown = process.argv.includes("--markdown");
+const only = process.argv.find((a) => a.startsWith("--only="))?.slice("--only=".length);
 const rows: string[] = [];
 let failed = false;
 for (const c of cases) {
+  if (only !== undefined && !c.name.startsWith(only)) continue;
   let best = Infinity;
   for (let round = 0; round < 5; round++) {
     let sink = 0;

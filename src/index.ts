@@ -16,6 +16,7 @@ export * from "./tank/index.js";
 export * from "./workpiece/index.js";
 export * from "./thermal/index.js";
 export * from "./field/index.js";
+export * from "./cores/index.js";
 export * from "./safety/index.js";
 export * from "./converters/index.js";
 export * from "./links/index.js";

@@ -56,13 +56,14 @@ const LLC_KEYS = ["inductanceRatio", "qualityFactor", "normalisedFrequency"] as 
  * @category Converters
  */
 export function llcGain(options: LlcGainOptions): number {
-  if (typeof options === "object" && (options as unknown) !== null) {
+  // fast path: valid numbers checked inline, the key check by comparison with constant names
+  if ((options as unknown) != null) {
     const ln = options.inductanceRatio;
     const q = options.qualityFactor;
     const fn = options.normalisedFrequency;
     if (
       typeof ln === "number" && typeof q === "number" && typeof fn === "number" &&
-      ln > 0 && ln < Infinity && q > 0 && q < Infinity && fn > 0 && fn < Infinity && keyCount(options) === 3
+      ln > 0 && ln < Infinity && q > 0 && q < Infinity && fn > 0 && fn < Infinity && llcGainFieldsKnown(options)
     ) {
       return llcGainKernel(ln, q, fn);
     }
@@ -76,12 +77,12 @@ export function llcGain(options: LlcGainOptions): number {
   return llcGainKernel(ln, q, fn);
 }
 
-/** Number of enumerable keys (the three known ones were just read as numbers, so 3 means no others). */
-function keyCount(options: object): number {
-  let count = 0;
-  // eslint-disable-next-line @typescript-eslint/no-unused-vars
-  for (const _ in options) count++;
-  return count;
+/** True when every enumerable key is a known one (comparisons with constant names: a few ns). */
+function llcGainFieldsKnown(options: object): boolean {
+  for (const key in options) {
+    if (key !== "inductanceRatio" && key !== "qualityFactor" && key !== "normalisedFrequency") return false;
+  }
+  return true;
 }
 
 /** Unchecked LLC FHA gain; L_n may be Infinity (series resonant). */

@@ -7,3 +7,4 @@
 export { llcGain, seriesResonantGain, parallelResonantGain, lccGain } from "./fha.js";
 export type { LlcGainOptions, SeriesResonantGainOptions, ParallelResonantGainOptions, LccGainOptions } from "./fha.js";
 export * from "./llc-operating-point.js";
+export * from "./llc-design.js";

@@ -218,7 +218,14 @@ function norm(r: Float64Array, n: number): number {
   return s;
 }
 
-/** Newton with a forward-difference Jacobian and backtracking; returns the final residual norm. */
+/** Residual norm below which the sequence solve stops (normalised units, about 50 ulp of the O(1) states). */
+const NEWTON_TOLERANCE = 1e-14;
+
+/**
+ * Newton with a forward-difference Jacobian and backtracking; returns the final residual norm.
+ * The Jacobian is kept from one iteration to the next while a full step still reduces the
+ * residual at least tenfold (a chord step costs one residual evaluation instead of n + 1).
+ */
 function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0: number, g0: number, m: number): number {
   const n = seqLength + 3;
   unknowns[0] = j0;
@@ -229,20 +236,28 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
   if (!sequenceResiduals(unknowns, theta, lam, kappa, resid)) return Infinity;
   let rn = norm(resid, n);
   const scale = Math.max(1, Math.abs(j0), Math.abs(u0), Math.abs(g0));
-  for (let iteration = 0; iteration < 40 && rn > 1e-15; iteration++) {
-    for (let c = 0; c < n; c++) {
-      const base = unknowns[c] ?? 0;
-      const h = 1e-7 * (c < 3 ? scale : c === 3 ? Math.max(Math.abs(base), 1e-3) : theta);
-      unknowns[c] = base + h;
-      if (!sequenceResiduals(unknowns, theta, lam, kappa, residTrial)) return Infinity;
-      unknowns[c] = base;
-      for (let i = 0; i < n; i++) jac[i * n + c] = ((residTrial[i] ?? 0) - (resid[i] ?? 0)) / h;
+  let fresh = false;
+  let haveJacobian = false;
+  for (let iteration = 0; iteration < 60 && rn > NEWTON_TOLERANCE; iteration++) {
+    if (!haveJacobian) {
+      for (let c = 0; c < n; c++) {
+        const base = unknowns[c] ?? 0;
+        const h = 1e-7 * (c < 3 ? scale : c === 3 ? Math.max(Math.abs(base), 1e-3) : theta);
+        unknowns[c] = base + h;
+        if (!sequenceResiduals(unknowns, theta, lam, kappa, residTrial)) return Infinity;
+        unknowns[c] = base;
+        for (let i = 0; i < n; i++) jac[i * n + c] = ((residTrial[i] ?? 0) - (resid[i] ?? 0)) / h;
+      }
+      haveJacobian = true;
+      fresh = true;
     }
     for (let i = 0; i < n; i++) step[i] = -(resid[i] ?? 0);
-    if (!solveDense(n, jac, step)) return Infinity;
+    for (let i = 0; i < n * n; i++) lu[i] = jac[i] ?? 0;
+    if (!solveDense(n, lu, step)) return Infinity;
     let lambda = 1;
     let accepted = false;
-    for (let back = 0; back < 30; back++) {
+    const backtracks = fresh ? 30 : 1;
+    for (let back = 0; back < backtracks; back++) {
       for (let i = 0; i < n; i++) trial[i] = (unknowns[i] ?? 0) + lambda * (step[i] ?? 0);
       if ((trial[3] ?? 0) > 0.2 * (unknowns[3] ?? 0) && sequenceResiduals(trial, theta, lam, kappa, residTrial)) {
         const tn = norm(residTrial, n);
@@ -251,6 +266,8 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
             unknowns[i] = trial[i] ?? 0;
             resid[i] = residTrial[i] ?? 0;
           }
+          // keep the Jacobian only while full steps converge fast
+          if (!(lambda === 1 && tn < 0.1 * rn)) haveJacobian = false;
           rn = tn;
           accepted = true;
           break;
@@ -258,10 +275,18 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
       }
       lambda *= 0.5;
     }
-    if (!accepted) break;
+    if (!accepted) {
+      if (fresh) break; // a fresh Jacobian found no descent: converged as far as rounding allows
+      haveJacobian = false; // a stale one: rebuild and retry
+      continue;
+    }
+    fresh = false;
   }
   return rn;
 }
+
+/** Scratch copy of the Jacobian for the elimination (solveDense overwrites its matrix). */
+const lu = new Float64Array((MAX_SEGMENTS + 3) * (MAX_SEGMENTS + 3));
 
 // ---------------------------------------------------------------------------------------------
 // Event-driven propagation over the positive half period from a given state.

@@ -6,3 +6,5 @@
  */
 export * from "./inductive-link.js";
 export * from "./kq-limit.js";
+export * from "./pad-mutual.js";
+export * from "./splitting.js";

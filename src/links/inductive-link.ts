@@ -12,9 +12,9 @@ import {
   requireOneOf,
   requirePositive,
   voltageCaution,
+  EXTRA_LOW_VOLTAGE_LIMITS,
   type Caution,
 } from "../core/index.js";
-import { cAbs, cAdd, cDiv, cMul, cScale, complex, type Complex } from "../special/index.js";
 
 /**
  * The compensation of an inductive link, primary side first: series (S), parallel (P), or the
@@ -116,16 +116,31 @@ const KEYS = [
 ] as const;
 const COMPENSATIONS = ["series-series", "series-parallel", "parallel-series", "parallel-parallel", "lcc-series", "double-lcc"] as const;
 
-/** Impedance of a capacitor at ω. */
-function zc(omega: number, c: number): Complex {
-  return complex(0, -1 / (omega * c));
+/** True when every enumerable key is a known one (comparisons with constant names: cheaper than a list lookup). */
+function linkFieldsKnown(options: object): boolean {
+  for (const key in options) {
+    if (
+      key !== "primaryInductance" && key !== "secondaryInductance" && key !== "mutualInductance" &&
+      key !== "primaryResistance" && key !== "secondaryResistance" && key !== "frequency" &&
+      key !== "compensation" && key !== "loadResistance" && key !== "sourceVoltage" &&
+      key !== "primaryCapacitance" && key !== "secondaryCapacitance" &&
+      key !== "primaryFilterInductance" && key !== "secondaryFilterInductance"
+    ) return false;
+  }
+  return true;
 }
-/** Parallel combination. */
-function par(a: Complex, b: Complex): Complex {
-  return cDiv(cMul(a, b), cAdd(a, b));
-}
-function inv(a: Complex): Complex {
-  return cDiv(complex(1), a);
+
+/** Compensation code: bit 0 primary parallel, bit 1 secondary parallel, bit 2 primary LCC, bit 3 secondary LCC; -1 unknown. */
+function compensationCode(c: unknown): number {
+  switch (c) {
+    case "series-series": return 0;
+    case "parallel-series": return 1;
+    case "series-parallel": return 2;
+    case "parallel-parallel": return 3;
+    case "lcc-series": return 4;
+    case "double-lcc": return 12;
+    default: return -1;
+  }
 }
 
 /**
@@ -172,6 +187,40 @@ function inv(a: Complex): Complex {
  * @category Inductive links
  */
 export function inductiveLink(options: InductiveLinkOptions): InductiveLink {
+  // fast path: every check inline (no calls), the known-key test by constant comparisons
+  if ((options as unknown) != null && typeof options === "object") {
+    const l1 = options.primaryInductance;
+    const l2 = options.secondaryInductance;
+    const m = options.mutualInductance;
+    const r1 = options.primaryResistance;
+    const r2 = options.secondaryResistance;
+    const f = options.frequency;
+    const rl = options.loadResistance;
+    const v = options.sourceVoltage;
+    const c1 = options.primaryCapacitance;
+    const c2 = options.secondaryCapacitance;
+    const lf1 = options.primaryFilterInductance;
+    const lf2 = options.secondaryFilterInductance;
+    const code = compensationCode(options.compensation);
+    if (
+      typeof l1 === "number" && typeof l2 === "number" && typeof m === "number" && typeof r1 === "number" &&
+      typeof r2 === "number" && typeof f === "number" && typeof rl === "number" && typeof v === "number" &&
+      l1 > 0 && l1 < Infinity && l2 > 0 && l2 < Infinity && m > 0 && m < Math.sqrt(l1 * l2) &&
+      r1 >= 0 && r1 < Infinity && r2 >= 0 && r2 < Infinity && f > 0 && f < Infinity &&
+      rl > 0 && rl < Infinity && v > 0 && v < Infinity && code >= 0 &&
+      c1 === undefined && c2 === undefined &&
+      ((code & 4) === 0 ? lf1 === undefined : typeof lf1 === "number" && lf1 > 0 && lf1 < l1) &&
+      ((code & 8) === 0 ? lf2 === undefined : typeof lf2 === "number" && lf2 > 0 && lf2 < l2) &&
+      linkFieldsKnown(options)
+    ) {
+      return solveLink(l1, l2, m, r1, r2, f, code, rl, v, 0, 0, lf1 ?? 0, lf2 ?? 0);
+    }
+  }
+  return inductiveLinkChecked(options);
+}
+
+/** The validating path of {@link inductiveLink}: each check throws {@link InputError} with its own message. */
+function inductiveLinkChecked(options: InductiveLinkOptions): InductiveLink {
   const where = "inductiveLink";
   requireObject(where, "options", options);
   requireKnownKeys(where, "options", options, KEYS);
@@ -182,122 +231,194 @@ export function inductiveLink(options: InductiveLinkOptions): InductiveLink {
   const r1 = requireNonNegative(where, "primaryResistance", options.primaryResistance, "Ω");
   const r2 = requireNonNegative(where, "secondaryResistance", options.secondaryResistance, "Ω");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
-  const compensation = requireOneOf(where, "compensation", options.compensation, COMPENSATIONS);
+  const code = compensationCode(requireOneOf(where, "compensation", options.compensation, COMPENSATIONS));
   const rl = requirePositive(where, "loadResistance", options.loadResistance, "Ω");
   const v = requirePositive(where, "sourceVoltage", options.sourceVoltage, "V");
-  const givenC1 = options.primaryCapacitance === undefined ? undefined : requirePositive(where, "primaryCapacitance", options.primaryCapacitance, "F");
-  const givenC2 = options.secondaryCapacitance === undefined ? undefined : requirePositive(where, "secondaryCapacitance", options.secondaryCapacitance, "F");
-  const primaryLcc = compensation === "lcc-series" || compensation === "double-lcc";
-  const secondaryLcc = compensation === "double-lcc";
-  const secondaryParallel = compensation === "series-parallel" || compensation === "parallel-parallel";
-  const primaryParallel = compensation === "parallel-series" || compensation === "parallel-parallel";
+  const c1Option = options.primaryCapacitance;
+  const c2Option = options.secondaryCapacitance;
+  const givenC1 = c1Option === undefined ? 0 : requirePositive(where, "primaryCapacitance", c1Option, "F");
+  const givenC2 = c2Option === undefined ? 0 : requirePositive(where, "secondaryCapacitance", c2Option, "F");
+  const primaryLcc = (code & 4) !== 0;
+  const secondaryLcc = (code & 8) !== 0;
   let lf1 = 0;
   let lf2 = 0;
   if (primaryLcc) {
     lf1 = requirePositive(where, "primaryFilterInductance", options.primaryFilterInductance, "H");
-    if (givenC1 === undefined && !(lf1 < l1)) throw new InputError(where, "primaryFilterInductance", lf1, "H", `less than primaryInductance (${l1}) for the default series capacitor`);
+    if (givenC1 === 0 && !(lf1 < l1)) throw new InputError(where, "primaryFilterInductance", lf1, "H", `less than primaryInductance (${l1}) for the default series capacitor`);
   } else if (options.primaryFilterInductance !== undefined) {
     throw new InputError(where, "primaryFilterInductance", options.primaryFilterInductance, "H", "absent (only LCC compensation has a filter inductor)");
   }
   if (secondaryLcc) {
     lf2 = requirePositive(where, "secondaryFilterInductance", options.secondaryFilterInductance, "H");
-    if (givenC2 === undefined && !(lf2 < l2)) throw new InputError(where, "secondaryFilterInductance", lf2, "H", `less than secondaryInductance (${l2}) for the default series capacitor`);
+    if (givenC2 === 0 && !(lf2 < l2)) throw new InputError(where, "secondaryFilterInductance", lf2, "H", `less than secondaryInductance (${l2}) for the default series capacitor`);
   } else if (options.secondaryFilterInductance !== undefined) {
     throw new InputError(where, "secondaryFilterInductance", options.secondaryFilterInductance, "H", "absent (only double-LCC compensation has a secondary filter inductor)");
   }
+  return solveLink(l1, l2, m, r1, r2, f, code, rl, v, givenC1, givenC2, lf1, lf2);
+}
 
+/** Extra-low-voltage limit (AC RMS) read once: the cautions are built only above it. */
+const ELV_AC_RMS = EXTRA_LOW_VOLTAGE_LIMITS.acRms;
+
+/** The phasor solve on checked arguments (givenC = 0: the default capacitor). */
+function solveLink(
+  l1: number, l2: number, m: number, r1: number, r2: number, f: number, code: number, rl: number, v: number,
+  givenC1: number, givenC2: number, lf1: number, lf2: number,
+): InductiveLink {
+  const where = "inductiveLink";
+  const primaryParallel = (code & 1) !== 0;
+  const secondaryParallel = (code & 2) !== 0;
+  const primaryLcc = (code & 4) !== 0;
+  const secondaryLcc = (code & 8) !== 0;
+
+  // Scalar complex arithmetic throughout (no intermediate objects).
   const w = 2 * Math.PI * f;
-  const capacitors: LinkCapacitor[] = [];
-  // ---- secondary network (everything in the secondary loop except the coil)
-  const load = complex(rl);
-  const c2 = givenC2 ?? (secondaryLcc ? 1 / (w * w * (l2 - lf2)) : 1 / (w * w * l2));
-  let zExt: Complex;
-  let zAfterSeries = load; // secondary LCC: the part after C2
-  const cf2 = secondaryLcc ? 1 / (w * w * lf2) : 0;
+  const w2 = w * w;
+  // ---- secondary network (everything in the secondary loop except the coil): zExt
+  const c2 = givenC2 > 0 ? givenC2 : secondaryLcc ? 1 / (w2 * (l2 - lf2)) : 1 / (w2 * l2);
+  const xc2 = -1 / (w * c2);
+  let extRe: number;
+  let extIm: number;
+  let afterAbs = 0; // secondary LCC: |impedance after C2|
+  let branchAbs = 0; // secondary LCC: |jωL_f2 + R_L|
+  const cf2 = secondaryLcc ? 1 / (w2 * lf2) : 0;
   if (secondaryLcc) {
-    zAfterSeries = par(zc(w, cf2), cAdd(complex(0, w * lf2), load));
-    zExt = cAdd(zc(w, c2), zAfterSeries);
+    // (−j/(ωC_f2)) ∥ (R_L + jωL_f2)
+    const xf = -1 / (w * cf2);
+    const bRe = rl;
+    const bIm = w * lf2;
+    // a·b/(a + b) with a = j xf
+    const nRe = -xf * bIm;
+    const nIm = xf * bRe;
+    const dRe = bRe;
+    const dIm = bIm + xf;
+    const dd = dRe * dRe + dIm * dIm;
+    const aRe = (nRe * dRe + nIm * dIm) / dd;
+    const aIm = (nIm * dRe - nRe * dIm) / dd;
+    afterAbs = Math.hypot(aRe, aIm);
+    branchAbs = Math.hypot(bRe, bIm);
+    extRe = aRe;
+    extIm = aIm + xc2;
   } else if (secondaryParallel) {
-    zExt = par(zc(w, c2), load);
+    // (j xc2) ∥ R_L
+    const d = rl * rl + xc2 * xc2;
+    extRe = (rl * xc2 * xc2) / d;
+    extIm = (rl * rl * xc2) / d;
   } else {
-    zExt = cAdd(zc(w, c2), load);
+    extRe = rl;
+    extIm = xc2;
   }
-  const z2 = cAdd(complex(r2, w * l2), zExt);
+  const z2Re = r2 + extRe;
+  const z2Im = w * l2 + extIm;
+  const z2Sq = z2Re * z2Re + z2Im * z2Im;
   const wm = w * m;
-  const zRef = cDiv(complex(wm * wm), z2);
-  const zCoil = cAdd(complex(r1, w * l1), zRef); // primary coil branch without its capacitor
+  const wm2 = wm * wm;
+  // primary coil branch without its capacitor: R₁ + jωL₁ + (ωM)²/Z₂
+  const coilRe = r1 + (wm2 * z2Re) / z2Sq;
+  const coilIm = w * l1 - (wm2 * z2Im) / z2Sq;
   // ---- primary network
   let c1: number;
-  let zin: Complex;
-  const cf1 = primaryLcc ? 1 / (w * w * lf1) : 0;
+  let inRe: number;
+  let inIm: number;
+  let i1Abs: number;
+  let inCurrentAbs: number;
+  let cf1 = 0;
+  let nodeAbs = 0;
   if (primaryLcc) {
-    c1 = givenC1 ?? 1 / (w * w * (l1 - lf1));
-    zin = cAdd(complex(0, w * lf1), par(zc(w, cf1), cAdd(zc(w, c1), zCoil)));
+    c1 = givenC1 > 0 ? givenC1 : 1 / (w2 * (l1 - lf1));
+    cf1 = 1 / (w2 * lf1);
+    const xf = -1 / (w * cf1);
+    const bRe = coilRe;
+    const bIm = coilIm - 1 / (w * c1);
+    // (j xf) ∥ b
+    const nRe = -xf * bIm;
+    const nIm = xf * bRe;
+    const dIm = bIm + xf;
+    const dd = bRe * bRe + dIm * dIm;
+    inRe = (nRe * bRe + nIm * dIm) / dd;
+    inIm = (nIm * bRe - nRe * dIm) / dd + w * lf1;
+    const inSq = inRe * inRe + inIm * inIm;
+    // I_in = V/Z_in; node voltage V − jωL_f1 I_in; coil current node/(branch)
+    const iRe = (v * inRe) / inSq;
+    const iIm = (-v * inIm) / inSq;
+    const vnRe = v + w * lf1 * iIm;
+    const vnIm = -w * lf1 * iRe;
+    nodeAbs = Math.hypot(vnRe, vnIm);
+    inCurrentAbs = v / Math.sqrt(inSq);
+    i1Abs = nodeAbs / Math.hypot(bRe, bIm);
   } else if (primaryParallel) {
-    const yb = inv(zCoil);
-    c1 = givenC1 ?? -yb.im / w;
+    const coilSq = coilRe * coilRe + coilIm * coilIm;
+    c1 = givenC1 > 0 ? givenC1 : coilIm / (coilSq * w);
     if (!(c1 > 0)) throw new InputError(where, "primaryCapacitance", c1, "F", "given: the branch is capacitive, so no parallel capacitor makes the input impedance real");
-    zin = par(zc(w, c1), zCoil);
+    // admittance jωC₁ + 1/Z_coil
+    const yRe = coilRe / coilSq;
+    const yIm = w * c1 - coilIm / coilSq;
+    const ySq = yRe * yRe + yIm * yIm;
+    inRe = yRe / ySq;
+    inIm = -yIm / ySq;
+    inCurrentAbs = v * Math.sqrt(ySq);
+    i1Abs = v / Math.sqrt(coilSq);
   } else {
-    c1 = givenC1 ?? 1 / (w * zCoil.im);
+    c1 = givenC1 > 0 ? givenC1 : 1 / (w * coilIm);
     if (!(c1 > 0)) throw new InputError(where, "primaryCapacitance", c1, "F", "given: the branch is capacitive, so no series capacitor makes the input impedance real");
-    zin = cAdd(zc(w, c1), zCoil);
+    inRe = coilRe;
+    inIm = coilIm - 1 / (w * c1);
+    inCurrentAbs = v / Math.hypot(inRe, inIm);
+    i1Abs = inCurrentAbs;
   }
-  const vs = complex(v);
-  const iin = cDiv(vs, zin);
-  // coil currents
-  let i1: Complex;
-  if (primaryLcc) {
-    const vNode = cAdd(vs, cMul(complex(0, -w * lf1), iin));
-    i1 = cDiv(vNode, cAdd(zc(w, c1), zCoil));
-    capacitors.push({ name: "primary-filter", capacitance: cf1, voltageRms: cAbs(vNode), currentRms: cAbs(vNode) * w * cf1 });
-    capacitors.push({ name: "primary", capacitance: c1, voltageRms: cAbs(i1) / (w * c1), currentRms: cAbs(i1) });
-  } else if (primaryParallel) {
-    i1 = cDiv(vs, zCoil);
-    capacitors.push({ name: "primary", capacitance: c1, voltageRms: v, currentRms: v * w * c1 });
-  } else {
-    i1 = iin;
-    capacitors.push({ name: "primary", capacitance: c1, voltageRms: cAbs(i1) / (w * c1), currentRms: cAbs(i1) });
-  }
-  const i2 = cDiv(cScale(cMul(complex(0, wm), i1), 1), z2);
-  const i2Abs = cAbs(i2);
+  const i2Abs = (wm * i1Abs) / Math.sqrt(z2Sq);
   let loadCurrent: number;
+  let secondaryCapacitor: LinkCapacitor;
+  let secondaryFilter: LinkCapacitor | null = null;
   if (secondaryLcc) {
-    const vNode2 = cMul(i2, zAfterSeries);
-    loadCurrent = cAbs(vNode2) / cAbs(cAdd(complex(0, w * lf2), load));
-    capacitors.push({ name: "secondary", capacitance: c2, voltageRms: i2Abs / (w * c2), currentRms: i2Abs });
-    capacitors.push({ name: "secondary-filter", capacitance: cf2, voltageRms: cAbs(vNode2), currentRms: cAbs(vNode2) * w * cf2 });
+    const node2 = i2Abs * afterAbs;
+    loadCurrent = node2 / branchAbs;
+    secondaryCapacitor = { name: "secondary", capacitance: c2, voltageRms: i2Abs / (w * c2), currentRms: i2Abs };
+    secondaryFilter = { name: "secondary-filter", capacitance: cf2, voltageRms: node2, currentRms: node2 * w * cf2 };
   } else if (secondaryParallel) {
-    const vLoad = i2Abs * cAbs(zExt);
+    const vLoad = i2Abs * Math.hypot(extRe, extIm);
     loadCurrent = vLoad / rl;
-    capacitors.push({ name: "secondary", capacitance: c2, voltageRms: vLoad, currentRms: vLoad * w * c2 });
+    secondaryCapacitor = { name: "secondary", capacitance: c2, voltageRms: vLoad, currentRms: vLoad * w * c2 };
   } else {
     loadCurrent = i2Abs;
-    capacitors.push({ name: "secondary", capacitance: c2, voltageRms: i2Abs / (w * c2), currentRms: i2Abs });
+    secondaryCapacitor = { name: "secondary", capacitance: c2, voltageRms: i2Abs / (w * c2), currentRms: i2Abs };
   }
+  const primaryCapacitor: LinkCapacitor = primaryParallel
+    ? { name: "primary", capacitance: c1, voltageRms: v, currentRms: v * w * c1 }
+    : { name: "primary", capacitance: c1, voltageRms: i1Abs / (w * c1), currentRms: i1Abs };
+  const capacitors: LinkCapacitor[] = primaryLcc
+    ? [{ name: "primary-filter", capacitance: cf1, voltageRms: nodeAbs, currentRms: nodeAbs * w * cf1 }, primaryCapacitor, secondaryCapacitor]
+    : [primaryCapacitor, secondaryCapacitor];
+  if (secondaryFilter !== null) capacitors.push(secondaryFilter);
   const outputPower = loadCurrent * loadCurrent * rl;
-  const inputPower = v * v * zin.re / (zin.re * zin.re + zin.im * zin.im);
-  const cautions: Caution[] = [];
+  const inputPower = (v * v * inRe) / (inRe * inRe + inIm * inIm);
   let worst = 0;
   let worstName = "";
-  for (const c of capacitors) {
-    if (c.voltageRms > worst) {
+  for (let k = 0; k < capacitors.length; k++) {
+    const c = capacitors[k];
+    if (c !== undefined && c.voltageRms > worst) {
       worst = c.voltageRms;
       worstName = c.name;
     }
   }
-  const caution = voltageCaution({ voltage: worst, waveform: "ac", location: `${worstName} compensating capacitor` });
-  if (caution !== null) cautions.push(caution);
-  const coilVoltage = cAbs(i1) * w * l1;
-  const coilCaution = voltageCaution({ voltage: coilVoltage, waveform: "ac", location: "primary coil" });
-  if (coilCaution !== null) cautions.push(coilCaution);
+  const coilVoltage = i1Abs * w * l1;
+  const cautions: Caution[] = [];
+  // the cautions' limit is checked here first so a safe link builds no message text
+  if (worst > ELV_AC_RMS) {
+    const caution = voltageCaution({ voltage: worst, waveform: "ac", location: `${worstName} compensating capacitor` });
+    if (caution !== null) cautions.push(caution);
+  }
+  if (coilVoltage > ELV_AC_RMS) {
+    const coilCaution = voltageCaution({ voltage: coilVoltage, waveform: "ac", location: "primary coil" });
+    if (coilCaution !== null) cautions.push(coilCaution);
+  }
   return {
     efficiency: outputPower / inputPower,
     outputPower,
     inputPower,
-    inputImpedance: { re: zin.re, im: zin.im },
-    inputCurrentRms: cAbs(iin),
-    primaryCurrentRms: cAbs(i1),
+    inputImpedance: { re: inRe, im: inIm },
+    inputCurrentRms: inCurrentAbs,
+    primaryCurrentRms: i1Abs,
     secondaryCurrentRms: i2Abs,
     loadVoltageRms: loadCurrent * rl,
     couplingCoefficient: m / Math.sqrt(l1 * l2),

@@ -487,7 +487,7 @@ export function inductionRadialHeatUp(options: InductionRadialHeatUpOptions): In
       limit: 4,
     });
   }
-  const cautions: Caution[] = [];
+  const cautions: Caution[] = [...thermal.cautions];
   let hottest = 0;
   for (const v of thermal.surfaceTemperatures) hottest = Math.max(hottest, v);
   const hot = surfaceTemperatureCaution({ temperature: hottest, location: "part surface" });

@@ -6,6 +6,7 @@
  * @packageDocumentation
  */
 import {
+  DEFER_TO_CODES,
   InputError,
   requireInRange,
   requireInteger,
@@ -15,7 +16,7 @@ import {
   requireOneOf,
   requirePositive,
 } from "../core/index.js";
-import type { ValidityNote } from "../core/index.js";
+import type { Caution, ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { specificHeatAt, thermalConductivityAt } from "../materials/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
@@ -208,6 +209,12 @@ export interface RadialHeatUpResult {
   };
   /** Validity notes (grid coarser than the skin layer, material data range). */
   readonly validity: ValidityNote[];
+  /**
+   * Cautions: `part-above-melting` (danger) when a `material` is given and some point of the
+   * part reaches its melting temperature (the model has no phase change: the temperatures above
+   * it are not physical).
+   */
+  readonly cautions: Caution[];
 }
 
 const WHERE = "radialHeatUp";
@@ -678,6 +685,25 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     }
   }
 
+  const cautions: Caution[] = [];
+  if (material !== undefined) {
+    let highest = -Infinity;
+    for (let i = 0; i <= n; i++) highest = Math.max(highest, peak[i]!);
+    if (highest >= material.meltingTemperature) {
+      cautions.push({
+        code: "part-above-melting",
+        severity: "danger",
+        message:
+          `The part reaches ${(highest - 273.15).toFixed(0)} °C, at or above the melting temperature of ${material.name} (${(material.meltingTemperature - 273.15).toFixed(0)} °C): molten metal can drip, spatter and burn (the model has no phase change, so the temperatures above melting are not physical). ` +
+          `Switch off earlier (stopAt, a temperature-controlled or timed cut-off) or lower the power. ${DEFER_TO_CODES}`,
+        value: highest,
+        limit: material.meltingTemperature,
+        unit: "K",
+        source: `the melting temperature of the material (${material.id})`,
+      });
+    }
+  }
+
   return {
     times,
     surfaceTemperatures,
@@ -698,6 +724,7 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     hardeningDepths,
     energy: { input, stored: storedTotal, lost, imbalance: input - storedTotal - lost },
     biotNumber,
+    cautions,
     steps: { accepted, rejected },
     validity,
   };

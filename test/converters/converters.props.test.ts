@@ -55,3 +55,25 @@ describe("exact steady state over the tested domain", () => {
     }
   });
 });
+
+describe("llcDesign properties", () => {
+  it("every solved corner gives the specified output, and a higher input needs a higher frequency", async () => {
+    const { llcDesign } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.75, max: 0.95, noNaN: true }), fc.double({ min: 1.02, max: 1.08, noNaN: true }),
+        fc.double({ min: 3, max: 8, noNaN: true }), fc.double({ min: 20, max: 500, noNaN: true }),
+        (low, high, ln, power) => {
+          const d = llcDesign({ inputVoltage: { min: 390 * low, nominal: 390, max: 390 * high }, outputVoltage: 24, outputPower: power, resonantFrequency: 150e3, bridge: "half", inductanceRatio: ln });
+          for (const c of d.corners) {
+            if (c.operatingPoint !== null) expect(Math.abs(c.operatingPoint.outputVoltage / 24 - 1)).toBeLessThanOrEqual(1e-9);
+          }
+          const full = d.corners.filter((c) => c.loadFraction === 1);
+          for (let k = 1; k < full.length; k++) expect(full[k]!.switchingFrequency).toBeGreaterThan(full[k - 1]!.switchingFrequency);
+          expect(d.gainMargin).toBeGreaterThanOrEqual(1.1 * (1 - 1e-9));
+        },
+      ),
+      { seed: 18, numRuns: 8 },
+    );
+  });
+});

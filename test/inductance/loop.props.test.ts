@@ -57,3 +57,19 @@ describe("loop properties", () => {
     );
   });
 });
+
+describe("misaligned loop properties", () => {
+  it("M12 = M21 for a lateral offset, and scaling all lengths by k scales M by k", () => {
+    fc.assert(
+      fc.property(logUniform(0.01, 1), logUniform(0.01, 1), logUniform(1e-3, 1), logUniform(1e-3, 2), logUniform(0.1, 10), (a, b, z, d, k) => {
+        const m = loopMutualInductance({ radius1: a, radius2: b, axialDistance: z, lateralOffset: d });
+        const swapped = loopMutualInductance({ radius1: b, radius2: a, axialDistance: z, lateralOffset: d });
+        const scale = loopMutualInductance({ radius1: a, radius2: b, axialDistance: z });
+        expect(Math.abs(swapped - m)).toBeLessThanOrEqual(1e-11 * Math.max(Math.abs(m), scale));
+        const mk = loopMutualInductance({ radius1: a * k, radius2: b * k, axialDistance: z * k, lateralOffset: d * k });
+        expect(Math.abs(mk - k * m)).toBeLessThanOrEqual(1e-11 * k * Math.max(Math.abs(m), scale));
+      }),
+      { seed: 1, numRuns: 40 },
+    );
+  });
+});

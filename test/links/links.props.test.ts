@@ -38,3 +38,42 @@ describe("inductive link properties", () => {
     );
   });
 });
+
+describe("pad properties", () => {
+  it("padMutualInductance is symmetric in the two pads and scales with length", async () => {
+    const { padMutualInductance } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(fc.double({ min: 0.02, max: 0.2, noNaN: true }), fc.double({ min: 1.2, max: 3, noNaN: true }), fc.double({ min: 0.01, max: 0.2, noNaN: true }), fc.double({ min: 0, max: 0.3, noNaN: true }), fc.double({ min: 0.5, max: 5, noNaN: true }), (inner, ratio, z, d, k) => {
+        const p1 = { innerRadius: inner, outerRadius: inner * ratio, turns: 3 };
+        const p2 = { innerRadius: inner * 0.8, outerRadius: inner * ratio * 0.9, turns: 2 };
+        const m = padMutualInductance({ pad1: p1, pad2: p2, axialDistance: z, lateralOffset: d }).mutualInductance;
+        const swapped = padMutualInductance({ pad1: p2, pad2: p1, axialDistance: z, lateralOffset: d }).mutualInductance;
+        const coaxial = padMutualInductance({ pad1: p1, pad2: p2, axialDistance: z }).mutualInductance;
+        expect(Math.abs(swapped - m)).toBeLessThanOrEqual(1e-10 * coaxial);
+        const scaled = padMutualInductance({
+          pad1: { innerRadius: p1.innerRadius * k, outerRadius: p1.outerRadius * k, turns: 3 },
+          pad2: { innerRadius: p2.innerRadius * k, outerRadius: p2.outerRadius * k, turns: 2 },
+          axialDistance: z * k, lateralOffset: d * k,
+        }).mutualInductance;
+        expect(Math.abs(scaled - k * m)).toBeLessThanOrEqual(1e-10 * k * coaxial);
+      }),
+      { seed: 18, numRuns: 25 },
+    );
+  });
+});
+
+describe("splitting properties", () => {
+  it("seriesSeriesSplitting: no split below the critical coupling, three frequencies above it, and f₀ always among them", async () => {
+    const { seriesSeriesSplitting } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(logUniform(1e-6, 1e-3), logUniform(1e-6, 1e-3), fc.double({ min: 0.01, max: 0.95, noNaN: true }), logUniform(0.01, 1), logUniform(0.5, 100), logUniform(1e3, 1e7), (l1, l2, k, r2, rl, f0) => {
+        const s = seriesSeriesSplitting({ primaryInductance: l1, secondaryInductance: l2, mutualInductance: k * Math.sqrt(l1 * l2), secondaryResistance: r2, loadResistance: rl, resonantFrequency: f0 });
+        expect(s.zeroPhaseFrequencies).toContain(f0);
+        expect(s.zeroPhaseFrequencies.length).toBe(s.split ? 3 : 1);
+        expect(s.split).toBe(k > s.criticalCoupling);
+        expect(s.criticalCoupling).toBeLessThanOrEqual(1);
+      }),
+      { seed: 18, numRuns: 300 },
+    );
+  });
+});

@@ -7,6 +7,8 @@
 import {
   austeniticStainless,
   celsius,
+  eCore,
+  inventedExampleFerrite,
   complex,
   copper,
   InputError,
@@ -364,6 +366,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   },
   loopMutualInductance: {
     args: () => [{ radius1: 0.1, radius2: 0.1, axialDistance: 0.1 }],
+    variants: [() => [{ radius1: 0.1, radius2: 0.08, axialDistance: 0.05, lateralOffset: 0.04, tilt: 0.3 }]],
+    allow: [
+      { paths: ["0.lateralOffset"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (0 is the coaxial case)" },
+      { paths: ["0.axialDistance"], kinds: ["zero"], reason: "coplanar filaments of different radii (or offset) are valid; only coinciding ones throw" },
+      { paths: ["0.tilt"], kinds: ["zero", "negative", "undefined"], reason: "optional angle in [−π, π]; 0 and negative tilts are valid" },
+    ],
   },
   multilayerCoilInductance: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
   multilayerCoilInductanceWheeler: { args: () => [{ innerRadius: 0.02, outerRadius: 0.03, length: 0.025, turns: 200 }] },
@@ -542,6 +550,33 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ bridge: "half", inputVoltage: 390, turnsRatio: 8, resonantInductance: 60e-6, resonantCapacitance: 24e-9, magnetisingInductance: 360e-6, switchingFrequency: 110e3, loadResistance: 5 }],
     variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 12e-6, resonantCapacitance: 90e-9, magnetisingInductance: 60e-6, switchingFrequency: 160e3, loadResistance: 3, rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 200e-12 }]],
     allow: [{ paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" }],
+  },
+  seriesSeriesSplitting: {
+    args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, secondaryResistance: 0.08, loadResistance: 5, resonantFrequency: 100e3 }],
+    allow: [{ paths: ["0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (a lossless secondary coil)" }],
+  },
+  linkFrequencySweep: {
+    args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 100e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }, [90e3, 100e3, 115e3]],
+    allow: [{ paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" }],
+  },
+  padMutualInductance: {
+    args: () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.04 }],
+    variants: [
+      () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.09, turns: 3 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, backingPlate: { material: "ferrite", gap: 0.005, relativePermeability: 1000 } }],
+      () => [{ pad1: { innerRadius: 0.05, outerRadius: 0.05, turns: 1 }, pad2: { innerRadius: 0.04, outerRadius: 0.08, turns: 2 }, axialDistance: 0.03, lateralOffset: 0.02, backingPlate: { material: "aluminium", gap: 0.01 } }],
+    ],
+    allow: [
+      { paths: ["0.lateralOffset"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (0 is the coaxial case)" },
+      { paths: ["0.backingPlate", "0.backingPlate.relativePermeability"], kinds: ["undefined"], reason: "optional: no plate; ferrite µr defaults to 2000" },
+    ],
+  },
+  llcDesign: {
+    args: () => [{ inputVoltage: { min: 340, nominal: 390, max: 410 }, outputVoltage: 19.5, outputPower: 65, resonantFrequency: 100e3, bridge: "half" }],
+    variants: [() => [{ inputVoltage: { min: 40, nominal: 48, max: 56 }, outputVoltage: 12, outputPower: 300, resonantFrequency: 200e3, bridge: "full", inductanceRatio: 4, gainMargin: 1.15, lightLoadFraction: 0.3, capacitorSeries: "E12", rectifier: "centre-tap", deadTime: 100e-9, switchCapacitance: 300e-12 }]],
+    allow: [
+      { paths: ["0.deadTime", "0.switchCapacitance"], kinds: ["zero", "undefined"], reason: "optional, domain ≥ 0 (zero dead time or capacitance is a valid ideal case)" },
+      { paths: ["0.inductanceRatio", "0.gainMargin", "0.lightLoadFraction"], kinds: ["undefined"], reason: "optional with documented defaults (6, 1.1, 0.2)" },
+    ],
   },
   seriesResonantOperatingPoint: {
     args: () => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 20e-6, resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6 }],
@@ -1031,5 +1066,108 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     },
     quantityStrings: true,
     badString: "12 parsecs",
+  },
+
+  // ---------------------------------------------------------------- cores
+  effectiveCoreParameters: { args: () => [{ sections: [{ length: 0.04, area: 1e-4 }, { length: 0.02, area: 2e-4 }] }] },
+  toroidCore: { args: () => [{ innerDiameter: 0.02, outerDiameter: 0.04, height: 0.01 }] },
+  eCore: { args: () => [{ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }] },
+  planarECore: {
+    args: () => [{ width: 0.043, height: 0.0095, depth: 0.028, windowWidth: 0.035, centreLegWidth: 0.0081, windowHeight: 0.0054, mate: "plate", plateThickness: 0.0041 }],
+    variants: [() => [{ width: 0.043, height: 0.0095, depth: 0.028, windowWidth: 0.035, centreLegWidth: 0.0081, windowHeight: 0.0054 }]],
+    allow: [{ paths: ["0.mate", "0.plateThickness"], kinds: ["undefined"], reason: OPTIONAL + " (mate E; plate as thick as the yoke)" }],
+  },
+  roundLegECore: { args: () => [{ width: 0.039, height: 0.02, depth: 0.0128, windowWidth: 0.03, centreLegWidth: 0.0128, windowHeight: 0.0142 }] },
+  potCore: {
+    args: () => [{ outerDiameter: 0.022, windowOuterDiameter: 0.018, postDiameter: 0.0092, postHoleDiameter: 0.002, height: 0.0058, windowHeight: 0.0036 }],
+    allow: [
+      { paths: ["0.postHoleDiameter"], kinds: ["undefined", "zero"], reason: OPTIONAL + " (solid post; a hole of 0 is a solid post)" },
+    ],
+  },
+  uCore: { args: () => [{ width: 0.06, height: 0.03, depth: 0.016, legWidth: 0.016, windowHeight: 0.02 }] },
+  naturalConvectionCoefficient: {
+    args: () => [{ height: 0.71, surfaceTemperature: 505, ambientTemperature: 296, air: { kinematicViscosity: 26.41e-6, thermalConductivity: 0.0338, thermalDiffusivity: 38.3e-6 } }],
+    allow: [{ paths: ["0.air"], kinds: ["undefined"], reason: OPTIONAL + " (dry air table)" }],
+  },
+  gappedInductor: {
+    args: () => [{ core: { effectiveArea: 9.7e-5, effectivePathLength: 0.0686, relativePermeability: 2000, gapArea: 9.6e-5, legShape: "round", legWidth: 0.0111, windowHeight: 0.0222, saturationFluxDensity: 0.35 }, turns: 30, gapLength: 0.8e-3, fringing: "muhlethaler", current: 4 }],
+    variants: [
+      () => [{ core: { effectiveArea: 1e-4, effectivePathLength: 0.08, relativePermeability: 2500, legShape: "rectangular", legWidth: 0.01, legDepth: 0.01, windowHeight: 0.02 }, turns: 20, gapLength: 1e-3, fringing: "muhlethaler" }],
+      () => [{ core: { effectiveArea: 1e-4, effectivePathLength: 0.08, relativePermeability: 2500, windowHeight: 0.02 }, turns: 20, gapLength: 1e-3, fringing: "mclyman" }],
+      () => [{ core: { effectiveArea: 1e-4, effectivePathLength: 0.08, relativePermeability: 2500 }, turns: 20, gapLength: 1e-3, fringing: "none" }],
+    ],
+    allow: [
+      { paths: ["0.gapLength", "0.current"], kinds: ["zero"], reason: "no gap and no current are in the domain (≥ 0)" },
+      { paths: ["0.current", "0.core.gapArea", "0.core.legShape", "0.core.saturationFluxDensity", "0.core.legDepth", "0.core.windowHeight", "0.core.legWidth"], kinds: ["undefined"], reason: OPTIONAL + " (no flux or saturation current; gap area = A_e; rectangular leg); leg and window only needed by the fringing models" },
+    ],
+    nonFinite: {
+      peakFluxDensity: "null without a current (documented)",
+      saturationCurrent: "null without a saturation flux density (documented)",
+    },
+  },
+  gapLengthForInductance: {
+    args: () => [{ core: { effectiveArea: 9.7e-5, effectivePathLength: 0.0686, relativePermeability: 2000, legShape: "round", legWidth: 0.0111, windowHeight: 0.0222 }, turns: 30, inductance: 150e-6, fringing: "muhlethaler" }],
+    allow: [
+      { paths: ["0.core.legShape"], kinds: ["undefined"], reason: OPTIONAL + " (rectangular: then legDepth is needed and its absence throws)" },
+    ],
+  },
+  inductorDesign: {
+    args: () => [{
+      inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15, maxFluxDensityRatio: 0.7,
+      core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+      current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+      conductor: { kind: "litz", strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+    }],
+    variants: [
+      () => [{
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15,
+        core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+        current: { kind: "samples", time: [0, 4e-6, 1e-5], current: [4, 6, 4] },
+        conductor: { kind: "round", diameter: 1e-3 },
+      }],
+      () => [{
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15,
+        core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+        current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+        conductor: { kind: "foil", thickness: 0.1e-3 },
+      }],
+    ],
+    skip: { paths: ["0.material*"], reason: "a material record passed through (checked by the materials suite)" },
+    allow: [
+      { paths: ["0.current.average"], kinds: ["zero", "negative"], reason: SIGNED + " (the DC level of the current)" },
+      { paths: ["0.current.ripple", "0.windingClearance", "0.conductor.insulationThickness"], kinds: ["zero"], reason: "no ripple, a winding on the leg and no interlayer insulation are in the domain (≥ 0)" },
+      { paths: ["0.maxFluxDensityRatio", "0.turns", "0.fringing", "0.maxWindowFill", "0.windingClearance", "0.emissivity", "0.maxSurfaceTemperature", "0.conductor.outerDiameter", "0.conductor.resistivity", "0.conductor.insulationThickness"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.emissivity"], kinds: ["zero"], reason: "a non-radiating surface is in the domain (0 … 1)" },
+      { paths: ["0.current.current.0", "0.current.time.1", "0.current.current.1"], kinds: ["zero", "negative"], reason: SIGNED + " (a sample of the current, or an interior time keeping the order)" },
+      { paths: ["0.current.time.0"], kinds: ["zero"], reason: "the first time is 0 by definition" },
+      { paths: ["0.core.c1", "0.core.c2", "0.core.minimumArea"], kinds: ["undefined"], reason: OPTIONAL + " (core constants not used; narrowest section = A_e)" },
+    ],
+  },
+  inductorCoreSearch: {
+    args: () => [{
+      specification: {
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15, maxFluxDensityRatio: 0.7,
+        current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+        conductor: { kind: "litz", strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+      },
+      cores: [{ name: "large", core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }) }],
+    }],
+    skip: { paths: ["0.specification*", "0.cores.0.core*"], reason: "each candidate goes through inductorDesign, checked there; a bad specification rejects the candidate with the reason (documented)" },
+    allow: [
+      { paths: ["0.rankBy", "0.maxTemperatureRise"], kinds: ["undefined"], reason: OPTIONAL },
+    ],
+  },
+  componentTemperatureRise: {
+    args: () => [{ power: 2, ambientTemperature: 313.15, surfaceArea: 0.006, height: 0.03, emissivity: 0.9 }],
+    variants: [() => [{ power: 2, ambientTemperature: 313.15, thermalResistance: 20 }]],
+    allow: [
+      { paths: ["0.power", "0.emissivity"], kinds: ["zero"], reason: "no loss and a non-radiating surface are in the domain (≥ 0)" },
+      { paths: ["0.emissivity", "0.air"], kinds: ["undefined"], reason: OPTIONAL + " (emissivity 0.9, dry air table)" },
+    ],
+    nonFinite: {
+      convectionCoefficient: "null when a thermal resistance replaces the surface model (documented)",
+      convectedPower: "null when a thermal resistance replaces the surface model (documented)",
+      radiatedPower: "null when a thermal resistance replaces the surface model (documented)",
+    },
   },
 };

@@ -190,3 +190,25 @@ describe("radialHeatUp: bad input throws InputError", () => {
     expect(() => radialHeatUp(options as never)).toThrow(InputError);
   });
 });
+
+describe("radialHeatUp: a part driven past its melting temperature is flagged", () => {
+  // 10 kW into 0.1 m of a 20 mm steel bar for 60 s: about 600 kJ into 0.25 kg, far above the
+  // ≈ 0.3 MJ a steel part of that mass needs to reach its melting temperature (hand estimate:
+  // c ≈ 600 J/(kg·K) × 1200 K × 0.25 kg ≈ 180 kJ, before the latent heat the model leaves out).
+  const base = {
+    geometry: "cylinder" as const, radius: 0.01, length: 0.1, skinDepth: 0.001, material: lowCarbonSteel,
+    convectionCoefficient: 10, emissivity: 0.8, ambientTemperature: 293.15,
+  };
+  it("a danger caution naming the melting temperature when the peak reaches it", () => {
+    const r = radialHeatUp({ ...base, power: 10_000, duration: 60 });
+    const melt = r.cautions.find((c) => c.code === "part-above-melting");
+    expect(melt?.severity).toBe("danger");
+    expect(melt?.limit).toBe(lowCarbonSteel.meltingTemperature);
+    expect(melt?.value ?? 0).toBeGreaterThanOrEqual(lowCarbonSteel.meltingTemperature);
+  });
+  it("no caution for a gentle heat-up", () => {
+    const r = radialHeatUp({ ...base, power: 200, duration: 10 });
+    expect(r.finalSurfaceTemperature).toBeLessThan(lowCarbonSteel.meltingTemperature);
+    expect(r.cautions).toEqual([]);
+  });
+});
