@@ -361,7 +361,7 @@ export const CLOSED_FORM_FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { re
  * Issue 14 asks for 1 % and 3 %.
  * Measured: frequency within 0.03–0.09 % and part power within 0.05–0.26 % for A–F (bars,
  * a billet, a tube, pancakes over aluminium and steel, 1–200 kHz); the part shorter than the coil
- * (G) frequency 0.06 %, power within 2 %.
+ * (G) frequency 0.06 %, power −2.5 %.
  */
 export const STUDY_FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly frequency: number; readonly power: number }>> = {
   A: { frequency: 0.0005, power: 0.0015 },
@@ -370,7 +370,7 @@ export const STUDY_FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly
   D: { frequency: 0.0005, power: 0.001 },
   E: { frequency: 0.001, power: 0.0015 },
   F: { frequency: 0.001, power: 0.001 },
-  G: { frequency: 0.001, power: 0.02 },
+  G: { frequency: 0.001, power: 0.03 },
 };
 
 /** The empty solenoid's closed-form inductance (Rosa, uniform turn current) against the field solution, largest relative error measured (scenarios A–D, G: 5.9–19.0 % high). */
@@ -1136,7 +1136,7 @@ export function heaterOperatingPoint(
         if (note.code === "part-shorter-than-coil") {
           validity.push({
             ...note,
-            message: `The part is shorter than the coil: the long part's coupling is scaled by end-effect factors (the exact short part of the coil-impedance model, with its own cells, over the long one), computed once at the start resistivity and held for every frequency, resistivity and permeability. Against the field solution of scenario G (a billet 0.47 × the coil length) the part power is within 2 %; holding the factors over three octaves of frequency and resistivity × 0.5–3 adds up to 4.6 % (part power) and 0.9 % of the loaded inductance. For a magnetic part the factors are those of the non-magnetic part (not measured against a field solution).`,
+            message: `The part is shorter than the coil: the long part's coupling is scaled by end-effect factors (the exact short part of the coil-impedance model, with its own cells, over the long one), computed once at the start resistivity and held for every frequency, resistivity and permeability. Against the field solution of scenario G (a billet 0.47 × the coil length) the part power reads 2.5 % low; holding the factors over three octaves of frequency and resistivity × 0.5–3 adds up to 4.6 % (part power) and 0.9 % of the loaded inductance. For a magnetic part the factors are those of the non-magnetic part (not measured against a field solution).`,
           });
           continue;
         }

@@ -586,7 +586,7 @@ export interface ReducedWorkCoilResult {
    * 1e-3 of `resistance` on the scenario coils (test/workpiece/work-coil-impedance.test.ts).
    */
   readonly copperResistance: number;
-  /** The part's loss at 1 A, `resistance − copperResistance` [Ω]: the part power is I²·partResistance. */
+  /** The part's loss at 1 A, `resistance − copperResistance`, in Ω; the part power is I²·partResistance. */
   readonly partResistance: number;
   /** Terminal inductance [H]. */
   readonly inductance: number;
