@@ -73,7 +73,7 @@ export type {
   HeaterStudy,
   HeaterUnsolvedBand,
 } from "./study-heater.js";
-export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
+export type { HeaterLosses, HeaterOperatingPoint, CoilProperties, CoilImpedanceTier } from "./operating-point.js";
 export { sweepHeater } from "./sweep-heater.js";
 export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep } from "./sweep-heater.js";
 export { optimizeHeater } from "./optimize-heater.js";

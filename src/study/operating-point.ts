@@ -160,7 +160,7 @@ export interface CoilProperties {
    * `"cells"` (default) the coil-impedance model with skin and proximity effect
    * (`prepareWorkCoil`, reduced fast path) for the empty and the loaded coil; `"closed-form"`
    * Rosa's inductance, the current-sheet resistance and the closed-form coupling (the
-   * optimiser's screening tier; errors in {@link CLOSED_FORM_FIELD_REFERENCE_TOLERANCE}).
+   * optimiser's screening tier; errors in `CLOSED_FORM_FIELD_REFERENCE_TOLERANCE`).
    */
   readonly impedanceTier: CoilImpedanceTier;
   /** Conductor length in the coil (turns only) [m]. */
