@@ -73,7 +73,7 @@ export type {
   HeaterStudy,
   HeaterUnsolvedBand,
 } from "./study-heater.js";
-export type { HeaterLosses, HeaterOperatingPoint, CoilProperties } from "./operating-point.js";
+export type { HeaterLosses, HeaterOperatingPoint, CoilProperties, CoilImpedanceTier } from "./operating-point.js";
 export { sweepHeater, sweepHeaterStream } from "./sweep-heater.js";
 export type { HeaterSweepSpec, HeaterSweepRow, HeaterSweep, HeaterShard, HeaterSweepStreamOptions, HeaterSweepStreamRow } from "./sweep-heater.js";
 export type { HeaterPoolOptions, HeaterProgress } from "./worker-pool.js";

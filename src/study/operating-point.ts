@@ -32,7 +32,8 @@ import {
   tankStresses,
 } from "../tank/index.js";
 import { MU_0 } from "../units/index.js";
-import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, tubeInLongCoil } from "../workpiece/index.js";
+import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, prepareWorkCoil, tubeInLongCoil } from "../workpiece/index.js";
+import type { PreparedWorkCoil, ReducedWorkCoil, WorkCoilConductor, WorkCoilPart, WorkCoilPancake, WorkCoilSolenoid } from "../workpiece/index.js";
 import { conductorOuterDiameter } from "./read-description.js";
 import type { ResolvedConductor, ResolvedHeaterDescription, ResolvedSolenoidCoil } from "./read-description.js";
 
@@ -149,8 +150,20 @@ export interface HeaterOperatingPoint {
  * @category Heater study
  */
 export interface CoilProperties {
-  /** Inductance of the empty coil [H]. */
+  /**
+   * Inductance of the empty coil from the closed form [H] (`solenoidInductance`, Rosa's
+   * uniform-current corrections, or `spiralCoilInductance`): the starting estimate; with the
+   * `"cells"` tier the operating point reports the coil-impedance model's value at its frequency.
+   */
   readonly inductance: number;
+  /**
+   * How the operating point computes the coil's own impedance and the part's coupling:
+   * `"cells"` (default) the coil-impedance model with skin and proximity effect
+   * (`prepareWorkCoil`, reduced fast path) for the empty and the loaded coil; `"closed-form"`
+   * Rosa's inductance, the current-sheet resistance and the closed-form coupling (the
+   * optimiser's screening tier; errors in `CLOSED_FORM_FIELD_REFERENCE_TOLERANCE`).
+   */
+  readonly impedanceTier: CoilImpedanceTier;
   /** Conductor length in the coil (turns only) [m]. */
   readonly windingLength: number;
   /** Conductor length including the leads [m]. */
@@ -179,8 +192,16 @@ function conductorDcResistance(conductor: ResolvedConductor, resistivity: number
   }
 }
 
-/** The coil's own properties: inductance (inductance module), conductor length and DC resistance. */
-export function coilProperties(d: ResolvedHeaterDescription): CoilProperties {
+/**
+ * How the study computes the coil's impedance: `"cells"` (the coil-impedance model, default) or
+ * `"closed-form"` (the screening tier). See {@link CoilProperties.impedanceTier}.
+ *
+ * @category Heater study
+ */
+export type CoilImpedanceTier = "cells" | "closed-form";
+
+/** The coil's own properties: inductance (inductance module), conductor length and DC resistance, and the impedance tier. */
+export function coilProperties(d: ResolvedHeaterDescription, impedanceTier: CoilImpedanceTier = "cells"): CoilProperties {
   const coil = d.coil;
   const conductorDiameter = conductorOuterDiameter(coil.conductor);
   const resistivity = resistivityAt(coil.conductor.material, coil.temperature);
@@ -194,49 +215,55 @@ export function coilProperties(d: ResolvedHeaterDescription): CoilProperties {
     windingLength = coil.turns * Math.PI * (coil.innerRadius + coil.outerRadius);
   }
   const conductorLength = windingLength + coil.leadLength;
-  return { inductance, windingLength, conductorLength, resistivity, dcResistance: conductorDcResistance(coil.conductor, resistivity, conductorLength), conductorDiameter };
+  return { inductance, impedanceTier, windingLength, conductorLength, resistivity, dcResistance: conductorDcResistance(coil.conductor, resistivity, conductorLength), conductorDiameter };
 }
 
-/** AC resistance of coil plus leads at a frequency, with the method's validity note. */
-function coilAcResistance(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number, notes: ValidityNote[]): number {
+/** Conductor resistance per metre, isolated (skin effect only) [Ω/m]. */
+function isolatedResistancePerMetre(d: ResolvedHeaterDescription, rho: number, frequency: number): number {
+  const c = d.coil.conductor;
+  switch (c.kind) {
+    case "solid":
+      return wireDcResistance({ resistivity: rho, length: 1, diameter: c.diameter }) * roundWireAcRatio({ diameter: c.diameter, frequency, resistivity: rho });
+    case "tube":
+      return tubeAcResistance({ outerDiameter: c.outerDiameter, wallThickness: c.wallThickness, frequency, resistivity: rho });
+    case "litz": {
+      const construction = { strands: c.strands, strandDiameter: c.strandDiameter };
+      return litzDcResistance({ construction, resistivity: rho, length: 1 }) * litzAcRatio({ construction, frequency, resistivity: rho });
+    }
+  }
+}
+
+/** AC resistance of the leads at a frequency [Ω] (isolated conductor of the lead length). */
+function leadResistance(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number): number {
+  return d.coil.leadLength > 0 ? isolatedResistancePerMetre(d, props.resistivity, frequency) * d.coil.leadLength : 0;
+}
+
+/** Closed-form AC resistance of the winding (leads excluded) at a frequency, with the method's validity notes when `notes` is given. */
+function closedFormWindingResistance(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number, notes: ValidityNote[] | null): number {
   const coil = d.coil;
   const c = coil.conductor;
   const rho = props.resistivity;
   const delta = skinDepth({ resistivity: rho, frequency });
-  // conductor resistance per metre, isolated (leads and, where no better model applies, the winding)
-  const isolatedPerMetre = (): number => {
-    switch (c.kind) {
-      case "solid":
-        return wireDcResistance({ resistivity: rho, length: 1, diameter: c.diameter }) * roundWireAcRatio({ diameter: c.diameter, frequency, resistivity: rho });
-      case "tube":
-        return tubeAcResistance({ outerDiameter: c.outerDiameter, wallThickness: c.wallThickness, frequency, resistivity: rho });
-      case "litz": {
-        const construction = { strands: c.strands, strandDiameter: c.strandDiameter };
-        return litzDcResistance({ construction, resistivity: rho, length: 1 }) * litzAcRatio({ construction, frequency, resistivity: rho });
-      }
-    }
-  };
-  const leads = coil.leadLength > 0 ? isolatedPerMetre() * coil.leadLength : 0;
   if (c.kind === "litz") {
     const construction = { strands: c.strands, strandDiameter: c.strandDiameter };
     const windowBreadth = coil.shape === "solenoid" ? coil.length : coil.outerRadius - coil.innerRadius + props.conductorDiameter;
     const ratio = litzAcRatio({ construction, frequency, resistivity: rho, turns: coil.turns, windowBreadth });
-    return litzDcResistance({ construction, resistivity: rho, length: props.windingLength }) * ratio + leads;
+    return litzDcResistance({ construction, resistivity: rho, length: props.windingLength }) * ratio;
   }
   const thickness = c.kind === "tube" ? c.wallThickness : c.diameter / 2;
   if (coil.shape === "solenoid") {
-    notes.push({
+    notes?.push({
       code: "coil-inductance-uniform-current",
-      message: `The empty coil's inductance is the current-sheet value with Rosa's corrections for round wire (uniform current in each turn). At working frequencies a turn's current crowds towards its neighbours and the part: against the field solutions of the reference scenarios (4–20 turns, 5–200 kHz) it reads 5.9–19.0 % high (bound ${COIL_INDUCTANCE_ERROR * 100} %), so the operating frequency reads 4–9 % low; the coil-impedance model with skin and proximity effect replaces it.`,
-      value: COIL_INDUCTANCE_ERROR,
+      message: `The empty coil's inductance is the current-sheet value with Rosa's corrections for round wire (uniform current in each turn). At working frequencies a turn's current crowds towards its neighbours and the part: against the field solutions of the reference scenarios (4–20 turns, 5–200 kHz) it reads 5.9–19.0 % high (bound ${CLOSED_FORM_COIL_INDUCTANCE_ERROR * 100} %), so the operating frequency reads 4–9 % low (the closed-form tier: the study proper uses the coil-impedance model).`,
+      value: CLOSED_FORM_COIL_INDUCTANCE_ERROR,
     });
     const spaceFactor = Math.min(1, (coil.turns * props.conductorDiameter) / coil.length);
-    notes.push({
+    notes?.push({
       code: "coil-resistance-current-sheet",
       message: "Coil resistance from the current-sheet estimate (current in one skin depth of the face towards the part); it ignores current on the sides and back of each turn and the proximity effect between turns, and reads low by an amount not measured here (the coil-impedance model with skin and proximity effect replaces it).",
     });
     if (thickness < 3 * delta) {
-      notes.push({
+      notes?.push({
         code: "coil-conductor-thin",
         message: "The coil conductor (tube wall or wire radius) is thinner than 3 skin depths, so the current-sheet estimate of its resistance reads low.",
         value: thickness / delta,
@@ -251,14 +278,14 @@ function coilAcResistance(d: ResolvedHeaterDescription, props: CoilProperties, f
         spaceFactor,
         frequency,
         resistivity: rho,
-      }) + leads
+      })
     );
   }
-  notes.push({
+  notes?.push({
     code: "coil-resistance-isolated-conductor",
     message: "Coil resistance from the isolated-conductor skin effect; the proximity effect between turns is not included, so it reads low.",
   });
-  return isolatedPerMetre() * props.windingLength + leads;
+  return isolatedResistancePerMetre(d, rho, frequency) * props.windingLength;
 }
 
 /** Coupling of the part at a frequency, resistivity and permeability. */
@@ -280,6 +307,8 @@ interface CouplingModel {
   readonly surrogate: (frequency: number, resistivity: number, relativePermeability: number) => Coupling;
   /** Peak tangential field strength at the part surface per RMS ampere of coil current [A/m per A]. */
   readonly fieldPerAmpere: number;
+  /** Share of the coil's squared field over a part shorter than the coil (1 otherwise). */
+  readonly weight: number;
   readonly notes: readonly ValidityNote[];
 }
 
@@ -288,7 +317,26 @@ export const SHORT_PART_ERROR_NOTE =
   "against the field solution of scenario G (a non-magnetic billet 0.47 × the coil length) this reads the part power 49 % low: the eddy currents close through the part's ends, which the weighting ignores; treat short parts as a lower bound until the field solver replaces it";
 
 /**
- * The study's coupling against the axisymmetric field solutions of the reference scenarios
+ * The study's coupling (coil-impedance tier) against the axisymmetric field solutions of the
+ * reference scenarios (test/fixtures/field-reference): the largest relative error of the part's
+ * loss at a given coil current, and of ΔL as a fraction of the loaded inductance, per scenario,
+ * as measured by test/study/field-reference.test.ts (on top of the fixture's own uncertainty).
+ * Measured: part loss within 0.02 % (A, B, D), 0.1 % (C at 1 kHz), 0.04 % (E), 0.17 % (F) and
+ * 1.5 % (G, a part shorter than the coil: end-effect factors); ΔL within 0.03 % of the loaded
+ * inductance for the solenoids, 0.42 % over aluminium (E), 0.22 % over steel (F), 0.36 % (G).
+ */
+export const FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly resistance: number; readonly inductance: number }>> = {
+  A: { resistance: 0.001, inductance: 0.0005 },
+  B: { resistance: 0.001, inductance: 0.0005 },
+  C: { resistance: 0.0015, inductance: 0.0005 },
+  D: { resistance: 0.0005, inductance: 0.0005 },
+  E: { resistance: 0.001, inductance: 0.005 },
+  F: { resistance: 0.0025, inductance: 0.003 },
+  G: { resistance: 0.02, inductance: 0.005 },
+};
+
+/**
+ * The closed-form tier's coupling (the optimiser's screening) against the axisymmetric field solutions of the reference scenarios
  * (test/fixtures/field-reference): the largest relative error of the part power at a given coil
  * current (the reflected resistance against the field solution's part losses), and of ΔL as a
  * fraction of the loaded inductance, per scenario, as measured and checked by
@@ -297,7 +345,7 @@ export const SHORT_PART_ERROR_NOTE =
  * aluminium (E) power −0.3 … −0.7 %, ΔL up to 18 %; over μr 100 steel (F) power +7.6 … +11.4 %, ΔL 5.8–10.5 %;
  * a billet shorter than the coil (G) power −49 %, ΔL 9.5 %.
  */
-export const FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly resistance: number; readonly inductance: number }>> = {
+export const CLOSED_FORM_FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly resistance: number; readonly inductance: number }>> = {
   A: { resistance: 0.03, inductance: 0.005 },
   B: { resistance: 0.01, inductance: 0.005 },
   C: { resistance: 0.025, inductance: 0.008 },
@@ -307,8 +355,30 @@ export const FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly resis
   G: { resistance: 0.49, inductance: 0.095 },
 };
 
-/** The empty solenoid's inductance (Rosa, uniform turn current) against the field solution, largest relative error measured (scenarios A–D, G: 5.9–19.0 % high). */
-export const COIL_INDUCTANCE_ERROR = 0.2;
+/**
+ * The study's operating point against the field solutions of the reference scenarios with the
+ * part's properties fixed (test/study/field-reference-study.test.ts): the largest relative error
+ * of the frequency and of the part power, per scenario, on top of the fixture's uncertainty.
+ * Issue 14 asks for 1 % and 3 %.
+ * Measured: frequency within 0.03–0.09 % and part power within 0.05–0.26 % for A–F (bars,
+ * a billet, a tube, pancakes over aluminium and steel, 1–200 kHz); the part shorter than the coil
+ * (G) frequency 0.06 %, power −2.5 %.
+ */
+export const STUDY_FIELD_REFERENCE_TOLERANCE: Readonly<Record<string, { readonly frequency: number; readonly power: number }>> = {
+  A: { frequency: 0.0005, power: 0.0015 },
+  B: { frequency: 0.001, power: 0.0015 },
+  C: { frequency: 0.001, power: 0.003 },
+  D: { frequency: 0.0005, power: 0.001 },
+  E: { frequency: 0.001, power: 0.0015 },
+  F: { frequency: 0.001, power: 0.001 },
+  G: { frequency: 0.001, power: 0.03 },
+};
+
+/** The empty solenoid's closed-form inductance (Rosa, uniform turn current) against the field solution, largest relative error measured (scenarios A–D, G: 5.9–19.0 % high). */
+export const CLOSED_FORM_COIL_INDUCTANCE_ERROR = 0.2;
+
+/** The empty coil's inductance from the study's coil-impedance tier against the field solution, largest relative error (scenarios A–G, every fixture frequency; measured 0.05–0.24 %). */
+export const COIL_INDUCTANCE_ERROR = 0.003;
 
 /**
  * Radial extent of the current layer the finite-coil solution gives each solenoid turn: the
@@ -322,8 +392,39 @@ export function solenoidCurrentLayer(coil: ResolvedSolenoidCoil): { innerRadius:
   return { innerRadius: coil.radius - dc / 2, outerRadius: coil.radius + dc / 2 };
 }
 
+/**
+ * Relative agreement at which the surrogate's correction is taken as converged to the exact
+ * model (resistances against the tank resistance, inductance a tenth of it against the
+ * inductance): 1e-6, three orders below the exact model's own accuracy.
+ */
+const AGREEMENT = 1e-6;
+
+/** The coil's state at one frequency and permeability: winding copper and part resistance [Ω], terminal and empty-coil inductance [H] (leads excluded). */
+interface CoilState {
+  readonly copper: number;
+  readonly part: number;
+  readonly L: number;
+  readonly emptyL: number;
+}
+
+/** The correction of the surrogate to the exact model: resistances by factors, inductances by offsets. */
+interface Correction {
+  readonly copper: number;
+  readonly part: number;
+  readonly L: number;
+  readonly emptyL: number;
+}
+
+function correctionOf(exact: CoilState, cheap: CoilState): Correction {
+  return { copper: exact.copper / cheap.copper, part: cheap.part > 0 ? exact.part / cheap.part : 1, L: exact.L - cheap.L, emptyL: exact.emptyL - cheap.emptyL };
+}
+
+function corrected(cheap: CoilState, c: Correction): CoilState {
+  return { copper: cheap.copper * c.copper, part: cheap.part * c.part, L: cheap.L + c.L, emptyL: cheap.emptyL + c.emptyL };
+}
+
 /** The surrogate correction each solved point ended with: a continued point starts from its neighbour's. */
-const corrections = new WeakMap<OperatingPointStart, { resistance: number; inductance: number }>();
+const corrections = new WeakMap<OperatingPointStart, { withPart: boolean; correction: Correction }>();
 const evaluatorCache = new Map<string, { evaluate: ReturnType<typeof prepareEncirclingCoilOverRod>; weight: number; fieldPerAmpere: number }>();
 const modelCache = new WeakMap<CoilProperties, CouplingModel>();
 
@@ -394,6 +495,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
     model = {
       key,
       fieldPerAmpere,
+      weight: partLength < coil.length ? weight : 1,
       notes,
       surrogate: (f, rho, mur) => {
         const r = tubeInLongCoil({ coil: longCoil, tube: { outerRadius: radius, innerRadius: bore, resistivity: rho, relativePermeability: mur }, frequency: f });
@@ -440,6 +542,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
     model = {
       key,
       fieldPerAmpere: (2 * Math.SQRT2 * peak) / MU_0,
+      weight: 1,
       notes,
       surrogate: (f, rho, mur) => {
         const r = tubeInLongCoil({ coil: surrogateCoil, tube: { outerRadius: outer, innerRadius: surrogateBore, resistivity: rho, relativePermeability: mur }, frequency: f });
@@ -453,6 +556,160 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
   }
   modelCache.set(props, model);
   return model;
+}
+
+
+/**
+ * Mesh refinement of the study's coil-impedance model (`prepareWorkCoil`): 0.5, the coarsest,
+ * keeps the reduced model's build within a few hundred milliseconds for the demo coils. Measured
+ * against the field solutions of scenarios A–F (test/fixtures/field-reference) at this
+ * refinement: empty and loaded inductance within 0.17 %, the part's loss within 0.05 %, the
+ * loaded coil's copper loss within 1.6 %.
+ */
+export const STUDY_COIL_REFINEMENT = 0.5;
+
+/** The validity note of the coil-impedance tier (numbers measured by test/study/field-reference.test.ts). */
+const CELL_MODEL_NOTE: ValidityNote = {
+  code: "coil-impedance-model",
+  message:
+    "The coil's own resistance and inductance, empty and with the part, come from the coil-impedance model (prepareWorkCoil at refinement 0.5, reduced fast path: each turn split into ring cells, skin and proximity effect in the conductor, the part through the Dodd–Deeds kernels). Against the field solutions of the reference scenarios with solid turns (A–F: 4–20-turn solenoids around bars and a tube, a pancake over aluminium and μr 100 steel; 1–200 kHz) the empty inductance is within 0.24 %, the part's loss within 0.17 % and ΔL within 0.42 % of the loaded inductance; the study's frequency within 0.09 % and part power within 0.26 % (test/study/field-reference-study.test.ts). Leads are added from their length as an isolated conductor.",
+};
+
+/** A coil-impedance model prepared for one coil and part geometry over a frequency band. */
+interface CellEntry {
+  prepared: PreparedWorkCoil;
+  reduced: ReducedWorkCoil;
+  fMin: number;
+  fMax: number;
+}
+
+/** The prepared coil-impedance models by coil and part geometry (`null`: outside the model's domain, the closed form is used). */
+const cellCache = new Map<string, { coil: WorkCoilSolenoid | WorkCoilPancake; part: WorkCoilPart; entry: CellEntry | null; failed: boolean; ends: Map<string, EndFactors> }>();
+
+/** The study's coil as a `workCoilImpedance` coil. */
+function workCoilOf(d: ResolvedHeaterDescription, props: CoilProperties): WorkCoilSolenoid | WorkCoilPancake {
+  const coil = d.coil;
+  const c = coil.conductor;
+  const conductor: WorkCoilConductor =
+    c.kind === "tube"
+      ? { kind: "tube", outerDiameter: c.outerDiameter, wallThickness: c.wallThickness }
+      : c.kind === "solid"
+        ? { kind: "round", diameter: c.diameter }
+        : { kind: "litz", strands: c.strands, strandDiameter: c.strandDiameter };
+  if (coil.shape === "solenoid") return { shape: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns, conductor, resistivity: props.resistivity };
+  const pitch = coil.turns > 1 ? (coil.outerRadius - coil.innerRadius) / (coil.turns - 1) : 2 * props.conductorDiameter;
+  return { shape: "pancake", innerRadius: coil.innerRadius, pitch, turns: coil.turns, conductor, resistivity: props.resistivity };
+}
+
+/** The study's part as a `workCoilImpedance` part (its material is given per evaluation). */
+function workPartOf(d: ResolvedHeaterDescription): WorkCoilPart {
+  const part = d.part;
+  const material = { resistivity: 1e-7, relativePermeability: 2 };
+  switch (part.shape) {
+    case "bar":
+      return { shape: "bar", radius: part.radius, length: part.length, ...material };
+    case "tube":
+      return { shape: "tube", radius: part.outerRadius, innerRadius: part.outerRadius - part.wallThickness, length: part.length, ...material };
+    case "ring":
+      return { shape: "tube", radius: part.outerRadius, innerRadius: part.innerRadius, length: part.height, ...material };
+    case "plate":
+      return { shape: "plate", radius: Math.min(part.length, part.width) / 2, thickness: part.thickness, gap: d.coil.shape === "pancake" ? d.coil.liftOff : 0, ...material };
+  }
+}
+
+/**
+ * The frequency band of the study's coil-impedance model, from the description alone (so that a
+ * study's numbers do not depend on what ran before it): whole octaves around the empty coil's
+ * closed-form resonance ÷/× 2√2 (a part moves the loaded resonance by less than √2 either way
+ * for ΔL/L from −0.5 to +1), widened to a fixed switching frequency and, for a power-tracking
+ * series inverter, to 4 × the resonance.
+ */
+function studyBand(d: ResolvedHeaterDescription, props: CoilProperties): [number, number] {
+  const resonance = 1 / (2 * Math.PI * Math.sqrt(props.inductance * d.capacitor.capacitance));
+  let lo = resonance / (2 * Math.SQRT2);
+  let hi = resonance * 2 * Math.SQRT2;
+  const inv = d.inverter;
+  if (inv.kind === "voltage-fed-series") {
+    if (inv.control === "fixed" && inv.frequency !== null) {
+      lo = Math.min(lo, inv.frequency / 1.5);
+      hi = Math.max(hi, inv.frequency * 1.5);
+    } else hi = Math.max(hi, 4 * resonance);
+  }
+  return [2 ** Math.floor(Math.log2(lo)), 2 ** Math.ceil(Math.log2(hi))];
+}
+
+/** End-effect factors of a part shorter than the coil: exact short part over the infinitely long one (part loss, ΔL, copper change). */
+interface EndFactors {
+  readonly part: number;
+  readonly L: number;
+  readonly copper: number;
+}
+
+/**
+ * The coil-impedance model's state at a frequency and part material (the reduced fast path of
+ * `prepareWorkCoil`, built once per coil, part geometry and band and kept for later studies;
+ * outside its band the reduced model extrapolates, which the operating point reports), or
+ * `null` when the geometry is outside the model's domain.
+ *
+ * A part shorter than the coil: the reduced model holds the infinitely long part; its changes
+ * (part loss, ΔL, the copper's change) are scaled by end-effect factors, the exact short
+ * non-magnetic part (the model's own part cells) over the long one, computed once per geometry
+ * and start resistivity at the centre of the first band, and held for every frequency,
+ * resistivity and permeability.
+ */
+function cellState(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number, resistivity: number, relativePermeability: number, withPart: boolean): CoilState | null {
+  const coil = workCoilOf(d, props);
+  const part = workPartOf(d);
+  const [fMin, fMax] = studyBand(d, props);
+  const key = JSON.stringify([coil, part, fMin, fMax]);
+  let slot = cellCache.get(key);
+  if (slot === undefined) {
+    slot = { coil, part, entry: null, failed: false, ends: new Map() };
+    if (cellCache.size >= 64) cellCache.delete(cellCache.keys().next().value as string);
+    cellCache.set(key, slot);
+  }
+  if (slot.failed) return null;
+  let entry = slot.entry;
+  try {
+    if (entry === null) {
+      const prepared = prepareWorkCoil({ coil, frequency: fMax, refinement: STUDY_COIL_REFINEMENT });
+      entry = { prepared, reduced: prepared.reduce({ part, minFrequency: fMin, maxFrequency: fMax }), fMin, fMax };
+      slot.entry = entry;
+    }
+    const z = entry.reduced.impedance(frequency, resistivity, relativePermeability);
+    if (!withPart) return { copper: z.emptyResistance, part: 0, L: z.emptyInductance, emptyL: z.emptyInductance };
+    let k: EndFactors = { part: 1, L: 1, copper: 1 };
+    const partLength = part.shape === "plate" ? Infinity : part.length;
+    if (partLength < (coil.shape === "solenoid" ? coil.length : 0)) {
+      const rhoStart = resistivityAt(d.part.material, d.part.startTemperature);
+      const centre = Math.sqrt(entry.fMin * entry.fMax);
+      const endsKey = `${rhoStart}|${centre}`;
+      let ends = slot.ends.get(endsKey);
+      if (ends === undefined) {
+        const exact = entry.prepared.impedance(centre, { ...part, resistivity: rhoStart, relativePermeability: 1 });
+        const long = entry.reduced.impedance(centre, rhoStart, 1);
+        const copperLong = long.copperResistance - long.emptyResistance;
+        const copperExact = exact.copperResistance - exact.emptyResistance;
+        ends = {
+          part: exact.partResistance / long.partResistance,
+          L: exact.inductanceChange / long.inductanceChange,
+          copper: Math.abs(copperLong) > 1e-3 * long.emptyResistance ? Math.min(2, Math.max(0, copperExact / copperLong)) : 1,
+        };
+        slot.ends.set(endsKey, ends);
+      }
+      k = ends;
+    }
+    return {
+      copper: z.emptyResistance + k.copper * (z.copperResistance - z.emptyResistance),
+      part: k.part * z.partResistance,
+      L: z.emptyInductance + k.L * z.inductanceChange,
+      emptyL: z.emptyInductance,
+    };
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    slot.failed = true;
+    return null;
+  }
 }
 
 /** A point to start the operating-point iteration from (a neighbouring temperature's solution). */
@@ -503,21 +760,44 @@ export function heaterOperatingPoint(
   const partResistivity = resistivityAt(d.part.material, partTemperature);
   const fixedFrequency = inv.kind === "voltage-fed-series" && inv.control === "fixed" && inv.frequency !== null ? inv.frequency : null;
 
-  // the exact coupling is costly: the iteration runs on the long-coil surrogate corrected to the
-  // exact value at the last exact evaluation (R by a factor, ΔL by an offset); the outer loop
-  // re-evaluates the exact coupling at the converged point until the correction no longer moves
-  // a continued point starts from its neighbour's correction; otherwise the first coupling is exact
-  let correction: { resistance: number; inductance: number } | null = start !== null && withPart ? (corrections.get(start) ?? null) : null;
-  function couple(f: number, mur: number): Coupling {
-    if (model === null) throw new RangeError("unreachable: coupling without a part");
-    if (correction === null) {
-      const exact = model.coupling(f, partResistivity, mur);
-      const cheap = model.surrogate(f, partResistivity, mur);
-      correction = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
+  // the exact coil and coupling are costly: the iteration runs on the closed-form surrogate
+  // (current-sheet resistance, Rosa's inductance, long-coil coupling) corrected to the exact value
+  // at the last exact evaluation (resistances by factors, inductances by offsets); the outer loop
+  // re-evaluates the exact model at the converged point until the correction no longer moves.
+  // A continued point starts from its neighbour's correction; otherwise the first evaluation is exact.
+  const stored = start !== null ? corrections.get(start) : undefined;
+  let correction: Correction | null = stored !== undefined && withPart && stored.withPart ? stored.correction : null;
+  let emptyCorrection: Correction | null = stored !== undefined && !withPart && !stored.withPart ? stored.correction : null;
+  let cellsUsed = props.impedanceTier === "cells";
+  /** The exact model: the coil-impedance model (cells tier) or the closed form with the finite-coil coupling. */
+  function exactState(f: number, mur: number, part: boolean): CoilState {
+    if (cellsUsed) {
+      const z = cellState(d, props, f, partResistivity, mur, part && model !== null);
+      if (z !== null) return z;
+      cellsUsed = false;
+    }
+    const copper = closedFormWindingResistance(d, props, f, null);
+    if (!part || model === null) return { copper, part: 0, L: L0, emptyL: L0 };
+    const c = model.coupling(f, partResistivity, mur);
+    return { copper, part: c.reflectedResistance, L: L0 + c.inductanceChange, emptyL: L0 };
+  }
+  /** The cheap surrogate with the same trends. */
+  function cheapState(f: number, mur: number, part: boolean): CoilState {
+    const copper = closedFormWindingResistance(d, props, f, null);
+    if (!part || model === null) return { copper, part: 0, L: L0, emptyL: L0 };
+    const c = model.surrogate(f, partResistivity, mur);
+    return { copper, part: c.reflectedResistance, L: L0 + c.inductanceChange, emptyL: L0 };
+  }
+  function coilState(f: number, mur: number, part: boolean): CoilState {
+    const slot = part ? correction : emptyCorrection;
+    if (slot === null) {
+      const exact = exactState(f, mur, part);
+      const next = correctionOf(exact, cheapState(f, mur, part));
+      if (part) correction = next;
+      else emptyCorrection = next;
       return exact;
     }
-    const cheap = model.surrogate(f, partResistivity, mur);
-    return { reflectedResistance: cheap.reflectedResistance * correction.resistance, inductanceChange: cheap.inductanceChange + correction.inductance, skinDepth: cheap.skinDepth };
+    return corrected(cheapState(f, mur, part), slot);
   }
 
   // concentrator: Steinmetz loss at the peak flux the coil voltage drives through its section, as a series resistance
@@ -530,19 +810,18 @@ export function heaterOperatingPoint(
   }
 
   function evaluate(f: number, h: number, previousCurrent: number, previousVoltagePeak: number, part: boolean) {
-    const notes: ValidityNote[] = [];
-    // the coil's own impedance at f: the one place a frequency-dependent coil model plugs in
-    const coilResistance = coilAcResistance(d, props, f, notes);
+    // the coil's own impedance at f, empty or with the part
     const mur = part ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrengthPeak: h }) : 1;
-    const coupling = part && model !== null ? couple(f, mur) : null;
-    const reflectedResistance = coupling?.reflectedResistance ?? 0;
-    const inductanceChange = coupling?.inductanceChange ?? 0;
-    const L = L0 + inductanceChange;
+    const st = coilState(f, mur, part && model !== null);
+    const coilResistance = st.copper + leadResistance(d, props, f);
+    const reflectedResistance = st.part;
+    const inductanceChange = st.L - st.emptyL;
+    const L = st.L;
     // the capacitor's dielectric loss as its equivalent series resistance tanδ/(ωC), in the coil branch
     const capacitorResistance = capacitorSeriesResistance({ capacitance: C, dissipationFactor: cap.dissipationFactor, frequency: f });
     const coreResistance = evaluateCoreResistance(f, previousCurrent, previousVoltagePeak);
     const tankResistance = coilResistance + reflectedResistance + capacitorResistance + coreResistance;
-    return { notes, coilResistance, mur, coupling, reflectedResistance, inductanceChange, L, capacitorResistance, coreResistance, tankResistance, f, h };
+    return { coilResistance, mur, reflectedResistance, inductanceChange, L, emptyL: st.emptyL, capacitorResistance, coreResistance, tankResistance, f, h };
   }
   type Evaluation = ReturnType<typeof evaluate>;
 
@@ -787,21 +1066,22 @@ export function heaterOperatingPoint(
     if (polished !== null) result = polished;
     if (result === null) throw new InputError("heaterOperatingPoint", "part", partTemperature, "K", "a part temperature with an operating point the inverter can run");
   }
-  // refresh the correction at the converged point until the exact coupling agrees with it; the
+  // refresh the correction at the converged point until the exact model agrees with it; the
   // corrections are a fixed point of their own, solved by the secant method per component
-  let previousCorrection: { c: { resistance: number; inductance: number }; g: { resistance: number; inductance: number } } | null = null;
-  for (let outer = 0; model !== null && outer < 16; outer++) {
+  let previousCorrection: { c: Correction; g: Correction } | null = null;
+  const loaded = withPart && model !== null;
+  for (let outer = 0; outer < 16; outer++) {
     const at = result.e;
-    const exact = model.coupling(at.f, partResistivity, at.mur);
-    const cheap = model.surrogate(at.f, partResistivity, at.mur);
-    const g = { resistance: exact.reflectedResistance / cheap.reflectedResistance, inductance: exact.inductanceChange - cheap.inductanceChange };
+    const exact = exactState(at.f, at.mur, loaded);
+    const g = correctionOf(exact, cheapState(at.f, at.mur, loaded));
     const agreed =
-      Math.abs(exact.reflectedResistance - at.reflectedResistance) <= 1e-7 * at.tankResistance &&
-      Math.abs(exact.inductanceChange - at.inductanceChange) <= 1e-8 * at.L;
+      Math.abs(exact.part - at.reflectedResistance) <= AGREEMENT * at.tankResistance &&
+      Math.abs(exact.copper + leadResistance(d, props, at.f) - at.coilResistance) <= AGREEMENT * at.tankResistance &&
+      Math.abs(exact.L - at.L) <= 0.1 * AGREEMENT * at.L;
     if (agreed) {
-      // the reported numbers come from the exact coupling at this point
+      // the reported numbers come from the exact model at this point
       correction = g;
-      result = { ...result, e: evaluate(at.f, at.h, result.s.coilCurrentRms, result.s.tankVoltagePeak, true) };
+      result = { ...result, e: evaluate(at.f, at.h, result.s.coilCurrentRms, result.s.tankVoltagePeak, loaded) };
       break;
     }
     const c = correction ?? g;
@@ -811,22 +1091,64 @@ export function heaterOperatingPoint(
         const denominator = gn - cn - (gp - cp);
         return denominator !== 0 ? cn - ((gn - cn) * (cn - cp)) / denominator : gn;
       };
-      const resistance = secant(c.resistance, g.resistance, previousCorrection.c.resistance, previousCorrection.g.resistance);
-      const inductance = secant(c.inductance, g.inductance, previousCorrection.c.inductance, previousCorrection.g.inductance);
-      if (resistance > 0.5 * g.resistance && resistance < 2 * g.resistance && Number.isFinite(inductance)) next = { resistance, inductance };
+      const p = previousCorrection;
+      const candidate: Correction = {
+        copper: secant(c.copper, g.copper, p.c.copper, p.g.copper),
+        part: secant(c.part, g.part, p.c.part, p.g.part),
+        L: secant(c.L, g.L, p.c.L, p.g.L),
+        emptyL: secant(c.emptyL, g.emptyL, p.c.emptyL, p.g.emptyL),
+      };
+      const factorOk = (x: number, ref: number): boolean => x > 0.5 * ref && x < 2 * ref;
+      if (factorOk(candidate.copper, g.copper) && factorOk(candidate.part, g.part) && Number.isFinite(candidate.L) && Number.isFinite(candidate.emptyL)) next = candidate;
     }
     previousCorrection = { c, g };
-    correction = next;
+    if (loaded) correction = next;
+    else emptyCorrection = next;
     const again = iterate(at.f, at.h);
     if (again === null) {
-      correction = g;
+      if (loaded) correction = g;
+      else emptyCorrection = g;
       break;
     }
     result = again;
   }
   const { e, iterations, converged } = result;
   const s = solveInverter(e, true);
-  const validity: ValidityNote[] = [...e.notes, ...(withPart && model !== null ? model.notes : []), ...s.validity];
+  const validity: ValidityNote[] = [];
+  if (cellsUsed) {
+    validity.push(CELL_MODEL_NOTE);
+    const [bandLow, bandHigh] = studyBand(d, props);
+    if (e.f < bandLow || e.f > bandHigh) {
+      validity.push({
+        code: "coil-impedance-outside-band",
+        message: `The operating frequency lies outside the band the coil-impedance model was reduced over (${bandLow}–${bandHigh} Hz, from the empty coil's resonance); the reduced model extrapolates there, beyond its tested accuracy.`,
+        value: e.f,
+      });
+    }
+    if (withPart && model !== null) {
+      for (const note of model.notes) {
+        if (note.code === "finite-coil-coupling" || note.code === "plate-coupling") continue;
+        if (note.code === "part-shorter-than-coil") {
+          validity.push({
+            ...note,
+            message: `The part is shorter than the coil: the long part's coupling is scaled by end-effect factors (the exact short part of the coil-impedance model, with its own cells, over the long one), computed once at the start resistivity and held for every frequency, resistivity and permeability. Against the field solution of scenario G (a billet 0.47 × the coil length) the part power reads 2.5 % low; holding the factors over three octaves of frequency and resistivity × 0.5–3 adds up to 4.6 % (part power) and 0.9 % of the loaded inductance. For a magnetic part the factors are those of the non-magnetic part (not measured against a field solution).`,
+          });
+          continue;
+        }
+        validity.push(note);
+      }
+    }
+  } else {
+    if (props.impedanceTier === "cells") {
+      validity.push({
+        code: "coil-impedance-closed-form",
+        message: "The coil is outside the coil-impedance model's domain (turns that touch, or a part that does not fit inside the turns), so the study falls back to the closed-form coil inductance, resistance and coupling, whose errors the notes below state.",
+      });
+    }
+    closedFormWindingResistance(d, props, e.f, validity);
+    if (withPart && model !== null) validity.push(...model.notes);
+  }
+  validity.push(...s.validity);
   if (e.mur > 1) validity.push({ code: "constant-permeability", message: "The part's permeability is taken as constant through its depth at the value for the surface field (a linear model of a saturating material)." });
   if (!converged) {
     validity.push({ code: "operating-point-not-converged", message: "The frequency/permeability fixed point did not settle to 1e-10 within 80 iterations; numbers are from the last iterate." });
@@ -851,7 +1173,7 @@ export function heaterOperatingPoint(
     withPart,
     partTemperature,
     frequency: s.frequency,
-    coilInductance: L0,
+    coilInductance: e.emptyL,
     inductanceChange: e.inductanceChange,
     inductance: e.L,
     coilResistance: e.coilResistance,
@@ -862,7 +1184,7 @@ export function heaterOperatingPoint(
     tankResistance: e.tankResistance + s.switchResistance,
     partRelativePermeability: e.mur,
     partResistivity,
-    partSkinDepth: e.coupling?.skinDepth ?? null,
+    partSkinDepth: withPart ? skinDepth({ resistivity: partResistivity, frequency: e.f, relativePermeability: e.mur }) : null,
     surfaceFieldStrengthPeak: e.h,
     inverterInputVoltage: s.vin,
     supplyCurrent: s.supplyCurrent,
@@ -887,13 +1209,17 @@ export function heaterOperatingPoint(
     cautions: s.cautions,
     validity,
   };
-  if (correction !== null) corrections.set(point, correction);
+  const finalCorrection = withPart ? correction : emptyCorrection;
+  if (finalCorrection !== null) corrections.set(point, { withPart, correction: finalCorrection });
   return point;
 }
 
 /**
- * The coil's terminal inductance and resistance (conductor plus reflected part resistance) at
- * any frequency, with the part's permeability held at a given value: for impedance sweeps.
+ * The coil's terminal inductance and resistance (conductor, leads and the part's resistance) at
+ * any frequency, with the part's permeability held at the operating point's value: for
+ * impedance sweeps. The closed-form surrogate carries the operating point's correction to the
+ * exact model (resistances by factors, inductances by offsets), so the sweep is exact at the
+ * operating frequency and follows the closed form's trend away from it.
  */
 export function coilImpedanceAt(
   d: ResolvedHeaterDescription,
@@ -901,17 +1227,22 @@ export function coilImpedanceAt(
   point: HeaterOperatingPoint,
   frequency: number,
 ): { inductance: number; resistance: number } {
-  const notes: ValidityNote[] = [];
-  const coilResistance = coilAcResistance(d, props, frequency, notes);
-  if (!point.withPart) return { inductance: props.inductance, resistance: coilResistance };
-  const c = couplingModel(d, props).coupling(frequency, point.partResistivity, point.partRelativePermeability);
-  return { inductance: props.inductance + c.inductanceChange, resistance: coilResistance + c.reflectedResistance };
+  const copper = closedFormWindingResistance(d, props, frequency, null);
+  let cheap: CoilState = { copper, part: 0, L: props.inductance, emptyL: props.inductance };
+  if (point.withPart) {
+    const c = couplingModel(d, props).surrogate(frequency, point.partResistivity, point.partRelativePermeability);
+    cheap = { copper, part: c.reflectedResistance, L: props.inductance + c.inductanceChange, emptyL: props.inductance };
+  }
+  const stored = corrections.get(point);
+  const st = stored !== undefined ? corrected(cheap, stored.correction) : cheap;
+  return { inductance: st.L, resistance: st.copper + st.part + leadResistance(d, props, frequency) };
 }
 
 /**
- * The study's coupling of its part at a given frequency, resistivity and relative permeability
- * (the exact model the operating point reports), with the surface field per ampere: for checks
- * against field solutions at fixed material properties.
+ * The study's coil and part at a given frequency, resistivity and relative permeability (the
+ * exact model of the tier the operating point reports): the part's loss resistance at 1 A,
+ * ΔL, the loaded and empty inductance, the loaded winding's copper resistance, and the surface
+ * field per ampere: for checks against field solutions at fixed material properties.
  *
  * @internal
  */
@@ -920,8 +1251,21 @@ export function studyPartCoupling(
   frequency: number,
   resistivity: number,
   relativePermeability: number,
-): { reflectedResistance: number; inductanceChange: number; fieldPerAmpere: number } {
-  const model = couplingModel(d, coilProperties(d));
+  impedanceTier: CoilImpedanceTier = "cells",
+): { reflectedResistance: number; inductanceChange: number; inductance: number; emptyInductance: number; copperResistance: number; fieldPerAmpere: number } {
+  const props = coilProperties(d, impedanceTier);
+  const model = couplingModel(d, props);
+  const z = impedanceTier === "cells" ? cellState(d, props, frequency, resistivity, relativePermeability, true) : null;
+  if (z !== null) {
+    return { reflectedResistance: z.part, inductanceChange: z.L - z.emptyL, inductance: z.L, emptyInductance: z.emptyL, copperResistance: z.copper, fieldPerAmpere: model.fieldPerAmpere };
+  }
   const c = model.coupling(frequency, resistivity, relativePermeability);
-  return { reflectedResistance: c.reflectedResistance, inductanceChange: c.inductanceChange, fieldPerAmpere: model.fieldPerAmpere };
+  return {
+    reflectedResistance: c.reflectedResistance,
+    inductanceChange: c.inductanceChange,
+    inductance: props.inductance + c.inductanceChange,
+    emptyInductance: props.inductance,
+    copperResistance: closedFormWindingResistance(d, props, frequency, null),
+    fieldPerAmpere: model.fieldPerAmpere,
+  };
 }

@@ -205,10 +205,16 @@ export interface HeaterSearchOptions {
  * Searches turns, capacitance (IEC 60063 E12/E24 values), conductor and (for a fixed-frequency
  * series inverter) switching frequency for designs that come closest to a target part power or
  * heat-up time while respecting voltage, current and frequency limits. Every candidate is a full
- * operating point of {@link studyHeater}'s model (same composition of modules); for a time goal
- * the candidates are ranked by an energy estimate first and the best are then run through the
- * full electro-thermal heat-up. Returns the best few designs and, for the others, why they
- * failed (counts per reason).
+ * operating point of {@link studyHeater}'s composition screened with the closed-form coil tier
+ * (Rosa's inductance, the current-sheet resistance, the finite-coil coupling: frequency up to
+ * 9 % low, see `CLOSED_FORM_FIELD_REFERENCE_TOLERANCE`), its part power scaled by the base
+ * design's ratio of the two tiers; the finalists (twice `keep`, or for a time goal at least 20
+ * ranked by an energy estimate) are then re-solved by
+ * {@link studyHeater} with the coil-impedance model, re-ranked on those numbers, and reported
+ * with them (for a time goal through the full electro-thermal heat-up). Returns the best few
+ * designs and, for the others, why they failed (counts per reason). A design near the edge of a
+ * limit may pass screening and exceed the limit by the screening error; the reported numbers
+ * are the finalist's own.
  *
  * Performance: about 10⁴ candidates in a few seconds for solenoid coils (one core); pancake
  * coils cost more per candidate (the Dodd–Deeds integral at each fixed-point step).
@@ -388,7 +394,8 @@ function evaluateGroup(plan: SearchPlan, [c, turns, frequency]: GroupItem): Grou
   if (frequency !== null) coilVariant.inverter = { ...raw.inverter, frequency };
   let props;
   try {
-    props = coilProperties(readHeaterDescription(coilVariant));
+    // screening with the closed-form tier; the finalists are re-solved with the coil-impedance model
+    props = coilProperties(readHeaterDescription(coilVariant), "closed-form");
   } catch (e) {
     if (!(e instanceof InputError)) throw e;
     // group by field and rule, without the candidate's own numbers
@@ -450,31 +457,46 @@ function finishSearch(description: HeaterDescription, plan: SearchPlan, groups: 
 
   // rank: Float64Array of scores
   const scores = new Float64Array(feasible.length);
-  const mass = studyHeater(description, { heatUp: false, temperatureScan: false, impedanceSweep: false }).part.mass;
+  const baseStudy = studyHeater(description, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+  const mass = baseStudy.part.mass;
+  // calibration of the screening tier: the base design's part power with the coil-impedance
+  // model over the closed form's (the closed form's bias, e.g. for parts shorter than the coil,
+  // is shared by the candidates); 1 when the base design has no closed-form operating point
+  let calibration = 1;
+  try {
+    const dBase = baseStudy.description;
+    const screened = heaterOperatingPoint(dBase, dBase.part.startTemperature, true, coilProperties(dBase, "closed-form"));
+    if (screened.losses.part > 0 && baseStudy.operating.losses.part > 0) calibration = baseStudy.operating.losses.part / screened.losses.part;
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+  }
   for (let i = 0; i < feasible.length; i++) {
-    const p = (feasible[i] as Feasible).point.losses.part;
+    const p = (feasible[i] as Feasible).point.losses.part * calibration;
     scores[i] = targetPower !== null ? Math.abs(Math.log(Math.max(p, 1e-300) / targetPower)) : Math.abs(Math.log(energyEstimate(mass) / Math.max(p, 1e-300) / (targetTime as number)));
   }
   const order = Array.from(scores.keys()).sort((a, b) => (scores[a] as number) - (scores[b] as number));
-  let chosen: { f: Feasible; score: number; timeToTarget: number | null; empty: HeaterOperatingPoint }[] = [];
-  const finalists = order.slice(0, targetTime !== null ? Math.max(4 * keep, 20) : keep);
+  let chosen: { f: Feasible; score: number; timeToTarget: number | null; empty: HeaterOperatingPoint; point: HeaterOperatingPoint }[] = [];
+  const finalists = order.slice(0, targetTime !== null ? Math.max(4 * keep, 20) : 2 * keep);
   for (const i of finalists) {
     const f = feasible[i] as Feasible;
     const s = studyHeater(f.variant, { heatUp: targetTime !== null, radialHeatUp: false, temperatureScan: false, impedanceSweep: false });
     const t = s.heatUp?.timeToTarget ?? null;
-    const score = targetTime !== null ? (t === null ? Infinity : Math.abs(Math.log(t / targetTime))) : (scores[i] as number);
-    chosen.push({ f, score, timeToTarget: t, empty: s.emptyCoil });
+    // the finalist's own study (coil-impedance model) gives its numbers and its score
+    const p = s.operating.losses.part;
+    const score = targetTime !== null ? (t === null ? Infinity : Math.abs(Math.log(t / targetTime))) : targetPower !== null ? Math.abs(Math.log(Math.max(p, 1e-300) / targetPower)) : (scores[i] as number);
+    chosen.push({ f, score, timeToTarget: t, empty: s.emptyCoil, point: s.operating });
   }
   if (targetTime !== null) {
     for (const c of chosen) if (c.timeToTarget === null) reject("target temperature not reached");
-    chosen = chosen.filter((c) => c.timeToTarget !== null).sort((a, b) => a.score - b.score);
+    chosen = chosen.filter((c) => c.timeToTarget !== null);
   }
-  const best: HeaterCandidate[] = chosen.slice(0, keep).map(({ f, score, timeToTarget, empty }) => ({
+  chosen.sort((a, b) => a.score - b.score);
+  const best: HeaterCandidate[] = chosen.slice(0, keep).map(({ f, score, timeToTarget, empty, point }) => ({
     turns: f.turns,
     capacitance: f.capacitance,
     conductor: plan.conductors[f.conductor] as HeaterConductor,
     switchingFrequency: f.frequency,
-    summary: summarise(f.point, empty, timeToTarget),
+    summary: summarise(point, empty, timeToTarget),
     score,
     description: f.variant,
   }));

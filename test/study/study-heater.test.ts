@@ -2,7 +2,6 @@ import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import {
   coilEfficiency,
-  coilOverPlate,
   currentFedParallelInverter,
   InputError,
   relativePermeabilityAt,
@@ -11,8 +10,7 @@ import {
   solenoidInductance,
   spiralCoilInductance,
   studyHeater,
-  prepareEncirclingCoilOverRod,
-  workCoilResistanceCurrentSheet,
+  workCoilImpedance,
   celsius,
 } from "../../src/index.js";
 import type { HeaterDescription, HeaterOperatingPoint, HeaterStudy } from "../../src/index.js";
@@ -56,25 +54,23 @@ describe("studyHeater: every number equals the module-level call it came from", 
     expect(op.coilCurrentRms).toBe(inv.coilCurrentRms);
     expect(op.switchVoltagePeak).toBe(inv.switchVoltagePeak);
     expect(op.coilEfficiency).toBe(coilEfficiency({ coilResistance: op.coilResistance, reflectedResistance: op.reflectedResistance }));
-    // coupling: the finite coil (current over the tube's radial extent) over the infinite ring,
-    // N² times the one-turn solution, weighted by the share of the squared field over its height
-    const one = prepareEncirclingCoilOverRod({
-      coil: { innerRadius: coil.radius - tube.outerDiameter / 2, outerRadius: coil.radius + tube.outerDiameter / 2, length: coil.length, turns: 1 },
-      rod: { radius: d.part.outerRadius, innerRadius: d.part.innerRadius },
-    })(op.frequency, op.partResistivity, op.partRelativePermeability);
-    const ratio = op.reflectedResistance / (coil.turns ** 2 * one.reflectedResistance);
-    expect(ratio).toBeGreaterThan(0.3); // the field share over a ring shorter than the coil
-    expect(ratio).toBeLessThan(1);
-    closeRel(op.inductanceChange, coil.turns ** 2 * one.inductanceChange * ratio, 1e-8);
-    const sheet = workCoilResistanceCurrentSheet({
-      innerDiameter: 2 * coil.radius - tube.outerDiameter,
-      coilLength: coil.length,
-      turns: coil.turns,
-      spaceFactor: (coil.turns * tube.outerDiameter) / coil.length,
+    // coil and coupling: the coil-impedance model (prepareWorkCoil's reduced path at refinement
+    // 0.5); the empty coil against a direct workCoilImpedance call at the operating frequency
+    const rho = resistivityAt(tube.material, coil.temperature);
+    const workCoil = { shape: "solenoid" as const, radius: coil.radius, length: coil.length, turns: coil.turns, conductor: { kind: "tube" as const, outerDiameter: tube.outerDiameter, wallThickness: tube.wallThickness }, resistivity: rho };
+    const empty = workCoilImpedance({ coil: workCoil, frequency: op.frequency, refinement: 0.5 });
+    closeRel(op.coilInductance, empty.inductance, 1e-3);
+    // the ring shorter than the coil: the long ring's loss scaled by an end-effect factor below 1
+    const long = workCoilImpedance({
+      coil: workCoil,
       frequency: op.frequency,
-      resistivity: resistivityAt(tube.material, coil.temperature),
+      refinement: 0.5,
+      part: { shape: "tube", radius: d.part.outerRadius, innerRadius: d.part.innerRadius, length: 1, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
     });
-    expect(op.coilResistance).toBeGreaterThan(sheet); // plus the leads
+    const ratio = op.reflectedResistance / long.partResistance;
+    expect(ratio).toBeGreaterThan(0.3);
+    expect(ratio).toBeLessThan(1.5);
+    expect(op.coilResistance).toBeGreaterThan(empty.resistance); // plus the leads
     closeRel(op.losses.part, op.coilCurrentRms ** 2 * op.reflectedResistance, 1e-15);
   });
 
@@ -99,13 +95,24 @@ describe("studyHeater: every number equals the module-level call it came from", 
     expect(op.capacitorVoltageRms).toBe(inv.capacitorVoltageRms);
     // power tracking reaches the target power in the tank (frequencyForPower)
     closeRel(inv.power, d.inverter.targetPower ?? 0, 1e-6);
-    const c = coilOverPlate({
-      coil: { innerRadius: coil.innerRadius - dc / 2, outerRadius: coil.outerRadius + dc / 2, liftOff: coil.liftOff, length: dc, turns: coil.turns },
-      plate: { thickness: d.part.thickness, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
+    // coil and coupling: the coil-impedance model (litz: the full cell solve at every call)
+    if (coil.conductor.kind !== "litz") throw new Error("fixture");
+    const z = workCoilImpedance({
+      coil: {
+        shape: "pancake",
+        innerRadius: coil.innerRadius,
+        pitch: (coil.outerRadius - coil.innerRadius) / (coil.turns - 1),
+        turns: coil.turns,
+        conductor: { kind: "litz", strands: coil.conductor.strands, strandDiameter: coil.conductor.strandDiameter },
+        resistivity: resistivityAt(coil.conductor.material, coil.temperature),
+      },
       frequency: op.frequency,
+      refinement: 0.5,
+      part: { shape: "plate", radius: Math.min(d.part.length, d.part.width) / 2, thickness: d.part.thickness, gap: coil.liftOff, resistivity: op.partResistivity, relativePermeability: op.partRelativePermeability },
     });
-    closeRel(op.reflectedResistance, c.reflectedResistance, 1e-7);
-    closeRel(op.inductanceChange, c.inductanceChange, 1e-7);
+    closeRel(op.reflectedResistance, z.partResistance, 1e-5);
+    closeRel(op.inductance, z.inductance, 1e-6);
+    closeRel(op.coilInductance, z.emptyInductance, 1e-6);
   });
 });
 
@@ -223,7 +230,7 @@ describe("studyHeater: plausibility of the 1 kg steel-ring shrink-fit demo (comm
   it("lists its approximations, one note per code", () => {
     const codes = s.validity.map((v) => v.code);
     expect(new Set(codes).size).toBe(codes.length);
-    expect(codes).toContain("finite-coil-coupling");
+    expect(codes).toContain("coil-impedance-model");
     expect(codes).toContain("part-shorter-than-coil");
     expect(codes).toContain("lumped-heat-up");
   });
@@ -310,8 +317,10 @@ describe("studyHeater: reproductions of reported failures", () => {
     const b = studyHeater(mutate(forging, "part.targetTemperature", "850 °C"), { temperatureScan: false, impedanceSweep: false });
     expect(a.heatUp?.steadyStateTemperature).toBe(b.heatUp?.steadyStateTemperature);
     const settle = (a.heatUp?.steadyStateTemperature ?? 0) - 273.15;
+    // the power collapses over the Curie transition (768 °C for the A2 point, common practice);
+    // above it the non-magnetic bar still takes enough power to settle a little higher
     expect(settle).toBeGreaterThan(700);
-    expect(settle).toBeLessThan(800);
+    expect(settle).toBeLessThan(850);
   });
 
   it("a tank that cannot oscillate throws an InputError that names the criterion", () => {
