@@ -1131,7 +1131,7 @@ export function heaterOperatingPoint(
         if (note.code === "part-shorter-than-coil") {
           validity.push({
             ...note,
-            message: `The part is shorter than the coil: the long part's coupling is scaled by end-effect factors (the exact short part of the coil-impedance model, with its own cells, over the long one), computed once at the start resistivity and held for every frequency, resistivity and permeability. Against the field solution of scenario G (a billet 0.47 × the coil length) the part power reads 2.5 % low; holding the factors over three octaves of frequency and resistivity × 0.5–3 adds up to 4.6 % (part power) and 0.9 % of the loaded inductance. For a magnetic part the factors are those of the non-magnetic part (not measured against a field solution).`,
+            message: `The part is shorter than the coil: the long part's coupling is scaled by end-effect factors (the exact short part of the coil-impedance model, with its own cells, over the long one), computed once at the start resistivity and held for every frequency, resistivity and permeability. Against the field solution of scenario G (a billet 0.47 × the coil length) the part power reads 2.5 % low; holding the factors over three octaves of frequency and resistivity × 0.5–3 adds up to 4.6 % (part power) and 0.9 % of the loaded inductance. For a magnetic part the factors are those of the non-magnetic part: against the library's axisymmetric field solver (μr and ρ held at the operating point's values) the bearing-race example's steel ring (0.63 × the coil length, μr ≈ 150, 37 kHz) reads its reflected resistance, and so its power, about 49 % high and ΔL 9 % high.`,
           });
           continue;
         }
