@@ -3,7 +3,7 @@
  * scenarios (fixture test/fixtures/field-reference/batch1.json, generated with scikit-fem by
  * test/fixtures/field-reference/generate_batch1.py; every turn a solid conductor of its real
  * section), with the part's properties fixed (a material set of constant resistivity and
- * permeability), as issue 14's checks ask: frequency within 1 % and part power within 3 %.
+ * permeability), against the targets: frequency within 1 % and part power within 3 %.
  *
  * For each scenario and fixture frequency f_k the capacitor is chosen so that the field
  * solution's loaded coil (R, L at f_k) has its zero-phase frequency at f_k:

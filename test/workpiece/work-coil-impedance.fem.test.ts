@@ -7,7 +7,7 @@ import batch1 from "../fixtures/field-reference/batch1.json" with { type: "json"
 // (scikit-fem + gmsh, solid turns of the real cross-section with the turn current constrained,
 // fine P2 mesh; generator test/fixtures/field-reference/generate_batch1.py). Its own relative
 // uncertainty is stored per value (mesh refinement + outer-boundary doubling + 2e-4 floor) and
-// added to the tolerance. Tolerances of issue 14: inductance 2 %, resistance and reflected
+// added to the tolerance. Target tolerances: inductance 2 %, resistance and reflected
 // resistance 3 %.
 const TOL_L = 0.02;
 const TOL_R = 0.03;
