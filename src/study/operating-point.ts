@@ -33,6 +33,7 @@ import {
 } from "../tank/index.js";
 import { MU_0 } from "../units/index.js";
 import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, prepareWorkCoil, tubeInLongCoil } from "../workpiece/index.js";
+import { nonMagneticWeight, prepareShortPartFactor } from "../workpiece/work-coil-short-part.js";
 import type { PreparedWorkCoil, ReducedWorkCoil, WorkCoilConductor, WorkCoilPart, WorkCoilPancake, WorkCoilSolenoid } from "../workpiece/index.js";
 import { conductorOuterDiameter } from "./read-description.js";
 import type { ResolvedConductor, ResolvedHeaterDescription, ResolvedSolenoidCoil } from "./read-description.js";
@@ -568,6 +569,48 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
  */
 export const STUDY_COIL_REFINEMENT = 0.5;
 
+/**
+ * The coil-impedance tier's error for a part shorter than the coil (the long part's exact
+ * coupling times the end-effect factor of `prepareShortPartFactor`), measured against the
+ * library's axisymmetric field solver (scripts/measurements/short-magnetic-part.ts, written to
+ * short-magnetic-part.json beside it: a bar of radius 30 mm and a ring of wall 12 mm in the
+ * bearing-race example's 6-turn coil, length 0.35–0.9 × the coil's, μr 3–300, outer radius
+ * 10–640 skin depths, 37 kHz, resistivity that of a metal, ≥ 1.5e-8 Ω·m): the largest relative
+ * error of the reflected resistance, and of ΔL as a fraction of the empty coil's inductance, by
+ * the part's thinnest radial section w (bar radius, tube or ring wall) against the skin depth δ
+ * and μr·δ. Measured: `thick` (w ≥ 100 δ and w ≥ 0.09 μr δ) 1.7 % and 0.36 %; `general`
+ * (w ≥ 5 δ and w ≥ 0.09 μr δ) 12.5 % and 1.4 % (short bars 10 δ in radius at μr 3–8, and 40 δ at
+ * μr 300); `thin` (w < 5 δ) 24 % and 4.4 %; `outside` (w < 0.09 μr δ: flux crosses the whole
+ * section, which a surface impedance cannot hold) up to 7.3 × and 17 %. The scaling by the
+ * non-magnetic part's end factors it replaces read the resistance up to 474 × high on the same
+ * grid (1.5 × for the bearing-race ring).
+ */
+export const SHORT_PART_ERROR = {
+  thick: { resistance: 0.02, inductance: 0.004 },
+  general: { resistance: 0.13, inductance: 0.014 },
+  thin: { resistance: 0.25, inductance: 0.044 },
+  outside: { resistance: 7.3, inductance: 0.17 },
+} as const;
+
+/** The validity note of a part shorter than the coil at an operating point (coil-impedance tier): the measured error bound that applies. */
+function shortPartNote(d: ResolvedHeaterDescription, frequency: number, resistivity: number, relativePermeability: number, note: ValidityNote): ValidityNote {
+  const part = d.part;
+  const section = part.shape === "bar" ? part.radius : part.shape === "tube" ? part.wallThickness : part.shape === "ring" ? part.outerRadius - part.innerRadius : part.thickness;
+  const delta = skinDepth({ resistivity, frequency, relativePermeability });
+  const depths = section / delta;
+  const flux = section / (relativePermeability * delta);
+  const tier = flux < 0.09 ? SHORT_PART_ERROR.outside : depths < 5 ? SHORT_PART_ERROR.thin : depths >= 100 ? SHORT_PART_ERROR.thick : SHORT_PART_ERROR.general;
+  const range =
+    flux >= 0.09
+      ? `here the part's section is ${depths.toPrecision(3)} skin depths and ${flux.toPrecision(2)} × μr·δ, where the field solver puts it within ${tier.resistance * 100} % (reflected resistance, so part power at a given coil current) and ${tier.inductance * 100} % of the empty coil's inductance (ΔL)`
+      : `here the part's section is only ${flux.toPrecision(2)} × μr·δ (flux crosses the whole section, which a surface impedance cannot hold): outside the model's range, where the field solver found errors up to ${tier.resistance} × (reflected resistance) and ${tier.inductance * 100} % of the empty coil's inductance; use the field model for this part`;
+  return {
+    ...note,
+    message: `The part is shorter than the coil: the long part's exact coupling is scaled by a complex end-effect factor from a surface-impedance model of the short and the long part (Leontovich condition, ψ = p ∂ψ/∂n with p = (1 − j)μrδ/2, solved by a boundary-element method), corrected towards the coil-impedance model's own cells for the non-magnetic part (weight 1 at μr = 1 falling to 0 at μr = 20); ${range}. Measured against the library's axisymmetric field solver over bars and rings 0.35–0.9 × the coil length, μr 3–300, 10–640 skin depths.`,
+    value: depths,
+  };
+}
+
 /** The validity note of the coil-impedance tier (numbers measured by test/study/field-reference.test.ts). */
 const CELL_MODEL_NOTE: ValidityNote = {
   code: "coil-impedance-model",
@@ -638,11 +681,23 @@ function studyBand(d: ResolvedHeaterDescription, props: CoilProperties): [number
   return [2 ** Math.floor(Math.log2(lo)), 2 ** Math.ceil(Math.log2(hi))];
 }
 
-/** End-effect factors of a part shorter than the coil: exact short part over the infinitely long one (part loss, ΔL, copper change). */
+/**
+ * End effects of a part shorter than the coil: the copper change's factor (exact short
+ * non-magnetic part over the long one at the start resistivity), the surface-impedance model's
+ * complex short-over-long ratio F(μrδ/2) (`prepareShortPartFactor`), and a table of its
+ * correction to the exact non-magnetic part (the model's own cells), as [log |c|, arg c] by
+ * node k of t = 2^(k/2) m, filled when first needed.
+ */
 interface EndFactors {
-  readonly part: number;
-  readonly L: number;
   readonly copper: number;
+  readonly factor: (t: number) => [number, number];
+  readonly cells: Map<number, [number, number]>;
+}
+
+/** (a + jb)/(c + jd) as [re, im]. */
+function complexRatio(a: number, b: number, c: number, d: number): [number, number] {
+  const den = c * c + d * d;
+  return [(a * c + b * d) / den, (b * c - a * d) / den];
 }
 
 /**
@@ -651,11 +706,12 @@ interface EndFactors {
  * outside its band the reduced model extrapolates, which the operating point reports), or
  * `null` when the geometry is outside the model's domain.
  *
- * A part shorter than the coil: the reduced model holds the infinitely long part; its changes
- * (part loss, ΔL, the copper's change) are scaled by end-effect factors, the exact short
- * non-magnetic part (the model's own part cells) over the long one, computed once per geometry
- * and start resistivity at the centre of the first band, and held for every frequency,
- * resistivity and permeability.
+ * A part shorter than the coil: the reduced model holds the infinitely long part; its
+ * impedance change is multiplied by a complex end-effect factor (see {@link EndFactors}): the
+ * exact short non-magnetic part over the long one (the model's own part cells, computed once
+ * per geometry at the start resistivity and the band's centre), blended with the
+ * surface-impedance model's factor at μrδ/2 by weights 1/μr and 1 − 1/μr; the copper's change
+ * is scaled by the non-magnetic factor. Errors: {@link SHORT_PART_ERROR}.
  */
 function cellState(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number, resistivity: number, relativePermeability: number, withPart: boolean): CoilState | null {
   const coil = workCoilOf(d, props);
@@ -678,31 +734,76 @@ function cellState(d: ResolvedHeaterDescription, props: CoilProperties, frequenc
     }
     const z = entry.reduced.impedance(frequency, resistivity, relativePermeability);
     if (!withPart) return { copper: z.emptyResistance, part: 0, L: z.emptyInductance, emptyL: z.emptyInductance };
-    let k: EndFactors = { part: 1, L: 1, copper: 1 };
     const partLength = part.shape === "plate" ? Infinity : part.length;
-    if (partLength < (coil.shape === "solenoid" ? coil.length : 0)) {
-      const rhoStart = resistivityAt(d.part.material, d.part.startTemperature);
-      const centre = Math.sqrt(entry.fMin * entry.fMax);
-      const endsKey = `${rhoStart}|${centre}`;
-      let ends = slot.ends.get(endsKey);
-      if (ends === undefined) {
-        const exact = entry.prepared.impedance(centre, { ...part, resistivity: rhoStart, relativePermeability: 1 });
-        const long = entry.reduced.impedance(centre, rhoStart, 1);
-        const copperLong = long.copperResistance - long.emptyResistance;
-        const copperExact = exact.copperResistance - exact.emptyResistance;
-        ends = {
-          part: exact.partResistance / long.partResistance,
-          L: exact.inductanceChange / long.inductanceChange,
-          copper: Math.abs(copperLong) > 1e-3 * long.emptyResistance ? Math.min(2, Math.max(0, copperExact / copperLong)) : 1,
-        };
-        slot.ends.set(endsKey, ends);
-      }
-      k = ends;
+    if (coil.shape !== "solenoid" || part.shape === "plate" || !(partLength < coil.length)) {
+      return { copper: z.copperResistance, part: z.partResistance, L: z.emptyInductance + z.inductanceChange, emptyL: z.emptyInductance };
     }
+    const rhoStart = resistivityAt(d.part.material, d.part.startTemperature);
+    const centre = Math.sqrt(entry.fMin * entry.fMax);
+    const endsKey = `${rhoStart}|${centre}`;
+    let ends = slot.ends.get(endsKey);
+    if (ends === undefined) {
+      const exact = entry.prepared.impedance(centre, { ...part, resistivity: rhoStart, relativePermeability: 1 });
+      const long = entry.reduced.impedance(centre, rhoStart, 1);
+      const copperLong = long.copperResistance - long.emptyResistance;
+      const copperExact = exact.copperResistance - exact.emptyResistance;
+      const turns = coil.turns;
+      const factor = prepareShortPartFactor({
+        coilRadius: coil.radius,
+        turnPositions: Array.from({ length: turns }, (_, i) => coil.length * ((i + 0.5) / turns - 0.5)),
+        outerRadius: part.radius,
+        innerRadius: part.shape === "tube" ? part.innerRadius : 0,
+        length: part.length,
+      });
+      ends = {
+        copper: Math.abs(copperLong) > 1e-3 * long.emptyResistance ? Math.min(2, Math.max(0, copperExact / copperLong)) : 1,
+        factor,
+        cells: new Map(),
+      };
+      slot.ends.set(endsKey, ends);
+    }
+    const w = 2 * Math.PI * frequency;
+    const t = (relativePermeability * skinDepth({ resistivity, frequency, relativePermeability })) / 2;
+    let [gr, gi] = ends.factor(t);
+    const weight = nonMagneticWeight(relativePermeability);
+    if (weight > 0) {
+      // the surface-impedance factor corrected towards the exact non-magnetic part (own cells)
+      // at the non-magnetic skin depth, table in log t half an octave apart, linear between
+      const wc = 2 * Math.PI * centre;
+      const table = ends.cells;
+      const e = ends;
+      const node = (k: number): [number, number] => {
+        let v = table.get(k);
+        if (v === undefined) {
+          const tk = 2 ** (k / 2);
+          const rho = (wc * MU_0 * (2 * tk) ** 2) / 2;
+          const exact = entry!.prepared.impedance(centre, { ...part, resistivity: rho, relativePermeability: 1 });
+          const long = entry!.reduced.impedance(centre, rho, 1);
+          const [kr, ki] = complexRatio(exact.partResistance, wc * exact.inductanceChange, long.partResistance, wc * long.inductanceChange);
+          const [fr, fi] = e.factor(tk);
+          const [cr, ci] = complexRatio(kr, ki, fr, fi);
+          v = [Math.log(Math.hypot(cr, ci)), Math.atan2(ci, cr)];
+          table.set(k, v);
+        }
+        return v;
+      };
+      const x = 2 * Math.log2(skinDepth({ resistivity, frequency }) / 2);
+      const k0 = Math.floor(x);
+      const u = x - k0;
+      const [a0, p0] = node(k0);
+      const [a1, p1] = node(k0 + 1);
+      const magnitude = Math.exp(weight * ((1 - u) * a0 + u * a1));
+      const phase = weight * ((1 - u) * p0 + u * p1);
+      const cr = magnitude * Math.cos(phase);
+      const ci = magnitude * Math.sin(phase);
+      [gr, gi] = [gr * cr - gi * ci, gr * ci + gi * cr];
+    }
+    const zr = z.partResistance;
+    const zi = w * z.inductanceChange;
     return {
-      copper: z.emptyResistance + k.copper * (z.copperResistance - z.emptyResistance),
-      part: k.part * z.partResistance,
-      L: z.emptyInductance + k.L * z.inductanceChange,
+      copper: z.emptyResistance + ends.copper * (z.copperResistance - z.emptyResistance),
+      part: gr * zr - gi * zi,
+      L: z.emptyInductance + (gr * zi + gi * zr) / w,
       emptyL: z.emptyInductance,
     };
   } catch (error) {
@@ -1129,10 +1230,7 @@ export function heaterOperatingPoint(
       for (const note of model.notes) {
         if (note.code === "finite-coil-coupling" || note.code === "plate-coupling") continue;
         if (note.code === "part-shorter-than-coil") {
-          validity.push({
-            ...note,
-            message: `The part is shorter than the coil: the long part's coupling is scaled by end-effect factors (the exact short part of the coil-impedance model, with its own cells, over the long one), computed once at the start resistivity and held for every frequency, resistivity and permeability. Against the field solution of scenario G (a billet 0.47 × the coil length) the part power reads 2.5 % low; holding the factors over three octaves of frequency and resistivity × 0.5–3 adds up to 4.6 % (part power) and 0.9 % of the loaded inductance. For a magnetic part the factors are those of the non-magnetic part: against the library's axisymmetric field solver (μr and ρ held at the operating point's values) the bearing-race example's steel ring (0.63 × the coil length, μr ≈ 150, 37 kHz) reads its reflected resistance, and so its power, about 49 % high and ΔL 9 % high.`,
-          });
+          validity.push(shortPartNote(d, e.f, partResistivity, e.mur, note));
           continue;
         }
         validity.push(note);

@@ -6,6 +6,7 @@
  *
  * @packageDocumentation
  */
+import { SHORT_PART_FACTOR_ERROR, nonMagneticWeight, prepareShortPartFactor } from "./work-coil-short-part.js";
 import { InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { litzAcRatio, litzGeometry } from "../conductors/index.js";
@@ -479,6 +480,12 @@ interface Solved {
   readonly turnCopper: Float64Array;
 }
 
+/** (a + jb)/(c + jd) as [re, im] for pairs [a, b] and [c, d]. */
+function complexQuotient([a, b]: [number, number], [c, d]: [number, number]): [number, number] {
+  const den = c * c + d * d;
+  return [(a * c + b * d) / den, (b * c - a * d) / den];
+}
+
 /** A kernel part at one frequency: its factored kernel and material. */
 interface KernelPart {
   readonly kernel: PartKernel;
@@ -720,6 +727,7 @@ function prepared(geo: CoilGeometry, design: number, refinement: number): Prepar
     return cache.get(geometry, floor);
   };
   const emptyCache = new Map<number, Solved>();
+  const shortFactors = new Map<string, (t: number) => [number, number]>();
   const getMesh = (mirror: boolean): Mesh => {
     if (mirror) return (coilMesh ??= buildMesh(geo, ctl, geo.shape === "solenoid"));
     if (geo.shape === "pancake") return (coilMesh ??= buildMesh(geo, ctl, false));
@@ -776,10 +784,43 @@ function prepared(geo: CoilGeometry, design: number, refinement: number): Prepar
         const kernel = kernelFor(mesh, { kind: "rod", radius: part.radius }, floor);
         loaded = solveMesh(geo, mesh, f, { kernel, material });
         partModel = "long-rod-kernel";
-        if (isShortPart(geo, part)) {
+        if (isShortPart(geo, part) && geo.shape === "solenoid") {
+          // the long part's change times the end-effect factor: the exact non-magnetic short part
+          // over the long one (own cells) blended with the surface-impedance factor at μrδ/2
+          const nonMagnetic = { ...part, relativePermeability: 1 };
+          const shortCells = solveMesh(geo, buildMesh(geo, ctl, true, partBlock(nonMagnetic, f, refinement), part.resistivity), f);
+          const kkLong = (2 * Math.PI * f * MU_0) / part.resistivity;
+          const longFloor = rodScale({ kind: "rod", radius: part.radius, innerRadius: part.innerRadius, kk: kkLong, mur: 1 }, coilExtent(geo).rOuter);
+          const longCells = solveMesh(geo, mesh, f, { kernel: kernelFor(mesh, { kind: "rod", radius: part.radius }, longFloor), material: { kind: "rod", innerRadius: part.innerRadius, kk: kkLong, mur: 1 } });
+          const change = (x: Solved): [number, number] => [x.re - x.copper, x.im - empty.im];
+          const [kr, ki] = complexQuotient(change(shortCells), change(longCells));
+          const factorKey = `${part.radius}|${part.innerRadius}|${part.length}`;
+          let factor = shortFactors.get(factorKey);
+          if (factor === undefined) {
+            factor = prepareShortPartFactor({ coilRadius: geo.centresR[0]!, turnPositions: geo.centresZ, outerRadius: part.radius, innerRadius: part.innerRadius, length: part.length });
+            shortFactors.set(factorKey, factor);
+          }
+          const [fr, fi] = factor((part.relativePermeability * skinDepthOf(part.resistivity, f, part.relativePermeability)) / 2);
+          // the surface-impedance factor, corrected towards the exact non-magnetic part by weight
+          const weight = nonMagneticWeight(part.relativePermeability);
+          let gr = fr;
+          let gi = fi;
+          if (weight > 0) {
+            const [nr, ni] = factor(skinDepthOf(part.resistivity, f) / 2);
+            const [cr, ci] = complexQuotient([kr, ki], [nr, ni]);
+            const magnitude = Math.hypot(cr, ci) ** weight;
+            const phase = weight * Math.atan2(ci, cr);
+            [gr, gi] = [fr * magnitude * Math.cos(phase) - fi * magnitude * Math.sin(phase), fr * magnitude * Math.sin(phase) + fi * magnitude * Math.cos(phase)];
+          }
+          const [zr, zi] = change(loaded);
+          const copperDenominator = longCells.copper - empty.copper;
+          const copperFactor = Math.abs(copperDenominator) > 1e-3 * empty.copper ? Math.min(2, Math.max(0, (shortCells.copper - empty.copper) / copperDenominator)) : 1;
+          const copper = empty.copper + copperFactor * (loaded.copper - empty.copper);
+          const turnCopper = loaded.turnCopper.map((c, i) => (empty.turnCopper[i] ?? 0) + copperFactor * (c - (empty.turnCopper[i] ?? 0)));
+          loaded = { ...loaded, re: copper + gr * zr - gi * zi, im: empty.im + gr * zi + gi * zr, copper, turnCopper };
           validity.push({
             code: "short-magnetic-part",
-            message: "A magnetic bar or tube shorter than the coil plus a few coil radii is modelled as infinitely long; its ends (not modelled) lower the coupling, by an amount not measured here.",
+            message: `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). Against the library's axisymmetric field solver (bars and rings 0.35–0.9 × the coil length, μr 3–300) the reflected resistance is within ${SHORT_PART_FACTOR_ERROR.thick * 100} % where the thinnest radial section w is at least 100 δ and 0.09 μr·δ, ${SHORT_PART_FACTOR_ERROR.general * 100} % where w ≥ 5 δ and ≥ 0.09 μr·δ, ${SHORT_PART_FACTOR_ERROR.thin * 100} % for thinner sections; below 0.09 μr·δ flux crosses the section, beyond the model.`,
             value: part.length,
           });
         }
