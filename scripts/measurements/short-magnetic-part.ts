@@ -9,9 +9,10 @@
  *     npx tsx scripts/measurements/short-magnetic-part.ts
  *
  * The resistivity is chosen for each μr and a/δ (a: the part's outer radius); the field solver's
- * own accuracy is set to 3e-3.
+ * own accuracy is set to 3e-3. With `--reuse-field` the field solutions are read back from the
+ * JSON of an earlier run (same grid) and only the study's side is recomputed.
  */
-import { readFileSync, writeFileSync } from "node:fs";
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { readHeaterDescription, solveAxisymmetricField } from "../../src/index.js";
 import { studyPartCoupling } from "../../src/study/operating-point.js";
 import { MU_0 } from "../../src/units/index.js";
@@ -22,7 +23,11 @@ const rhoCopper = 1.75e-8 * (1 + 0.0039 * 15); // copper at 35 °C (handbook coe
 const turns = Array.from({ length: 6 }, (_, i) => ({ kind: "circle" as const, r: 0.075, z: -0.024 + (i + 0.5) * 0.008, radius: 0.003, innerRadius: 0.002 }));
 const coil = { name: "coil", current: 1, turns, resistivity: rhoCopper, model: "solid" as const };
 const accuracy = 3e-3;
-const empty = solveAxisymmetricField({ frequency, coils: [coil], regions: [], accuracy }).coils["coil"]!;
+const output = new URL("./short-magnetic-part.json", import.meta.url);
+interface Earlier { meta: { emptyInductance: number; emptyResistance?: number }; rows: { shape: string; lengthRatio: number; relativePermeability: number; radiusOverSkinDepth: number; field: { reflectedResistance: number; inductanceChange: number } }[] }
+const earlier = process.argv.includes("--reuse-field") && existsSync(output) ? (JSON.parse(readFileSync(output, "utf8")) as Earlier) : null;
+const empty = earlier !== null ? { inductance: earlier.meta.emptyInductance } : solveAxisymmetricField({ frequency, coils: [coil], regions: [], accuracy }).coils["coil"]!;
+const emptyResistance = "resistance" in empty ? empty.resistance : (earlier?.meta.emptyResistance ?? Number.NaN);
 const rows: unknown[] = [];
 for (const shape of ["bar", "ring"] as const) {
   for (const ratio of [0.35, 0.65, 0.9]) {
@@ -40,8 +45,13 @@ for (const shape of ["bar", "ring"] as const) {
         const d = readHeaterDescription({ ...base, part });
         const study = studyPartCoupling(d, frequency, resistivity, relativePermeability);
         const region = { name: "part", shape: { kind: "rectangle" as const, rMin: inner, rMax: outer, zMin: -length / 2, zMax: length / 2 }, resistivity, relativePermeability };
-        const loaded = solveAxisymmetricField({ frequency, coils: [coil], regions: [region], accuracy }).coils["coil"]!;
-        const field = { reflectedResistance: loaded.resistance - empty.resistance, inductanceChange: loaded.inductance - empty.inductance };
+        const reused = earlier?.rows.find((r) => r.shape === shape && r.lengthRatio === ratio && r.relativePermeability === relativePermeability && r.radiusOverSkinDepth === radiusOverSkinDepth);
+        let field: { reflectedResistance: number; inductanceChange: number };
+        if (reused !== undefined) field = reused.field;
+        else {
+          const loaded = solveAxisymmetricField({ frequency, coils: [coil], regions: [region], accuracy }).coils["coil"]!;
+          field = { reflectedResistance: loaded.resistance - emptyResistance, inductanceChange: loaded.inductance - empty.inductance };
+        }
         rows.push({
           shape,
           lengthRatio: ratio,
@@ -79,7 +89,8 @@ const out = {
     generator: "scripts/measurements/short-magnetic-part.ts",
     frequency,
     emptyInductance: empty.inductance,
+    ...(Number.isFinite(emptyResistance) ? { emptyResistance } : {}),
   },
   rows,
 };
-writeFileSync(new URL("./short-magnetic-part.json", import.meta.url), JSON.stringify(out, null, 1) + "\n");
+writeFileSync(output, JSON.stringify(out, null, 1) + "\n");
