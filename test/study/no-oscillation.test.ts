@@ -4,11 +4,11 @@ import type { HeaterDescription } from "../../src/index.js";
 import { NoOscillationError, coilProperties, heaterOperatingPoint } from "../../src/study/operating-point.js";
 import { loadExample, mutate } from "./cases.js";
 
-// The bearing race on one turn with 200 mF: above the Curie point the steel's resistivity keeps
+// The bearing race on one turn with 300 mF: above the Curie point the steel's resistivity keeps
 // rising, the loaded coil branch's resistance rises with it and crosses √(L/C), where a
 // current-fed parallel tank has no zero-phase frequency (circuit theory: the branch R + jωL in
 // parallel with C has Im Y = 0 at ω² = 1/(LC) − R²/L², which exists only while R < √(L/C)).
-const d = mutate(mutate(loadExample("study-bearing-race.json"), "coil.turns", 1), "capacitor.capacitance", "200 mF") as unknown as HeaterDescription;
+const d = mutate(mutate(loadExample("study-bearing-race.json"), "coil.turns", 1), "capacitor.capacitance", "300 mF") as unknown as HeaterDescription;
 const study = studyHeater(d, { temperatureScan: false, impedanceSweep: false, radialHeatUp: false });
 const band = study.heatUp?.unsolvedBands[0];
 
