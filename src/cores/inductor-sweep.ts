@@ -42,7 +42,7 @@ export interface InductorSweepPoint {
   readonly design: InductorDesign;
   /** Peak flux density in the narrowest section [T]. */
   readonly peakFluxDensityNarrowest: number;
-  /** True when the point meets the flux limit and fits the window (no `core-saturates`, `flux-margin` or `window-overfull` caution). */
+  /** True when the point reaches the inductance, meets the flux limit and fits the window (no `core-saturates`, `flux-margin` or `window-overfull` caution). */
   readonly usable: boolean;
 }
 
@@ -56,7 +56,7 @@ export interface InductorTurnsSweep {
   readonly design: InductorDesign;
   /** Every turn count that could be designed, in increasing order. */
   readonly points: readonly InductorSweepPoint[];
-  /** Turn counts of the range that could not be designed, with the reason (e.g. the inductance is out of reach). */
+  /** Turn counts of the range that could not be designed, with the reason (e.g. the gap would be longer than the window allows). */
   readonly skipped: readonly { readonly turns: number; readonly reason: string }[];
   /** The usable point of least total loss, `null` when no point is usable. */
   readonly leastLoss: InductorSweepPoint | null;
@@ -78,15 +78,16 @@ export interface InductorTurnsSweep {
  * N^\ast = \arg\min_{N \in [N_\mathrm{min}, N_\mathrm{max}],\ \text{usable}} \bigl(P_\mathrm{core}(N) + P_\mathrm{cu}(N)\bigr)
  * $$
  *
- * A point is usable when its peak flux density in the narrowest section stays within the flux
- * limit and its winding fits the window. For a DC inductor with small ripple the optimum is
+ * A point is usable when it reaches the inductance (too few turns cannot, even without a gap:
+ * `inductorDesign` then notes `no-gap-needed`), its peak flux density in the narrowest section
+ * stays within the flux limit and its winding fits the window. For a DC inductor with small ripple the optimum is
  * usually the fewest usable turns (what {@link inductorDesign} picks); with a large ripple the
  * core loss moves it to more turns.
  *
  * Hard domain (throws {@link InputError}): `design` as {@link inductorDesign} (it is designed
  * once with its own turns first); `minTurns`, `maxTurns` not integers ≥ 1, `maxTurns < minTurns`
- * or more than 400 points. Turn counts whose design throws (the inductance out of reach of the
- * ungapped core) are listed in `skipped`, not thrown. Validity and accuracy: those of
+ * or more than 400 points. Turn counts whose design throws (a gap longer than the window or
+ * the path allows) are listed in `skipped`, not thrown. Validity and accuracy: those of
  * {@link inductorDesign} at each point; the minimum is exact over the integers swept (each
  * point is evaluated, no interpolation). Cost: one {@link inductorDesign} per point, at most 400 points.
  *
@@ -144,7 +145,7 @@ export function inductorTurnsSweep(options: InductorTurnsSweepOptions): Inductor
         }
         throw e;
       }
-      const usable = !d.cautions.some((c) => BLOCKING.has(c.code));
+      const usable = d.inductance >= base.inductance * (1 - 1e-9) && !d.cautions.some((c) => BLOCKING.has(c.code));
       const point: InductorSweepPoint = { turns: n, design: d, peakFluxDensityNarrowest: d.peakFluxDensity * narrowest, usable };
       points.push(point);
       if (usable && (leastLoss === null || d.totalLoss < leastLoss.design.totalLoss)) leastLoss = point;
