@@ -69,7 +69,8 @@ function inductorPlotsOf(options: InductorDesignOptions, sweep: InductorTurnsSwe
     caption: `Core loss (iGSE) falls and winding loss rises with the turns; the gap follows from the inductance at each count. ${optimumText}`,
   });
   const flux = points.map((p) => p.peakFluxDensityNarrowest);
-  const designFlux = d.peakFluxDensity * (options.core.effectiveArea / options.core.minimumArea);
+  const minimumArea = options.core.minimumArea > 0 ? options.core.minimumArea : options.core.effectiveArea;
+  const designFlux = d.peakFluxDensity * (options.core.effectiveArea / minimumArea);
   const fluxLines = marks(designFlux);
   fluxLines.push({ axis: "x", value: ratio * bsat, label: `flux limit ${q(ratio * bsat, "T", 3)}` });
   plots.push({
