@@ -149,7 +149,7 @@ function checkOptions(where: string, options: unknown): void {
  * against turns, against the peak flux density and against the gap length (the design and the
  * turns of least loss marked, unusable counts drawn apart), the temperature rise against turns,
  * the current and flux density over one period, and where the loss goes. The curves come from
- * {@link inductorTurnsSweep} over its default range.
+ * `inductorTurnsSweep` (of `fluxwright/cores`) over its default range.
  *
  * @param options - the inductor's specification, as for `inductorDesign`
  * @returns the plots, each with a stable `id`, an `<svg>` string and a caption
