@@ -98,7 +98,7 @@ the design cannot run, 4 an output could not be written, 130 interrupted (Ctrl-C
 `;
 
 const HELP: Record<string, string> = {
-  study: `usage: fluxwright study FILE [--json] [--html OUT] [--quiet]
+  study: `usage: fluxwright study FILE [--json] [--html OUT] [--model field] [--quiet]
 
 Runs the heater study in FILE (JSON, or - for standard input; quantities as text with units
 such as "30 mm") and prints a text report: cautions first, the design, operating points
@@ -109,6 +109,9 @@ options:
                 the study file as "input", so it can be read back as FILE)
   --html OUT    also write a self-contained HTML report with plots to OUT (never over FILE;
                 written to a temporary file and renamed, so a failure keeps the old OUT)
+  --model M     "closed-form" (default, fast) or "field": the coil's impedance and the part's
+                coupling from the axisymmetric field solver (seconds per anchor temperature;
+                the HTML report then shows the field picture)
   --quiet       with --html: print only the report's path
   -h, --help    show this help
 
@@ -362,7 +365,7 @@ function designFailure(io: CliIo, command: string, file: StudyFile, e: unknown):
 }
 
 function studyCommand(args: readonly string[], io: CliIo): number {
-  const parsed = parseArgs(args, ["html"], ["json", "quiet"]);
+  const parsed = parseArgs(args, ["html", "model"], ["json", "quiet"]);
   if (parsed.flags.has("help")) {
     io.stdout(HELP.study as string);
     return EXIT_OK;
@@ -371,12 +374,14 @@ function studyCommand(args: readonly string[], io: CliIo): number {
   const html = parsed.flags.get("html");
   const same = io.samePath ?? ((a: string, b: string) => a === b);
   if (typeof html === "string" && path !== "-" && same(html, path)) throw new UsageError(`refusing to write the HTML report over the study file ${html}: choose another output path`);
+  const model = parsed.flags.get("model");
+  if (model !== undefined && model !== "field" && model !== "closed-form") throw new UsageError(`--model must be "closed-form" or "field", got ${String(model)}`);
   const file = loadStudyFile(io, path);
   const bad = checkStudyFile(io, file);
   if (bad !== null) return bad;
   let study;
   try {
-    study = studyHeater(file.input as HeaterDescription);
+    study = studyHeater(file.input as HeaterDescription, model === "field" ? { model } : {});
   } catch (e) {
     return designFailure(io, "study", file, e);
   }

@@ -72,6 +72,8 @@ export type {
   HeaterImpedanceSweep,
   HeaterStudy,
   HeaterUnsolvedBand,
+  HeaterFieldPicture,
+  HeaterFieldSummary,
 } from "./study-heater.js";
 export type { HeaterLosses, HeaterOperatingPoint, CoilProperties, CoilImpedanceTier } from "./operating-point.js";
 export { sweepHeater, sweepHeaterStream } from "./sweep-heater.js";
