@@ -55,6 +55,7 @@ export function contourSegments(values: readonly number[], columns: number, rows
       const b = v(i + 1, j);
       const c = v(i + 1, j + 1);
       const d = v(i, j + 1);
+      if (Number.isNaN(a) || Number.isNaN(b) || Number.isNaN(c) || Number.isNaN(d)) continue;
       const index = (a >= level ? 1 : 0) | (b >= level ? 2 : 0) | (c >= level ? 4 : 0) | (d >= level ? 8 : 0);
       if (index === 0 || index === 15) continue;
       const t = (p: number, q: number): number => (p === q ? 0.5 : (level - p) / (q - p));
@@ -109,14 +110,80 @@ export function contourSegments(values: readonly number[], columns: number, rows
   return out;
 }
 
-/** The |B| contour levels of a picture: geometric, ascending [T]. */
+/**
+ * |B| at the grid nodes outside the part, the turns and the passive regions (NaN inside them:
+ * the contours are drawn in the air, where the grid resolves the field; inside a conductor the
+ * field lives in the skin depth, which the power density shows).
+ */
+export function airFluxDensity(picture: HeaterFieldPicture): number[] {
+  const columns = picture.r.length;
+  const inside = (r: number, z: number): boolean =>
+    [...picture.part, ...picture.passive].some((p) => r > p.rMin && r < p.rMax && z > p.zMin && z < p.zMax) || picture.turns.some((t) => Math.hypot(r - t.r, z - t.z) < t.radius);
+  return picture.fluxDensity.map((b, k) => (inside(picture.r[k % columns]!, picture.z[Math.floor(k / columns)]!) ? NaN : b));
+}
+
+/** The |B| contour levels of a picture: geometric, ascending [T], from the largest |B| in the air. */
 export function fieldContourLevels(picture: HeaterFieldPicture): number[] {
   let peak = 0;
-  for (const b of picture.fluxDensity) if (b > peak) peak = b;
+  for (const b of airFluxDensity(picture)) if (b > peak) peak = b;
   if (!(peak > 0)) return [];
   const lo = peak / 64;
   const hi = 0.9 * peak;
   return Array.from({ length: FIELD_CONTOUR_LEVELS }, (_, k) => lo * (hi / lo) ** (k / (FIELD_CONTOUR_LEVELS - 1)));
+}
+
+/**
+ * Power density against depth below the part's outer surface at mid-height (the first part
+ * rectangle's row of cells nearest its middle), on a logarithmic scale: the skin layer, which is
+ * too thin to see at the picture's scale.
+ */
+function depthProfile(picture: HeaterFieldPicture, x0: number, y0: number, pMax: number): string {
+  const block = picture.powerDensity[0];
+  if (block === undefined || !(pMax > 0)) return "";
+  const nr = block.r.length - 1;
+  const zMid = 0.5 * (block.z[0]! + block.z[block.z.length - 1]!);
+  let row = 0;
+  for (let j = 0; j + 1 < block.z.length; j++) {
+    const zc = 0.5 * (block.z[j]! + block.z[j + 1]!);
+    const best = 0.5 * (block.z[row]! + block.z[row + 1]!);
+    if (Math.abs(zc - zMid) < Math.abs(best - zMid)) row = j;
+  }
+  const surface = block.r[nr]!;
+  const points: [number, number][] = [];
+  for (let i = nr - 1; i >= 0; i--) {
+    const depth = surface - 0.5 * (block.r[i]! + block.r[i + 1]!);
+    const p = block.values[row * nr + i]!;
+    points.push([depth, p]);
+  }
+  // depth axis to where the density falls 3 decades (or the whole part)
+  let depthMax = points[points.length - 1]![0];
+  for (const [depth, p] of points) {
+    if (p < pMax * 10 ** -POWER_DENSITY_DECADES) {
+      depthMax = depth;
+      break;
+    }
+  }
+  const w = 200;
+  const h = 110;
+  const ticks = linearTicks(0, depthMax * 1e3, "", 4);
+  const dMax = ticks.max / 1e3;
+  const X = (d: number): number => x0 + (Math.min(d, dMax) / dMax) * w;
+  const Y = (p: number): number => y0 + h * Math.min(1, Math.max(0, -Math.log10(Math.max(p, 1e-300) / pMax) / POWER_DENSITY_DECADES));
+  const out: string[] = [];
+  out.push(`<g class="depth-profile">`);
+  out.push(`<text x="${num(x0)}" y="${num(y0 - 8)}">power density against depth (mid-height)</text>`);
+  out.push(`<rect x="${num(x0)}" y="${num(y0)}" width="${w}" height="${h}" fill="none" stroke="#999999"/>`);
+  const line = points.filter(([d]) => d <= dMax).map(([d, p], k) => `${k === 0 ? "M" : "L"}${num(X(d))} ${num(Y(p))}`).join("");
+  if (line !== "") out.push(`<path d="${line}" fill="none" stroke="#b03010" stroke-width="1.5"/>`);
+  for (const t of ticks.ticks) {
+    const xv = X(t.value / 1e3);
+    out.push(`<line x1="${num(xv)}" y1="${num(y0 + h)}" x2="${num(xv)}" y2="${num(y0 + h + 4)}" stroke="${INK}"/><text x="${num(xv)}" y="${num(y0 + h + 16)}" text-anchor="middle" font-size="10">${escapeXml(t.label)}</text>`);
+  }
+  out.push(`<text x="${num(x0 + w / 2)}" y="${num(y0 + h + 30)}" text-anchor="middle" font-size="10">depth below the outer surface (mm)</text>`);
+  out.push(`<text x="${num(x0 + w - 4)}" y="${num(y0 + 12)}" text-anchor="end" font-size="10">${escapeXml(formatChartNumber(pMax, "W/m³"))}</text>`);
+  out.push(`<text x="${num(x0 + w - 4)}" y="${num(y0 + h - 4)}" text-anchor="end" font-size="10">${escapeXml(formatChartNumber(pMax * 10 ** -POWER_DENSITY_DECADES, "W/m³"))}</text>`);
+  out.push(`</g>`);
+  return out.join("");
 }
 
 /**
@@ -137,9 +204,9 @@ export function fieldPictureSvg(picture: HeaterFieldPicture): string {
   const plotH = zSpan * scale;
   const left = 64;
   const top = 40;
-  const legendW = 190;
+  const legendW = 250;
   const width = Math.ceil(left + plotW + 24 + legendW);
-  const height = Math.ceil(top + plotH + 56);
+  const height = Math.ceil(Math.max(top + plotH + 56, top + 36 + FIELD_CONTOUR_LEVELS * 16 + 160 + 190));
   const X = (rv: number): number => left + (rv - r[0]!) * scale;
   const Y = (zv: number): number => top + (z[rows - 1]! - zv) * scale;
   const gx = (i: number): number => {
@@ -178,9 +245,10 @@ export function fieldPictureSvg(picture: HeaterFieldPicture): string {
   out.push(`</g>`);
   // |B| contours
   const levels = fieldContourLevels(picture);
+  const air = airFluxDensity(picture);
   out.push(`<g class="contours" fill="none" clip-path="url(#field-plot)">`);
   levels.forEach((level, k) => {
-    const segments = contourSegments(picture.fluxDensity, columns, rows, level);
+    const segments = contourSegments(air, columns, rows, level);
     const d = segments.map(([i0, j0, i1, j1]) => `M${num(X(gx(i0)))} ${num(Y(gy(j0)))}L${num(X(gx(i1)))} ${num(Y(gy(j1)))}`).join("");
     const colour = ramp(CONTOUR_STOPS, levels.length > 1 ? k / (levels.length - 1) : 1);
     out.push(`<path class="contour" data-level="${level.toPrecision(4)}" stroke="${colour}" stroke-width="1.1" d="${d === "" ? "M0 0" : d}"/>`);
@@ -188,7 +256,7 @@ export function fieldPictureSvg(picture: HeaterFieldPicture): string {
   out.push(`</g>`);
   // outlines: part, passive regions, turns
   out.push(`<g class="outlines">`);
-  for (const p of picture.part) out.push(`<rect class="part" x="${num(X(p.rMin))}" y="${num(Y(p.zMax))}" width="${num((p.rMax - p.rMin) * scale)}" height="${num((p.zMax - p.zMin) * scale)}" fill="none" stroke="${INK}" stroke-width="1.2"/>`);
+  for (const p of picture.part) out.push(`<rect class="part" x="${num(X(p.rMin))}" y="${num(Y(p.zMax))}" width="${num((p.rMax - p.rMin) * scale)}" height="${num((p.zMax - p.zMin) * scale)}" fill="none" stroke="#555555" stroke-width="0.5"/>`);
   for (const p of picture.passive) out.push(`<rect class="passive" x="${num(X(p.rMin))}" y="${num(Y(p.zMax))}" width="${num((p.rMax - p.rMin) * scale)}" height="${num((p.zMax - p.zMin) * scale)}" fill="#9e9e9e" fill-opacity="0.35" stroke="#555555" stroke-dasharray="4 2"/>`);
   for (const t of picture.turns) {
     out.push(`<circle class="turn" cx="${num(X(t.r))}" cy="${num(Y(t.z))}" r="${num(Math.max(0.8, t.radius * scale))}" fill="#b87333" stroke="#5a3311" stroke-width="0.6"/>`);
@@ -236,6 +304,7 @@ export function fieldPictureSvg(picture: HeaterFieldPicture): string {
     const y = by + 10 + (dec * barH) / POWER_DENSITY_DECADES;
     out.push(`<text x="${num(lx + 22)}" y="${num(y + 4)}">${escapeXml(formatChartNumber(pMax * 10 ** -dec, "W/m³"))}</text>`);
   }
+  out.push(depthProfile(picture, lx, by + barH + 40, pMax));
   out.push(`</g>`);
   out.push(`</svg>`);
   return out.join("");
