@@ -8,7 +8,7 @@ import { escapeXml, formatChartNumber, linearTicks } from "./chart.js";
 
 const FONT = "'DejaVu Sans', 'Helvetica Neue', Arial, sans-serif";
 const INK = "#222222";
-/** Number of |B| contour levels, geometric from 1/64 of the largest |B| to 0.9 of it. */
+/** Number of |B| contour levels, geometric from 1/64 of the largest |B| in the air (98th percentile) to 0.9 of it. */
 export const FIELD_CONTOUR_LEVELS = 9;
 /** Decades of power density shown (below that, the lightest colour). */
 export const POWER_DENSITY_DECADES = 3;
@@ -122,10 +122,15 @@ export function airFluxDensity(picture: HeaterFieldPicture): number[] {
   return picture.fluxDensity.map((b, k) => (inside(picture.r[k % columns]!, picture.z[Math.floor(k / columns)]!) ? NaN : b));
 }
 
-/** The |B| contour levels of a picture: geometric, ascending [T], from the largest |B| in the air. */
+/**
+ * The |B| contour levels of a picture: geometric, ascending [T], up to the 98th percentile of
+ * |B| in the air (a magnetic part's corners would otherwise set the scale for one grid node).
+ */
 export function fieldContourLevels(picture: HeaterFieldPicture): number[] {
-  let peak = 0;
-  for (const b of airFluxDensity(picture)) if (b > peak) peak = b;
+  const air = airFluxDensity(picture)
+    .filter((b) => !Number.isNaN(b))
+    .sort((a, b) => a - b);
+  const peak = air.length === 0 ? 0 : air[Math.min(air.length - 1, Math.floor(0.98 * air.length))]!;
   if (!(peak > 0)) return [];
   const lo = peak / 64;
   const hi = 0.9 * peak;

@@ -77,14 +77,14 @@ export function heaterFieldGeometry(d: ResolvedHeaterDescription, props: CoilPro
     for (let i = 0; i < coil.turns; i++) turns.push(circle(coil.radius, -coil.length / 2 + (i + 0.5) * pitch));
     const part = d.part;
     if (part.shape === "plate") throw new InputError("studyHeater", "part.shape", part.shape, "", "a bar, tube or ring inside a solenoid");
-    const outer = part.shape === "bar" ? part.radius : part.outerRadius;
+    const outer = part.rectangles !== undefined ? Math.max(...part.rectangles.map((x) => x.rMax)) : part.shape === "bar" ? part.radius : part.outerRadius;
     const bore = part.shape === "bar" ? 0 : part.shape === "tube" ? part.outerRadius - part.wallThickness : part.innerRadius;
     const length = part.shape === "ring" ? part.height : part.length;
     const clear = coil.radius - radius * (1 + ROUND_GAP);
     if (!(outer < clear)) {
       throw new InputError("studyHeater", "part", outer, "m", `a part whose outer radius is below the turns' inner edge, ${clear} m, with model "field"`);
     }
-    partShapes = [{ kind: "rectangle", rMin: bore, rMax: outer, zMin: -length / 2, zMax: length / 2 }];
+    partShapes = part.rectangles !== undefined ? part.rectangles.map((x) => ({ kind: "rectangle", ...x })) : [{ kind: "rectangle", rMin: bore, rMax: outer, zMin: -length / 2, zMax: length / 2 }];
   } else {
     const part = d.part;
     if (part.shape !== "plate") throw new InputError("studyHeater", "part.shape", part.shape, "", "a plate under a pancake coil");
@@ -100,7 +100,28 @@ export function heaterFieldGeometry(d: ResolvedHeaterDescription, props: CoilPro
     }
     for (let i = 0; i < coil.turns; i++) turns.push(circle(coil.innerRadius + i * (coil.turns > 1 ? pitch : 0), coil.liftOff + radius));
     // the plate as a disc of its half-span (the coil-impedance model's choice, too)
-    partShapes = [{ kind: "rectangle", rMin: 0, rMax: Math.min(part.length, part.width) / 2, zMin: -part.thickness, zMax: 0 }];
+    partShapes = part.rectangles !== undefined ? part.rectangles.map((x) => ({ kind: "rectangle", ...x })) : [{ kind: "rectangle", rMin: 0, rMax: Math.min(part.length, part.width) / 2, zMin: -part.thickness, zMax: 0 }];
+  }
+  const passive: FieldRegion[] = [];
+  for (const c of d.concentrators ?? []) {
+    c.rectangles.forEach((x, k) => {
+      passive.push({ name: `${c.name}#${k}`, shape: { kind: "rectangle", ...x }, relativePermeability: c.relativePermeability, ...(c.resistivity === null ? {} : { resistivity: c.resistivity }) });
+    });
+  }
+  // rectangles must keep clear of each turn's bounding square (the solver's rule for round conductors)
+  const named: [string, FieldShape][] = [
+    ...(d.part.rectangles !== undefined ? partShapes.map((x, k): [string, FieldShape] => [`part.rectangles[${k}]`, x]) : []),
+    ...(d.concentrators ?? []).flatMap((c, i) => c.rectangles.map((x, k): [string, FieldShape] => [`concentrators[${i}].rectangles[${k}]`, { kind: "rectangle", ...x }])),
+  ];
+  for (const [path, x] of named) {
+    if (x.kind !== "rectangle") continue;
+    for (const t of turns) {
+      if (t.kind !== "circle") continue;
+      const gap = Math.max(x.rMin - (t.r + t.radius), t.r - t.radius - x.rMax, x.zMin - (t.z + t.radius), t.z - t.radius - x.zMax);
+      if (!(gap > t.radius * ROUND_GAP)) {
+        throw new InputError("studyHeater", path, gap, "m", `a rectangle clear of the square around each turn (r = ${t.r} m, z = ${t.z} m, half-side ${t.radius} m) by more than ${t.radius * ROUND_GAP} m`);
+      }
+    }
   }
   const closedFormCopper = c.kind === "litz";
   // litz: stranded turns with the resistivity that gives the bundle the copper's DC resistance
@@ -108,15 +129,16 @@ export function heaterFieldGeometry(d: ResolvedHeaterDescription, props: CoilPro
   return {
     coil: { name: "coil", current: 1, turns, resistivity, model: c.kind === "litz" ? "stranded" : "solid" },
     part: partShapes,
-    passive: [],
+    passive,
     closedFormCopper,
   };
 }
 
-/** One field solution's coil state (leads excluded), at 1 A. */
+/** One field solution's coil state (leads excluded), at 1 A: own conductor, part and concentrator (eddy) losses [Ω], inductance [H]. */
 interface FieldState {
   readonly copper: number;
   readonly part: number;
+  readonly passive: number;
   readonly L: number;
 }
 
@@ -174,7 +196,7 @@ export interface HeaterFieldModel {
 export function fieldModelNote(): ValidityNote {
   return {
     code: "field-model",
-    message: `The coil's own resistance and inductance, empty and with the part, and the part's coupling come from the axisymmetric field solver (solveAxisymmetricField, accuracy ${STUDY_FIELD_ACCURACY}: each turn a closed coaxial ring, helical pitch and leads ignored, the part with uniform ρ and μr at its temperature and the coil's surface field). The field is solved at anchor temperatures (at each anchor's own operating point, again when the frequency or permeability moves by more than ${FIELD_ANCHOR_MOVE * 100} %); between anchors the field solution's correction of the closed-form surrogate is interpolated linearly in temperature. Litz: the solver's turns carry a uniform current, the winding's own loss is the closed form's (litzAcRatio).`,
+    message: `The coil's own resistance and inductance, empty and with the part, and the part's coupling come from the axisymmetric field solver (solveAxisymmetricField, accuracy ${STUDY_FIELD_ACCURACY}: each turn a closed coaxial ring, helical pitch and leads ignored, the part with uniform ρ and μr at its temperature and the coil's surface field). The field is solved at anchor temperatures (at each anchor's own operating point, again when the frequency or permeability moves by more than ${FIELD_ANCHOR_MOVE * 100} %); between anchors the field solution's correction of the closed-form surrogate is interpolated linearly in temperature. Litz: the solver's turns carry a uniform current, the winding's own loss is the closed form's (litzAcRatio). Concentrators given as r–z rectangles have linear μr; the eddy-current loss of a conducting one is counted with the coil's loss. Against solveAxisymmetricField called directly at the operating point: within ${FIELD_ANCHOR_ERROR * 100} % at an anchor and ${FIELD_INTERPOLATION_ERROR * 100} % between anchors (on top of the solver's estimated error).`,
   };
 }
 
@@ -208,7 +230,9 @@ export function prepareHeaterFieldModel(d: ResolvedHeaterDescription, props: Coi
     if (coil === undefined) throw new RangeError("unreachable: the coil's result is missing");
     let part = 0;
     if (withPart) for (let k = 0; k < geometry.part.length; k++) part += result.regions[`part${k}`]?.losses ?? 0;
-    return { state: { copper: coil.losses, part, L: coil.inductance }, result };
+    let passive = 0;
+    for (const p of geometry.passive) passive += result.regions[p.name]?.losses ?? 0;
+    return { state: { copper: coil.losses, part, passive, L: coil.inductance }, result };
   };
   const emptyAt = (frequency: number): FieldState => {
     let best: EmptyAnchor | null = null;
@@ -218,7 +242,8 @@ export function prepareHeaterFieldModel(d: ResolvedHeaterDescription, props: Coi
     empties.push({ frequency, state: s });
     return s;
   };
-  const copperOf = (field: FieldState, cheap: CoilState): number => (geometry.closedFormCopper ? cheap.copper : field.copper);
+  // the coil's loss: its own conductor's (litz: the closed form's) and the concentrators' eddy currents
+  const copperOf = (field: FieldState, cheap: CoilState): number => (geometry.closedFormCopper ? cheap.copper : field.copper) + field.passive;
   const correctionAt = (temperature: number): FieldCorrection | null => {
     const list = [...loaded.values()].sort((a, b) => a.temperature - b.temperature);
     if (list.length === 0) return null;

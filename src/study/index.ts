@@ -36,8 +36,10 @@ export type {
   FixedFrequencySeriesInverterDescription,
   PowerTrackingSeriesInverterDescription,
 } from "./description.js";
+export type { HeaterRectangle, RectanglesPartDescription, HeaterFieldConcentrator } from "./description.js";
 export { readHeaterDescription, HeaterDescriptionError } from "./read-description.js";
 export type { ReadHeaterDescriptionOptions } from "./read-description.js";
+export type { ResolvedRectangle, ResolvedFieldConcentrator } from "./read-description.js";
 export type {
   ResolvedSupply,
   ResolvedCurrentFedInverter,

@@ -16,7 +16,7 @@ import { barInLongCoil, tubeInLongCoil } from "../workpiece/index.js";
 import { NoOscillationError, coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operating-point.js";
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
-import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
+import type { ResolvedHeaterDescription, ResolvedPart, ResolvedRectangle } from "./read-description.js";
 import type { HeaterDescription } from "./description.js";
 import { prepareHeaterFieldModel } from "./field-model.js";
 import type { HeaterFieldModel } from "./field-model.js";
@@ -327,8 +327,50 @@ export interface HeaterStudy {
   readonly field: HeaterFieldSummary | null;
 }
 
+/**
+ * Volume and outer surface of a body of revolution given as r–z rectangles that do not overlap:
+ * the volume is the sum of the rings'; the surface the rectangles' edges less the stretches two
+ * rectangles share (a horizontal edge from r₁ to r₂ sweeps $\pi(r_2^2 - r_1^2)$, a vertical one
+ * at r over a height h sweeps $2\pi r h$).
+ */
+export function rectanglesGeometry(rectangles: readonly ResolvedRectangle[]): { volume: number; surfaceArea: number } {
+  let volume = 0;
+  let area = 0;
+  const overlap = (a0: number, a1: number, b0: number, b1: number): [number, number] | null => {
+    const lo = Math.max(a0, b0);
+    const hi = Math.min(a1, b1);
+    return hi > lo ? [lo, hi] : null;
+  };
+  for (const a of rectangles) {
+    volume += Math.PI * (a.rMax * a.rMax - a.rMin * a.rMin) * (a.zMax - a.zMin);
+    // horizontal edges (bottom, top): their area less the stretches covered by a neighbour's opposite edge
+    for (const [z, opposite] of [[a.zMin, "zMax"], [a.zMax, "zMin"]] as const) {
+      let covered = 0;
+      for (const b of rectangles) {
+        if (b === a || b[opposite] !== z) continue;
+        const o = overlap(a.rMin, a.rMax, b.rMin, b.rMax);
+        if (o !== null) covered += Math.PI * (o[1] * o[1] - o[0] * o[0]);
+      }
+      area += Math.PI * (a.rMax * a.rMax - a.rMin * a.rMin) - covered;
+    }
+    // vertical edges (inner, outer)
+    for (const [r, opposite] of [[a.rMin, "rMax"], [a.rMax, "rMin"]] as const) {
+      if (r === 0) continue;
+      let covered = 0;
+      for (const b of rectangles) {
+        if (b === a || b[opposite] !== r) continue;
+        const o = overlap(a.zMin, a.zMax, b.zMin, b.zMax);
+        if (o !== null) covered += o[1] - o[0];
+      }
+      area += 2 * Math.PI * r * (a.zMax - a.zMin - covered);
+    }
+  }
+  return { volume, surfaceArea: area };
+}
+
 /** Geometry of the part: volume and heat-losing surface (`workpieceGeometry`). */
 function partGeometry(part: ResolvedPart): { volume: number; surfaceArea: number } {
+  if (part.rectangles !== undefined) return rectanglesGeometry(part.rectangles);
   switch (part.shape) {
     case "bar":
       return workpieceGeometry({ shape: "bar", radius: part.radius, length: part.length });
@@ -651,6 +693,15 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
   if (heatUpPoints !== undefined && heatUpPoints > 1000) throw new InputError("studyHeater", "options.heatUpPoints", heatUpPoints, "", "an integer between 4 and 1000");
   const model = options.model === undefined ? "closed-form" : requireOneOf("studyHeater", "options.model", options.model, ["closed-form", "field"] as const);
   const d = readHeaterDescription(description);
+  if (model !== "field" && (d.part.rectangles !== undefined || (d.concentrators?.length ?? 0) > 0)) {
+    throw new InputError(
+      "studyHeater",
+      "options.model",
+      model,
+      "",
+      `"field" for a ${d.part.rectangles !== undefined ? "part given as r–z rectangles" : "design with concentrators given as r–z rectangles"} (the closed forms cover bars, tubes, rings and plates only): studyHeater(description, { model: "field" }), or --model field on the command line`,
+    );
+  }
   const props = coilProperties(d, model === "field" ? "field" : "cells");
   const fieldModel = model === "field" ? prepareHeaterFieldModel(d, props) : null;
   const part = d.part;
@@ -736,7 +787,7 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
     // ---- surface and core (radial model) for bars and tubes in a solenoid ----
     const targetLocation = part.targetLocation ?? "mean";
     const radial =
-      (options.radialHeatUp !== false || targetLocation !== "mean") && (part.shape === "bar" || part.shape === "tube") && d.coil.shape === "solenoid"
+      (options.radialHeatUp !== false || targetLocation !== "mean") && (part.shape === "bar" || part.shape === "tube") && part.rectangles === undefined && d.coil.shape === "solenoid"
         ? radialPart(d, part, curve, thermal.timeToTarget !== null ? 4 * thermal.timeToTarget : thermal.duration, validity)
         : null;
     heatUp = {

@@ -11,8 +11,8 @@ import { findAll, parseXml } from "../cli/xml.js";
  * ±30 mm falling off exponentially from the part's surface.
  */
 function syntheticPicture(): HeaterFieldPicture {
-  const r = Array.from({ length: 41 }, (_, i) => (i * 0.04) / 40);
-  const z = Array.from({ length: 81 }, (_, j) => -0.04 + (j * 0.08) / 80);
+  const r = Array.from({ length: 81 }, (_, i) => (i * 0.04) / 80);
+  const z = Array.from({ length: 161 }, (_, j) => -0.04 + (j * 0.08) / 160);
   const fluxDensity: number[] = [];
   for (const zj of z) for (const ri of r) fluxDensity.push(0.05 * Math.exp(-((ri - 0.022) ** 2 + zj ** 2) / 0.01 ** 2));
   const pr = [0, 0.004, 0.006, 0.007, 0.0075, 0.0078, 0.008];
