@@ -663,12 +663,23 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * positive (tested); a design the source or tank cannot serve throws. Each module's accuracy and
  * validity apply, and are listed in `validity` where they are stretched.
  *
+ * With `options.model: "field"` steps 1–2 come from the axisymmetric field solver
+ * (`solveAxisymmetricField`, accuracy 1e-2) at anchor temperatures, interpolated in temperature
+ * between them: against the solver called directly at the operating point within 0.1 % at an
+ * anchor and 1 % between anchors (plus the solver's estimated error); on a bar longer than the
+ * coil it agrees with the default model within that model's stated error (0.1 % frequency,
+ * 0.3 % power). Seconds to a minute per study instead of milliseconds; parts and concentrators
+ * given as r–z rectangles need it.
+ *
  * @param description - the design (see {@link HeaterDescription}); text quantities allowed
  * @param options - which slower parts to run (all by default)
  * @returns the {@link HeaterStudy}
  * @throws {@link HeaterDescriptionError} (an {@link InputError}) when the description is
- * invalid, naming the field path; {@link InputError} when `options` is not an object or
- * `options.heatUpPoints` is not an integer from 4 to 1000 (each point costs a coupling solution)
+ * invalid, naming the field path; {@link InputError} when `options` is not an object,
+ * `options.heatUpPoints` is not an integer from 4 to 1000 (each point costs a coupling solution),
+ * `options.model` is not `"closed-form"` or `"field"`, the description has a part or
+ * concentrators as r–z rectangles without `model: "field"`, or (field model) the turns touch or
+ * a body reaches into them
  * @example
  * ```ts
  * import { studyHeater } from "fluxwright";
