@@ -994,6 +994,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       "heatUp.radial": "null for parts other than bars and tubes in a solenoid (a ring here, documented)",
       temperatureScan: "null when not asked for (documented)",
       impedance: "null when not asked for (documented)",
+      field: "null with the closed-form model (documented)",
     },
   },
   inductionRadialHeatUp: {
