@@ -73,13 +73,29 @@ export interface HeaterFieldPicture {
   /** |B| (RMS, $\sqrt{|B_r|^2 + |B_z|^2}$) at each grid node, row by row (z major) [T]. */
   readonly fluxDensity: readonly number[];
   /** Power density in the part [W/m³], per part rectangle, on cells graded towards its surfaces: cell edges in r and z and the value at each cell centre (z major). */
-  readonly powerDensity: readonly { readonly r: readonly number[]; readonly z: readonly number[]; readonly values: readonly number[] }[];
+  readonly powerDensity: readonly {
+    /** Cell edges in r [m]. */
+    readonly r: readonly number[];
+    /** Cell edges in z [m]. */
+    readonly z: readonly number[];
+    /** Power density at each cell centre, z major [W/m³]. */
+    readonly values: readonly number[];
+  }[];
   /** The turns' cross-sections (circles: centre r, z and outer and inner radius) [m]. */
-  readonly turns: readonly { readonly r: number; readonly z: number; readonly radius: number; readonly innerRadius: number }[];
+  readonly turns: readonly {
+    /** Radius of the centre [m]. */
+    readonly r: number;
+    /** Axial position of the centre [m]. */
+    readonly z: number;
+    /** Outer radius of the cross-section [m]. */
+    readonly radius: number;
+    /** Bore radius (tube), 0 for a solid conductor [m]. */
+    readonly innerRadius: number;
+  }[];
   /** The part's cross-section as r–z rectangles [m]. */
-  readonly part: readonly { readonly rMin: number; readonly rMax: number; readonly zMin: number; readonly zMax: number }[];
+  readonly part: readonly ResolvedRectangle[];
   /** Other regions (concentrators) as r–z rectangles [m]. */
-  readonly passive: readonly { readonly rMin: number; readonly rMax: number; readonly zMin: number; readonly zMax: number }[];
+  readonly passive: readonly ResolvedRectangle[];
 }
 
 /**
@@ -89,7 +105,16 @@ export interface HeaterFieldPicture {
  */
 export interface HeaterFieldSummary {
   /** The anchor temperatures where the field was solved, with the operating frequency and the part's permeability there and the solutions it took. */
-  readonly anchors: readonly { readonly temperature: number; readonly frequency: number; readonly relativePermeability: number; readonly solves: number }[];
+  readonly anchors: readonly {
+    /** Part temperature [K]. */
+    readonly temperature: number;
+    /** Frequency of the (last) field solution there [Hz]. */
+    readonly frequency: number;
+    /** The part's relative permeability in it. */
+    readonly relativePermeability: number;
+    /** Field solutions run at this anchor. */
+    readonly solves: number;
+  }[];
   /** Field solutions run in all (empty coil and loaded). */
   readonly solves: number;
   /** Wall time spent in field solutions [s]. */
