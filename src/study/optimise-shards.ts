@@ -7,7 +7,7 @@
 import { InputError, requireKnownKeys } from "../core/index.js";
 import type { HeaterConductor, HeaterDescription } from "./description.js";
 import { combineParts, finalistCount, groupItems, optimiseTask, searchPart, searchPlan } from "./optimize-heater.js";
-import type { GroupResult, HeaterGoal, HeaterOptimisation, PartFinalist, SearchPart } from "./optimize-heater.js";
+import type { GroupResult, HeaterGoal, HeaterOptimisation, SearchPart } from "./optimize-heater.js";
 import type { HeaterSummary } from "./summary.js";
 import { checkShard, shardRange } from "./sweep-heater.js";
 import type { HeaterShard } from "./sweep-heater.js";
@@ -187,7 +187,7 @@ function checkShardOutput(k: number, s: unknown): HeaterOptimisationShard {
   if (typeof s !== "object" || s === null || Array.isArray(s)) throw new InputError(MERGE, path, s, "", "the output of optimiseHeaterShard");
   const o = s as Partial<HeaterOptimisationShard>;
   if (typeof o.search !== "string") throw new InputError(MERGE, `${path}.search`, o.search, "", "the search fingerprint of optimiseHeaterShard");
-  const shard = checkShard(MERGE, o.shard, `${path}.shard`) as HeaterShard | undefined;
+  const shard = checkShard(MERGE, o.shard, `${path}.shard`);
   if (shard === undefined) throw new InputError(MERGE, `${path}.shard`, o.shard, "", "an object { index, count }");
   if (!isCount(o.coils)) throw new InputError(MERGE, `${path}.coils`, o.coils, "", "an integer ≥ 0");
   const [start, end] = shardRange(o.coils, shard);
@@ -268,7 +268,7 @@ export function mergeHeaterOptimisationShards(shards: readonly HeaterOptimisatio
     evaluated: s.evaluated,
     feasible: s.feasible,
     rejections: s.rejections,
-    finalists: s.finalists.slice(0, finalistCount(plan)) as readonly PartFinalist[],
+    finalists: s.finalists.slice(0, finalistCount(plan)),
     warnings: s.warnings,
   }));
   return combineParts(plan, parts);
