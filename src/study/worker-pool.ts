@@ -50,9 +50,12 @@ export interface HeaterPoolOptions {
    */
   readonly signal?: AbortSignal;
   /**
-   * Where the worker script is. In Node the default finds `dist/study/heater-worker.js` of the
-   * installed package; in a browser give the URL at which that file is served (a bundler's
-   * `new URL("fluxwright/study/heater-worker", import.meta.url)`).
+   * Where the worker script is (the package subpath `fluxwright/worker`, the file
+   * `dist/study/heater-worker.js`). In Node the default finds it in the installed package; in a
+   * browser give the URL at which that file is served: with Vite,
+   * `import workerUrl from "fluxwright/worker?url"`; where `import.meta.resolve` knows the
+   * package (Deno, an import map), `import.meta.resolve("fluxwright/worker")`; otherwise copy
+   * the file (it is self-contained) to your static assets and give its URL.
    */
   readonly workerUrl?: string | URL;
 }
@@ -159,7 +162,7 @@ async function importByName<T>(name: string): Promise<T> {
 async function defaultWorkerUrl(where: string): Promise<URL> {
   const here = import.meta.url;
   if (!isNode()) {
-    throw new InputError(where, "options.workerUrl", undefined, "", "the URL of fluxwright's dist/study/heater-worker.js as served to the browser (required outside Node)");
+    throw new InputError(where, "options.workerUrl", undefined, "", "the URL at which the worker script fluxwright/worker (dist/study/heater-worker.js) is served, e.g. from Vite's import workerUrl from \"fluxwright/worker?url\" (required outside Node)");
   }
   const { existsSync } = await importByName<{ existsSync: (p: URL) => boolean }>("node:fs");
   // the bundle may have put this code in the study entry (dist/study) or in a shared chunk (dist)
