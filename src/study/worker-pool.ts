@@ -244,6 +244,15 @@ export function batchSize(total: number, workers: number, maxBatch = 32): number
 }
 
 /**
+ * The size of the next batch handed to a worker: `batch`, but near the end of the run no more
+ * than the remaining items over twice the workers (down to one item), so that the workers
+ * finish together instead of one of them running a last full batch alone.
+ */
+export function nextBatchSize(remaining: number, batch: number, workers: number): number {
+  return Math.max(1, Math.min(batch, Math.ceil(remaining / (2 * Math.max(1, workers)))));
+}
+
+/**
  * Runs `items` through the task runner `kind` on a pool and yields the results in item order.
  * At most about `4 × workers` batches are in flight or waiting to be yielded, so memory stays
  * bounded however many items there are and however slowly the consumer reads.
@@ -282,13 +291,16 @@ export async function* runPool(
   if (isAborted(signal)) throw abortError(signal as AbortSignal);
   const iterator = items[Symbol.iterator]();
   const batch = batchSize(total, options.workers);
+  let taken = 0;
   const nextBatch = (): unknown[] => {
+    const size = options.workers === 0 ? batch : nextBatchSize(total - taken, batch, options.workers);
     const out: unknown[] = [];
-    while (out.length < batch) {
+    while (out.length < size) {
       const r = iterator.next();
       if (r.done === true) break;
       out.push(r.value);
     }
+    taken += out.length;
     return out;
   };
 
