@@ -94,6 +94,8 @@ export type {
   HeaterOptimization,
   HeaterSearchOptions,
 } from "./optimize-heater.js";
+export { optimiseHeaterShard, mergeHeaterOptimisationShards } from "./optimise-shards.js";
+export type { HeaterSearchShardOptions, HeaterShardFinalist, HeaterOptimisationShard } from "./optimise-shards.js";
 export type { HeaterSummary } from "./summary.js";
 export { inductionRadialHeatUp } from "./induction-radial-heat-up.js";
 export type {
