@@ -899,6 +899,21 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
           ],
         },
       ],
+      () => [
+        {
+          frequency: 2e4,
+          accuracy: 0.1,
+          coils: [{ name: "coil", current: 50, resistivity: 1.75e-8, model: "stranded", turns: { shape: { kind: "rectangle", rMin: 0.012, rMax: 0.014, zMin: -0.004, zMax: 0.004 }, count: 4 } }],
+          regions: [
+            {
+              name: "pin",
+              shape: { kind: "rectangle", rMin: 0, rMax: 0.006, zMin: -0.01, zMax: 0.01 },
+              resistivity: 2e-7,
+              magnetisation: { curve: [{ fieldStrength: 300, fluxDensity: 0.8 }, { fieldStrength: 3000, fluxDensity: 1.5 }, { fieldStrength: 30000, fluxDensity: 1.9 }] },
+            },
+          ],
+        },
+      ],
     ],
     allow: [
       { paths: ["0.accuracy", "0.regions", "0.regions.0.resistivity", "0.regions.0.relativePermeability", "0.coils.0.turns.0.innerRadius"], kinds: ["undefined"], reason: OPTIONAL },
