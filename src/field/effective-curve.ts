@@ -6,6 +6,7 @@
  * @packageDocumentation
  */
 import { MU_0 } from "../units/index.js";
+import { gaussLegendreRule } from "../special/internal.js";
 
 /** One point of a B–H curve: field strength [A/m] and flux density [T]. */
 export interface CurvePoint {
@@ -13,32 +14,11 @@ export interface CurvePoint {
   readonly fluxDensity: number;
 }
 
-/** Gauss–Legendre nodes and weights on [0, 1], 24 points, computed once. */
+/** 24-point Gauss–Legendre rule mapped to [0, 1] (nodes GL_X, weights GL_W summing to 1). */
 const GL_N = 24;
-const GL_X = new Float64Array(GL_N);
-const GL_W = new Float64Array(GL_N);
-{
-  // Newton on P_n from the Chebyshev guesses (Golub–Welsch not needed for 24 points)
-  for (let i = 0; i < GL_N; i++) {
-    let x = Math.cos((Math.PI * (i + 0.75)) / (GL_N + 0.5));
-    let dp = 1;
-    for (let it = 0; it < 100; it++) {
-      let p0 = 1;
-      let p1 = x;
-      for (let k = 2; k <= GL_N; k++) {
-        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      dp = (GL_N * (x * p1 - p0)) / (x * x - 1);
-      const dx = p1 / dp;
-      x -= dx;
-      if (Math.abs(dx) < 1e-16) break;
-    }
-    GL_X[i] = 0.5 * (1 - x);
-    GL_W[i] = 1 / ((1 - x * x) * dp * dp);
-  }
-}
+const GL_RULE = gaussLegendreRule(GL_N);
+const GL_X = GL_RULE.nodes.map((x) => 0.5 * (1 + x));
+const GL_W = GL_RULE.weights.map((w) => 0.5 * w);
 
 /**
  * The static curve B(H) for H ≥ 0: piecewise linear through (0, 0) and the given points,

@@ -20,7 +20,8 @@ import type { MeshShape } from "./mesh.js";
 import { MU_0 } from "../units/index.js";
 import { effectiveCurve } from "./effective-curve.js";
 import type { CurvePoint } from "./effective-curve.js";
-import { bodyLosses, centroid, fieldAtProbe, meshFor, probe, solveOnce, triangleFluxDensityPeak } from "./solver.js";
+import { bodyLosses, fieldAtProbe, probe, solveOnce } from "./solver.js";
+import { MAX_SATURATION_ITERATIONS, solveSaturating } from "./saturation.js";
 import type { SolverBody, SolverProblem, SolverSolution } from "./solver.js";
 
 /**
@@ -171,10 +172,18 @@ export interface FieldMagnetisation {
 export interface FieldSaturationResult {
   /** The method: the effective permeability of the fundamental harmonic, per element. */
   readonly method: "first-harmonic effective permeability";
-  /** Fixed-point iterations on the finest mesh. */
+  /** Linear solves of the fixed-point iteration on the finest mesh. */
   readonly iterations: number;
-  /** Largest relative change of any element's reluctivity in the last iteration. */
-  readonly change: number;
+  /**
+   * Bound on the relative impedance change one more update of the element permeabilities
+   * would make (first order; see {@link solveAxisymmetricField}); part of `estimatedError`.
+   */
+  readonly residual: number;
+  /**
+   * Whether `residual` fell below accuracy/10 within 60 solves per mesh; when not, `validity`
+   * holds `"saturation-not-converged"`.
+   */
+  readonly converged: boolean;
 }
 
 /**
@@ -285,8 +294,8 @@ const COIL_KEYS = ["name", "current", "turns", "resistivity", "model"] as const;
 const REGION_KEYS = ["name", "shape", "resistivity", "relativePermeability", "magnetisation"] as const;
 const MAGNETISATION_KEYS = ["curve"] as const;
 const CURVE_POINT_KEYS = ["fieldStrength", "fluxDensity"] as const;
-/** Fixed-point iterations allowed per mesh for saturating regions. */
-const MAX_SATURATION_ITERATIONS = 60;
+/** The fixed point of the saturating regions stops at a residual of accuracy / this. */
+const SATURATION_TOLERANCE_DIVISOR = 10;
 const RECT_KEYS = ["kind", "rMin", "rMax", "zMin", "zMax"] as const;
 const CIRCLE_KEYS = ["kind", "r", "z", "radius", "innerRadius"] as const;
 const BLOCK_KEYS = ["shape", "count"] as const;
@@ -583,21 +592,20 @@ function change(a: SolverSolution, b: SolverSolution, nc: number): number {
 export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): AxisymmetricFieldResult {
   const read = readProblem(options);
   const { coilNames, regionNames, currents, accuracy } = read;
-  let problem = read.problem;
+  const problem = read.problem;
   const nc = problem.coilCount;
   // starting density from the measured convergence (impedance error ≈ 2.5e-3·density⁻⁴ on the checks)
   let density = Math.min(MAX_DENSITY / REFINE, Math.max(0.7, Math.pow(1e-3 / accuracy, 0.25)));
   const I = currents.map((re) => ({ re, im: 0 }));
   const saturating = problem.bodies.some((b) => b.curve !== undefined);
-  if (saturating) problem = sizeSaturatingMeshes(problem, I, accuracy);
   // saturating regions: the fixed point is converged to well below the accuracy asked for
-  const nuTolerance = accuracy / 4;
-  let last = { iterations: 0, change: 0, converged: true };
+  const nuTolerance = accuracy / SATURATION_TOLERANCE_DIVISOR;
+  let last = { iterations: 0, residual: 0, largestChange: 0, converged: true };
   let previous: { solution: SolverSolution; nu: Float64Array } | undefined;
   const solveAt = (d: number): SolverSolution => {
     if (!saturating) return solveOnce(problem, { density: d });
     const r = solveSaturating(problem, d, I, nuTolerance, previous);
-    last = { iterations: r.iterations, change: r.change, converged: r.converged };
+    last = { iterations: r.iterations, residual: r.residual, largestChange: r.largestChange, converged: r.converged };
     previous = { solution: r.solution, nu: r.nu };
     return r.solution;
   };
@@ -660,9 +668,9 @@ export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): 
   if (saturating && !last.converged) {
     validity.push({
       code: "saturation-not-converged",
-      message: `the effective-permeability iteration stopped after ${last.iterations} iterations (largest element change ${last.change.toExponential(1)} relative)`,
-      value: last.iterations,
-      limit: MAX_SATURATION_ITERATIONS,
+      message: `the effective-permeability iteration stopped after ${last.iterations} solves (limit ${MAX_SATURATION_ITERATIONS}) with an impedance still changing by up to ${last.residual.toExponential(1)} relative per update`,
+      value: last.residual,
+      limit: nuTolerance,
     });
   }
   const readPoint = (fn: string, point: AxisymmetricFieldPoint): { r: number; z: number } => {
@@ -705,128 +713,10 @@ export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): 
       return b.sigma * (er * er + ei * ei);
     },
     mesh: { nodes: sol.nodes, elements: sol.elements },
-    estimatedError: estimate,
+    estimatedError: estimate + last.residual,
     validity,
-    saturation: saturating ? { method: "first-harmonic effective permeability", iterations: last.iterations, change: last.change } : null,
+    saturation: saturating
+      ? { method: "first-harmonic effective permeability", iterations: last.iterations, residual: last.residual, converged: last.converged }
+      : null,
   };
-}
-
-/**
- * Permeability each saturating region's mesh is sized for: a first solution on a coarse mesh
- * sized as if non-magnetic gives the largest peak flux density in the region, and the
- * effective permeability there (the most saturated, largest skin depth, where the power is)
- * replaces the unsaturated value for the mesh sizes and as the starting point of the
- * iteration. The error estimate of the refinement loop measures what this choice costs.
- */
-function sizeSaturatingMeshes(problem: SolverProblem, currents: readonly { re: number; im: number }[], accuracy: number): SolverProblem {
-  const unit = { ...problem, bodies: problem.bodies.map((b) => (b.curve === undefined ? b : { ...b, mur: 1 })) };
-  const pre = solveSaturating(unit, 0.7, currents, Math.max(accuracy, 1e-2));
-  const mesh = pre.solution.mesh;
-  const nTri = mesh.triangleCell.length;
-  const bPeak = new Float64Array(nTri);
-  triangleFluxDensityPeak(unit, pre.solution, currents, bPeak);
-  const highest = new Float64Array(problem.bodies.length);
-  for (let t = 0; t < nTri; t++) {
-    const bi = mesh.cellBody[mesh.triangleCell[t]!]!;
-    if (bi >= 0) highest[bi] = Math.max(highest[bi]!, bPeak[t]!);
-  }
-  return {
-    ...problem,
-    bodies: problem.bodies.map((b, bi) => (b.curve === undefined ? b : { ...b, mur: 1 / b.curve.relativeReluctivity(highest[bi]!) })),
-  };
-}
-
-/**
- * Fixed point of the per-element effective reluctivity on the mesh of density d: solve with
- * the current reluctivities, read the peak flux density at each element's centroid, and move
- * each reluctivity toward the effective curve's value at the peak field strength there
- * ($\hat H = \nu\hat B$, geometric relaxation, halved whenever the impedance change grows),
- * until the remaining change of every coil's impedance, extrapolated from the last two steps
- * of the (linearly converging) sequence, is below `tolerance`/2. The first reluctivities come from the previous
- * mesh's solution when there is one (read at each element's centroid).
- */
-function solveSaturating(
-  problem: SolverProblem,
-  density: number,
-  currents: readonly { re: number; im: number }[],
-  tolerance: number,
-  start?: { solution: SolverSolution; nu: Float64Array },
-): { solution: SolverSolution; nu: Float64Array; iterations: number; change: number; converged: boolean } {
-  const nc = problem.coilCount;
-  let nu: Float64Array | undefined;
-  let relax = 0.7;
-  let previousStep = Infinity;
-  let solution: SolverSolution;
-  if (start) {
-    // the reluctivity of the previous mesh at each new element's centroid
-    const probeMesh = meshFor(problem, { density });
-    nu = new Float64Array(probeMesh.triangleCell.length);
-    const old = start.solution.mesh;
-    for (let t = 0; t < nu.length; t++) {
-      const bi = probeMesh.cellBody[probeMesh.triangleCell[t]!]!;
-      nu[t] = bi < 0 ? 1 : 1 / problem.bodies[bi]!.mur;
-      if (bi < 0 || problem.bodies[bi]!.curve === undefined) continue;
-      const [rc, zc] = centroid(probeMesh, t);
-      const pr = probe(old, rc, zc);
-      if (pr !== null && old.cellBody[old.triangleCell[pr.triangle]!] === bi) nu[t] = start.nu[pr.triangle]!;
-    }
-    solution = solveOnce(problem, { density }, nu);
-  } else {
-    solution = solveOnce(problem, { density });
-  }
-  let iterations = 1;
-  let worst: number;
-  let zPrev: Float64Array | undefined;
-  for (;;) {
-    const mesh = solution.mesh;
-    const nTri = mesh.triangleCell.length;
-    if (!nu) {
-      nu = new Float64Array(nTri);
-      for (let t = 0; t < nTri; t++) {
-        const bi = mesh.cellBody[mesh.triangleCell[t]!]!;
-        nu[t] = bi < 0 ? 1 : 1 / problem.bodies[bi]!.mur;
-      }
-    }
-    const bPeak = new Float64Array(nTri);
-    triangleFluxDensityPeak(problem, solution, currents, bPeak);
-    worst = 0;
-    const targets = bPeak;
-    for (let t = 0; t < nTri; t++) {
-      const bi = mesh.cellBody[mesh.triangleCell[t]!]!;
-      if (bi < 0) continue;
-      const curve = problem.bodies[bi]!.curve;
-      if (curve === undefined) continue;
-      // H-based update: Ĥ = ν B̂ from the field just solved, then ν = μ0 Ĥ / B̂₁(Ĥ)
-      const target = curve.reluctivityAtField((nu[t]! * bPeak[t]!) / MU_0);
-      worst = Math.max(worst, Math.abs(target / nu[t]! - 1));
-      targets[t] = target;
-    }
-    // impedance change since the last iteration
-    let step = Infinity;
-    if (zPrev) {
-      step = 0;
-      let scale = 0;
-      for (let c = 0; c < nc; c++) scale = Math.max(scale, Math.hypot(solution.zRe[c * nc + c]!, solution.zIm[c * nc + c]!));
-      for (let k = 0; k < nc * nc; k++) {
-        step = Math.max(step, Math.hypot(solution.zRe[k]! - zPrev[k]!, solution.zIm[k]! - zPrev[nc * nc + k]!) / scale);
-      }
-    }
-    // remaining error of a linearly converging sequence: step·q/(1 − q), q the step ratio
-    const q = step / previousStep;
-    const remaining = q < 0.95 ? (step * q) / (1 - q) : Infinity;
-    if ((remaining <= tolerance / 2 && step <= tolerance / 2) || worst <= tolerance || iterations >= MAX_SATURATION_ITERATIONS) break;
-    if (step > previousStep) relax = Math.max(0.15, relax * 0.5);
-    previousStep = step;
-    zPrev = new Float64Array(2 * nc * nc);
-    zPrev.set(solution.zRe, 0);
-    zPrev.set(solution.zIm, nc * nc);
-    for (let t = 0; t < nTri; t++) {
-      const bi = mesh.cellBody[mesh.triangleCell[t]!]!;
-      if (bi < 0 || problem.bodies[bi]!.curve === undefined) continue;
-      nu[t] = nu[t]! * Math.pow(targets[t]! / nu[t]!, relax);
-    }
-    solution = solveOnce(problem, { density }, nu);
-    iterations++;
-  }
-  return { solution, nu, iterations, change: worst, converged: iterations < MAX_SATURATION_ITERATIONS };
 }

@@ -889,13 +889,15 @@ export function fieldAtProbe(
 
 /**
  * Peak flux density $\hat B = \sqrt2\,(|B_r|^2 + |B_z|^2)^{1/2}$ [T] at the centroid of every
- * triangle of a saturating body (0 elsewhere), for the given coil currents.
+ * triangle of a saturating body (0 elsewhere), for the given coil currents; with `volume`, also
+ * each such triangle's ring volume $2\pi\int r\,dA$ [m³].
  */
 export function triangleFluxDensityPeak(
   problem: SolverProblem,
   sol: SolverSolution,
   currents: readonly { re: number; im: number }[],
   out: Float64Array,
+  volume?: Float64Array,
 ): void {
   const { mesh } = sol;
   const T = mesh.triangles;
@@ -908,6 +910,11 @@ export function triangleFluxDensityPeak(
     const bi = mesh.cellBody[mesh.triangleCell[t]!]!;
     if (bi < 0 || problem.bodies[bi]!.curve === undefined) continue;
     elementPoints(mesh, t, P);
+    if (volume) {
+      let v = 0;
+      for (let q = 0; q < NQ; q++) v += P.w[q]! * P.r[q]!;
+      volume[t] = 2 * Math.PI * v;
+    }
     const r = P.r[0]!;
     let brR = 0;
     let brI = 0;
