@@ -170,9 +170,12 @@ export interface FieldMagnetisation {
  * @category Field
  */
 export interface FieldSaturationResult {
-  /** The method: the effective permeability of the fundamental harmonic, per element. */
-  readonly method: "first-harmonic effective permeability";
-  /** Linear solves of the fixed-point iteration on the finest mesh. */
+  /**
+   * The method: `"linear"` when no region has a B–H curve (one solve per mesh), else the
+   * effective permeability of the fundamental harmonic, per element.
+   */
+  readonly method: "linear" | "first-harmonic effective permeability";
+  /** Linear solves on the finest mesh (1 for linear materials; the fixed-point steps otherwise). */
   readonly iterations: number;
   /**
    * Bound on the relative impedance change one more update of the element permeabilities
@@ -284,8 +287,8 @@ export interface AxisymmetricFieldResult {
   readonly estimatedError: number;
   /** Where the result may fall short (e.g. `"accuracy-not-reached"`, `"saturation-not-converged"`). */
   readonly validity: readonly ValidityNote[];
-  /** The iteration for saturating regions; null when every material is linear. */
-  readonly saturation: FieldSaturationResult | null;
+  /** How the materials were solved: `method` `"linear"` (no iteration) or the saturation iteration. */
+  readonly saturation: FieldSaturationResult;
 }
 
 const WHERE = "solveAxisymmetricField";
@@ -726,6 +729,6 @@ export function solveAxisymmetricField(options: SolveAxisymmetricFieldOptions): 
     validity,
     saturation: saturating
       ? { method: "first-harmonic effective permeability", iterations: last.iterations, residual: last.residual, converged: last.converged }
-      : null,
+      : { method: "linear", iterations: 1, residual: 0, converged: true },
   };
 }

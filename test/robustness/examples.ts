@@ -916,7 +916,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       ],
     ],
     allow: [
-      { paths: ["0.accuracy", "0.regions", "0.regions.0.resistivity", "0.regions.0.relativePermeability", "0.coils.0.turns.0.innerRadius"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.accuracy", "0.regions", "0.regions.0.resistivity", "0.regions.0.relativePermeability", "0.regions.0.magnetisation", "0.coils.0.turns.0.innerRadius"], kinds: ["undefined"], reason: OPTIONAL },
       { paths: ["0.coils.0.current"], kinds: ["zero"], reason: "an open-circuited coil (zero current) is in the domain" },
       { paths: ["0.coils.0.turns.0.innerRadius", "0.regions.0.shape.rMin", "0.coils.0.turns.shape.rMin"], kinds: ["zero"], reason: "a solid round conductor / a body reaching the axis" },
       {
