@@ -903,7 +903,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
         {
           frequency: 2e4,
           accuracy: 0.1,
-          coils: [{ name: "coil", current: 50, resistivity: 1.75e-8, model: "stranded", turns: { shape: { kind: "rectangle", rMin: 0.012, rMax: 0.014, zMin: -0.004, zMax: 0.004 }, count: 4 } }],
+          coils: [{ name: "coil", current: 5, resistivity: 1.75e-8, model: "stranded", turns: { shape: { kind: "rectangle", rMin: 0.012, rMax: 0.014, zMin: -0.004, zMax: 0.004 }, count: 4 } }],
           regions: [
             {
               name: "pin",
