@@ -22,3 +22,5 @@ export { inductorDesign } from "./inductor-design.js";
 export type { InductorDesignOptions, InductorDesign, TriangularCurrent, SampledCurrent, InductorConductor } from "./inductor-design.js";
 export { inductorCoreSearch } from "./core-search.js";
 export type { CoreCandidate, InductorCoreSearchOptions, FeasibleCore, RejectedCore, InductorCoreSearch } from "./core-search.js";
+export { inductorTurnsSweep } from "./inductor-sweep.js";
+export type { InductorTurnsSweepOptions, InductorSweepPoint, InductorTurnsSweep } from "./inductor-sweep.js";
