@@ -2,7 +2,10 @@
  * Magnetic components: core constants and effective parameters (IEC 60205), core shapes from
  * their dimensions, and the temperature rise of a component from its loss.
  *
- * @module cores
+ * Import from `fluxwright/cores` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/cores.md
+ * @module fluxwright/cores
  */
 export { effectiveCoreParameters } from "./effective-parameters.js";
 export type { CoreSection, EffectiveCoreParametersOptions, EffectiveCoreParameters } from "./effective-parameters.js";

@@ -57,7 +57,12 @@ export interface InductorTurnsSweep {
   /** Every turn count that could be designed, in increasing order. */
   readonly points: readonly InductorSweepPoint[];
   /** Turn counts of the range that could not be designed, with the reason (e.g. the gap would be longer than the window allows). */
-  readonly skipped: readonly { readonly turns: number; readonly reason: string }[];
+  readonly skipped: readonly {
+    /** The turn count [-]. */
+    readonly turns: number;
+    /** Why it could not be designed. */
+    readonly reason: string;
+  }[];
   /** The usable point of least total loss, `null` when no point is usable. */
   readonly leastLoss: InductorSweepPoint | null;
   /**

@@ -4,7 +4,10 @@
  * with each coil's impedance, the losses in every body and the field at any point; saturating
  * steel by an effective permeability per element.
  *
- * @module field
+ * Import from `fluxwright/field` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/field.md
+ * @module fluxwright/field
  */
 export { solveAxisymmetricField } from "./solve-axisymmetric-field.js";
 export type {
