@@ -1,7 +1,8 @@
 /**
  * Axisymmetric field solution: the time-harmonic eddy-current field of coaxial coils (solid or
  * stranded turns), parts and concentrators in the r–z half-plane by quadratic finite elements,
- * with each coil's impedance, the losses in every body and the field at any point.
+ * with each coil's impedance, the losses in every body and the field at any point; saturating
+ * steel by an effective permeability per element.
  *
  * Import from `fluxwright/field` (or from `fluxwright`, which re-exports every module).
  *
@@ -12,7 +13,9 @@ export { solveAxisymmetricField } from "./solve-axisymmetric-field.js";
 export type {
   AxisymmetricFieldResult,
   FieldCircle,
+  FieldCurvePoint,
   FieldFluxDensity,
+  FieldMagnetisation,
   FieldMeshSize,
   FieldRegionResult,
   FieldWindingBlock,
@@ -21,6 +24,7 @@ export type {
   AxisymmetricFieldPoint,
   FieldRectangle,
   FieldRegion,
+  FieldSaturationResult,
   FieldShape,
   SolveAxisymmetricFieldOptions,
 } from "./solve-axisymmetric-field.js";

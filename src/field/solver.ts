@@ -9,6 +9,7 @@ import { MU_0 } from "../units/index.js";
 import { factorComplexSymmetric, latticeNestedDissection } from "../special/index.js";
 import { buildLatticeMesh, unmapPoint } from "./mesh.js";
 import type { LatticeMesh, MeshShape } from "./mesh.js";
+import type { EffectiveCurve } from "./effective-curve.js";
 
 /** A body of the discrete problem. */
 export interface SolverBody {
@@ -25,6 +26,8 @@ export interface SolverBody {
   readonly count: number;
   /** Resistivity of a stranded block's conductor [Ω·m] (for its DC resistance). */
   readonly resistivity: number;
+  /** Saturating material: its effective curve (then `mur` is the value the mesh is sized for). */
+  readonly curve?: EffectiveCurve;
 }
 
 /** The discrete problem. */
@@ -180,8 +183,8 @@ export interface AssembledSystem {
 }
 
 /** Solves the problem once on the mesh of the given density. */
-export function solveOnce(problem: SolverProblem, disc: Discretisation): SolverSolution {
-  const sys = assembleSystem(problem, disc);
+export function solveOnce(problem: SolverProblem, disc: Discretisation, reluctivity?: Float64Array): SolverSolution {
+  const sys = assembleSystem(problem, disc, reluctivity);
   const { mesh, omega, unknownOf, bodyVec, bodyConductance, bodyArea, bodyRArea } = sys;
   const n = sys.size;
   const bodies = problem.bodies;
@@ -406,8 +409,8 @@ function regionEdgeSizes(problem: SolverProblem, b: SolverBody, h: number, hGeom
   return out;
 }
 
-/** Meshes the problem at the given density and assembles the finite-element system. */
-export function assembleSystem(problem: SolverProblem, disc: Discretisation): AssembledSystem {
+/** The mesh of the problem at the given density (the same on every call). */
+export function meshFor(problem: SolverProblem, disc: Discretisation): LatticeMesh {
   const omega = 2 * Math.PI * problem.frequency;
   const d = disc.density;
   const bodies = problem.bodies;
@@ -434,6 +437,27 @@ export function assembleSystem(problem: SolverProblem, disc: Discretisation): As
     farSize: far / 3,
     density: d,
   });
+  return mesh;
+}
+
+/** Centroid (r, z) of triangle t (mean of its three corner nodes). */
+export function centroid(mesh: LatticeMesh, t: number): [number, number] {
+  const T = mesh.triangles;
+  const a = T[t * 6]!;
+  const b = T[t * 6 + 1]!;
+  const c = T[t * 6 + 2]!;
+  return [(mesh.r[a]! + mesh.r[b]! + mesh.r[c]!) / 3, (mesh.z[a]! + mesh.z[b]! + mesh.z[c]!) / 3];
+}
+
+/**
+ * Meshes the problem at the given density and assembles the finite-element system.
+ * `reluctivity`, when given, holds the relative reluctivity $\nu_r = 1/\mu_r$ of each triangle
+ * (the mesh of a density is the same on every call, so triangle numbers carry over).
+ */
+export function assembleSystem(problem: SolverProblem, disc: Discretisation, reluctivity?: Float64Array): AssembledSystem {
+  const omega = 2 * Math.PI * problem.frequency;
+  const bodies = problem.bodies;
+  const mesh = meshFor(problem, disc);
   const { ni, nj, triangles, triangleCell, cellBody } = mesh;
   const nLat = ni * nj;
   const nTri = triangleCell.length;
@@ -476,7 +500,7 @@ export function assembleSystem(problem: SolverProblem, disc: Discretisation): As
     elementPoints(mesh, t, P);
     const bi = triBody[t]!;
     const body = bi >= 0 ? bodies[bi]! : null;
-    const nu = 1 / (MU_0 * (body ? body.mur : 1));
+    const nu = reluctivity ? reluctivity[t]! / MU_0 : 1 / (MU_0 * (body ? body.mur : 1));
     const sig = body ? body.sigma : 0;
     kRe.fill(0);
     kIm.fill(0);
@@ -861,4 +885,57 @@ export function fieldAtProbe(
     }
   }
   return { ar, ai, drR, drI, dzR, dzI, body, phiR, phiI };
+}
+
+/**
+ * Peak flux density $\hat B = \sqrt2\,(|B_r|^2 + |B_z|^2)^{1/2}$ [T] at the centroid of every
+ * triangle of a saturating body (0 elsewhere), for the given coil currents; with `volume`, also
+ * each such triangle's ring volume $2\pi\int r\,dA$ [m³].
+ */
+export function triangleFluxDensityPeak(
+  problem: SolverProblem,
+  sol: SolverSolution,
+  currents: readonly { re: number; im: number }[],
+  out: Float64Array,
+  volume?: Float64Array,
+): void {
+  const { mesh } = sol;
+  const T = mesh.triangles;
+  const nTri = mesh.triangleCell.length;
+  const nc = problem.coilCount;
+  const P = newPoints();
+  const N = QN[0]!;
+  for (let t = 0; t < nTri; t++) {
+    out[t] = 0;
+    const bi = mesh.cellBody[mesh.triangleCell[t]!]!;
+    if (bi < 0 || problem.bodies[bi]!.curve === undefined) continue;
+    elementPoints(mesh, t, P);
+    if (volume) {
+      let v = 0;
+      for (let q = 0; q < NQ; q++) v += P.w[q]! * P.r[q]!;
+      volume[t] = 2 * Math.PI * v;
+    }
+    const r = P.r[0]!;
+    let brR = 0;
+    let brI = 0;
+    let bzR = 0;
+    let bzI = 0;
+    for (let a = 0; a < 6; a++) {
+      const n = T[t * 6 + a]!;
+      let vr = 0;
+      let vi = 0;
+      for (let c = 0; c < nc; c++) {
+        const I = currents[c]!;
+        vr += I.re * sol.aRe[c]![n]! - I.im * sol.aIm[c]![n]!;
+        vi += I.re * sol.aIm[c]![n]! + I.im * sol.aRe[c]![n]!;
+      }
+      const gr = -P.nz[a]!;
+      const gz = P.nr[a]! + N[a]! / r;
+      brR += gr * vr;
+      brI += gr * vi;
+      bzR += gz * vr;
+      bzI += gz * vi;
+    }
+    out[t] = Math.SQRT2 * Math.sqrt(brR * brR + brI * brI + bzR * bzR + bzI * bzI);
+  }
 }

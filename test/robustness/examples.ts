@@ -900,9 +900,24 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
           ],
         },
       ],
+      () => [
+        {
+          frequency: 2e4,
+          accuracy: 0.1,
+          coils: [{ name: "coil", current: 5, resistivity: 1.75e-8, model: "stranded", turns: { shape: { kind: "rectangle", rMin: 0.012, rMax: 0.014, zMin: -0.004, zMax: 0.004 }, count: 4 } }],
+          regions: [
+            {
+              name: "pin",
+              shape: { kind: "rectangle", rMin: 0, rMax: 0.006, zMin: -0.01, zMax: 0.01 },
+              resistivity: 2e-7,
+              magnetisation: { curve: [{ fieldStrength: 300, fluxDensity: 0.8 }, { fieldStrength: 3000, fluxDensity: 1.5 }, { fieldStrength: 30000, fluxDensity: 1.9 }] },
+            },
+          ],
+        },
+      ],
     ],
     allow: [
-      { paths: ["0.accuracy", "0.regions", "0.regions.0.resistivity", "0.regions.0.relativePermeability", "0.coils.0.turns.0.innerRadius"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.accuracy", "0.regions", "0.regions.0.resistivity", "0.regions.0.relativePermeability", "0.regions.0.magnetisation", "0.coils.0.turns.0.innerRadius"], kinds: ["undefined"], reason: OPTIONAL },
       { paths: ["0.coils.0.current"], kinds: ["zero"], reason: "an open-circuited coil (zero current) is in the domain" },
       { paths: ["0.coils.0.turns.0.innerRadius", "0.regions.0.shape.rMin", "0.coils.0.turns.shape.rMin"], kinds: ["zero"], reason: "a solid round conductor / a body reaching the axis" },
       {
