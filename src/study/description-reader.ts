@@ -11,6 +11,7 @@ import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
 import { checkConductiveMaterial } from "../materials/check-material.js";
 import { formatQuantity, parseQuantity, ZERO_CELSIUS } from "../units/index.js";
 import { canonicalUnit } from "../units/unit-symbols.js";
+import { isQuantityText } from "./quantity-text.js";
 
 /** The function name every problem is reported under. */
 export const WHERE = "readHeaterDescription";
@@ -152,6 +153,8 @@ export class Reader {
       v = value;
     } else if (typeof value === "string") {
       if (unit !== "" && BARE_NUMBER_TEXT.test(value)) return this.fail(path, value, "", bareNumberFix(Number(value.trim()), unit));
+      // in a study file the text must name the unit: no RKM code ("4k7"), no bare prefix ("30 m" for a capacitance)
+      if (this.requireUnits && unit !== "" && !isQuantityText(value, unit)) return this.fail(path, value, "", `a quantity in ${unit}, e.g. "${unitExample(unit)}"`);
       const inch = unit === "m" ? INCH_TEXT.exec(value) : null;
       try {
         v = inch === null ? parseQuantity(value, unit) : (Number(inch[1]) * 254) / (inch[2]?.startsWith("mil") === true ? 1e7 : 1e4);

@@ -345,6 +345,12 @@ export interface RingPartDescription extends PartCommon {
   readonly innerRadius: QuantityInput;
   /** Axial height (width) of the ring [m], > 0. */
   readonly height: QuantityInput;
+  /** Only `"mean"` for a ring (surface and core targets need the radial model of bars and tubes). */
+  readonly targetLocation?: "mean";
+  /** Not for a ring (bars and tubes only). */
+  readonly soakBand?: never;
+  /** Not for a ring (bars and tubes only). */
+  readonly hardeningTemperature?: never;
 }
 
 /**
@@ -361,6 +367,12 @@ export interface PlatePartDescription extends PartCommon {
   readonly width: QuantityInput;
   /** Plate thickness [m], > 0. */
   readonly thickness: QuantityInput;
+  /** Only `"mean"` for a plate (surface and core targets need the radial model of bars and tubes). */
+  readonly targetLocation?: "mean";
+  /** Not for a plate (bars and tubes only). */
+  readonly soakBand?: never;
+  /** Not for a plate (bars and tubes only). */
+  readonly hardeningTemperature?: never;
 }
 
 /**
@@ -388,8 +400,12 @@ export interface HeaterEnvironment {
  * @category Heater study
  */
 export interface HeaterDescription {
+  /** In a study file: the address of the study-file schema, for editors; ignored by the study. */
+  readonly $schema?: string;
   /** A name for reports. */
   readonly title?: string;
+  /** Free text for the reader of a study file; ignored by the study. */
+  readonly notes?: string;
   /** The DC source. */
   readonly supply: HeaterSupply;
   /** The inverter. */

@@ -94,6 +94,7 @@ export function readHeaterDescription(input: unknown, options: ReadHeaterDescrip
   if (top === undefined) throw new HeaterDescriptionError([new InputError(WHERE, "description", input, "", "an object")]);
   if (top.title !== undefined && typeof top.title !== "string") rd.fail("title", top.title, "", "a string");
   if (top.notes !== undefined && typeof top.notes !== "string") rd.fail("notes", top.notes, "", "a string");
+  if (top.$schema !== undefined && typeof top.$schema !== "string") rd.fail("$schema", top.$schema, "", "a string (the schema's address)");
 
   // supply
   const so = rd.object("supply", top.supply, ["kind", "voltage", "internalResistance", "currentLimit"]);
