@@ -12,12 +12,12 @@ const coil = { kind: "spiral" as const, innerRadius: 0.015, outerRadius: 0.075, 
 const currentRms = 60;
 const frequency = 40e3;
 
-const centre = fieldOnAxis(coil, currentRms, 0);
+const centre = fieldOnAxis({ coil, current: currentRms, axialPosition: 0 });
 console.log(`flux density at the coil centre: ${(centre * 1e3).toFixed(2)} mT RMS`);
 
 // Where does the field on the axis fall to the public reference level (27 µT)?
 let distance = 0;
-while (fieldOnAxis(coil, currentRms, distance) > 27e-6) distance += 0.005;
+while (fieldOnAxis({ coil, current: currentRms, axialPosition: distance }) > 27e-6) distance += 0.005;
 console.log(`on the axis the field falls below 27 µT at about ${(distance * 100).toFixed(1)} cm`);
 if (!(distance > 0.2 && distance < 1)) throw new Error(`unexpected distance ${distance}`);
 

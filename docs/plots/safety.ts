@@ -27,7 +27,7 @@ writeFileSync(
     xLog: true,
     yLog: true,
     series: [
-      { name: "on the axis", x: distances, y: distances.map((d) => fieldOnAxis(coil, current, d)) },
+      { name: "on the axis", x: distances, y: distances.map((d) => fieldOnAxis({ coil, current: current, axialPosition: d })) },
       {
         name: "in the coil plane, from the axis",
         x: distances.filter((d) => d > 0.09),

@@ -205,6 +205,25 @@ function series(coefficients: Float64Array, m: number): number {
 }
 
 /**
+ * Options of {@link fieldOnAxis}.
+ *
+ * @category Field
+ */
+export interface FieldOnAxisOptions {
+  /** The coil: loops, or a solenoid or spiral description. */
+  readonly coil: FieldCoil;
+  /** Coil current [A] (RMS or peak; the result is the same kind), any sign. */
+  readonly current: number;
+  /**
+   * Axial coordinate of the point [m], any sign, measured from the coil's origin (the loops'
+   * `position`s are relative to the same origin).
+   */
+  readonly axialPosition: number;
+}
+
+const ON_AXIS_FIELDS: readonly string[] = Object.freeze(["coil", "current", "axialPosition"]);
+
+/**
  * Axial flux density on the axis of a coil of coaxial circular loops, by superposition of the
  * exact on-axis field of each loop (Biot–Savart):
  * $$ B_z(z) = \sum_i \frac{\mu_0 N_i I\, a_i^2}{2\,\left(a_i^2 + (z - z_i)^2\right)^{3/2}} . $$
@@ -213,17 +232,14 @@ function series(coefficients: Float64Array, m: number): number {
  * {@link exposureCheck} wants), the peak current for the peak.
  *
  * Hard domain (throws {@link InputError}): a malformed coil (see {@link FieldCoil}),
- * non-finite `current` or `distance`. Validity: thin filaments, free space (no magnetic core,
+ * non-finite `current` or `axialPosition`, an unknown option. Validity: thin filaments, free space (no magnetic core,
  * no eddy currents in nearby metal), quasi-static (coil much smaller than the wavelength).
  * Accuracy: exact for the filament model (rounding only, ≤ 1e-14 relative; tests against the
  * closed forms for a loop, a solenoid and a flat spiral in the limit of many turns).
  * Cost: linear in the number of loops, about 0.1 µs per loop; at most 10⁵ loops or turns are
  * accepted (more throws {@link InputError} saying so), i.e. at most about 10 ms per call.
  *
- * @param coil - the coil: loops, or a solenoid or spiral description
- * @param current - coil current [A] (RMS or peak; the result is the same kind), any sign
- * @param distance - axial coordinate of the point [m], measured from the coil's origin (the
- *   loops' `position`s are relative to the same origin)
+ * @param options - the coil, its current and the point on the axis (see {@link FieldOnAxisOptions})
  * @returns axial flux density [T]
  * @throws {@link InputError} on bad input
  * @see J. D. Jackson, Classical Electrodynamics, 3rd ed., Wiley 1999, §5.5 (field of a circular loop).
@@ -231,15 +247,46 @@ function series(coefficients: Float64Array, m: number): number {
  * ```ts
  * import { fieldOnAxis } from "fluxwright";
  * // A single 50 mm loop carrying 10 A, at its centre: μ0 I / (2a).
- * console.log(fieldOnAxis([{ radius: 0.05 }], 10, 0)); // ≈ 1.2566e-4
+ * console.log(fieldOnAxis({ coil: [{ radius: 0.05 }], current: 10, axialPosition: 0 })); // ≈ 1.2566e-4
  * ```
  * @category Field
  */
-export function fieldOnAxis(coil: FieldCoil, current: number, distance: number): number {
+export function fieldOnAxis(options: FieldOnAxisOptions): number;
+/**
+ * The positional form of {@link fieldOnAxis}: `fieldOnAxis(coil, current, distance)` is
+ * `fieldOnAxis({ coil, current, axialPosition: distance })`.
+ *
+ * @deprecated Use the options object `fieldOnAxis({ coil, current, axialPosition })`; this form
+ *   stays until 1.0.
+ * @param coil - the coil: loops, or a solenoid or spiral description
+ * @param current - coil current [A], any sign
+ * @param distance - axial coordinate of the point [m]
+ * @returns axial flux density [T]
+ */
+export function fieldOnAxis(coil: FieldCoil, current: number, distance: number): number;
+export function fieldOnAxis(...args: [FieldOnAxisOptions] | [FieldCoil, number, number]): number {
   const where = "fieldOnAxis";
+  let coil: unknown;
+  let current: unknown;
+  let distance: unknown;
+  let distanceName = "distance";
+  if (args.length === 1) {
+    const options = args[0] as unknown;
+    if (Array.isArray(options) || (typeof options === "object" && options !== null && "kind" in options)) {
+      throw new InputError(where, "options", options, "", "an object { coil, current, axialPosition } (a coil alone has no current)");
+    }
+    const o = requireObject(where, "options", options);
+    requireKnownKeys(where, "options", o, ON_AXIS_FIELDS);
+    coil = o.coil;
+    current = o.current;
+    distance = o.axialPosition;
+    distanceName = "axialPosition";
+  } else {
+    [coil, current, distance] = args;
+  }
   const loops = coilLoops(where, coil);
   const i = requireFinite(where, "current", current, "A");
-  const z = requireFinite(where, "distance", distance, "m");
+  const z = requireFinite(where, distanceName, distance, "m");
   let sum = 0;
   for (const loop of loops) {
     const a2 = loop.radius * loop.radius;

@@ -6,9 +6,11 @@
  * @document ../../docs/safety.md
  * @module fluxwright/safety
  */
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- one overload (the positional form) is deprecated, not the function
 export { fieldOnAxis, fieldNearCoil } from "./coil-field.js";
 export type {
   FieldCoil,
+  FieldOnAxisOptions,
   FieldLoop,
   FieldSolenoid,
   FieldSpiral,

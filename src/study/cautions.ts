@@ -107,7 +107,7 @@ export function heaterCautions(
   let worst = { fluxDensityRms: 0, frequency: 0, ratio: -1 };
   for (const p of points) {
     if (!(p.coilCurrentRms > 0) || !(p.frequency >= 1 && p.frequency <= 1e7)) continue;
-    const fluxDensityRms = Math.abs(fieldOnAxis(fieldCoil, p.coilCurrentRms, EXPOSURE_DISTANCE));
+    const fluxDensityRms = Math.abs(fieldOnAxis({ coil: fieldCoil, current: p.coilCurrentRms, axialPosition: EXPOSURE_DISTANCE }));
     const ratio = exposureCheck({ fluxDensityRms, frequency: p.frequency, population: "general-public" }).ratio;
     if (ratio > worst.ratio) worst = { fluxDensityRms, frequency: p.frequency, ratio };
   }

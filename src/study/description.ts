@@ -345,6 +345,12 @@ export interface RingPartDescription extends PartCommon {
   readonly innerRadius: QuantityInput;
   /** Axial height (width) of the ring [m], > 0. */
   readonly height: QuantityInput;
+  /** Only `"mean"` for a ring (surface and core targets need the radial model of bars and tubes). */
+  readonly targetLocation?: "mean";
+  /** Not for a ring (bars and tubes only). */
+  readonly soakBand?: never;
+  /** Not for a ring (bars and tubes only). */
+  readonly hardeningTemperature?: never;
 }
 
 /**
@@ -361,6 +367,12 @@ export interface PlatePartDescription extends PartCommon {
   readonly width: QuantityInput;
   /** Plate thickness [m], > 0. */
   readonly thickness: QuantityInput;
+  /** Only `"mean"` for a plate (surface and core targets need the radial model of bars and tubes). */
+  readonly targetLocation?: "mean";
+  /** Not for a plate (bars and tubes only). */
+  readonly soakBand?: never;
+  /** Not for a plate (bars and tubes only). */
+  readonly hardeningTemperature?: never;
 }
 
 /**
@@ -377,7 +389,7 @@ export interface HeaterRectangle {
   readonly rMax: QuantityInput;
   /** Lower axial position [m] (may be negative). */
   readonly zMin: QuantityInput;
-  /** Upper axial position [m], > zMin. */
+  /** Upper axial position [m], > zMin (may be negative). */
   readonly zMax: QuantityInput;
 }
 
@@ -391,7 +403,7 @@ export interface HeaterRectangle {
 export interface RectanglesPartDescription extends PartCommon {
   /** Part shape tag. */
   readonly shape: "rectangles";
-  /** The part's cross-section, at least one rectangle. */
+  /** The part's cross-section: at least one rectangle, none overlapping another. */
   readonly rectangles: readonly HeaterRectangle[];
 }
 
@@ -406,7 +418,7 @@ export interface HeaterFieldConcentrator {
   readonly name?: string;
   /** Its cross-section, at least one rectangle. */
   readonly rectangles: readonly HeaterRectangle[];
-  /** Relative permeability, ≥ 1 (linear). */
+  /** Relative permeability (linear), in [1, 1e6]. */
   readonly relativePermeability: number;
   /** Resistivity [Ω·m], > 0; omit for a non-conductor (a ferrite, a laminated or powder core). */
   readonly resistivity?: QuantityInput;
@@ -437,8 +449,12 @@ export interface HeaterEnvironment {
  * @category Heater study
  */
 export interface HeaterDescription {
+  /** In a study file: the address of the study-file schema, for editors; ignored by the study. */
+  readonly $schema?: string;
   /** A name for reports. */
   readonly title?: string;
+  /** Free text for the reader of a study file; ignored by the study. */
+  readonly notes?: string;
   /** The DC source. */
   readonly supply: HeaterSupply;
   /** The inverter. */

@@ -5,6 +5,7 @@
  */
 import { DEFER_TO_CODES, InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
+import { bySeverity } from "../core/caution.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
 import { specificHeatAt } from "../materials/index.js";
 import { lumpedHeatUp } from "../thermal/index.js";
@@ -650,8 +651,7 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
     const prev = byCode.get(c.code);
     if (prev === undefined || c.value > prev.value) byCode.set(c.code, c);
   }
-  const rank = { danger: 0, warning: 1, info: 2 } as const;
-  return [...byCode.values()].sort((a, b) => rank[a.severity] - rank[b.severity]);
+  return [...byCode.values()].sort(bySeverity);
 }
 
 /**

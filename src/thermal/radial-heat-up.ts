@@ -5,25 +5,14 @@
  *
  * @packageDocumentation
  */
-import {
-  DEFER_TO_CODES,
-  InputError,
-  requireInRange,
-  requireInteger,
-  requireKnownKeys,
-  requireNonNegative,
-  requireObject,
-  requireOneOf,
-  requirePositive,
-} from "../core/index.js";
+import { InputError } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { specificHeatAt, thermalConductivityAt } from "../materials/index.js";
-import { STEFAN_BOLTZMANN, ZERO_CELSIUS } from "../units/index.js";
-import { gaussLegendreRule, gaussLegendrePanel, solveTridiagonal } from "../special/internal.js";
-import { checkSurface, effectiveCoefficient } from "./surface-loss.js";
-
-const RULE_8 = gaussLegendreRule(8);
+import { STEFAN_BOLTZMANN } from "../units/index.js";
+import { solveTridiagonal } from "../special/internal.js";
+import { generationShares, radialGrid } from "./radial-grid.js";
+import { readRadialHeatUpOptions, WHERE } from "./radial-heat-up-input.js";
+import { radialRunNotes } from "./radial-heat-up-notes.js";
 
 /**
  * Options of {@link radialHeatUp}.
@@ -220,36 +209,6 @@ export interface RadialHeatUpResult {
   readonly cautions: Caution[];
 }
 
-const WHERE = "radialHeatUp";
-const KNOWN = [
-  "geometry",
-  "radius",
-  "innerRadius",
-  "thickness",
-  "length",
-  "faceArea",
-  "power",
-  "surfacePowerDensity",
-  "generationAt",
-  "skinDepth",
-  "material",
-  "density",
-  "specificHeat",
-  "thermalConductivity",
-  "convectionCoefficient",
-  "emissivity",
-  "ambientTemperature",
-  "initialTemperature",
-  "duration",
-  "targetTemperature",
-  "stopAt",
-  "soakBand",
-  "hardeningTemperature",
-  "cells",
-  "temperatureTolerance",
-  "maxTimeStep",
-] as const;
-
 /**
  * Transient heat conduction across a cylinder's radius or a slab's half-thickness with the
  * induced power generated in a skin layer, and convection plus radiation at the heated surface:
@@ -314,114 +273,11 @@ const KNOWN = [
  * @category Thermal
  */
 export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
-  requireObject(WHERE, "options", options);
-  requireKnownKeys(WHERE, "options", options, KNOWN);
-  const geometry = requireOneOf(WHERE, "geometry", options.geometry, ["cylinder", "slab"] as const);
-  const cylinder = geometry === "cylinder";
-  const size = cylinder
-    ? requirePositive(WHERE, "radius", options.radius, "m")
-    : 0.5 * requirePositive(WHERE, "thickness", options.thickness, "m");
-  let inner = 0;
-  if (options.innerRadius !== undefined) {
-    if (!cylinder) throw new InputError(WHERE, "innerRadius", options.innerRadius, "m", "absent for a slab");
-    inner = requireNonNegative(WHERE, "innerRadius", options.innerRadius, "m");
-    if (!(inner < size)) throw new InputError(WHERE, "innerRadius", inner, "m", `a finite number ≥ 0 and < radius (${size})`);
-  }
-  const material = options.material;
-  if (material !== undefined) requireObject(WHERE, "material", material);
-  const density =
-    options.density !== undefined
-      ? requirePositive(WHERE, "density", options.density, "kg/m³")
-      : material !== undefined
-        ? material.density
-        : missing("density", "kg/m³");
-  const fixedC =
-    options.specificHeat !== undefined ? requirePositive(WHERE, "specificHeat", options.specificHeat, "J/(kg·K)") : null;
-  const fixedK =
-    options.thermalConductivity !== undefined
-      ? requirePositive(WHERE, "thermalConductivity", options.thermalConductivity, "W/(m·K)")
-      : null;
-  if (material === undefined && fixedC === null) missing("specificHeat", "J/(kg·K)");
-  if (material === undefined && fixedK === null) missing("thermalConductivity", "W/(m·K)");
-  const cAt = (t: number): number => fixedC ?? specificHeatAt(material!, t);
-  const kAt = (t: number): number => fixedK ?? thermalConductivityAt(material!, t);
-  const variable = fixedC === null || fixedK === null;
-
-  // Heat input per unit heated surface: a fixed density, or a callback.
-  let flux = 0;
-  const generationAt = options.generationAt;
-  if (generationAt !== undefined) {
-    if (typeof generationAt !== "function") {
-      throw new InputError(WHERE, "generationAt", generationAt, "", "a function filling request.generation");
-    }
-    if (options.power !== undefined) throw new InputError(WHERE, "power", options.power, "W", "absent when generationAt is given");
-    if (options.surfacePowerDensity !== undefined) {
-      throw new InputError(WHERE, "surfacePowerDensity", options.surfacePowerDensity, "W/m²", "absent when generationAt is given");
-    }
-  } else if (options.surfacePowerDensity !== undefined) {
-    if (options.power !== undefined) {
-      throw new InputError(WHERE, "power", options.power, "W", "given alone (not together with surfacePowerDensity)");
-    }
-    flux = requireNonNegative(WHERE, "surfacePowerDensity", options.surfacePowerDensity, "W/m²");
-  } else {
-    const power = requireNonNegative(WHERE, "power", options.power, "W");
-    const heatedArea = cylinder
-      ? 2 * Math.PI * size * requirePositive(WHERE, "length", options.length, "m")
-      : 2 * requirePositive(WHERE, "faceArea", options.faceArea, "m²");
-    flux = power / heatedArea;
-  }
-  const skinDepth = options.skinDepth === undefined ? 0 : requirePositive(WHERE, "skinDepth", options.skinDepth, "m");
-  const surface = checkSurface(WHERE, options, false);
-  const { convection, emissivity, ambient } = surface;
-  const initial =
-    options.initialTemperature === undefined
-      ? ambient
-      : requirePositive(WHERE, "initialTemperature", options.initialTemperature, "K");
-  const duration = requirePositive(WHERE, "duration", options.duration, "s");
-  const target =
-    options.targetTemperature === undefined ? null : requirePositive(WHERE, "targetTemperature", options.targetTemperature, "K");
-  const stopAt =
-    options.stopAt === undefined ? null : requireOneOf(WHERE, "stopAt", options.stopAt, ["surface", "core", "mean"] as const);
-  if (stopAt !== null && target === null) {
-    throw new InputError(WHERE, "targetTemperature", options.targetTemperature, "K", "a finite number > 0 when stopAt is given");
-  }
-  const soakBand = options.soakBand === undefined ? null : requirePositive(WHERE, "soakBand", options.soakBand, "K");
-  if (soakBand !== null && stopAt === null) throw new InputError(WHERE, "stopAt", options.stopAt, "", 'one of "surface", "core", "mean" when soakBand is given');
-  const hardening =
-    options.hardeningTemperature === undefined
-      ? null
-      : requirePositive(WHERE, "hardeningTemperature", options.hardeningTemperature, "K");
-  const cells = options.cells === undefined ? 60 : requireInteger(WHERE, "cells", options.cells, 4);
-  requireInRange(WHERE, "cells", cells, "", 4, 2000);
-  const tolerance =
-    options.temperatureTolerance === undefined
-      ? 0.005
-      : requirePositive(WHERE, "temperatureTolerance", options.temperatureTolerance, "K");
-  const maxStep =
-    options.maxTimeStep === undefined ? duration / 100 : requirePositive(WHERE, "maxTimeStep", options.maxTimeStep, "s");
+  const { cylinder, size, inner, material, density, cAt, kAt, variable, generationAt, flux, skinDepth, convection, emissivity, ambient, initial, duration, target, stopAt, soakBand, hardening, cells, tolerance, maxStep } = readRadialHeatUpOptions(options);
 
   // Grid: nodes x_0 = inner (core or bore) … x_N = size (surface), geometric refinement toward the surface.
   const n = cells;
-  const span = size - inner;
-  const x = buildGrid(span, n, skinDepth);
-  for (let i = 0; i <= n; i++) x[i] = inner + x[i]!;
-  x[n] = size;
-  const faces = new Float64Array(n + 2); // CV boundaries: faces[i] = left boundary of CV i
-  faces[0] = inner;
-  for (let i = 1; i <= n; i++) faces[i] = 0.5 * (x[i - 1]! + x[i]!);
-  faces[n + 1] = size;
-  // Geometry factors per unit heated surface: volume of CV i and area of face i+1/2, both
-  // divided by the heated area (cylinder: per radian and metre, divided by R).
-  const volume = new Float64Array(n + 1);
-  const faceArea = new Float64Array(n); // between node i and i+1
-  let totalVolume = 0;
-  for (let i = 0; i <= n; i++) {
-    const a = faces[i]!;
-    const b = faces[i + 1]!;
-    volume[i] = cylinder ? (0.5 * (b * b - a * a)) / size : b - a;
-    totalVolume += volume[i]!;
-  }
-  for (let i = 0; i < n; i++) faceArea[i] = cylinder ? faces[i + 1]! / size : 1;
+  const { span, x, faces, volume, faceArea, totalVolume } = radialGrid(inner, size, n, skinDepth, cylinder);
   // Fixed heating: the share of the generated power in each CV (exact integral of the exponential profile).
   const source = new Float64Array(n + 1);
   if (generationAt === undefined) {
@@ -657,55 +513,7 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
     tau = Math.min(maxStep, tau * factor);
   }
 
-  const kSurface = kAt(hottest);
-  const biotNumber = (effectiveCoefficient(hottest, ambient, convection, emissivity) * span) / kSurface;
-  const validity: ValidityNote[] = [];
-  const surfaceCell = size - x[n - 1]!;
-  if (skinDepth > 0 && surfaceCell > 0.5 * skinDepth) {
-    validity.push({
-      code: "grid-coarser-than-skin",
-      message: `The outer cell (${surfaceCell.toPrecision(3)} m) is wider than half the skin depth: the surface temperature is an average over the outer cell; raise cells for a sharper surface peak.`,
-      value: surfaceCell,
-      limit: 0.5 * skinDepth,
-    });
-  }
-  if (material !== undefined) {
-    let lowest = Infinity;
-    let highest = -Infinity;
-    for (let i = 0; i <= n; i++) {
-      lowest = Math.min(lowest, initial + T[i]!);
-      highest = Math.max(highest, peak[i]!);
-    }
-    for (const v of surfaceTemperatures) lowest = Math.min(lowest, v);
-    for (const v of coreTemperatures) lowest = Math.min(lowest, v);
-    if (highest > material.temperatureRange.max || lowest < material.temperatureRange.min) {
-      validity.push({
-        code: "material-data-range",
-        message: `Temperatures leave the range of the material data (${material.temperatureRange.min}–${material.temperatureRange.max} K); end values are held there.`,
-        value: highest > material.temperatureRange.max ? highest : lowest,
-        limit: highest > material.temperatureRange.max ? material.temperatureRange.max : material.temperatureRange.min,
-      });
-    }
-  }
-
-  const cautions: Caution[] = [];
-  if (material !== undefined) {
-    let highest = -Infinity;
-    for (let i = 0; i <= n; i++) highest = Math.max(highest, peak[i]!);
-    if (highest >= material.meltingTemperature) {
-      cautions.push({
-        code: "part-above-melting",
-        severity: "danger",
-        message:
-          `The part reaches ${(highest - ZERO_CELSIUS).toFixed(0)} °C, at or above the melting temperature of ${material.name} (${(material.meltingTemperature - ZERO_CELSIUS).toFixed(0)} °C): molten metal can drip, spatter and burn (the model has no phase change, so the temperatures above melting are not physical). ` +
-          `Switch off earlier (stopAt, a temperature-controlled or timed cut-off) or lower the power. ${DEFER_TO_CODES}`,
-        value: highest,
-        limit: material.meltingTemperature,
-        unit: "K",
-        source: `the melting temperature of the material (${material.id})`,
-      });
-    }
-  }
+  const { biotNumber, validity, cautions } = radialRunNotes({ kAt, hottest, ambient, convection, emissivity, span, size, x, n, skinDepth, material, initial, T, peak, surfaceTemperatures, coreTemperatures });
 
   return {
     times,
@@ -733,10 +541,6 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
   };
 }
 
-function missing(parameter: string, unit: string): never {
-  throw new InputError(WHERE, parameter, undefined, unit, "a finite number > 0 (or give material)");
-}
-
 /** Linear-interpolated time at which a curve moving away from `start` first reaches `target`. */
 function crossing(t0: number, t1: number, v0: number, v1: number, target: number, start: number): number | null {
   const rising = target > start;
@@ -744,87 +548,4 @@ function crossing(t0: number, t1: number, v0: number, v1: number, target: number
     return t0 + ((t1 - t0) * (target - v0)) / (v1 - v0);
   }
   return null;
-}
-
-/**
- * Node positions 0 … size: uniform, or geometric toward the surface so that the outer spacing
- * is at most a quarter of the skin depth (growth ratio ≤ 1.25 inward).
- */
-function buildGrid(size: number, n: number, skinDepth: number): Float64Array {
-  const x = new Float64Array(n + 1);
-  const uniform = size / n;
-  const wanted = skinDepth > 0 ? Math.min(uniform, 0.25 * skinDepth) : uniform;
-  let ratio = 1;
-  if (wanted < uniform) {
-    // Solve wanted·(ratio^n − 1)/(ratio − 1) = size for ratio in (1, 1.25].
-    const total = (r: number): number => (wanted * (Math.pow(r, n) - 1)) / (r - 1);
-    if (total(1.25) <= size) ratio = 1.25;
-    else {
-      let lo = 1 + 1e-12;
-      let hi = 1.25;
-      for (let i = 0; i < 200; i++) {
-        const m = 0.5 * (lo + hi);
-        if (total(m) < size) lo = m;
-        else hi = m;
-      }
-      ratio = 0.5 * (lo + hi);
-    }
-  }
-  if (ratio === 1) {
-    for (let i = 0; i <= n; i++) x[i] = i * uniform;
-  } else {
-    // Spacings from the surface inward: s, s·r, s·r², …, scaled to sum to size.
-    const spacings = new Float64Array(n);
-    let sum = 0;
-    for (let j = 0; j < n; j++) {
-      spacings[j] = Math.pow(ratio, j);
-      sum += spacings[j]!;
-    }
-    let position = size;
-    x[n] = size;
-    for (let j = 0; j < n; j++) {
-      position -= (spacings[j]! * size) / sum;
-      x[n - 1 - j] = position;
-    }
-    x[0] = 0;
-  }
-  return x;
-}
-
-/**
- * Share of the generated power in each control volume, for a density ∝ e^{−2(R−r)/δ} (weighted by
- * r in a cylinder); δ = 0 puts it all in the surface volume.
- */
-function generationShares(
-  faces: Float64Array,
-  n: number,
-  size: number,
-  skinDepth: number,
-  cylinder: boolean,
-): Float64Array {
-  const share = new Float64Array(n + 1);
-  if (skinDepth === 0) {
-    share[n] = 1;
-    return share;
-  }
-  const beta = 2 / skinDepth;
-  let total = 0;
-  for (let i = 0; i <= n; i++) {
-    const a = faces[i]!;
-    const b = faces[i + 1]!;
-    let w: number;
-    if (!cylinder) {
-      // ∫_a^b e^{β(x−R)} dx = e^{β(b−R)} (1 − e^{−β(b−a)}) / β
-      w = (Math.exp(beta * (b - size)) * -Math.expm1(-beta * (b - a))) / beta;
-    } else if (beta * (b - a) > 1) {
-      // ∫_a^b r e^{β(r−R)} dr = [e^{β(r−R)} (r − 1/β)/β]_a^b
-      w = (Math.exp(beta * (b - size)) * (b - 1 / beta) - Math.exp(beta * (a - size)) * (a - 1 / beta)) / beta;
-    } else {
-      w = gaussLegendrePanel((r) => r * Math.exp(beta * (r - size)), a, b, RULE_8);
-    }
-    share[i] = w;
-    total += w;
-  }
-  for (let i = 0; i <= n; i++) share[i] = share[i]! / total;
-  return share;
 }

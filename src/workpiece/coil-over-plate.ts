@@ -9,18 +9,16 @@ import type { ValidityNote } from "../core/index.js";
 import { renamedOption } from "../core/renamed.js";
 import type { Complex } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
-import { besselJ0, besselJ1 } from "../special/index.js";
 import { exponentialIntegralE5, gaussLegendreRule } from "../special/internal.js";
 import { besselJ1MomentOverCube } from "./kernels.js";
+import { layerArrays, reflectionInto } from "./layered-reflection.js";
+import type { LayerArrays } from "./layered-reflection.js";
 
-/** Accepted fields (misspelt ones are rejected, not ignored). */
-const TRUNCATED_FIELDS: readonly string[] = Object.freeze(["domainRadius", "coil", "plate", "frequency"]);
+export { layerArrays, reflectionInto } from "./layered-reflection.js";
+export type { LayerArrays } from "./layered-reflection.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const COIL_OVER_PLATE_FIELDS: readonly string[] = Object.freeze(["coil", "plate", "frequency"]);
-
-/** Largest lift-off / outer radius of the truncated-region series (cost about 0.2 s there). */
-const MAX_TRUNCATED_LIFT_OFF = 20;
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const LAYER_FIELDS: readonly string[] = Object.freeze(["thickness", "resistivity", "relativePermeability"]);
@@ -167,7 +165,7 @@ export function checkPlateLayers(where: string, plate: unknown): PlateLayer[] {
 }
 
 /** Checked coil of {@link coilOverPlate}. */
-function checkCoil(where: string, coil: unknown): CoilAbovePlate {
+export function checkCoil(where: string, coil: unknown): CoilAbovePlate {
   const c = requireObject(where, "coil", coil);
   requireKnownKeys(where, "coil", c, PLATE_COIL_FIELDS);
   const innerRadius = requireNonNegative(where, "coil.innerRadius", c["innerRadius"], "m");
@@ -181,91 +179,8 @@ function checkCoil(where: string, coil: unknown): CoilAbovePlate {
   return { innerRadius, outerRadius, liftOff, length, turns };
 }
 
-/** Layer data for the reflection coefficient: k = ωμ0μr/ρ, μr, thickness. */
-export interface LayerArrays {
-  readonly k: Float64Array;
-  readonly mu: Float64Array;
-  readonly t: Float64Array;
-}
-
-export function layerArrays(layers: readonly PlateLayer[], omega: number): LayerArrays {
-  const n = layers.length;
-  const k = new Float64Array(n);
-  const mu = new Float64Array(n);
-  const t = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const layer = layers[i]!;
-    k[i] = (omega * MU_0 * layer.relativePermeability) / layer.resistivity;
-    mu[i] = layer.relativePermeability;
-    t[i] = layer.thickness;
-  }
-  return { k, mu, t };
-}
-
-/**
- * Reflection coefficient Γ(α) = (α − Y)/(α + Y), Y the surface admittance of the layers,
- * written into out[0] (real) and out[1] (imaginary).
- */
-export function reflectionInto(alpha: number, lay: LayerArrays, out: Float64Array): void {
-  const { k, mu, t } = lay;
-  const nLayers = k.length;
-  const a2 = alpha * alpha;
-  let yRe = alpha;
-  let yIm = 0;
-  for (let i = nLayers - 1; i >= 0; i--) {
-    const ki = k[i]!;
-    const rr = Math.hypot(a2, ki);
-    const sRe = Math.sqrt(0.5 * (rr + a2));
-    const sIm = ki / (2 * sRe);
-    const ycRe = sRe / mu[i]!;
-    const ycIm = sIm / mu[i]!;
-    if (t[i] === Infinity) {
-      yRe = ycRe;
-      yIm = ycIm;
-      continue;
-    }
-    // yb = y / yc
-    const dd = ycRe * ycRe + ycIm * ycIm;
-    const ybRe = (yRe * ycRe + yIm * ycIm) / dd;
-    const ybIm = (yIm * ycRe - yRe * ycIm) / dd;
-    // r = (1 − yb)/(1 + yb)
-    const nRe = 1 - ybRe;
-    const nIm = -ybIm;
-    const dRe = 1 + ybRe;
-    const dIm = ybIm;
-    const d2 = dRe * dRe + dIm * dIm;
-    const rRe = (nRe * dRe + nIm * dIm) / d2;
-    const rIm = (nIm * dRe - nRe * dIm) / d2;
-    // g = r · exp(−2 s t)
-    const mag = Math.exp(-2 * sRe * t[i]!);
-    const ph = -2 * sIm * t[i]!;
-    const eRe = mag * Math.cos(ph);
-    const eIm = mag * Math.sin(ph);
-    const gRe = rRe * eRe - rIm * eIm;
-    const gIm = rRe * eIm + rIm * eRe;
-    // y = yc (1 − g)/(1 + g)
-    const pRe = 1 - gRe;
-    const pIm = -gIm;
-    const qRe = 1 + gRe;
-    const qIm = gIm;
-    const q2 = qRe * qRe + qIm * qIm;
-    const fRe = (pRe * qRe + pIm * qIm) / q2;
-    const fIm = (pIm * qRe - pRe * qIm) / q2;
-    yRe = ycRe * fRe - ycIm * fIm;
-    yIm = ycRe * fIm + ycIm * fRe;
-  }
-  const nRe = alpha - yRe;
-  const nIm = -yIm;
-  const dRe = alpha + yRe;
-  const dIm = yIm;
-  const d2 = dRe * dRe + dIm * dIm;
-  out[0] = (nRe * dRe + nIm * dIm) / d2;
-  out[1] = (nIm * dRe - nRe * dIm) / d2;
-
-}
-
 /** Smallest scale of α on which the integrand changes (coil length and radius, skin and thin-sheet scales). */
-function featureScale(coil: CoilAbovePlate, lay: LayerArrays): number {
+export function featureScale(coil: CoilAbovePlate, lay: LayerArrays): number {
   let scale = Math.min(1 / coil.length, 1 / coil.outerRadius);
   for (let i = 0; i < lay.k.length; i++) {
     const k = lay.k[i]!;
@@ -470,7 +385,7 @@ export function coilOverLayers(coil: CoilAbovePlate, layers: readonly PlateLayer
 }
 
 /** Result object from the three integrals: ΔZ = jωπμ0 n² (iRe + j iIm), L0 = 2πμ0 n² (h K + j). */
-function assembleResult(
+export function assembleResult(
   coil: CoilAbovePlate,
   layers: readonly PlateLayer[],
   omega: number,
@@ -519,158 +434,4 @@ function assembleResult(
     skinDepth,
     validity,
   };
-}
-
-/**
- * Options of {@link coilOverPlateTruncatedRegion}.
- *
- * @category Workpiece
- */
-export interface CoilOverPlateTruncatedRegionOptions extends CoilOverPlateOptions {
-  /**
-   * Radius $b$ of the truncated region [m] (the field is set to zero there), > coil
-   * outerRadius; default 30 × the largest of outerRadius, liftOff + length and the material's
-   * longest length scale (e.g. $2\rho/(\omega\mu_0 t)$ of a thin sheet, capped at 3 × the
-   * coil's size). The sums at $b$ and $2b$ are
-   * extrapolated to $b \to \infty$.
-   */
-  readonly domainRadius?: number;
-}
-
-/** Positive zeros of J1 up to count n: McMahon's expansion refined by two Newton steps. */
-function besselJ1Zeros(n: number): Float64Array {
-  const z = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const beta = (i + 1.25) * Math.PI;
-    let x = beta - 0.375 / beta + 0.0234375 / (beta * beta * beta);
-    for (let it = 0; it < 2; it++) {
-      const j1 = besselJ1(x);
-      x -= j1 / (besselJ0(x) - j1 / x);
-    }
-    z[i] = x;
-  }
-  return z;
-}
-
-/**
- * Impedance change of the coil of {@link coilOverPlate} by the truncated-region eigenfunction
- * expansion (TREE) of Theodoulidis & Kriezis: the field is confined to a cylinder of radius
- * $b$ (vector potential zero on it), the integral over the separation constant becomes a
- * series over the discrete eigenvalues $\alpha_i = j_{1,i}/b$ ($J_1(\alpha_i b) = 0$):
- *
- * $$
- * \Delta Z = j\omega\pi\mu_0 n^2 \sum_i \frac{2\,\Gamma(\alpha_i)\,\chi(\alpha_i)^2
- *   \left(e^{-\alpha_i l_1} - e^{-\alpha_i l_2}\right)^2}{\alpha_i^7\, b^2 J_0^2(\alpha_i b)},
- * $$
- *
- * with the same reflection coefficient and radial integral as {@link coilOverPlate}, summed
- * to $\alpha_i \le 40\pi/r_2$ (and $20/l_1$) with the same tail corrections. The truncation
- * error falls as $b^{-3}$, so the sums at $b$ and $2b$ are combined by Richardson
- * extrapolation, $(8S_{2b} - S_b)/7$. It is an independent discretisation of the same field
- * problem (a series over eigenvalues instead of a quadrature), used to cross-check
- * {@link coilOverPlate}. About 20× slower than {@link coilOverPlate}.
- *
- * Cost: grows with lift-off / outer radius; a lift-off above 20 outer radii is refused with an
- * InputError (use {@link coilOverPlate} there; about 0.2 s at that edge).
- * Hard domain (throws {@link InputError}): as {@link coilOverPlate}, and domainRadius >
- * coil outerRadius when given. Validity: as {@link coilOverPlate}, with the plate and field
- * ending at domainRadius.
- *
- * Accuracy: agrees with {@link coilOverPlate} to 3e-6 of |ΔZ| and 1e-6 of $L_0$ at the default
- * domainRadius over the fixture cases of `test/fixtures/workpiece/plate.json`, and to 1e-3
- * over random geometries and materials from 1 Hz to 1 MHz (thin sheets at very low frequency
- * need a larger domainRadius; measured worst 6e-4).
- *
- * @param options - coil, plate, frequency and optional domain radius, see {@link CoilOverPlateTruncatedRegionOptions}
- * @returns as {@link coilOverPlate}
- * @throws {@link InputError} for values outside the hard domain
- * @see T. P. Theodoulidis and E. E. Kriezis, *Eddy Current Canonical Problems (with
- *   Applications to Nondestructive Evaluation)*, Tech Science Press 2006 (truncated
- *   region eigenfunction expansion of the coil above a layered half-space).
- * @example
- * ```ts
- * import { coilOverPlate, coilOverPlateTruncatedRegion } from "fluxwright";
- * const options = {
- *   coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
- *   plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
- *   frequency: 2e4,
- * };
- * const a = coilOverPlate(options).reflectedResistance;
- * const b = coilOverPlateTruncatedRegion(options).reflectedResistance;
- * console.log(Math.abs(b / a - 1) < 1e-6); // true
- * ```
- * @category Workpiece
- */
-export function coilOverPlateTruncatedRegion(options: CoilOverPlateTruncatedRegionOptions): CoilOverPlateResult {
-  const where = "coilOverPlateTruncatedRegion";
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "", options, TRUNCATED_FIELDS);
-  const coil = checkCoil(where, options.coil);
-  if (coil.liftOff > MAX_TRUNCATED_LIFT_OFF * coil.outerRadius) {
-    throw new InputError(where, "coil.liftOff", coil.liftOff, "m", `at most ${MAX_TRUNCATED_LIFT_OFF} × coil.outerRadius = ${MAX_TRUNCATED_LIFT_OFF * coil.outerRadius} (the series' cost grows with lift-off/radius; use coilOverPlate)`);
-  }
-  const layers = checkPlateLayers(where, options.plate);
-  const f = requirePositive(where, "frequency", options.frequency, "Hz");
-  const size = Math.max(coil.outerRadius, coil.liftOff + coil.length);
-  const materialLength = Math.min(1 / featureScale(coil, layerArrays(layers, 2 * Math.PI * f)), 3 * size);
-  const b =
-    options.domainRadius === undefined
-      ? 30 * Math.max(size, materialLength)
-      : requirePositive(where, "domainRadius", options.domainRadius, "m");
-  if (!(b > coil.outerRadius)) {
-    throw new InputError(where, "domainRadius", b, "m", `a finite number > coil.outerRadius (${coil.outerRadius})`);
-  }
-  const omega = 2 * Math.PI * f;
-  const lay = layerArrays(layers, omega);
-  // Richardson extrapolation in b: the truncation error falls as b^-3 (measured)
-  const [aRe, aIm, aJ] = truncatedRegionSums(coil, lay, b);
-  const [bRe, bIm, bJ] = truncatedRegionSums(coil, lay, 2 * b);
-  return assembleResult(coil, layers, omega, (8 * bRe - aRe) / 7, (8 * bIm - aIm) / 7, (8 * bJ - aJ) / 7);
-}
-
-/** TREE sums [Re, Im, J] for a truncation radius b (same meaning as the Dodd–Deeds integrals). */
-function truncatedRegionSums(coil: CoilAbovePlate, lay: LayerArrays, b: number): [number, number, number] {
-  const r1 = coil.innerRadius;
-  const r2 = coil.outerRadius;
-  const l1 = coil.liftOff;
-  const h = coil.length;
-  const l2 = l1 + h;
-  const gamma = new Float64Array(2);
-  const aMax = (40 * Math.PI) / r2;
-  const aExp = l1 > 0 ? 20 / l1 : Infinity;
-  const count = Math.ceil((aMax * b) / Math.PI);
-  const zeros = besselJ1Zeros(count);
-  let sumRe = 0;
-  let sumIm = 0;
-  let sumJ = 0;
-  for (let i = 0; i < count; i++) {
-    const x = zeros[i]!;
-    const alpha = x / b;
-    const j0 = besselJ0(x);
-    const wt = 2 / (alpha * b * b * j0 * j0);
-    const q = r2 ** 3 * besselJ1MomentOverCube(alpha * r2) - (r1 > 0 ? r1 ** 3 * besselJ1MomentOverCube(alpha * r1) : 0);
-    const q2 = q * q;
-    sumJ += wt * q2 * (alpha * h + Math.expm1(-alpha * h));
-    if (alpha >= aExp) continue;
-    const de = Math.exp(-alpha * l1) * -Math.expm1(-alpha * h);
-    const fw = wt * q2 * de * de;
-    if (fw === 0) continue;
-    reflectionInto(alpha, lay, gamma);
-    sumRe += fw * gamma[0]!;
-    sumIm += fw * gamma[1]!;
-  }
-  // tails beyond the last eigenvalue, as in coilOverPlate (the spacing π/b is fine there)
-  const last = zeros[count - 1]! / b + Math.PI / (2 * b);
-  const c = (r1 + r2) / (Math.PI * last ** 4);
-  sumJ += c * (exponentialIntegralE5(last * h) - 0.25 + (last * h) / 3);
-  if (last < aExp) {
-    reflectionInto(last, lay, gamma);
-    const tail = c * (exponentialIntegralE5(2 * last * l1) - 2 * exponentialIntegralE5(last * (l1 + l2)) + exponentialIntegralE5(2 * last * l2));
-    sumRe += tail * gamma[0]!;
-    sumIm += tail * gamma[1]!;
-  }
-  // the whole air-core sum is taken here (the truncated domain changes both parts of it);
-  // return it in the form assembleResult expects, J = sum − h K
-  const kClosed = ((r2 ** 4 - r1 ** 4) / 4 - r1 ** 3 * (r2 - r1)) / 3;
-  return [sumRe, sumIm, sumJ - h * kClosed];
 }

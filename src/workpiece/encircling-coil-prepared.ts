@@ -5,21 +5,19 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { requireKnownKeys, requireObject } from "../core/index.js";
 import {
-  besselI0ComplexScaled,
   besselI0Scaled,
-  besselI1ComplexScaled,
   besselI1OverI0Complex,
   besselI1Scaled,
-  besselK0ComplexScaled,
   besselK0Scaled,
-  besselK1ComplexScaled,
   besselK1Scaled,
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import type { EncirclingCoil } from "./encircling-coil.js";
+import { readEncirclingGeometry, tubeSurfaceRatio } from "./encircling-coil.js";
 import { gaussLegendreRule } from "../special/internal.js";
+import { besselK1MomentTailScaled } from "./kernels.js";
 
 /**
  * Geometry of {@link prepareEncirclingCoilOverRod}: the coil as in
@@ -85,21 +83,6 @@ const KNOWN = ["coil", "rod"] as const;
 /** |z|² above which I1/I0 comes from Hankel's asymptotic sums. */
 const ASYMPTOTIC_LIMIT_SQUARED = 40 * 40;
 
-/** $e^{x}\int_x^\infty tK_1(t)\,dt$ (trapezoid rule on the cosh substitution, ≤ 1e-14 relative). */
-function kMomentTailScaled(x: number): number {
-  const h = Math.min(0.25, 0.7 / Math.sqrt(x));
-  let sum = 0.5 * (x + 1);
-  for (let k = 1; k < 2000; k++) {
-    const u = k * h;
-    const c = Math.cosh(u);
-    const e = Math.exp(-x * (c - 1));
-    const term = (e * (x * c + 1)) / c;
-    sum += term;
-    if (term < 1e-17 * sum) break;
-  }
-  return sum * h;
-}
-
 /**
  * Prepares the finite-coil-over-rod integral of {@link encirclingCoilOverRod} for one geometry
  * and returns an evaluator of the impedance change at any frequency, resistivity and relative
@@ -151,19 +134,7 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
   const where = "prepareEncirclingCoilOverRod";
   requireObject(where, "geometry", geometry);
   requireKnownKeys(where, "geometry", geometry, KNOWN);
-  const c = requireObject(where, "coil", geometry.coil);
-  requireKnownKeys(where, "coil", c, ["innerRadius", "outerRadius", "length", "turns"]);
-  const r1 = requirePositive(where, "coil.innerRadius", c["innerRadius"], "m");
-  const r2 = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
-  if (!(r2 > r1)) throw new InputError(where, "coil.outerRadius", r2, "m", `a finite number > coil.innerRadius (${r1})`);
-  const len = requirePositive(where, "coil.length", c["length"], "m");
-  const turns = requireInteger(where, "coil.turns", c["turns"], 1);
-  const rod = requireObject(where, "rod", geometry.rod);
-  requireKnownKeys(where, "rod", rod, ["radius", "innerRadius"]);
-  const a = requirePositive(where, "rod.radius", rod["radius"], "m");
-  if (!(a < r1)) throw new InputError(where, "rod.radius", a, "m", `a finite number > 0 and < coil.innerRadius (${r1})`);
-  const a1 = rod["innerRadius"] === undefined ? 0 : requireNonNegative(where, "rod.innerRadius", rod["innerRadius"], "m");
-  if (!(a1 < a)) throw new InputError(where, "rod.innerRadius", a1, "m", `a finite number ≥ 0 and < rod.radius (${a})`);
+  const { r1, r2, len, turns, a, a1 } = readEncirclingGeometry(where, geometry.coil, geometry.rod, ["radius", "innerRadius"]);
   const solid = a1 < 1e-9 * a;
   const gap = r1 - a;
 
@@ -197,7 +168,7 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
     for (let i = 0; i < PANEL_NODES; i++) {
       const al = mid + half * RULE.nodes[i]!;
       const x = al * a;
-      const kap = kMomentTailScaled(al * r1) - Math.exp(-al * (r2 - r1)) * kMomentTailScaled(al * r2);
+      const kap = besselK1MomentTailScaled(al * r1) - Math.exp(-al * (r2 - r1)) * besselK1MomentTailScaled(al * r2);
       const s = Math.sin(0.5 * al * len);
       const q = kap / (al * al * al);
       alpha[n] = al;
@@ -293,38 +264,3 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
   };
 }
 
-/** Tube wall: (1/μr)(1/r) d(rA)/dr / A at the outer surface, the bore matched to the air solution. */
-function tubeSurfaceRatio(bRe: number, bIm: number, a: number, a1: number, mur: number, rAir: number): [number, number] {
-  const z1 = { re: bRe * a1, im: bIm * a1 };
-  const i0 = besselI0ComplexScaled(z1);
-  const i1 = besselI1ComplexScaled(z1);
-  const k0 = besselK0ComplexScaled(z1);
-  const k1 = besselK1ComplexScaled(z1);
-  const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
-  const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
-  const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
-  const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
-  const dd = dRe * dRe + dIm * dIm;
-  let sRe = (nRe * dRe + nIm * dIm) / dd;
-  let sIm = (nIm * dRe - nRe * dIm) / dd;
-  const mag = Math.exp(2 * bRe * (a1 - a));
-  const ph = bIm * (a1 - a);
-  const eRe = mag * Math.cos(ph);
-  const eIm = mag * Math.sin(ph);
-  const tRe = sRe * eRe - sIm * eIm;
-  sIm = sRe * eIm + sIm * eRe;
-  sRe = tRe;
-  const z2 = { re: bRe * a, im: bIm * a };
-  const j0 = besselI0ComplexScaled(z2);
-  const j1 = besselI1ComplexScaled(z2);
-  const m0 = besselK0ComplexScaled(z2);
-  const m1 = besselK1ComplexScaled(z2);
-  const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
-  const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
-  const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
-  const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
-  const pRe = bRe * uRe - bIm * uIm;
-  const pIm = bRe * uIm + bIm * uRe;
-  const vv = vRe * vRe + vIm * vIm;
-  return [(pRe * vRe + pIm * vIm) / vv, (pIm * vRe - pRe * vIm) / vv];
-}

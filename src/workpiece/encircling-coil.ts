@@ -19,6 +19,7 @@ import {
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { gaussLegendreRule } from "../special/internal.js";
+import { besselK1MomentTailScaled } from "./kernels.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
@@ -107,23 +108,41 @@ export interface EncirclingCoilOverRodResult {
 const PANEL_NODES = 12;
 const RULE = gaussLegendreRule(PANEL_NODES);
 
+/** The checked coil and rod geometry of the coils encircling a rod (shared by the prepared form). */
+export interface EncirclingGeometryRead {
+  readonly r1: number;
+  readonly r2: number;
+  readonly len: number;
+  readonly turns: number;
+  readonly rod: Record<string, unknown>;
+  readonly a: number;
+  readonly a1: number;
+}
+
 /**
- * $e^{x}\int_x^\infty tK_1(t)\,dt$ for x > 0, from
- * $\int_x^\infty tK_1 = \int_0^\infty e^{-x\cosh u}\,(x\cosh u + 1)/\cosh u\,du$ by the trapezoid
- * rule (even analytic integrand: exponential convergence), ≤ 1e-14 relative.
+ * Checks the coil (0 < innerRadius < outerRadius, length > 0, integer turns ≥ 1) and the rod's
+ * radii (0 < radius < coil innerRadius, 0 ≤ innerRadius < radius) of an encircling coil; with
+ * `maxLengthPerGap`, also refuses a radial gap below coil length / maxLengthPerGap (bounded work).
  */
-function kMomentTailScaled(x: number): number {
-  const h = Math.min(0.25, 0.7 / Math.sqrt(x));
-  let sum = 0.5 * (x + 1);
-  for (let k = 1; k < 2000; k++) {
-    const u = k * h;
-    const c = Math.cosh(u);
-    const e = Math.exp(-x * (c - 1));
-    const term = (e * (x * c + 1)) / c;
-    sum += term;
-    if (term < 1e-17 * sum) break;
+export function readEncirclingGeometry(where: string, coilValue: unknown, rodValue: unknown, rodFields: readonly string[], maxLengthPerGap?: number): EncirclingGeometryRead {
+  const c = requireObject(where, "coil", coilValue);
+  requireKnownKeys(where, "coil", c, ENCIRCLING_COIL_FIELDS);
+  const r1 = requirePositive(where, "coil.innerRadius", c["innerRadius"], "m");
+  const r2 = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
+  if (!(r2 > r1)) throw new InputError(where, "coil.outerRadius", r2, "m", `a finite number > coil.innerRadius (${r1})`);
+  const len = requirePositive(where, "coil.length", c["length"], "m");
+  const turns = requireInteger(where, "coil.turns", c["turns"], 1);
+  const rod = requireObject(where, "rod", rodValue);
+  requireKnownKeys(where, "rod", rod, rodFields);
+  const a = requirePositive(where, "rod.radius", rod["radius"], "m");
+  if (!(a < r1)) throw new InputError(where, "rod.radius", a, "m", `a finite number > 0 and < coil.innerRadius (${r1})`);
+  // bounded work: the quadrature's cost grows as coil length / gap
+  if (maxLengthPerGap !== undefined && len > maxLengthPerGap * (r1 - a)) {
+    throw new InputError(where, "rod.radius", a, "m", `at most coil.innerRadius − coil.length/${maxLengthPerGap} = ${r1 - len / maxLengthPerGap} (a gap below 1/${maxLengthPerGap} of the coil length makes the integral too costly)`);
   }
-  return sum * h;
+  const a1 = rod["innerRadius"] === undefined ? 0 : requireNonNegative(where, "rod.innerRadius", rod["innerRadius"], "m");
+  if (!(a1 < a)) throw new InputError(where, "rod.innerRadius", a1, "m", `a finite number ≥ 0 and < rod.radius (${a})`);
+  return { r1, r2, len, turns, rod, a, a1 };
 }
 
 /**
@@ -176,23 +195,7 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
   const where = "encirclingCoilOverRod";
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, ENCIRCLING_FIELDS);
-  const c = requireObject(where, "coil", options.coil);
-  requireKnownKeys(where, "coil", c, ENCIRCLING_COIL_FIELDS);
-  const r1 = requirePositive(where, "coil.innerRadius", c["innerRadius"], "m");
-  const r2 = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
-  if (!(r2 > r1)) throw new InputError(where, "coil.outerRadius", r2, "m", `a finite number > coil.innerRadius (${r1})`);
-  const len = requirePositive(where, "coil.length", c["length"], "m");
-  const turns = requireInteger(where, "coil.turns", c["turns"], 1);
-  const rod = requireObject(where, "rod", options.rod);
-  requireKnownKeys(where, "rod", rod, ROD_FIELDS);
-  const a = requirePositive(where, "rod.radius", rod["radius"], "m");
-  if (!(a < r1)) throw new InputError(where, "rod.radius", a, "m", `a finite number > 0 and < coil.innerRadius (${r1})`);
-  // bounded work: the quadrature's cost grows as coil length / gap
-  if (len > MAX_LENGTH_PER_GAP * (r1 - a)) {
-    throw new InputError(where, "rod.radius", a, "m", `at most coil.innerRadius − coil.length/${MAX_LENGTH_PER_GAP} = ${r1 - len / MAX_LENGTH_PER_GAP} (a gap below 1/${MAX_LENGTH_PER_GAP} of the coil length makes the integral too costly)`);
-  }
-  const a1 = rod["innerRadius"] === undefined ? 0 : requireNonNegative(where, "rod.innerRadius", rod["innerRadius"], "m");
-  if (!(a1 < a)) throw new InputError(where, "rod.innerRadius", a1, "m", `a finite number ≥ 0 and < rod.radius (${a})`);
+  const { r1, r2, len, turns, rod, a, a1 } = readEncirclingGeometry(where, options.coil, options.rod, ROD_FIELDS, MAX_LENGTH_PER_GAP);
   const rho = requirePositive(where, "rod.resistivity", rod["resistivity"], "Ω·m");
   const mur = rod["relativePermeability"];
   if (typeof mur !== "number" || !Number.isFinite(mur) || mur < 1) {
@@ -219,7 +222,7 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
       const cRe = cc[0]!;
       const cIm = cc[1]!;
       // κ e^{α r1} = Gs(α r1) − e^{−α (r2 − r1)} Gs(α r2)
-      const kap = kMomentTailScaled(alpha * r1) - Math.exp(-alpha * (r2 - r1)) * kMomentTailScaled(alpha * r2);
+      const kap = besselK1MomentTailScaled(alpha * r1) - Math.exp(-alpha * (r2 - r1)) * besselK1MomentTailScaled(alpha * r2);
       const s = Math.sin(0.5 * alpha * len);
       const q = kap / (alpha * alpha * alpha);
       const fac = wt * Math.exp(-2 * alpha * gap) * q * q * s * s;
@@ -292,42 +295,7 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
     // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
     const x1 = alpha * a1;
     const rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
-    const z1 = { re: bRe * a1, im: bIm * a1 };
-    const i0 = besselI0ComplexScaled(z1);
-    const i1 = besselI1ComplexScaled(z1);
-    const k0 = besselK0ComplexScaled(z1);
-    const k1 = besselK1ComplexScaled(z1);
-    // num = β I0/μr − rAir I1 ; den = β K0/μr + rAir K1
-    const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
-    const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
-    const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
-    const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
-    const dd = dRe * dRe + dIm * dIm;
-    let sRe = (nRe * dRe + nIm * dIm) / dd;
-    let sIm = (nIm * dRe - nRe * dIm) / dd;
-    // scale factor e^{Re z1 + z1 − z2 − Re z2}, z = β r
-    const mag = Math.exp(2 * bRe * (a1 - a));
-    const ph = bIm * (a1 - a);
-    const eRe = mag * Math.cos(ph);
-    const eIm = mag * Math.sin(ph);
-    const tRe = sRe * eRe - sIm * eIm;
-    sIm = sRe * eIm + sIm * eRe;
-    sRe = tRe;
-    const z2 = { re: bRe * a, im: bIm * a };
-    const j0 = besselI0ComplexScaled(z2);
-    const j1 = besselI1ComplexScaled(z2);
-    const m0 = besselK0ComplexScaled(z2);
-    const m1 = besselK1ComplexScaled(z2);
-    // R = β (I0 − s K0) / (μr (I1 + s K1))
-    const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
-    const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
-    const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
-    const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
-    const pRe = bRe * uRe - bIm * uIm;
-    const pIm = bRe * uIm + bIm * uRe;
-    const vv = vRe * vRe + vIm * vIm;
-    rRe = (pRe * vRe + pIm * vIm) / vv;
-    rIm = (pIm * vRe - pRe * vIm) / vv;
+    [rRe, rIm] = tubeSurfaceRatio(bRe, bIm, a, a1, mur, rAir);
   }
   const x = alpha * a;
   const i0 = besselI0Scaled(x);
@@ -342,4 +310,44 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
   const dd = dRe * dRe + dIm * dIm;
   out[0] = (nRe * dRe + nIm * dIm) / dd;
   out[1] = (nIm * dRe - nRe * dIm) / dd;
+}
+
+/**
+ * Tube wall: (1/μr)(1/r) d(rA)/dr / A at the outer surface, the bore matched to the air solution
+ * (num = β I0/μr − rAir I1, den = β K0/μr + rAir K1 at the bore; R = β (I0 − s K0) / (μr (I1 + s K1)) at
+ * the surface, with the scale factor e^{Re z1 + z1 − z2 − Re z2}, z = β r): [Re R, Im R].
+ */
+export function tubeSurfaceRatio(bRe: number, bIm: number, a: number, a1: number, mur: number, rAir: number): [number, number] {
+  const z1 = { re: bRe * a1, im: bIm * a1 };
+  const i0 = besselI0ComplexScaled(z1);
+  const i1 = besselI1ComplexScaled(z1);
+  const k0 = besselK0ComplexScaled(z1);
+  const k1 = besselK1ComplexScaled(z1);
+  const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
+  const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
+  const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
+  const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
+  const dd = dRe * dRe + dIm * dIm;
+  let sRe = (nRe * dRe + nIm * dIm) / dd;
+  let sIm = (nIm * dRe - nRe * dIm) / dd;
+  const mag = Math.exp(2 * bRe * (a1 - a));
+  const ph = bIm * (a1 - a);
+  const eRe = mag * Math.cos(ph);
+  const eIm = mag * Math.sin(ph);
+  const tRe = sRe * eRe - sIm * eIm;
+  sIm = sRe * eIm + sIm * eRe;
+  sRe = tRe;
+  const z2 = { re: bRe * a, im: bIm * a };
+  const j0 = besselI0ComplexScaled(z2);
+  const j1 = besselI1ComplexScaled(z2);
+  const m0 = besselK0ComplexScaled(z2);
+  const m1 = besselK1ComplexScaled(z2);
+  const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
+  const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
+  const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
+  const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
+  const pRe = bRe * uRe - bIm * uIm;
+  const pIm = bRe * uIm + bIm * uRe;
+  const vv = vRe * vRe + vIm * vIm;
+  return [(pRe * vRe + pIm * vIm) / vv, (pIm * vRe - pRe * vIm) / vv];
 }

@@ -22,14 +22,15 @@ export type {
 } from "./long-coil.js";
 export { slabInTangentialField } from "./slab.js";
 export type { SlabInTangentialFieldOptions, SlabInTangentialFieldResult } from "./slab.js";
-export { coilOverPlate, coilOverPlateTruncatedRegion } from "./coil-over-plate.js";
+export { coilOverPlate } from "./coil-over-plate.js";
+export { coilOverPlateTruncatedRegion } from "./coil-over-plate-truncated.js";
+export type { CoilOverPlateTruncatedRegionOptions } from "./coil-over-plate-truncated.js";
 export type {
   CoilAbovePlate,
   // eslint-disable-next-line @typescript-eslint/no-deprecated -- exported until 1.0
   CoilAbovePlateWithHeight,
   CoilOverPlateOptions,
   CoilOverPlateResult,
-  CoilOverPlateTruncatedRegionOptions,
   PlateLayer,
 } from "./coil-over-plate.js";
 export { encirclingCoilOverRod } from "./encircling-coil.js";

@@ -1,6 +1,6 @@
 /**
  * Private numerical kernels of the workpiece module (not exported from the package):
- * the radial coil integral $\int_0^x t J_1(t)\,dt$.
+ * the radial coil integral $\int_0^x t J_1(t)\,dt$ and the scaled tail $e^x\int_x^\infty tK_1(t)\,dt$.
  *
  * @packageDocumentation
  */
@@ -232,4 +232,24 @@ export function bakerPQ(u: number): { p: number; q: number; qExcess: number } {
   // (1 + j) r
   const q = rRe + rIm;
   return { p: rRe - rIm, q, qExcess: q - u };
+}
+
+/**
+ * $e^{x}\int_x^\infty tK_1(t)\,dt$ for x > 0, from
+ * $\int_x^\infty tK_1 = \int_0^\infty e^{-x\cosh u}\,(x\cosh u + 1)/\cosh u\,du$ by the trapezoid
+ * rule (even analytic integrand: exponential convergence), ≤ 1e-14 relative. The winding
+ * moment of the coils encircling a rod (`encircling-coil.ts`, `encircling-coil-prepared.ts`).
+ */
+export function besselK1MomentTailScaled(x: number): number {
+  const h = Math.min(0.25, 0.7 / Math.sqrt(x));
+  let sum = 0.5 * (x + 1);
+  for (let k = 1; k < 2000; k++) {
+    const u = k * h;
+    const c = Math.cosh(u);
+    const e = Math.exp(-x * (c - 1));
+    const term = (e * (x * c + 1)) / c;
+    sum += term;
+    if (term < 1e-17 * sum) break;
+  }
+  return sum * h;
 }

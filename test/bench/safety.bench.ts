@@ -17,7 +17,7 @@ const check = (x: number): void => {
 
 describe("safety", () => {
   bench("fieldOnAxis, single loop", () => {
-    check(fieldOnAxis(loop, 10, points[i++ & 1023]!.axialPosition));
+    check(fieldOnAxis({ coil: loop, current: 10, axialPosition: points[i++ & 1023]!.axialPosition }));
   }, { time: 300 });
   bench("fieldNearCoil, single loop (elliptic integrals)", () => {
     check(fieldNearCoil(loop, 10, points[i++ & 1023]!).magnitude);

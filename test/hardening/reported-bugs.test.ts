@@ -77,14 +77,14 @@ describe("reported wrong answers", () => {
 
   it("fieldOnAxis and fieldNearCoil refuse 1e9 turns at once instead of running out of memory", () => {
     const start = performance.now();
-    expect(() => fieldOnAxis({ kind: "solenoid", radius: 0.05, length: 0.1, turns: 1e9 }, 1, 0)).toThrow(/at most 100000|between 1 and 100000/);
+    expect(() => fieldOnAxis({ coil: { kind: "solenoid", radius: 0.05, length: 0.1, turns: 1e9 }, current: 1, axialPosition: 0 })).toThrow(/at most 100000|between 1 and 100000/);
     expect(() => fieldNearCoil({ kind: "spiral", innerRadius: 0, outerRadius: 0.1, turns: 1e7 }, 1, { radialDistance: 0, axialPosition: 0.01 })).toThrow(InputError);
     expect(performance.now() - start).toBeLessThan(100);
   });
 
   it("fieldOnAxis at its edge (1e5 turns) stays within 1 s and matches the finite-solenoid closed form", () => {
     const start = performance.now();
-    const b = fieldOnAxis({ kind: "solenoid", radius: 0.05, length: 0.1, turns: 100_000 }, 1e-3, 0);
+    const b = fieldOnAxis({ coil: { kind: "solenoid", radius: 0.05, length: 0.1, turns: 100_000 }, current: 1e-3, axialPosition: 0 });
     expect(performance.now() - start).toBeLessThan(1000);
     // centre of a finite current sheet: B = µ0 n I · (L/2)/√((L/2)² + a²) (Jackson §5.5 / any text)
     const mu0 = 1.25663706212e-6;

@@ -58,7 +58,7 @@ describe("misspelt options", () => {
   });
 
   it("fieldOnAxis refuses solenoid descriptions inside an array instead of reading them as loops", () => {
-    const m = messageOf(() => fieldOnAxis([{ kind: "solenoid", radius: 0.05, length: 0.1, turns: 1000 }] as never, 1, 0));
+    const m = messageOf(() => fieldOnAxis({ coil: [{ kind: "solenoid", radius: 0.05, length: 0.1, turns: 1000 }], current: 1, axialPosition: 0 } as never));
     expect(m).toContain("coil[0].kind");
   });
 

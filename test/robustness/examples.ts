@@ -955,9 +955,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     ],
   },
   fieldOnAxis: {
-    args: () => [[{ radius: 0.05 }], 10, 0],
+    args: () => [{ coil: [{ radius: 0.05 }], current: 10, axialPosition: 0 }],
+    variants: [() => [[{ radius: 0.05 }], 10, 0]],
     allow: [
-      { paths: ["1", "2"], kinds: ["zero", "negative"], reason: SIGNED + " (current sense, axial position)" },
+      { paths: ["0.current", "0.axialPosition", "1", "2"], kinds: ["zero", "negative"], reason: SIGNED + " (current sense, axial position)" },
+      { paths: ["0.coil.0.position"], kinds: ["zero", "negative", "undefined"], reason: "a loop's axial position is signed and optional (default 0)" },
+      { paths: ["0.coil.0.turns"], kinds: ["undefined"], reason: OPTIONAL + " (1 turn)" },
     ],
   },
   fieldNearCoil: {

@@ -37,7 +37,7 @@ describe("coil field properties", () => {
       fc.property(logUniform(0.005, 0.2), logUniform(0.01, 0.5), fc.integer({ min: 1, max: 50 }), logUniform(1e-3, 1), (radius, length, turns, step) => {
         const coil = { kind: "solenoid" as const, radius, length, turns };
         const z = length / 2 + step;
-        expect(fieldOnAxis(coil, 1, z + step)).toBeLessThan(fieldOnAxis(coil, 1, z));
+        expect(fieldOnAxis({ coil, current: 1, axialPosition: z + step })).toBeLessThan(fieldOnAxis({ coil, current: 1, axialPosition: z }));
       }),
       { seed: 1, numRuns: 200 },
     );

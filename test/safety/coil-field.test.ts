@@ -10,12 +10,29 @@ const close = (actual: number, expected: number, rtol: number, atol = 0): void =
 
 describe("fieldOnAxis: Biot–Savart on the axis", () => {
   it("a single loop at its centre gives μ0 I/(2a) (Jackson, Classical Electrodynamics 3rd ed., §5.5)", () => {
-    close(fieldOnAxis([{ radius: 0.05 }], 10, 0), (MU_0 * 10) / (2 * 0.05), 1e-15);
+    close(fieldOnAxis({ coil: [{ radius: 0.05 }], current: 10, axialPosition: 0 }), (MU_0 * 10) / (2 * 0.05), 1e-15);
+  });
+
+  it("the deprecated positional form (kept until 1.0) gives the same numbers and the same errors", () => {
+    const coil = { kind: "solenoid", radius: 0.04, length: 0.08, turns: 10 } as const;
+    for (const z of [-0.1, 0, 0.03]) {
+      // eslint-disable-next-line @typescript-eslint/no-deprecated -- the positional form itself is under test
+      expect(fieldOnAxis(coil, 3, z)).toBe(fieldOnAxis({ coil, current: 3, axialPosition: z }));
+    }
+    // eslint-disable-next-line @typescript-eslint/no-deprecated -- the positional form itself is under test
+    expect(() => fieldOnAxis(coil, 3, Number.NaN)).toThrow(/fieldOnAxis: distance must be/);
+  });
+
+  it("the options form refuses unknown keys, a coil without current, and names axialPosition", () => {
+    expect(() => fieldOnAxis({ coil: [{ radius: 0.05 }], current: 1, axialPosition: 0, distance: 0 } as never)).toThrow(/options\.distance/);
+    expect(() => fieldOnAxis([{ radius: 0.05 }] as never)).toThrow(InputError);
+    expect(() => fieldOnAxis({ kind: "solenoid", radius: 0.04, length: 0.08, turns: 10 } as never)).toThrow(/a coil alone has no current/);
+    expect(() => fieldOnAxis({ coil: [{ radius: 0.05 }], current: 1, axialPosition: Number.NaN })).toThrow(/axialPosition must be/);
   });
 
   it("a single loop at distance z gives μ0 I a²/(2 (a² + z²)^{3/2}) (Jackson §5.5)", () => {
     for (const z of [-0.2, 0.01, 0.05, 1, 30]) {
-      close(fieldOnAxis([{ radius: 0.05, position: 0.02, turns: 3 }], 7, z), (3 * MU_0 * 7 * 0.0025) / (2 * (0.0025 + (z - 0.02) ** 2) ** 1.5), 1e-14);
+      close(fieldOnAxis({ coil: [{ radius: 0.05, position: 0.02, turns: 3 }], current: 7, axialPosition: z }), (3 * MU_0 * 7 * 0.0025) / (2 * (0.0025 + (z - 0.02) ** 2) ** 1.5), 1e-14);
     }
   });
 
@@ -26,7 +43,7 @@ describe("fieldOnAxis: Biot–Savart on the axis", () => {
     const sheet = (z: number): number =>
       ((MU_0 * turns * 1) / (2 * length)) *
       ((z + length / 2) / Math.hypot(z + length / 2, radius) - (z - length / 2) / Math.hypot(z - length / 2, radius));
-    for (const z of [0, 0.03, 0.05, 0.08, 0.3]) close(fieldOnAxis({ kind: "solenoid", radius, length, turns }, 1, z), sheet(z), 1e-6);
+    for (const z of [0, 0.03, 0.05, 0.08, 0.3]) close(fieldOnAxis({ coil: { kind: "solenoid", radius, length, turns }, current: 1, axialPosition: z }), sheet(z), 1e-6);
   });
 
   it("a many-turn flat spiral approaches the continuous-winding closed form", () => {
@@ -38,14 +55,14 @@ describe("fieldOnAxis: Biot–Savart on the axis", () => {
     const continuous = (z: number): number =>
       ((MU_0 * turns) / (2 * (b - a))) *
       (Math.log((b + Math.hypot(b, z)) / (a + Math.hypot(a, z))) - b / Math.hypot(b, z) + a / Math.hypot(a, z));
-    for (const z of [0, 0.005, 0.02, 0.1]) close(fieldOnAxis({ kind: "spiral", innerRadius: a, outerRadius: b, turns }, 1, z), continuous(z), 1e-6);
+    for (const z of [0, 0.005, 0.02, 0.1]) close(fieldOnAxis({ coil: { kind: "spiral", innerRadius: a, outerRadius: b, turns }, current: 1, axialPosition: z }), continuous(z), 1e-6);
     // At the centre: μ0 N I ln(b/a) / (2(b − a)).
     close(continuous(0), (MU_0 * turns * Math.log(b / a)) / (2 * (b - a)), 1e-14);
   });
 
   it("far away it falls as the dipole field μ0 m /(2π z³), m = N I π a² (Jackson eq. 5.56)", () => {
     const z = 50;
-    close(fieldOnAxis([{ radius: 0.05, turns: 10 }], 2, z), (MU_0 * 10 * 2 * Math.PI * 0.0025) / (2 * Math.PI * z ** 3), 1e-5);
+    close(fieldOnAxis({ coil: [{ radius: 0.05, turns: 10 }], current: 2, axialPosition: z }), (MU_0 * 10 * 2 * Math.PI * 0.0025) / (2 * Math.PI * z ** 3), 1e-5);
   });
 });
 
@@ -78,7 +95,7 @@ describe("fieldNearCoil: exact loop field off the axis", () => {
   it("on the axis it equals fieldOnAxis exactly, and is continuous just off it", () => {
     const coil = { kind: "solenoid" as const, radius: 0.04, length: 0.08, turns: 10 };
     for (const z of [0, 0.03, -0.1]) {
-      const onAxis = fieldOnAxis(coil, 20, z);
+      const onAxis = fieldOnAxis({ coil, current: 20, axialPosition: z });
       expect(fieldNearCoil(coil, 20, { radialDistance: 0, axialPosition: z }).axial).toBeCloseTo(onAxis, 15);
       close(fieldNearCoil(coil, 20, { radialDistance: 1e-7, axialPosition: z }).axial, onAxis, 1e-9);
       close(fieldNearCoil(coil, 20, { radialDistance: 1e-4, axialPosition: z }).axial, onAxis, 1e-4);
@@ -102,14 +119,14 @@ describe("fieldNearCoil: exact loop field off the axis", () => {
 
 describe("field functions: bad input throws InputError", () => {
   it.each([
-    ["empty loop array", () => fieldOnAxis([], 1, 0)],
-    ["negative loop radius", () => fieldOnAxis([{ radius: -1 }], 1, 0)],
-    ["non-integer turns", () => fieldOnAxis([{ radius: 1, turns: 1.5 }], 1, 0)],
-    ["unknown kind", () => fieldOnAxis({ kind: "toroid" } as never, 1, 0)],
-    ["solenoid with zero length", () => fieldOnAxis({ kind: "solenoid", radius: 0.1, length: 0, turns: 3 }, 1, 0)],
-    ["spiral with outer ≤ inner", () => fieldOnAxis({ kind: "spiral", innerRadius: 0.05, outerRadius: 0.05, turns: 3 }, 1, 0)],
-    ["non-finite current", () => fieldOnAxis([{ radius: 1 }], Number.NaN, 0)],
-    ["non-finite distance", () => fieldOnAxis([{ radius: 1 }], 1, Infinity)],
+    ["empty loop array", () => fieldOnAxis({ coil: [], current: 1, axialPosition: 0 })],
+    ["negative loop radius", () => fieldOnAxis({ coil: [{ radius: -1 }], current: 1, axialPosition: 0 })],
+    ["non-integer turns", () => fieldOnAxis({ coil: [{ radius: 1, turns: 1.5 }], current: 1, axialPosition: 0 })],
+    ["unknown kind", () => fieldOnAxis({ coil: { kind: "toroid" }, current: 1, axialPosition: 0 } as never)],
+    ["solenoid with zero length", () => fieldOnAxis({ coil: { kind: "solenoid", radius: 0.1, length: 0, turns: 3 }, current: 1, axialPosition: 0 })],
+    ["spiral with outer ≤ inner", () => fieldOnAxis({ coil: { kind: "spiral", innerRadius: 0.05, outerRadius: 0.05, turns: 3 }, current: 1, axialPosition: 0 })],
+    ["non-finite current", () => fieldOnAxis({ coil: [{ radius: 1 }], current: Number.NaN, axialPosition: 0 })],
+    ["non-finite distance", () => fieldOnAxis({ coil: [{ radius: 1 }], current: 1, axialPosition: Infinity })],
     ["negative radial distance", () => fieldNearCoil([{ radius: 1 }], 1, { radialDistance: -1, axialPosition: 0 })],
     ["a point on the wire", () => fieldNearCoil([{ radius: 1 }], 1, { radialDistance: 1, axialPosition: 0 })],
   ])("%s", (_name, call) => {

@@ -29,7 +29,7 @@ describe("heater study cautions", () => {
     expect(field).toHaveLength(1);
     const coil = s.description.coil;
     if (coil.shape !== "solenoid") throw new Error("expected a solenoid");
-    const perAmp = Math.abs(fieldOnAxis({ kind: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns }, 1, 0.3));
+    const perAmp = Math.abs(fieldOnAxis({ coil: { kind: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns }, current: 1, axialPosition: 0.3 }));
     const points = [s.emptyCoil, s.operating, ...(s.atTarget === null ? [] : [s.atTarget])];
     const ratios = points.map((p) => exposureCheck({ fluxDensityRms: perAmp * p.coilCurrentRms, frequency: p.frequency, population: "general-public" }).ratio);
     const worst = points[ratios.indexOf(Math.max(...ratios))];

@@ -15,7 +15,7 @@ const accepts = (v: unknown): boolean => {
   }
 };
 
-describe("the hand-kept JSON Schema agrees with readHeaterDescription", () => {
+describe("the generated JSON Schema agrees with readHeaterDescription", () => {
   for (const file of ["study-bearing-race.json", "study-plate-warmer.json", "study-forging-bar.json"] as const) {
     it(`both accept the demo file ${file}`, () => {
       const example = loadExample(file);
