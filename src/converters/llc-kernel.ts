@@ -304,7 +304,7 @@ let evPeakU = 0;
 let evPeakG = 0;
 
 /** max |c + a cos(wt) + b sin(wt)| for t in [0, tmax] (w > 0). */
-function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number): number {
+export function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number): number {
   let best = Math.max(Math.abs(c + a), Math.abs(c + a * Math.cos(w * tmax) + b * Math.sin(w * tmax)));
   const R = Math.hypot(a, b);
   if (!(R > 0)) return best;
@@ -319,7 +319,7 @@ function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number):
 }
 
 /** ∫_0^τ (a cos t + b sin t)² dt. */
-function squareIntegral(a: number, b: number, tau: number): number {
+export function squareIntegral(a: number, b: number, tau: number): number {
   const s2 = Math.sin(2 * tau);
   const s = Math.sin(tau);
   return 0.5 * (a * a + b * b) * tau + 0.25 * (a * a - b * b) * s2 + a * b * s * s;

@@ -582,6 +582,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 20e-6, resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6 }],
     nonFinite: { inductanceRatio: "no magnetising branch: L_m/L_r is infinite by definition (documented)" },
   },
+  parallelResonantOperatingPoint: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, parallelCapacitance: 25e-9, switchingFrequency: 110e3, loadResistance: 12 }],
+  },
+  lccOperatingPoint: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: 25e-9, parallelCapacitance: 25e-9, switchingFrequency: 150e3, loadResistance: 12 }],
+  },
   inductiveLink: {
     args: () => [{ primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }],
     variants: [
