@@ -555,6 +555,14 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, secondaryResistance: 0.08, loadResistance: 5, resonantFrequency: 100e3 }],
     allow: [{ paths: ["0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (a lossless secondary coil)" }],
   },
+  lccSplitting: {
+    args: () => [{ compensation: "lcc-series", primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryFilterInductance: 10e-6, primaryResistance: 0.05, secondaryResistance: 0.05, loadResistance: 5, resonantFrequency: 100e3 }],
+    variants: [() => [{ compensation: "double-lcc", primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryFilterInductance: 10e-6, secondaryFilterInductance: 8e-6, primaryResistance: 0.05, secondaryResistance: 0.05, loadResistance: 5, resonantFrequency: 100e3 }]],
+    allow: [
+      { paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" },
+      { paths: ["0.secondaryFilterInductance"], kinds: ["undefined"], reason: "only for double-lcc (absent in the lcc-series example)" },
+    ],
+  },
   linkFrequencySweep: {
     args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 100e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }, [90e3, 100e3, 115e3]],
     allow: [{ paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" }],
