@@ -11,10 +11,10 @@ import {
   requireObject,
   requireOneOf,
   requirePositive,
-  voltageCaution,
   EXTRA_LOW_VOLTAGE_LIMITS,
   type Caution,
 } from "../core/index.js";
+import { extraLowVoltageCaution } from "../core/extra-low-voltage.js";
 
 /**
  * The compensation of an inductive link, primary side first: series (S), parallel (P), or the
@@ -405,11 +405,11 @@ function solveLink(
   const cautions: Caution[] = [];
   // the cautions' limit is checked here first so a safe link builds no message text
   if (worst > ELV_AC_RMS) {
-    const caution = voltageCaution({ voltage: worst, waveform: "ac", location: `${worstName} compensating capacitor` });
+    const caution = extraLowVoltageCaution(worst, "ac", `${worstName} compensating capacitor`);
     if (caution !== null) cautions.push(caution);
   }
   if (coilVoltage > ELV_AC_RMS) {
-    const coilCaution = voltageCaution({ voltage: coilVoltage, waveform: "ac", location: "primary coil" });
+    const coilCaution = extraLowVoltageCaution(coilVoltage, "ac", "primary coil");
     if (coilCaution !== null) cautions.push(coilCaution);
   }
   return {

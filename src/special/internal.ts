@@ -30,3 +30,4 @@ export {
   polynomialRealRoots,
   polynomialRootBound,
 } from "./polynomial.js";
+export { factorDense, solveFactored } from "./dense-solve.js";
