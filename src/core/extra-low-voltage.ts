@@ -123,7 +123,10 @@ function round(value: number): string {
   if (value === 0) return "0";
   const a = Math.abs(value);
   if (!(a >= 1e-3 && a < 1e6)) return value.toPrecision(3);
-  const k = 2 - Math.floor(Math.log10(a));
+  // decimal exponent by comparisons (a log10 costs more than the rest); a wrong guess at an
+  // inexact boundary such as 0.1 only sends the value to the toPrecision path below
+  const exponent = a >= 100 ? (a >= 1e4 ? (a >= 1e5 ? 5 : 4) : a >= 1000 ? 3 : 2) : a >= 1 ? (a >= 10 ? 1 : 0) : a >= 0.1 ? -1 : a >= 0.01 ? -2 : -3;
+  const k = 2 - exponent;
   if (k >= -3 && k <= 5) {
     const scaled = k >= 0 ? a * (SCALE[k + 3] ?? 1) : a / (SCALE[3 - k] ?? 1);
     const n = Math.round(scaled);
