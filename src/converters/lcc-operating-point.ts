@@ -118,7 +118,7 @@ export interface ParallelConverterOperatingPoint {
   /**
    * The circuit modes of the positive half period in order: P (C_p voltage positive, the
    * rectifier passes +I_out), N (negative), Z (C_p clamped at zero, all diodes conduct), e.g.
-   * "NP" in the continuous mode, "NZP" or "ZP" in the discontinuous-capacitor-voltage mode.
+   * "NP" or "PN" in the continuous mode, "NZP", "ZPZ" or "ZPNZ" with clamped intervals.
    */
   readonly conductionMode: string;
   /** The first-harmonic values for the same circuit. */
@@ -265,7 +265,7 @@ function operatingPoint(where: string, options: LccOperatingPointOptions | Paral
  * @remarks Accuracy: gain, output voltage, currents and capacitor voltages within 1e-6 relative
  * of a time-domain simulation of the same circuit taken to periodic steady state (scipy,
  * fixture test/fixtures/converters/prc-lcc-steady-state.json: 0.6 ≤ f_n ≤ 1.6,
- * 0.2 ≤ Q ≤ 2.5, modes NP, NZP, ZP); the boundary conditions are met to ≤ 1e-10; input power
+ * 0.2 ≤ Q ≤ 2.5, modes NP, PN, NZP, ZPZ, ZPNZ); the boundary conditions are met to ≤ 1e-10; input power
  * equals output power to 1e-9 (lossless circuit). FHA error: the FHA gain is within 1.2 % of the
  * exact one for |f_n − 1| ≤ 0.02, 3.1 % for ≤ 0.05 and 6.4 % for ≤ 0.1 (0.2 ≤ Q ≤ 1, tested),
  * equal to it at f_n = 1 in the continuous mode (both 8/(π²Q)), and off by more in the clamped

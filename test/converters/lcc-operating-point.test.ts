@@ -51,7 +51,7 @@ describe("parallelResonantOperatingPoint / lccOperatingPoint (exact steady state
     });
   }
 
-  it("the fixture covers every rectifier mode: continuous (NP) and clamped (NZP, ZP)", () => {
+  it("the fixture covers both kinds of rectifier mode: continuous (NP, PN) and clamped (NZP, ZPZ, ZPNZ)", () => {
     const modes = new Set((fixture.cases as Case[]).map((c) => c.expected.sequence));
     expect(modes.has("NP")).toBe(true);
     expect([...modes].some((s) => s.includes("Z"))).toBe(true);
