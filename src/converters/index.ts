@@ -11,3 +11,4 @@ export { llcGain, seriesResonantGain, parallelResonantGain, lccGain } from "./fh
 export type { LlcGainOptions, SeriesResonantGainOptions, ParallelResonantGainOptions, LccGainOptions } from "./fha.js";
 export * from "./llc-operating-point.js";
 export * from "./llc-design.js";
+export * from "./lcc-operating-point.js";

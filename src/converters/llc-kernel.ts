@@ -22,7 +22,8 @@
  *
  * @packageDocumentation
  */
-import { brentRoot, solveDense } from "../special/index.js";
+import { brentRoot } from "../special/index.js";
+import { factorDense, solveFactored } from "../special/internal.js";
 
 export const MODE_O = 0;
 export const MODE_P = 1;
@@ -149,6 +150,21 @@ function flow(mode: number, tau: number, j: number, u: number, g: number, m: num
   out[2] = g + (forced ? sign * m * lam * tau : 0);
 }
 
+/**
+ * {@link flow} (forced) and {@link diodeIntegral} of one P or N segment together, one cosine
+ * and sine for both: writes the end state into `out`, returns s·∫(j − g) dθ (s = ±1 for P/N).
+ */
+function flowDiode(mode: number, tau: number, j: number, u: number, g: number, m: number, lam: number): number {
+  const sign = mode === MODE_P ? 1 : -1;
+  const e = 1 - sign * m;
+  const c = Math.cos(tau);
+  const s = Math.sin(tau);
+  out[0] = j * c + (e - u) * s;
+  out[1] = e + (u - e) * c + j * s;
+  out[2] = g + sign * m * lam * tau;
+  return sign * (j * s + (e - u) * (1 - c) - g * tau - 0.5 * sign * m * lam * tau * tau);
+}
+
 /** ∫ (j − g) dθ over a P or N segment from (j, u, g). */
 function diodeIntegral(mode: number, tau: number, j: number, u: number, g: number, m: number, lam: number): number {
   const sign = mode === MODE_P ? 1 : -1;
@@ -194,8 +210,8 @@ function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: n
   for (let k = 0; k < n; k++) {
     const mode = seqModes[k] ?? 0;
     const tau = seqTau[k] ?? 0;
-    if (mode !== MODE_O) charge += (mode === MODE_P ? 1 : -1) * diodeIntegral(mode, tau, j, u, g, m, lam);
-    flow(mode, tau, j, u, g, m, lam, true);
+    if (mode !== MODE_O) charge += flowDiode(mode, tau, j, u, g, m, lam);
+    else flow(mode, tau, j, u, g, m, lam, true);
     j = out[0] ?? 0;
     u = out[1] ?? 0;
     g = out[2] ?? 0;
@@ -251,9 +267,13 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
       haveJacobian = true;
       fresh = true;
     }
+    if (fresh) {
+      // factor a new Jacobian once; chord steps reuse the factors
+      for (let i = 0; i < n * n; i++) lu[i] = jac[i] ?? 0;
+      if (!factorDense(n, lu, pivots)) return Infinity;
+    }
     for (let i = 0; i < n; i++) step[i] = -(resid[i] ?? 0);
-    for (let i = 0; i < n * n; i++) lu[i] = jac[i] ?? 0;
-    if (!solveDense(n, lu, step)) return Infinity;
+    if (!solveFactored(n, lu, pivots, step)) return Infinity;
     let lambda = 1;
     let accepted = false;
     const backtracks = fresh ? 30 : 1;
@@ -285,7 +305,8 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
   return rn;
 }
 
-/** Scratch copy of the Jacobian for the elimination (solveDense overwrites its matrix). */
+/** LU factors of the current Jacobian and their pivot rows (factorDense overwrites its matrix). */
+const pivots = new Int32Array(MAX_SEGMENTS + 3);
 const lu = new Float64Array((MAX_SEGMENTS + 3) * (MAX_SEGMENTS + 3));
 
 // ---------------------------------------------------------------------------------------------
@@ -304,7 +325,7 @@ let evPeakU = 0;
 let evPeakG = 0;
 
 /** max |c + a cos(wt) + b sin(wt)| for t in [0, tmax] (w > 0). */
-function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number): number {
+export function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number): number {
   let best = Math.max(Math.abs(c + a), Math.abs(c + a * Math.cos(w * tmax) + b * Math.sin(w * tmax)));
   const R = Math.hypot(a, b);
   if (!(R > 0)) return best;
@@ -319,7 +340,7 @@ function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number):
 }
 
 /** ∫_0^τ (a cos t + b sin t)² dt. */
-function squareIntegral(a: number, b: number, tau: number): number {
+export function squareIntegral(a: number, b: number, tau: number): number {
   const s2 = Math.sin(2 * tau);
   const s = Math.sin(tau);
   return 0.5 * (a * a + b * b) * tau + 0.25 * (a * a - b * b) * s2 + a * b * s * s;
@@ -554,7 +575,9 @@ function attempt(lam: number, q: number, fn: number, theta: number, kappa: numbe
     su = unknowns[1] ?? 0;
     sg = unknowns[2] ?? 0;
     mm = unknowns[3] ?? mm;
-    propagateEvents(sj, su, sg, mm, lam, theta, false);
+    // the verifying propagation also records the waveform figures: when it confirms the
+    // solution, the caller needs no second pass
+    propagateEvents(sj, su, sg, mm, lam, theta, true);
     if (evOverflow) return Infinity;
     const residual = verifyResidual(sj, su, sg, mm, kappa, theta);
     best = residual;
@@ -605,7 +628,7 @@ export function llcSteadyState(lam: number, q: number, fn: number): LlcSteadySta
     if (!ok) return null;
   }
   const m = solvedM;
-  propagateEvents(solvedJ, solvedU, solvedG, m, lam, theta, true);
+  // the last propagation (attempt's verifying pass at the solved state and this θ) holds the record
   let sequence = "";
   const durations: number[] = [];
   for (let k = 0; k < evLength; k++) {

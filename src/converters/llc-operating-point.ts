@@ -12,10 +12,10 @@ import {
   requireObject,
   requireOneOf,
   requirePositive,
-  voltageCaution,
   type Caution,
   type ValidityNote,
 } from "../core/index.js";
+import { extraLowVoltageCaution } from "../core/extra-low-voltage.js";
 import { fhaSeed, llcSteadyState } from "./llc-kernel.js";
 
 /**
@@ -200,9 +200,9 @@ function operatingPoint(where: string, options: LlcOperatingPointOptions | Serie
   };
 
   const cautions: Caution[] = [];
-  const dc = voltageCaution({ voltage: vin, waveform: "dc", location: "converter input" });
+  const dc = extraLowVoltageCaution(vin, "dc", "converter input");
   if (dc !== null) cautions.push(dc);
-  const ac = voltageCaution({ voltage: capacitorVoltagePeak / Math.SQRT2, waveform: "ac", location: "resonant capacitor (AC part, RMS of a sine of the same peak)" });
+  const ac = extraLowVoltageCaution(capacitorVoltagePeak / Math.SQRT2, "ac", "resonant capacitor (AC part, RMS of a sine of the same peak)");
   if (ac !== null) cautions.push(ac);
   if (!zvs) {
     cautions.push({

@@ -75,8 +75,22 @@ export function voltageCaution(options: VoltageCautionOptions): Caution | null {
   const v = Math.abs(requireFinite(where, "voltage", options.voltage, "V"));
   const waveform = requireOneOf(where, "waveform", options.waveform, ["ac", "dc"] as const);
   const location = optionalText(where, "location", options.location, "circuit");
+  return extraLowVoltageCaution(v, waveform, location);
+}
+
+/**
+ * The caution of {@link voltageCaution} on checked arguments (|v| in volts, a known waveform):
+ * for library code that has validated its own numbers. Internal: not re-exported from the
+ * package root.
+ *
+ * @param v - the voltage magnitude [V] (RMS for "ac")
+ * @param waveform - "ac" or "dc"
+ * @param location - what carries the voltage, for the message
+ * @returns the caution, or `null` at or below the limit
+ */
+export function extraLowVoltageCaution(v: number, waveform: "ac" | "dc", location: string): Caution | null {
   const limit = waveform === "ac" ? EXTRA_LOW_VOLTAGE_LIMITS.acRms : EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc;
-  if (v <= limit) return null;
+  if (!(v > limit)) return null;
   const kind = waveform === "ac" ? "V AC (RMS)" : "V DC";
   return {
     code: "voltage-above-extra-low",
@@ -89,7 +103,6 @@ export function voltageCaution(options: VoltageCautionOptions): Caution | null {
   };
 }
 
-
 /** An optional text option, or the fallback when it is absent. */
 function optionalText(where: string, parameter: string, value: unknown, fallback: string): string {
   if (value === undefined) return fallback;
@@ -97,10 +110,42 @@ function optionalText(where: string, parameter: string, value: unknown, fallback
   return value;
 }
 
-/** Three significant digits, plain notation where sensible. */
+/** Powers of ten 10^k for k = −3 … 5 (index k + 3), exact doubles for k ≥ 0. */
+const SCALE = [1e-3, 1e-2, 1e-1, 1, 10, 100, 1000, 1e4, 1e5];
+
+/**
+ * Three significant digits, plain notation where sensible: the same text as
+ * `String(Number(value.toPrecision(3)))` for 1e-3 ≤ |value| < 1e6 (else `toPrecision(3)`),
+ * without the two number–text conversions unless the value lies within 1e-6 of a rounding tie
+ * (where the exact decimal rounding of toPrecision decides).
+ */
 function round(value: number): string {
   if (value === 0) return "0";
   const a = Math.abs(value);
-  if (a >= 1e-3 && a < 1e6) return String(Number(value.toPrecision(3)));
-  return value.toPrecision(3);
+  if (!(a >= 1e-3 && a < 1e6)) return value.toPrecision(3);
+  // decimal exponent by comparisons (a log10 costs more than the rest); a wrong guess at an
+  // inexact boundary such as 0.1 only sends the value to the toPrecision path below
+  const exponent = a >= 100 ? (a >= 1e4 ? (a >= 1e5 ? 5 : 4) : a >= 1000 ? 3 : 2) : a >= 1 ? (a >= 10 ? 1 : 0) : a >= 0.1 ? -1 : a >= 0.01 ? -2 : -3;
+  const k = 2 - exponent;
+  if (k >= -3 && k <= 5) {
+    const scaled = k >= 0 ? a * (SCALE[k + 3] ?? 1) : a / (SCALE[3 - k] ?? 1);
+    const n = Math.round(scaled);
+    if (n >= 100 && n <= 999 && Math.abs(scaled - Math.floor(scaled) - 0.5) > 1e-6) {
+      // the digits of n with k decimals, trailing zeros dropped (as the shortest number text does)
+      const sign = value < 0 ? "-" : "";
+      if (k <= 0) return sign + String(n * (SCALE[3 - k] ?? 1));
+      let digits = n;
+      let decimals = k;
+      while (decimals > 0 && digits % 10 === 0) {
+        digits /= 10;
+        decimals--;
+      }
+      if (decimals === 0) return sign + String(digits);
+      const unit = SCALE[decimals + 3] ?? 1;
+      const whole = Math.floor(digits / unit);
+      const fraction = String(digits - whole * unit);
+      return sign + String(whole) + "." + "00000".slice(0, decimals - fraction.length) + fraction;
+    }
+  }
+  return String(Number(value.toPrecision(3)));
 }

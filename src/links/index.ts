@@ -11,3 +11,4 @@ export * from "./inductive-link.js";
 export * from "./kq-limit.js";
 export * from "./pad-mutual.js";
 export * from "./splitting.js";
+export * from "./lcc-splitting.js";

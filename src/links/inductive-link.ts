@@ -11,10 +11,10 @@ import {
   requireObject,
   requireOneOf,
   requirePositive,
-  voltageCaution,
   EXTRA_LOW_VOLTAGE_LIMITS,
   type Caution,
 } from "../core/index.js";
+import { extraLowVoltageCaution } from "../core/extra-low-voltage.js";
 
 /**
  * The compensation of an inductive link, primary side first: series (S), parallel (P), or the
@@ -295,8 +295,8 @@ function solveLink(
     const dd = dRe * dRe + dIm * dIm;
     const aRe = (nRe * dRe + nIm * dIm) / dd;
     const aIm = (nIm * dRe - nRe * dIm) / dd;
-    afterAbs = Math.hypot(aRe, aIm);
-    branchAbs = Math.hypot(bRe, bIm);
+    afterAbs = Math.sqrt(aRe * aRe + aIm * aIm);
+    branchAbs = Math.sqrt(bRe * bRe + bIm * bIm);
     extRe = aRe;
     extIm = aIm + xc2;
   } else if (secondaryParallel) {
@@ -343,9 +343,9 @@ function solveLink(
     const iIm = (-v * inIm) / inSq;
     const vnRe = v + w * lf1 * iIm;
     const vnIm = -w * lf1 * iRe;
-    nodeAbs = Math.hypot(vnRe, vnIm);
+    nodeAbs = Math.sqrt(vnRe * vnRe + vnIm * vnIm);
     inCurrentAbs = v / Math.sqrt(inSq);
-    i1Abs = nodeAbs / Math.hypot(bRe, bIm);
+    i1Abs = nodeAbs / Math.sqrt(bRe * bRe + bIm * bIm);
   } else if (primaryParallel) {
     const coilSq = coilRe * coilRe + coilIm * coilIm;
     c1 = givenC1 > 0 ? givenC1 : coilIm / (coilSq * w);
@@ -363,7 +363,7 @@ function solveLink(
     if (!(c1 > 0)) throw new InputError(where, "primaryCapacitance", c1, "F", "given: the branch is capacitive, so no series capacitor makes the input impedance real");
     inRe = coilRe;
     inIm = coilIm - 1 / (w * c1);
-    inCurrentAbs = v / Math.hypot(inRe, inIm);
+    inCurrentAbs = v / Math.sqrt(inRe * inRe + inIm * inIm);
     i1Abs = inCurrentAbs;
   }
   const i2Abs = (wm * i1Abs) / Math.sqrt(z2Sq);
@@ -376,7 +376,7 @@ function solveLink(
     secondaryCapacitor = { name: "secondary", capacitance: c2, voltageRms: i2Abs / (w * c2), currentRms: i2Abs };
     secondaryFilter = { name: "secondary-filter", capacitance: cf2, voltageRms: node2, currentRms: node2 * w * cf2 };
   } else if (secondaryParallel) {
-    const vLoad = i2Abs * Math.hypot(extRe, extIm);
+    const vLoad = i2Abs * Math.sqrt(extRe * extRe + extIm * extIm);
     loadCurrent = vLoad / rl;
     secondaryCapacitor = { name: "secondary", capacitance: c2, voltageRms: vLoad, currentRms: vLoad * w * c2 };
   } else {
@@ -405,11 +405,11 @@ function solveLink(
   const cautions: Caution[] = [];
   // the cautions' limit is checked here first so a safe link builds no message text
   if (worst > ELV_AC_RMS) {
-    const caution = voltageCaution({ voltage: worst, waveform: "ac", location: `${worstName} compensating capacitor` });
+    const caution = extraLowVoltageCaution(worst, "ac", `${worstName} compensating capacitor`);
     if (caution !== null) cautions.push(caution);
   }
   if (coilVoltage > ELV_AC_RMS) {
-    const coilCaution = voltageCaution({ voltage: coilVoltage, waveform: "ac", location: "primary coil" });
+    const coilCaution = extraLowVoltageCaution(coilVoltage, "ac", "primary coil");
     if (coilCaution !== null) cautions.push(coilCaution);
   }
   return {

@@ -73,3 +73,79 @@ export function solveDense(n: number, matrix: Float64Array, rhs: Float64Array): 
   }
   return true;
 }
+
+/**
+ * The LU factorisation of {@link solveDense} alone, for several right-hand sides with one
+ * matrix (chord Newton steps): `matrix` is overwritten by the factors, `pivots[k]` records the
+ * row swapped with row k. Returns false for a zero pivot. Internal kernel, no input checks.
+ *
+ * @param n - order of the system
+ * @param matrix - row-major n×n matrix, overwritten by its LU factors
+ * @param pivots - length ≥ n, receives the pivot rows
+ * @returns true when every pivot is non-zero
+ */
+export function factorDense(n: number, matrix: Float64Array, pivots: Int32Array): boolean {
+  for (let k = 0; k < n; k++) {
+    let p = k;
+    let best = Math.abs(matrix[k * n + k] ?? 0);
+    for (let i = k + 1; i < n; i++) {
+      const v = Math.abs(matrix[i * n + k] ?? 0);
+      if (v > best) {
+        best = v;
+        p = i;
+      }
+    }
+    if (!(best > 0)) return false;
+    pivots[k] = p;
+    if (p !== k) {
+      for (let c = 0; c < n; c++) {
+        const t = matrix[k * n + c] ?? 0;
+        matrix[k * n + c] = matrix[p * n + c] ?? 0;
+        matrix[p * n + c] = t;
+      }
+    }
+    const pivot = matrix[k * n + k] ?? 0;
+    for (let i = k + 1; i < n; i++) {
+      const f = (matrix[i * n + k] ?? 0) / pivot;
+      matrix[i * n + k] = f;
+      if (f === 0) continue;
+      for (let c = k + 1; c < n; c++) matrix[i * n + c] = (matrix[i * n + c] ?? 0) - f * (matrix[k * n + c] ?? 0);
+    }
+  }
+  return true;
+}
+
+/**
+ * Solves with the factors of {@link factorDense} in place (`rhs` becomes the solution); false
+ * when the solution is not finite.
+ *
+ * @param n - order of the system
+ * @param lu - the factors from factorDense
+ * @param pivots - the pivot rows from factorDense
+ * @param rhs - right-hand side, overwritten by the solution
+ * @returns true when the solution is finite
+ */
+export function solveFactored(n: number, lu: Float64Array, pivots: Int32Array, rhs: Float64Array): boolean {
+  // whole rows were swapped during the factorisation (multipliers included): permute first,
+  // then forward substitution with the unit lower factor
+  for (let k = 0; k < n; k++) {
+    const p = pivots[k] ?? k;
+    if (p !== k) {
+      const t = rhs[k] ?? 0;
+      rhs[k] = rhs[p] ?? 0;
+      rhs[p] = t;
+    }
+  }
+  for (let k = 0; k < n; k++) {
+    const rk = rhs[k] ?? 0;
+    for (let i = k + 1; i < n; i++) rhs[i] = (rhs[i] ?? 0) - (lu[i * n + k] ?? 0) * rk;
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    let s = rhs[i] ?? 0;
+    for (let c = i + 1; c < n; c++) s -= (lu[i * n + c] ?? 0) * (rhs[c] ?? 0);
+    const x = s / (lu[i * n + i] ?? 0);
+    if (!Number.isFinite(x)) return false;
+    rhs[i] = x;
+  }
+  return true;
+}

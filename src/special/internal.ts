@@ -21,3 +21,13 @@ export { exponentialIntegralE5 } from "./exponential-integral.js";
 export { solveTridiagonal } from "./tridiagonal.js";
 export { andersonStep } from "./anderson.js";
 export { splitmix32, Xoshiro128, NormalDeviates } from "./random.js";
+export {
+  polynomialValue,
+  polynomialDerivative,
+  polynomialProduct,
+  polynomialCombination,
+  polynomialTrim,
+  polynomialRealRoots,
+  polynomialRootBound,
+} from "./polynomial.js";
+export { factorDense, solveFactored } from "./dense-solve.js";

@@ -1,5 +1,5 @@
 import { bench, describe } from "vitest";
-import { inductiveLink, llcGain, llcOperatingPoint } from "../../src/index.js";
+import { inductiveLink, lccOperatingPoint, lccSplitting, llcGain, llcOperatingPoint } from "../../src/index.js";
 
 // Inputs prepared beforehand over the documented (tested) domains, fixed pseudo-random sequence.
 const N = 4096;
@@ -22,6 +22,19 @@ const links = Array.from({ length: N }, (_, i) => ({
   primaryResistance: logUniform(0.01, 1), secondaryResistance: logUniform(0.01, 1), frequency: logUniform(20e3, 7e6),
   compensation: compensations[i & 3] ?? "series-series", loadResistance: logUniform(1, 100), sourceVoltage: 10,
 })).map((o) => ({ ...o, mutualInductance: logUniform(0.01, 0.5) * Math.sqrt(o.primaryInductance * o.secondaryInductance) }));
+const cs = 25e-9;
+const frLcc = 1 / (2 * Math.PI * Math.sqrt(100e-6 * cs));
+const lccPoints = Array.from({ length: 256 }, () => ({
+  bridge: "half" as const, inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: cs,
+  parallelCapacitance: logUniform(0.25, 2) * cs, switchingFrequency: logUniform(0.6, 1.6) * frLcc,
+  loadResistance: (8 * Math.sqrt(100e-6 / cs)) / (Math.PI * Math.PI * 16 * logUniform(0.2, 2.5)),
+}));
+const splits = Array.from({ length: 64 }, (_, j) => ({
+  compensation: j % 2 === 0 ? "lcc-series" as const : "double-lcc" as const, primaryInductance: 60e-6, secondaryInductance: 40e-6,
+  mutualInductance: logUniform(0.05, 0.5) * Math.sqrt(60e-6 * 40e-6), primaryFilterInductance: logUniform(5e-6, 20e-6),
+  ...(j % 2 === 0 ? {} : { secondaryFilterInductance: logUniform(4e-6, 16e-6) }),
+  primaryResistance: 0.05, secondaryResistance: 0.05, loadResistance: logUniform(1, 20), resonantFrequency: 100e3,
+}));
 let i = 0;
 let sink = 0;
 const check = (v: number): void => {
@@ -37,6 +50,14 @@ describe("converters and links", () => {
   bench("llcOperatingPoint (tested domain, 256 points)", () => {
     i = (i + 1) & (N - 1);
     check(llcOperatingPoint(points[i & 255] ?? points[0]!).gain);
+  }, { time: 300 });
+  bench("lccOperatingPoint (tested domain, 256 points)", () => {
+    i = (i + 1) & (N - 1);
+    check(lccOperatingPoint(lccPoints[i & 255] ?? lccPoints[0]!).gain);
+  }, { time: 300 });
+  bench("lccSplitting (both LCC compensations, 64 links)", () => {
+    i = (i + 1) & (N - 1);
+    check(lccSplitting(splits[i & 63] ?? splits[0]!).criticalCoupling);
   }, { time: 300 });
   bench("inductiveLink (S/P compensations)", () => {
     i = (i + 1) & (N - 1);

@@ -77,3 +77,55 @@ describe("llcDesign properties", () => {
     );
   });
 });
+
+describe("PRC and LCC exact steady state (inductive output filter)", () => {
+  const lr = 100e-6;
+  const c = 25e-9;
+  const fr = 1 / (2 * Math.PI * Math.sqrt(lr * c));
+  const zp = Math.sqrt(lr / c);
+  const loadFor = (q: number): number => (8 * zp) / (q * Math.PI * Math.PI * 16);
+
+  it("conserves power, and the gain falls as the frequency rises above the tank's peak (PRC and LCC)", async () => {
+    const { lccOperatingPoint, parallelResonantOperatingPoint } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(fc.double({ min: 0.25, max: 2, noNaN: true }), fc.double({ min: 0.2, max: 2.5, noNaN: true }), fc.double({ min: 1.2, max: 1.6, noNaN: true }), fc.boolean(), (ratio, q, fn, lcc) => {
+        const at = (f: number) => lcc
+          ? lccOperatingPoint({ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: lr, seriesCapacitance: c, parallelCapacitance: ratio * c, switchingFrequency: f * fr * Math.sqrt(1 + 1 / ratio), loadResistance: loadFor(q) })
+          : parallelResonantOperatingPoint({ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: lr, parallelCapacitance: c, switchingFrequency: f * fr, loadResistance: loadFor(q) });
+        const a = at(fn);
+        const b = at(fn * 1.03);
+        expect(b.gain).toBeLessThan(a.gain);
+        expect(Math.abs(a.inputPower / a.outputPower - 1)).toBeLessThanOrEqual(1e-9);
+        expect(a.clampedFraction).toBeGreaterThanOrEqual(0);
+        expect(a.clampedFraction).toBeLessThan(1);
+      }),
+      { seed: 18, numRuns: 60 },
+    );
+  });
+
+  it("the LCC tends to the PRC as the series capacitor grows (C_s → ∞)", async () => {
+    const { lccOperatingPoint, parallelResonantOperatingPoint } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(fc.double({ min: 0.2, max: 2.5, noNaN: true }), fc.double({ min: 0.7, max: 1.5, noNaN: true }), (q, fn) => {
+        const common = { bridge: "half" as const, inputVoltage: 400, turnsRatio: 4, resonantInductance: lr, parallelCapacitance: c, switchingFrequency: fn * fr, loadResistance: loadFor(q) };
+        const prc = parallelResonantOperatingPoint(common);
+        const lcc = lccOperatingPoint({ ...common, seriesCapacitance: 1e6 * c });
+        expect(Math.abs(lcc.gain / prc.gain - 1)).toBeLessThanOrEqual(1e-4);
+      }),
+      { seed: 18, numRuns: 40 },
+    );
+  });
+
+  it("scaling: all impedances ×k at the same frequency ratio leave the gain unchanged; V_in ×s scales V_out by s", async () => {
+    const { lccOperatingPoint } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.8, max: 1.5, noNaN: true }), (k, s, fn) => {
+        const one = lccOperatingPoint({ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: lr, seriesCapacitance: c, parallelCapacitance: c, switchingFrequency: fn * fr, loadResistance: 20 });
+        const two = lccOperatingPoint({ bridge: "half", inputVoltage: 400 * s, turnsRatio: 4, resonantInductance: lr * k, seriesCapacitance: c / k, parallelCapacitance: c / k, switchingFrequency: fn * fr, loadResistance: 20 * k });
+        expect(Math.abs(two.gain / one.gain - 1)).toBeLessThanOrEqual(1e-9);
+        expect(Math.abs(two.outputVoltage / (s * one.outputVoltage) - 1)).toBeLessThanOrEqual(1e-9);
+      }),
+      { seed: 18, numRuns: 40 },
+    );
+  });
+});

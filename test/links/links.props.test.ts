@@ -76,3 +76,43 @@ describe("splitting properties", () => {
     );
   });
 });
+
+describe("lccSplitting properties", () => {
+  it("impedance scaling (all L and R ×s) and frequency scaling (f₀ ×a, L ÷a) leave k_c unchanged and scale the frequencies by a", async () => {
+    const { lccSplitting } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(fc.double({ min: 0.2, max: 5, noNaN: true }), fc.double({ min: 0.2, max: 5, noNaN: true }), fc.double({ min: 0.05, max: 0.6, noNaN: true }), fc.boolean(), (s, a, k, double) => {
+        const make = (zs: number, fa: number) => lccSplitting({
+          compensation: double ? "double-lcc" : "lcc-series", primaryInductance: (zs * 60e-6) / fa, secondaryInductance: (zs * 40e-6) / fa,
+          mutualInductance: (zs * k * Math.sqrt(60e-6 * 40e-6)) / fa, primaryFilterInductance: (zs * 10e-6) / fa,
+          ...(double ? { secondaryFilterInductance: (zs * 8e-6) / fa } : {}),
+          primaryResistance: zs * 0.05, secondaryResistance: zs * 0.05, loadResistance: zs * 5, resonantFrequency: fa * 100e3,
+        });
+        const one = make(1, 1);
+        const two = make(s, a);
+        expect(Math.abs(two.criticalCoupling - one.criticalCoupling)).toBeLessThanOrEqual(1e-9);
+        expect(two.zeroPhaseFrequencies.length).toBe(one.zeroPhaseFrequencies.length);
+        two.zeroPhaseFrequencies.forEach((f, i) => { expect(Math.abs(f / (a * one.zeroPhaseFrequencies[i]!) - 1)).toBeLessThanOrEqual(1e-8); });
+      }),
+      { seed: 18, numRuns: 30 },
+    );
+  });
+
+  it("below k_c the weakly coupled count of zero-phase frequencies holds; just above it a pair is born", async () => {
+    const { lccSplitting } = await import("../../src/index.js");
+    fc.assert(
+      fc.property(fc.double({ min: 1, max: 20, noNaN: true }), fc.double({ min: 5e-6, max: 20e-6, noNaN: true }), fc.boolean(), (rl, lf1, double) => {
+        const at = (k: number) => lccSplitting({
+          compensation: double ? "double-lcc" : "lcc-series", primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: k * Math.sqrt(60e-6 * 40e-6),
+          primaryFilterInductance: lf1, ...(double ? { secondaryFilterInductance: 8e-6 } : {}), primaryResistance: 0.05, secondaryResistance: 0.05,
+          loadResistance: rl, resonantFrequency: 100e3,
+        });
+        const kc = at(0.1).criticalCoupling;
+        if (kc >= 0.99) return;
+        expect(at(kc * (1 - 1e-6)).zeroPhaseFrequencies.length).toBe(at(0.1).weakCouplingCount);
+        expect(at(kc * (1 + 1e-6)).zeroPhaseFrequencies.length).toBeGreaterThan(at(0.1).weakCouplingCount);
+      }),
+      { seed: 18, numRuns: 20 },
+    );
+  });
+});

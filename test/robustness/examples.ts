@@ -556,6 +556,14 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, secondaryResistance: 0.08, loadResistance: 5, resonantFrequency: 100e3 }],
     allow: [{ paths: ["0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (a lossless secondary coil)" }],
   },
+  lccSplitting: {
+    args: () => [{ compensation: "lcc-series", primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryFilterInductance: 10e-6, primaryResistance: 0.05, secondaryResistance: 0.05, loadResistance: 5, resonantFrequency: 100e3 }],
+    variants: [() => [{ compensation: "double-lcc", primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryFilterInductance: 10e-6, secondaryFilterInductance: 8e-6, primaryResistance: 0.05, secondaryResistance: 0.05, loadResistance: 5, resonantFrequency: 100e3 }]],
+    allow: [
+      { paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" },
+      { paths: ["0.secondaryFilterInductance"], kinds: ["undefined"], reason: "only for double-lcc (absent in the lcc-series example)" },
+    ],
+  },
   linkFrequencySweep: {
     args: () => [{ primaryInductance: 60e-6, secondaryInductance: 40e-6, mutualInductance: 14.7e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 100e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }, [90e3, 100e3, 115e3]],
     allow: [{ paths: ["0.primaryResistance", "0.secondaryResistance"], kinds: ["zero"], reason: "domain ≥ 0 (lossless coils)" }],
@@ -582,6 +590,12 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   seriesResonantOperatingPoint: {
     args: () => [{ bridge: "full", inputVoltage: 48, turnsRatio: 2, resonantInductance: 20e-6, resonantCapacitance: 100e-9, switchingFrequency: 130e3, loadResistance: 6 }],
     nonFinite: { inductanceRatio: "no magnetising branch: L_m/L_r is infinite by definition (documented)" },
+  },
+  parallelResonantOperatingPoint: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, parallelCapacitance: 25e-9, switchingFrequency: 110e3, loadResistance: 12 }],
+  },
+  lccOperatingPoint: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: 25e-9, parallelCapacitance: 25e-9, switchingFrequency: 150e3, loadResistance: 12 }],
   },
   inductiveLink: {
     args: () => [{ primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }],

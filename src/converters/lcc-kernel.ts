@@ -1,0 +1,416 @@
+/**
+ * The exact periodic steady state of the ideal LCC (series–parallel) and parallel-resonant
+ * converters with an inductive output filter, in normalised units. Internal: the public
+ * wrappers check the input and scale the result.
+ *
+ * Units: voltages in the bridge amplitude $V_b$, currents in $V_b/Z_p$ with
+ * $Z_p = \sqrt{L_r/C_p}$, time $\theta = t/\sqrt{L_rC_p}$. States: $j$ (resonant current), $u$
+ * (series capacitor voltage), $v$ (parallel capacitor voltage, the rectifier's input). The
+ * output inductor is stiff: the rectifier sinks the constant current $k = I_\mathrm{out}Z_p/(nV_b)$
+ * with the sign of $v$. With $a = C_p/C_s$ (0: parallel resonant, no series capacitor), in the
+ * positive half period (bridge $+1$) there are three circuit modes:
+ * - P ($v > 0$), N ($v < 0$): $j' = 1 - u - v$, $u' = a j$, $v' = j \mp k$;
+ * - Z ($v = 0$, $|j| < k$, all four diodes conduct and clamp $C_p$): $j' = 1 - u$, $u' = aj$.
+ *
+ * The output is $M = nV_\mathrm{out}/V_b = \langle|v|\rangle$ and $k = \zeta M$,
+ * $\zeta = Z_p/(n^2R_\mathrm{load})$. The half-wave antisymmetric steady state
+ * $x(\Theta) = -x(0)$, $\Theta = \pi f_p/f_s$, $f_p = 1/(2\pi\sqrt{L_rC_p})$, with
+ * $\frac1\Theta\int_0^\Theta|v|\,d\theta = M$ is solved by Newton's method (finite-difference
+ * Jacobian, backtracking) on $(j_0, u_0, v_0, M)$ through an exact event-driven propagation:
+ * each mode has a closed-form solution (sinusoid plus ramp) and each mode change is the first
+ * crossing of such a function, found by {@link firstDownCrossing}.
+ *
+ * @packageDocumentation
+ */
+import { solveDense } from "../special/index.js";
+import { firstDownCrossing, sinusoidPeak, squareIntegral } from "./llc-kernel.js";
+
+const MODE_Z = 0;
+const MODE_P = 1;
+const MODE_N = 2;
+const LETTER = ["Z", "P", "N"] as const;
+const MAX_SEGMENTS = 64;
+
+/** The solved steady state, normalised. */
+export interface LccSteadyState {
+  gain: number;
+  j0: number;
+  u0: number;
+  v0: number;
+  /** Mode sequence of the positive half period ("NP", "ZP", "NZP", …). */
+  sequence: string;
+  durations: number[];
+  resonantRms: number;
+  resonantPeak: number;
+  seriesPeak: number;
+  parallelPeak: number;
+  parallelRms: number;
+  /** Fraction of the period with C_p clamped (mode Z). */
+  clampedFraction: number;
+  /** Mean of j over the positive half period (input current, units V_b/Z_p). */
+  inputMean: number;
+  residual: number;
+}
+
+const st = new Float64Array(3);
+let evCount = 0;
+let evOverflow = false;
+const evMode = new Int32Array(MAX_SEGMENTS);
+const evTau = new Float64Array(MAX_SEGMENTS);
+let evAbsV = 0;
+let evJ = 0;
+let evJ2 = 0;
+let evV2 = 0;
+let evPeakJ = 0;
+let evPeakU = 0;
+let evPeakV = 0;
+let evClamped = 0;
+
+function startMode(j: number, v: number, u: number, k: number): number {
+  const tol = 1e-13 * (1 + Math.abs(j) + Math.abs(v));
+  if (v > tol) return MODE_P;
+  if (v < -tol) return MODE_N;
+  if (j > k + tol) return MODE_P;
+  if (j < -k - tol) return MODE_N;
+  // at |j| = k the slope j' = 1 − u decides
+  if (j >= k - tol && 1 - u > 0) return MODE_P;
+  if (j <= -k + tol && 1 - u < 0) return MODE_N;
+  return MODE_Z;
+}
+
+/** Largest |y| on [0, τ] for y = y0 + Y(t) given by extremum search through roots of y' (a sinusoid plus constant). */
+function peakOfRampSinusoid(A: number, B: number, C: number, D: number, w: number, tau: number): number {
+  // y = A cos wt + B sin wt + C + D t; y' = −Aw sin + Bw cos + D = 0
+  const hv = (t: number): number => A * Math.cos(w * t) + B * Math.sin(w * t) + C + D * t;
+  let best = Math.max(Math.abs(hv(0)), Math.abs(hv(tau)));
+  const R = w * Math.hypot(A, B);
+  if (!(R > 0) || Math.abs(D) >= R) return best;
+  // Bw cos − Aw sin = R cos(wt + φ), φ = atan2(A, B)
+  const phi = Math.atan2(A, B);
+  const g = Math.acos(-D / R);
+  const period = (2 * Math.PI) / w;
+  for (const base of [g - phi, -g - phi]) {
+    let t = base / w;
+    t -= Math.floor(t / period) * period;
+    for (let n = 0; t <= tau && n < 100000; n++) {
+      best = Math.max(best, Math.abs(hv(t)));
+      t += period;
+    }
+  }
+  return best;
+}
+
+/**
+ * Propagates the positive half period from (j, u, v) with gain m; fills the event record and,
+ * with `record`, the waveform integrals. End state in `st`.
+ */
+function propagate(j0: number, u0: number, v0: number, m: number, a: number, zeta: number, theta: number, record: boolean): void {
+  const k = zeta * m;
+  let j = j0;
+  let u = u0;
+  let v = v0;
+  let t = 0;
+  evCount = 0;
+  evOverflow = false;
+  evAbsV = 0;
+  evJ = 0;
+  evJ2 = 0;
+  evV2 = 0;
+  evPeakJ = 0;
+  evPeakU = 0;
+  evPeakV = 0;
+  evClamped = 0;
+  let mode = startMode(j, v, u, k);
+  const w = Math.sqrt(1 + a);
+  while (t < theta) {
+    if (evCount >= MAX_SEGMENTS) {
+      evOverflow = true;
+      break;
+    }
+    const remaining = theta - t;
+    let tau: number;
+    let next = mode;
+    if (mode === MODE_Z) {
+      // j' = 1 − u, u' = a j, v = 0
+      let hitUp: number;
+      let hitDown: number;
+      const wz = Math.sqrt(a);
+      const s0 = 1 - u;
+      if (a > 0) {
+        const al = j;
+        const be = s0 / wz;
+        hitUp = firstDownCrossing(-al, -be, k, 0, wz, remaining); // k − j
+        hitDown = firstDownCrossing(al, be, k, 0, wz, remaining); // j + k
+      } else {
+        hitUp = firstDownCrossing(0, 0, k - j, -s0, 1, remaining);
+        hitDown = firstDownCrossing(0, 0, k + j, s0, 1, remaining);
+      }
+      tau = Math.min(hitUp, hitDown, remaining);
+      if (tau < remaining) next = hitUp <= hitDown ? MODE_P : MODE_N;
+      let jEnd: number;
+      let uEnd: number;
+      if (a > 0) {
+        const c = Math.cos(wz * tau);
+        const s = Math.sin(wz * tau);
+        jEnd = j * c + (s0 / wz) * s;
+        uEnd = 1 - s0 * c + j * wz * s;
+        if (record) {
+          const al = j;
+          const be = s0 / wz;
+          evJ += (al * s + be * (1 - c)) / wz;
+          evJ2 += squareIntegral(al, be, wz * tau) / wz;
+          evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, al, be, wz, tau));
+          evPeakU = Math.max(evPeakU, sinusoidPeak(1, -s0, j * wz, wz, tau));
+        }
+      } else {
+        jEnd = j + s0 * tau;
+        uEnd = u;
+        if (record) {
+          evJ += j * tau + 0.5 * s0 * tau * tau;
+          evJ2 += j * j * tau + j * s0 * tau * tau + (s0 * s0 * tau * tau * tau) / 3;
+          evPeakJ = Math.max(evPeakJ, Math.abs(j), Math.abs(jEnd));
+          evPeakU = Math.max(evPeakU, Math.abs(u));
+        }
+      }
+      if (record) evClamped += tau;
+      if (tau < remaining) jEnd = next === MODE_P ? k : -k;
+      j = jEnd;
+      u = uEnd;
+      v = 0;
+    } else {
+      const sg = mode === MODE_P ? 1 : -1;
+      const c0 = sg * k;
+      const jInf = c0 / (1 + a);
+      const d0 = 1 - u - v;
+      const al = j - jInf;
+      const be = d0 / w;
+      // v(t) = A cos wt + B sin wt + C + D t
+      const A = -d0 / (w * w);
+      const B = al / w;
+      const C = v + d0 / (w * w);
+      const D = jInf - c0;
+      const root = firstDownCrossing(sg * A, sg * B, sg * C, sg * D, w, remaining);
+      tau = Math.min(root, remaining);
+      const c = Math.cos(w * tau);
+      const s = Math.sin(w * tau);
+      const integ = jInf * tau + (al * s) / w + (d0 * (1 - c)) / (w * w);
+      const jEnd = jInf + al * c + be * s;
+      const uEnd = u + a * integ;
+      let vEnd = v + integ - c0 * tau;
+      if (root < remaining) {
+        vEnd = 0;
+        next = jEnd < -k ? MODE_N : jEnd > k ? MODE_P : MODE_Z;
+        if (next === mode) next = MODE_Z;
+      }
+      // ∫v over the segment
+      const intI = 0.5 * jInf * tau * tau + (al * (1 - c)) / (w * w) + (d0 * (tau - s / w)) / (w * w);
+      const intV = v * tau + intI - 0.5 * c0 * tau * tau;
+      evAbsV += sg * intV;
+      if (record) {
+        evJ += integ;
+        evJ2 += jInf * jInf * tau + 2 * jInf * ((al * s) / w + (be * (1 - c)) / w) + squareIntegral(al, be, w * tau) / w;
+        evPeakJ = Math.max(evPeakJ, sinusoidPeak(jInf, al, be, w, tau));
+        // u = u + a I(t) = (u + a d0/w²) + a jInf t + (a al/w) sin − (a d0/w²) cos
+        evPeakU = Math.max(evPeakU, peakOfRampSinusoid((-a * d0) / (w * w), (a * al) / w, u + (a * d0) / (w * w), a * jInf, w, tau));
+        evPeakV = Math.max(evPeakV, peakOfRampSinusoid(A, B, C, D, w, tau));
+        evV2 += squareOfRampSinusoid(A, B, C, D, w, tau);
+      }
+      j = jEnd;
+      u = uEnd;
+      v = vEnd;
+    }
+    evMode[evCount] = mode;
+    evTau[evCount] = tau;
+    evCount++;
+    t += tau;
+    if (tau >= remaining) break;
+    mode = next;
+  }
+  st[0] = j;
+  st[1] = u;
+  st[2] = v;
+}
+
+/** ∫_0^τ (A cos wt + B sin wt + C + D t)² dt in closed form. */
+function squareOfRampSinusoid(A: number, B: number, C: number, D: number, w: number, tau: number): number {
+  const c = Math.cos(w * tau);
+  const s = Math.sin(w * tau);
+  const osc = squareIntegral(A, B, w * tau) / w;
+  const lin = C * C * tau + C * D * tau * tau + (D * D * tau * tau * tau) / 3;
+  // 2 ∫ (C + D t)(A cos wt + B sin wt) dt
+  const intCos = s / w;
+  const intSin = (1 - c) / w;
+  const intTCos = (tau * s) / w + (c - 1) / (w * w);
+  const intTSin = (-tau * c) / w + s / (w * w);
+  const cross = 2 * (C * (A * intCos + B * intSin) + D * (A * intTCos + B * intTSin));
+  return osc + lin + cross;
+}
+
+const y = new Float64Array(4);
+const trial = new Float64Array(4);
+const r = new Float64Array(4);
+const rTrial = new Float64Array(4);
+const jac = new Float64Array(16);
+const step = new Float64Array(4);
+
+function residuals(x: Float64Array, a: number, zeta: number, theta: number, out: Float64Array): boolean {
+  const m = x[3] ?? 0;
+  if (!(m > 0)) return false;
+  propagate(x[0] ?? 0, x[1] ?? 0, x[2] ?? 0, m, a, zeta, theta, false);
+  if (evOverflow) return false;
+  out[0] = (st[0] ?? 0) + (x[0] ?? 0);
+  out[1] = (st[1] ?? 0) + (x[1] ?? 0);
+  out[2] = (st[2] ?? 0) + (x[2] ?? 0);
+  out[3] = evAbsV / theta / m - 1;
+  return Number.isFinite(out[0] + out[1] + out[2] + out[3]);
+}
+
+function norm4(v: Float64Array, scale: number): number {
+  return Math.max(Math.abs(v[0] ?? 0) / scale, Math.abs(v[1] ?? 0) / scale, Math.abs(v[2] ?? 0) / scale, Math.abs(v[3] ?? 0));
+}
+
+/** Newton from the state in `y`; returns the final residual norm. */
+function newton(a: number, zeta: number, theta: number): number {
+  if (!residuals(y, a, zeta, theta, r)) return Infinity;
+  const scale = Math.max(1, Math.abs(y[0] ?? 0), Math.abs(y[1] ?? 0), Math.abs(y[2] ?? 0));
+  let rn = norm4(r, scale);
+  for (let it = 0; it < 60 && rn > 1e-14; it++) {
+    for (let col = 0; col < 4; col++) {
+      const base = y[col] ?? 0;
+      const h = 1e-7 * (col < 3 ? scale : Math.max(base, 1e-3));
+      y[col] = base + h;
+      const ok = residuals(y, a, zeta, theta, rTrial);
+      y[col] = base;
+      if (!ok) return Infinity;
+      for (let i = 0; i < 4; i++) jac[i * 4 + col] = ((rTrial[i] ?? 0) - (r[i] ?? 0)) / h;
+    }
+    for (let i = 0; i < 4; i++) step[i] = -(r[i] ?? 0);
+    if (!solveDense(4, jac, step)) return Infinity;
+    let lambda = 1;
+    let accepted = false;
+    for (let back = 0; back < 40; back++) {
+      for (let i = 0; i < 4; i++) trial[i] = (y[i] ?? 0) + lambda * (step[i] ?? 0);
+      if ((trial[3] ?? 0) > 0.1 * (y[3] ?? 0) && residuals(trial, a, zeta, theta, rTrial)) {
+        const tn = norm4(rTrial, scale);
+        if (tn < rn) {
+          y.set(trial);
+          r.set(rTrial);
+          rn = tn;
+          accepted = true;
+          break;
+        }
+      }
+      lambda *= 0.5;
+    }
+    if (!accepted) break;
+  }
+  return rn;
+}
+
+/**
+ * First-harmonic solution (phasors, bridge fundamental (4/π) sin(νθ), ν = π/Θ), normalised:
+ * out = [j(0), u(0), v(0), M, |J|, |U|, |V|, j(Θ), phase-free |I_in| …].
+ */
+export function lccFirstHarmonic(a: number, zeta: number, theta: number, out: Float64Array): void {
+  const nu = Math.PI / theta;
+  const rac = (Math.PI * Math.PI) / (8 * zeta); // R_ac / Z_p
+  // Z_par = R ∥ (−j/ν): admittance 1/R + jν
+  const yr = 1 / rac;
+  const yi = nu;
+  const den = yr * yr + yi * yi;
+  const zpr = yr / den;
+  const zpi = -yi / den;
+  const ztr = zpr;
+  const zti = zpi + nu - a / nu;
+  const v1 = 4 / Math.PI;
+  const zt2 = ztr * ztr + zti * zti;
+  const ir = (v1 * ztr) / zt2;
+  const ii = (-v1 * zti) / zt2;
+  const vr = ir * zpr - ii * zpi;
+  const vi = ir * zpi + ii * zpr;
+  // U = I · (−j a/ν)
+  const ur = (ii * a) / nu;
+  const ui = (-ir * a) / nu;
+  out[0] = ii;
+  out[1] = ui;
+  out[2] = vi;
+  out[3] = (2 / Math.PI) * Math.hypot(vr, vi);
+  out[4] = Math.hypot(ir, ii);
+  out[5] = Math.hypot(ur, ui);
+  out[6] = Math.hypot(vr, vi);
+  out[7] = -ii;
+}
+
+const fhaScratch = new Float64Array(8);
+
+function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: number, theta: number): number {
+  y[0] = j;
+  y[1] = u;
+  y[2] = v;
+  y[3] = m;
+  return newton(a, zeta, theta);
+}
+
+/** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */
+export const LCC_TOLERANCE = 1e-10;
+
+/**
+ * Solves the steady state for a = C_p/C_s ≥ 0, ζ = Z_p/(n²R) > 0 and half period Θ > 0
+ * (normalised). Returns null when no consistent periodic solution was found.
+ */
+export function lccSteadyState(a: number, zeta: number, theta: number): LccSteadyState | null {
+  lccFirstHarmonic(a, zeta, theta, fhaScratch);
+  let res = tryFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta);
+  if (!(res < LCC_TOLERANCE)) {
+    // relax: forward half periods with the gain updated from the rectified mean, then Newton
+    let j = fhaScratch[0] ?? 0;
+    let u = fhaScratch[1] ?? 0;
+    let v = fhaScratch[2] ?? 0;
+    let m = fhaScratch[3] ?? 1;
+    for (let i = 0; i < 400; i++) {
+      propagate(j, u, v, m, a, zeta, theta, false);
+      if (evOverflow) break;
+      j = -(st[0] ?? 0);
+      u = -(st[1] ?? 0);
+      v = -(st[2] ?? 0);
+      const mean = evAbsV / theta;
+      if (mean > 0) m = 0.5 * m + 0.5 * mean;
+    }
+    res = tryFrom(j, u, v, m, a, zeta, theta);
+    if (!(res < LCC_TOLERANCE)) return null;
+  }
+  const m = y[3] ?? 0;
+  const j0 = y[0] ?? 0;
+  const u0 = y[1] ?? 0;
+  const v0 = y[2] ?? 0;
+  propagate(j0, u0, v0, m, a, zeta, theta, true);
+  let sequence = "";
+  const durations: number[] = [];
+  for (let i = 0; i < evCount; i++) {
+    const tau = evTau[i] ?? 0;
+    if (tau <= 1e-9 * theta) continue;
+    const letter = LETTER[evMode[i] ?? 0] ?? "?";
+    if (sequence.endsWith(letter)) {
+      durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
+      continue;
+    }
+    sequence += letter;
+    durations.push(tau);
+  }
+  return {
+    gain: m,
+    j0,
+    u0,
+    v0,
+    sequence,
+    durations,
+    resonantRms: Math.sqrt(evJ2 / theta),
+    resonantPeak: evPeakJ,
+    seriesPeak: evPeakU,
+    parallelPeak: evPeakV,
+    parallelRms: Math.sqrt(Math.max(0, evV2) / theta),
+    clampedFraction: evClamped / theta,
+    inputMean: evJ / theta,
+    residual: res,
+  };
+}
