@@ -21,3 +21,15 @@ export type {
   FieldShape,
   SolveAxisymmetricFieldOptions,
 } from "./solve-axisymmetric-field.js";
+export { axisymmetricHeatConduction } from "./axisymmetric-conduction.js";
+export type {
+  AxisymmetricHeatConductionOptions,
+  AxisymmetricHeatConductionResult,
+  PartCells,
+  PartEnergyBalance,
+  PartFace,
+  PartGenerationRequest,
+  PartGrid,
+  PartSurfaceExchange,
+  PartTemperatureMap,
+} from "./axisymmetric-conduction.js";
