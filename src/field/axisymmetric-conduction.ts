@@ -238,13 +238,13 @@ export function checkPartRectangle(where: string, path: string, value: unknown):
 }
 
 /** Checks the cell counts. */
-export function checkPartCells(where: string, value: unknown): PartCells {
+export function checkPartCells(where: string, value: unknown, path = "cells"): PartCells {
   if (value === undefined) return { radial: 16, axial: 16 };
-  const o = requireKnownKeys(where, "cells", requireObject(where, "cells", value), CELL_KEYS);
-  const radial = requireInteger(where, "cells.radial", o.radial, 2);
-  const axial = requireInteger(where, "cells.axial", o.axial, 1);
-  if (radial > 200) throw new InputError(where, "cells.radial", radial, "", "an integer 2 … 200");
-  if (axial > 200) throw new InputError(where, "cells.axial", axial, "", "an integer 1 … 200");
+  const o = requireKnownKeys(where, path, requireObject(where, path, value), CELL_KEYS);
+  const radial = requireInteger(where, `${path}.radial`, o.radial, 2);
+  const axial = requireInteger(where, `${path}.axial`, o.axial, 1);
+  if (radial > 200) throw new InputError(where, `${path}.radial`, radial, "", "an integer 2 … 200");
+  if (axial > 200) throw new InputError(where, `${path}.axial`, axial, "", "an integer 1 … 200");
   return { radial, axial };
 }
 
@@ -370,10 +370,10 @@ export function partEdges(shape: FieldRectangle, cells: PartCells, insulated: Se
 }
 
 /** Reads the thermal options common to both public functions. */
-export function readConductionSetup(where: string, o: Record<string, unknown>): ConductionSetup {
-  const shape = checkPartRectangle(where, "shape" in o && o.shape !== undefined ? "shape" : "part.shape", o.shape);
-  const material = checkConductiveMaterial(where, "material", o.material);
-  const cells = checkPartCells(where, o.cells);
+export function readConductionSetup(where: string, o: Record<string, unknown>, part: Record<string, unknown> = o, prefix = ""): ConductionSetup {
+  const shape = checkPartRectangle(where, `${prefix}shape`, part.shape);
+  const material = checkConductiveMaterial(where, `${prefix}material`, part.material);
+  const cells = checkPartCells(where, part.cells, `${prefix}cells`);
   const surface = checkPartSurface(where, o.surface);
   const insulated = checkInsulatedFaces(where, o.insulatedFaces);
   const initial = o.initialTemperature === undefined ? surface.ambientTemperature : requirePositive(where, "initialTemperature", o.initialTemperature, "K");

@@ -33,3 +33,5 @@ export type {
   PartSurfaceExchange,
   PartTemperatureMap,
 } from "./axisymmetric-conduction.js";
+export { fieldHeatUp } from "./field-heat-up.js";
+export type { FieldHeatUpOptions, FieldHeatUpResult, FieldHeatUpSolution, FieldHeatedPart } from "./field-heat-up.js";
