@@ -301,7 +301,7 @@ export interface MaterialTables {
   readonly k: Float64Array;
 }
 
-/** Builds the material tables from tMin to tMax (extended as needed by the readers). */
+/** Builds the material tables from tMin to tMax (the readers extrapolate the enthalpy linearly and hold the conductivity beyond). */
 export function materialTables(material: ConductiveMaterial, tMin: number, tMax: number): MaterialTables {
   const t0 = Math.max(1, Math.floor(tMin) - 2);
   const n = Math.ceil((tMax + 2 - t0) / TABLE_STEP) + 2;
@@ -409,7 +409,10 @@ export function runConduction(
   const hConv = surface.convectionCoefficient;
   const eps = surface.emissivity;
   const melting = material.meltingTemperature;
-  let tab = materialTables(material, Math.min(initial, ambient), Math.max(initial, ambient, melting) + 200);
+  // The property functions hold their end values outside the material's documented range, so
+  // beyond the table's top the enthalpy is linear (extrapolated with the last slope, exact) and
+  // the conductivity constant: one table up to the top of the range serves any temperature.
+  const tab = materialTables(material, Math.min(initial, ambient, material.temperatureRange.min), Math.max(initial, ambient, material.temperatureRange.max));
 
   // geometry: volumes, face conductance factors (conductance = factor / Σ(d/k) form)
   const volume = new Float64Array(n);
@@ -562,10 +565,6 @@ export function runConduction(
       genTotal += g;
     }
     if (time + dt > duration) dt = duration - time;
-    let hottestCell = 0;
-    for (let c = 0; c < n; c++) hottestCell = Math.max(hottestCell, T[c]!);
-    // keep the tables well above the hottest cell (same origin, so enthalpies stay comparable)
-    if (hottestCell + 4 * temperatureStep + 100 > tab.t0 + tab.step * (tab.h.length - 3)) tab = materialTables(material, tab.t0 + 2, 1.5 * hottestCell + 500);
     Told.set(T);
     for (let c = 0; c < n; c++) {
       enthalpy(tab, T[c]!, eh);

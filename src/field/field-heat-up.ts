@@ -37,7 +37,7 @@ export interface FieldHeatedPart {
   readonly shape: FieldRectangle;
   /** Material: ρ(T), μr(T, H) through the Curie point, density, c(T), k(T), melting temperature. */
   readonly material: ConductiveMaterial;
-  /** Cells across the part (conduction cells and field property zones); default `{ radial: 8, axial: 8 }`. */
+  /** Cells across the part (conduction cells and field property zones): at most 40 each way and 400 in all; default `{ radial: 8, axial: 8 }`. */
   readonly cells?: PartCells;
 }
 
@@ -138,8 +138,13 @@ const PART_KEYS = ["name", "shape", "material", "cells"] as const;
 /** Gauss–Legendre points on [0, 1]: 3 across r, 2 along z (where a cell's field strength is sampled). */
 const GAUSS_3 = [0.5 - Math.sqrt(0.15), 0.5, 0.5 + Math.sqrt(0.15)];
 const GAUSS_2 = [0.5 - 0.5 / Math.sqrt(3), 0.5 + 0.5 / Math.sqrt(3)];
+/** Most cells of the part along r or z, and in all (each is a body of the field problem). */
+const MAX_CELLS_ALONG = 40;
+const MAX_CELLS = 400;
 /** Densest mesh the starting refinement goes to. */
 const MAX_DENSITY = 4;
+/** Largest field mesh the starting refinement goes to (lattice nodes; the next is predicted at about twice). */
+const MAX_NODES = 300_000;
 /** Finite-element solves per field solution at most (permeability iterations; the first solution gets three times as many). */
 const PERMEABILITY_ITERATIONS = 2;
 /** Stop the permeability iteration when the field-weighted relative change is below this. */
@@ -211,7 +216,10 @@ export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
   const o = requireKnownKeys(WHERE, "", requireObject(WHERE, "options", options), KNOWN) as unknown as Record<string, unknown>;
   const part = requireKnownKeys(WHERE, "part", requireObject(WHERE, "part", o.part), PART_KEYS);
   if (typeof part.name !== "string" || part.name === "") throw new InputError(WHERE, "part.name", part.name, "", "a non-empty name");
-  const setup = readConductionSetup(WHERE, o, { ...part, cells: part.cells ?? { radial: 8, axial: 8 } }, "part.");
+  const setup = readConductionSetup(WHERE, o, { ...part, cells: part.cells === undefined ? { radial: 8, axial: 8 } : part.cells }, "part.");
+  if (setup.cells.radial > MAX_CELLS_ALONG || setup.cells.axial > MAX_CELLS_ALONG || setup.cells.radial * setup.cells.axial > MAX_CELLS) {
+    throw new InputError(WHERE, "part.cells", `${setup.cells.radial} × ${setup.cells.axial}`, "", `at most ${MAX_CELLS_ALONG} each way and ${MAX_CELLS} in all (each cell is a region of the field problem)`);
+  }
   const resolveStep = o.resolveStep === undefined ? 40 : requirePositive(WHERE, "resolveStep", o.resolveStep, "K");
   const accuracy = o.accuracy === undefined ? 1e-2 : (o.accuracy as number);
   if (typeof accuracy !== "number" || !(accuracy >= 1e-3 && accuracy <= 0.1)) {
@@ -340,7 +348,7 @@ export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
     const finer = solveOnce(problem, { density: density * Math.SQRT2 });
     fieldIterations++;
     estimatedError = 2 * impedanceChange(sol, finer);
-    if (estimatedError <= accuracy || density * 2 > MAX_DENSITY * 1.0001) break;
+    if (estimatedError <= accuracy || density * 2 > MAX_DENSITY * 1.0001 || 2.2 * finer.nodes > MAX_NODES) break;
     density *= Math.SQRT2;
     sol = finer;
   }

@@ -110,5 +110,9 @@ describe("fieldHeatUp: heat-up through the Curie point", () => {
     expect(() => fieldHeatUp({ ...good, regions: {} as never })).toThrow(InputError);
     expect(() => fieldHeatUp({ ...good, resolvStep: 3 } as never)).toThrow(InputError);
     expect(() => fieldHeatUp({ ...good, part: { ...good.part, colour: 1 } as never })).toThrow(InputError);
+    expect(() => fieldHeatUp({ ...good, part: { ...good.part, cells: { radial: 41, axial: 2 } } })).toThrow(InputError);
+    expect(() => fieldHeatUp({ ...good, part: { ...good.part, cells: { radial: 30, axial: 30 } } })).toThrow(InputError);
+    expect(() => fieldHeatUp({ ...good, part: { ...good.part, cells: { radial: 1, axial: 2 } } })).toThrow(InputError);
+    expect(() => fieldHeatUp({ ...good, part: { ...good.part, cells: null as never } })).toThrow(InputError);
   });
 });
