@@ -428,8 +428,9 @@ export function runConduction(
   const logIn = new Float64Array(nr); // ln(rc_i / r_i) (inner half of cell i); 0-radius inner edge: none
   const logOut = new Float64Array(nr); // ln(r_{i+1} / rc_i)
   for (let i = 0; i < nr; i++) {
-    logIn[i] = rEdges[i]! > 0 ? Math.log(rc[i]! / rEdges[i]!) : 0;
-    logOut[i] = Math.log(rEdges[i + 1]! / rc[i]!);
+    // as differences of logarithms: a bore of a denormal radius must not overflow the ratio
+    logIn[i] = rEdges[i]! > 0 ? Math.log(rc[i]!) - Math.log(rEdges[i]!) : 0;
+    logOut[i] = Math.log(rEdges[i + 1]!) - Math.log(rc[i]!);
   }
   // sparse pattern: 5-point stencil on the nr × nz lattice, both triangles, columns in row order
   const colStart = new Int32Array(n + 1);
@@ -487,6 +488,13 @@ export function runConduction(
   const faceOut = new Float64Array(2);
   const faceFlow = (f: Face, tc: number, k: number, slot: number): void => {
     const g = k / f.geo; // conductance centre → face [W/K]
+    if (!(g > 0) || !(f.area > 0)) {
+      // a face of no area (a bore of vanishing radius) passes no heat
+      faceTemp[slot] = tc;
+      faceOut[0] = 0;
+      faceOut[1] = 0;
+      return;
+    }
     let ts = faceTemp[slot]! > 0 ? faceTemp[slot]! : tc;
     let hp = 0;
     for (let it = 0; it < 30; it++) {
@@ -799,7 +807,7 @@ export function runConduction(
  *   powerDensity: 2e6,
  *   duration: 60,
  * });
- * console.log(run.meanTemperature[run.meanTemperature.length - 1]!.toFixed(0)); // ≈ 322
+ * console.log(run.meanTemperature[run.meanTemperature.length - 1]!.toFixed(0)); // 327
  * ```
  * @category Field
  */

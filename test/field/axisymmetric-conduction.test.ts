@@ -38,7 +38,7 @@ function at(p: { r: number[]; t: number[] }, r: number): number {
 
 describe("axisymmetricHeatConduction: long cylinder with uniform generation and a convective surface (Carslaw & Jaeger §7.9 series, fixture test/fixtures/thermal/generate_carslaw_jaeger.py)", () => {
   const cases = cj.cases.filter((c) => c.kind === "generation");
-  it.each(cases.map((c) => [c.label, c] as const))("%s: core, mid-radius and surface within 1 % of the surface rise", (_label, c) => {
+  it.each(cases.map((c) => [c.label, c] as const))("%s: core, mid-radius and surface within 0.5 % of the surface rise", (_label, c) => {
     const run = axisymmetricHeatConduction({
       shape: { kind: "rectangle", rMin: 0, rMax: c.radius, zMin: 0, zMax: 0.05 },
       material: constantMaterial(c.thermalConductivity, c.density, c.specificHeat),
@@ -50,7 +50,7 @@ describe("axisymmetricHeatConduction: long cylinder with uniform generation and 
     });
     const p = profile(run, 0);
     const scale = c.surface;
-    const tol = 0.01 * scale; // the accuracy stated in the TSDoc
+    const tol = 0.005 * scale; // the accuracy stated in the TSDoc (measured: 3e-3)
     expect(Math.abs(run.surfaceTemperature.at(-1)! - ambient - c.surface)).toBeLessThan(tol);
     expect(Math.abs(at(p, 0) - ambient - c.core)).toBeLessThan(tol);
     expect(Math.abs(at(p, c.radius / 2) - ambient - c.middle)).toBeLessThan(tol);
@@ -103,9 +103,9 @@ describe("axisymmetricHeatConduction: finite cylinder cooling on every face (Car
     }
     return e;
   };
-  it.each(fc.cases.map((c) => [c.fourier, c] as const))("Fo = %s: every cell within 1 % of θ0, the mean within 0.5 %", (_fo, c) => {
+  it.each(fc.cases.map((c) => [c.fourier, c] as const))("Fo = %s: every cell and the mean within 0.5 % of θ0", (_fo, c) => {
     const res = run(c.time);
-    expect(cellError(res, c.ratio)).toBeLessThan(0.01);
+    expect(cellError(res, c.ratio)).toBeLessThan(0.005); // measured ≤ 3.4e-3
     const meanRatio = (res.meanTemperature.at(-1)! - ambient) / (initial - ambient);
     expect(Math.abs(meanRatio - c.meanRatio)).toBeLessThan(0.005);
     // cooling only: the heat lost equals the enthalpy given up
@@ -140,6 +140,17 @@ describe("axisymmetricHeatConduction: input checks", () => {
     expect(() =>
       axisymmetricHeatConduction({ ...rest, generationAt: (q) => { q.generation[0] = Number.NaN; } }),
     ).toThrow(InputError);
+  });
+  it("a bore of denormal radius gives finite results (pinned fast-check counterexample)", () => {
+    const res = axisymmetricHeatConduction({
+      ...good,
+      shape: { kind: "rectangle", rMin: 2.5e-324, rMax: 0.03125, zMin: 0, zMax: 0.01 },
+      surface: { convectionCoefficient: 0, emissivity: 0, ambientTemperature: 293.15 },
+      powerDensity: 1e7,
+      duration: 2,
+    });
+    expect(Number.isFinite(res.meanTemperature.at(-1)!)).toBe(true);
+    expect(Math.abs(res.energy.imbalance)).toBeLessThan(1e-6 * res.energy.input);
   });
   it("reports a part above its melting temperature with a caution", () => {
     const res = axisymmetricHeatConduction({ ...good, powerDensity: 5e9, duration: 4 });
