@@ -814,7 +814,7 @@ export function runConduction(
  * @category Field
  */
 export function axisymmetricHeatConduction(options: AxisymmetricHeatConductionOptions): AxisymmetricHeatConductionResult {
-  const o = requireKnownKeys(WHERE, "", requireObject(WHERE, "options", options), KNOWN) as unknown as Record<string, unknown>;
+  const o = requireKnownKeys(WHERE, "", requireObject(WHERE, "options", options), KNOWN);
   const setup = readConductionSetup(WHERE, o);
   const hasDensity = o.powerDensity !== undefined;
   const hasCallback = o.generationAt !== undefined;
@@ -830,7 +830,9 @@ export function axisymmetricHeatConduction(options: AxisymmetricHeatConductionOp
       const ring = Math.PI * (rEdges[i + 1]! * rEdges[i + 1]! - rEdges[i]! * rEdges[i]!);
       for (let j = 0; j < cells.axial; j++) perCell[i * cells.axial + j] = q * ring * (zEdges[j + 1]! - zEdges[j]!);
     }
-    generationAt = (request) => request.generation.set(perCell);
+    generationAt = (request) => {
+      request.generation.set(perCell);
+    };
   } else {
     if (typeof o.generationAt !== "function") throw new InputError(WHERE, "generationAt", o.generationAt, "", "a function (request) => void");
     generationAt = o.generationAt as (request: PartGenerationRequest) => void;

@@ -216,7 +216,7 @@ const PERMEABILITY_TOLERANCE = 0.05;
  * @category Field
  */
 export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
-  const o = requireKnownKeys(WHERE, "", requireObject(WHERE, "options", options), KNOWN) as unknown as Record<string, unknown>;
+  const o = requireKnownKeys(WHERE, "", requireObject(WHERE, "options", options), KNOWN);
   const part = requireKnownKeys(WHERE, "part", requireObject(WHERE, "part", o.part), PART_KEYS);
   if (typeof part.name !== "string" || part.name === "") throw new InputError(WHERE, "part.name", part.name, "", "a non-empty name");
   const setup = readConductionSetup(WHERE, o, { ...part, cells: part.cells === undefined ? { radial: 8, axial: 8 } : part.cells }, "part.");
@@ -346,7 +346,7 @@ export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
   }
   // error estimate: the change to a mesh √2 finer; with the error falling at least by half per
   // refinement (as solveAxisymmetricField assumes) the coarser mesh's error is at most twice it
-  let estimatedError = Infinity;
+  let estimatedError: number;
   for (;;) {
     const finer = solveOnce(problem, { density: density * Math.SQRT2 });
     fieldIterations++;
