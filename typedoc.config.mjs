@@ -5,7 +5,7 @@ import { katexMarkdownItLoader } from "./scripts/typedoc-katex.mjs";
  * study), each named by the subpath it is imported from (`@module fluxwright/<name>` in its
  * index.ts) and carrying its guide from docs/ (`@document`). The README is the landing page.
  */
-const modules = ["core", "units", "special", "materials", "inductance", "conductors", "coreloss", "tank", "workpiece", "thermal", "safety", "study", "report"];
+const modules = ["core", "units", "special", "materials", "inductance", "conductors", "coreloss", "cores", "transformers", "tank", "converters", "links", "workpiece", "field", "thermal", "safety", "study", "report"];
 
 /** Categories in the order a designer needs them: the study first, special functions last. */
 const categoryOrder = [

@@ -2,7 +2,10 @@
  * Resonant DC–DC converters: LLC, series (SRC), parallel (PRC) and LCC. The exact periodic
  * steady state of the ideal piecewise-linear circuit, with the first-harmonic values beside it.
  *
- * @module converters
+ * Import from `fluxwright/converters` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/converters.md
+ * @module fluxwright/converters
  */
 export { llcGain, seriesResonantGain, parallelResonantGain, lccGain } from "./fha.js";
 export type { LlcGainOptions, SeriesResonantGainOptions, ParallelResonantGainOptions, LccGainOptions } from "./fha.js";

@@ -52,9 +52,11 @@ export interface InductorCoreSearchOptions {
  * @category Cores
  */
 export interface FeasibleCore {
+  /** The candidate's name, as given. */
   readonly name: string;
   /** Effective volume [m³]. */
   readonly effectiveVolume: number;
+  /** The inductor designed on this core. */
   readonly design: InductorDesign;
 }
 
@@ -64,6 +66,7 @@ export interface FeasibleCore {
  * @category Cores
  */
 export interface RejectedCore {
+  /** The candidate's name, as given. */
   readonly name: string;
   /** Plain sentences: the input error, or each blocking caution and limit crossed. */
   readonly reasons: readonly string[];
@@ -87,7 +90,7 @@ export interface InductorCoreSearch {
  * temperature-rise limit; ranks them by effective volume or by total loss.
  *
  * $$
- * \text{feasible} \iff \hat B \le B_\mathrm{sat},\ \text{fill} \le \text{fill}_\max,\ T_s \le T_{s,\max},\ \Delta T \le \Delta T_\max
+ * \text{feasible} \iff \hat B \le B_\mathrm{sat},\ \text{fill} \le \text{fill}_{\max},\ T_s \le T_{s,\max},\ \Delta T \le \Delta T_{\max}
  * $$
  *
  * Hard domain (throws {@link InputError}): bad options or candidates (name, core shape); a

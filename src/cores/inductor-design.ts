@@ -65,6 +65,7 @@ const MAX_SAMPLES = 10_000;
  * @category Cores
  */
 export interface TriangularCurrent {
+  /** Discriminant: DC plus a triangular ripple. */
   readonly kind: "triangular";
   /** Average (DC) current [A], finite (any sign). */
   readonly average: number;
@@ -80,6 +81,7 @@ export interface TriangularCurrent {
  * @category Cores
  */
 export interface SampledCurrent {
+  /** Discriminant: a sampled piecewise-linear waveform. */
   readonly kind: "samples";
   /** Times [s]: first 0, last the period, strictly increasing (2 … 10 000 points). */
   readonly time: readonly number[];
@@ -94,6 +96,7 @@ export interface SampledCurrent {
  */
 export type InductorConductor =
   | {
+      /** Discriminant: solid round wire. */
       readonly kind: "round";
       /** Bare copper diameter [m], > 0. */
       readonly diameter: number;
@@ -103,6 +106,7 @@ export type InductorConductor =
       readonly resistivity?: number;
     }
   | {
+      /** Discriminant: litz wire. */
       readonly kind: "litz";
       /** Number of strands, integer ≥ 1. */
       readonly strands: number;
@@ -114,6 +118,7 @@ export type InductorConductor =
       readonly resistivity?: number;
     }
   | {
+      /** Discriminant: foil, one turn per layer. */
       readonly kind: "foil";
       /** Foil thickness [m], > 0; the foil spans the window height, one turn per layer. */
       readonly thickness: number;
@@ -179,14 +184,19 @@ export interface InductorDesign {
   readonly fluxDensitySwing: number;
   /** Current at saturation [A]. */
   readonly saturationCurrent: number;
-  /** Peak, RMS, average and peak-to-peak current [A]. */
+  /** Peak current [A]. */
   readonly currentPeak: number;
+  /** RMS current [A]. */
   readonly currentRms: number;
+  /** Average (DC) current [A]. */
   readonly currentAverage: number;
+  /** Peak-to-peak current [A]. */
   readonly currentRipple: number;
-  /** Winding layout: layers, turns per layer, window fill [-]. */
+  /** Number of winding layers [-]. */
   readonly layers: number;
+  /** Turns in a full layer [-]. */
   readonly turnsPerLayer: number;
+  /** Fraction of the window area the winding fills [-]. */
   readonly windowFill: number;
   /** DC resistance of the winding at its temperature [Ω]. */
   readonly dcResistance: number;
@@ -198,8 +208,9 @@ export interface InductorDesign {
   readonly windingLoss: number;
   /** Total loss [W]. */
   readonly totalLoss: number;
-  /** Surface temperature rise [K] and surface temperature [K]. */
+  /** Surface temperature rise above ambient [K]. */
   readonly temperatureRise: number;
+  /** Surface temperature [K]. */
   readonly surfaceTemperature: number;
   /** Saturation, window, fringing, hot-spot and hot-surface cautions. */
   readonly cautions: readonly Caution[];

@@ -3,7 +3,10 @@
  * stranded turns), parts and concentrators in the r–z half-plane by quadratic finite elements,
  * with each coil's impedance, the losses in every body and the field at any point.
  *
- * @module field
+ * Import from `fluxwright/field` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/field.md
+ * @module fluxwright/field
  */
 export { solveAxisymmetricField } from "./solve-axisymmetric-field.js";
 export type {

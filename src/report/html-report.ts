@@ -10,7 +10,7 @@ import type { ChartReferenceLine, ChartSeries } from "./chart.js";
 import { celsiusText, duration, percent, q } from "./format.js";
 import { designRows, lossEntries, operatingRows } from "./text-report.js";
 
-const CSS = `
+export const CSS = `
 body { font-family: 'DejaVu Sans', 'Helvetica Neue', Arial, sans-serif; color: #222; max-width: 60rem; margin: 2rem auto; padding: 0 1rem; line-height: 1.45; }
 h1 { font-size: 1.5rem; margin-bottom: 0.2rem; }
 h2 { font-size: 1.15rem; margin-top: 2rem; border-bottom: 1px solid #ccc; padding-bottom: 0.2rem; }
@@ -31,13 +31,13 @@ code { font-size: 0.88rem; }
 @media print { body { margin: 0; max-width: none; } h2 { break-after: avoid; } figure { break-inside: avoid; } }
 `;
 
-function table(rows: readonly (readonly string[])[], header?: readonly string[]): string {
+export function table(rows: readonly (readonly string[])[], header?: readonly string[]): string {
   const cell = (tag: "td" | "th", text: string): string => `<${tag}>${escapeXml(text)}</${tag}>`;
   const head = header === undefined ? "" : `<thead><tr>${header.map((h) => cell("th", h)).join("")}</tr></thead>`;
   return `<table>${head}<tbody>${rows.map((r) => `<tr>${r.map((c) => cell("td", c)).join("")}</tr>`).join("")}</tbody></table>`;
 }
 
-function figure(svg: string, caption: string): string {
+export function figure(svg: string, caption: string): string {
   return `<figure class="plot">${svg}<figcaption>${escapeXml(caption)}</figcaption></figure>`;
 }
 

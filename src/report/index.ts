@@ -14,3 +14,5 @@ export type { ChartSeries, ChartReferenceLine, ChartSecondaryAxis, LineChartOpti
 export { studyPlots, studyHtmlReport } from "./html-report.js";
 export type { StudyPlot } from "./html-report.js";
 export { studyTextReport, sweepTextReport, sweepCsv, optimisationTextReport } from "./text-report.js";
+export { inductorPlots, inductorHtmlReport, transformerPlots, transformerHtmlReport } from "./component-report.js";
+export type { ComponentPlot } from "./component-report.js";

@@ -3,7 +3,10 @@
  * diagram of the layer stack (any interleaving; round wire, foil and litz), turns from
  * volt-seconds, the flux density of least total loss, window fill, and a whole design.
  *
- * @module transformers
+ * Import from `fluxwright/transformers` (or from `fluxwright`, which re-exports every module).
+ *
+ * @document ../../docs/transformers.md
+ * @module fluxwright/transformers
  */
 export { leakageInductance } from "./leakage.js";
 export type { LeakageLayer, LeakageInductanceOptions } from "./leakage.js";

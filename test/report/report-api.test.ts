@@ -4,7 +4,10 @@ import { InputError } from "../../src/index.js";
 
 describe("fluxwright/report: the public report builders", () => {
   it("exports the charts and the report builders, and nothing else", () => {
-    expect(Object.keys(report).sort()).toEqual(["barChart", "lineChart", "optimisationTextReport", "studyHtmlReport", "studyPlots", "studyTextReport", "sweepCsv", "sweepTextReport"]);
+    expect(Object.keys(report).sort()).toEqual([
+      "barChart", "inductorHtmlReport", "inductorPlots", "lineChart", "optimisationTextReport", "studyHtmlReport", "studyPlots", "studyTextReport",
+      "sweepCsv", "sweepTextReport", "transformerHtmlReport", "transformerPlots",
+    ]);
   });
 
   it("throws InputError (not TypeError) for input that is not what it renders", () => {
@@ -18,6 +21,10 @@ describe("fluxwright/report: the public report builders", () => {
       ["sweepTextReport", (x) => report.sweepTextReport(x as never)],
       ["sweepCsv", (x) => report.sweepCsv(x as never)],
       ["optimisationTextReport", (x) => report.optimisationTextReport(x as never)],
+      ["inductorPlots", (x) => report.inductorPlots(x as never)],
+      ["inductorHtmlReport", (x) => report.inductorHtmlReport(x as never)],
+      ["transformerPlots", (x) => report.transformerPlots(x as never)],
+      ["transformerHtmlReport", (x) => report.transformerHtmlReport(x as never)],
     ];
     for (const [name, call] of calls) {
       for (const value of bad) expect(() => call(value), `${name}(${String(value)})`).toThrow(InputError);

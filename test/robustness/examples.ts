@@ -1220,6 +1220,23 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       { paths: ["0.rankBy", "0.maxTemperatureRise"], kinds: ["undefined"], reason: OPTIONAL },
     ],
   },
+  inductorTurnsSweep: {
+    args: () => [{
+      design: {
+        inductance: 100e-6, frequency: 100e3, material: inventedExampleFerrite, ambientTemperature: 313.15, maxFluxDensityRatio: 0.7,
+        core: eCore({ width: 0.042, height: 0.021, depth: 0.015, windowWidth: 0.03, centreLegWidth: 0.012, windowHeight: 0.015 }),
+        current: { kind: "triangular", average: 5, ripple: 2, dutyCycle: 0.4 },
+        conductor: { kind: "litz", strands: 105, strandDiameter: 0.1e-3, outerDiameter: 1.4e-3 },
+      },
+      minTurns: 10,
+      maxTurns: 16,
+    }],
+    skip: { paths: ["0.design*"], reason: "the specification goes through inductorDesign, checked there" },
+    allow: [
+      { paths: ["0.minTurns", "0.maxTurns"], kinds: ["undefined"], reason: OPTIONAL + " (half and three times the design's turns)" },
+    ],
+    nonFinite: { leastLoss: "null when no swept turn count is usable (documented)" },
+  },
   componentTemperatureRise: {
     args: () => [{ power: 2, ambientTemperature: 313.15, surfaceArea: 0.006, height: 0.03, emissivity: 0.9 }],
     variants: [() => [{ power: 2, ambientTemperature: 313.15, thermalResistance: 20 }]],
