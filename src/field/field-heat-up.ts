@@ -83,6 +83,18 @@ export interface FieldHeatUpOptions {
 }
 
 /**
+ * A coil's terminal values at one field solution of a heat-up.
+ *
+ * @category Field
+ */
+export interface FieldHeatUpCoilState {
+  /** Self-resistance [Ω] (the coil's own conductor and the losses it induces). */
+  readonly resistance: number;
+  /** Self-inductance [H]. */
+  readonly inductance: number;
+}
+
+/**
  * One field solution of a heat-up.
  *
  * @category Field
@@ -97,7 +109,7 @@ export interface FieldHeatUpSolution {
   /** Hottest cell of the part [K]. */
   readonly maximumTemperature: number;
   /** Self-resistance [Ω] and self-inductance [H] of each coil, by name. */
-  readonly coils: Readonly<Record<string, { readonly resistance: number; readonly inductance: number }>>;
+  readonly coils: Readonly<Record<string, FieldHeatUpCoilState>>;
 }
 
 /**

@@ -37,4 +37,4 @@ export type {
   PartTemperatureMap,
 } from "./axisymmetric-conduction.js";
 export { fieldHeatUp } from "./field-heat-up.js";
-export type { FieldHeatUpOptions, FieldHeatUpResult, FieldHeatUpSolution, FieldHeatedPart } from "./field-heat-up.js";
+export type { FieldHeatUpCoilState, FieldHeatUpOptions, FieldHeatUpResult, FieldHeatUpSolution, FieldHeatedPart } from "./field-heat-up.js";
