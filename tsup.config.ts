@@ -28,7 +28,7 @@ export default defineConfig([
   {
     entry,
     format: ["esm", "cjs"],
-    dts: { compilerOptions: { ignoreDeprecations: "6.0" } },
+    dts: { entry: { ...entry, "study/heater-worker": "src/study/heater-worker.ts" }, compilerOptions: { ignoreDeprecations: "6.0" } },
     sourcemap: false,
     clean: true,
     target: "es2022",
@@ -39,7 +39,9 @@ export default defineConfig([
   },
   {
     // the worker pool's script (loaded by URL, never imported): one self-contained ESM file that
-    // runs as a node:worker_threads worker and as a module Web Worker
+    // runs as a node:worker_threads worker and as a module Web Worker; published as the subpath
+    // `fluxwright/worker` (its empty .d.ts comes from the first block's declaration build, which
+    // clears dist's .d.ts files when it starts)
     entry: { "study/heater-worker": "src/study/heater-worker.ts" },
     format: ["esm"],
     sourcemap: false,

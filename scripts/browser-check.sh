@@ -1,7 +1,8 @@
 #!/bin/sh
-# Browser check: opens the HTML study report and a page that imports the ESM bundle in headless
-# Chromium (Debian's `chromium` package), and fails on console errors, on missing or empty SVG
-# plots, or on a blank page. Keeps screenshots in $OUT (default: browser-check/) as artifacts.
+# Browser check: opens the HTML study report, a page that imports the ESM bundle and a page that
+# runs the worker pool on module Web Workers in headless Chromium (Debian's `chromium` package),
+# and fails on console errors, on missing or empty SVG plots, on a blank page, or when the pooled
+# rows differ from the calling thread's. Keeps screenshots in $OUT (default: browser-check/) as artifacts.
 #
 # Needs: a built bundle (npm run build), node with tsx, python3 (static server on loopback),
 # chromium. Usage: sh scripts/browser-check.sh [output-directory]
@@ -48,9 +49,53 @@ cat > "$OUT/site/bundle.html" <<'HTML'
 </script></body></html>
 HTML
 
+# 3. a page that runs sweeps on the worker pool with module Web Workers (the worker script served
+# from dist/study/heater-worker.js): the rows equal the calling thread's, progress arrives, an
+# abort stops the stream. Workers run in real time, which --dump-dom's virtual time does not wait
+# for, so the page reports by a request the static server logs ("study.json?pool-result=…").
+cat > "$OUT/site/pool.html" <<'HTML'
+<!DOCTYPE html>
+<html lang="en"><head><meta charset="utf-8"/><title>fluxwright worker pool check</title></head>
+<body><h1>fluxwright worker pool in the browser</h1><pre id="result">running…</pre>
+<script type="module">
+  const out = document.getElementById("result");
+  // the page reports to the static server by a request the server logs (the check reads its log)
+  const report = (status, text) => fetch("./study.json?" + new URLSearchParams({ "pool-result": status, text })).catch(() => undefined);
+  const fail = (m) => { out.textContent = "failed: " + m; out.dataset.status = "failed"; void report("failed", String(m)); };
+  window.addEventListener("error", (e) => fail(e.message));
+  try {
+    const { sweepHeater, sweepHeaterStream } = await import("./dist/index.js");
+    const description = await (await fetch("./study.json")).json();
+    const spec = { field: "capacitor.capacitance", values: ["2.2 µF", "2.7 µF", "3.3 µF", "3.9 µF", "-1 µF", "4.7 µF", "5.6 µF"], heatUp: false };
+    const workerUrl = new URL("./dist/study/heater-worker.js", location.href);
+    const single = JSON.stringify(sweepHeater(description, spec));
+    const seen = [];
+    const pooled = await sweepHeater(description, spec, { workers: 2, workerUrl, onProgress: (p) => seen.push(p.done) });
+    if (JSON.stringify(pooled) !== single) throw new Error("pooled sweep differs from the single-thread sweep");
+    if (seen.length === 0 || seen[seen.length - 1] !== spec.values.length) throw new Error("progress " + seen.join(","));
+    const controller = new AbortController();
+    let rows = 0, aborted = false;
+    try {
+      for await (const row of sweepHeaterStream(description, { ...spec, values: Array(200).fill("3.3 µF"), heatUp: true }, { workers: 2, workerUrl, signal: controller.signal })) {
+        rows++;
+        if (rows === 2) controller.abort();
+      }
+    } catch (e) { aborted = controller.signal.aborted; }
+    if (!aborted) throw new Error("abort did not stop the stream");
+    let refused = false;
+    try { await sweepHeater(description, spec, { workers: 2 }); } catch (e) { refused = /workerUrl/.test(e.message); }
+    if (!refused) throw new Error("no workerUrl outside Node was not refused by name");
+    out.textContent = "2 Web Workers: " + spec.values.length + " rows identical to the calling thread; progress " + seen.join(",") + "; aborted after " + rows + " rows";
+    out.dataset.status = "ok";
+    void report("ok", out.textContent);
+  } catch (e) { console.error(e); fail(e && e.message); }
+</script></body></html>
+HTML
+
 python3 -m http.server "$PORT" --bind 127.0.0.1 --directory "$OUT/site" >"$OUT/server.log" 2>&1 &
 SERVER=$!
-trap 'kill "$SERVER" 2>/dev/null || true' EXIT INT TERM
+BROWSER=""
+trap 'kill "$SERVER" $BROWSER 2>/dev/null || true' EXIT INT TERM
 i=0
 until python3 -c "import urllib.request; urllib.request.urlopen('http://127.0.0.1:$PORT/report.html')" 2>/dev/null; do
   i=$((i + 1)); [ "$i" -lt 50 ] || { echo "browser-check: static server did not start" >&2; exit 1; }; sleep 0.1
@@ -85,6 +130,26 @@ if problems:
     print("browser-check: report: " + "; ".join(problems), file=sys.stderr); sys.exit(1)
 print(f"browser-check: report OK ({len(svgs)} plots)")
 PY
+
+# the pool page: headless Chromium runs until the page has reported (at most 180 s)
+profile=$(mktemp -d)
+"$CHROMIUM" $FLAGS --user-data-dir="$profile" "http://127.0.0.1:$PORT/pool.html" >"$OUT/pool.console.log" 2>&1 &
+BROWSER=$!
+i=0
+until grep -q "pool-result=" "$OUT/server.log"; do
+  i=$((i + 1)); [ "$i" -lt 1800 ] || break; sleep 0.1
+done
+kill "$BROWSER" 2>/dev/null || true
+wait "$BROWSER" 2>/dev/null || true
+rm -rf "$profile"
+pool=$(grep -o "pool-result=[a-z]*&text=[^ ]*" "$OUT/server.log" | head -n 1 | python3 -c "import sys, urllib.parse; q = urllib.parse.parse_qs(sys.stdin.read().strip()); print(q.get('pool-result', ['none'])[0] + ': ' + q.get('text', [''])[0])")
+case "$pool" in
+  ok:*) echo "browser-check: worker pool OK (${pool#ok: })" ;;
+  *) echo "browser-check: worker pool: ${pool:-no report within 180 s}" >&2; status=1 ;;
+esac
+if grep -E "CONSOLE|Uncaught" "$OUT/pool.console.log" | grep -qiE "error|uncaught"; then
+  echo "browser-check: pool: console errors:" >&2; grep -E "CONSOLE|Uncaught" "$OUT/pool.console.log" >&2; status=1
+fi
 
 if grep -q 'data-status="ok"' "$OUT/bundle.dom.html"; then
   echo "browser-check: bundle OK ($(grep -o 'data-status="ok">[^<]*' "$OUT/bundle.dom.html" | sed 's/.*">//'))"

@@ -3,7 +3,7 @@
  * the built package (`npm run build` first): `tsx scripts/pool-benchmark.ts [speedup|memory|abort]`.
  * Results are reported in docs/benchmarks.md.
  */
-import { readFileSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import type { HeaterDescription } from "../src/index.js";
 
@@ -15,6 +15,38 @@ const race = JSON.parse(readFileSync(new URL("../docs/examples/study-bearing-rac
 const what = process.argv[2] ?? "speedup";
 console.log(`node ${process.version}, ${availableParallelism()} cores, load average ${loadavg().map((l) => l.toFixed(2)).join(" ")}`);
 
+/**
+ * CPU time [s] of each thread of this process (Linux: /proc/self/task), keyed by thread id; null
+ * elsewhere. Tells the workers' JavaScript threads from V8's helper threads (background JIT
+ * compilation, parallel and concurrent garbage collection), which one run of a few designs per
+ * worker cannot, and which the wall-clock ratio hides.
+ */
+function threadCpu(): Map<string, number> | null {
+  if (!existsSync("/proc/self/task")) return null;
+  const ticks = 100; // USER_HZ on Linux
+  const out = new Map<string, number>();
+  for (const tid of readdirSync("/proc/self/task")) {
+    try {
+      const stat = readFileSync(`/proc/self/task/${tid}/stat`, "utf8");
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      out.set(tid, (Number(f[11]) + Number(f[12])) / ticks);
+    } catch {
+      // the thread ended between the listing and the read
+    }
+  }
+  return out;
+}
+
+/** CPU used since `before` [s]: main thread, the `k` busiest other threads (the workers), the rest (V8's helpers). */
+function cpuSplit(before: Map<string, number>, after: Map<string, number>, k: number): { main: number; workers: number; helpers: number } {
+  const used = [...after].map(([tid, t]) => [tid, t - (before.get(tid) ?? 0)] as const);
+  const main = used.find(([tid]) => tid === String(process.pid))?.[1] ?? 0;
+  const others = used.filter(([tid]) => tid !== String(process.pid)).map(([, t]) => t).sort((a, b) => b - a);
+  const workers = others.slice(0, k).reduce((a, b) => a + b, 0);
+  const helpers = others.slice(k).reduce((a, b) => a + b, 0);
+  return { main, workers, helpers };
+}
+
 if (what === "speedup") {
   // studies with the electro-thermal heat-up: several milliseconds each
   const n = Number(process.argv[3] ?? 120);
@@ -24,17 +56,26 @@ if (what === "speedup") {
   sweepHeater(race, { ...spec, values: values.slice(0, 10) });
   const perDesign = (performance.now() - t0) / 10;
   console.log(`one design: ${perDesign.toFixed(2)} ms (calling thread)`);
-  for (let round = 0; round < 3; round++) {
+  for (let round = 0; round < Number(process.argv[4] ?? 3); round++) {
     const times: Record<string, number> = {};
     const cores: Record<string, number> = {};
+    const split: Record<string, string> = {};
     for (const workers of [1, 2]) {
+      const before = threadCpu();
       const t = performance.now();
       const c = process.cpuUsage();
-      await sweepHeater(race, spec, { workers });
+      // /proc lists live threads only: read them at the last progress report, before the pool
+      // stops its workers
+      let after: Map<string, number> | null = null;
+      await sweepHeater(race, spec, { workers, onProgress: (p) => { if (p.done === p.total) after = threadCpu(); } });
       times[workers] = performance.now() - t;
       const used = process.cpuUsage(c);
       // CPU time of all threads over wall time: how many cores the run actually got
       cores[workers] = (used.user + used.system) / 1000 / (times[workers] ?? NaN);
+      if (before !== null && after !== null) {
+        const { main, workers: js, helpers } = cpuSplit(before, after, workers);
+        split[workers] = `main ${main.toFixed(2)} s, workers ${js.toFixed(2)} s, V8 helpers ${helpers.toFixed(2)} s`;
+      }
     }
     const one = times[1] ?? NaN;
     const two = times[2] ?? NaN;
@@ -43,6 +84,7 @@ if (what === "speedup") {
         `2 workers ${(two / 1000).toFixed(2)} s (${(cores[2] ?? NaN).toFixed(2)} cores obtained), speed-up ${(one / two).toFixed(2)}x, ` +
         `load average ${loadavg()[0]?.toFixed(1) ?? "?"}`,
     );
+    if (split[1] !== undefined && split[2] !== undefined) console.log(`  CPU by thread: 1 worker: ${split[1]}; 2 workers: ${split[2]}`);
   }
 }
 

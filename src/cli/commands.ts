@@ -6,11 +6,11 @@
  */
 import { parseArgs as nodeParseArgs } from "node:util";
 import { InputError, nearestName } from "../core/index.js";
-import { HeaterDescriptionError, optimiseHeater, readHeaterDescription, studyHeater, sweepHeater, sweepHeaterStream } from "../study/index.js";
-import type { HeaterDescription, HeaterGoal, HeaterLimits, HeaterOptimisation, HeaterShard, HeaterSweepRow } from "../study/index.js";
+import { HeaterDescriptionError, optimiseHeater, optimiseHeaterShard, readHeaterDescription, studyHeater, sweepHeater, sweepHeaterStream } from "../study/index.js";
+import type { HeaterDescription, HeaterGoal, HeaterLimits, HeaterOptimisation, HeaterProgress, HeaterShard, HeaterSweepRow } from "../study/index.js";
 import { progressDisplay } from "./progress.js";
 import type { ProgressDisplay } from "./progress.js";
-import { mergeCommand, MERGE_HELP, SWEEP_ROWS_FORMAT, valuesDigest } from "./merge.js";
+import { mergeCommand, MERGE_HELP, OPTIMISATION_SHARD_FORMAT, SWEEP_ROWS_FORMAT, valuesDigest } from "./merge.js";
 import { designErrorText } from "../report/design-error.js";
 import { jsonSyntaxError } from "./json-error.js";
 import { OutputError, UsageError } from "./errors.js";
@@ -98,7 +98,7 @@ the design cannot run, 4 an output could not be written, 130 interrupted (Ctrl-C
 `;
 
 const HELP: Record<string, string> = {
-  study: `usage: fluxwright study FILE [--json] [--html OUT] [--quiet]
+  study: `usage: fluxwright study FILE [--json] [--html OUT] [--model field] [--quiet]
 
 Runs the heater study in FILE (JSON, or - for standard input; quantities as text with units
 such as "30 mm") and prints a text report: cautions first, the design, operating points
@@ -109,6 +109,9 @@ options:
                 the study file as "input", so it can be read back as FILE)
   --html OUT    also write a self-contained HTML report with plots to OUT (never over FILE;
                 written to a temporary file and renamed, so a failure keeps the old OUT)
+  --model M     "closed-form" (default, fast) or "field": the coil's impedance and the part's
+                coupling from the axisymmetric field solver (seconds per anchor temperature;
+                the HTML report then shows the field picture)
   --quiet       with --html: print only the report's path
   -h, --help    show this help
 
@@ -143,6 +146,7 @@ the workers, keeps the rows that finished and says how far the sweep got (exit s
 Exits with status 3 when no value gave a design that runs.
 `,
   optimise: `usage: fluxwright optimise FILE (--power W | --time S) [limits] [--keep N] [--json]
+                       [--workers N] [--shard I/N] [--quiet]
 
 Searches turns, capacitance (E12 values) and, for fixed-frequency series inverters, the
 switching frequency around the design in FILE for the closest match to a part power or a
@@ -163,6 +167,9 @@ options:
   --keep N               designs to report (default 5)
   --json                 print the result as JSON
   --workers N            worker threads (default one per core; 0 runs on the main thread)
+  --shard I/N            run only part I of N of the searched coils (needs --json) and print
+                         that part's output on one line; "fluxwright merge" of all N parts
+                         prints what one run prints with --json
   --quiet                no progress on standard error
   -h, --help             show this help
 
@@ -362,7 +369,7 @@ function designFailure(io: CliIo, command: string, file: StudyFile, e: unknown):
 }
 
 function studyCommand(args: readonly string[], io: CliIo): number {
-  const parsed = parseArgs(args, ["html"], ["json", "quiet"]);
+  const parsed = parseArgs(args, ["html", "model"], ["json", "quiet"]);
   if (parsed.flags.has("help")) {
     io.stdout(HELP.study as string);
     return EXIT_OK;
@@ -371,12 +378,14 @@ function studyCommand(args: readonly string[], io: CliIo): number {
   const html = parsed.flags.get("html");
   const same = io.samePath ?? ((a: string, b: string) => a === b);
   if (typeof html === "string" && path !== "-" && same(html, path)) throw new UsageError(`refusing to write the HTML report over the study file ${html}: choose another output path`);
+  const model = parsed.flags.get("model");
+  if (model !== undefined && model !== "field" && model !== "closed-form") throw new UsageError(`--model must be "closed-form" or "field", got ${String(model)}`);
   const file = loadStudyFile(io, path);
   const bad = checkStudyFile(io, file);
   if (bad !== null) return bad;
   let study;
   try {
-    study = studyHeater(file.input as HeaterDescription);
+    study = studyHeater(file.input as HeaterDescription, model === "field" ? { model } : {});
   } catch (e) {
     return designFailure(io, "study", file, e);
   }
@@ -561,7 +570,7 @@ async function sweepPooled(io: CliIo, file: StudyFile, run: PooledSweep): Promis
 function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<number> {
   const parsed = parseArgs(
     args,
-    ["power", "time", "turns", "min-capacitance", "max-capacitance", "series", "max-tank-voltage", "max-coil-current", "max-supply-current", "min-frequency", "max-frequency", "keep", "workers"],
+    ["power", "time", "turns", "min-capacitance", "max-capacitance", "series", "max-tank-voltage", "max-coil-current", "max-supply-current", "min-frequency", "max-frequency", "keep", "workers", "shard"],
     ["json", "quiet"],
   );
   if (parsed.flags.has("help")) {
@@ -611,8 +620,10 @@ function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<n
   const bad = checkStudyFile(io, file);
   if (bad !== null) return bad;
   const quiet = parsed.flags.has("quiet");
-  const workers = workersOption(parsed) ?? io.defaultWorkers;
-  if (!quiet) io.stderr(`searching designs around ${file.name}…\n`);
+  const shard = shardOption(parsed);
+  if (shard !== undefined && !parsed.flags.has("json")) throw new UsageError("--shard needs --json (fluxwright merge reads the shards' JSON)");
+  const workers = workersOption(parsed) ?? io.defaultWorkers ?? (shard === undefined ? undefined : 0);
+  if (!quiet) io.stderr(`searching designs around ${file.name}${shard === undefined ? "" : ` (shard ${shard.index}/${shard.count})`}…\n`);
   const started = Date.now();
   const failed = (e: unknown): number => {
     if (e instanceof HeaterDescriptionError) {
@@ -635,14 +646,23 @@ function optimiseCommand(args: readonly string[], io: CliIo): number | Promise<n
       let last = { done: 0, total: 0 };
       let result;
       try {
-        result = await optimiseHeater(file.input as HeaterDescription, goal, {
+        const options = {
           workers,
-          onProgress: (p) => {
+          onProgress: (p: HeaterProgress) => {
             last = p;
             display.update(p);
           },
           ...(interrupt === undefined ? {} : { signal: interrupt.signal }),
-        });
+        };
+        if (shard !== undefined) {
+          const part = await optimiseHeaterShard(file.input as HeaterDescription, goal, { ...options, shard });
+          display.end();
+          if (!quiet) io.stderr(`evaluated ${part.evaluated} candidates of shard ${shard.index}/${shard.count} in ${((Date.now() - started) / 1000).toFixed(1)} s\n`);
+          const envelope = { format: OPTIMISATION_SHARD_FORMAT, formatVersion: JSON_FORMAT_VERSION, fluxwright: io.version ?? "unknown", input: file.input, ...part };
+          io.stdout(`${JSON.stringify(envelope)}\n`);
+          return EXIT_OK;
+        }
+        result = await optimiseHeater(file.input as HeaterDescription, goal, options);
       } catch (e) {
         display.end();
         if (interrupt?.signal.aborted !== true) return failed(e);

@@ -1,14 +1,20 @@
 /**
  * `fluxwright merge`: joins the NDJSON outputs of a sweep's shards into the output of the whole
- * sweep, reading each file line by line (constant memory).
+ * sweep, reading each file line by line (constant memory), or the outputs of a search's shards
+ * into the output of the whole search.
  */
-import type { HeaterShard, HeaterSweepRow } from "../study/index.js";
-import { sweepCsv } from "../report/index.js";
+import { InputError } from "../core/index.js";
+import { mergeHeaterOptimisationShards } from "../study/index.js";
+import type { HeaterOptimisation, HeaterOptimisationShard, HeaterShard, HeaterSweepRow } from "../study/index.js";
+import { optimisationTextReport, sweepCsv } from "../report/index.js";
 import type { CliIo } from "./commands.js";
 import { UsageError } from "./errors.js";
 
 /** The `format` of the first line of `fluxwright sweep --ndjson`. */
 export const SWEEP_ROWS_FORMAT = "fluxwright-sweep-rows";
+
+/** The `format` of the one-line output of `fluxwright optimise --json --shard I/N`. */
+export const OPTIMISATION_SHARD_FORMAT = "fluxwright-optimisation-shard";
 
 /** A short fingerprint of the swept values (FNV-1a, 32 bits, of their JSON), so that shards of different sweeps are told apart. */
 export function valuesDigest(values: readonly (number | string)[]): string {
@@ -21,15 +27,19 @@ export function valuesDigest(values: readonly (number | string)[]): string {
   return h.toString(16).padStart(8, "0");
 }
 
-export const MERGE_HELP = `usage: fluxwright merge SHARD... [--csv]
+export const MERGE_HELP = `usage: fluxwright merge SHARD... [--csv | --text]
 
 Joins the NDJSON outputs of "fluxwright sweep --ndjson --shard I/N" (one file per shard, in any
 order) into the output of the whole sweep, exactly as one run would have written it: NDJSON, or
 CSV with --csv, on standard output. Checks that the files are the N shards of one sweep (same
 study file, field, values and heat-up setting), each present once and complete.
 
+Joins the outputs of "fluxwright optimise --json --shard I/N" likewise into what one run of
+"fluxwright optimise --json" prints (or its text report with --text).
+
 options:
-  --csv         print the merged table as CSV instead of NDJSON
+  --csv         print a merged sweep as CSV instead of NDJSON
+  --text        print a merged search as the text report instead of JSON
   -h, --help    show this help
 
 Exits with status 2 when a shard is missing, repeated, incomplete or from another sweep, and 3
@@ -47,6 +57,14 @@ interface ShardHeader {
   readonly valuesDigest: string;
   readonly shard?: HeaterShard;
   readonly range?: readonly [number, number];
+  readonly input: unknown;
+}
+
+/** The one-line output of a search's shard. */
+interface OptimisationShardFile extends HeaterOptimisationShard {
+  readonly format: string;
+  readonly formatVersion: number;
+  readonly fluxwright: string;
   readonly input: unknown;
 }
 
@@ -69,8 +87,37 @@ const reason = (e: unknown): string => {
   return typeof code === "string" ? code : e instanceof Error ? e.message : String(e);
 };
 
+/** Merges the outputs of a search's shards (first lines already read and parsed). */
+function mergeSearch(io: CliIo, shards: readonly { path: string; header: OptimisationShardFile }[], text: boolean): number {
+  const ref = (shards[0] as (typeof shards)[number]).header;
+  const inputText = JSON.stringify(ref.input);
+  for (const s of shards) {
+    if (s.header.format !== OPTIMISATION_SHARD_FORMAT) throw new UsageError(`${s.path} is not the output of a sharded search ("fluxwright optimise FILE ... --json --shard I/N")`);
+    if (s.header.formatVersion !== ref.formatVersion || JSON.stringify(s.header.input) !== inputText) {
+      throw new UsageError(`${s.path} is from another search than ${(shards[0] as (typeof shards)[number]).path} (its ${s.header.formatVersion !== ref.formatVersion ? "format version" : "study file"} differs)`);
+    }
+  }
+  let result: HeaterOptimisation;
+  try {
+    // the envelope's fields (format, version, input) are checked above; the merge reads the rest
+    result = mergeHeaterOptimisationShards(shards.map((s) => s.header));
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+    // name the files, not the array positions
+    const named = e.message.replace(/shards\[(\d+)\]/gu, (_, k: string) => shards[Number(k)]?.path ?? `shards[${k}]`);
+    throw new UsageError(named.replace(/^mergeHeaterOptimisationShards: /u, ""));
+  }
+  for (const w of result.warnings) io.stderr(`fluxwright merge: warning: ${w}\n`);
+  if (text) io.stdout(optimisationTextReport(result));
+  else {
+    const envelope = { format: "fluxwright-optimisation", formatVersion: ref.formatVersion, fluxwright: ref.fluxwright, input: ref.input, ...result };
+    io.stdout(`${JSON.stringify(envelope, null, 2)}\n`);
+  }
+  return 0;
+}
+
 export async function mergeCommand(args: readonly string[], io: CliIo, parse: (args: readonly string[], valued: readonly string[], booleans: readonly string[]) => ParsedArgs): Promise<number> {
-  const parsed = parse(args, [], ["csv"]);
+  const parsed = parse(args, [], ["csv", "text"]);
   if (parsed.flags.has("help")) {
     io.stdout(MERGE_HELP);
     return 0;
@@ -91,11 +138,20 @@ export async function mergeCommand(args: readonly string[], io: CliIo, parse: (a
     } catch {
       header = null;
     }
+    if (header?.format === OPTIMISATION_SHARD_FORMAT || (shards.length > 0 && (shards[0] as (typeof shards)[number]).header.format === OPTIMISATION_SHARD_FORMAT)) {
+      shards.push({ path, header: header ?? ({} as ShardHeader), lines });
+      continue;
+    }
     if (header?.format !== SWEEP_ROWS_FORMAT || header.shard === undefined || header.range === undefined) {
       throw new UsageError(`${path} is not the NDJSON output of a sharded sweep ("fluxwright sweep FILE ... --ndjson --shard I/N")`);
     }
     shards.push({ path, header, lines });
   }
+  if ((shards[0] as (typeof shards)[number]).header.format === OPTIMISATION_SHARD_FORMAT) {
+    if (parsed.flags.has("csv")) throw new UsageError("--csv is for sweeps; a merged search prints JSON, or its text report with --text");
+    return mergeSearch(io, shards as unknown as { path: string; header: OptimisationShardFile }[], parsed.flags.has("text"));
+  }
+  if (parsed.flags.has("text")) throw new UsageError("--text is for searches; a merged sweep prints NDJSON, or CSV with --csv");
   const ref = (shards[0] as (typeof shards)[number]).header;
   const refPath = (shards[0] as (typeof shards)[number]).path;
   const count = (ref.shard as HeaterShard).count;

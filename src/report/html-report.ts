@@ -9,6 +9,7 @@ import { barChart, escapeXml, lineChart } from "./chart.js";
 import type { ChartReferenceLine, ChartSeries } from "./chart.js";
 import { celsiusText, duration, percent, q } from "./format.js";
 import { designRows, lossEntries, operatingRows } from "./text-report.js";
+import { POWER_DENSITY_DECADES, fieldPictureSvg } from "./field-picture.js";
 
 export const CSS = `
 body { font-family: 'DejaVu Sans', 'Helvetica Neue', Arial, sans-serif; color: #222; max-width: 60rem; margin: 2rem auto; padding: 0 1rem; line-height: 1.45; }
@@ -259,6 +260,13 @@ export function studyPlots(study: HeaterStudy): StudyPlot[] {
     }),
     caption: `Loss breakdown at the cold operating point; the places add up to the input power ${q(study.operating.inputPower, "W")}.`,
   });
+  const picture = study.field?.picture ?? null;
+  if (picture !== null) {
+    plots.push({
+      svg: fieldPictureSvg(picture),
+      caption: `The field of the coil with the part at ${celsiusText(picture.temperature)} from the field model (solveAxisymmetricField): contours of |B| (RMS) in the r–z half-plane (the axis on the left, geometric levels), and the time-average power density of the eddy currents in the part on a logarithmic colour scale (${POWER_DENSITY_DECADES} decades below its peak), on cells graded into the skin depth. The coil's turns are drawn in copper.`,
+    });
+  }
   return plots;
 }
 

@@ -64,7 +64,9 @@ export function designRows(study: HeaterStudy): [string, string][] {
         : `${c.material.name} wire ${q(c.diameter, "m")}`;
   const p = d.part;
   const partText =
-    p.shape === "ring"
+    p.rectangles !== undefined
+      ? `${p.rectangles.length} r–z rectangle${p.rectangles.length === 1 ? "" : "s"}: ${p.rectangles.map((x) => `r ${q(x.rMin, "m")}–${q(x.rMax, "m")}, z ${q(x.zMin, "m")}–${q(x.zMax, "m")}`).join("; ")}`
+      : p.shape === "ring"
       ? `ring ${q(2 * p.outerRadius, "m")} OD × ${q(2 * p.innerRadius, "m")} ID × ${q(p.height, "m")}`
       : p.shape === "bar"
         ? `bar ${q(2 * p.radius, "m")} diameter × ${q(p.length, "m")}`
@@ -86,6 +88,16 @@ export function designRows(study: HeaterStudy): [string, string][] {
   if (d.concentrator !== null) {
     rows.splice(rows.length - 2, 0, ["concentrator", `${d.concentrator.materialId}, ${area(d.concentrator.crossSectionArea)} cross-section, ${volume(d.concentrator.volume)}`]);
   }
+  for (const c of d.concentrators ?? []) {
+    rows.splice(rows.length - 2, 0, [`concentrator ${c.name}`, `μr ${c.relativePermeability}, ${c.resistivity === null ? "non-conducting" : `ρ ${q(c.resistivity, "Ω·m")}`}, ${c.rectangles.length} r–z rectangle${c.rectangles.length === 1 ? "" : "s"}`]);
+  }
+  const f = study.field;
+  rows.push([
+    "coupling model",
+    study.model === "field" && f !== null && f !== undefined
+      ? `field solver (solveAxisymmetricField): ${f.anchors.length} anchor temperatures, ${f.solves} solutions, ${f.seconds.toFixed(1)} s, largest mesh ${f.largestMesh} nodes`
+      : "closed forms and the coil-impedance model",
+  ]);
   rows.push(["surroundings", `${celsiusText(d.environment.ambientTemperature)}, convection ${Number(d.environment.convectionCoefficient.toPrecision(3))} W/(m²·K)`]);
   return rows;
 }

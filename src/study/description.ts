@@ -364,11 +364,60 @@ export interface PlatePartDescription extends PartCommon {
 }
 
 /**
+ * A rectangle of the r–z half-plane (a ring of rectangular cross-section about the coil's
+ * axis). Axial positions are measured from the middle of a solenoid's winding, or from the face
+ * a pancake coil's lift-off is measured to (the pancake's turns lie above z = lift-off).
+ *
+ * @category Heater study
+ */
+export interface HeaterRectangle {
+  /** Inner radius [m], ≥ 0 (0: reaches the axis). */
+  readonly rMin: QuantityInput;
+  /** Outer radius [m], > rMin. */
+  readonly rMax: QuantityInput;
+  /** Lower axial position [m] (may be negative). */
+  readonly zMin: QuantityInput;
+  /** Upper axial position [m], > zMin. */
+  readonly zMax: QuantityInput;
+}
+
+/**
+ * A part of any axisymmetric shape, as a set of r–z rectangles that do not overlap (a stepped
+ * shaft, a flanged hub, a part with a bore). Needs the field model
+ * (`studyHeater(…, { model: "field" })`).
+ *
+ * @category Heater study
+ */
+export interface RectanglesPartDescription extends PartCommon {
+  /** Part shape tag. */
+  readonly shape: "rectangles";
+  /** The part's cross-section, at least one rectangle. */
+  readonly rectangles: readonly HeaterRectangle[];
+}
+
+/**
+ * A flux concentrator (or any passive magnetic or conducting body) as a set of r–z rectangles,
+ * for the field model.
+ *
+ * @category Heater study
+ */
+export interface HeaterFieldConcentrator {
+  /** A name for reports (default `concentrator1`, `concentrator2`, …). */
+  readonly name?: string;
+  /** Its cross-section, at least one rectangle. */
+  readonly rectangles: readonly HeaterRectangle[];
+  /** Relative permeability, ≥ 1 (linear). */
+  readonly relativePermeability: number;
+  /** Resistivity [Ω·m], > 0; omit for a non-conductor (a ferrite, a laminated or powder core). */
+  readonly resistivity?: QuantityInput;
+}
+
+/**
  * The part to heat.
  *
  * @category Heater study
  */
-export type HeaterPart = BarPartDescription | TubePartDescription | RingPartDescription | PlatePartDescription;
+export type HeaterPart = BarPartDescription | TubePartDescription | RingPartDescription | PlatePartDescription | RectanglesPartDescription;
 
 /**
  * The surroundings of the part.
@@ -400,6 +449,8 @@ export interface HeaterDescription {
   readonly capacitor: HeaterCapacitorBank;
   /** An optional flux concentrator (pancake coils). */
   readonly concentrator?: HeaterConcentrator;
+  /** Flux concentrators as r–z rectangles with their permeability (field model only). */
+  readonly concentrators?: readonly HeaterFieldConcentrator[];
   /** The part to heat. */
   readonly part: HeaterPart;
   /** Surroundings; defaults apply when absent. */

@@ -36,8 +36,10 @@ export type {
   FixedFrequencySeriesInverterDescription,
   PowerTrackingSeriesInverterDescription,
 } from "./description.js";
+export type { HeaterRectangle, RectanglesPartDescription, HeaterFieldConcentrator } from "./description.js";
 export { readHeaterDescription, HeaterDescriptionError } from "./read-description.js";
 export type { ReadHeaterDescriptionOptions } from "./read-description.js";
+export type { ResolvedRectangle, ResolvedFieldConcentrator } from "./read-description.js";
 export type {
   ResolvedSupply,
   ResolvedCurrentFedInverter,
@@ -72,6 +74,8 @@ export type {
   HeaterImpedanceSweep,
   HeaterStudy,
   HeaterUnsolvedBand,
+  HeaterFieldPicture,
+  HeaterFieldSummary,
 } from "./study-heater.js";
 export type { HeaterLosses, HeaterOperatingPoint, CoilProperties, CoilImpedanceTier } from "./operating-point.js";
 export { sweepHeater, sweepHeaterStream } from "./sweep-heater.js";
@@ -90,6 +94,8 @@ export type {
   HeaterOptimization,
   HeaterSearchOptions,
 } from "./optimize-heater.js";
+export { optimiseHeaterShard, mergeHeaterOptimisationShards } from "./optimise-shards.js";
+export type { HeaterSearchShardOptions, HeaterShardFinalist, HeaterOptimisationShard } from "./optimise-shards.js";
 export type { HeaterSummary } from "./summary.js";
 export { inductionRadialHeatUp } from "./induction-radial-heat-up.js";
 export type {

@@ -198,7 +198,7 @@ function conductorDcResistance(conductor: ResolvedConductor, resistivity: number
  *
  * @category Heater study
  */
-export type CoilImpedanceTier = "cells" | "closed-form";
+export type CoilImpedanceTier = "cells" | "closed-form" | "field";
 
 /** The coil's own properties: inductance (inductance module), conductor length and DC resistance, and the impedance tier. */
 export function coilProperties(d: ResolvedHeaterDescription, impedanceTier: CoilImpedanceTier = "cells"): CoilProperties {
@@ -400,7 +400,7 @@ export function solenoidCurrentLayer(coil: ResolvedSolenoidCoil): { innerRadius:
 const AGREEMENT = 1e-6;
 
 /** The coil's state at one frequency and permeability: winding copper and part resistance [Ω], terminal and empty-coil inductance [H] (leads excluded). */
-interface CoilState {
+export interface CoilState {
   readonly copper: number;
   readonly part: number;
   readonly L: number;
@@ -421,6 +421,24 @@ function correctionOf(exact: CoilState, cheap: CoilState): Correction {
 
 function corrected(cheap: CoilState, c: Correction): CoilState {
   return { copper: cheap.copper * c.copper, part: cheap.part * c.part, L: cheap.L + c.L, emptyL: cheap.emptyL + c.emptyL };
+}
+
+/**
+ * An exact model of the coil's state supplied from outside this file (the study's field model,
+ * tier `"field"`): the state at a frequency, part resistivity and permeability, given the
+ * surrogate's state there and the part temperature.
+ */
+export interface OutsideCoilModel {
+  state(frequency: number, resistivity: number, relativePermeability: number, withPart: boolean, partTemperature: number, cheap: CoilState): CoilState;
+  /** Validity notes of the model (replacing the closed forms' and the coil-impedance model's). */
+  readonly notes: readonly ValidityNote[];
+}
+
+const outsideModels = new WeakMap<CoilProperties, OutsideCoilModel>();
+
+/** Makes the operating points solved with `props` use `model` as their exact coil model. */
+export function useOutsideCoilModel(props: CoilProperties, model: OutsideCoilModel): void {
+  outsideModels.set(props, model);
 }
 
 /** The surrogate correction each solved point ended with: a continued point starts from its neighbour's. */
@@ -769,8 +787,10 @@ export function heaterOperatingPoint(
   let correction: Correction | null = stored !== undefined && withPart && stored.withPart ? stored.correction : null;
   let emptyCorrection: Correction | null = stored !== undefined && !withPart && !stored.withPart ? stored.correction : null;
   let cellsUsed = props.impedanceTier === "cells";
+  const outside = outsideModels.get(props);
   /** The exact model: the coil-impedance model (cells tier) or the closed form with the finite-coil coupling. */
   function exactState(f: number, mur: number, part: boolean): CoilState {
+    if (outside !== undefined) return outside.state(f, partResistivity, mur, part, partTemperature, cheapState(f, mur, part));
     if (cellsUsed) {
       const z = cellState(d, props, f, partResistivity, mur, part && model !== null);
       if (z !== null) return z;
@@ -1115,7 +1135,9 @@ export function heaterOperatingPoint(
   const { e, iterations, converged } = result;
   const s = solveInverter(e, true);
   const validity: ValidityNote[] = [];
-  if (cellsUsed) {
+  if (outside !== undefined) {
+    validity.push(...outside.notes);
+  } else if (cellsUsed) {
     validity.push(CELL_MODEL_NOTE);
     const [bandLow, bandHigh] = studyBand(d, props);
     if (e.f < bandLow || e.f > bandHigh) {

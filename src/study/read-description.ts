@@ -174,6 +174,36 @@ export interface ResolvedPartCommon {
   readonly soakBand?: number;
   /** Hardening temperature [K] (absent: none). */
   readonly hardeningTemperature?: number;
+  /**
+   * A part given as r–z rectangles (`shape: "rectangles"` in the description): its
+   * cross-section [m]. The part's shape fields then describe its bounding bar, tube or plate,
+   * which the closed-form surrogate of the field model uses.
+   */
+  readonly rectangles?: readonly ResolvedRectangle[];
+}
+
+/** A resolved r–z rectangle [m]. @category Heater study */
+export interface ResolvedRectangle {
+  /** Inner radius [m]. */
+  readonly rMin: number;
+  /** Outer radius [m]. */
+  readonly rMax: number;
+  /** Lower axial position [m]. */
+  readonly zMin: number;
+  /** Upper axial position [m]. */
+  readonly zMax: number;
+}
+
+/** A resolved flux concentrator of the field model. @category Heater study */
+export interface ResolvedFieldConcentrator {
+  /** Name. */
+  readonly name: string;
+  /** Cross-section [m]. */
+  readonly rectangles: readonly ResolvedRectangle[];
+  /** Relative permeability. */
+  readonly relativePermeability: number;
+  /** Resistivity [Ω·m], `null` for a non-conductor. */
+  readonly resistivity: number | null;
 }
 
 /** A resolved bar. @category Heater study */
@@ -252,6 +282,8 @@ export interface ResolvedHeaterDescription {
   readonly capacitor: ResolvedCapacitorBank;
   /** Concentrator or `null`. */
   readonly concentrator: ResolvedConcentrator | null;
+  /** Flux concentrators as r–z rectangles (field model); absent when none are given. */
+  readonly concentrators?: readonly ResolvedFieldConcentrator[];
   /** Part. */
   readonly part: ResolvedPart;
   /** Environment. */
@@ -385,7 +417,7 @@ class Reader {
    * `requireUnits` (study files) a bare number is refused where the field has a dimension; text
    * that is only a number (`"2.2"`) is refused everywhere a unit is expected. NaN after a problem.
    */
-  quantity(path: string, value: unknown, unit: string, check: "positive" | "non-negative", required = true): number {
+  quantity(path: string, value: unknown, unit: string, check: "positive" | "non-negative" | "finite", required = true): number {
     if (value === undefined) {
       return required ? this.fail(path, value, unit, check === "positive" ? "a finite number > 0" : "a finite number ≥ 0") : Number.NaN;
     }
@@ -565,10 +597,10 @@ function readInverter(rd: Reader, value: unknown): ResolvedInverter | undefined 
 function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | undefined {
   const o = rd.object("part", value, [
     "shape", "material", "startTemperature", "targetTemperature", "emissivity", "targetLocation", "soakBand", "hardeningTemperature",
-    "radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness",
+    "radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness", "rectangles",
   ]);
   if (o === undefined) return undefined;
-  const shape = rd.oneOf("part.shape", o.shape, ["bar", "tube", "ring", "plate"] as const);
+  const shape = rd.oneOf("part.shape", o.shape, ["bar", "tube", "ring", "plate", "rectangles"] as const);
   const material = rd.material("part.material", o.material, MATERIAL_IDS);
   const startTemperature = rd.optional("part.startTemperature", o.startTemperature, "K", "positive", ambient);
   const targetTemperature = rd.quantity("part.targetTemperature", o.targetTemperature, "K", "positive");
@@ -582,16 +614,18 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
     tube: ["outerRadius", "wallThickness", "length"],
     ring: ["outerRadius", "innerRadius", "height"],
     plate: ["length", "width", "thickness"],
+    rectangles: ["rectangles"],
   };
   if (shape !== undefined) {
     const mine = fields[shape] ?? [];
-    for (const key of ["radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness"]) {
+    for (const key of ["radius", "length", "outerRadius", "wallThickness", "innerRadius", "height", "width", "thickness", "rectangles"]) {
       if (!mine.includes(key) && o[key] !== undefined) rd.fail(`part.${key}`, o[key], "", `absent for a ${shape} part`);
     }
   }
   const dim = (key: string): number => rd.quantity(`part.${key}`, o[key], "m", "positive");
   if (material === undefined || shape === undefined) {
-    if (shape !== undefined) for (const key of fields[shape] ?? []) dim(key);
+    if (shape === "rectangles") readRectangles(rd, "part.rectangles", o.rectangles);
+    else if (shape !== undefined) for (const key of fields[shape] ?? []) dim(key);
     return undefined;
   }
   const radialShape = shape === "bar" || shape === "tube";
@@ -628,7 +662,96 @@ function readPart(rd: Reader, value: unknown, ambient: number): ResolvedPart | u
     }
     case "plate":
       return { ...common, shape, length: dim("length"), width: dim("width"), thickness: dim("thickness") };
+    case "rectangles": {
+      // the bounding bar or tube stands in for the closed-form surrogate; under a pancake coil
+      // the caller turns it into the bounding plate
+      const rectangles = readRectangles(rd, "part.rectangles", o.rectangles);
+      if (rectangles === undefined) return undefined;
+      const b = rectangleBounds(rectangles);
+      return b.rMin > 0
+        ? { ...common, shape: "tube", outerRadius: b.rMax, wallThickness: b.rMax - b.rMin, length: b.zMax - b.zMin, rectangles }
+        : { ...common, shape: "bar", radius: b.rMax, length: b.zMax - b.zMin, rectangles };
+    }
   }
+}
+
+/** Bounding box of rectangles. */
+function rectangleBounds(rectangles: readonly ResolvedRectangle[]): ResolvedRectangle {
+  return {
+    rMin: Math.min(...rectangles.map((x) => x.rMin)),
+    rMax: Math.max(...rectangles.map((x) => x.rMax)),
+    zMin: Math.min(...rectangles.map((x) => x.zMin)),
+    zMax: Math.max(...rectangles.map((x) => x.zMax)),
+  };
+}
+
+/** A list of r–z rectangles (at least one, each with rMax > rMin ≥ 0 and zMax > zMin, none overlapping another), or undefined after a problem. */
+function readRectangles(rd: Reader, path: string, value: unknown): ResolvedRectangle[] | undefined {
+  if (!Array.isArray(value) || value.length === 0) {
+    rd.fail(path, value, "", "a non-empty array of rectangles { rMin, rMax, zMin, zMax }");
+    return undefined;
+  }
+  const out: ResolvedRectangle[] = [];
+  let ok = true;
+  (value as unknown[]).forEach((item, k) => {
+    const p = `${path}[${k}]`;
+    const o = rd.object(p, item, ["rMin", "rMax", "zMin", "zMax"]);
+    if (o === undefined) {
+      ok = false;
+      return;
+    }
+    const rMin = rd.quantity(`${p}.rMin`, o.rMin, "m", "non-negative");
+    const rMax = rd.quantity(`${p}.rMax`, o.rMax, "m", "positive");
+    const zMin = rd.quantity(`${p}.zMin`, o.zMin, "m", "finite");
+    const zMax = rd.quantity(`${p}.zMax`, o.zMax, "m", "finite");
+    if (![rMin, rMax, zMin, zMax].every(Number.isFinite)) {
+      ok = false;
+      return;
+    }
+    if (!(rMax > rMin)) {
+      rd.fail(`${p}.rMax`, o.rMax, "", `> ${p}.rMin = ${limitText(rMin, "m", o.rMin)}`);
+      ok = false;
+    }
+    if (!(zMax > zMin)) {
+      rd.fail(`${p}.zMax`, o.zMax, "", `> ${p}.zMin = ${limitText(zMin, "m", o.zMin)}`);
+      ok = false;
+    }
+    out.push({ rMin, rMax, zMin, zMax });
+  });
+  if (!ok) return undefined;
+  for (let i = 0; i < out.length; i++) {
+    for (let j = i + 1; j < out.length; j++) {
+      const a = out[i]!;
+      const b = out[j]!;
+      if (Math.min(a.rMax, b.rMax) > Math.max(a.rMin, b.rMin) && Math.min(a.zMax, b.zMax) > Math.max(a.zMin, b.zMin)) {
+        rd.fail(`${path}[${j}]`, value[j], "", `a rectangle that does not overlap ${path}[${i}]`);
+        return undefined;
+      }
+    }
+  }
+  return out;
+}
+
+/** Flux concentrators of the field model, or undefined after a problem. */
+function readFieldConcentrators(rd: Reader, value: unknown): ResolvedFieldConcentrator[] | undefined {
+  if (!Array.isArray(value)) {
+    rd.fail("concentrators", value, "", "an array of concentrators { rectangles, relativePermeability, resistivity? }");
+    return undefined;
+  }
+  const out: ResolvedFieldConcentrator[] = [];
+  (value as unknown[]).forEach((item, k) => {
+    const p = `concentrators[${k}]`;
+    const o = rd.object(p, item, ["name", "rectangles", "relativePermeability", "resistivity"]);
+    if (o === undefined) return;
+    const name = o.name === undefined ? `concentrator${k + 1}` : typeof o.name === "string" && o.name !== "" ? o.name : (rd.fail(`${p}.name`, o.name, "", "a non-empty string"), "");
+    if (out.some((c) => c.name === name)) rd.fail(`${p}.name`, o.name, "", "a name unique among the concentrators");
+    const rectangles = readRectangles(rd, `${p}.rectangles`, o.rectangles);
+    const mur = o.relativePermeability;
+    if (typeof mur !== "number" || !Number.isFinite(mur) || mur < 1 || mur > 1e6) rd.fail(`${p}.relativePermeability`, mur, "", "a number from 1 to 1e6");
+    const resistivity = o.resistivity === undefined ? null : rd.quantity(`${p}.resistivity`, o.resistivity, "Ω·m", "positive");
+    if (rectangles !== undefined && typeof mur === "number") out.push({ name, rectangles, relativePermeability: mur, resistivity });
+  });
+  return out;
 }
 
 /**
@@ -682,7 +805,7 @@ export function readHeaterDescription(input: unknown, options: ReadHeaterDescrip
   requireKnownKeys(WHERE, "options", options, ["requireUnits"]);
   if (options.requireUnits !== undefined && typeof options.requireUnits !== "boolean") throw new InputError(WHERE, "options.requireUnits", options.requireUnits, "", "a boolean");
   const rd = new Reader(options.requireUnits === true);
-  const top = rd.object("", input, ["$schema", "title", "notes", "supply", "inverter", "coil", "capacitor", "concentrator", "part", "environment"]);
+  const top = rd.object("", input, ["$schema", "title", "notes", "supply", "inverter", "coil", "capacitor", "concentrator", "part", "environment", "concentrators"]);
   if (top === undefined) throw new HeaterDescriptionError([new InputError(WHERE, "description", input, "", "an object")]);
   if (top.title !== undefined && typeof top.title !== "string") rd.fail("title", top.title, "", "a string");
   if (top.notes !== undefined && typeof top.notes !== "string") rd.fail("notes", top.notes, "", "a string");
@@ -740,9 +863,16 @@ export function readHeaterDescription(input: unknown, options: ReadHeaterDescrip
       };
     }
   }
-  const part = readPart(rd, top.part, environment.ambientTemperature);
+  let part = readPart(rd, top.part, environment.ambientTemperature);
+  const concentrators = top.concentrators === undefined ? undefined : readFieldConcentrators(rd, top.concentrators);
 
   // coil and part together
+  if (coil !== undefined && part?.rectangles !== undefined && coil.shape === "pancake") {
+    // a part of rectangles under a pancake coil: its bounding plate stands in for the surrogate
+    const b = rectangleBounds(part.rectangles);
+    const { rectangles, material, startTemperature, targetTemperature, emissivity } = part;
+    part = { material, startTemperature, targetTemperature, emissivity, shape: "plate", length: 2 * b.rMax, width: 2 * b.rMax, thickness: b.zMax - b.zMin, rectangles };
+  }
   if (coil !== undefined && part !== undefined) {
     if (coil.shape === "solenoid" && part.shape === "plate") rd.fail("part.shape", part.shape, "", `"bar", "tube" or "ring" inside a solenoid coil`);
     if (coil.shape === "pancake" && part.shape !== "plate") rd.fail("part.shape", part.shape, "", `"plate" under a pancake coil`);
@@ -769,5 +899,6 @@ export function readHeaterDescription(input: unknown, options: ReadHeaterDescrip
     concentrator,
     part,
     environment,
+    ...(concentrators === undefined ? {} : { concentrators }),
   };
 }

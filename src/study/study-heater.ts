@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { DEFER_TO_CODES, InputError, requireInteger, requireKnownKeys, requireObject } from "../core/index.js";
+import { DEFER_TO_CODES, InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import { capacitorElement, inductorElement, parallelNetwork, seriesNetwork, tankImpedanceSweep } from "../tank/index.js";
 import { specificHeatAt } from "../materials/index.js";
@@ -16,11 +16,14 @@ import { barInLongCoil, tubeInLongCoil } from "../workpiece/index.js";
 import { NoOscillationError, coilImpedanceAt, coilProperties, heaterOperatingPoint } from "./operating-point.js";
 import type { CoilProperties, HeaterLosses, HeaterOperatingPoint } from "./operating-point.js";
 import { readHeaterDescription } from "./read-description.js";
-import type { ResolvedHeaterDescription, ResolvedPart } from "./read-description.js";
+import type { ResolvedHeaterDescription, ResolvedPart, ResolvedRectangle } from "./read-description.js";
 import type { HeaterDescription } from "./description.js";
+import { prepareHeaterFieldModel } from "./field-model.js";
+import type { HeaterFieldModel } from "./field-model.js";
+import { fieldPicture } from "./field-picture.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
-const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints", "radialHeatUp"]);
+const STUDY_OPTION_FIELDS: readonly string[] = Object.freeze(["heatUp", "temperatureScan", "impedanceSweep", "heatUpPoints", "radialHeatUp", "model"]);
 
 /**
  * Options of {@link studyHeater}: which of the slower parts of the study to run.
@@ -41,6 +44,87 @@ export interface StudyHeaterOptions {
   readonly radialHeatUp?: boolean;
   /** Operating points of the initial temperature grid of the power curve, an integer ≥ 4 (default: one per 50 K, 6 … 24, plus clusters at the Curie transition and the specific-heat peak); adaptive refinement adds up to 48 more. */
   readonly heatUpPoints?: number;
+  /**
+   * How the coil's impedance and the part's coupling are computed: `"closed-form"` (default, the
+   * fast closed forms and the coil-impedance model) or `"field"` (the axisymmetric field solver
+   * `solveAxisymmetricField`, solved at anchor temperatures: slower, seconds per anchor; see
+   * {@link HeaterFieldSummary}).
+   */
+  readonly model?: "closed-form" | "field";
+}
+
+/**
+ * Samples of the field solution at the start temperature (model `"field"`), at the operating
+ * point's coil current: what the report draws.
+ *
+ * @category Heater study
+ */
+export interface HeaterFieldPicture {
+  /** Part temperature of the solution [K]. */
+  readonly temperature: number;
+  /** Frequency of the solution [Hz]. */
+  readonly frequency: number;
+  /** RMS coil current the samples are scaled to [A]. */
+  readonly coilCurrentRms: number;
+  /** Radii of the |B| grid [m], ascending from the axis. */
+  readonly r: readonly number[];
+  /** Axial positions of the |B| grid [m], ascending. */
+  readonly z: readonly number[];
+  /** |B| (RMS, $\sqrt{|B_r|^2 + |B_z|^2}$) at each grid node, row by row (z major) [T]. */
+  readonly fluxDensity: readonly number[];
+  /** Power density in the part [W/m³], per part rectangle, on cells graded towards its surfaces: cell edges in r and z and the value at each cell centre (z major). */
+  readonly powerDensity: readonly {
+    /** Cell edges in r [m]. */
+    readonly r: readonly number[];
+    /** Cell edges in z [m]. */
+    readonly z: readonly number[];
+    /** Power density at each cell centre, z major [W/m³]. */
+    readonly values: readonly number[];
+  }[];
+  /** The turns' cross-sections (circles: centre r, z and outer and inner radius) [m]. */
+  readonly turns: readonly {
+    /** Radius of the centre [m]. */
+    readonly r: number;
+    /** Axial position of the centre [m]. */
+    readonly z: number;
+    /** Outer radius of the cross-section [m]. */
+    readonly radius: number;
+    /** Bore radius (tube), 0 for a solid conductor [m]. */
+    readonly innerRadius: number;
+  }[];
+  /** The part's cross-section as r–z rectangles [m]. */
+  readonly part: readonly ResolvedRectangle[];
+  /** Other regions (concentrators) as r–z rectangles [m]. */
+  readonly passive: readonly ResolvedRectangle[];
+}
+
+/**
+ * What the field model did (model `"field"`).
+ *
+ * @category Heater study
+ */
+export interface HeaterFieldSummary {
+  /** The anchor temperatures where the field was solved, with the operating frequency and the part's permeability there and the solutions it took. */
+  readonly anchors: readonly {
+    /** Part temperature [K]. */
+    readonly temperature: number;
+    /** Frequency of the (last) field solution there [Hz]. */
+    readonly frequency: number;
+    /** The part's relative permeability in it. */
+    readonly relativePermeability: number;
+    /** Field solutions run at this anchor. */
+    readonly solves: number;
+  }[];
+  /** Field solutions run in all (empty coil and loaded). */
+  readonly solves: number;
+  /** Wall time spent in field solutions [s]. */
+  readonly seconds: number;
+  /** Largest mesh solved [nodes]. */
+  readonly largestMesh: number;
+  /** Largest estimated relative error of a solution's impedance. */
+  readonly largestEstimatedError: number;
+  /** The field picture at the start temperature. */
+  readonly picture: HeaterFieldPicture | null;
 }
 
 /**
@@ -262,10 +346,56 @@ export interface HeaterStudy {
   readonly cautions: readonly Caution[];
   /** Every approximation used and why, one note per code. */
   readonly validity: readonly ValidityNote[];
+  /** The model of the coil's impedance and the part's coupling: `"closed-form"` (default) or `"field"`. */
+  readonly model: "closed-form" | "field";
+  /** What the field model did, with the field picture (`null` with the closed-form model). */
+  readonly field: HeaterFieldSummary | null;
+}
+
+/**
+ * Volume and outer surface of a body of revolution given as r–z rectangles that do not overlap:
+ * the volume is the sum of the rings'; the surface the rectangles' edges less the stretches two
+ * rectangles share (a horizontal edge from r₁ to r₂ sweeps $\pi(r_2^2 - r_1^2)$, a vertical one
+ * at r over a height h sweeps $2\pi r h$).
+ */
+export function rectanglesGeometry(rectangles: readonly ResolvedRectangle[]): { volume: number; surfaceArea: number } {
+  let volume = 0;
+  let area = 0;
+  const overlap = (a0: number, a1: number, b0: number, b1: number): [number, number] | null => {
+    const lo = Math.max(a0, b0);
+    const hi = Math.min(a1, b1);
+    return hi > lo ? [lo, hi] : null;
+  };
+  for (const a of rectangles) {
+    volume += Math.PI * (a.rMax * a.rMax - a.rMin * a.rMin) * (a.zMax - a.zMin);
+    // horizontal edges (bottom, top): their area less the stretches covered by a neighbour's opposite edge
+    for (const [z, opposite] of [[a.zMin, "zMax"], [a.zMax, "zMin"]] as const) {
+      let covered = 0;
+      for (const b of rectangles) {
+        if (b === a || b[opposite] !== z) continue;
+        const o = overlap(a.rMin, a.rMax, b.rMin, b.rMax);
+        if (o !== null) covered += Math.PI * (o[1] * o[1] - o[0] * o[0]);
+      }
+      area += Math.PI * (a.rMax * a.rMax - a.rMin * a.rMin) - covered;
+    }
+    // vertical edges (inner, outer)
+    for (const [r, opposite] of [[a.rMin, "rMax"], [a.rMax, "rMin"]] as const) {
+      if (r === 0) continue;
+      let covered = 0;
+      for (const b of rectangles) {
+        if (b === a || b[opposite] !== r) continue;
+        const o = overlap(a.zMin, a.zMax, b.zMin, b.zMax);
+        if (o !== null) covered += o[1] - o[0];
+      }
+      area += 2 * Math.PI * r * (a.zMax - a.zMin - covered);
+    }
+  }
+  return { volume, surfaceArea: area };
 }
 
 /** Geometry of the part: volume and heat-losing surface (`workpieceGeometry`). */
 function partGeometry(part: ResolvedPart): { volume: number; surfaceArea: number } {
+  if (part.rectangles !== undefined) return rectanglesGeometry(part.rectangles);
   switch (part.shape) {
     case "bar":
       return workpieceGeometry({ shape: "bar", radius: part.radius, length: part.length });
@@ -311,7 +441,14 @@ const REFINEMENT_BUDGET = 32;
  * power or frequency changes by more than 2 % between neighbours and at the edges of any band
  * without an operating point (located to 0.5 K).
  */
-function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operating: HeaterOperatingPoint, initialCount: number | undefined, enabled: boolean): PowerCurve {
+function powerCurve(
+  d: ResolvedHeaterDescription,
+  props: CoilProperties,
+  operating: HeaterOperatingPoint,
+  initialCount: number | undefined,
+  enabled: boolean,
+  fieldModel: HeaterFieldModel | null,
+): PowerCurve {
   const part = d.part;
   const material = part.material;
   const start = part.startTemperature;
@@ -319,7 +456,7 @@ function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operati
   const solve = (t: number, from: HeaterOperatingPoint | null): CurveSample => {
     if (t === start) return { t, p: operating, reason: "", noOscillation: false };
     try {
-      return { t, p: heaterOperatingPoint(d, t, true, props, from), reason: "", noOscillation: false };
+      return { t, p: seededOperatingPoint(d, t, true, props, from, fieldModel), reason: "", noOscillation: false };
     } catch (e) {
       if (!(e instanceof InputError)) throw e;
       return { t, p: null, reason: e.message, noOscillation: e instanceof NoOscillationError };
@@ -342,9 +479,23 @@ function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operati
       }
     }
     if (peakT > start && peakT < top) for (let k = -3; k <= 3; k++) grid.add(Math.min(top, Math.max(start, peakT + 10 * k)));
+    // the field model: solve the anchors first (field solutions), then the rest between them
+    const anchors = fieldModel === null ? [] : fieldAnchorTemperatures(start, top, part.targetTemperature, curie, material.permeability?.transitionWidth ?? 0);
+    for (const t of anchors) grid.add(t);
+    const byTemperature = new Map<number, CurveSample>();
     let previous: HeaterOperatingPoint | null = operating;
+    if (fieldModel !== null) {
+      fieldModel.mode = "anchor";
+      for (const t of anchors) {
+        const sample = solve(t, previous);
+        if (sample.p !== null) previous = sample.p;
+        byTemperature.set(t, sample);
+      }
+      fieldModel.mode = "interpolate";
+      previous = operating;
+    }
     for (const t of [...grid].sort((x, y) => x - y)) {
-      const sample = solve(t, previous);
+      const sample: CurveSample = byTemperature.get(t) ?? solve(t, previous);
       if (sample.p !== null) previous = sample.p;
       samples.push(sample);
     }
@@ -425,6 +576,44 @@ function powerCurve(d: ResolvedHeaterDescription, props: CoilProperties, operati
   };
 }
 
+/**
+ * The operating point; with the field model at an anchor, started from the closed-form model's
+ * point at the same temperature (its correction of the common surrogate is close to the field
+ * model's, so the field is solved once at the converged point instead of at a first estimate).
+ */
+function seededOperatingPoint(
+  d: ResolvedHeaterDescription,
+  t: number,
+  withPart: boolean,
+  props: CoilProperties,
+  from: HeaterOperatingPoint | null,
+  fieldModel: HeaterFieldModel | null,
+): HeaterOperatingPoint {
+  let start = from;
+  if (fieldModel !== null && fieldModel.mode === "anchor") {
+    try {
+      start = heaterOperatingPoint(d, t, withPart, fieldModel.seedProperties, from);
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+    }
+  }
+  return heaterOperatingPoint(d, t, withPart, props, start);
+}
+
+/**
+ * Anchor temperatures of the field model: five across the power curve's span, the target, and
+ * four across the Curie transition of a magnetic part.
+ */
+function fieldAnchorTemperatures(start: number, top: number, target: number, curie: number | null, width: number): number[] {
+  const set = new Set<number>();
+  for (let i = 1; i <= 4; i++) set.add(start + ((top - start) * i) / 4);
+  if (target > start && target < top) set.add(target);
+  if (curie !== null && curie > start && curie < top) {
+    for (const t of [curie - width - 40, curie - width / 2, curie, curie + 20]) if (t > start && t < top) set.add(t);
+  }
+  return [...set].sort((a, b) => a - b);
+}
+
 /** Temperatures from `start` to `end`, uniform, with extra points around the Curie transition. */
 function temperatureGrid(start: number, end: number, count: number, curie: number | null, width: number): number[] {
   const set = new Set<number>();
@@ -499,12 +688,23 @@ function sortCautions(cautions: readonly Caution[]): Caution[] {
  * positive (tested); a design the source or tank cannot serve throws. Each module's accuracy and
  * validity apply, and are listed in `validity` where they are stretched.
  *
+ * With `options.model: "field"` steps 1–2 come from the axisymmetric field solver
+ * (`solveAxisymmetricField`, accuracy 1e-2) at anchor temperatures, interpolated in temperature
+ * between them: against the solver called directly at the operating point within 0.1 % at an
+ * anchor and 1 % between anchors (plus the solver's estimated error); on a bar longer than the
+ * coil it agrees with the default model within that model's stated error (0.1 % frequency,
+ * 0.3 % power). Seconds to a minute per study instead of milliseconds; parts and concentrators
+ * given as r–z rectangles need it.
+ *
  * @param description - the design (see {@link HeaterDescription}); text quantities allowed
  * @param options - which slower parts to run (all by default)
  * @returns the {@link HeaterStudy}
  * @throws {@link HeaterDescriptionError} (an {@link InputError}) when the description is
- * invalid, naming the field path; {@link InputError} when `options` is not an object or
- * `options.heatUpPoints` is not an integer from 4 to 1000 (each point costs a coupling solution)
+ * invalid, naming the field path; {@link InputError} when `options` is not an object,
+ * `options.heatUpPoints` is not an integer from 4 to 1000 (each point costs a coupling solution),
+ * `options.model` is not `"closed-form"` or `"field"`, the description has a part or
+ * concentrators as r–z rectangles without `model: "field"`, or (field model) the turns touch or
+ * a body reaches into them
  * @example
  * ```ts
  * import { studyHeater } from "fluxwright";
@@ -527,8 +727,19 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
   const heatUpPoints = options.heatUpPoints === undefined ? undefined : requireInteger("studyHeater", "options.heatUpPoints", options.heatUpPoints, 4);
   // bounded work: each point is a coupling solution (about 0.1 ms)
   if (heatUpPoints !== undefined && heatUpPoints > 1000) throw new InputError("studyHeater", "options.heatUpPoints", heatUpPoints, "", "an integer between 4 and 1000");
+  const model = options.model === undefined ? "closed-form" : requireOneOf("studyHeater", "options.model", options.model, ["closed-form", "field"] as const);
   const d = readHeaterDescription(description);
-  const props = coilProperties(d);
+  if (model !== "field" && (d.part.rectangles !== undefined || (d.concentrators?.length ?? 0) > 0)) {
+    throw new InputError(
+      "studyHeater",
+      "options.model",
+      model,
+      "",
+      `"field" for a ${d.part.rectangles !== undefined ? "part given as r–z rectangles" : "design with concentrators given as r–z rectangles"} (the closed forms cover bars, tubes, rings and plates only): studyHeater(description, { model: "field" }), or --model field on the command line`,
+    );
+  }
+  const props = coilProperties(d, model === "field" ? "field" : "cells");
+  const fieldModel = model === "field" ? prepareHeaterFieldModel(d, props) : null;
   const part = d.part;
   const material = part.material;
   const geometry = partGeometry(part);
@@ -543,12 +754,12 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
       throw new InputError("studyHeater", "description", description, "", `a design the inverter can run ${what} (${e.message})`);
     }
   };
-  const emptyCoil = must(() => heaterOperatingPoint(d, part.startTemperature, false, props), "with the empty coil");
-  const operating = must(() => heaterOperatingPoint(d, part.startTemperature, true, props, emptyCoil), "with the part at its start temperature");
+  const emptyCoil = must(() => seededOperatingPoint(d, part.startTemperature, false, props, null, fieldModel), "with the empty coil");
+  const operating = must(() => seededOperatingPoint(d, part.startTemperature, true, props, emptyCoil, fieldModel), "with the part at its start temperature");
 
   // the part power against temperature, over the material's whole range (independent of the
   // target), sampled adaptively and solved by continuation from the neighbouring point
-  const curve = powerCurve(d, props, operating, heatUpPoints, options.heatUp !== false || options.temperatureScan !== false);
+  const curve = powerCurve(d, props, operating, heatUpPoints, options.heatUp !== false || options.temperatureScan !== false, fieldModel);
   const atTarget = curve.solveAt(part.targetTemperature);
   const validity: ValidityNote[] = [...operating.validity, ...(atTarget?.validity ?? []), ...emptyCoil.validity];
   const allPoints: HeaterOperatingPoint[] = [emptyCoil, operating];
@@ -612,7 +823,7 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
     // ---- surface and core (radial model) for bars and tubes in a solenoid ----
     const targetLocation = part.targetLocation ?? "mean";
     const radial =
-      (options.radialHeatUp !== false || targetLocation !== "mean") && (part.shape === "bar" || part.shape === "tube") && d.coil.shape === "solenoid"
+      (options.radialHeatUp !== false || targetLocation !== "mean") && (part.shape === "bar" || part.shape === "tube") && part.rectangles === undefined && d.coil.shape === "solenoid"
         ? radialPart(d, part, curve, thermal.timeToTarget !== null ? 4 * thermal.timeToTarget : thermal.duration, validity)
         : null;
     heatUp = {
@@ -750,6 +961,21 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
     impedance,
     cautions: sortCautions(cautions).map((c) => (c.message.endsWith(DEFER_TO_CODES) ? c : { ...c, message: `${c.message} ${DEFER_TO_CODES}` })),
     validity: uniqueNotes(validity),
+    model,
+    field: fieldModel === null ? null : fieldSummary(fieldModel, operating),
+  };
+}
+
+/** The field model's record, with the picture at the start temperature. */
+function fieldSummary(fieldModel: HeaterFieldModel, operating: HeaterOperatingPoint): HeaterFieldSummary {
+  const solution = fieldModel.solutionAt(operating.partTemperature);
+  return {
+    anchors: fieldModel.anchorList(),
+    solves: fieldModel.work.solves,
+    seconds: fieldModel.work.seconds,
+    largestMesh: fieldModel.work.largestMesh,
+    largestEstimatedError: fieldModel.work.largestEstimatedError,
+    picture: solution === null ? null : fieldPicture(fieldModel.geometry, solution, operating),
   };
 }
 

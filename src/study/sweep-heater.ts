@@ -209,13 +209,14 @@ export function shardRange(total: number, shard: HeaterShard | undefined): reado
   return [Math.floor(((shard.index - 1) * total) / shard.count), Math.floor((shard.index * total) / shard.count)];
 }
 
-function checkShard(where: string, shard: unknown): HeaterShard | undefined {
+/** Checks a shard `{ index, count }` (undefined passes through), naming `path` in errors. */
+export function checkShard(where: string, shard: unknown, path = "options.shard"): HeaterShard | undefined {
   if (shard === undefined) return undefined;
-  if (typeof shard !== "object" || shard === null) throw new InputError(where, "options.shard", shard, "", "an object { index, count }");
-  requireKnownKeys(where, "options.shard", shard, ["index", "count"]);
+  if (typeof shard !== "object" || shard === null) throw new InputError(where, path, shard, "", "an object { index, count }");
+  requireKnownKeys(where, path, shard, ["index", "count"]);
   const { index, count } = shard as HeaterShard;
-  if (typeof count !== "number" || !Number.isInteger(count) || count < 1 || count > 1e6) throw new InputError(where, "options.shard.count", count, "", "an integer in [1, 1e6]");
-  if (typeof index !== "number" || !Number.isInteger(index) || index < 1 || index > count) throw new InputError(where, "options.shard.index", index, "", `an integer in [1, ${count}]`);
+  if (typeof count !== "number" || !Number.isInteger(count) || count < 1 || count > 1e6) throw new InputError(where, `${path}.count`, count, "", "an integer in [1, 1e6]");
+  if (typeof index !== "number" || !Number.isInteger(index) || index < 1 || index > count) throw new InputError(where, `${path}.index`, index, "", `an integer in [1, ${count}]`);
   return { index, count };
 }
 

@@ -50,9 +50,12 @@ export interface HeaterPoolOptions {
    */
   readonly signal?: AbortSignal;
   /**
-   * Where the worker script is. In Node the default finds `dist/study/heater-worker.js` of the
-   * installed package; in a browser give the URL at which that file is served (a bundler's
-   * `new URL("fluxwright/study/heater-worker", import.meta.url)`).
+   * Where the worker script is (the package subpath `fluxwright/worker`, the file
+   * `dist/study/heater-worker.js`). In Node the default finds it in the installed package; in a
+   * browser give the URL at which that file is served: with Vite,
+   * `import workerUrl from "fluxwright/worker?url"`; where `import.meta.resolve` knows the
+   * package (Deno, an import map), `import.meta.resolve("fluxwright/worker")`; otherwise copy
+   * the file (it is self-contained) to your static assets and give its URL.
    */
   readonly workerUrl?: string | URL;
 }
@@ -159,7 +162,7 @@ async function importByName<T>(name: string): Promise<T> {
 async function defaultWorkerUrl(where: string): Promise<URL> {
   const here = import.meta.url;
   if (!isNode()) {
-    throw new InputError(where, "options.workerUrl", undefined, "", "the URL of fluxwright's dist/study/heater-worker.js as served to the browser (required outside Node)");
+    throw new InputError(where, "options.workerUrl", undefined, "", "the URL at which the worker script fluxwright/worker (dist/study/heater-worker.js) is served, e.g. from Vite's import workerUrl from \"fluxwright/worker?url\" (required outside Node)");
   }
   const { existsSync } = await importByName<{ existsSync: (p: URL) => boolean }>("node:fs");
   // the bundle may have put this code in the study entry (dist/study) or in a shared chunk (dist)
@@ -241,6 +244,15 @@ export function batchSize(total: number, workers: number, maxBatch = 32): number
 }
 
 /**
+ * The size of the next batch handed to a worker: `batch`, but near the end of the run no more
+ * than the remaining items over twice the workers (down to one item), so that the workers
+ * finish together instead of one of them running a last full batch alone.
+ */
+export function nextBatchSize(remaining: number, batch: number, workers: number): number {
+  return Math.max(1, Math.min(batch, Math.ceil(remaining / (2 * Math.max(1, workers)))));
+}
+
+/**
  * Runs `items` through the task runner `kind` on a pool and yields the results in item order.
  * At most about `4 × workers` batches are in flight or waiting to be yielded, so memory stays
  * bounded however many items there are and however slowly the consumer reads.
@@ -279,13 +291,16 @@ export async function* runPool(
   if (isAborted(signal)) throw abortError(signal as AbortSignal);
   const iterator = items[Symbol.iterator]();
   const batch = batchSize(total, options.workers);
+  let taken = 0;
   const nextBatch = (): unknown[] => {
+    const size = options.workers === 0 ? batch : nextBatchSize(total - taken, batch, options.workers);
     const out: unknown[] = [];
-    while (out.length < batch) {
+    while (out.length < size) {
       const r = iterator.next();
       if (r.done === true) break;
       out.push(r.value);
     }
+    taken += out.length;
     return out;
   };
 

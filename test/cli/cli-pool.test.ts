@@ -73,6 +73,31 @@ describe("fluxwright sweep --ndjson, --shard and merge", () => {
     expect((await run(["merge", "race.json"], { "race.json": race })).err).toContain("not the NDJSON output of a sharded sweep");
   });
 
+  it("optimise --shard: three shards merged print what one run prints with --json (and --text), any order", async () => {
+    const search = ["optimise", "race.json", "--power", "1.5 kW", "--turns", "4,5,6,7,8", "--min-frequency", "20 kHz", "--keep", "3", "--workers", "0", "--quiet"];
+    const whole = await run([...search, "--json"]);
+    expect(whole.status, whole.err).toBe(0);
+    const text = await run(search);
+    const files: Record<string, string> = {};
+    for (const i of [1, 2, 3]) {
+      const part = await run([...search, "--json", "--shard", `${i}/3`]);
+      expect(part.status, part.err).toBe(0);
+      expect(part.out.trim().split("\n")).toHaveLength(1);
+      expect(JSON.parse(part.out)).toMatchObject({ format: "fluxwright-optimisation-shard", shard: { index: i, count: 3 } });
+      files[`s${i}.json`] = part.out;
+    }
+    const merged = await run(["merge", "s2.json", "s3.json", "s1.json"], files);
+    expect(merged.status, merged.err).toBe(0);
+    expect(merged.out).toBe(whole.out);
+    expect((await run(["merge", "--text", "s1.json", "s2.json", "s3.json"], files)).out).toBe(text.out);
+    const missing = await run(["merge", "s1.json", "s3.json"], files);
+    expect([missing.status, missing.err]).toEqual([2, expect.stringContaining("missing: 2") as unknown]);
+    files.other = (await run([...search.map((a) => (a === "3" ? "2" : a)), "--json", "--shard", "2/3"])).out;
+    expect((await run(["merge", "s1.json", "other", "s3.json"], files)).err).toContain("other");
+    expect((await run(["merge", "--csv", "s1.json", "s2.json", "s3.json"], files)).status).toBe(2);
+    expect((await run([...search, "--shard", "1/3"])).status).toBe(2);
+  }, 60_000);
+
   it("refuses bad --workers and --shard values, and --shard without --ndjson (exit 2)", async () => {
     for (const args of [["--workers", "-1"], ["--workers", "two"], ["--workers", "300"], ["--shard", "0/3", "--ndjson"], ["--shard", "4/3", "--ndjson"], ["--shard", "1/3"], ["--ndjson", "--csv"]]) {
       const r = await run([...sweep, ...args]);

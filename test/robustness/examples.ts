@@ -4,6 +4,7 @@
  *
  * A new export from src/index.ts without an entry here fails the suite (public-api.test.ts).
  */
+import * as api from "../../src/index.js";
 import {
   austeniticStainless,
   celsius,
@@ -1046,6 +1047,7 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       "heatUp.radial": "null for parts other than bars and tubes in a solenoid (a ring here, documented)",
       temperatureScan: "null when not asked for (documented)",
       impedance: "null when not asked for (documented)",
+      field: "null with the closed-form model (documented)",
     },
   },
   inductionRadialHeatUp: {
@@ -1129,6 +1131,30 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     },
     quantityStrings: true,
     badString: "12 parsecs",
+  },
+
+  optimiseHeaterShard: {
+    args: () => [heater(), { targetPower: "1 kW", limits: { minFrequency: "20 kHz" }, keep: 3 }, { shard: { index: 1, count: 2 } }],
+    skip: { paths: ["0.*"], reason: "the description goes through the same reader as studyHeater, checked there" },
+    allow: [{ paths: ["1.limits", "1.limits.minFrequency", "1.keep"], kinds: ["undefined"], reason: OPTIONAL }],
+    nonFinite: {
+      "finalists[].switchingFrequency": "null unless the inverter runs at a fixed frequency (documented)",
+      "finalists[].timeToTarget": "null for a power goal: no heat-up is run (documented)",
+      "finalists[].summary.timeToTarget": "null for a power goal: no heat-up is run (documented)",
+    },
+    quantityStrings: true,
+    badString: "12 parsecs",
+  },
+  mergeHeaterOptimisationShards: {
+    args: () => {
+      const goal = { targetPower: "1 kW", keep: 2 };
+      return [[1, 2].map((index) => api.optimiseHeaterShard(heater() as never, goal, { shard: { index, count: 2 } }))];
+    },
+    skip: { paths: ["0.*"], reason: "shard outputs are data written by optimiseHeaterShard: their identity fields are checked (tested in optimise-shards.test.ts), their numbers passed through" },
+    nonFinite: {
+      "best[].switchingFrequency": "null unless the inverter runs at a fixed frequency (documented)",
+      "best[].summary.timeToTarget": "null for a power goal: no heat-up is run (documented)",
+    },
   },
 
   // ---------------------------------------------------------------- cores

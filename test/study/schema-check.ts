@@ -1,7 +1,7 @@
 /**
  * A small JSON Schema (2020-12 subset) checker for the hand-kept study-file schema: type
  * (incl. integer), enum, const, properties, required, additionalProperties: false, minimum,
- * exclusiveMinimum, maximum, pattern, oneOf, anyOf, allOf and local $ref. It throws on any
+ * exclusiveMinimum, maximum, pattern, minLength, items, minItems, oneOf, anyOf, allOf and local $ref. It throws on any
  * keyword it does not know, so the schema cannot silently use one it ignores.
  */
 type Schema = Record<string, unknown>;
@@ -9,6 +9,7 @@ type Schema = Record<string, unknown>;
 const KNOWN = new Set([
   "$schema", "$id", "$defs", "title", "description", "type", "enum", "const", "properties", "required",
   "additionalProperties", "minimum", "exclusiveMinimum", "maximum", "pattern", "oneOf", "anyOf", "allOf", "$ref",
+  "items", "minItems", "minLength",
 ]);
 
 /** Returns the list of problems (empty when `value` conforms to `schema`). */
@@ -41,6 +42,13 @@ export function checkSchema(root: Schema, value: unknown): string[] {
       if (typeof s.maximum === "number" && v > s.maximum) out.push(`${path}: above maximum`);
     }
     if (typeof v === "string" && typeof s.pattern === "string" && !new RegExp(s.pattern, "u").test(v)) out.push(`${path}: pattern mismatch`);
+    if (typeof v === "string" && typeof s.minLength === "number" && v.length < s.minLength) out.push(`${path}: shorter than minLength`);
+    if (Array.isArray(v)) {
+      if (typeof s.minItems === "number" && v.length < s.minItems) out.push(`${path}: fewer than minItems`);
+      if (typeof s.items === "object" && s.items !== null) v.forEach((item, k) => {
+        check(s.items as Schema, item, `${path}[${k}]`, out);
+      });
+    }
     if (typeOf(v) === "object") {
       const o = v as Record<string, unknown>;
       const props = (s.properties ?? {}) as Record<string, Schema>;

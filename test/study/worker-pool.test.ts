@@ -12,7 +12,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { InputError, optimiseHeater, sweepHeater, sweepHeaterStream } from "../../src/index.js";
 import type { HeaterProgress, HeaterSweepStreamRow } from "../../src/index.js";
-import { runPool } from "../../src/study/worker-pool.js";
+import { batchSize, nextBatchSize, runPool } from "../../src/study/worker-pool.js";
 import { loadExample } from "./cases.js";
 
 const race = loadExample("study-bearing-race.json");
@@ -124,6 +124,24 @@ describe("cancellation", () => {
     await expect(run).rejects.toMatchObject({ name: "AbortError" });
     expect(performance.now() - abortedAt).toBeLessThan(50);
     expect(count).toBe(2);
+  }, T);
+});
+
+describe("batches", () => {
+  it("shrink near the end of a run to the remaining items over twice the workers, down to one", () => {
+    expect(batchSize(300, 2)).toBe(3);
+    expect(nextBatchSize(300, 3, 2)).toBe(3);
+    expect(nextBatchSize(9, 3, 2)).toBe(3);
+    expect(nextBatchSize(8, 3, 2)).toBe(2);
+    expect(nextBatchSize(4, 3, 2)).toBe(1);
+    expect(nextBatchSize(1, 32, 4)).toBe(1);
+  });
+
+  it("of several items and shrinking at the tail give the single-thread table bit for bit", async () => {
+    // mostly values the reader rejects (cheap rows), a design every 50 values
+    const values = Array.from({ length: 300 }, (_, i) => (i % 50 === 7 ? 2e-6 + i * 1e-8 : -1e-6 - i * 1e-9));
+    const many = { field: "capacitor.capacitance", values, heatUp: false };
+    expect(exact(await sweepHeater(race, many, { workers: 2, workerUrl }))).toBe(exact(sweepHeater(race, many)));
   }, T);
 });
 
