@@ -28,3 +28,17 @@ export type {
   FieldShape,
   SolveAxisymmetricFieldOptions,
 } from "./solve-axisymmetric-field.js";
+export { axisymmetricHeatConduction } from "./axisymmetric-conduction.js";
+export type {
+  AxisymmetricHeatConductionOptions,
+  AxisymmetricHeatConductionResult,
+  PartCells,
+  PartEnergyBalance,
+  PartFace,
+  PartGenerationRequest,
+  PartGrid,
+  PartSurfaceExchange,
+  PartTemperatureMap,
+} from "./axisymmetric-conduction.js";
+export { fieldHeatUp } from "./field-heat-up.js";
+export type { FieldHeatUpCoilState, FieldHeatUpOptions, FieldHeatUpResult, FieldHeatUpSolution, FieldHeatedPart } from "./field-heat-up.js";

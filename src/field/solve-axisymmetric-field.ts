@@ -373,7 +373,7 @@ function boxGap(a: [number, number, number, number], b: [number, number, number,
 }
 
 /** Validated problem: bodies, names, block sizes. */
-function readProblem(options: SolveAxisymmetricFieldOptions): {
+export function readProblem(options: SolveAxisymmetricFieldOptions): {
   problem: SolverProblem;
   coilNames: string[];
   regionNames: string[];

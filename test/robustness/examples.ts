@@ -942,6 +942,58 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     ],
   },
 
+  axisymmetricHeatConduction: {
+    args: () => [
+      {
+        shape: { kind: "rectangle", rMin: 0, rMax: 0.02, zMin: 0, zMax: 0.05 },
+        material: austeniticStainless,
+        cells: { radial: 3, axial: 2 },
+        surface: { convectionCoefficient: 10, emissivity: 0.5, ambientTemperature: celsius(20) },
+        powerDensity: 1e6,
+        duration: 5,
+      },
+    ],
+    allow: [
+      { paths: ["0.cells"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.shape.rMin", "0.powerDensity", "0.surface.convectionCoefficient", "0.surface.emissivity"], kinds: ["zero"], reason: "a part reaching the axis, no heating, no convection or no radiation are in the domain" },
+      { paths: ["0.shape.zMin"], kinds: ["zero", "negative"], reason: "axial positions may be any real number" },
+    ],
+    nonFinite: { targetReachedAt: "null when no target was given or it was not reached (documented)" },
+  },
+  fieldHeatUp: {
+    args: () => [
+      {
+        frequency: 1e3,
+        accuracy: 0.1,
+        coils: [
+          {
+            name: "coil",
+            current: 200,
+            resistivity: 1.75e-8,
+            model: "stranded",
+            turns: { shape: { kind: "rectangle", rMin: 0.012, rMax: 0.014, zMin: -0.01, zMax: 0.01 }, count: 5 },
+          },
+        ],
+        part: { name: "slug", shape: { kind: "rectangle", rMin: 0, rMax: 0.008, zMin: -0.008, zMax: 0.008 }, material: austeniticStainless, cells: { radial: 2, axial: 1 } },
+        surface: { convectionCoefficient: 10, emissivity: 0.5, ambientTemperature: celsius(20) },
+        duration: 1,
+        resolveStep: 500,
+      },
+    ],
+    skip: { paths: ["0.part.cells*"], reason: "cell counts set the size of the field problem (up to 400 bodies, minutes per call when scaled up); their checks are tested in test/field/field-heat-up.test.ts" },
+    allow: [
+      { paths: ["0.accuracy", "0.resolveStep"], kinds: ["undefined"], reason: OPTIONAL },
+      { paths: ["0.coils.0.current"], kinds: ["zero"], reason: "a coil without current (no heating) is in the domain" },
+      { paths: ["0.part.shape.rMin", "0.surface.convectionCoefficient", "0.surface.emissivity"], kinds: ["zero"], reason: "a part reaching the axis, no convection or no radiation are in the domain" },
+      {
+        paths: ["0.coils.0.turns.shape.zMin", "0.coils.0.turns.shape.zMax", "0.part.shape.zMin", "0.part.shape.zMax"],
+        kinds: ["zero", "negative"],
+        reason: "axial positions may be any real number",
+      },
+    ],
+    nonFinite: { targetReachedAt: "null when no target was given or it was not reached (documented)" },
+  },
+
   // ---------------------------------------------------------------- safety
   voltageCaution: {
     args: () => [{ voltage: 230, waveform: "ac", location: "tank" }],
