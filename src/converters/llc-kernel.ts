@@ -124,6 +124,16 @@ const seqModes = new Int32Array(MAX_SEGMENTS);
 const seqTau = new Float64Array(MAX_SEGMENTS);
 let seqLength = 0;
 
+/** The segment durations from the unknowns y: τ_0 … τ_{n−2} given, the last what remains of the half period θ. */
+function setDurations(y: Float64Array, theta: number): void {
+  let last = theta;
+  for (let k = 0; k < seqLength - 1; k++) {
+    seqTau[k] = y[k + 4] ?? 0;
+    last -= seqTau[k] ?? 0;
+  }
+  seqTau[seqLength - 1] = last;
+}
+
 /**
  * Residuals of the sequence solve at unknowns y = (j0, u0, g0, m, τ_0 … τ_{n−2}); the last
  * duration is what remains of the half period. Residuals: antisymmetry (3), the switching
@@ -134,12 +144,7 @@ let seqLength = 0;
 export function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: number, r: Float64Array): boolean {
   const n = seqLength;
   const m = y[3] ?? 0;
-  let last = theta;
-  for (let k = 0; k < n - 1; k++) {
-    seqTau[k] = y[k + 4] ?? 0;
-    last -= seqTau[k] ?? 0;
-  }
-  seqTau[n - 1] = last;
+  setDurations(y, theta);
   let j = y[0] ?? 0;
   let u = y[1] ?? 0;
   let g = y[2] ?? 0;
@@ -189,12 +194,7 @@ export function sequenceResidualsAndJacobian(y: Float64Array, theta: number, lam
   const n = seqLength;
   const size = n + 3;
   const m = y[3] ?? 0;
-  let last = theta;
-  for (let k = 0; k < n - 1; k++) {
-    seqTau[k] = y[k + 4] ?? 0;
-    last -= seqTau[k] ?? 0;
-  }
-  seqTau[n - 1] = last;
+  setDurations(y, theta);
   for (let c = 0; c < size; c++) {
     tj[c] = c === 0 ? 1 : 0;
     tu[c] = c === 1 ? 1 : 0;
@@ -333,12 +333,7 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
   sysKappa = kappa;
   const residual = newton.solve(sequenceSystem, seqLength + 3, SEQUENCE_NEWTON, theta);
   // the durations of the solution (the last step may have been taken without an evaluation)
-  let last = theta;
-  for (let k = 0; k < seqLength - 1; k++) {
-    seqTau[k] = unknowns[k + 4] ?? 0;
-    last -= seqTau[k] ?? 0;
-  }
-  seqTau[seqLength - 1] = last;
+  setDurations(unknowns, theta);
   return residual;
 }
 
