@@ -24,6 +24,9 @@ const TI64 = "BTI Metals Ti-6Al-4V data sheet (4.43 g/cm³; 526 J/(kg·K) at 25 
 const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.1.3 eq. (3.3) (thermal conductivity)";
 const KUZMIN_IRON = "magnetisation curve: M. D. Kuz'min, Phys. Rev. Lett. 94, 107204 (2005), s = 0.35, p = 4 for iron (from memory)";
 
+/** Curie temperature of carbon steel as stated by a steel maker (and of iron in a foundry glossary). */
+const CURIE_CARBON_STEEL = "Curie temperature 768 °C (A2 of iron): Atlas Steels technical note 'Magnetic response of stainless steels' (about 768 °C for carbon steel); Giesserei-Lexikon, 'Curiepunkt' (769 °C for iron)";
+
 /** Emissivity of the carbon steels: a rounded range inside the instrument maker's table. */
 const STEEL_EMISSIVITY = `polished to heavily scaled; inside ${FLIR_EMISSIVITY} for iron and steel (polished 0.07, rough plate 0.95–0.98); typical 0.8 = its oxidised steel at 200–600 °C`;
 
@@ -59,7 +62,7 @@ const lowCarbonConductivity: TemperatureTable = Object.freeze({
  * conductivity 63.9 W/(m·K) at 300 K (Incropera et al., Table A.1, AISI 1010); emissivity
  * 0.1–0.95, typical 0.8 (inside the FLIR table's 0.07 polished … 0.95–0.98 rough plate for
  * iron and steel; 0.8 is its value for steel oxidised at 200–600 °C). Ferromagnetic: Curie temperature 1041 K (768 °C, the A2
- * point of iron, common practice), low-field relative permeability 1000, saturation 2.0 T at
+ * point of iron; Atlas Steels: about 768 °C for carbon steel), low-field relative permeability 1000, saturation 2.0 T at
  * 20 °C (typical, from memory), transition width 40 K. Documented range 293–1573 K.
  *
  * @see EN 1993-1-2:2005 (specific heat); Incropera & DeWitt Table A.1 (conductivity).
@@ -99,7 +102,7 @@ export const lowCarbonSteel: ConductiveMaterial = Object.freeze({
     "density: typical, from memory",
     `specific heat: ${EN1993}`,
     `thermal conductivity: ${lowCarbonConductivity.source}`,
-    "Curie temperature 768 °C (A2 of iron): common practice; solidus about 1500 °C: common practice",
+    `${CURIE_CARBON_STEEL}; solidus about 1500 °C: common practice`,
   ]),
 });
 
@@ -124,7 +127,7 @@ const mediumCarbonConductivity = tableFromCelsius(
  * 0.160 µΩ·m at 20 °C to 1.18 µΩ·m at 1000 °C (table, typical, from memory); density
  * 7850 kg/m³; specific heat (with its peak at 735 °C) and thermal conductivity from
  * EN 1993-1-2; emissivity 0.1–0.95, typical 0.8 (as for low-carbon steel). Ferromagnetic: Curie
- * temperature 1041 K (768 °C, common practice), low-field relative permeability 600,
+ * temperature 1041 K (768 °C, as for low-carbon steel), low-field relative permeability 600,
  * saturation 1.9 T at 20 °C (typical, from memory), transition width 40 K (covers the
  * ferrite loss between A1 = 727 °C and A2). Documented range 293–1473 K.
  *
@@ -164,7 +167,7 @@ export const mediumCarbonSteel: ConductiveMaterial = Object.freeze({
     `resistivity: ${mediumCarbonResistivity.source}`,
     "density: 7850 kg/m³, the density of steel assumed in EN 1993 section tables (Tata Steel / SCI Blue Book, EN 1993-1-1 UK NA edition, explanatory notes §2.1)",
     `specific heat and thermal conductivity: ${EN1993}`,
-    "Curie temperature 768 °C (A2): common practice; solidus about 1460 °C: common practice",
+    `${CURIE_CARBON_STEEL}; solidus about 1460 °C: common practice`,
   ]),
 });
 
@@ -221,7 +224,7 @@ export const austeniticStainless: ConductiveMaterial = Object.freeze({
     `resistivity: ${austeniticResistivity.source}`,
     "density: typical, from memory",
     `specific heat and thermal conductivity: ${INCROPERA} (AISI 304; from memory)`,
-    "solidus about 1400 °C: common practice",
+    "solidus 1400 °C: ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel'",
   ]),
 });
 
@@ -293,7 +296,7 @@ export const ferriticStainless: ConductiveMaterial = Object.freeze({
     `density: ${ATLAS_430}`,
     `specific heat: ${ferriticSpecificHeat.source}`,
     `thermal conductivity: ${ferriticConductivity.source}`,
-    "Curie temperature about 670 °C: from memory; solidus about 1425 °C: common practice",
+    "Curie temperature about 670 °C: from memory; melting point about 1425 °C: Hamilton Precision Metals SS 430 data",
   ]),
 });
 
