@@ -61,9 +61,10 @@ const lowCarbonConductivity: TemperatureTable = Object.freeze({
  * density 7870 kg/m³; specific heat from EN 1993-1-2 with its peak at 735 °C; thermal
  * conductivity 63.9 W/(m·K) at 300 K (Incropera et al., Table A.1, AISI 1010); emissivity
  * 0.1–0.95, typical 0.8 (inside the FLIR table's 0.07 polished … 0.95–0.98 rough plate for
- * iron and steel; 0.8 is its value for steel oxidised at 200–600 °C). Ferromagnetic: Curie temperature 1041 K (768 °C, the A2
- * point of iron; Atlas Steels: about 768 °C for carbon steel), low-field relative permeability 1000, saturation 2.0 T at
- * 20 °C (typical, from memory), transition width 40 K. Documented range 293–1573 K.
+ * iron and steel; 0.8 is its value for steel oxidised at 200–600 °C). Ferromagnetic: Curie
+ * temperature 1041 K (768 °C, the A2 point of iron; Atlas Steels: about 768 °C for carbon
+ * steel), low-field relative permeability 1000, saturation 2.0 T at 20 °C (typical, from
+ * memory), transition width 40 K. Documented range 293–1573 K.
  *
  * @see EN 1993-1-2:2005 (specific heat); Incropera & DeWitt Table A.1 (conductivity).
  * @example
@@ -126,8 +127,8 @@ const mediumCarbonConductivity = tableFromCelsius(
  * Medium-carbon steel (about 0.4–0.45 % C, AISI 1040/1045 class). Resistivity
  * 0.160 µΩ·m at 20 °C to 1.18 µΩ·m at 1000 °C (table, typical, from memory); density
  * 7850 kg/m³; specific heat (with its peak at 735 °C) and thermal conductivity from
- * EN 1993-1-2; emissivity 0.1–0.95, typical 0.8 (as for low-carbon steel). Ferromagnetic: Curie
- * temperature 1041 K (768 °C, as for low-carbon steel), low-field relative permeability 600,
+ * EN 1993-1-2; emissivity 0.1–0.95, typical 0.8 (as for low-carbon steel). Ferromagnetic:
+ * Curie temperature 1041 K (768 °C, as for low-carbon steel), low-field relative permeability 600,
  * saturation 1.9 T at 20 °C (typical, from memory), transition width 40 K (covers the
  * ferrite loss between A1 = 727 °C and A2). Documented range 293–1473 K.
  *
@@ -366,7 +367,8 @@ const brassConductivity: TemperatureTable = Object.freeze({
  * Table A.1, p. 983, which ends at 600 K (values held above); emissivity 0.03–0.6, typical
  * 0.2 (from memory); melting point 1188 K (Incropera, Table A.1). Documented range 293–1100 K.
  *
- * @see Incropera, DeWitt, Bergman, Lavine, Fundamentals of Heat and Mass Transfer, 7th ed., Table A.1, p. 983 (cartridge brass).
+ * @see Incropera, DeWitt, Bergman, Lavine, Fundamentals of Heat and Mass Transfer, 7th ed.,
+ *   Table A.1, p. 983 (cartridge brass).
  * @example
  * ```ts
  * import { brass } from "fluxwright";
