@@ -63,8 +63,8 @@ const lowCarbonConductivity: TemperatureTable = Object.freeze({
  * 0.1–0.95, typical 0.8 (inside the FLIR table's 0.07 polished … 0.95–0.98 rough plate for
  * iron and steel; 0.8 is its value for steel oxidised at 200–600 °C). Ferromagnetic: Curie
  * temperature 1041 K (768 °C, the A2 point of iron; Atlas Steels: about 768 °C for carbon
- * steel), low-field relative permeability 1000, saturation 2.0 T at 20 °C (typical, from
- * memory), transition width 40 K. Documented range 293–1573 K.
+ * steel), low-field relative permeability 1000, saturation 2.0 T at 20 °C
+ * (typical, from memory), transition width 40 K. Documented range 293–1573 K.
  *
  * @see EN 1993-1-2:2005 (specific heat); Incropera & DeWitt Table A.1 (conductivity).
  * @example
@@ -192,8 +192,8 @@ const austeniticConductivity: TemperatureTable = Object.freeze({
 
 /**
  * Austenitic stainless steel (18Cr–8Ni, AISI 304 class), non-magnetic. Resistivity
- * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 1.22 µΩ·m at 1000 °C (typical, from
- * memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
+ * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 1.22 µΩ·m at 1000 °C
+ * (typical, from memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
  * specific heat and thermal conductivity of AISI 304 from Incropera & DeWitt Table A.1
  * (from memory); emissivity 0.1–0.85, typical 0.4 (from memory). Documented range
  * 200–1500 K.
@@ -409,8 +409,8 @@ const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6
 
 /**
  * Titanium alloy (Ti–6Al–4V class), non-magnetic. Resistivity 1.70 µΩ·m at 20 °C (inside
- * the 1.68–1.78 µΩ·m of producers' data sheets), rising slowly to 2.06 µΩ·m at 1000 °C (from
- * memory); density 4430 kg/m³, specific heat 526 J/(kg·K) near room temperature and solidus
+ * the 1.68–1.78 µΩ·m of producers' data sheets), rising slowly to 2.06 µΩ·m at 1000 °C
+ * (from memory); density 4430 kg/m³, specific heat 526 J/(kg·K) near room temperature and solidus
  * 1877 K (1604 °C) as in the BTI Metals Ti-6Al-4V data sheet; conductivity 6.7 W/(m·K) at
  * 20 °C (that data sheet gives 6.70 over 100–300 °C, where this table reads 7.6–10.2: the
  * table is from memory); emissivity 0.2–0.8, typical 0.5 (from memory). Documented range
