@@ -248,6 +248,25 @@ function returnTubeLogDerivative(b: number, c: number, delta: number): [number, 
   return [(wr * vr + wi * vi) / v2, (wi * vr - wr * vi) / v2];
 }
 
+/** Below this r/δ every conductor carries its DC (uniform) current to O((r/δ)⁴) ≤ 1e-12. */
+const DC_LIMIT = 1e-3;
+
+/**
+ * Internal inductance per metre [H/m] of a round wall ri ≤ r ≤ ro carrying a uniform current
+ * whose field is zero on the `zeroSide` face ("inner": a rod or tube, field outside it;
+ * "outer": a return tube, field inside it): $\frac{\mu_0}{2\pi}\int (H/H_\mathrm{face})^2 dr/r$.
+ */
+function wallInductanceDc(ri: number, ro: number, zeroSide: "inner" | "outer"): number {
+  const w = ro * ro - ri * ri;
+  if (zeroSide === "inner") {
+    if (ri === 0) return MU_0 / (8 * Math.PI);
+    // ∫ (r² − ri²)²/r dr / w²
+    return (MU_0 / (TWO_PI * w * w)) * ((ro ** 4 - ri ** 4) / 4 - ri * ri * w + ri ** 4 * Math.log(ro / ri));
+  }
+  // ∫ (ro² − r²)²/r dr / w²
+  return (MU_0 / (TWO_PI * w * w)) * (ro ** 4 * Math.log(ro / ri) - ro * ro * w + (ro ** 4 - ri ** 4) / 4);
+}
+
 /** 1/P as (re, im). */
 function reciprocal(re: number, im: number): [number, number] {
   const d2 = re * re + im * im;
@@ -410,8 +429,10 @@ export function leadImpedance(options: LeadImpedanceOptions): LeadImpedance {
         limit: 1.0003,
       });
     }
-    perMetre = roundPairPerMetre(a, ri, spacing, delta, omega, orders);
     dcPerMetre = (2 * resistivity) / (Math.PI * (a * a - ri * ri));
+    perMetre = a / delta < DC_LIMIT
+      ? [dcPerMetre, omega * ((MU_0 / Math.PI) * Math.log(spacing / a) + 2 * wallInductanceDc(ri, a, "inner"))]
+      : roundPairPerMetre(a, ri, spacing, delta, omega, orders);
     highFrequencyPerMetre = (MU_0 / Math.PI) * Math.acosh(spacing / diameter);
   } else if (shape === "coaxial") {
     requireKnownKeys(where, "lead", lead, COAXIAL_FIELDS);
@@ -425,6 +446,7 @@ export function leadImpedance(options: LeadImpedanceOptions): LeadImpedance {
     const ri = Math.max(0, a - wall);
     const b = returnInnerDiameter / 2;
     const c = b + returnWall;
+    dcPerMetre = resistivity / (Math.PI * (a * a - ri * ri)) + resistivity / (Math.PI * (c * c - b * b));
     const pa = new Float64Array(1);
     const paIm = new Float64Array(1);
     surfaceLogDerivatives(a, ri, delta, 0, pa, paIm);
@@ -434,8 +456,9 @@ export function leadImpedance(options: LeadImpedanceOptions): LeadImpedance {
     const bracketRe = iaRe + Math.log(b / a) - ibRe;
     const bracketIm = iaIm - ibIm;
     const k = (omega * MU_0) / TWO_PI;
-    perMetre = [-k * bracketIm, k * bracketRe];
-    dcPerMetre = resistivity / (Math.PI * (a * a - ri * ri)) + resistivity / (Math.PI * (c * c - b * b));
+    perMetre = c / delta < DC_LIMIT
+      ? [dcPerMetre, omega * (wallInductanceDc(ri, a, "inner") + (MU_0 / TWO_PI) * Math.log(b / a) + wallInductanceDc(b, c, "outer"))]
+      : [-k * bracketIm, k * bracketRe];
     highFrequencyPerMetre = (MU_0 / TWO_PI) * Math.log(b / a);
   } else {
     requireKnownKeys(where, "lead", lead, FLAT_FIELDS);
