@@ -113,8 +113,8 @@ export const FLAT_PAIR_ACCURACY = { inductance: 0.25, resistance: 0.35 } as cons
 /** Width/gap from which the flat-pair accuracy above holds. */
 const FLAT_PAIR_MIN_ASPECT = 5;
 /** Series truncation target of the round-pair multipole expansion (relative). */
-const SERIES_TOLERANCE = 1e-14;
-/** Most multipole orders used (spacing within 0.0003 d of touching needs more; noted). */
+const SERIES_TOLERANCE = 1e-15;
+/** Most multipole orders used (spacing within 0.0009 d of touching needs more; noted). */
 const MAX_ORDERS = 400;
 
 const TWO_PI = 2 * Math.PI;
@@ -279,7 +279,8 @@ function ordersFor(spacing: number, radius: number): number {
   // the image point of the equivalent line source inside a conductor, relative to its radius
   const ratio = (h - Math.sqrt(Math.max(h * h - radius * radius, 0))) / radius;
   if (!(ratio > 0) || ratio >= 1) return MAX_ORDERS;
-  return Math.min(MAX_ORDERS, Math.max(2, Math.ceil(Math.log(SERIES_TOLERANCE) / Math.log(ratio)) + 2));
+  // the impedance's truncation error falls as ratio^(2N) (the strengths and their coupling each as ratio^N)
+  return Math.min(MAX_ORDERS, Math.max(2, Math.ceil(Math.log(SERIES_TOLERANCE) / (2 * Math.log(ratio))) + 2));
 }
 
 /** Per-metre impedance (re, im) of a round pair: Z' = 2jω(μ0/2π)[ln(D/a) + 1/P_0 − Σ β_n q^n]. */
@@ -353,7 +354,7 @@ function roundPairPerMetre(a: number, ri: number, spacing: number, delta: number
  * \qquad Z = \frac{j\omega\mu_0\ell}{\pi}\Big[\ln\frac{D}{a} + \frac{1}{P_0} - \sum_k \beta_k q^k\Big]
  * $$
  *
- * truncated where the image-point ratio has decayed to 1e-14. Limits it reproduces: DC,
+ * truncated where the image-point ratio, squared, has decayed to 1e-15. Limits it reproduces: DC,
  * $L = \frac{\mu_0\ell}{\pi}\big(\ln\frac{D}{a} + \frac14\big)$ for solid wire (internal
  * μ0/(8π) per conductor); δ → 0, $L \to \frac{\mu_0\ell}{\pi}\,\mathrm{acosh}\frac{D}{2a}$ and
  * $R \to \frac{\rho\,\ell}{\pi a \delta}\,\frac{D/2a}{\sqrt{(D/2a)^2 - 1}}$ (conformal map).
@@ -391,8 +392,8 @@ function roundPairPerMetre(a: number, ri: number, spacing: number, delta: number
  * import { leadImpedance } from "fluxwright";
  * // 0.4 m run of two 6 mm × 1 mm copper tubes at 12 mm centres, 50 kHz
  * const z = leadImpedance({ lead: { shape: "round-pair", diameter: 6e-3, wallThickness: 1e-3, spacing: 12e-3 }, length: 0.4, frequency: 50e3, resistivity: 1.7241e-8 });
- * console.log(z.inductance); // ≈ 2.1e-7
- * console.log(z.resistance); // ≈ 1.5e-3
+ * console.log(z.inductance); // ≈ 2.2e-7
+ * console.log(z.resistance); // ≈ 3.0e-3
  * ```
  * @category Conductors
  */
@@ -424,9 +425,9 @@ export function leadImpedance(options: LeadImpedanceOptions): LeadImpedance {
     if (orders >= MAX_ORDERS) {
       validity.push({
         code: "lead-nearly-touching",
-        message: `The conductors nearly touch (spacing/diameter = ${spacing / diameter}): the multipole series is cut at ${MAX_ORDERS} orders, so the proximity effect is resolved less accurately than 1e-14.`,
+        message: `The conductors nearly touch (spacing/diameter = ${spacing / diameter}): the multipole series is cut at ${MAX_ORDERS} orders, so the proximity effect is resolved less accurately than 1e-15.`,
         value: spacing / diameter,
-        limit: 1.0003,
+        limit: 1.0009,
       });
     }
     dcPerMetre = (2 * resistivity) / (Math.PI * (a * a - ri * ri));
