@@ -386,7 +386,7 @@ function roundPairPerMetre(a: number, ri: number, spacing: number, delta: number
  * solution at 30 digits, written independently, and the DC, δ → 0 and coaxial closed forms;
  * fixture test/fixtures/leads/series.json) for 1.05 ≤ D/d ≤ 10, 0.1 ≤ d/δ ≤ 30, and within
  * 0.3 % of the 2-D finite-element reference (scikit-fem P2, fixtures fem-round.json and
- * fem-tube.json, whose own discretisation error is ≤ 0.12 %) over 1.05 ≤ D/d ≤ 3 and
+ * fem-tube.json, whose own discretisation error is ≤ 0.12 %) over 1.05 ≤ D/d ≤ 2 and
  * 0.5 ≤ d/δ ≤ 20; below r/δ = 1e-3 the uniform-current values (exact to 1e-12). Flat pair as
  * above.
  *

@@ -49,8 +49,8 @@ describe("leadImpedance: round pair", () => {
       const delta = Math.sqrt(RHO / (Math.PI * f * mu0));
       const rHigh = ((2 * RHO) / (Math.PI * d * delta)) * (ratio / Math.sqrt(ratio * ratio - 1));
       const lHigh = (mu0 / Math.PI) * Math.acosh(ratio);
-      // first-order corrections are of order δ/(D − d)
-      const order = delta / (ratio * d - d);
+      // first-order corrections are of order δ/a (internal inductance) and δ/(D − d) (proximity)
+      const order = delta / (d / 2) + delta / (ratio * d - d);
       expect(rel(z.resistance, rHigh)).toBeLessThan(3 * order);
       expect(rel(z.inductance, lHigh)).toBeLessThan(3 * order);
       expect(rel(z.highFrequencyInductance, lHigh)).toBeLessThan(1e-12);
