@@ -58,7 +58,8 @@ describe("leadImpedance: round pair", () => {
   });
 
   it("agrees with the 2-D finite-element solution within 0.3 % (fixtures from scikit-fem, generate_fem.py)", () => {
-    for (const c of [...femRound.cases, ...femTube.cases]) {
+    const cases: readonly { diameter: number; wallThickness?: number; spacing: number; frequency: number; resistancePerMetre: number; inductancePerMetre: number; uncertainty: number }[] = [...femRound.cases, ...femTube.cases];
+    for (const c of cases) {
       const lead = c.wallThickness === undefined
         ? { shape: "round-pair" as const, diameter: c.diameter, spacing: c.spacing }
         : { shape: "round-pair" as const, diameter: c.diameter, wallThickness: c.wallThickness, spacing: c.spacing };
