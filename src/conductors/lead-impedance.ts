@@ -111,7 +111,12 @@ export interface LeadImpedance {
  *
  * @category Conductors
  */
-export const FLAT_PAIR_ACCURACY = { inductance: 0.22, resistance: 0.16 } as const;
+export const FLAT_PAIR_ACCURACY: {
+  /** Largest relative error of the inductance. */
+  readonly inductance: number;
+  /** Largest relative error of the resistance. */
+  readonly resistance: number;
+} = { inductance: 0.22, resistance: 0.16 };
 /** Width/gap from which the flat-pair accuracy above holds. */
 const FLAT_PAIR_MIN_ASPECT = 5;
 /** Series truncation target of the round-pair multipole expansion (relative). */
