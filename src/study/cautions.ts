@@ -168,10 +168,11 @@ export function heaterCautions(
     let worstRatio = 0;
     for (const p of points) {
       if (!(p.frequency > 0) || !(p.inductance > 0) || !(p.tankResistance > 0)) continue;
-      const share = harmonicPowerShare(p.frequency, p.inductance, C, p.tankResistance);
+      // the tank's inductance: coil and leads in series
+      const share = harmonicPowerShare(p.frequency, p.inductance + p.leadInductance, C, p.tankResistance);
       if (share > worstShare) {
         worstShare = share;
-        worstRatio = p.frequency * 2 * Math.PI * Math.sqrt(p.inductance * C);
+        worstRatio = p.frequency * 2 * Math.PI * Math.sqrt((p.inductance + p.leadInductance) * C);
       }
     }
     if (worstShare > HARMONIC_NOTE_THRESHOLD) {

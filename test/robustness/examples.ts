@@ -114,6 +114,7 @@ const DESCRIPTION_NULLS: Readonly<Record<string, string>> = {
   "capacitor.currentRatingRms": "null when not given (optional rating, documented)",
   concentrator: "null when the coil has no flux concentrator (documented)",
   "inverter.frequency": "null for a power-tracking series inverter (documented)",
+  "coil.leads": "null when the leads have no cross-section (resistance only, documented)",
 };
 const STUDY_ALLOW: readonly Allowance[] = [
   {
@@ -436,6 +437,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   roundWireAcRatioSweep: { args: () => [{ diameter: 2e-3, frequencies: [1e3, 20e3, 1e6], resistivity: 1.7241e-8 }] },
   skinDepth: { args: () => [{ resistivity: 1.7241e-8, frequency: 20e3 }] },
   tubeAcResistance: { args: () => [{ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
+  leadImpedance: {
+    args: () => [{ lead: { shape: "round-pair", diameter: 6e-3, wallThickness: 1e-3, spacing: 12e-3 }, length: 0.4, frequency: 50e3, resistivity: 1.7241e-8 }],
+    allow: [{ paths: ["0.lead.wallThickness"], kinds: ["undefined"], reason: OPTIONAL + " (a solid conductor)" }],
+  },
   roundWireWindingValidity: {
     args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 }],
   },
