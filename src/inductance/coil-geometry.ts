@@ -17,7 +17,7 @@ import { InputError, requireFinite, requireInteger, requireKnownKeys, requireObj
 /**
  * A single circular filament (or `turns` filaments bunched at one place) on the common axis.
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export interface LoopGeometry {
   /** Discriminant: `"loop"`. */
@@ -36,7 +36,7 @@ export interface LoopGeometry {
  * `position`. The inductance functions treat it as a current sheet; the field functions as one
  * filament loop per turn at $z_i = z_0 - \ell/2 + (i + \tfrac12)\,\ell/N$.
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export interface SolenoidGeometry {
   /** Discriminant: `"solenoid"`. */
@@ -59,7 +59,7 @@ export interface SolenoidGeometry {
  * whose wire is fine compared with the winding). The radii are the edges of the current-carrying
  * region. Inductance functions only (the field functions refuse it: give its loops as an array).
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export interface MultilayerGeometry {
   /** Discriminant: `"multilayer"`. */
@@ -81,7 +81,7 @@ export interface MultilayerGeometry {
  * **turn centres**: `turns` concentric filaments in one plane at
  * $r_i = r_1 + (r_N - r_1)\,i/(N - 1)$, $i = 0 … N-1$.
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export interface FlatSpiralByTurnCentres {
   /** Discriminant: `"flatSpiral"`. */
@@ -106,7 +106,7 @@ export interface FlatSpiralByTurnCentres {
  * filament sits in the middle of its ring, $r_i = r_\mathrm{in} + (i + \tfrac12)(r_\mathrm{out} - r_\mathrm{in})/N$
  * (half a pitch inside each edge).
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export interface FlatSpiralByEdges {
   /** Discriminant: `"flatSpiral"`. */
@@ -128,7 +128,7 @@ export interface FlatSpiralByEdges {
 /**
  * A flat spiral, by its turn centres or by its winding edges (the field names say which).
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export type FlatSpiralGeometry = FlatSpiralByTurnCentres | FlatSpiralByEdges;
 
@@ -137,7 +137,7 @@ export type FlatSpiralGeometry = FlatSpiralByTurnCentres | FlatSpiralByEdges;
  * {@link coaxialCoilMutualInductance}, {@link fieldOnAxis} and {@link fieldNearCoil} (the field
  * functions refuse `"multilayer"`).
  *
- * @category Coil geometry
+ * @category Inductance
  */
 export type CoilGeometry = LoopGeometry | SolenoidGeometry | MultilayerGeometry | FlatSpiralGeometry;
 
