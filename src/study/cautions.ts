@@ -97,9 +97,9 @@ export function heaterCautions(
     coil.shape === "solenoid"
       ? ({ kind: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns } as const)
       : ({
-          kind: "spiral",
-          innerRadius: Math.max(0, coil.innerRadius - conductorOuterDiameter(coil.conductor) / 2),
-          outerRadius: coil.outerRadius + conductorOuterDiameter(coil.conductor) / 2,
+          kind: "flatSpiral",
+          innerEdgeRadius: Math.max(0, coil.innerRadius - conductorOuterDiameter(coil.conductor) / 2),
+          outerEdgeRadius: coil.outerRadius + conductorOuterDiameter(coil.conductor) / 2,
           turns: coil.turns,
         } as const);
   // each operating point's field at its own frequency: the worst ratio to the reference level

@@ -21,7 +21,7 @@ import { sinusoidalPeakFluxDensity, steinmetzLoss } from "../coreloss/index.js";
 import { solenoidInductance, spiralCoilInductance } from "../inductance/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import { fieldNearCoil } from "../safety/index.js";
-import type { FieldSolenoid } from "../safety/index.js";
+import type { SolenoidGeometry } from "../inductance/index.js";
 import { integrateAdaptive } from "../special/index.js";
 import { andersonStep } from "../special/internal.js";
 import {
@@ -528,7 +528,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
         rod: bore > 0 ? { radius, innerRadius: bore } : { radius },
       });
       // the coil's axial field along the part surface (loops at the layer's mean radius)
-      const loops: FieldSolenoid = { kind: "solenoid", radius: 0.5 * (layer.innerRadius + layer.outerRadius), length: coil.length, turns: coil.turns };
+      const loops: SolenoidGeometry = { kind: "solenoid", radius: 0.5 * (layer.innerRadius + layer.outerRadius), length: coil.length, turns: coil.turns };
       const hz = (z: number): number => fieldNearCoil(loops, 1, { radialDistance: radius, axialPosition: z }).axial / MU_0;
       const scale = coil.length / 2 + loops.radius;
       const squared = (u: number): number => {
