@@ -32,3 +32,4 @@ export {
 } from "./polynomial.js";
 export { factorDense, solveFactored } from "./dense-solve.js";
 export { brentBracketed } from "./brent-root.js";
+export { besselIKRatiosComplex } from "./bessel-orders.js";
