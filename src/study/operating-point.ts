@@ -1026,6 +1026,7 @@ export function heaterOperatingPoint(
    * What the fixed-point iteration reads of an inverter solution. The current-fed inverter's
    * come from its allocation-free kernel (the same numbers as `solveInverter`, which builds the
    * whole result with its cautions on every call); the final point is solved in full below.
+   * Its arguments must stay those of the current-fed call in `solveInverter`.
    */
   type Solution = Pick<ReturnType<typeof solveInverter>, "frequency" | "coilCurrentRms" | "tankVoltagePeak">;
   const figures = new Float64Array(3);
