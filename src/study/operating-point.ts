@@ -32,6 +32,7 @@ import {
   seriesTank,
   tankStresses,
 } from "../tank/index.js";
+import { currentFedWithSourceFigures } from "../tank/current-fed-figures.js";
 import { MU_0 } from "../units/index.js";
 import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, prepareWorkCoil, tubeInLongCoil } from "../workpiece/index.js";
 import { nonMagneticWeight, prepareShortPartFactor } from "../workpiece/work-coil-short-part.js";
@@ -1086,7 +1087,25 @@ export function heaterOperatingPoint(
       validity: [] as readonly ValidityNote[],
     };
   }
-  type Solution = ReturnType<typeof solveInverter>;
+  /**
+   * What the fixed-point iteration reads of an inverter solution. The current-fed inverter's
+   * come from its allocation-free kernel (the same numbers as `solveInverter`, which builds the
+   * whole result with its cautions on every call); the final point is solved in full below.
+   * Its arguments must stay those of the current-fed call in `solveInverter`.
+   */
+  type Solution = Pick<ReturnType<typeof solveInverter>, "frequency" | "coilCurrentRms" | "tankVoltagePeak">;
+  const figures = new Float64Array(3);
+  const figureScratch = new Float64Array(7);
+  function solveStep(e: Evaluation): Solution {
+    if (
+      inv.kind === "current-fed-parallel" &&
+      currentFedWithSourceFigures(d.supply.voltage, d.supply.internalResistance, inv.switchOnResistance, e.L, C, e.tankResistance, inv.chokeInductance, figures, figureScratch)
+    ) {
+      return { frequency: figures[0]!, coilCurrentRms: figures[1]!, tankVoltagePeak: figures[2]! };
+    }
+    // the other inverters, and the public function's error where the kernel declines
+    return solveInverter(e, false);
+  }
   const fieldOf = (s: Solution): number => (model === null ? 0 : model.fieldPerAmpere * s.coilCurrentRms);
 
   // the starting iterate: a neighbour's solution, else the empty coil's resonance and its field
@@ -1096,7 +1115,7 @@ export function heaterOperatingPoint(
   let emptyField = 0;
   if (withPart) {
     try {
-      const empty = solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      const empty = solveStep(evaluate(f0, 0, 0, 0, false));
       f0 = fixedFrequency ?? empty.frequency;
       emptyField = fieldOf(empty);
     } catch (error) {
@@ -1118,7 +1137,7 @@ export function heaterOperatingPoint(
     let s: Solution;
     try {
       e = evaluate(frequency, field, coilCurrent, coilVoltagePeak, withPart);
-      s = solveInverter(e, false);
+      s = solveStep(e);
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       return null;
@@ -1159,7 +1178,7 @@ export function heaterOperatingPoint(
       for (let k = 0; k < 40; k++) {
         try {
           const eNext = evaluate(nextFrequency, nextField, coilCurrent, coilVoltagePeak, withPart);
-          const sNext = solveInverter(eNext, false);
+          const sNext = solveStep(eNext);
           e = eNext;
           s = sNext;
           frequency = nextFrequency;
@@ -1185,7 +1204,7 @@ export function heaterOperatingPoint(
   function bracketField(reference: number): { frequency: number; field: number } {
     if (!withPart) {
       // the empty coil has no field to iterate: its inverter failure is the design's limit
-      solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      solveStep(evaluate(f0, 0, 0, 0, false));
       return { frequency: f0, field: 0 };
     }
     let lastError: InputError | null = null;
@@ -1195,11 +1214,11 @@ export function heaterOperatingPoint(
       correction = null; // the first coupling at this field is exact
       try {
         let e = evaluate(f, h, 0, 0, withPart);
-        let s = solveInverter(e, false);
+        let s = solveStep(e);
         for (let k = 0; k < 60 && Math.abs(s.frequency - f) > 1e-12 * f; k++) {
           f = s.frequency;
           e = evaluate(f, h, s.coilCurrentRms, coilVoltagePeakOf(e, s), withPart);
-          s = solveInverter(e, false);
+          s = solveStep(e);
         }
         return { f: s.frequency, r: Math.log(Math.max(fieldOf(s), 1e-300) / h) };
       } catch (error) {
