@@ -22,8 +22,8 @@
  *
  * @packageDocumentation
  */
-import { solveDense } from "../special/index.js";
-import { firstDownCrossing, sinusoidPeak, squareIntegral } from "./llc-kernel.js";
+import { HalfPeriodRecord, PeriodicNewton, type NewtonSettings, type PeriodicSystem } from "./periodic-newton.js";
+import { firstDownCrossing, rampSinusoidPeak, rampSinusoidSquareIntegral, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 const MODE_Z = 0;
 const MODE_P = 1;
@@ -53,18 +53,8 @@ export interface LccSteadyState {
 }
 
 const st = new Float64Array(3);
-let evCount = 0;
-let evOverflow = false;
-const evMode = new Int32Array(MAX_SEGMENTS);
-const evTau = new Float64Array(MAX_SEGMENTS);
-let evAbsV = 0;
-let evJ = 0;
-let evJ2 = 0;
-let evV2 = 0;
-let evPeakJ = 0;
-let evPeakU = 0;
-let evPeakV = 0;
-let evClamped = 0;
+/** The segments of the last propagation. */
+const events = new HalfPeriodRecord(MAX_SEGMENTS);
 
 function startMode(j: number, v: number, u: number, k: number): number {
   const tol = 1e-13 * (1 + Math.abs(j) + Math.abs(v));
@@ -78,28 +68,6 @@ function startMode(j: number, v: number, u: number, k: number): number {
   return MODE_Z;
 }
 
-/** Largest |y| on [0, τ] for y = y0 + Y(t) given by extremum search through roots of y' (a sinusoid plus constant). */
-function peakOfRampSinusoid(A: number, B: number, C: number, D: number, w: number, tau: number): number {
-  // y = A cos wt + B sin wt + C + D t; y' = −Aw sin + Bw cos + D = 0
-  const hv = (t: number): number => A * Math.cos(w * t) + B * Math.sin(w * t) + C + D * t;
-  let best = Math.max(Math.abs(hv(0)), Math.abs(hv(tau)));
-  const R = w * Math.hypot(A, B);
-  if (!(R > 0) || Math.abs(D) >= R) return best;
-  // Bw cos − Aw sin = R cos(wt + φ), φ = atan2(A, B)
-  const phi = Math.atan2(A, B);
-  const g = Math.acos(-D / R);
-  const period = (2 * Math.PI) / w;
-  for (const base of [g - phi, -g - phi]) {
-    let t = base / w;
-    t -= Math.floor(t / period) * period;
-    for (let n = 0; t <= tau && n < 100000; n++) {
-      best = Math.max(best, Math.abs(hv(t)));
-      t += period;
-    }
-  }
-  return best;
-}
-
 /**
  * Propagates the positive half period from (j, u, v) with gain m; fills the event record and,
  * with `record`, the waveform integrals. End state in `st`.
@@ -110,23 +78,11 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, zet
   let u = u0;
   let v = v0;
   let t = 0;
-  evCount = 0;
-  evOverflow = false;
-  evAbsV = 0;
-  evJ = 0;
-  evJ2 = 0;
-  evV2 = 0;
-  evPeakJ = 0;
-  evPeakU = 0;
-  evPeakV = 0;
-  evClamped = 0;
+  events.clear();
   let mode = startMode(j, v, u, k);
   const w = Math.sqrt(1 + a);
   while (t < theta) {
-    if (evCount >= MAX_SEGMENTS) {
-      evOverflow = true;
-      break;
-    }
+    if (!events.hasRoom()) break;
     const remaining = theta - t;
     let tau: number;
     let next = mode;
@@ -157,22 +113,22 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, zet
         if (record) {
           const al = j;
           const be = s0 / wz;
-          evJ += (al * s + be * (1 - c)) / wz;
-          evJ2 += squareIntegral(al, be, wz * tau) / wz;
-          evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, al, be, wz, tau));
-          evPeakU = Math.max(evPeakU, sinusoidPeak(1, -s0, j * wz, wz, tau));
+          events.currentIntegral += (al * s + be * (1 - c)) / wz;
+          events.currentSquareIntegral += squareIntegral(al, be, wz * tau) / wz;
+          events.currentPeak = Math.max(events.currentPeak, sinusoidPeak(0, al, be, wz, tau));
+          events.capacitorPeak = Math.max(events.capacitorPeak, sinusoidPeak(1, -s0, j * wz, wz, tau));
         }
       } else {
         jEnd = j + s0 * tau;
         uEnd = u;
         if (record) {
-          evJ += j * tau + 0.5 * s0 * tau * tau;
-          evJ2 += j * j * tau + j * s0 * tau * tau + (s0 * s0 * tau * tau * tau) / 3;
-          evPeakJ = Math.max(evPeakJ, Math.abs(j), Math.abs(jEnd));
-          evPeakU = Math.max(evPeakU, Math.abs(u));
+          events.currentIntegral += j * tau + 0.5 * s0 * tau * tau;
+          events.currentSquareIntegral += j * j * tau + j * s0 * tau * tau + (s0 * s0 * tau * tau * tau) / 3;
+          events.currentPeak = Math.max(events.currentPeak, Math.abs(j), Math.abs(jEnd));
+          events.capacitorPeak = Math.max(events.capacitorPeak, Math.abs(u));
         }
       }
-      if (record) evClamped += tau;
+      if (record) events.clampedTime += tau;
       if (tau < remaining) jEnd = next === MODE_P ? k : -k;
       j = jEnd;
       u = uEnd;
@@ -205,23 +161,21 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, zet
       // ∫v over the segment
       const intI = 0.5 * jInf * tau * tau + (al * (1 - c)) / (w * w) + (d0 * (tau - s / w)) / (w * w);
       const intV = v * tau + intI - 0.5 * c0 * tau * tau;
-      evAbsV += sg * intV;
+      events.loadIntegral += sg * intV;
       if (record) {
-        evJ += integ;
-        evJ2 += jInf * jInf * tau + 2 * jInf * ((al * s) / w + (be * (1 - c)) / w) + squareIntegral(al, be, w * tau) / w;
-        evPeakJ = Math.max(evPeakJ, sinusoidPeak(jInf, al, be, w, tau));
+        events.currentIntegral += integ;
+        events.currentSquareIntegral += jInf * jInf * tau + 2 * jInf * ((al * s) / w + (be * (1 - c)) / w) + squareIntegral(al, be, w * tau) / w;
+        events.currentPeak = Math.max(events.currentPeak, sinusoidPeak(jInf, al, be, w, tau));
         // u = u + a I(t) = (u + a d0/w²) + a jInf t + (a al/w) sin − (a d0/w²) cos
-        evPeakU = Math.max(evPeakU, peakOfRampSinusoid((-a * d0) / (w * w), (a * al) / w, u + (a * d0) / (w * w), a * jInf, w, tau));
-        evPeakV = Math.max(evPeakV, peakOfRampSinusoid(A, B, C, D, w, tau));
-        evV2 += squareOfRampSinusoid(A, B, C, D, w, tau);
+        events.capacitorPeak = Math.max(events.capacitorPeak, rampSinusoidPeak((-a * d0) / (w * w), (a * al) / w, u + (a * d0) / (w * w), a * jInf, w, tau));
+        events.thirdStatePeak = Math.max(events.thirdStatePeak, rampSinusoidPeak(A, B, C, D, w, tau));
+        events.rectifierSquareIntegral += rampSinusoidSquareIntegral(A, B, C, D, w, tau);
       }
       j = jEnd;
       u = uEnd;
       v = vEnd;
     }
-    evMode[evCount] = mode;
-    evTau[evCount] = tau;
-    evCount++;
+    events.push(mode, tau);
     t += tau;
     if (tau >= remaining) break;
     mode = next;
@@ -231,80 +185,38 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, zet
   st[2] = v;
 }
 
-/** ∫_0^τ (A cos wt + B sin wt + C + D t)² dt in closed form. */
-function squareOfRampSinusoid(A: number, B: number, C: number, D: number, w: number, tau: number): number {
-  const c = Math.cos(w * tau);
-  const s = Math.sin(w * tau);
-  const osc = squareIntegral(A, B, w * tau) / w;
-  const lin = C * C * tau + C * D * tau * tau + (D * D * tau * tau * tau) / 3;
-  // 2 ∫ (C + D t)(A cos wt + B sin wt) dt
-  const intCos = s / w;
-  const intSin = (1 - c) / w;
-  const intTCos = (tau * s) / w + (c - 1) / (w * w);
-  const intTSin = (-tau * c) / w + s / (w * w);
-  const cross = 2 * (C * (A * intCos + B * intSin) + D * (A * intTCos + B * intTSin));
-  return osc + lin + cross;
-}
+/** Parameters of the solve, read by {@link lccSystem} (set before each solve). */
+let sysA = 0;
+let sysZeta = 0;
+let sysTheta = 0;
+const lccSystem: PeriodicSystem = {
+  residuals: (x, out) => residuals(x, sysA, sysZeta, sysTheta, out),
+};
 
-const y = new Float64Array(4);
-const trial = new Float64Array(4);
-const r = new Float64Array(4);
-const rTrial = new Float64Array(4);
-const jac = new Float64Array(16);
-const step = new Float64Array(4);
+/** Newton on (j0, u0, v0, M): a fresh Jacobian each step, up to 40 halvings, stop at 1e-14 (states scaled by max(1, |x|)). */
+const LCC_NEWTON: NewtonSettings = {
+  states: 3,
+  gainFloor: 0.1,
+  scaledNorm: true,
+  reuseJacobian: false,
+  backtracks: 40,
+  tolerance: 1e-14,
+  maxIterations: 60,
+};
+const newton = new PeriodicNewton(4);
+/** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
+const y = newton.x;
 
 function residuals(x: Float64Array, a: number, zeta: number, theta: number, out: Float64Array): boolean {
   const m = x[3] ?? 0;
   if (!(m > 0)) return false;
   propagate(x[0] ?? 0, x[1] ?? 0, x[2] ?? 0, m, a, zeta, theta, false);
-  if (evOverflow) return false;
+  if (events.overflow) return false;
   out[0] = (st[0] ?? 0) + (x[0] ?? 0);
   out[1] = (st[1] ?? 0) + (x[1] ?? 0);
   out[2] = (st[2] ?? 0) + (x[2] ?? 0);
-  out[3] = evAbsV / theta / m - 1;
+  out[3] = events.loadIntegral / theta / m - 1;
   return Number.isFinite(out[0] + out[1] + out[2] + out[3]);
-}
-
-function norm4(v: Float64Array, scale: number): number {
-  return Math.max(Math.abs(v[0] ?? 0) / scale, Math.abs(v[1] ?? 0) / scale, Math.abs(v[2] ?? 0) / scale, Math.abs(v[3] ?? 0));
-}
-
-/** Newton from the state in `y`; returns the final residual norm. */
-function newton(a: number, zeta: number, theta: number): number {
-  if (!residuals(y, a, zeta, theta, r)) return Infinity;
-  const scale = Math.max(1, Math.abs(y[0] ?? 0), Math.abs(y[1] ?? 0), Math.abs(y[2] ?? 0));
-  let rn = norm4(r, scale);
-  for (let it = 0; it < 60 && rn > 1e-14; it++) {
-    for (let col = 0; col < 4; col++) {
-      const base = y[col] ?? 0;
-      const h = 1e-7 * (col < 3 ? scale : Math.max(base, 1e-3));
-      y[col] = base + h;
-      const ok = residuals(y, a, zeta, theta, rTrial);
-      y[col] = base;
-      if (!ok) return Infinity;
-      for (let i = 0; i < 4; i++) jac[i * 4 + col] = ((rTrial[i] ?? 0) - (r[i] ?? 0)) / h;
-    }
-    for (let i = 0; i < 4; i++) step[i] = -(r[i] ?? 0);
-    if (!solveDense(4, jac, step)) return Infinity;
-    let lambda = 1;
-    let accepted = false;
-    for (let back = 0; back < 40; back++) {
-      for (let i = 0; i < 4; i++) trial[i] = (y[i] ?? 0) + lambda * (step[i] ?? 0);
-      if ((trial[3] ?? 0) > 0.1 * (y[3] ?? 0) && residuals(trial, a, zeta, theta, rTrial)) {
-        const tn = norm4(rTrial, scale);
-        if (tn < rn) {
-          y.set(trial);
-          r.set(rTrial);
-          rn = tn;
-          accepted = true;
-          break;
-        }
-      }
-      lambda *= 0.5;
-    }
-    if (!accepted) break;
-  }
-  return rn;
 }
 
 /**
@@ -348,7 +260,10 @@ function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: nu
   y[1] = u;
   y[2] = v;
   y[3] = m;
-  return newton(a, zeta, theta);
+  sysA = a;
+  sysZeta = zeta;
+  sysTheta = theta;
+  return newton.solve(lccSystem, 4, LCC_NEWTON, theta);
 }
 
 /** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */
@@ -369,11 +284,11 @@ export function lccSteadyState(a: number, zeta: number, theta: number): LccStead
     let m = fhaScratch[3] ?? 1;
     for (let i = 0; i < 400; i++) {
       propagate(j, u, v, m, a, zeta, theta, false);
-      if (evOverflow) break;
+      if (events.overflow) break;
       j = -(st[0] ?? 0);
       u = -(st[1] ?? 0);
       v = -(st[2] ?? 0);
-      const mean = evAbsV / theta;
+      const mean = events.loadIntegral / theta;
       if (mean > 0) m = 0.5 * m + 0.5 * mean;
     }
     res = tryFrom(j, u, v, m, a, zeta, theta);
@@ -384,19 +299,7 @@ export function lccSteadyState(a: number, zeta: number, theta: number): LccStead
   const u0 = y[1] ?? 0;
   const v0 = y[2] ?? 0;
   propagate(j0, u0, v0, m, a, zeta, theta, true);
-  let sequence = "";
-  const durations: number[] = [];
-  for (let i = 0; i < evCount; i++) {
-    const tau = evTau[i] ?? 0;
-    if (tau <= 1e-9 * theta) continue;
-    const letter = LETTER[evMode[i] ?? 0] ?? "?";
-    if (sequence.endsWith(letter)) {
-      durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
-      continue;
-    }
-    sequence += letter;
-    durations.push(tau);
-  }
+  const { sequence, durations } = events.summary(LETTER, theta);
   return {
     gain: m,
     j0,
@@ -404,13 +307,13 @@ export function lccSteadyState(a: number, zeta: number, theta: number): LccStead
     v0,
     sequence,
     durations,
-    resonantRms: Math.sqrt(evJ2 / theta),
-    resonantPeak: evPeakJ,
-    seriesPeak: evPeakU,
-    parallelPeak: evPeakV,
-    parallelRms: Math.sqrt(Math.max(0, evV2) / theta),
-    clampedFraction: evClamped / theta,
-    inputMean: evJ / theta,
+    resonantRms: Math.sqrt(events.currentSquareIntegral / theta),
+    resonantPeak: events.currentPeak,
+    seriesPeak: events.capacitorPeak,
+    parallelPeak: events.thirdStatePeak,
+    parallelRms: Math.sqrt(Math.max(0, events.rectifierSquareIntegral) / theta),
+    clampedFraction: events.clampedTime / theta,
+    inputMean: events.currentIntegral / theta,
     residual: res,
   };
 }

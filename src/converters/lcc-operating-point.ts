@@ -5,8 +5,6 @@
  * @packageDocumentation
  */
 import {
-  DEFER_TO_CODES,
-  InputError,
   requireKnownKeys,
   requireObject,
   requireOneOf,
@@ -16,6 +14,7 @@ import {
   type ValidityNote,
 } from "../core/index.js";
 import { lccFirstHarmonic, lccSteadyState } from "./lcc-kernel.js";
+import { hardSwitchingCaution, noSteadyStateError, outsideTestedDomainNote } from "./steady-state-notes.js";
 
 /**
  * Options of {@link parallelResonantOperatingPoint}.
@@ -164,7 +163,7 @@ function operatingPoint(where: string, options: LccOperatingPointOptions | Paral
   const q = Math.sqrt(lr / cr) / rac;
   const solution = lccSteadyState(a, zeta, theta);
   if (solution === null) {
-    throw new InputError(where, "switchingFrequency", fs, "Hz", `a frequency where the steady state can be solved (f_n = ${fn.toPrecision(4)}, Q = ${q.toPrecision(4)}${lcc ? `, A = ${a.toPrecision(4)}` : ""} gave no consistent periodic solution; the tested domain is ${TESTED.fnMin} ≤ f_n ≤ ${TESTED.fnMax}, ${TESTED.qMin} ≤ Q ≤ ${TESTED.qMax})`);
+    throw noSteadyStateError(where, fs, `f_n = ${fn.toPrecision(4)}, Q = ${q.toPrecision(4)}${lcc ? `, A = ${a.toPrecision(4)}` : ""}`, `${TESTED.fnMin} ≤ f_n ≤ ${TESTED.fnMax}, ${TESTED.qMin} ≤ Q ≤ ${TESTED.qMax}`);
   }
   const ib = vb / zp;
   const m = solution.gain;
@@ -196,22 +195,11 @@ function operatingPoint(where: string, options: LccOperatingPointOptions | Paral
     if (acS !== null) cautions.push(acS);
   }
   if (!(turnOffCurrent > 0)) {
-    cautions.push({
-      code: "hard-switching",
-      severity: "warning",
-      message: `The switches turn on hard: the current at turn-off is ${turnOffCurrent.toPrecision(3)} A (capacitive operation, below the tank's zero-phase frequency). Hard switching heats the switches and, with reverse recovery of their body diodes, can destroy them. Raise the switching frequency. ${DEFER_TO_CODES}`,
-      value: turnOffCurrent,
-      limit: 0,
-      unit: "A",
-      source: "common practice (resonant converters are run with inductive current at turn-off)",
-    });
+    cautions.push(hardSwitchingCaution(turnOffCurrent, " (capacitive operation, below the tank's zero-phase frequency)", "Raise the switching frequency."));
   }
   const validity: ValidityNote[] = [];
   if (fn < TESTED.fnMin || fn > TESTED.fnMax || q < TESTED.qMin || q > TESTED.qMax || (lcc && (a < TESTED.aMin || a > TESTED.aMax))) {
-    validity.push({
-      code: "outside-tested-domain",
-      message: `The point lies outside the domain checked against the time-domain simulation (${TESTED.fnMin} ≤ f_n ≤ ${TESTED.fnMax}, ${TESTED.qMin} ≤ Q ≤ ${TESTED.qMax}${lcc ? `, ${TESTED.aMin} ≤ A ≤ ${TESTED.aMax}` : ""}): the solution meets the periodic boundary conditions to 1e-10, but is not independently verified there.`,
-    });
+    validity.push(outsideTestedDomainNote(`${TESTED.fnMin} ≤ f_n ≤ ${TESTED.fnMax}, ${TESTED.qMin} ≤ Q ≤ ${TESTED.qMax}${lcc ? `, ${TESTED.aMin} ≤ A ≤ ${TESTED.aMax}` : ""}`, "1e-10"));
   }
   return {
     outputVoltage: vout,

@@ -22,8 +22,8 @@
  *
  * @packageDocumentation
  */
-import { brentRoot } from "../special/index.js";
-import { factorDense, solveFactored } from "../special/internal.js";
+import { HalfPeriodRecord, PeriodicNewton, type NewtonSettings, type PeriodicSystem } from "./periodic-newton.js";
+import { firstDownCrossing, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 export const MODE_O = 0;
 export const MODE_P = 1;
@@ -55,68 +55,6 @@ export interface LlcSteadyState {
   inputMean: number;
   /** Largest residual of the boundary conditions in the verifying propagation. */
   residual: number;
-}
-
-// ---------------------------------------------------------------------------------------------
-// Event search: first down-crossing of h(t) = A cos(wt) + B sin(wt) + C + D t on (0, tmax].
-
-let hA = 0;
-let hB = 0;
-let hC = 0;
-let hD = 0;
-let hW = 1;
-function hEval(t: number): number {
-  return hA * Math.cos(hW * t) + hB * Math.sin(hW * t) + hC + hD * t;
-}
-const BRENT = { tolerance: 0 };
-
-/**
- * First t in (0, tmax] where h, non-negative at 0, becomes ≤ 0 (h is split at its extrema,
- * found in closed form, into monotone pieces). Returns Infinity when h stays positive.
- */
-export function firstDownCrossing(A: number, B: number, C: number, D: number, w: number, tmax: number): number {
-  hA = A;
-  hB = B;
-  hC = C;
-  hD = D;
-  hW = w;
-  const R = Math.hypot(A, B);
-  hTol = 1e-13 * (R + Math.abs(C) + Math.abs(D) * tmax);
-  // h'(t) = wR cos(wt + β) + D, β = atan2(A, B)
-  let tl = 0;
-  let hl = hEval(0);
-  const monotone = !(w > 0) || !(R > 0) || Math.abs(D) >= w * R;
-  if (monotone) return crossIn(0, hl, tmax, hEval(tmax));
-  const beta = Math.atan2(A, B);
-  const gamma = Math.acos(-D / (w * R));
-  const period = (2 * Math.PI) / w;
-  let t1 = (gamma - beta) / w;
-  let t2 = (-gamma - beta) / w;
-  t1 -= Math.floor(t1 / period) * period;
-  t2 -= Math.floor(t2 / period) * period;
-  if (t1 <= 0) t1 += period;
-  if (t2 <= 0) t2 += period;
-  for (let guard = 0; guard < 100000; guard++) {
-    const tr = Math.min(t1, t2, tmax);
-    const hr = hEval(tr);
-    const root = crossIn(tl, hl, tr, hr);
-    if (root !== Infinity) return root;
-    if (tr >= tmax) return Infinity;
-    if (tr === t1) t1 += period;
-    else t2 += period;
-    tl = tr;
-    hl = hr;
-  }
-  return Infinity;
-}
-
-let hTol = 0;
-/** The crossing inside one monotone piece; a start at zero (within rounding) counts only if h then clearly goes negative. */
-function crossIn(tl: number, hl: number, tr: number, hr: number): number {
-  if (hl <= hTol) return hr < -hTol ? tl : Infinity;
-  if (hr > 0) return Infinity;
-  if (hr === 0) return tr;
-  return brentRoot(hEval, tl, tr, BRENT);
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -179,13 +117,6 @@ const seqModes = new Int32Array(MAX_SEGMENTS);
 const seqTau = new Float64Array(MAX_SEGMENTS);
 let seqLength = 0;
 
-const resid = new Float64Array(MAX_SEGMENTS + 3);
-const residTrial = new Float64Array(MAX_SEGMENTS + 3);
-const jac = new Float64Array((MAX_SEGMENTS + 3) * (MAX_SEGMENTS + 3));
-const step = new Float64Array(MAX_SEGMENTS + 3);
-const unknowns = new Float64Array(MAX_SEGMENTS + 3);
-const trial = new Float64Array(MAX_SEGMENTS + 3);
-
 /**
  * Residuals of the sequence solve at unknowns y = (j0, u0, g0, m, τ_0 … τ_{n−2}); the last
  * duration is what remains of the half period. Residuals: antisymmetry (3), the switching
@@ -228,123 +159,53 @@ function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: n
   return Number.isFinite(r[3] ?? NaN) && m > 0;
 }
 
-function norm(r: Float64Array, n: number): number {
-  let s = 0;
-  for (let i = 0; i < n; i++) s = Math.max(s, Math.abs(r[i] ?? 0));
-  return s;
-}
-
-/** Residual norm below which the sequence solve stops (normalised units, about 50 ulp of the O(1) states). */
-const NEWTON_TOLERANCE = 1e-14;
+/** Parameters of the sequence solve, read by {@link sequenceSystem} (set before each solve). */
+let sysTheta = 0;
+let sysLam = 0;
+let sysKappa = 0;
+const sequenceSystem: PeriodicSystem = {
+  residuals: (y, r) => sequenceResiduals(y, sysTheta, sysLam, sysKappa, r),
+};
 
 /**
- * Newton with a forward-difference Jacobian and backtracking; returns the final residual norm.
- * The Jacobian is kept from one iteration to the next while a full step still reduces the
- * residual at least tenfold (a chord step costs one residual evaluation instead of n + 1).
+ * Newton settings of the sequence solve: stop at a residual of 1e-14 (normalised units, about
+ * 50 ulp of the O(1) states); the Jacobian is kept from one iteration to the next while a full
+ * step still reduces the residual at least tenfold (a chord step costs one residual evaluation
+ * instead of n + 1).
  */
+const SEQUENCE_NEWTON: NewtonSettings = {
+  states: 3,
+  gainFloor: 0.2,
+  scaledNorm: false,
+  reuseJacobian: true,
+  backtracks: 30,
+  tolerance: 1e-14,
+  maxIterations: 60,
+};
+
+/** Unknowns (j0, u0, g0, m, τ_0 … τ_{n−2}) of the sequence solve; the solution after it. */
+const newton = new PeriodicNewton(MAX_SEGMENTS + 3);
+const unknowns = newton.x;
+
+/** Solves the assumed sequence from the given state and gain (durations from seqTau); returns the final residual norm. */
 function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0: number, g0: number, m: number): number {
-  const n = seqLength + 3;
   unknowns[0] = j0;
   unknowns[1] = u0;
   unknowns[2] = g0;
   unknowns[3] = m;
   for (let k = 0; k < seqLength - 1; k++) unknowns[k + 4] = seqTau[k] ?? 0;
-  if (!sequenceResiduals(unknowns, theta, lam, kappa, resid)) return Infinity;
-  let rn = norm(resid, n);
-  const scale = Math.max(1, Math.abs(j0), Math.abs(u0), Math.abs(g0));
-  let fresh = false;
-  let haveJacobian = false;
-  for (let iteration = 0; iteration < 60 && rn > NEWTON_TOLERANCE; iteration++) {
-    if (!haveJacobian) {
-      for (let c = 0; c < n; c++) {
-        const base = unknowns[c] ?? 0;
-        const h = 1e-7 * (c < 3 ? scale : c === 3 ? Math.max(Math.abs(base), 1e-3) : theta);
-        unknowns[c] = base + h;
-        if (!sequenceResiduals(unknowns, theta, lam, kappa, residTrial)) return Infinity;
-        unknowns[c] = base;
-        for (let i = 0; i < n; i++) jac[i * n + c] = ((residTrial[i] ?? 0) - (resid[i] ?? 0)) / h;
-      }
-      haveJacobian = true;
-      fresh = true;
-    }
-    if (fresh) {
-      // factor a new Jacobian once; chord steps reuse the factors
-      for (let i = 0; i < n * n; i++) lu[i] = jac[i] ?? 0;
-      if (!factorDense(n, lu, pivots)) return Infinity;
-    }
-    for (let i = 0; i < n; i++) step[i] = -(resid[i] ?? 0);
-    if (!solveFactored(n, lu, pivots, step)) return Infinity;
-    let lambda = 1;
-    let accepted = false;
-    const backtracks = fresh ? 30 : 1;
-    for (let back = 0; back < backtracks; back++) {
-      for (let i = 0; i < n; i++) trial[i] = (unknowns[i] ?? 0) + lambda * (step[i] ?? 0);
-      if ((trial[3] ?? 0) > 0.2 * (unknowns[3] ?? 0) && sequenceResiduals(trial, theta, lam, kappa, residTrial)) {
-        const tn = norm(residTrial, n);
-        if (tn < rn) {
-          for (let i = 0; i < n; i++) {
-            unknowns[i] = trial[i] ?? 0;
-            resid[i] = residTrial[i] ?? 0;
-          }
-          // keep the Jacobian only while full steps converge fast
-          if (!(lambda === 1 && tn < 0.1 * rn)) haveJacobian = false;
-          rn = tn;
-          accepted = true;
-          break;
-        }
-      }
-      lambda *= 0.5;
-    }
-    if (!accepted) {
-      if (fresh) break; // a fresh Jacobian found no descent: converged as far as rounding allows
-      haveJacobian = false; // a stale one: rebuild and retry
-      continue;
-    }
-    fresh = false;
-  }
-  return rn;
+  sysTheta = theta;
+  sysLam = lam;
+  sysKappa = kappa;
+  return newton.solve(sequenceSystem, seqLength + 3, SEQUENCE_NEWTON, theta);
 }
-
-/** LU factors of the current Jacobian and their pivot rows (factorDense overwrites its matrix). */
-const pivots = new Int32Array(MAX_SEGMENTS + 3);
-const lu = new Float64Array((MAX_SEGMENTS + 3) * (MAX_SEGMENTS + 3));
 
 // ---------------------------------------------------------------------------------------------
 // Event-driven propagation over the positive half period from a given state.
 
-const evModes = new Int32Array(MAX_SEGMENTS);
-const evTau = new Float64Array(MAX_SEGMENTS);
-let evLength = 0;
-let evOverflow = false;
+/** The segments of the last propagation. */
+const events = new HalfPeriodRecord(MAX_SEGMENTS);
 const evEnd = new Float64Array(3);
-let evCharge = 0;
-let evJ2 = 0;
-let evD2 = 0;
-let evPeakJ = 0;
-let evPeakU = 0;
-let evPeakG = 0;
-
-/** max |c + a cos(wt) + b sin(wt)| for t in [0, tmax] (w > 0). */
-export function sinusoidPeak(c: number, a: number, b: number, w: number, tmax: number): number {
-  let best = Math.max(Math.abs(c + a), Math.abs(c + a * Math.cos(w * tmax) + b * Math.sin(w * tmax)));
-  const R = Math.hypot(a, b);
-  if (!(R > 0)) return best;
-  let t = Math.atan2(b, a) / w;
-  const half = Math.PI / w;
-  t -= Math.floor(t / half) * half;
-  for (let k = 0; t <= tmax && k < 100000; k++) {
-    best = Math.max(best, Math.abs(c + a * Math.cos(w * t) + b * Math.sin(w * t)));
-    t += half;
-  }
-  return best;
-}
-
-/** ∫_0^τ (a cos t + b sin t)² dt. */
-export function squareIntegral(a: number, b: number, tau: number): number {
-  const s2 = Math.sin(2 * tau);
-  const s = Math.sin(tau);
-  return 0.5 * (a * a + b * b) * tau + 0.25 * (a * a - b * b) * s2 + a * b * s * s;
-}
 
 /** Mode at the start of a segment from the state (bridge +1). */
 function startMode(j: number, u: number, g: number, m: number, lam: number): number {
@@ -362,21 +223,11 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
   let u = u0;
   let g = g0;
   let t = 0;
-  evLength = 0;
-  evOverflow = false;
-  evCharge = 0;
-  evJ2 = 0;
-  evD2 = 0;
-  evPeakJ = 0;
-  evPeakU = 0;
-  evPeakG = 0;
+  events.clear();
   let mode = startMode(j, u, g, m, lam);
   const band = m * (1 + lam);
   while (t < theta) {
-    if (evLength >= MAX_SEGMENTS) {
-      evOverflow = true;
-      break;
-    }
+    if (!events.hasRoom()) break;
     const remaining = theta - t;
     let tau: number;
     let next = mode;
@@ -392,19 +243,19 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
         tau = Math.min(tLow, tHigh, remaining);
         if (tau < remaining) next = tLow <= tHigh ? MODE_P : MODE_N;
         if (record) {
-          evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, j, -a * w, w, tau));
-          evPeakG = Math.max(evPeakG, sinusoidPeak(0, j, -a * w, w, tau));
-          evPeakU = Math.max(evPeakU, sinusoidPeak(1, a, b, w, tau));
-          evJ2 += squareIntegral(j, -a * w, w * tau) / w;
+          events.currentPeak = Math.max(events.currentPeak, sinusoidPeak(0, j, -a * w, w, tau));
+          events.thirdStatePeak = Math.max(events.thirdStatePeak, sinusoidPeak(0, j, -a * w, w, tau));
+          events.capacitorPeak = Math.max(events.capacitorPeak, sinusoidPeak(1, a, b, w, tau));
+          events.currentSquareIntegral += squareIntegral(j, -a * w, w * tau) / w;
         }
       } else {
         // series-resonant limit: the current rests at zero until the bridge switches
         tau = remaining;
         if (record) {
-          evPeakJ = Math.max(evPeakJ, Math.abs(j));
-          evPeakG = Math.max(evPeakG, Math.abs(j));
-          evPeakU = Math.max(evPeakU, Math.abs(u), Math.abs(u + j * tau));
-          evJ2 += j * j * tau;
+          events.currentPeak = Math.max(events.currentPeak, Math.abs(j));
+          events.thirdStatePeak = Math.max(events.thirdStatePeak, Math.abs(j));
+          events.capacitorPeak = Math.max(events.capacitorPeak, Math.abs(u), Math.abs(u + j * tau));
+          events.currentSquareIntegral += j * j * tau;
         }
       }
     } else {
@@ -414,16 +265,16 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
       const root = firstDownCrossing(sign * j, sign * (e - u), -sign * g, -m * lam, 1, remaining);
       tau = Math.min(root, remaining);
       const integral = diodeIntegral(mode, tau, j, u, g, m, lam);
-      evCharge += sign * integral;
+      events.loadIntegral += sign * integral;
       if (record) {
         const a = j;
         const b = e - u;
-        evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, a, b, 1, tau));
-        evPeakU = Math.max(evPeakU, sinusoidPeak(e, u - e, j, 1, tau));
+        events.currentPeak = Math.max(events.currentPeak, sinusoidPeak(0, a, b, 1, tau));
+        events.capacitorPeak = Math.max(events.capacitorPeak, sinusoidPeak(e, u - e, j, 1, tau));
         const gEnd = g + sign * m * lam * tau;
-        evPeakG = Math.max(evPeakG, Math.abs(g), Math.abs(gEnd));
+        events.thirdStatePeak = Math.max(events.thirdStatePeak, Math.abs(g), Math.abs(gEnd));
         const j2 = squareIntegral(a, b, tau);
-        evJ2 += j2;
+        events.currentSquareIntegral += j2;
         // ∫ (j − g − c t)² with c = s m λ
         const c = sign * m * lam;
         const sinT = Math.sin(tau);
@@ -431,7 +282,7 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
         const intJ = a * sinT + b * (1 - cosT);
         const intJt = a * (tau * sinT + cosT - 1) + b * (sinT - tau * cosT);
         const intLin2 = g * g * tau + g * c * tau * tau + (c * c * tau * tau * tau) / 3;
-        evD2 += j2 - 2 * (g * intJ + c * intJt) + intLin2;
+        events.rectifierSquareIntegral += j2 - 2 * (g * intJ + c * intJt) + intLin2;
       }
       if (root < remaining) {
         flow(mode, tau, j, u, g, m, lam, true);
@@ -445,9 +296,7 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
     u = out[1] ?? 0;
     g = out[2] ?? 0;
     if (mode === MODE_O) g = j;
-    evModes[evLength] = mode;
-    evTau[evLength] = tau;
-    evLength++;
+    events.push(mode, tau);
     t += tau;
     if (tau >= remaining) break;
     mode = next;
@@ -525,10 +374,10 @@ function dropSegment(k: number): void {
 }
 
 function adoptEvents(): void {
-  seqLength = evLength;
-  for (let k = 0; k < evLength; k++) {
-    seqModes[k] = evModes[k] ?? 0;
-    seqTau[k] = evTau[k] ?? 0;
+  seqLength = events.length;
+  for (let k = 0; k < events.length; k++) {
+    seqModes[k] = events.modes[k] ?? 0;
+    seqTau[k] = events.durations[k] ?? 0;
   }
 }
 
@@ -537,7 +386,7 @@ function verifyResidual(j0: number, u0: number, g0: number, m: number, kappa: nu
   const e1 = Math.abs((evEnd[0] ?? 0) + j0);
   const e2 = Math.abs((evEnd[1] ?? 0) + u0);
   const e3 = Math.abs((evEnd[2] ?? 0) + g0);
-  const e4 = Math.abs(evCharge / theta - kappa * m) / Math.max(kappa * m, 1e-300);
+  const e4 = Math.abs(events.loadIntegral / theta - kappa * m) / Math.max(kappa * m, 1e-300);
   return Math.max(e1 / scale, e2 / scale, e3 / scale, e4);
 }
 
@@ -552,7 +401,7 @@ function attempt(lam: number, q: number, fn: number, theta: number, kappa: numbe
   let best = Infinity;
   for (let round = 0; round < 8; round++) {
     propagateEvents(sj, su, sg, mm, lam, theta, false);
-    if (evOverflow) return Infinity;
+    if (events.overflow) return Infinity;
     adoptEvents();
     let rn = solveSequence(theta, lam, kappa, sj, su, sg, mm);
     for (let fix = 0; fix < 6 && Number.isFinite(rn); fix++) {
@@ -578,7 +427,7 @@ function attempt(lam: number, q: number, fn: number, theta: number, kappa: numbe
     // the verifying propagation also records the waveform figures: when it confirms the
     // solution, the caller needs no second pass
     propagateEvents(sj, su, sg, mm, lam, theta, true);
-    if (evOverflow) return Infinity;
+    if (events.overflow) return Infinity;
     const residual = verifyResidual(sj, su, sg, mm, kappa, theta);
     best = residual;
     if (residual < STEADY_STATE_TOLERANCE) {
@@ -629,19 +478,7 @@ export function llcSteadyState(lam: number, q: number, fn: number): LlcSteadySta
   }
   const m = solvedM;
   // the last propagation (attempt's verifying pass at the solved state and this θ) holds the record
-  let sequence = "";
-  const durations: number[] = [];
-  for (let k = 0; k < evLength; k++) {
-    const tau = evTau[k] ?? 0;
-    if (tau <= 1e-9 * theta) continue; // a zero-length segment at a mode boundary is not a mode
-    const letter = MODE_LETTER[evModes[k] ?? 0] ?? "?";
-    if (sequence.endsWith(letter)) {
-      durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
-      continue;
-    }
-    sequence += letter;
-    durations.push(tau);
-  }
+  const { sequence, durations } = events.summary(MODE_LETTER, theta);
   return {
     gain: m,
     j0: solvedJ,
@@ -649,12 +486,12 @@ export function llcSteadyState(lam: number, q: number, fn: number): LlcSteadySta
     g0: solvedG,
     sequence,
     durations,
-    resonantRms: Math.sqrt(evJ2 / theta),
-    rectifierRms: Math.sqrt(Math.max(0, evD2) / theta),
-    resonantPeak: evPeakJ,
-    capacitorPeak: evPeakU,
-    magnetisingPeak: evPeakG,
-    rectifiedMean: evCharge / theta,
+    resonantRms: Math.sqrt(events.currentSquareIntegral / theta),
+    rectifierRms: Math.sqrt(Math.max(0, events.rectifierSquareIntegral) / theta),
+    resonantPeak: events.currentPeak,
+    capacitorPeak: events.capacitorPeak,
+    magnetisingPeak: events.thirdStatePeak,
+    rectifiedMean: events.loadIntegral / theta,
     inputMean: ((evEnd[1] ?? 0) - solvedU) / theta,
     residual: verifyResidual(solvedJ, solvedU, solvedG, m, kappa, theta),
   };

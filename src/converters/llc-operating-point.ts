@@ -5,8 +5,6 @@
  * @packageDocumentation
  */
 import {
-  DEFER_TO_CODES,
-  InputError,
   requireKnownKeys,
   requireNonNegative,
   requireObject,
@@ -17,6 +15,7 @@ import {
 } from "../core/index.js";
 import { extraLowVoltageCaution } from "../core/extra-low-voltage.js";
 import { fhaSeed, llcSteadyState } from "./llc-kernel.js";
+import { hardSwitchingCaution, noSteadyStateError, outsideTestedDomainNote } from "./steady-state-notes.js";
 
 /**
  * Options of {@link llcOperatingPoint}.
@@ -172,7 +171,7 @@ function operatingPoint(where: string, options: LlcOperatingPointOptions | Serie
   const q = zr / rac;
   const solution = llcSteadyState(lam, q, fn);
   if (solution === null) {
-    throw new InputError(where, "switchingFrequency", fs, "Hz", `a frequency where the steady state can be solved (f_n = ${fn.toPrecision(4)}, L_n = ${(1 / lam).toPrecision(4)}, Q = ${q.toPrecision(4)} gave no consistent periodic solution; the tested domain is 0.45 ≤ f_n ≤ 1.6, 3 ≤ L_n ≤ 10, 0.15 ≤ Q ≤ 1)`);
+    throw noSteadyStateError(where, fs, `f_n = ${fn.toPrecision(4)}, L_n = ${(1 / lam).toPrecision(4)}, Q = ${q.toPrecision(4)}`, "0.45 ≤ f_n ≤ 1.6, 3 ≤ L_n ≤ 10, 0.15 ≤ Q ≤ 1");
   }
   const ib = vb / zr;
   const m = solution.gain;
@@ -205,23 +204,13 @@ function operatingPoint(where: string, options: LlcOperatingPointOptions | Serie
   const ac = extraLowVoltageCaution(capacitorVoltagePeak / Math.SQRT2, "ac", "resonant capacitor (AC part, RMS of a sine of the same peak)");
   if (ac !== null) cautions.push(ac);
   if (!zvs) {
-    cautions.push({
-      code: "hard-switching",
-      severity: "warning",
-      message: `The switches turn on hard: the current at turn-off is ${turnOffCurrent.toPrecision(3)} A${deadTime !== undefined && switchCapacitance !== undefined ? " and its charge over the dead time does not swing the switch capacitances" : ""}. Hard switching heats the switches and, with reverse recovery of their body diodes, can destroy them. Raise the switching frequency or the magnetising current. ${DEFER_TO_CODES}`,
-      value: turnOffCurrent,
-      limit: 0,
-      unit: "A",
-      source: "common practice (resonant converters are run with inductive current at turn-off)",
-    });
+    const circumstance = deadTime !== undefined && switchCapacitance !== undefined ? " and its charge over the dead time does not swing the switch capacitances" : "";
+    cautions.push(hardSwitchingCaution(turnOffCurrent, circumstance, "Raise the switching frequency or the magnetising current."));
   }
   const validity: ValidityNote[] = [];
   const ln = 1 / lam;
   if (fn < 0.45 || fn > 1.6 || q < 0.15 || q > 1 || (!series && (ln < 3 || ln > 10))) {
-    validity.push({
-      code: "outside-tested-domain",
-      message: "The point lies outside the domain checked against the time-domain simulation (0.45 ≤ f_n ≤ 1.6, 0.15 ≤ Q ≤ 1, 3 ≤ L_n ≤ 10): the solution satisfies the periodic boundary conditions to 1e-9, but is not independently verified there.",
-    });
+    validity.push(outsideTestedDomainNote("0.45 ≤ f_n ≤ 1.6, 0.15 ≤ Q ≤ 1, 3 ≤ L_n ≤ 10", "1e-9"));
   }
   return {
     outputVoltage: vout,

@@ -1,0 +1,270 @@
+/**
+ * The shared solver machinery of the exact periodic steady states of the ideal resonant
+ * converters (LLC and series-resonant, parallel-resonant and LCC, and any further
+ * piecewise-linear topology). Internal.
+ *
+ * Each topology reduces its steady state to a square system of residuals in a small vector of
+ * unknowns laid out as
+ *
+ *   x = (state at θ = 0 (`states` entries), gain, segment durations …)
+ *
+ * — the half-wave antisymmetry $x(\Theta) + x(0) = 0$, the load balance, and (for a solve on a
+ * fixed mode sequence) the switching conditions. {@link PeriodicNewton} solves it by Newton's
+ * method with a forward-difference Jacobian, an optional analytic one, optional chord steps and
+ * backtracking; {@link HalfPeriodRecord} holds the segments and waveform totals an event-driven
+ * propagation found and names the mode sequence. The waveform tools (crossings, peaks, square integrals) are in
+ * `ramp-sinusoid.ts`.
+ *
+ * A third topology uses it so: implement {@link PeriodicSystem} (an object whose `residuals`
+ * reads the topology's parameters from its own fields, so no closure is made per call), fill
+ * {@link PeriodicNewton.x}, call {@link PeriodicNewton.solve} with its {@link NewtonSettings},
+ * and read the solution back from `x`.
+ *
+ * @packageDocumentation
+ */
+import { factorDense, solveFactored } from "../special/internal.js";
+
+/** A square system of residuals r(x) of a periodic steady state (see the module comment for the layout of x). */
+export interface PeriodicSystem {
+  /**
+   * Writes r(x) into the first `size` entries of `r`; returns false where the residuals are
+   * not defined (a non-positive gain, a propagation that overflowed, a non-finite value).
+   */
+  residuals(x: Float64Array, r: Float64Array): boolean;
+}
+
+/** How {@link PeriodicNewton.solve} iterates; each topology keeps one constant object of these. */
+export interface NewtonSettings {
+  /** Number of state unknowns at the start of x; the gain follows them, durations after it. */
+  readonly states: number;
+  /** A trial step is taken only when it keeps the gain above gainFloor × its current value (0 < gainFloor < 1). */
+  readonly gainFloor: number;
+  /** Divide the state residuals by max(1, |x_state|) (of the starting point) in the convergence norm. */
+  readonly scaledNorm: boolean;
+  /** Keep the Jacobian (chord steps) while full steps reduce the residual at least tenfold. */
+  readonly reuseJacobian: boolean;
+  /** Step halvings tried with a fresh Jacobian (a chord step is tried once, then the Jacobian is rebuilt). */
+  readonly backtracks: number;
+  /** Residual norm at which the iteration stops. */
+  readonly tolerance: number;
+  /** Most Newton iterations. */
+  readonly maxIterations: number;
+}
+
+/**
+ * Damped Newton solver for a {@link PeriodicSystem}, with preallocated work arrays (no
+ * allocation per solve). Difference steps: 1e-7 × max(1, |state|) for the states,
+ * 1e-7 × max(|gain|, 1e-3) for the gain, 1e-7 × `durationScale` for the durations.
+ */
+export class PeriodicNewton {
+  /** The unknowns: the starting point before {@link PeriodicNewton.solve}, the solution after it. */
+  readonly x: Float64Array;
+  private readonly r: Float64Array;
+  private readonly rTrial: Float64Array;
+  private readonly trial: Float64Array;
+  private readonly step: Float64Array;
+  private readonly jac: Float64Array;
+  private readonly lu: Float64Array;
+  private readonly pivots: Int32Array;
+  private normScale = 1;
+
+  /** @param capacity - the largest number of unknowns solved for */
+  constructor(capacity: number) {
+    this.x = new Float64Array(capacity);
+    this.r = new Float64Array(capacity);
+    this.rTrial = new Float64Array(capacity);
+    this.trial = new Float64Array(capacity);
+    this.step = new Float64Array(capacity);
+    this.jac = new Float64Array(capacity * capacity);
+    this.lu = new Float64Array(capacity * capacity);
+    this.pivots = new Int32Array(capacity);
+  }
+
+  private norm(r: Float64Array, size: number, settings: NewtonSettings): number {
+    let s = 0;
+    for (let i = 0; i < size; i++) {
+      const v = Math.abs(r[i] ?? 0);
+      s = Math.max(s, settings.scaledNorm && i < settings.states ? v / this.normScale : v);
+    }
+    return s;
+  }
+
+  /** Forward-difference Jacobian at x (residuals in `r`) into `jac`; false where a residual is undefined. */
+  private differenceJacobian(system: PeriodicSystem, size: number, settings: NewtonSettings, durationScale: number): boolean {
+    const { x, r, rTrial, jac } = this;
+    const states = settings.states;
+    for (let c = 0; c < size; c++) {
+      const base = x[c] ?? 0;
+      const h = 1e-7 * (c < states ? this.normScale : c === states ? Math.max(Math.abs(base), 1e-3) : durationScale);
+      x[c] = base + h;
+      const ok = system.residuals(x, rTrial);
+      x[c] = base;
+      if (!ok) return false;
+      for (let i = 0; i < size; i++) jac[i * size + c] = ((rTrial[i] ?? 0) - (r[i] ?? 0)) / h;
+    }
+    return true;
+  }
+
+  /**
+   * Solves r(x) = 0 from the starting point in {@link PeriodicNewton.x} (first `size`
+   * entries), leaving the last accepted iterate there.
+   *
+   * @param system - the residuals
+   * @param size - number of unknowns (≤ capacity)
+   * @param settings - the iteration settings
+   * @param durationScale - scale of the duration unknowns (the half period), for the difference steps
+   * @returns the final residual norm (Infinity when the residuals are undefined at the start or the Jacobian is singular)
+   */
+  solve(system: PeriodicSystem, size: number, settings: NewtonSettings, durationScale: number): number {
+    const { x, r, rTrial, trial, step, jac, lu, pivots } = this;
+    const gain = settings.states;
+    let scale = 1;
+    for (let i = 0; i < settings.states; i++) scale = Math.max(scale, Math.abs(x[i] ?? 0));
+    this.normScale = scale;
+    if (!system.residuals(x, r)) return Infinity;
+    let rn = this.norm(r, size, settings);
+    let fresh = false;
+    let haveJacobian = false;
+    for (let iteration = 0; iteration < settings.maxIterations && rn > settings.tolerance; iteration++) {
+      if (!haveJacobian) {
+        if (!this.differenceJacobian(system, size, settings, durationScale)) return Infinity;
+        haveJacobian = true;
+        fresh = true;
+      }
+      if (fresh) {
+        // factor a new Jacobian once; chord steps reuse the factors
+        for (let i = 0; i < size * size; i++) lu[i] = jac[i] ?? 0;
+        if (!factorDense(size, lu, pivots)) return Infinity;
+      }
+      for (let i = 0; i < size; i++) step[i] = -(r[i] ?? 0);
+      if (!solveFactored(size, lu, pivots, step)) return Infinity;
+      let lambda = 1;
+      let accepted = false;
+      const backtracks = fresh ? settings.backtracks : 1;
+      for (let back = 0; back < backtracks; back++) {
+        for (let i = 0; i < size; i++) trial[i] = (x[i] ?? 0) + lambda * (step[i] ?? 0);
+        if ((trial[gain] ?? 0) > settings.gainFloor * (x[gain] ?? 0) && system.residuals(trial, rTrial)) {
+          const tn = this.norm(rTrial, size, settings);
+          if (tn < rn) {
+            for (let i = 0; i < size; i++) {
+              x[i] = trial[i] ?? 0;
+              r[i] = rTrial[i] ?? 0;
+            }
+            // keep the Jacobian only while full steps converge fast
+            if (!(settings.reuseJacobian && lambda === 1 && tn < 0.1 * rn)) haveJacobian = false;
+            rn = tn;
+            accepted = true;
+            break;
+          }
+        }
+        lambda *= 0.5;
+      }
+      if (!accepted) {
+        if (fresh) break; // a fresh Jacobian found no descent: converged as far as rounding allows
+        haveJacobian = false; // a stale one: rebuild and retry
+        continue;
+      }
+      fresh = false;
+    }
+    return rn;
+  }
+}
+
+/** The conduction-mode sequence of a half period and the duration of each mode. */
+export interface ModeSummary {
+  /** Letters of the modes in order, neighbours of the same mode merged, e.g. "PO". */
+  readonly sequence: string;
+  /** Duration of each letter's interval [normalised time]. */
+  readonly durations: number[];
+}
+
+/**
+ * What an event-driven propagation of one half period found: its segments (mode, duration)
+ * and the running totals of its waveform figures (normalised units), all reset by
+ * {@link HalfPeriodRecord.clear}. Each topology says in its kernel which waveform each total
+ * holds.
+ */
+export class HalfPeriodRecord {
+  /** Mode code of each segment. */
+  readonly modes: Int32Array;
+  /** Duration of each segment [normalised time]. */
+  readonly durations: Float64Array;
+  /** Number of segments held. */
+  length = 0;
+  /** Set when a propagation needed more segments than the record holds. */
+  overflow = false;
+  /** ∫ of the rectified quantity of the load balance (LLC: |j − g|; PRC/LCC: |v|). */
+  loadIntegral = 0;
+  /** ∫ j (resonant current). */
+  currentIntegral = 0;
+  /** ∫ j². */
+  currentSquareIntegral = 0;
+  /** ∫ of the square of the rectifier-side waveform (LLC: j − g; PRC/LCC: v). */
+  rectifierSquareIntegral = 0;
+  /** Peak |j|. */
+  currentPeak = 0;
+  /** Peak |u| (the series or resonant capacitor voltage). */
+  capacitorPeak = 0;
+  /** Peak of the third state (LLC: |g|, the magnetising current; PRC/LCC: |v|). */
+  thirdStatePeak = 0;
+  /** Time spent in a clamped mode. */
+  clampedTime = 0;
+
+  /** @param capacity - most segments in one half period */
+  constructor(capacity: number) {
+    this.modes = new Int32Array(capacity);
+    this.durations = new Float64Array(capacity);
+  }
+
+  /** Empties the record and zeroes the totals before a propagation. */
+  clear(): void {
+    this.length = 0;
+    this.overflow = false;
+    this.loadIntegral = 0;
+    this.currentIntegral = 0;
+    this.currentSquareIntegral = 0;
+    this.rectifierSquareIntegral = 0;
+    this.currentPeak = 0;
+    this.capacitorPeak = 0;
+    this.thirdStatePeak = 0;
+    this.clampedTime = 0;
+  }
+
+  /** True while another segment fits; otherwise marks the overflow (the propagation must stop). */
+  hasRoom(): boolean {
+    if (this.length < this.modes.length) return true;
+    this.overflow = true;
+    return false;
+  }
+
+  /** Appends a segment (call {@link HalfPeriodRecord.hasRoom} first). */
+  push(mode: number, duration: number): void {
+    this.modes[this.length] = mode;
+    this.durations[this.length] = duration;
+    this.length++;
+  }
+
+  /**
+   * Names the sequence: segments no longer than 1e-9 × halfPeriod (a zero-length segment at a
+   * mode boundary) are not modes, and neighbours of the same mode merge.
+   *
+   * @param letters - the letter of each mode code
+   * @param halfPeriod - the half period [normalised time]
+   */
+  summary(letters: readonly string[], halfPeriod: number): ModeSummary {
+    let sequence = "";
+    const durations: number[] = [];
+    for (let k = 0; k < this.length; k++) {
+      const tau = this.durations[k] ?? 0;
+      if (tau <= 1e-9 * halfPeriod) continue;
+      const letter = letters[this.modes[k] ?? 0] ?? "?";
+      if (sequence.endsWith(letter)) {
+        durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
+        continue;
+      }
+      sequence += letter;
+      durations.push(tau);
+    }
+    return { sequence, durations };
+  }
+}
