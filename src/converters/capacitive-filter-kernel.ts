@@ -16,14 +16,15 @@
  * O ends when $v$ reaches $\pm m$, P and N when $j$ returns to zero. The load balance is
  * $\frac1\Theta\int_{P,N}|j|\,d\theta = \zeta m$ with $\zeta = Z_p/(n^2R_\mathrm{load})$. The
  * half-wave antisymmetric steady state $x(\Theta) = -x(0)$, $\Theta = \pi f_p/f_s$, is solved
- * by Newton's method on $(j_0, u_0, v_0, m)$ through an exact event-driven propagation: each
+ * by Newton's method on $(j_0, u_0, v_0, m)$ (the shared {@link PeriodicNewton}) through an
+ * exact event-driven propagation recorded in a {@link HalfPeriodRecord}: each
  * mode has a closed-form solution (a sinusoid, or a ramp for $a = 0$) and each mode change is
  * the first crossing of such a function ({@link firstDownCrossing}).
  *
  * @packageDocumentation
  */
-import { solveDense } from "../special/index.js";
-import { firstDownCrossing, sinusoidPeak, squareIntegral } from "./llc-kernel.js";
+import { HalfPeriodRecord, PeriodicNewton, type NewtonSettings, type PeriodicSystem } from "./periodic-newton.js";
+import { firstDownCrossing, rampSinusoidSquareIntegral, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 const MODE_O = 0;
 const MODE_P = 1;
@@ -58,20 +59,15 @@ export interface CapacitiveSteadyState {
 }
 
 const st = new Float64Array(3);
-let evCount = 0;
-let evOverflow = false;
-const evMode = new Int32Array(MAX_SEGMENTS);
-const evTau = new Float64Array(MAX_SEGMENTS);
-let evCharge = 0;
-let evJ = 0;
-let evJ2 = 0;
+/**
+ * The segments and totals of the last propagation: loadIntegral = ∫|j| over P and N (the
+ * rectified charge), currentIntegral = ∫j, currentSquareIntegral = ∫j², rectifierSquareIntegral
+ * = ∫v², capacitorPeak = peak |u|, thirdStatePeak = peak |v|, clampedTime = time in P and N.
+ */
+const events = new HalfPeriodRecord(MAX_SEGMENTS);
+/** ∫j² over P and N (the rectifier current's square) and the peak |j| there: not in the shared record. */
 let evRect2 = 0;
-let evV2 = 0;
-let evPeakJ = 0;
 let evPeakRect = 0;
-let evPeakU = 0;
-let evPeakV = 0;
-let evConducting = 0;
 
 function startMode(j: number, u: number, v: number, m: number): number {
   const tol = 1e-13 * (1 + Math.abs(j) + m);
@@ -95,26 +91,14 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
   let u = u0;
   let v = Math.min(m, Math.max(-m, v0));
   let t = 0;
-  evCount = 0;
-  evOverflow = false;
-  evCharge = 0;
-  evJ = 0;
-  evJ2 = 0;
+  events.clear();
   evRect2 = 0;
-  evV2 = 0;
-  evPeakJ = 0;
   evPeakRect = 0;
-  evPeakU = 0;
-  evPeakV = 0;
-  evConducting = 0;
   let mode = startMode(j, u, v, m);
   const w = Math.sqrt(1 + a);
   const wz = Math.sqrt(a);
   while (t < theta) {
-    if (evCount >= MAX_SEGMENTS) {
-      evOverflow = true;
-      break;
-    }
+    if (!events.hasRoom()) break;
     const remaining = theta - t;
     let tau: number;
     let next = mode;
@@ -132,14 +116,12 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
       const s = Math.sin(w * tau);
       const integ = b * s + q * (1 - c);
       if (record) {
-        evJ += integ;
-        evJ2 += squareIntegral(j, d0 / w, w * tau) / w;
-        evPeakJ = Math.max(evPeakJ, sinusoidPeak(0, j, d0 / w, w, tau));
-        evPeakU = Math.max(evPeakU, sinusoidPeak(u + a * q, -a * q, a * b, w, tau));
-        evPeakV = Math.max(evPeakV, sinusoidPeak(v + q, -q, b, w, tau));
-        // ∫ (C + A cos + B sin)² with C = v + q, A = −q, B = b
-        const cc = v + q;
-        evV2 += cc * cc * tau + (2 * cc * (-q * s + b * (1 - c))) / w + squareIntegral(-q, b, w * tau) / w;
+        events.currentIntegral += integ;
+        events.currentSquareIntegral += squareIntegral(j, d0 / w, w * tau) / w;
+        events.currentPeak = Math.max(events.currentPeak, sinusoidPeak(0, j, d0 / w, w, tau));
+        events.capacitorPeak = Math.max(events.capacitorPeak, sinusoidPeak(u + a * q, -a * q, a * b, w, tau));
+        events.thirdStatePeak = Math.max(events.thirdStatePeak, sinusoidPeak(v + q, -q, b, w, tau));
+        events.rectifierSquareIntegral += rampSinusoidSquareIntegral(-q, b, v + q, 0, w, tau);
       }
       const jEnd = j * c + (d0 / w) * s;
       u += a * integ;
@@ -163,12 +145,12 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
         integ = (j * s + b * (1 - c)) / wz;
         if (record) {
           const j2 = squareIntegral(j, b, wz * tau) / wz;
-          evJ2 += j2;
+          events.currentSquareIntegral += j2;
           evRect2 += j2;
           const pk = sinusoidPeak(0, j, b, wz, tau);
-          evPeakJ = Math.max(evPeakJ, pk);
+          events.currentPeak = Math.max(events.currentPeak, pk);
           evPeakRect = Math.max(evPeakRect, pk);
-          evPeakU = Math.max(evPeakU, sinusoidPeak(e, u - e, j * wz, wz, tau));
+          events.capacitorPeak = Math.max(events.capacitorPeak, sinusoidPeak(e, u - e, j * wz, wz, tau));
         }
       } else {
         const root = firstDownCrossing(0, 0, sg * j, sg * e, 1, remaining);
@@ -177,21 +159,21 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
         uEnd = u;
         integ = j * tau + 0.5 * e * tau * tau;
         if (record) {
-          const j2 = j * j * tau + j * e * tau * tau + (e * e * tau * tau * tau) / 3;
-          evJ2 += j2;
+          const j2 = rampSinusoidSquareIntegral(0, 0, j, e, 1, tau);
+          events.currentSquareIntegral += j2;
           evRect2 += j2;
           const pk = Math.max(Math.abs(j), Math.abs(jEnd));
-          evPeakJ = Math.max(evPeakJ, pk);
+          events.currentPeak = Math.max(events.currentPeak, pk);
           evPeakRect = Math.max(evPeakRect, pk);
-          evPeakU = Math.max(evPeakU, Math.abs(u));
+          events.capacitorPeak = Math.max(events.capacitorPeak, Math.abs(u));
         }
       }
-      evCharge += sg * integ;
+      events.loadIntegral += sg * integ;
       if (record) {
-        evJ += integ;
-        evV2 += m * m * tau;
-        evPeakV = Math.max(evPeakV, m);
-        evConducting += tau;
+        events.currentIntegral += integ;
+        events.rectifierSquareIntegral += m * m * tau;
+        events.thirdStatePeak = Math.max(events.thirdStatePeak, m);
+        events.clampedTime += tau;
       }
       j = jEnd;
       u = uEnd;
@@ -201,9 +183,7 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
         next = MODE_O;
       }
     }
-    evMode[evCount] = mode;
-    evTau[evCount] = tau;
-    evCount++;
+    events.push(mode, tau);
     t += tau;
     if (tau >= remaining) break;
     mode = next;
@@ -214,67 +194,40 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
 }
 
 // ---------------------------------------------------------------------------------------------
-// Newton on (j0, u0, v0, m).
+// Newton on (j0, u0, v0, m), with the shared solver.
 
-const y = new Float64Array(4);
-const trial = new Float64Array(4);
-const r = new Float64Array(4);
-const rTrial = new Float64Array(4);
-const jac = new Float64Array(16);
-const step = new Float64Array(4);
+/** Parameters of the solve, read by {@link capacitiveSystem} (set before each solve). */
+let sysA = 0;
+let sysZeta = 0;
+let sysTheta = 0;
+const capacitiveSystem: PeriodicSystem = {
+  residuals: (x, out) => residuals(x, sysA, sysZeta, sysTheta, out),
+};
+
+/** Newton on (j0, u0, v0, M): a fresh Jacobian each step, up to 40 halvings, stop at 1e-14 (states scaled by max(1, |x|)). */
+const CAPACITIVE_NEWTON: NewtonSettings = {
+  states: 3,
+  gainFloor: 0.1,
+  scaledNorm: true,
+  reuseJacobian: false,
+  backtracks: 40,
+  tolerance: 1e-14,
+  maxIterations: 60,
+};
+const newton = new PeriodicNewton(4);
+/** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
+const y = newton.x;
 
 function residuals(x: Float64Array, a: number, zeta: number, theta: number, out: Float64Array): boolean {
   const m = x[3] ?? 0;
   if (!(m > 0)) return false;
   propagate(x[0] ?? 0, x[1] ?? 0, x[2] ?? 0, m, a, theta, false);
-  if (evOverflow) return false;
+  if (events.overflow) return false;
   out[0] = (st[0] ?? 0) + (x[0] ?? 0);
   out[1] = (st[1] ?? 0) + (x[1] ?? 0);
   out[2] = (st[2] ?? 0) + (x[2] ?? 0);
-  out[3] = evCharge / (theta * zeta * m) - 1;
+  out[3] = events.loadIntegral / (theta * zeta * m) - 1;
   return Number.isFinite(out[0] + out[1] + out[2] + out[3]);
-}
-
-function norm4(v: Float64Array, scale: number): number {
-  return Math.max(Math.abs(v[0] ?? 0) / scale, Math.abs(v[1] ?? 0) / scale, Math.abs(v[2] ?? 0) / scale, Math.abs(v[3] ?? 0));
-}
-
-/** Newton (forward-difference Jacobian, backtracking) from the state in `y`; returns the final residual norm. */
-function newton(a: number, zeta: number, theta: number): number {
-  if (!residuals(y, a, zeta, theta, r)) return Infinity;
-  const scale = Math.max(1, Math.abs(y[0] ?? 0), Math.abs(y[1] ?? 0), Math.abs(y[2] ?? 0));
-  let rn = norm4(r, scale);
-  for (let it = 0; it < 60 && rn > 1e-14; it++) {
-    for (let col = 0; col < 4; col++) {
-      const base = y[col] ?? 0;
-      const h = 1e-7 * (col < 3 ? scale : Math.max(base, 1e-3));
-      y[col] = base + h;
-      const ok = residuals(y, a, zeta, theta, rTrial);
-      y[col] = base;
-      if (!ok) return Infinity;
-      for (let i = 0; i < 4; i++) jac[i * 4 + col] = ((rTrial[i] ?? 0) - (r[i] ?? 0)) / h;
-    }
-    for (let i = 0; i < 4; i++) step[i] = -(r[i] ?? 0);
-    if (!solveDense(4, jac, step)) return Infinity;
-    let lambda = 1;
-    let accepted = false;
-    for (let back = 0; back < 40; back++) {
-      for (let i = 0; i < 4; i++) trial[i] = (y[i] ?? 0) + lambda * (step[i] ?? 0);
-      if ((trial[3] ?? 0) > 0.1 * (y[3] ?? 0) && residuals(trial, a, zeta, theta, rTrial)) {
-        const tn = norm4(rTrial, scale);
-        if (tn < rn) {
-          y.set(trial);
-          r.set(rTrial);
-          rn = tn;
-          accepted = true;
-          break;
-        }
-      }
-      lambda *= 0.5;
-    }
-    if (!accepted) break;
-  }
-  return rn;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -335,7 +288,10 @@ function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: nu
   y[1] = u;
   y[2] = v;
   y[3] = m;
-  return newton(a, zeta, theta);
+  sysA = a;
+  sysZeta = zeta;
+  sysTheta = theta;
+  return newton.solve(capacitiveSystem, 4, CAPACITIVE_NEWTON, theta);
 }
 
 /** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */
@@ -389,11 +345,11 @@ export function capacitiveSteadyState(a: number, zeta: number, theta: number, st
     let m = fhaScratch[3] ?? 1;
     for (let i = 0; i < 400; i++) {
       propagate(j, u, v, m, a, theta, false);
-      if (evOverflow) break;
+      if (events.overflow) break;
       j = -(st[0] ?? 0);
       u = -(st[1] ?? 0);
       v = -(st[2] ?? 0);
-      const delivered = evCharge / (theta * zeta);
+      const delivered = events.loadIntegral / (theta * zeta);
       if (delivered > 0) m = 0.7 * m + 0.3 * delivered;
     }
     res = tryFrom(j, u, v, m, a, zeta, theta);
@@ -405,19 +361,7 @@ export function capacitiveSteadyState(a: number, zeta: number, theta: number, st
   const u0 = y[1] ?? 0;
   const v0 = Math.min(m, Math.max(-m, y[2] ?? 0));
   propagate(j0, u0, v0, m, a, theta, true);
-  let sequence = "";
-  const durations: number[] = [];
-  for (let i = 0; i < evCount; i++) {
-    const tau = evTau[i] ?? 0;
-    if (tau <= 1e-9 * theta) continue;
-    const letter = LETTER[evMode[i] ?? 0] ?? "?";
-    if (sequence.endsWith(letter)) {
-      durations[durations.length - 1] = (durations[durations.length - 1] ?? 0) + tau;
-      continue;
-    }
-    sequence += letter;
-    durations.push(tau);
-  }
+  const { sequence, durations } = events.summary(LETTER, theta);
   return {
     gain: m,
     j0,
@@ -425,15 +369,15 @@ export function capacitiveSteadyState(a: number, zeta: number, theta: number, st
     v0,
     sequence,
     durations,
-    resonantRms: Math.sqrt(evJ2 / theta),
-    resonantPeak: evPeakJ,
-    seriesPeak: evPeakU,
-    parallelPeak: evPeakV,
-    parallelRms: Math.sqrt(Math.max(0, evV2) / theta),
+    resonantRms: Math.sqrt(events.currentSquareIntegral / theta),
+    resonantPeak: events.currentPeak,
+    seriesPeak: events.capacitorPeak,
+    parallelPeak: events.thirdStatePeak,
+    parallelRms: Math.sqrt(Math.max(0, events.rectifierSquareIntegral) / theta),
     rectifierRms: Math.sqrt(evRect2 / theta),
     rectifierPeak: evPeakRect,
-    conductionFraction: evConducting / theta,
-    inputMean: evJ / theta,
+    conductionFraction: events.clampedTime / theta,
+    inputMean: events.currentIntegral / theta,
     residual: res,
   };
 }

@@ -6,8 +6,6 @@
  * @packageDocumentation
  */
 import {
-  DEFER_TO_CODES,
-  InputError,
   requireKnownKeys,
   requireObject,
   requireOneOf,
@@ -18,6 +16,7 @@ import {
 } from "../core/index.js";
 import { capacitiveFirstHarmonic, capacitiveSteadyState, type CapacitiveStart, type CapacitiveSteadyState } from "./capacitive-filter-kernel.js";
 import type { LccOperatingPointOptions, ParallelResonantOperatingPointOptions } from "./lcc-operating-point.js";
+import { hardSwitchingCaution, noSteadyStateError, outsideTestedDomainNote } from "./steady-state-notes.js";
 
 /**
  * First-harmonic values beside the exact ones ({@link CapacitiveFilterOperatingPoint.firstHarmonic}),
@@ -115,7 +114,12 @@ const PRC_KEYS = [
 const LCC_KEYS = [...PRC_KEYS, "seriesCapacitance"] as const;
 
 /** Domain checked against the time-domain simulation (fixture prc-lcc-capacitive-steady-state.json). */
-export const CAPACITIVE_TESTED = { fnMin: 0.7, fnMax: 1.6, qMin: 0.5, qMax: 3, aMin: 0.25, aMax: 2 } as const;
+const CAPACITIVE_TESTED = { fnMin: 0.55, fnMax: 2.4, qMin: 0.2, qMax: 3, aMin: 0.25, aMax: 2 } as const;
+
+function testedDomain(lcc: boolean): string {
+  const t = CAPACITIVE_TESTED;
+  return `${t.fnMin} ≤ f_n ≤ ${t.fnMax}, ${t.qMin} ≤ Q ≤ ${t.qMax}${lcc ? `, ${t.aMin} ≤ A ≤ ${t.aMax}` : ""}`;
+}
 
 /** Checked circuit of a PRC (cs = Infinity) or LCC. Internal. */
 export interface ParallelConverterCircuit {
@@ -204,23 +208,11 @@ export function capacitiveOperatingPointOf(
   const out = voltageCaution({ voltage: vout, waveform: "dc", location: "converter output" });
   if (out !== null) cautions.push(out);
   if (!(turnOffCurrent > 0)) {
-    cautions.push({
-      code: "hard-switching",
-      severity: "warning",
-      message: `The switches turn on hard: the current at turn-off is ${turnOffCurrent.toPrecision(3)} A (capacitive operation). Hard switching heats the switches and, with reverse recovery of their body diodes, can destroy them. Raise the switching frequency. ${DEFER_TO_CODES}`,
-      value: turnOffCurrent,
-      limit: 0,
-      unit: "A",
-      source: "common practice (resonant converters are run with inductive current at turn-off)",
-    });
+    cautions.push(hardSwitchingCaution(turnOffCurrent, " (capacitive operation)", "Raise the switching frequency."));
   }
   const validity: ValidityNote[] = [];
-  const t = CAPACITIVE_TESTED;
-  if (fn < t.fnMin || fn > t.fnMax || q < t.qMin || q > t.qMax || (lcc && (a < t.aMin || a > t.aMax))) {
-    validity.push({
-      code: "outside-tested-domain",
-      message: `The point lies outside the domain checked against the time-domain simulation (${t.fnMin} ≤ f_n ≤ ${t.fnMax}, ${t.qMin} ≤ Q ≤ ${t.qMax}${lcc ? `, ${t.aMin} ≤ A ≤ ${t.aMax}` : ""}): the solution meets the periodic boundary conditions to 1e-10, but is not independently verified there.`,
-    });
+  if (fn < CAPACITIVE_TESTED.fnMin || fn > CAPACITIVE_TESTED.fnMax || q < CAPACITIVE_TESTED.qMin || q > CAPACITIVE_TESTED.qMax || (lcc && (a < CAPACITIVE_TESTED.aMin || a > CAPACITIVE_TESTED.aMax))) {
+    validity.push(outsideTestedDomainNote(testedDomain(lcc), "1e-10"));
   }
   const point: CapacitiveFilterOperatingPoint = {
     outputVoltage: vout,
@@ -255,11 +247,12 @@ export function capacitiveOperatingPointOf(
 function operatingPoint(where: string, options: LccOperatingPointOptions | ParallelResonantOperatingPointOptions, lcc: boolean): CapacitiveFilterOperatingPoint {
   requireObject(where, "options", options);
   requireKnownKeys(where, "options", options, lcc ? LCC_KEYS : PRC_KEYS);
-  const circuit = checkParallelConverterCircuit(where, options as Partial<LccOperatingPointOptions>, lcc);
+  const circuit = checkParallelConverterCircuit(where, options, lcc);
   const fs = requirePositive(where, "switchingFrequency", options.switchingFrequency, "Hz");
   const solved = capacitiveOperatingPointOf(circuit, fs);
   if (solved === null) {
-    throw new InputError(where, "switchingFrequency", fs, "Hz", `a frequency where the steady state can be solved (no consistent periodic solution with a capacitive output filter was found; the tested domain is ${CAPACITIVE_TESTED.fnMin} ≤ f_n ≤ ${CAPACITIVE_TESTED.fnMax}, ${CAPACITIVE_TESTED.qMin} ≤ Q ≤ ${CAPACITIVE_TESTED.qMax})`);
+    const fr = 1 / (2 * Math.PI * Math.sqrt(circuit.resonantInductance * (lcc ? circuit.seriesCapacitance : circuit.parallelCapacitance)));
+    throw noSteadyStateError(where, fs, `f_n = ${(fs / fr).toPrecision(4)} with a capacitive output filter`, testedDomain(lcc));
   }
   return solved.point;
 }
@@ -299,12 +292,13 @@ function operatingPoint(where: string, options: LccOperatingPointOptions | Paral
  *   tested domain)
  * @remarks Accuracy: gain, output voltage, currents and capacitor voltages within 1e-6 relative
  * of a time-domain simulation of the same circuit taken to periodic steady state (scipy,
- * fixture test/fixtures/converters/prc-lcc-capacitive-steady-state.json: 0.7 ≤ f_n ≤ 1.6,
- * 0.5 ≤ Q ≤ 3); the boundary conditions are met to ≤ 1e-10; input power equals output power
- * to 1e-9 (lossless circuit). FHA error (RC load model): the FHA gain is within 4 % of the
- * exact one for 0.8 ≤ f_n ≤ 1.2, 0.5 ≤ Q ≤ 3 (tested). Validity: ideal components — no
- * losses, no diode drop, no output ripple (the output capacitor is stiff). Outside the tested
- * domain a `validity` note is added.
+ * fixture test/fixtures/converters/prc-lcc-capacitive-steady-state.json: 0.55 ≤ f_n ≤ 2.4,
+ * 0.2 ≤ Q ≤ 3, modes NOP, OPO, ONO, OPONO, PON); the boundary conditions are met to ≤ 1e-10;
+ * input power equals output power to 1e-9 (lossless circuit). FHA error (RC load model): the
+ * FHA gain is within 2.4 % of the exact one for 0.8 ≤ f_n ≤ 1.2 and 3.8 % for
+ * 0.7 ≤ f_n ≤ 1.6 (0.5 ≤ Q ≤ 3, tested). Validity: ideal components — no losses, no diode
+ * drop, no output ripple (the output capacitor is stiff). Outside the tested domain a
+ * `validity` note is added.
  * @see R. L. Steigerwald, "A comparison of half-bridge resonant converter topologies", IEEE
  *   Trans. Power Electron. 3(2), 174–182 (1988) (first-harmonic analysis of the parallel and
  *   series–parallel converters); G. Ivensky, A. Kats and S. Ben-Yaakov, "An RC load model of
@@ -319,8 +313,8 @@ function operatingPoint(where: string, options: LccOperatingPointOptions | Paral
  *   parallelCapacitance: 25e-9, switchingFrequency: 110e3, loadResistance: 12,
  * });
  * console.log(op.conductionMode); // NOP
- * console.log(op.outputVoltage.toFixed(3)); // 0
- * console.log(op.firstHarmonic.outputVoltage.toFixed(3)); // 0
+ * console.log(op.outputVoltage.toFixed(3)); // 78.274
+ * console.log(op.firstHarmonic.outputVoltage.toFixed(3)); // 78.936
  * ```
  * @category Converters
  */
@@ -344,9 +338,10 @@ export function parallelResonantOperatingPointCapacitiveFilter(options: Parallel
  * @returns the {@link CapacitiveFilterOperatingPoint} (V, A, W)
  * @throws {@link InputError} as {@link parallelResonantOperatingPointCapacitiveFilter}
  * @remarks Accuracy: within 1e-6 relative of the time-domain simulation (fixture
- * prc-lcc-capacitive-steady-state.json: 0.25 ≤ A ≤ 2, 0.8 ≤ f_n ≤ 1.6, 0.5 ≤ Q ≤ 2.5, and a
+ * prc-lcc-capacitive-steady-state.json: 0.25 ≤ A ≤ 2, 0.55 ≤ f_n ≤ 2.4, 0.4 ≤ Q ≤ 2.5, and a
  * fixed-component sweep of 105–240 kHz); power conserved to 1e-9. FHA error (RC load model):
- * within 6 % of the exact gain for 0.25 ≤ A ≤ 2, 1 ≤ f_n ≤ 1.6, 0.5 ≤ Q ≤ 3 (tested).
+ * within 3.5 % of the exact gain for 1 ≤ f_n ≤ 1.6, 6.8 % for 0.8 ≤ f_n ≤ 1.2 and 12.1 % for
+ * 0.7 ≤ f_n ≤ 1.6 (0.25 ≤ A ≤ 2, 0.5 ≤ Q ≤ 3, tested) — worst below resonance at small A.
  * Validity: ideal components, as {@link parallelResonantOperatingPointCapacitiveFilter}.
  * @see G. Ivensky, A. Kats and S. Ben-Yaakov, IEEE Trans. Power Electron. 14(3), 515–521 (1999)
  *   (RC load model of the series–parallel converter with a capacitive output filter; from
@@ -359,9 +354,9 @@ export function parallelResonantOperatingPointCapacitiveFilter(options: Parallel
  *   bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: 25e-9,
  *   parallelCapacitance: 25e-9, switchingFrequency: 150e3, loadResistance: 12,
  * });
- * console.log(op.conductionMode); // OPO
- * console.log(op.outputVoltage.toFixed(3)); // 0
- * console.log(op.firstHarmonic.outputVoltage.toFixed(3)); // 0
+ * console.log(op.conductionMode); // NOP
+ * console.log(op.outputVoltage.toFixed(3)); // 95.931
+ * console.log(op.firstHarmonic.outputVoltage.toFixed(3)); // 96.512
  * ```
  * @category Converters
  */

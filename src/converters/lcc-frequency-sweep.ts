@@ -10,12 +10,14 @@ import {
   requireObject,
   requireOneOf,
   requirePositive,
+  voltageCaution,
   type Caution,
   type ValidityNote,
 } from "../core/index.js";
 import type { CapacitiveStart } from "./capacitive-filter-kernel.js";
-import { capacitiveOperatingPointOf, checkParallelConverterCircuit } from "./lcc-capacitive-filter.js";
-import { lccOperatingPoint } from "./lcc-operating-point.js";
+import { capacitiveOperatingPointOf, checkParallelConverterCircuit, type ParallelConverterCircuit } from "./lcc-capacitive-filter.js";
+import { lccFirstHarmonic, lccSteadyState } from "./lcc-kernel.js";
+import { hardSwitchingCaution, outsideTestedDomainNote } from "./steady-state-notes.js";
 
 /**
  * Options of {@link lccFrequencySweep}: the components of {@link LccOperatingPointOptions}
@@ -147,9 +149,9 @@ interface PointValues {
  * frequencies: gain, output voltage and power, resonant current, turn-off current and
  * zero-voltage switching, capacitor voltages and the conduction mode at each point. Each point
  * is the periodic solution of {@link lccOperatingPoint} (inductive output filter) or
- * {@link lccOperatingPointCapacitiveFilter} (capacitive); with the capacitive filter each
- * point starts Newton's method from the previous point's solution (continuation) and falls
- * back to the single-point start when that fails. A point where no periodic solution of the
+ * {@link lccOperatingPointCapacitiveFilter} (capacitive), solved by the same kernels; each
+ * point starts Newton's method from the previous solved point's state and gain
+ * (continuation) and falls back to the single-point start when that fails. A point where no periodic solution of the
  * assumed circuit modes is found is returned as `{ solved: false, reason }` — no numbers, so
  * that a gap cannot be plotted as a value — and counted in `unsolvedCount`; the sweep goes on
  * from the last solved point.
@@ -178,7 +180,7 @@ interface PointValues {
  *   frequencies: [120e3, 150e3, 200e3], outputFilter: "capacitive",
  * });
  * const p = sweep.points[1];
- * console.log(p?.solved === true ? p.outputVoltage.toFixed(3) : "none"); // 0
+ * console.log(p?.solved === true ? p.outputVoltage.toFixed(3) : "none"); // 95.931
  * ```
  * @category Converters
  */
@@ -206,10 +208,10 @@ export function lccFrequencySweep(options: LccFrequencySweepOptions): LccFrequen
   let outside = 0;
   let outsideNote: ValidityNote | null = null;
   let unsolved = 0;
-  let start: CapacitiveStart | undefined;
+  const continued: { start?: CapacitiveStart } = {};
   for (let i = 0; i < frequencies.length; i++) {
     const fs = frequencies[i] ?? 0;
-    const values = filter === "capacitive" ? capacitivePoint(circuit, fs, start, (s) => (start = s)) : inductivePoint(options, fs);
+    const values = filter === "capacitive" ? capacitivePoint(circuit, fs, continued) : inductivePoint(circuit, fs, continued);
     if (values === null) {
       unsolved++;
       points.push({
@@ -256,12 +258,10 @@ export function lccFrequencySweep(options: LccFrequencySweepOptions): LccFrequen
   return { outputFilter: filter, resonantFrequency: fr, qualityFactor: q, capacitanceRatio: cp / cs, points, unsolvedCount: unsolved, cautions, validity };
 }
 
-function capacitivePoint(
-  circuit: ReturnType<typeof checkParallelConverterCircuit>, fs: number, start: CapacitiveStart | undefined, keep: (s: CapacitiveStart) => void,
-): PointValues | null {
-  const solved = capacitiveOperatingPointOf(circuit, fs, start);
+function capacitivePoint(circuit: ParallelConverterCircuit, fs: number, continued: { start?: CapacitiveStart }): PointValues | null {
+  const solved = capacitiveOperatingPointOf(circuit, fs, continued.start);
   if (solved === null) return null;
-  keep(solved.solution);
+  continued.start = solved.solution;
   const op = solved.point;
   return {
     point: {
@@ -285,36 +285,61 @@ function capacitivePoint(
   };
 }
 
-function inductivePoint(options: LccFrequencySweepOptions, fs: number): PointValues | null {
-  let op;
-  try {
-    op = lccOperatingPoint({
-      bridge: options.bridge, inputVoltage: options.inputVoltage, turnsRatio: options.turnsRatio,
-      resonantInductance: options.resonantInductance, seriesCapacitance: options.seriesCapacitance,
-      parallelCapacitance: options.parallelCapacitance, loadResistance: options.loadResistance, switchingFrequency: fs,
-    });
-  } catch {
-    // the inputs are checked already: the only InputError left is "no periodic solution"
-    return null;
-  }
+/**
+ * The domain of {@link lccOperatingPoint} checked against its time-domain simulation (the same
+ * numbers; a test compares this sweep's notes with that function's).
+ */
+const INDUCTIVE_TESTED = { fnMin: 0.6, fnMax: 1.6, qMin: 0.2, qMax: 2.5, aMin: 0.25, aMax: 2 } as const;
+const fha = new Float64Array(8);
+
+/** The inductive-filter point from the kernel, scaled as {@link lccOperatingPoint} scales it. */
+function inductivePoint(circuit: ParallelConverterCircuit, fs: number, continued: { start?: CapacitiveStart }): PointValues | null {
+  const { bridgeVoltage: vb, turnsRatio: n, resonantInductance: lr, parallelCapacitance: cp, seriesCapacitance: cs, loadResistance: rl } = circuit;
+  const a = cp / cs;
+  const zp = Math.sqrt(lr / cp);
+  const theta = (Math.PI / (2 * Math.PI * Math.sqrt(lr * cp))) / fs;
+  const zeta = zp / (n * n * rl);
+  const solution = lccSteadyState(a, zeta, theta, continued.start);
+  if (solution === null) return null;
+  continued.start = solution;
+  const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cs));
+  const fn = fs / fr;
+  const q = Math.sqrt(lr / cs) / ((Math.PI * Math.PI * n * n * rl) / 8);
+  const ib = vb / zp;
+  const vout = (solution.gain * vb) / n;
+  const turnOffCurrent = -solution.j0 * ib;
+  const seriesPeak = solution.seriesPeak * vb;
+  lccFirstHarmonic(a, zeta, theta, fha);
+  const cautions: Caution[] = [];
+  const dc = voltageCaution({ voltage: circuit.inputVoltage, waveform: "dc", location: "converter input" });
+  if (dc !== null) cautions.push(dc);
+  const acP = voltageCaution({ voltage: solution.parallelRms * vb, waveform: "ac", location: "parallel capacitor and transformer primary (RMS)" });
+  if (acP !== null) cautions.push(acP);
+  const acS = voltageCaution({ voltage: seriesPeak / Math.SQRT2, waveform: "ac", location: "series capacitor (AC part, RMS of a sine of the same peak)" });
+  if (acS !== null) cautions.push(acS);
+  if (!(turnOffCurrent > 0)) cautions.push(hardSwitchingCaution(turnOffCurrent, " (capacitive operation, below the tank's zero-phase frequency)", "Raise the switching frequency."));
+  const t = INDUCTIVE_TESTED;
+  const validity = fn < t.fnMin || fn > t.fnMax || q < t.qMin || q > t.qMax || a < t.aMin || a > t.aMax
+    ? [outsideTestedDomainNote(`${t.fnMin} ≤ f_n ≤ ${t.fnMax}, ${t.qMin} ≤ Q ≤ ${t.qMax}, ${t.aMin} ≤ A ≤ ${t.aMax}`, "1e-10")]
+    : [];
   return {
     point: {
       switchingFrequency: fs,
       solved: true,
-      normalisedFrequency: op.normalisedFrequency,
-      gain: op.gain,
-      outputVoltage: op.outputVoltage,
-      outputPower: op.outputPower,
-      resonantCurrentRms: op.resonantCurrentRms,
-      resonantCurrentPeak: op.resonantCurrentPeak,
-      turnOffCurrent: op.turnOffCurrent,
-      zeroVoltageSwitching: op.zeroVoltageSwitching,
-      seriesCapacitorVoltagePeak: op.seriesCapacitorVoltagePeak,
-      parallelCapacitorVoltagePeak: op.parallelCapacitorVoltagePeak,
-      conductionMode: op.conductionMode,
-      firstHarmonicGain: op.firstHarmonic.gain,
+      normalisedFrequency: fn,
+      gain: solution.gain,
+      outputVoltage: vout,
+      outputPower: (vout * vout) / rl,
+      resonantCurrentRms: solution.resonantRms * ib,
+      resonantCurrentPeak: solution.resonantPeak * ib,
+      turnOffCurrent,
+      zeroVoltageSwitching: turnOffCurrent > 0,
+      seriesCapacitorVoltagePeak: seriesPeak,
+      parallelCapacitorVoltagePeak: solution.parallelPeak * vb,
+      conductionMode: solution.sequence,
+      firstHarmonicGain: fha[3] ?? 0,
     },
-    cautions: op.cautions,
-    validity: op.validity,
+    cautions,
+    validity,
   };
 }

@@ -206,6 +206,31 @@ describe("lccFrequencySweep", () => {
     }
   });
 
+  it("inductive filter: each point, its notes and its cautions are those of lccOperatingPoint", () => {
+    // 0.55·f_r and 1.8·f_r lie outside lccOperatingPoint's tested domain (0.6 ≤ f_n ≤ 1.6), the rest inside
+    const list = [0.55, 0.8, 1.2, 1.5, 1.8].map((k) => k * fr);
+    const sweep = lccFrequencySweep({ ...circuit, frequencies: list });
+    let outside = 0;
+    const codes = new Set<string>();
+    sweep.points.forEach((p, k) => {
+      const op = lccOperatingPoint({ ...circuit, switchingFrequency: list[k] ?? 0 });
+      if (op.validity.length > 0) outside++;
+      for (const c of op.cautions) codes.add(c.code);
+      if (!p.solved) throw new Error("unsolved");
+      expect(rel(p.gain, op.gain)).toBeLessThanOrEqual(1e-9);
+      expect(rel(p.resonantCurrentPeak, op.resonantCurrentPeak)).toBeLessThanOrEqual(1e-9);
+      expect(rel(p.parallelCapacitorVoltagePeak, op.parallelCapacitorVoltagePeak)).toBeLessThanOrEqual(1e-9);
+      expect(rel(p.seriesCapacitorVoltagePeak, op.seriesCapacitorVoltagePeak)).toBeLessThanOrEqual(1e-9);
+      expect(Math.abs(p.turnOffCurrent - op.turnOffCurrent)).toBeLessThanOrEqual(1e-9 * op.resonantCurrentPeak);
+      expect(rel(p.outputPower, op.outputPower)).toBeLessThanOrEqual(1e-9);
+      expect(p.firstHarmonicGain).toBe(op.firstHarmonic.gain);
+      expect(p.normalisedFrequency).toBeCloseTo(op.normalisedFrequency, 12);
+    });
+    expect(outside).toBe(2);
+    expect(sweep.validity.find((v) => v.code === "outside-tested-domain")?.message).toMatch(/^2 of 5 points/);
+    expect(new Set(sweep.cautions.map((c) => c.code))).toEqual(codes);
+  });
+
   it("reports points without a steady state as solved: false with a reason, and goes on", () => {
     // at f_n ≈ 0.02 a half period holds more free oscillations than the event-driven propagation follows: no solution of the assumed modes
     for (const outputFilter of ["inductive", "capacitive"] as const) {
