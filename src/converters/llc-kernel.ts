@@ -61,6 +61,9 @@ export interface LlcSteadyState {
 // Segment flows. Each takes a state and a duration and writes the end state into `out`.
 
 const out = new Float64Array(3);
+/** Cosine and sine of the last forced segment's phase (ωτ), kept for the tangent pass. */
+let segCos = 1;
+let segSin = 0;
 
 /** Advance by one segment of mode `mode` for time `tau`; `forced` = false drops the constant forcing (linear part only). */
 function flow(mode: number, tau: number, j: number, u: number, g: number, m: number, lam: number, forced: boolean): void {
@@ -72,6 +75,8 @@ function flow(mode: number, tau: number, j: number, u: number, g: number, m: num
       const s = Math.sin(w * tau);
       out[0] = j * c - (u - drive) * w * s;
       out[1] = drive + (u - drive) * c + (j / w) * s;
+      segCos = c;
+      segSin = s;
     } else {
       out[0] = j;
       out[1] = u + j * tau;
@@ -100,6 +105,8 @@ function flowDiode(mode: number, tau: number, j: number, u: number, g: number, m
   out[0] = j * c + (e - u) * s;
   out[1] = e + (u - e) * c + j * s;
   out[2] = g + sign * m * lam * tau;
+  segCos = c;
+  segSin = s;
   return sign * (j * s + (e - u) * (1 - c) - g * tau - 0.5 * sign * m * lam * tau * tau);
 }
 
@@ -124,7 +131,7 @@ let seqLength = 0;
  * go negative during the iteration (the flows are defined backwards too); the verifying
  * propagation decides what is physical.
  */
-function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: number, r: Float64Array): boolean {
+export function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: number, r: Float64Array): boolean {
   const n = seqLength;
   const m = y[3] ?? 0;
   let last = theta;
@@ -159,12 +166,138 @@ function sequenceResiduals(y: Float64Array, theta: number, lam: number, kappa: n
   return Number.isFinite(r[3] ?? NaN) && m > 0;
 }
 
+/** Sets the assumed mode sequence (for the Jacobian test; the solver sets it from a propagation). */
+export function setSequence(modes: readonly number[]): void {
+  seqLength = modes.length;
+  for (let k = 0; k < modes.length; k++) seqModes[k] = modes[k] ?? 0;
+}
+
+/** Tangents d(j, u, g, charge)/dy of the running state in the Jacobian pass. */
+const tj = new Float64Array(MAX_SEGMENTS + 3);
+const tu = new Float64Array(MAX_SEGMENTS + 3);
+const tg = new Float64Array(MAX_SEGMENTS + 3);
+const tq = new Float64Array(MAX_SEGMENTS + 3);
+
+/**
+ * The residuals of {@link sequenceResiduals} (the same arithmetic, so the same values) and
+ * their exact Jacobian, row-major into `jac`, by forward-mode differentiation of the
+ * closed-form segment maps: each segment map is differentiated with respect to its start
+ * state, the gain m (through the forcing e = 1 ∓ m and the ramp ±mλτ) and its duration (the
+ * last duration is θ − Σ τ_k, so it depends on every duration unknown with slope −1).
+ */
+export function sequenceResidualsAndJacobian(y: Float64Array, theta: number, lam: number, kappa: number, r: Float64Array, jac: Float64Array): boolean {
+  const n = seqLength;
+  const size = n + 3;
+  const m = y[3] ?? 0;
+  let last = theta;
+  for (let k = 0; k < n - 1; k++) {
+    seqTau[k] = y[k + 4] ?? 0;
+    last -= seqTau[k] ?? 0;
+  }
+  seqTau[n - 1] = last;
+  for (let c = 0; c < size; c++) {
+    tj[c] = c === 0 ? 1 : 0;
+    tu[c] = c === 1 ? 1 : 0;
+    tg[c] = c === 2 ? 1 : 0;
+    tq[c] = 0;
+  }
+  let j = y[0] ?? 0;
+  let u = y[1] ?? 0;
+  let g = y[2] ?? 0;
+  let charge = 0;
+  const band = m * (1 + lam);
+  const w = lam > 0 ? Math.sqrt(lam / (1 + lam)) : 0;
+  for (let k = 0; k < n; k++) {
+    const mode = seqModes[k] ?? 0;
+    const tau = seqTau[k] ?? 0;
+    // dτ/dy: +1 on the segment's own duration unknown; the last segment −1 on all of them
+    const own = k < n - 1 ? k + 4 : -1;
+    if (mode !== MODE_O) {
+      charge += flowDiode(mode, tau, j, u, g, m, lam);
+      const sign = mode === MODE_P ? 1 : -1;
+      const e = 1 - sign * m;
+      const c = segCos;
+      const s = segSin;
+      const jEnd = out[0] ?? 0;
+      const gEnd = out[2] ?? 0;
+      const jTau = -j * s + (e - u) * c;
+      const uTau = (e - u) * s + j * c;
+      const gTau = sign * m * lam;
+      const qTau = sign * (jEnd - gEnd);
+      for (let col = 0; col < size; col++) {
+        const dTau = own >= 0 ? (col === own ? 1 : 0) : col >= 4 ? -1 : 0;
+        const dm = col === 3 ? 1 : 0;
+        const de = -sign * dm;
+        const a = tj[col] ?? 0;
+        const b = tu[col] ?? 0;
+        const d = tg[col] ?? 0;
+        tj[col] = c * a - s * b + s * de + jTau * dTau;
+        tu[col] = s * a + c * b + (1 - c) * de + uTau * dTau;
+        tg[col] = d + sign * lam * tau * dm + gTau * dTau;
+        tq[col] = (tq[col] ?? 0) + sign * (s * a - (1 - c) * b + (1 - c) * de - tau * d) - 0.5 * lam * tau * tau * dm + qTau * dTau;
+      }
+    } else {
+      flow(mode, tau, j, u, g, m, lam, true);
+      if (lam > 0) {
+        const c = segCos;
+        const s = segSin;
+        const jTau = -j * w * s - (u - 1) * w * w * c;
+        const uTau = -(u - 1) * w * s + j * c;
+        for (let col = 0; col < size; col++) {
+          const dTau = own >= 0 ? (col === own ? 1 : 0) : col >= 4 ? -1 : 0;
+          const a = tj[col] ?? 0;
+          const b = tu[col] ?? 0;
+          const nj = c * a - w * s * b + jTau * dTau;
+          tj[col] = nj;
+          tu[col] = (s / w) * a + c * b + uTau * dTau;
+          tg[col] = nj;
+        }
+      } else {
+        for (let col = 0; col < size; col++) {
+          const dTau = own >= 0 ? (col === own ? 1 : 0) : col >= 4 ? -1 : 0;
+          const a = tj[col] ?? 0;
+          tu[col] = (tu[col] ?? 0) + tau * a + j * dTau;
+          tg[col] = a;
+        }
+      }
+    }
+    j = out[0] ?? 0;
+    u = out[1] ?? 0;
+    g = out[2] ?? 0;
+    if (k < n - 1) {
+      const row = (k + 4) * size;
+      const next = seqModes[k + 1] ?? 0;
+      if (mode !== MODE_O) {
+        r[k + 4] = j - g;
+        for (let col = 0; col < size; col++) jac[row + col] = (tj[col] ?? 0) - (tg[col] ?? 0);
+      } else {
+        r[k + 4] = next === MODE_P ? u - (1 - band) : u - (1 + band);
+        const slope = next === MODE_P ? 1 + lam : -(1 + lam);
+        for (let col = 0; col < size; col++) jac[row + col] = (tu[col] ?? 0) + (col === 3 ? slope : 0);
+      }
+    }
+  }
+  r[0] = j + (y[0] ?? 0);
+  r[1] = u + (y[1] ?? 0);
+  r[2] = g + (y[2] ?? 0);
+  const denominator = theta * kappa * m;
+  r[3] = charge / denominator - 1;
+  for (let col = 0; col < size; col++) {
+    jac[col] = (tj[col] ?? 0) + (col === 0 ? 1 : 0);
+    jac[size + col] = (tu[col] ?? 0) + (col === 1 ? 1 : 0);
+    jac[2 * size + col] = (tg[col] ?? 0) + (col === 2 ? 1 : 0);
+    jac[3 * size + col] = (tq[col] ?? 0) / denominator - (col === 3 ? charge / (denominator * m) : 0);
+  }
+  return Number.isFinite(r[3] ?? NaN) && m > 0;
+}
+
 /** Parameters of the sequence solve, read by {@link sequenceSystem} (set before each solve). */
 let sysTheta = 0;
 let sysLam = 0;
 let sysKappa = 0;
 const sequenceSystem: PeriodicSystem = {
   residuals: (y, r) => sequenceResiduals(y, sysTheta, sysLam, sysKappa, r),
+  residualsAndJacobian: (y, r, jac) => sequenceResidualsAndJacobian(y, sysTheta, sysLam, sysKappa, r, jac),
 };
 
 /**
@@ -177,10 +310,11 @@ const SEQUENCE_NEWTON: NewtonSettings = {
   states: 3,
   gainFloor: 0.2,
   scaledNorm: false,
-  reuseJacobian: true,
+  reuseJacobian: false,
   backtracks: 30,
   tolerance: 1e-14,
   maxIterations: 60,
+  unverifiedStepBelow: 1e-7,
 };
 
 /** Unknowns (j0, u0, g0, m, τ_0 … τ_{n−2}) of the sequence solve; the solution after it. */
@@ -197,7 +331,15 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
   sysTheta = theta;
   sysLam = lam;
   sysKappa = kappa;
-  return newton.solve(sequenceSystem, seqLength + 3, SEQUENCE_NEWTON, theta);
+  const residual = newton.solve(sequenceSystem, seqLength + 3, SEQUENCE_NEWTON, theta);
+  // the durations of the solution (the last step may have been taken without an evaluation)
+  let last = theta;
+  for (let k = 0; k < seqLength - 1; k++) {
+    seqTau[k] = unknowns[k + 4] ?? 0;
+    last -= seqTau[k] ?? 0;
+  }
+  seqTau[seqLength - 1] = last;
+  return residual;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -218,6 +360,9 @@ function startMode(j: number, u: number, g: number, m: number, lam: number): num
   return MODE_O;
 }
 
+/** Crossing tolerance (relative to the half period) of a propagation that only seeds the sequence solve. */
+const SEED_CROSSING_TOLERANCE = 1e-7;
+
 export function propagateEvents(j0: number, u0: number, g0: number, m: number, lam: number, theta: number, record: boolean): void {
   let j = j0;
   let u = u0;
@@ -226,6 +371,8 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
   events.clear();
   let mode = startMode(j, u, g, m, lam);
   const band = m * (1 + lam);
+  // a propagation that only finds the sequence seeds Newton: its crossings need not be exact
+  const crossingTolerance = record ? 0 : SEED_CROSSING_TOLERANCE * theta;
   while (t < theta) {
     if (!events.hasRoom()) break;
     const remaining = theta - t;
@@ -238,8 +385,8 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
         const a = u - 1;
         const b = j / w;
         // stays while 1 − band < u < 1 + band
-        const tLow = firstDownCrossing(a, b, band, 0, w, remaining); // u − (1 − band)
-        const tHigh = firstDownCrossing(-a, -b, band, 0, w, remaining); // (1 + band) − u
+        const tLow = firstDownCrossing(a, b, band, 0, w, remaining, crossingTolerance); // u − (1 − band)
+        const tHigh = firstDownCrossing(-a, -b, band, 0, w, remaining, crossingTolerance); // (1 + band) − u
         tau = Math.min(tLow, tHigh, remaining);
         if (tau < remaining) next = tLow <= tHigh ? MODE_P : MODE_N;
         if (record) {
@@ -262,7 +409,7 @@ export function propagateEvents(j0: number, u0: number, g0: number, m: number, l
       const sign = mode === MODE_P ? 1 : -1;
       const e = 1 - sign * m;
       // s·(j − g) = s[j cos t + (e − u) sin t − g] − m λ t
-      const root = firstDownCrossing(sign * j, sign * (e - u), -sign * g, -m * lam, 1, remaining);
+      const root = firstDownCrossing(sign * j, sign * (e - u), -sign * g, -m * lam, 1, remaining, crossingTolerance);
       tau = Math.min(root, remaining);
       const integral = diodeIntegral(mode, tau, j, u, g, m, lam);
       events.loadIntegral += sign * integral;

@@ -109,7 +109,7 @@ export interface LlcOperatingPoint {
   readonly resonantCurrentPeak: number;
   /** Peak magnetising current [A]. */
   readonly magnetisingCurrentPeak: number;
-  /** Resonant current when a switch turns off, positive when it flows so as to discharge the incoming switch (ZVS) [A]. */
+  /** Resonant current when a switch turns off, positive when it flows so as to discharge the incoming switch (ZVS) [A]; exactly 0 when it is below 1e-12 of the peak (the series-resonant converter's current resting at zero). */
   readonly turnOffCurrent: number;
   /** Peak AC voltage of the resonant capacitor [V] (a single capacitor of a half bridge also carries V_in/2 DC). */
   readonly capacitorVoltagePeak: number;
@@ -177,7 +177,9 @@ function operatingPoint(where: string, options: LlcOperatingPointOptions | Serie
   const m = solution.gain;
   const vout = (m * vb) / n;
   const iout = vout / rl;
-  const turnOffCurrent = -solution.j0 * ib;
+  // a current at rounding level (the series-resonant converter's current rests at zero before
+  // the switches change over) is zero: no charge for the switch capacitances
+  const turnOffCurrent = Math.abs(solution.j0) <= 1e-12 * solution.resonantPeak ? 0 : -solution.j0 * ib;
   let zvs = turnOffCurrent > 0;
   if (zvs && deadTime !== undefined && switchCapacitance !== undefined) {
     zvs = turnOffCurrent * deadTime >= 2 * switchCapacitance * vin;

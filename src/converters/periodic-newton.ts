@@ -10,7 +10,8 @@
  *
  * — the half-wave antisymmetry $x(\Theta) + x(0) = 0$, the load balance, and (for a solve on a
  * fixed mode sequence) the switching conditions. {@link PeriodicNewton} solves it by Newton's
- * method with a forward-difference Jacobian, an optional analytic one, optional chord steps and
+ * method with an analytic Jacobian where the topology provides one (forward differences
+ * otherwise), optional chord steps and
  * backtracking; {@link HalfPeriodRecord} holds the segments and waveform totals an event-driven
  * propagation found and names the mode sequence. The waveform tools (crossings, peaks, square integrals) are in
  * `ramp-sinusoid.ts`.
@@ -31,6 +32,12 @@ export interface PeriodicSystem {
    * not defined (a non-positive gain, a propagation that overflowed, a non-finite value).
    */
   residuals(x: Float64Array, r: Float64Array): boolean;
+  /**
+   * Optional: the residuals at x (the same values `residuals` gives) and their exact
+   * Jacobian, row-major size × size into `jac`; false as `residuals`. When present, it
+   * replaces the forward differences (one pass instead of size + 1).
+   */
+  residualsAndJacobian?(x: Float64Array, r: Float64Array, jac: Float64Array): boolean;
 }
 
 /** How {@link PeriodicNewton.solve} iterates; each topology keeps one constant object of these. */
@@ -49,6 +56,12 @@ export interface NewtonSettings {
   readonly tolerance: number;
   /** Most Newton iterations. */
   readonly maxIterations: number;
+  /**
+   * A full Newton step from a residual norm below this is taken without evaluating the
+   * residuals at its end (0: never). In the quadratic regime the step lands at about the
+   * square of the residual; only for a caller that verifies the solution independently.
+   */
+  readonly unverifiedStepBelow?: number;
 }
 
 /**
@@ -63,7 +76,8 @@ export class PeriodicNewton {
   private readonly rTrial: Float64Array;
   private readonly trial: Float64Array;
   private readonly step: Float64Array;
-  private readonly jac: Float64Array;
+  private jac: Float64Array;
+  private jacTrial: Float64Array;
   private readonly lu: Float64Array;
   private readonly pivots: Int32Array;
   private normScale = 1;
@@ -76,6 +90,7 @@ export class PeriodicNewton {
     this.trial = new Float64Array(capacity);
     this.step = new Float64Array(capacity);
     this.jac = new Float64Array(capacity * capacity);
+    this.jacTrial = new Float64Array(capacity * capacity);
     this.lu = new Float64Array(capacity * capacity);
     this.pivots = new Int32Array(capacity);
   }
@@ -116,42 +131,58 @@ export class PeriodicNewton {
    * @returns the final residual norm (Infinity when the residuals are undefined at the start or the Jacobian is singular)
    */
   solve(system: PeriodicSystem, size: number, settings: NewtonSettings, durationScale: number): number {
-    const { x, r, rTrial, trial, step, jac, lu, pivots } = this;
+    const { x, r, rTrial, trial, step, lu, pivots } = this;
     const gain = settings.states;
+    // with an analytic Jacobian and no chord steps, every trial point is evaluated with its
+    // Jacobian: an accepted trial brings the next iteration's Jacobian along
+    const exact = system.residualsAndJacobian !== undefined && !settings.reuseJacobian;
     let scale = 1;
     for (let i = 0; i < settings.states; i++) scale = Math.max(scale, Math.abs(x[i] ?? 0));
     this.normScale = scale;
-    if (!system.residuals(x, r)) return Infinity;
+    if (!(exact ? this.evaluateWithJacobian(system, x, r, this.jac) : system.residuals(x, r))) return Infinity;
     let rn = this.norm(r, size, settings);
     let fresh = false;
-    let haveJacobian = false;
+    let haveJacobian = exact;
     for (let iteration = 0; iteration < settings.maxIterations && rn > settings.tolerance; iteration++) {
       if (!haveJacobian) {
-        if (!this.differenceJacobian(system, size, settings, durationScale)) return Infinity;
+        const ok = system.residualsAndJacobian === undefined ? this.differenceJacobian(system, size, settings, durationScale) : system.residualsAndJacobian(x, r, this.jac);
+        if (!ok) return Infinity;
         haveJacobian = true;
         fresh = true;
       }
-      if (fresh) {
+      if (fresh || exact) {
         // factor a new Jacobian once; chord steps reuse the factors
+        const jac = this.jac;
         for (let i = 0; i < size * size; i++) lu[i] = jac[i] ?? 0;
         if (!factorDense(size, lu, pivots)) return Infinity;
+        fresh = true;
       }
       for (let i = 0; i < size; i++) step[i] = -(r[i] ?? 0);
       if (!solveFactored(size, lu, pivots, step)) return Infinity;
+      if (fresh && rn < (settings.unverifiedStepBelow ?? 0)) {
+        for (let i = 0; i < size; i++) x[i] = (x[i] ?? 0) + (step[i] ?? 0);
+        return rn * rn;
+      }
       let lambda = 1;
       let accepted = false;
       const backtracks = fresh ? settings.backtracks : 1;
       for (let back = 0; back < backtracks; back++) {
         for (let i = 0; i < size; i++) trial[i] = (x[i] ?? 0) + lambda * (step[i] ?? 0);
-        if ((trial[gain] ?? 0) > settings.gainFloor * (x[gain] ?? 0) && system.residuals(trial, rTrial)) {
+        if ((trial[gain] ?? 0) > settings.gainFloor * (x[gain] ?? 0) && (exact ? this.evaluateWithJacobian(system, trial, rTrial, this.jacTrial) : system.residuals(trial, rTrial))) {
           const tn = this.norm(rTrial, size, settings);
           if (tn < rn) {
             for (let i = 0; i < size; i++) {
               x[i] = trial[i] ?? 0;
               r[i] = rTrial[i] ?? 0;
             }
-            // keep the Jacobian only while full steps converge fast
-            if (!(settings.reuseJacobian && lambda === 1 && tn < 0.1 * rn)) haveJacobian = false;
+            if (exact) {
+              const t = this.jac;
+              this.jac = this.jacTrial;
+              this.jacTrial = t;
+            } else if (!(settings.reuseJacobian && lambda === 1 && tn < 0.1 * rn)) {
+              // keep the Jacobian only while full steps converge fast
+              haveJacobian = false;
+            }
             rn = tn;
             accepted = true;
             break;
@@ -168,6 +199,11 @@ export class PeriodicNewton {
     }
     return rn;
   }
+
+  private evaluateWithJacobian(system: PeriodicSystem, at: Float64Array, r: Float64Array, jac: Float64Array): boolean {
+    return system.residualsAndJacobian === undefined ? false : system.residualsAndJacobian(at, r, jac);
+  }
+
 }
 
 /** The conduction-mode sequence of a half period and the duration of each mode. */

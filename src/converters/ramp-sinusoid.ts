@@ -9,6 +9,7 @@
  * @packageDocumentation
  */
 import { brentRoot } from "../special/index.js";
+import { brentBracketed } from "../special/internal.js";
 
 let hA = 0;
 let hB = 0;
@@ -16,18 +17,20 @@ let hC = 0;
 let hD = 0;
 let hW = 1;
 let hTol = 0;
+let rootTolerance = 0;
 function hEval(t: number): number {
   return hA * Math.cos(hW * t) + hB * Math.sin(hW * t) + hC + hD * t;
 }
-const BRENT = { tolerance: 0 };
 
 /**
  * First t in (0, tmax] where $h(t) = A\cos\omega t + B\sin\omega t + C + Dt$, non-negative at 0,
  * becomes ≤ 0. h is split at its extrema, found in closed form, into monotone pieces; the
- * crossing is bracketed in the first piece that changes sign and solved by Brent's method
- * (tolerance 0: to the last few ulp). Returns Infinity when h stays positive.
+ * crossing is bracketed in the first piece that changes sign and solved by Brent's method,
+ * by default to the last few ulp (`tolerance` 0; a positive one, absolute in t, stops earlier
+ * where the crossing only seeds a later solve). Returns Infinity when h stays positive.
  */
-export function firstDownCrossing(A: number, B: number, C: number, D: number, w: number, tmax: number): number {
+export function firstDownCrossing(A: number, B: number, C: number, D: number, w: number, tmax: number, tolerance = 0): number {
+  rootTolerance = tolerance;
   hA = A;
   hB = B;
   hC = C;
@@ -68,7 +71,10 @@ function crossIn(tl: number, hl: number, tr: number, hr: number): number {
   if (hl <= hTol) return hr < -hTol ? tl : Infinity;
   if (hr > 0) return Infinity;
   if (hr === 0) return tr;
-  return brentRoot(hEval, tl, tr, BRENT);
+  // hl > 0 > hr: Brent's iteration on the bracket directly (the end values are known); the
+  // checking entry point only for what it reports (NaN values, no convergence)
+  const root = Number.isNaN(hr) ? NaN : brentBracketed(hEval, tl, tr, hl, hr, rootTolerance, 200, false);
+  return Number.isNaN(root) ? brentRoot(hEval, tl, tr, { tolerance: rootTolerance }) : root;
 }
 
 /** max |c + a cos(wt) + b sin(wt)| for t in [0, tmax] (w > 0). */

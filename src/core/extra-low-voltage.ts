@@ -78,6 +78,13 @@ export function voltageCaution(options: VoltageCautionOptions): Caution | null {
   return extraLowVoltageCaution(v, waveform, location);
 }
 
+/** The constant end of a caution's message after the voltage (built once, not per caution). */
+function messageEnd(kind: string, limit: number): string {
+  return ` ${kind}, above the extra-low-voltage limit of ${limit} ${kind}: contact can cause a dangerous electric shock. Enclose live parts, discharge capacitors before touching, and use insulated tools. ${DEFER_TO_CODES}`;
+}
+const AC_MESSAGE_END = messageEnd("V AC (RMS)", EXTRA_LOW_VOLTAGE_LIMITS.acRms);
+const DC_MESSAGE_END = messageEnd("V DC", EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc);
+
 /**
  * The caution of {@link voltageCaution} on checked arguments (|v| in volts, a known waveform):
  * for library code that has validated its own numbers. Internal: not re-exported from the
@@ -91,11 +98,10 @@ export function voltageCaution(options: VoltageCautionOptions): Caution | null {
 export function extraLowVoltageCaution(v: number, waveform: "ac" | "dc", location: string): Caution | null {
   const limit = waveform === "ac" ? EXTRA_LOW_VOLTAGE_LIMITS.acRms : EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc;
   if (!(v > limit)) return null;
-  const kind = waveform === "ac" ? "V AC (RMS)" : "V DC";
   return {
     code: "voltage-above-extra-low",
     severity: "danger",
-    message: `The ${location} reaches ${round(v)} ${kind}, above the extra-low-voltage limit of ${limit} ${kind}: contact can cause a dangerous electric shock. Enclose live parts, discharge capacitors before touching, and use insulated tools. ${DEFER_TO_CODES}`,
+    message: "The " + location + " reaches " + round(v) + (waveform === "ac" ? AC_MESSAGE_END : DC_MESSAGE_END),
     value: v,
     limit,
     unit: "V",
@@ -112,6 +118,25 @@ function optionalText(where: string, parameter: string, value: unknown, fallback
 
 /** Powers of ten 10^k for k = −3 … 5 (index k + 3), exact doubles for k ≥ 0. */
 const SCALE = [1e-3, 1e-2, 1e-1, 1, 10, 100, 1000, 1e4, 1e5];
+
+/** Texts of {@link digitText}, by (k + 3) × 900 + (n − 100), filled on first use. */
+const DIGIT_TEXTS: (string | undefined)[] = new Array<string | undefined>(9 * 900).fill(undefined);
+
+/** The digits of n (100 ≤ n ≤ 999) with k decimals (−3 ≤ k ≤ 5), trailing zeros dropped (as the shortest number text does). */
+function digitText(n: number, k: number): string {
+  if (k <= 0) return String(n * (SCALE[3 - k] ?? 1));
+  let digits = n;
+  let decimals = k;
+  while (decimals > 0 && digits % 10 === 0) {
+    digits /= 10;
+    decimals--;
+  }
+  if (decimals === 0) return String(digits);
+  const unit = SCALE[decimals + 3] ?? 1;
+  const whole = Math.floor(digits / unit);
+  const fraction = String(digits - whole * unit);
+  return String(whole) + "." + "00000".slice(0, decimals - fraction.length) + fraction;
+}
 
 /**
  * Three significant digits, plain notation where sensible: the same text as
@@ -131,20 +156,14 @@ function round(value: number): string {
     const scaled = k >= 0 ? a * (SCALE[k + 3] ?? 1) : a / (SCALE[3 - k] ?? 1);
     const n = Math.round(scaled);
     if (n >= 100 && n <= 999 && Math.abs(scaled - Math.floor(scaled) - 0.5) > 1e-6) {
-      // the digits of n with k decimals, trailing zeros dropped (as the shortest number text does)
-      const sign = value < 0 ? "-" : "";
-      if (k <= 0) return sign + String(n * (SCALE[3 - k] ?? 1));
-      let digits = n;
-      let decimals = k;
-      while (decimals > 0 && digits % 10 === 0) {
-        digits /= 10;
-        decimals--;
+      // the text of (n, k) is made once and kept: at most 9 × 900 short strings
+      const slot = (k + 3) * 900 + (n - 100);
+      let text = DIGIT_TEXTS[slot];
+      if (text === undefined) {
+        text = digitText(n, k);
+        DIGIT_TEXTS[slot] = text;
       }
-      if (decimals === 0) return sign + String(digits);
-      const unit = SCALE[decimals + 3] ?? 1;
-      const whole = Math.floor(digits / unit);
-      const fraction = String(digits - whole * unit);
-      return sign + String(whole) + "." + "00000".slice(0, decimals - fraction.length) + fraction;
+      return value < 0 ? "-" + text : text;
     }
   }
   return String(Number(value.toPrecision(3)));

@@ -260,6 +260,20 @@ function inductiveLinkChecked(options: InductiveLinkOptions): InductiveLink {
 /** Extra-low-voltage limit (AC RMS) read once: the cautions are built only above it. */
 const ELV_AC_RMS = EXTRA_LOW_VOLTAGE_LIMITS.acRms;
 
+/** The cautions of a link below extra-low voltage: one shared, frozen empty list. */
+const NO_CAUTIONS: readonly Caution[] = Object.freeze([]);
+
+/** Where a capacitor's voltage caution points (constant text: no concatenation per call). */
+function capacitorLocation(name: string): string {
+  switch (name) {
+    case "primary": return "primary compensating capacitor";
+    case "secondary": return "secondary compensating capacitor";
+    case "primary-filter": return "primary-filter compensating capacitor";
+    case "secondary-filter": return "secondary-filter compensating capacitor";
+    default: return `${name} compensating capacitor`;
+  }
+}
+
 /** The phasor solve on checked arguments (givenC = 0: the default capacitor). */
 function solveLink(
   l1: number, l2: number, m: number, r1: number, r2: number, f: number, code: number, rl: number, v: number,
@@ -386,12 +400,14 @@ function solveLink(
   const primaryCapacitor: LinkCapacitor = primaryParallel
     ? { name: "primary", capacitance: c1, voltageRms: v, currentRms: v * w * c1 }
     : { name: "primary", capacitance: c1, voltageRms: i1Abs / (w * c1), currentRms: i1Abs };
-  const capacitors: LinkCapacitor[] = primaryLcc
-    ? [{ name: "primary-filter", capacitance: cf1, voltageRms: nodeAbs, currentRms: nodeAbs * w * cf1 }, primaryCapacitor, secondaryCapacitor]
-    : [primaryCapacitor, secondaryCapacitor];
-  if (secondaryFilter !== null) capacitors.push(secondaryFilter);
-  const outputPower = loadCurrent * loadCurrent * rl;
-  const inputPower = (v * v * inRe) / (inRe * inRe + inIm * inIm);
+  // the capacitor list built at its final length (no growth)
+  let capacitors: LinkCapacitor[];
+  if (primaryLcc) {
+    const primaryFilter: LinkCapacitor = { name: "primary-filter", capacitance: cf1, voltageRms: nodeAbs, currentRms: nodeAbs * w * cf1 };
+    capacitors = secondaryFilter === null ? [primaryFilter, primaryCapacitor, secondaryCapacitor] : [primaryFilter, primaryCapacitor, secondaryCapacitor, secondaryFilter];
+  } else {
+    capacitors = secondaryFilter === null ? [primaryCapacitor, secondaryCapacitor] : [primaryCapacitor, secondaryCapacitor, secondaryFilter];
+  }
   let worst = 0;
   let worstName = "";
   for (let k = 0; k < capacitors.length; k++) {
@@ -401,16 +417,19 @@ function solveLink(
       worstName = c.name;
     }
   }
+  const outputPower = loadCurrent * loadCurrent * rl;
+  const inputPower = (v * v * inRe) / (inRe * inRe + inIm * inIm);
   const coilVoltage = i1Abs * w * l1;
-  const cautions: Caution[] = [];
-  // the cautions' limit is checked here first so a safe link builds no message text
-  if (worst > ELV_AC_RMS) {
-    const caution = extraLowVoltageCaution(worst, "ac", `${worstName} compensating capacitor`);
-    if (caution !== null) cautions.push(caution);
-  }
-  if (coilVoltage > ELV_AC_RMS) {
-    const coilCaution = extraLowVoltageCaution(coilVoltage, "ac", "primary coil");
-    if (coilCaution !== null) cautions.push(coilCaution);
+  // the cautions' limit is checked here first so a safe link builds no message text and
+  // shares one empty list
+  let cautions: readonly Caution[] = NO_CAUTIONS;
+  if (worst > ELV_AC_RMS || coilVoltage > ELV_AC_RMS) {
+    const list: Caution[] = [];
+    const caution = worst > ELV_AC_RMS ? extraLowVoltageCaution(worst, "ac", capacitorLocation(worstName)) : null;
+    if (caution !== null) list.push(caution);
+    const coilCaution = coilVoltage > ELV_AC_RMS ? extraLowVoltageCaution(coilVoltage, "ac", "primary coil") : null;
+    if (coilCaution !== null) list.push(coilCaution);
+    cautions = list;
   }
   return {
     efficiency: outputPower / inputPower,

@@ -31,3 +31,4 @@ export {
   polynomialRootBound,
 } from "./polynomial.js";
 export { factorDense, solveFactored } from "./dense-solve.js";
+export { brentBracketed } from "./brent-root.js";
