@@ -86,3 +86,19 @@ describe("capacitive-filter PRC/LCC properties", () => {
     );
   });
 });
+
+describe("capacitive-filter exact steady state over a grid", () => {
+  it("converges and conserves power at every point of PRC and A = 0.25 … 2, 0.2 ≤ Q ≤ 5, 0.5 ≤ f_n ≤ 2 (1395 points)", () => {
+    let count = 0;
+    for (const ratio of [0, 0.25, 0.5, 1, 2]) {
+      for (const q of [0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5]) {
+        for (let k = 0; k <= 30; k++) {
+          const op = at(ratio, q, 0.5 + 0.05 * k);
+          expect(rel(op.inputPower, op.outputPower)).toBeLessThanOrEqual(1e-9);
+          count++;
+        }
+      }
+    }
+    expect(count).toBe(1395);
+  });
+});
