@@ -1,6 +1,7 @@
 /**
  * The worker pool's speed-up, memory over a long streamed sweep, and abort latency, measured on
- * the built package (`npm run build` first): `tsx scripts/pool-benchmark.ts [speedup|memory|abort]`.
+ * the built package (`npm run build` first): `tsx scripts/pool-benchmark.ts [speedup|scale|memory|abort]`.
+ * `npm run bench:scale` builds and prints the speed-up target's line (`scale [designs]`).
  * Results are reported in docs/benchmarks.md.
  */
 import { existsSync, readdirSync, readFileSync } from "node:fs";
@@ -86,6 +87,33 @@ if (what === "speedup") {
     );
     if (split[1] !== undefined && split[2] !== undefined) console.log(`  CPU by thread: 1 worker: ${split[1]}; 2 workers: ${split[2]}`);
   }
+}
+
+if (what === "scale") {
+  // the target in one line: a sweep on the calling thread (one thread, as a script runs it,
+  // starting cold) against the same sweep on two workers; studies with the heat-up
+  const n = Number(process.argv[3] ?? 120);
+  const values = Array.from({ length: n }, (_, i) => 2e-6 + i * 2e-8);
+  const spec = { field: "capacitor.capacitance", values, heatUp: true };
+  const t1 = performance.now();
+  sweepHeater(race, spec);
+  const one = performance.now() - t1;
+  const before = threadCpu();
+  let after: Map<string, number> | null = null;
+  const t2 = performance.now();
+  await sweepHeater(race, spec, { workers: 2, onProgress: (p) => { if (p.done === p.total) after = threadCpu(); } });
+  const two = performance.now() - t2;
+  let helpers = "";
+  if (before !== null && after !== null) {
+    const { workers: js, helpers: h } = cpuSplit(before, after, 2);
+    // V8's helper threads (compilation, garbage collection) over the workers' JavaScript time:
+    // with both cores busy they take turns with the workers, so 2 / (1 + h) bounds the speed-up
+    helpers = `; V8 helpers ${((100 * h) / js).toFixed(1)} % of the workers' CPU (bound 2/(1+h) = ${(2 / (1 + h / js)).toFixed(2)}x)`;
+  }
+  console.log(
+    `speed-up ${(one / two).toFixed(2)}x with 2 workers over the calling thread (target >= 1.8x): ${n} designs of ${(one / n).toFixed(0)} ms, ` +
+      `${(one / 1000).toFixed(1)} s -> ${(two / 1000).toFixed(1)} s${helpers}; load average ${loadavg()[0]?.toFixed(1) ?? "?"} (needs an idle machine)`,
+  );
 }
 
 if (what === "memory") {

@@ -27,7 +27,7 @@ console.log(`L exact ${(l * 1e6).toFixed(2)} µH; Wheeler ${(lw * 1e6).toFixed(2
 check("Wheeler within 5 % of exact", Math.abs(lw / l - 1) < 0.05);
 check("Mohan within 5 % of exact", Math.abs(lm / l - 1) < 0.05);
 
-const coil = { kind: "spiral" as const, innerRadius: pad.innerRadius, outerRadius: pad.outerRadius, turns: pad.turns };
+const coil = { kind: "flatSpiral" as const, innerTurnRadius: pad.innerRadius, outerTurnRadius: pad.outerRadius, turns: pad.turns };
 let previous = 1;
 for (const gap of [0.01, 0.02, 0.04, 0.08]) {
   const m = coaxialCoilMutualInductance(coil, coil, gap);

@@ -20,7 +20,7 @@ const tx = { innerRadius: 0.008, outerRadius: 0.02, turns: 16, wireDiameter: 0.7
 const rx = { innerRadius: 0.007, outerRadius: 0.016, turns: 12, wireDiameter: 0.6e-3 };
 const l1 = spiralCoilInductance(tx);
 const l2 = spiralCoilInductance(rx);
-const m = coaxialCoilMutualInductance({ kind: "spiral", innerRadius: tx.innerRadius, outerRadius: tx.outerRadius, turns: tx.turns }, { kind: "spiral", innerRadius: rx.innerRadius, outerRadius: rx.outerRadius, turns: rx.turns }, 0.005);
+const m = coaxialCoilMutualInductance({ kind: "flatSpiral", innerTurnRadius: tx.innerRadius, outerTurnRadius: tx.outerRadius, turns: tx.turns }, { kind: "flatSpiral", innerTurnRadius: rx.innerRadius, outerTurnRadius: rx.outerRadius, turns: rx.turns }, 0.005);
 const k = couplingCoefficient({ mutualInductance: m, selfInductance1: l1, selfInductance2: l2 });
 // coil resistances at 140 kHz (litz assumed; values of the kind a datasheet gives)
 const r1 = 0.09;

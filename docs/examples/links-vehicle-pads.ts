@@ -21,7 +21,7 @@ import {
 const f = 85e3;
 const pad = { innerRadius: 0.1, outerRadius: 0.25, turns: 12, wireDiameter: 4e-3 };
 const l = spiralCoilInductance(pad);
-const spiral = { kind: "spiral" as const, innerRadius: pad.innerRadius, outerRadius: pad.outerRadius, turns: pad.turns };
+const spiral = { kind: "flatSpiral" as const, innerTurnRadius: pad.innerRadius, outerTurnRadius: pad.outerRadius, turns: pad.turns };
 const nominalGap = 0.15;
 const m0 = coaxialCoilMutualInductance(spiral, spiral, nominalGap);
 console.log(`pad L ${(l * 1e6).toFixed(1)} µH, k at ${nominalGap * 1e3} mm: ${couplingCoefficient({ mutualInductance: m0, selfInductance1: l, selfInductance2: l }).toFixed(3)}`);
@@ -45,7 +45,7 @@ for (const gap of [0.12, 0.15, 0.18, 0.22]) {
   if (gap === nominalGap) {
     console.log(`cautions: ${link.cautions.map((c) => c.code).join(", ")}`);
     // field 0.5 m beside the pad centre at the pad's plane, from the primary coil current (peak = √2 · RMS)
-    const b = fieldNearCoil({ kind: "spiral", innerRadius: pad.innerRadius, outerRadius: pad.outerRadius, turns: pad.turns }, Math.SQRT2 * link.primaryCurrentRms, { radialDistance: 0.5, axialPosition: 0 });
+    const b = fieldNearCoil(spiral, Math.SQRT2 * link.primaryCurrentRms, { radialDistance: 0.5, axialPosition: 0 });
     const bRms = Math.hypot(b.radial, b.axial) / Math.SQRT2;
     console.log(`flux density 0.5 m from the pad centre ≈ ${(bRms * 1e6).toFixed(1)} µT rms; ${exposureCaution({ fluxDensityRms: bRms, frequency: f })?.code ?? "below the reference level"}`);
   }

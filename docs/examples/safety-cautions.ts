@@ -8,7 +8,7 @@
 import { fieldOnAxis, fieldNearCoil, exposureCheck, safetyCautions, celsius, DEFER_TO_CODES } from "../../src/index.js";
 
 // Pancake coil: 12 turns from 15 mm to 75 mm radius, 60 A RMS at 40 kHz (invented example).
-const coil = { kind: "spiral" as const, innerRadius: 0.015, outerRadius: 0.075, turns: 12 };
+const coil = { kind: "flatSpiral" as const, innerEdgeRadius: 0.015, outerEdgeRadius: 0.075, turns: 12 };
 const currentRms = 60;
 const frequency = 40e3;
 

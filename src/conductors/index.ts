@@ -20,3 +20,4 @@ export * from "./litz-sullivan.js";
 export * from "./tube.js";
 export * from "./work-coil.js";
 export * from "./validity.js";
+export * from "./lead-impedance.js";

@@ -17,11 +17,9 @@ import {
 } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { specificEnthalpyChange, thermalConductivityAt } from "../materials/index.js";
 import { checkConductiveMaterial } from "../materials/check-material.js";
 import { surfaceTemperatureCaution } from "../safety/index.js";
-import { factorComplexSymmetric, latticeNestedDissection } from "../special/index.js";
-import { STEFAN_BOLTZMANN } from "../units/index.js";
+import { ConductionLattice } from "./conduction-lattice.js";
 import type { FieldRectangle } from "./solve-axisymmetric-field.js";
 
 /**
@@ -219,10 +217,6 @@ const SURFACE_KEYS = ["convectionCoefficient", "emissivity", "ambientTemperature
 const FACES = ["outer", "inner", "lower", "upper"] as const;
 /** Most time steps of one run (a bound on run time). */
 const MAX_STEPS = 200_000;
-/** Spacing of the enthalpy and conductivity tables [K]. */
-const TABLE_STEP = 0.5;
-/** Newton's method stops when no cell moves by more than this [K]. */
-const NEWTON_TOLERANCE = 1e-7;
 
 /** Checks a rectangle (used by the conduction and the coupled heat-up). */
 export function checkPartRectangle(where: string, path: string, value: unknown): FieldRectangle {
@@ -290,57 +284,6 @@ export function gradedEdges(a: number, b: number, n: number, p: number, both: bo
   return out;
 }
 
-/**
- * Material tables on a uniform temperature grid: specific enthalpy (exact integral of c(T) at
- * the grid points, linear between) and thermal conductivity. Built once per run.
- */
-export interface MaterialTables {
-  readonly t0: number;
-  readonly step: number;
-  readonly h: Float64Array;
-  readonly k: Float64Array;
-}
-
-/** Builds the material tables from tMin to tMax (the readers extrapolate the enthalpy linearly and hold the conductivity beyond). */
-export function materialTables(material: ConductiveMaterial, tMin: number, tMax: number): MaterialTables {
-  const t0 = Math.max(1, Math.floor(tMin) - 2);
-  const n = Math.ceil((tMax + 2 - t0) / TABLE_STEP) + 2;
-  const h = new Float64Array(n);
-  const k = new Float64Array(n);
-  // cumulative enthalpy from exact integrals over each interval, summed from t0
-  const breaks: number[] = [];
-  const model = material.specificHeat;
-  if (model.kind === "table") breaks.push(...model.table.temperatures);
-  for (let i = 0; i < n; i++) {
-    const t = t0 + i * TABLE_STEP;
-    k[i] = thermalConductivityAt(material, t);
-    if (i > 0) h[i] = h[i - 1]! + specificEnthalpyChange(material, { fromTemperature: t - TABLE_STEP, toTemperature: t });
-  }
-  return { t0, step: TABLE_STEP, h, k };
-}
-
-/** Specific enthalpy [J/kg] (relative to t0) and its slope dh/dT [J/(kg·K)] at t, written into out[0], out[1]. */
-function enthalpy(tab: MaterialTables, t: number, out: Float64Array): void {
-  const x = (t - tab.t0) / tab.step;
-  const n = tab.h.length;
-  let i = Math.floor(x);
-  if (i < 0) i = 0;
-  if (i > n - 2) i = n - 2;
-  const slope = (tab.h[i + 1]! - tab.h[i]!) / tab.step;
-  out[0] = tab.h[i]! + slope * (t - (tab.t0 + i * tab.step));
-  out[1] = slope;
-}
-
-function conductivity(tab: MaterialTables, t: number): number {
-  const x = (t - tab.t0) / tab.step;
-  const n = tab.k.length;
-  if (x <= 0) return tab.k[0]!;
-  if (x >= n - 1) return tab.k[n - 1]!;
-  const i = Math.floor(x);
-  const f = x - i;
-  return tab.k[i]! * (1 - f) + tab.k[i + 1]! * f;
-}
-
 /** Validated inputs of the conduction solver shared with the coupled heat-up. */
 export interface ConductionSetup {
   readonly shape: FieldRectangle;
@@ -400,155 +343,16 @@ export function runConduction(
   generationAt: (request: PartGenerationRequest) => void,
   where: string,
 ): AxisymmetricHeatConductionResult {
-  const { material, cells, surface, insulated, initial, duration, target, targetLocation, temperatureStep, maxTimeStep, mapTimes, rEdges, zEdges } = setup;
-  const nr = cells.radial;
-  const nz = cells.axial;
-  const n = nr * nz;
-  const density = material.density;
-  const ambient = surface.ambientTemperature;
-  const hConv = surface.convectionCoefficient;
-  const eps = surface.emissivity;
-  const melting = material.meltingTemperature;
-  // The property functions hold their end values outside the material's documented range, so
-  // beyond the table's top the enthalpy is linear (extrapolated with the last slope, exact) and
-  // the conductivity constant: one table up to the top of the range serves any temperature.
-  const tab = materialTables(material, Math.min(initial, ambient, material.temperatureRange.min), Math.max(initial, ambient, material.temperatureRange.max));
-
-  // geometry: volumes, face conductance factors (conductance = factor / Σ(d/k) form)
-  const volume = new Float64Array(n);
-  const rc = new Float64Array(nr);
-  const zc = new Float64Array(nz);
-  for (let i = 0; i < nr; i++) rc[i] = 0.5 * (rEdges[i]! + rEdges[i + 1]!);
-  for (let j = 0; j < nz; j++) zc[j] = 0.5 * (zEdges[j]! + zEdges[j + 1]!);
-  for (let i = 0; i < nr; i++) {
-    const ring = Math.PI * (rEdges[i + 1]! * rEdges[i + 1]! - rEdges[i]! * rEdges[i]!);
-    for (let j = 0; j < nz; j++) volume[i * nz + j] = ring * (zEdges[j + 1]! - zEdges[j]!);
-  }
-  // radial resistance factors: thermal resistance of a ring from radius a to b, length L, conductivity k: ln(b/a)/(2πLk)
-  const logIn = new Float64Array(nr); // ln(rc_i / r_i) (inner half of cell i); 0-radius inner edge: none
-  const logOut = new Float64Array(nr); // ln(r_{i+1} / rc_i)
-  for (let i = 0; i < nr; i++) {
-    // as differences of logarithms: a bore of a denormal radius must not overflow the ratio
-    logIn[i] = rEdges[i]! > 0 ? Math.log(rc[i]!) - Math.log(rEdges[i]!) : 0;
-    logOut[i] = Math.log(rEdges[i + 1]!) - Math.log(rc[i]!);
-  }
-  // sparse pattern: 5-point stencil on the nr × nz lattice, both triangles, columns in row order
-  const colStart = new Int32Array(n + 1);
-  const rows: number[] = [];
-  for (let i = 0; i < nr; i++) {
-    for (let j = 0; j < nz; j++) {
-      const c = i * nz + j;
-      if (i > 0) rows.push(c - nz);
-      if (j > 0) rows.push(c - 1);
-      rows.push(c);
-      if (j < nz - 1) rows.push(c + 1);
-      if (i < nr - 1) rows.push(c + nz);
-      colStart[c + 1] = rows.length;
-    }
-  }
-  const rowIdx = Int32Array.from(rows);
-  const valRe = new Float64Array(rows.length);
-  const valIm = new Float64Array(rows.length);
-  const diagAt = new Int32Array(n);
-  for (let c = 0; c < n; c++) for (let p = colStart[c]!; p < colStart[c + 1]!; p++) if (rowIdx[p] === c) diagAt[c] = p;
-  const ordering = latticeNestedDissection({ columns: nr, rows: nz, step: 1 });
-
-  // exposed boundary faces: (cell, area, distance resistance factor kind)
-  interface Face {
-    cell: number;
-    area: number;
-    /** resistance·k from the cell centre to the face [1/m·…]: R = geo / k */
-    geo: number;
-  }
-  const faces: Face[] = [];
-  const twoPi = 2 * Math.PI;
-  for (let j = 0; j < nz; j++) {
-    const dz = zEdges[j + 1]! - zEdges[j]!;
-    if (!insulated.has("outer")) faces.push({ cell: (nr - 1) * nz + j, area: twoPi * rEdges[nr]! * dz, geo: logOut[nr - 1]! / (twoPi * dz) });
-    if (rEdges[0]! > 0 && !insulated.has("inner")) faces.push({ cell: j, area: twoPi * rEdges[0]! * dz, geo: logIn[0]! / (twoPi * dz) });
-  }
-  for (let i = 0; i < nr; i++) {
-    const ring = Math.PI * (rEdges[i + 1]! * rEdges[i + 1]! - rEdges[i]! * rEdges[i]!);
-    if (!insulated.has("lower")) faces.push({ cell: i * nz, area: ring, geo: (zc[0]! - zEdges[0]!) / ring });
-    if (!insulated.has("upper")) faces.push({ cell: i * nz + nz - 1, area: ring, geo: (zEdges[nz]! - zc[nz - 1]!) / ring });
-  }
-  const faceTemp = new Float64Array(faces.length);
-
-  const T = new Float64Array(n).fill(initial);
+  const { initial, duration, target, targetLocation, temperatureStep, maxTimeStep, mapTimes } = setup;
+  const lattice = new ConductionLattice(setup);
+  const { n, T } = lattice;
+  const history = new ConductionHistory(lattice);
   const Told = new Float64Array(n);
   const Hold = new Float64Array(n);
-  const kCell = new Float64Array(n);
   const gen = new Float64Array(n);
-  const res = new Float64Array(n);
-  const dx = new Float64Array(n);
-  const dxi = new Float64Array(n);
-  const eh = new Float64Array(2);
-
-  /** Heat flow [W] out through a face from a cell at temperature tc; writes the face temperature and returns [flow, dflow/dtc]. */
-  const faceOut = new Float64Array(2);
-  const faceFlow = (f: Face, tc: number, k: number, slot: number): void => {
-    const g = k / f.geo; // conductance centre → face [W/K]
-    if (!(g > 0) || !(f.area > 0)) {
-      // a face of no area (a bore of vanishing radius) passes no heat
-      faceTemp[slot] = tc;
-      faceOut[0] = 0;
-      faceOut[1] = 0;
-      return;
-    }
-    let ts = faceTemp[slot]! > 0 ? faceTemp[slot]! : tc;
-    let hp = 0;
-    for (let it = 0; it < 30; it++) {
-      const t2 = ts * ts;
-      const loss = f.area * (hConv * (ts - ambient) + eps * STEFAN_BOLTZMANN * (t2 * t2 - ambient * ambient * ambient * ambient));
-      hp = f.area * (hConv + 4 * eps * STEFAN_BOLTZMANN * t2 * ts);
-      const r = g * (tc - ts) - loss;
-      const d = r / (g + hp);
-      ts += d;
-      if (Math.abs(d) < 1e-12 * ts) break;
-    }
-    faceTemp[slot] = ts;
-    faceOut[0] = g * (tc - ts);
-    faceOut[1] = (g * hp) / (g + hp);
-  };
-
-  const grid: PartGrid = { rEdges: [...rEdges], zEdges: [...zEdges], radial: nr, axial: nz };
-  const times: number[] = [0];
-  const minimumTemperature: number[] = [];
-  const maximumTemperature: number[] = [];
-  const meanTemperature: number[] = [];
-  const surfaceTemperature: number[] = [];
-  const centreTemperature: number[] = [];
-  const power: number[] = [0];
-  const maps: PartTemperatureMap[] = [];
-  const totalVolume = volume.reduce((a, b) => a + b, 0);
-  const centreCell = Math.floor(nz / 2);
-  const centreOf = (): number => (nz % 2 === 0 ? 0.5 * (T[centreCell - 1]! + T[centreCell]!) : T[centreCell]!);
   // face temperatures for the first record
-  for (let s = 0; s < faces.length; s++) {
-    const f = faces[s]!;
-    faceFlow(f, T[f.cell]!, conductivity(tab, T[f.cell]!), s);
-  }
-  const record = (): void => {
-    let lo = Infinity;
-    let hi = -Infinity;
-    let sum = 0;
-    for (let c = 0; c < n; c++) {
-      const t = T[c]!;
-      if (t < lo) lo = t;
-      if (t > hi) hi = t;
-      sum += t * volume[c]!;
-    }
-    let surf = -Infinity;
-    for (let s = 0; s < faces.length; s++) surf = Math.max(surf, faceTemp[s]!);
-    // every face insulated: the cells along the mantle stand for the surface
-    if (faces.length === 0) for (let j = 0; j < nz; j++) surf = Math.max(surf, T[(nr - 1) * nz + j]!);
-    minimumTemperature.push(lo);
-    maximumTemperature.push(Math.max(hi, surf));
-    meanTemperature.push(sum / totalVolume);
-    surfaceTemperature.push(surf);
-    centreTemperature.push(centreOf());
-  };
-  record();
+  lattice.faceLoss();
+  history.record();
 
   let input = 0;
   let lost = 0;
@@ -557,9 +361,6 @@ export function runConduction(
   let steps = 0;
   let mapNext = 0;
   let targetReachedAt: number | null = null;
-  const targetValue = (): number =>
-    targetLocation === "maximum" ? maximumTemperature[maximumTemperature.length - 1]! : targetLocation === "mean" ? meanTemperature[meanTemperature.length - 1]! : centreTemperature[centreTemperature.length - 1]!;
-  const validity: ValidityNote[] = [];
   let newtonTrouble = 0;
 
   while (time < duration * (1 - 1e-12) && steps < MAX_STEPS) {
@@ -574,97 +375,30 @@ export function runConduction(
     }
     if (time + dt > duration) dt = duration - time;
     Told.set(T);
-    for (let c = 0; c < n; c++) {
-      enthalpy(tab, T[c]!, eh);
-      Hold[c] = eh[0]!;
-    }
-    // Newton iterations on ρV(H(T) − H_old)/Δt − Σ G (T_nb − T) + faces(T) − P = 0
-    let converged = false;
-    let stepLoss: number;
-    for (let it = 0; it < 40; it++) {
-      for (let c = 0; c < n; c++) kCell[c] = conductivity(tab, T[c]!);
-      valRe.fill(0);
-      for (let c = 0; c < n; c++) {
-        enthalpy(tab, T[c]!, eh);
-        const m = (density * volume[c]!) / dt;
-        res[c] = m * (eh[0]! - Hold[c]!) - gen[c]!;
-        valRe[diagAt[c]!] = m * eh[1]!;
-      }
-      // radial links between (i, j) and (i+1, j)
-      for (let i = 0; i + 1 < nr; i++) {
-        for (let j = 0; j < nz; j++) {
-          const a = i * nz + j;
-          const b = a + nz;
-          const dz = zEdges[j + 1]! - zEdges[j]!;
-          const g = (twoPi * dz) / (logOut[i]! / kCell[a]! + logIn[i + 1]! / kCell[b]!);
-          link(a, b, g);
-        }
-      }
-      for (let i = 0; i < nr; i++) {
-        const ring = Math.PI * (rEdges[i + 1]! * rEdges[i + 1]! - rEdges[i]! * rEdges[i]!);
-        for (let j = 0; j + 1 < nz; j++) {
-          const a = i * nz + j;
-          const b = a + 1;
-          const g = ring / ((zEdges[j + 1]! - zc[j]!) / kCell[a]! + (zc[j + 1]! - zEdges[j + 1]!) / kCell[b]!);
-          link(a, b, g);
-        }
-      }
-      stepLoss = 0;
-      for (let s = 0; s < faces.length; s++) {
-        const f = faces[s]!;
-        faceFlow(f, T[f.cell]!, kCell[f.cell]!, s);
-        res[f.cell] = res[f.cell]! + faceOut[0]!;
-        valRe[diagAt[f.cell]!] = valRe[diagAt[f.cell]!]! + faceOut[1]!;
-        stepLoss += faceOut[0]!;
-      }
-      // Newton step
-      const factor = factorComplexSymmetric({ size: n, columnStarts: colStart, rowIndices: rowIdx, re: valRe, im: valIm }, ordering);
-      for (let c = 0; c < n; c++) {
-        dx[c] = -res[c]!;
-        dxi[c] = 0;
-      }
-      factor.solve(dx, dxi);
-      let dMax = 0;
-      for (let c = 0; c < n; c++) {
-        // damp steps that would cross far beyond the table or below 1 K
-        let d = dx[c]!;
-        if (T[c]! + d < 1) d = 1 - T[c]!;
-        T[c] = T[c]! + d;
-        dMax = Math.max(dMax, Math.abs(d));
-      }
-      if (dMax < NEWTON_TOLERANCE) {
-        converged = true;
-        break;
-      }
-    }
-    if (!converged) newtonTrouble++;
+    lattice.enthalpies(Hold);
+    if (!lattice.newtonStep(dt, Hold, gen)) newtonTrouble++;
     // final residual-consistent bookkeeping: loss from the converged face flows
-    stepLoss = 0;
-    for (let s = 0; s < faces.length; s++) {
-      const f = faces[s]!;
-      faceFlow(f, T[f.cell]!, conductivity(tab, T[f.cell]!), s);
-      stepLoss += faceOut[0]!;
-    }
+    const stepLoss = lattice.faceLoss();
     input += genTotal * dt;
     lost += stepLoss * dt;
     time += dt;
     steps++;
-    times.push(time);
-    power.push(genTotal);
-    record();
+    history.times.push(time);
+    history.power.push(genTotal);
+    history.record();
     let change = 0;
     for (let c = 0; c < n; c++) change = Math.max(change, Math.abs(T[c]! - Told[c]!));
     while (mapNext < mapTimes.length && mapTimes[mapNext]! <= time * (1 + 1e-12)) {
-      maps.push({ time, temperatures: Float64Array.from(T) });
+      history.maps.push({ time, temperatures: Float64Array.from(T) });
       mapNext++;
     }
     if (target !== null) {
-      const v = targetValue();
+      const series = targetLocation === "maximum" ? history.maximumTemperature : targetLocation === "mean" ? history.meanTemperature : history.centreTemperature;
+      const k = history.times.length - 1;
+      const v = series[k]!;
       if (v >= target) {
-        const k = times.length - 1;
-        const before =
-          targetLocation === "maximum" ? maximumTemperature[k - 1]! : targetLocation === "mean" ? meanTemperature[k - 1]! : centreTemperature[k - 1]!;
-        targetReachedAt = v > before ? times[k - 1]! + ((target - before) / (v - before)) * dt : time;
+        const before = series[k - 1]!;
+        targetReachedAt = v > before ? history.times[k - 1]! + ((target - before) / (v - before)) * dt : time;
         break;
       }
     }
@@ -672,34 +406,75 @@ export function runConduction(
     const grow = change > 0 ? temperatureStep / change : 2;
     dt = Math.min(maxTimeStep, dt * Math.min(2, Math.max(0.3, grow)));
   }
+  const maps = history.maps;
   if (maps.length === 0 || maps[maps.length - 1]!.time !== time) maps.push({ time, temperatures: Float64Array.from(T) });
-  function link(a: number, b: number, g: number): void {
-    const ta = T[a]!;
-    const tb = T[b]!;
-    res[a] = res[a]! - g * (tb - ta);
-    res[b] = res[b]! - g * (ta - tb);
-    valRe[diagAt[a]!] = valRe[diagAt[a]!]! + g;
-    valRe[diagAt[b]!] = valRe[diagAt[b]!]! + g;
-    // off-diagonals (a, b) and (b, a)
-    setOff(a, b, -g);
-    setOff(b, a, -g);
-  }
-  function setOff(col: number, row: number, v: number): void {
-    for (let p = colStart[col]!; p < colStart[col + 1]!; p++) {
-      if (rowIdx[p] === row) {
-        valRe[p] = v;
-        return;
-      }
-    }
+  const stored = lattice.storedEnergy(initial);
+  const { cautions, validity } = conductionNotes(setup, history, { newtonTrouble, steps, time });
+  return {
+    grid: { rEdges: [...setup.rEdges], zEdges: [...setup.zEdges], radial: lattice.nr, axial: lattice.nz },
+    times: history.times,
+    minimumTemperature: history.minimumTemperature,
+    maximumTemperature: history.maximumTemperature,
+    meanTemperature: history.meanTemperature,
+    surfaceTemperature: history.surfaceTemperature,
+    centreTemperature: history.centreTemperature,
+    power: history.power,
+    maps,
+    targetReachedAt,
+    energy: { input, stored, lost, imbalance: input - stored - lost },
+    steps,
+    cautions,
+    validity,
+  };
+}
+
+/** The curves of a run: one entry per recorded state. */
+class ConductionHistory {
+  readonly times: number[] = [0];
+  readonly minimumTemperature: number[] = [];
+  readonly maximumTemperature: number[] = [];
+  readonly meanTemperature: number[] = [];
+  readonly surfaceTemperature: number[] = [];
+  readonly centreTemperature: number[] = [];
+  readonly power: number[] = [0];
+  readonly maps: PartTemperatureMap[] = [];
+  private readonly centreCell: number;
+
+  constructor(private readonly lattice: ConductionLattice) {
+    this.centreCell = Math.floor(lattice.nz / 2);
   }
 
-  enthalpy(tab, initial, eh);
-  const hStart = eh[0]!;
-  let stored = 0;
-  for (let c = 0; c < n; c++) {
-    enthalpy(tab, T[c]!, eh);
-    stored += density * volume[c]! * (eh[0]! - hStart);
+  /** Appends the present minimum, maximum, mean, surface and centre temperatures. */
+  record(): void {
+    const { n, nr, nz, T, volume, totalVolume, faces, faceTemp } = this.lattice;
+    let lo = Infinity;
+    let hi = -Infinity;
+    let sum = 0;
+    for (let c = 0; c < n; c++) {
+      const t = T[c]!;
+      if (t < lo) lo = t;
+      if (t > hi) hi = t;
+      sum += t * volume[c]!;
+    }
+    let surf = -Infinity;
+    for (let s = 0; s < faces.length; s++) surf = Math.max(surf, faceTemp[s]!);
+    // every face insulated: the cells along the mantle stand for the surface
+    if (faces.length === 0) for (let j = 0; j < nz; j++) surf = Math.max(surf, T[(nr - 1) * nz + j]!);
+    this.minimumTemperature.push(lo);
+    this.maximumTemperature.push(Math.max(hi, surf));
+    this.meanTemperature.push(sum / totalVolume);
+    this.surfaceTemperature.push(surf);
+    const centreCell = this.centreCell;
+    this.centreTemperature.push(nz % 2 === 0 ? 0.5 * (T[centreCell - 1]! + T[centreCell]!) : T[centreCell]!);
   }
+}
+
+/** Validity notes (Newton trouble, step limit, data range) and cautions (hot surface, melting) of a finished run. */
+function conductionNotes(setup: ConductionSetup, history: ConductionHistory, run: { newtonTrouble: number; steps: number; time: number }): { cautions: Caution[]; validity: ValidityNote[] } {
+  const { material, duration } = setup;
+  const { newtonTrouble, steps, time } = run;
+  const melting = material.meltingTemperature;
+  const validity: ValidityNote[] = [];
   if (newtonTrouble > 0) {
     validity.push({
       code: "newton-not-converged",
@@ -713,9 +488,9 @@ export function runConduction(
   }
   const cautions: Caution[] = [];
   let hottest = 0;
-  for (const v of maximumTemperature) hottest = Math.max(hottest, v);
+  for (const v of history.maximumTemperature) hottest = Math.max(hottest, v);
   let hottestSurface = 0;
-  for (const v of surfaceTemperature) hottestSurface = Math.max(hottestSurface, v);
+  for (const v of history.surfaceTemperature) hottestSurface = Math.max(hottestSurface, v);
   const hot = surfaceTemperatureCaution({ temperature: hottestSurface, location: "part surface" });
   if (hot !== null) cautions.push(hot);
   if (hottest > melting) {
@@ -737,22 +512,7 @@ export function runConduction(
       limit: material.temperatureRange.max,
     });
   }
-  return {
-    grid,
-    times,
-    minimumTemperature,
-    maximumTemperature,
-    meanTemperature,
-    surfaceTemperature,
-    centreTemperature,
-    power,
-    maps,
-    targetReachedAt,
-    energy: { input, stored, lost, imbalance: input - stored - lost },
-    steps,
-    cautions,
-    validity,
-  };
+  return { cautions, validity };
 }
 
 /**

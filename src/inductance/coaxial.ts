@@ -1,81 +1,59 @@
 /**
  * Mutual inductance of any two coaxial coils (loops, single-layer solenoids, multilayer coils,
- * flat spirals), and the coupling coefficient.
+ * flat spirals).
  *
  * @packageDocumentation
  */
-import { InputError, requireFinite, requireInteger, requireNonNegative, requireObject, requireOneOf,
-  requireKnownKeys, requirePositive } from "../core/index.js";
+import { InputError, requireNonNegative } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { maxwellOverMu0 } from "./kernels.js";
+import { readCoilGeometry, spiralTurnRadius } from "./coil-geometry.js";
+import type { CoilGeometry, CoilRules, LoopGeometry, MultilayerGeometry, SolenoidGeometry, SpiralRadii } from "./coil-geometry.js";
 import {
   gaussLegendreAdaptive as integrate,
   gaussLegendreAdaptiveAbsolute as integrateAbsolute,
   gaussLegendreAdaptiveSingularAtStart as integrateSingularAtStart,
 } from "../special/internal.js";
 
-/** Accepted fields of each coil kind (misspelt ones are rejected, not ignored). */
-const COIL_FIELDS: Readonly<Record<"loop" | "solenoid" | "multilayer" | "spiral", readonly string[]>> = Object.freeze({
-  loop: Object.freeze(["kind", "radius", "turns"]),
-  solenoid: Object.freeze(["kind", "radius", "length", "turns"]),
-  multilayer: Object.freeze(["kind", "innerRadius", "outerRadius", "length", "turns"]),
-  spiral: Object.freeze(["kind", "innerRadius", "outerRadius", "turns"]),
-});
+/** How this module reads coil descriptions: the deprecated `kind: "spiral"` gives turn centres. */
+const RULES: CoilRules = Object.freeze({ legacySpiral: "turnCentres", multilayer: true });
 
 /**
  * A single circular filament (or `turns` filaments bunched at one place), centred on the axis.
  *
+ * @deprecated Use {@link LoopGeometry} (the same shape, plus an optional `position`); this name
+ *   stays until 1.0.
  * @category Inductance
  */
-export interface CoaxialLoop {
-  /** Discriminant: `"loop"`. */
-  readonly kind: "loop";
-  /** Radius of the filament (wire centre) [m], > 0. */
-  readonly radius: number;
-  /** Number of turns bunched at that radius, ≥ 1 (default 1). */
-  readonly turns?: number;
-}
+export type CoaxialLoop = LoopGeometry;
 
 /**
  * A single-layer solenoid as a current sheet: `turns` spread evenly over `length`
  * (Rosa's convention: length = turns × pitch), at `radius` (the wire centres).
  *
+ * @deprecated Use {@link SolenoidGeometry} (the same shape, plus an optional `position`); this
+ *   name stays until 1.0.
  * @category Inductance
  */
-export interface CoaxialSolenoid {
-  /** Discriminant: `"solenoid"`. */
-  readonly kind: "solenoid";
-  /** Radius to the wire centres [m], > 0. */
-  readonly radius: number;
-  /** Winding length [m], > 0. */
-  readonly length: number;
-  /** Number of turns, ≥ 1. */
-  readonly turns: number;
-}
+export type CoaxialSolenoid = SolenoidGeometry;
 
 /**
- * A coil of rectangular winding cross-section with uniform current density (a multilayer coil
- * whose wire is fine compared with the winding).
+ * A coil of rectangular winding cross-section with uniform current density.
  *
+ * @deprecated Use {@link MultilayerGeometry} (the same shape, plus an optional `position`); this
+ *   name stays until 1.0.
  * @category Inductance
  */
-export interface CoaxialMultilayerCoil {
-  /** Discriminant: `"multilayer"`. */
-  readonly kind: "multilayer";
-  /** Inner radius of the winding [m], > 0. */
-  readonly innerRadius: number;
-  /** Outer radius of the winding [m], > innerRadius. */
-  readonly outerRadius: number;
-  /** Axial length of the winding [m], > 0. */
-  readonly length: number;
-  /** Number of turns, ≥ 1. */
-  readonly turns: number;
-}
+export type CoaxialMultilayerCoil = MultilayerGeometry;
 
 /**
- * A flat (pancake) spiral of round wire: `turns` circular filaments in one plane, evenly spaced
- * from `innerRadius` to `outerRadius` (wire centres).
+ * The former flat-spiral description of the inductance functions: `turns` circular filaments in
+ * one plane, evenly spaced from `innerRadius` to `outerRadius`, both measured to the **wire
+ * centres** of the innermost and outermost turns. The field functions read the same shape as
+ * winding edges ({@link FieldSpiral}), hence the new tag.
  *
+ * @deprecated Use {@link FlatSpiralByTurnCentres}: `{ kind: "flatSpiral", innerTurnRadius,
+ *   outerTurnRadius, turns }` with the same numbers gives bit-identical results. Accepted until 1.0.
  * @category Inductance
  */
 export interface CoaxialSpiralCoil {
@@ -87,78 +65,59 @@ export interface CoaxialSpiralCoil {
   readonly outerRadius: number;
   /** Number of turns, an integer ≥ 1. */
   readonly turns: number;
+  /** Axial position of the spiral's plane [m], any sign (default 0). */
+  readonly position?: number;
 }
 
 /**
- * Any coil that {@link coaxialCoilMutualInductance} accepts, told apart by `kind`.
+ * Any coil that {@link coaxialCoilMutualInductance} accepts: the {@link CoilGeometry} family or
+ * the former spiral description.
  *
+ * @deprecated Use {@link CoilGeometry}; this name (which also admits the former
+ *   {@link CoaxialSpiralCoil}) stays until 1.0.
  * @category Inductance
  */
-export type CoaxialCoil = CoaxialLoop | CoaxialSolenoid | CoaxialMultilayerCoil | CoaxialSpiralCoil;
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former spiral is accepted until 1.0
+export type CoaxialCoil = CoilGeometry | CoaxialSpiralCoil;
 
 /** Internal form of a winding: radial distribution × axial extent (not part of the public surface). */
 export interface Shape {
-  /** 0 point, 1 uniform interval, 2 evenly spaced discrete radii. */
+  /** 0 point, 1 uniform interval, 2 discrete radii (see `spiralTurnRadius`). */
   readonly radial: 0 | 1 | 2;
   readonly r1: number;
   readonly r2: number;
   readonly count: number;
   readonly length: number;
   readonly turns: number;
+  /** What r1 and r2 of discrete radii are measured to. */
+  readonly radiiAt: SpiralRadii;
+  /** Axial position of the winding's centre [m]. */
+  readonly position: number;
 }
 
 /** Validates a coil description and returns its internal shape. */
 function readCoil(where: string, name: string, coil: unknown): Shape {
-  requireObject(where, name, coil);
-  const c = coil as Record<string, unknown>;
-  const kind = requireOneOf(where, `${name}.kind`, c.kind, ["loop", "solenoid", "multilayer", "spiral"] as const);
-  requireKnownKeys(where, name, c, COIL_FIELDS[kind]);
-  if (kind === "loop") {
-    const r = requirePositive(where, `${name}.radius`, c.radius, "m");
-    const n = c.turns === undefined ? 1 : requireTurns(where, `${name}.turns`, c.turns);
-    return { radial: 0, r1: r, r2: r, count: 1, length: 0, turns: n };
-  }
-  if (kind === "solenoid") {
-    const r = requirePositive(where, `${name}.radius`, c.radius, "m");
-    const l = requirePositive(where, `${name}.length`, c.length, "m");
-    const n = requireTurns(where, `${name}.turns`, c.turns);
-    return { radial: 0, r1: r, r2: r, count: 1, length: l, turns: n };
-  }
-  if (kind === "multilayer") {
-    const r1 = requirePositive(where, `${name}.innerRadius`, c.innerRadius, "m");
-    const r2 = requirePositive(where, `${name}.outerRadius`, c.outerRadius, "m");
-    if (!(r2 > r1)) throw new InputError(where, `${name}.outerRadius`, r2, "m", `a finite number > innerRadius (${r1})`);
-    const l = requirePositive(where, `${name}.length`, c.length, "m");
-    const n = requireTurns(where, `${name}.turns`, c.turns);
-    return { radial: 1, r1, r2, count: 1, length: l, turns: n };
-  }
-  const r1 = requirePositive(where, `${name}.innerRadius`, c.innerRadius, "m");
-  const r2 = requirePositive(where, `${name}.outerRadius`, c.outerRadius, "m");
-  const n = requireInteger(where, `${name}.turns`, c.turns, 1);
-  checkSpiralRadii(where, `${name}.outerRadius`, r1, r2, n);
-  return { radial: n === 1 ? 0 : 2, r1, r2, count: n, length: 0, turns: n };
-}
-
-/** Turns of a current sheet or smeared winding: a finite number ≥ 1 (fractional turns allowed). */
-export function requireTurns(where: string, parameter: string, value: unknown): number {
-  if (typeof value !== "number" || !Number.isFinite(value) || !(value >= 1)) {
-    throw new InputError(where, parameter, value, "", "a finite number ≥ 1");
-  }
-  return value;
-}
-
-/** Spiral radii: outer ≥ inner, equal exactly when there is one turn. */
-export function checkSpiralRadii(where: string, parameter: string, inner: number, outer: number, turns: number): void {
-  if (turns === 1) {
-    if (outer !== inner) throw new InputError(where, parameter, outer, "m", `equal to innerRadius (${inner}) for a single turn`);
-  } else if (!(outer > inner)) {
-    throw new InputError(where, parameter, outer, "m", `a finite number > innerRadius (${inner})`);
+  const c = readCoilGeometry(where, name, coil, RULES);
+  const base = { r1: 0, r2: 0, count: 1, length: 0, turns: c.turns, radiiAt: "turnCentres", position: c.position } as const;
+  switch (c.kind) {
+    case "loop":
+      return { ...base, radial: 0, r1: c.radius, r2: c.radius };
+    case "solenoid":
+      return { ...base, radial: 0, r1: c.radius, r2: c.radius, length: c.length };
+    case "multilayer":
+      return { ...base, radial: 1, r1: c.innerRadius, r2: c.outerRadius, length: c.length };
+    case "spiral":
+      if (c.turns === 1) {
+        const r = spiralTurnRadius(c.radiiAt, c.innerRadius, c.outerRadius, 1, 0);
+        return { ...base, radial: 0, r1: r, r2: r };
+      }
+      return { ...base, radial: 2, r1: c.innerRadius, r2: c.outerRadius, count: c.turns, radiiAt: c.radiiAt };
   }
 }
 
 /** Radius of turn i (0-based) of an evenly spaced discrete distribution. */
 function turnRadius(s: Shape, i: number): number {
-  return s.count === 1 ? s.r1 : s.r1 + ((s.r2 - s.r1) * i) / (s.count - 1);
+  return spiralTurnRadius(s.radiiAt, s.r1, s.r2, s.count, i);
 }
 
 // Local tolerances of the nested integrals; with the halving test the accepted error is far
@@ -350,11 +309,11 @@ export function shapeMutual(a: Shape, b: Shape, d: number): number {
 
 /** Internal: the shape of a uniform-current-density rectangular winding. */
 export function multilayerShape(innerRadius: number, outerRadius: number, length: number, turns: number): Shape {
-  return { radial: 1, r1: innerRadius, r2: outerRadius, count: 1, length, turns };
+  return { radial: 1, r1: innerRadius, r2: outerRadius, count: 1, length, turns, radiiAt: "turnCentres", position: 0 };
 }
 
 /**
- * Mutual inductance of two coaxial coils of any of the shapes {@link CoaxialCoil} describes —
+ * Mutual inductance of two coaxial coils of any of the shapes {@link CoilGeometry} describes —
  * loops, single-layer solenoids (current sheets), multilayer coils (uniform current density)
  * and flat spirals (discrete filaments) — by Neumann's formula averaged over both windings.
  *
@@ -372,12 +331,23 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  * current distribution) except that two filaments may not coincide (loops or spiral turns at
  * the same radius in the same plane): that mutual inductance is infinite and throws.
  *
- * @param coilA - first coil, a {@link CoaxialCoil}; its `axialDistance` reference is its centre (mid-length)
+ * Each coil's `position` (default 0) places its centre on the axis; `axialDistance` moves coilB
+ * further along it, so the centres are $z_A$ = coilA.position and
+ * $z_B$ = coilB.position + axialDistance, and only $|z_B - z_A|$ matters (the windings are
+ * symmetric about their mid-planes). Without positions, `axialDistance` is the centre distance.
+ *
+ * The former flat-spiral description `{ kind: "spiral", innerRadius, outerRadius, turns }`
+ * ({@link CoaxialSpiralCoil}, radii to the end turns' wire centres) is still accepted until 1.0
+ * and gives bit-identical results to `{ kind: "flatSpiral", innerTurnRadius, outerTurnRadius, turns }`.
+ *
+ * @param coilA - first coil, a {@link CoilGeometry}; its reference point is its centre (mid-length)
  * @param coilB - second coil, coaxial with the first
- * @param axialDistance - distance between the two coils' centres along the axis [m], ≥ 0
+ * @param axialDistance - distance by which coilB's centre lies further along the axis than its
+ *   `position` says [m], ≥ 0 (the centre distance when neither coil gives a `position`)
  * @returns mutual inductance [H], > 0 (coaxial windings with currents in the same sense)
  * @throws {@link InputError} for a malformed coil (non-positive or non-finite dimension,
- *   turns < 1, fractional spiral turns, outer radius not above inner radius), a negative or
+ *   turns < 1, fractional spiral turns, outer radius not above inner radius, a flat spiral that
+ *   mixes turn-centre and edge radii or uses the bare `innerRadius`/`outerRadius`), a negative or
  *   non-finite `axialDistance`, or coinciding filaments
  * @remarks Accuracy: ≤ 1e-8 relative for smeared windings (verified for multilayer self-inductance
  * against a Bessel–Struve integral in mpmath) and ≤ 1e-12 relative for loops and spirals (sums of
@@ -390,7 +360,7 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  * import { coaxialCoilMutualInductance } from "fluxwright";
  * // a pancake transmitter with a short solenoid receiver whose centre is 15 mm above it
  * const m = coaxialCoilMutualInductance(
- *   { kind: "spiral", innerRadius: 0.01, outerRadius: 0.04, turns: 12 },
+ *   { kind: "flatSpiral", innerTurnRadius: 0.01, outerTurnRadius: 0.04, turns: 12 },
  *   { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 },
  *   0.015,
  * );
@@ -398,87 +368,16 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  * ```
  * @category Inductance
  */
-export function coaxialCoilMutualInductance(coilA: CoaxialCoil, coilB: CoaxialCoil, axialDistance: number): number {
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former spiral description is accepted until 1.0
+export function coaxialCoilMutualInductance(coilA: CoilGeometry | CoaxialSpiralCoil, coilB: CoilGeometry | CoaxialSpiralCoil, axialDistance: number): number {
   const where = "coaxialCoilMutualInductance";
   const a = readCoil(where, "coilA", coilA);
   const b = readCoil(where, "coilB", coilB);
-  const d = requireNonNegative(where, "axialDistance", axialDistance, "m");
+  const shift = requireNonNegative(where, "axialDistance", axialDistance, "m");
+  // exactly `shift` when neither coil gives a position
+  const d = Math.abs(shift + b.position - a.position);
   if (filamentsCoincide(a, b, d)) {
     throw new InputError(where, "axialDistance", d, "", "> 0 m when a filament of coilA and one of coilB share a radius (coinciding filaments have infinite mutual inductance)");
   }
   return shapeMutual(a, b, d);
-}
-
-/**
- * Options of {@link couplingCoefficient}.
- *
- * @category Inductance
- */
-export interface CouplingCoefficientOptions {
-  /** Mutual inductance M [H], finite (negative for opposing winding sense). */
-  readonly mutualInductance: number;
-  /** Self-inductance L₁ [H], > 0. */
-  readonly selfInductance1: number;
-  /** Self-inductance L₂ [H], > 0. */
-  readonly selfInductance2: number;
-}
-
-const COUPLING_FIELDS: readonly string[] = Object.freeze(["mutualInductance", "selfInductance1", "selfInductance2"]);
-
-/**
- * Coupling coefficient of two inductors from their mutual and self-inductances.
- *
- * $$ k = \frac{M}{\sqrt{L_1 L_2}} $$
- *
- * @param options - {@link CouplingCoefficientOptions}: `mutualInductance` M [H], finite
- *   (negative for opposing winding sense); `selfInductance1` L₁ and `selfInductance2` L₂ [H], > 0
- * @returns the coupling coefficient k (dimensionless), −1 ≤ k ≤ 1
- * @throws {@link InputError} for non-finite input, non-positive self-inductances, unknown
- *   option keys, or |M| > √(L₁L₂) (beyond a relative rounding allowance of 1e-12), which no
- *   pair of real coils has
- * @remarks Exact (one division and a square root).
- * @see F. W. Grover, Inductance Calculations (1946), ch. 1 (general principles).
- * @example
- * ```ts
- * import { couplingCoefficient } from "fluxwright";
- * console.log(couplingCoefficient({ mutualInductance: 2e-6, selfInductance1: 4e-6, selfInductance2: 9e-6 })); // 0.3333333333333333
- * ```
- * @category Inductance
- */
-export function couplingCoefficient(options: CouplingCoefficientOptions): number;
-/**
- * Coupling coefficient $k = M/\sqrt{L_1 L_2}$ from three positional inputs (M, L₁, L₂ [H]).
- *
- * @deprecated Pass `{ mutualInductance, selfInductance1, selfInductance2 }`; the positional
- *   form goes at 1.0.
- * @param mutual - mutual inductance M [H]
- * @param selfInductance1 - self-inductance L₁ [H]
- * @param selfInductance2 - self-inductance L₂ [H]
- * @returns the coupling coefficient k
- * @category Inductance
- */
-export function couplingCoefficient(mutual: number, selfInductance1: number, selfInductance2: number): number;
-export function couplingCoefficient(first: CouplingCoefficientOptions | number, second?: number, third?: number): number {
-  const where = "couplingCoefficient";
-  let mutual: unknown = first;
-  let l1Given: unknown = second;
-  let l2Given: unknown = third;
-  let names = ["mutual", "selfInductance1", "selfInductance2"] as const as readonly string[];
-  if (typeof first === "object") {
-    requireObject(where, "options", first);
-    requireKnownKeys(where, "", first, COUPLING_FIELDS);
-    mutual = first.mutualInductance;
-    l1Given = first.selfInductance1;
-    l2Given = first.selfInductance2;
-    names = COUPLING_FIELDS;
-  }
-  const m = requireFinite(where, names[0]!, mutual, "H");
-  const l1 = requirePositive(where, names[1]!, l1Given, "H");
-  const l2 = requirePositive(where, names[2]!, l2Given, "H");
-  // √L1·√L2 rather than √(L1·L2): the product may leave the double range
-  const k = m / Math.sqrt(l1) / Math.sqrt(l2);
-  if (Math.abs(k) > 1 + 1e-12) {
-    throw new InputError(where, names[0]!, m, "H", `at most √(selfInductance1·selfInductance2) = ${Math.sqrt(l1) * Math.sqrt(l2)} in magnitude`);
-  }
-  return Math.max(-1, Math.min(1, k));
 }

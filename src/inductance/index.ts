@@ -19,6 +19,18 @@ export { multilayerCoilInductance, multilayerCoilInductanceWheeler, brooksCoilIn
 export type { MultilayerCoilOptions, BrooksCoilOptions } from "./multilayer.js";
 export { spiralCoilInductance, spiralCoilInductanceWheeler, spiralCoilInductanceMohan } from "./spiral.js";
 export type { SpiralCoilOptions, SpiralCoilApproximationOptions } from "./spiral.js";
+export { coaxialCoilMutualInductance } from "./coaxial.js";
 // eslint-disable-next-line @typescript-eslint/no-deprecated -- couplingCoefficient keeps its positional form until 1.0
-export { coaxialCoilMutualInductance, couplingCoefficient } from "./coaxial.js";
-export type { CoaxialCoil, CoaxialLoop, CoaxialSolenoid, CoaxialMultilayerCoil, CoaxialSpiralCoil, CouplingCoefficientOptions } from "./coaxial.js";
+export { couplingCoefficient } from "./coupling.js";
+export type { CouplingCoefficientOptions } from "./coupling.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- former coil type names, kept until 1.0
+export type { CoaxialCoil, CoaxialLoop, CoaxialSolenoid, CoaxialMultilayerCoil, CoaxialSpiralCoil } from "./coaxial.js";
+export type {
+  CoilGeometry,
+  LoopGeometry,
+  SolenoidGeometry,
+  MultilayerGeometry,
+  FlatSpiralGeometry,
+  FlatSpiralByTurnCentres,
+  FlatSpiralByEdges,
+} from "./coil-geometry.js";

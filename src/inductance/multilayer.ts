@@ -5,7 +5,8 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
-import { multilayerShape, requireTurns, shapeMutual } from "./coaxial.js";
+import { multilayerShape, shapeMutual } from "./coaxial.js";
+import { requireTurns } from "./coil-geometry.js";
 import { MU_0_HALF_PI, nagaokaKernel } from "./kernels.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */

@@ -6,7 +6,7 @@
  */
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
-import { requireTurns } from "./coaxial.js";
+import { requireTurns } from "./coil-geometry.js";
 import { MU_0_HALF_PI, nagaokaKernel, nagaokaLong, nagaokaShort } from "./kernels.js";
 import { rosaB } from "./rosa.js";
 

@@ -6,7 +6,7 @@
  */
 import { InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
-import { checkSpiralRadii } from "./coaxial.js";
+import { checkSpiralRadii } from "./coil-geometry.js";
 import { maxwellOverMu0 } from "./kernels.js";
 import { loopSelf, type LoopCurrentDistribution } from "./loop.js";
 

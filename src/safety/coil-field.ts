@@ -7,6 +7,8 @@
 import { InputError, requireFinite, requireInteger, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { ellipticEFromComplement, ellipticKFromComplement } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
+import { readCoilGeometry, spiralTurnRadius } from "../inductance/coil-geometry.js";
+import type { CoilGeometry, CoilRules, MultilayerGeometry, SolenoidGeometry } from "../inductance/coil-geometry.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const POINT_FIELDS: readonly string[] = Object.freeze(["radialDistance", "axialPosition"]);
@@ -29,26 +31,22 @@ export interface FieldLoop {
  * A single-layer solenoid of `turns` loops of equal `radius`, evenly pitched over `length`
  * and centred on `position`: loop $i$ sits at $z_i = z_0 - \ell/2 + (i + \tfrac12)\,\ell/N$.
  *
+ * @deprecated Use {@link SolenoidGeometry} (the same shape, shared with the inductance
+ *   functions); this name stays until 1.0.
  * @category Field
  */
-export interface FieldSolenoid {
-  /** Discriminant. */
-  readonly kind: "solenoid";
-  /** Mean turn radius [m], > 0. */
-  readonly radius: number;
-  /** Winding length [m], > 0 (a single turn may give any positive length). */
-  readonly length: number;
-  /** Number of turns, integer ≥ 1. */
-  readonly turns: number;
-  /** Axial position of the coil's centre [m] (default 0). */
-  readonly position?: number;
-}
+export type FieldSolenoid = SolenoidGeometry;
 
 /**
- * A flat spiral (pancake) of `turns` concentric loops evenly spaced in radius between
- * `innerRadius` and `outerRadius` (winding edges), in the plane `position`: loop $i$ has
- * radius $r_i = r_{in} + (i + \tfrac12)(r_{out} - r_{in})/N$.
+ * The former flat-spiral description of the field functions: `turns` concentric loops evenly
+ * spaced in radius between `innerRadius` and `outerRadius`, both measured to the **winding
+ * edges**, in the plane `position`: loop $i$ has radius
+ * $r_i = r_{in} + (i + \tfrac12)(r_{out} - r_{in})/N$. The inductance functions read the same shape
+ * as turn centres ({@link CoaxialSpiralCoil}), hence the new tag.
  *
+ * @deprecated Use {@link FlatSpiralByEdges}: `{ kind: "flatSpiral", innerEdgeRadius,
+ *   outerEdgeRadius, turns, position }` with the same numbers gives bit-identical results.
+ *   Accepted until 1.0.
  * @category Field
  */
 export interface FieldSpiral {
@@ -65,12 +63,14 @@ export interface FieldSpiral {
 }
 
 /**
- * A coil for the field functions: an array of coaxial loops, or a solenoid or spiral
- * description (expanded into its loops).
+ * A coil for the field functions: an array of coaxial loops, or a description of the
+ * {@link CoilGeometry} family other than `"multilayer"` (expanded into its loops), or the
+ * former {@link FieldSpiral} (deprecated).
  *
  * @category Field
  */
-export type FieldCoil = readonly FieldLoop[] | FieldSolenoid | FieldSpiral;
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former spiral is accepted until 1.0
+export type FieldCoil = readonly FieldLoop[] | Exclude<CoilGeometry, MultilayerGeometry> | FieldSpiral;
 
 /**
  * Flux density at a point near a coil [T], cylindrical components.
@@ -113,14 +113,9 @@ const MAX_LOOPS = 100_000;
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const LOOP_FIELDS: readonly string[] = Object.freeze(["radius", "position", "turns"]);
-const SOLENOID_FIELDS: readonly string[] = Object.freeze(["kind", "radius", "length", "turns", "position"]);
-const SPIRAL_FIELDS: readonly string[] = Object.freeze(["kind", "innerRadius", "outerRadius", "turns", "position"]);
 
-function requireTurnCount(where: string, value: unknown): number {
-  const turns = requireInteger(where, "coil.turns", value, 1);
-  if (turns > MAX_LOOPS) throw new InputError(where, "coil.turns", turns, "", `an integer between 1 and ${MAX_LOOPS} (the cost grows with the number of turns)`);
-  return turns;
-}
+/** How this module reads coil descriptions: the deprecated `kind: "spiral"` gives winding edges. */
+const RULES: CoilRules = Object.freeze({ legacySpiral: "edges", loopLimit: MAX_LOOPS, multilayer: false });
 
 /** Expands and validates a coil description into loops. */
 function coilLoops(where: string, coil: unknown): Loop[] {
@@ -140,30 +135,18 @@ function coilLoops(where: string, coil: unknown): Loop[] {
       };
     });
   }
-  const description = requireObject(where, "coil", coil);
-  const position =
-    description.position === undefined ? 0 : requireFinite(where, "coil.position", description.position, "m");
-  if (description.kind === "solenoid") {
-    requireKnownKeys(where, "coil", description, SOLENOID_FIELDS);
-    const radius = requirePositive(where, "coil.radius", description.radius, "m");
-    const length = requirePositive(where, "coil.length", description.length, "m");
-    const turns = requireTurnCount(where, description.turns);
-    const loops: Loop[] = [];
+  const c = readCoilGeometry(where, "coil", coil, RULES);
+  const position = c.position;
+  const loops: Loop[] = [];
+  if (c.kind === "loop") {
+    loops.push({ radius: c.radius, position, turns: c.turns });
+  } else if (c.kind === "solenoid") {
+    const { radius, length, turns } = c;
     for (let i = 0; i < turns; i++) loops.push({ radius, position: position - length / 2 + ((i + 0.5) * length) / turns, turns: 1 });
-    return loops;
+  } else if (c.kind === "spiral") {
+    for (let i = 0; i < c.turns; i++) loops.push({ radius: spiralTurnRadius(c.radiiAt, c.innerRadius, c.outerRadius, c.turns, i), position, turns: 1 });
   }
-  if (description.kind === "spiral") {
-    requireKnownKeys(where, "coil", description, SPIRAL_FIELDS);
-    const inner = requireFinite(where, "coil.innerRadius", description.innerRadius, "m");
-    if (inner < 0) throw new InputError(where, "coil.innerRadius", inner, "m", "a finite number ≥ 0");
-    const outer = requirePositive(where, "coil.outerRadius", description.outerRadius, "m");
-    if (!(outer > inner)) throw new InputError(where, "coil.outerRadius", outer, "m", `a finite number > innerRadius (${inner})`);
-    const turns = requireTurnCount(where, description.turns);
-    const loops: Loop[] = [];
-    for (let i = 0; i < turns; i++) loops.push({ radius: inner + ((i + 0.5) * (outer - inner)) / turns, position, turns: 1 });
-    return loops;
-  }
-  throw new InputError(where, "coil.kind", description.kind, "", 'one of "solenoid", "spiral" (or give an array of loops)');
+  return loops;
 }
 
 /** Below this parameter m the elliptic combinations are summed as power series. */

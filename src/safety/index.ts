@@ -8,15 +8,9 @@
  */
 // eslint-disable-next-line @typescript-eslint/no-deprecated -- one overload (the positional form) is deprecated, not the function
 export { fieldOnAxis, fieldNearCoil } from "./coil-field.js";
-export type {
-  FieldCoil,
-  FieldOnAxisOptions,
-  FieldLoop,
-  FieldSolenoid,
-  FieldSpiral,
-  FieldComponents,
-  FieldPoint,
-} from "./coil-field.js";
+export type { FieldCoil, FieldOnAxisOptions, FieldLoop, FieldComponents, FieldPoint } from "./coil-field.js";
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- former coil type names, kept until 1.0
+export type { FieldSolenoid, FieldSpiral } from "./coil-field.js";
 export { exposureCheck, icnirpReferenceLevel } from "./exposure.js";
 export type { ExposureCheckOptions, ExposureCheckResult, ExposurePopulation } from "./exposure.js";
 export {

@@ -4,7 +4,7 @@
  *
  * @packageDocumentation
  */
-import { besselIKScaled, type ScaledBesselIK } from "./bessel-core.js";
+import { IK_I0I, IK_I0R, IK_I1I, IK_I1R, besselIKScaled, besselIKScaledInto, type ScaledBesselIK } from "./bessel-core.js";
 import type { Complex } from "./complex.js";
 
 /** The engine at z for I (any z, by the reflection I_ν(−z) = (−1)^ν I_ν(z)); I only. */
@@ -311,14 +311,41 @@ export function besselJ1Complex(z: Complex): Complex {
  * @category Bessel functions
  */
 export function besselI1OverI0Complex(z: Complex): Complex {
-  const o = iScaledAnywhere(z.re, z.im);
-  const d = o.i0r * o.i0r + o.i0i * o.i0i;
-  if (Math.abs(o.i0r) >= Math.abs(o.i0i)) {
-    const t = o.i0i / o.i0r;
-    const den = o.i0r + o.i0i * t;
-    return { re: (o.i1r + o.i1i * t) / den, im: (o.i1i - o.i1r * t) / den };
+  besselI1OverI0ComplexInto(z.re, z.im, ratioOut);
+  return { re: ratioOut[0]!, im: ratioOut[1]! };
+}
+
+const ratioOut = new Float64Array(2);
+const ratioScratch = new Float64Array(8);
+
+/**
+ * {@link besselI1OverI0Complex} at z = zr + i·zi without allocation: writes the real and
+ * imaginary parts into out[0], out[1] (the same numbers, bit for bit). Internal (`special/internal`).
+ */
+export function besselI1OverI0ComplexInto(zr: number, zi: number, out: Float64Array): void {
+  const o = ratioScratch;
+  // I for any z, by the reflection I_ν(−z) = (−1)^ν I_ν(z), as iScaledAnywhere
+  let s = 1;
+  if (zr < 0) {
+    besselIKScaledInto(-zr, -zi, false, o);
+    s = -1;
+  } else {
+    besselIKScaledInto(zr, zi, false, o);
   }
-  return { re: (o.i1r * o.i0r + o.i1i * o.i0i) / d, im: (o.i1i * o.i0r - o.i1r * o.i0i) / d };
+  const i0r = o[IK_I0R]!;
+  const i0i = o[IK_I0I]!;
+  const i1r = s === 1 ? o[IK_I1R]! : -o[IK_I1R]!;
+  const i1i = s === 1 ? o[IK_I1I]! : -o[IK_I1I]!;
+  const d = i0r * i0r + i0i * i0i;
+  if (Math.abs(i0r) >= Math.abs(i0i)) {
+    const t = i0i / i0r;
+    const den = i0r + i0i * t;
+    out[0] = (i1r + i1i * t) / den;
+    out[1] = (i1i - i1r * t) / den;
+    return;
+  }
+  out[0] = (i1r * i0r + i1i * i0i) / d;
+  out[1] = (i1i * i0r - i1r * i0i) / d;
 }
 
 /**

@@ -45,21 +45,53 @@ export interface ScaledBesselIK {
   k1i: number;
 }
 
+/** Positions in the array written by {@link besselIKScaledInto}. */
+export const IK_I0R = 0;
+export const IK_I0I = 1;
+export const IK_I1R = 2;
+export const IK_I1I = 3;
+export const IK_K0R = 4;
+export const IK_K0I = 5;
+export const IK_K1R = 6;
+export const IK_K1I = 7;
+
+/** Scratch of {@link besselIKScaled}: the object is built from it. */
+const scratch = new Float64Array(8);
+
 /**
  * Scaled I₀, I₁ (and K₀, K₁ when `withK`) at z = zr + i·zi with zr ≥ 0, |z| > 0 for K.
  * K fields are NaN when `withK` is false and the region does not need them.
  */
 export function besselIKScaled(zr: number, zi: number, withK: boolean): ScaledBesselIK {
+  besselIKScaledInto(zr, zi, withK, scratch);
+  return {
+    i0r: scratch[IK_I0R]!,
+    i0i: scratch[IK_I0I]!,
+    i1r: scratch[IK_I1R]!,
+    i1i: scratch[IK_I1I]!,
+    k0r: scratch[IK_K0R]!,
+    k0i: scratch[IK_K0I]!,
+    k1r: scratch[IK_K1R]!,
+    k1i: scratch[IK_K1I]!,
+  };
+}
+
+/**
+ * {@link besselIKScaled} without allocation: writes i0r, i0i, i1r, i1i, k0r, k0i, k1r, k1i into
+ * out[0 … 7] (indices `IK_*`); the same numbers, bit for bit. The I values do not depend on
+ * `withK`, so one call with `withK` true serves every one of the four functions at z.
+ */
+export function besselIKScaledInto(zr: number, zi: number, withK: boolean, out: Float64Array): void {
   const az = Math.abs(zr) + Math.abs(zi);
   const r = az < 1e150 && az > 1e-150 ? Math.sqrt(zr * zr + zi * zi) : Math.hypot(zr, zi);
   // Steed's CF2 converges poorly near the imaginary axis for |z| < 2 (Numerical Recipes uses it
   // only from x = 2 on the real line of J and Y); there the series cancels little, so use it.
-  if (r <= SERIES_RADIUS || (r <= 2 && Math.abs(zi) >= Math.abs(zr))) return seriesRegion(zr, zi, r, withK);
-  if (r < ASYMPTOTIC_RADIUS) return continuedFractionRegion(zr, zi, r);
-  return asymptoticRegion(zr, zi, r);
+  if (r <= SERIES_RADIUS || (r <= 2 && Math.abs(zi) >= Math.abs(zr))) seriesRegion(zr, zi, r, withK, out);
+  else if (r < ASYMPTOTIC_RADIUS) continuedFractionRegion(zr, zi, r, out);
+  else asymptoticRegion(zr, zi, r, out);
 }
 
-function seriesRegion(zr: number, zi: number, r: number, withK: boolean): ScaledBesselIK {
+function seriesRegion(zr: number, zi: number, r: number, withK: boolean, out: Float64Array): void {
   // w = z²/4
   const wr = 0.25 * (zr * zr - zi * zi);
   const wi = 0.5 * zr * zi;
@@ -106,17 +138,17 @@ function seriesRegion(zr: number, zi: number, r: number, withK: boolean): Scaled
   const i1i = 0.5 * (zr * s1i + zi * s1r);
   // e^{−Re z} scaling of I
   const es = Math.exp(-zr);
-  const out: ScaledBesselIK = {
-    i0r: i0r * es,
-    i0i: i0i * es,
-    i1r: i1r * es,
-    i1i: i1i * es,
-    k0r: NaN,
-    k0i: NaN,
-    k1r: NaN,
-    k1i: NaN,
-  };
-  if (!withK) return out;
+  out[IK_I0R] = i0r * es;
+  out[IK_I0I] = i0i * es;
+  out[IK_I1R] = i1r * es;
+  out[IK_I1I] = i1i * es;
+  if (!withK) {
+    out[IK_K0R] = NaN;
+    out[IK_K0I] = NaN;
+    out[IK_K1R] = NaN;
+    out[IK_K1I] = NaN;
+    return;
+  }
   // L = ln(z/2)
   const lr = Math.log(r) - LN2;
   const li = Math.atan2(zi, zr);
@@ -132,14 +164,13 @@ function seriesRegion(zr: number, zi: number, r: number, withK: boolean): Scaled
   const ez = Math.exp(zr);
   const c = Math.cos(zi) * ez;
   const s = Math.sin(zi) * ez;
-  out.k0r = k0r * c - k0i * s;
-  out.k0i = k0r * s + k0i * c;
-  out.k1r = k1r * c - k1i * s;
-  out.k1i = k1r * s + k1i * c;
-  return out;
+  out[IK_K0R] = k0r * c - k0i * s;
+  out[IK_K0I] = k0r * s + k0i * c;
+  out[IK_K1R] = k1r * c - k1i * s;
+  out[IK_K1I] = k1r * s + k1i * c;
 }
 
-function continuedFractionRegion(zr: number, zi: number, r: number): ScaledBesselIK {
+function continuedFractionRegion(zr: number, zi: number, r: number, out: Float64Array): void {
   // ---- CF2 (Steed): e^{z}K0(z) and e^{z}K1(z), here for ν = 0.
   // b = 2(1 + z)
   let br = 2 * (1 + zr);
@@ -260,19 +291,17 @@ function continuedFractionRegion(zr: number, zi: number, r: number): ScaledBesse
   den = wr * wr + wi * wi;
   const i0r = (cz * wr + sz * wi) / den;
   const i0i = (sz * wr - cz * wi) / den;
-  return {
-    i0r,
-    i0i,
-    i1r: fr * i0r - fi * i0i,
-    i1i: fr * i0i + fi * i0r,
-    k0r,
-    k0i,
-    k1r,
-    k1i,
-  };
+  out[IK_I0R] = i0r;
+  out[IK_I0I] = i0i;
+  out[IK_I1R] = fr * i0r - fi * i0i;
+  out[IK_I1I] = fr * i0i + fi * i0r;
+  out[IK_K0R] = k0r;
+  out[IK_K0I] = k0i;
+  out[IK_K1R] = k1r;
+  out[IK_K1I] = k1i;
 }
 
-function asymptoticRegion(zr: number, zi: number, r: number): ScaledBesselIK {
+function asymptoticRegion(zr: number, zi: number, r: number, out: Float64Array): void {
   // 1/z
   const rz = r * r;
   const ur = zr / rz;
@@ -362,14 +391,12 @@ function asymptoticRegion(zr: number, zi: number, r: number): ScaledBesselIK {
     a1r -= b1r; // ν = 1 carries e^{±iπ} = −1
     a1i -= b1i;
   }
-  return {
-    i0r: ir * a0r - ii * a0i,
-    i0i: ir * a0i + ii * a0r,
-    i1r: ir * a1r - ii * a1i,
-    i1i: ir * a1i + ii * a1r,
-    k0r: kr * s0pr - ki * s0pi,
-    k0i: kr * s0pi + ki * s0pr,
-    k1r: kr * s1pr - ki * s1pi,
-    k1i: kr * s1pi + ki * s1pr,
-  };
+  out[IK_I0R] = ir * a0r - ii * a0i;
+  out[IK_I0I] = ir * a0i + ii * a0r;
+  out[IK_I1R] = ir * a1r - ii * a1i;
+  out[IK_I1I] = ir * a1i + ii * a1r;
+  out[IK_K0R] = kr * s0pr - ki * s0pi;
+  out[IK_K0I] = kr * s0pi + ki * s0pr;
+  out[IK_K1R] = kr * s1pr - ki * s1pi;
+  out[IK_K1I] = kr * s1pi + ki * s1pr;
 }

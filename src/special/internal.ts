@@ -32,3 +32,6 @@ export {
 } from "./polynomial.js";
 export { factorDense, solveFactored } from "./dense-solve.js";
 export { brentBracketed } from "./brent-root.js";
+export { besselIKRatiosComplex } from "./bessel-orders.js";
+export { besselIKScaledInto, IK_I0R, IK_I0I, IK_I1R, IK_I1I, IK_K0R, IK_K0I, IK_K1R, IK_K1I } from "./bessel-core.js";
+export { besselI1OverI0ComplexInto } from "./bessel-complex.js";

@@ -1,6 +1,9 @@
 /**
  * Kelvin functions ber, bei, ker, kei of order zero and their first derivatives.
  *
+ * Size: one tight family — a shared evaluator (series, mid-range and asymptotic regions) and
+ * ten thin public entries, each with its own TSDoc and example, which is most of the length.
+ *
  * @packageDocumentation
  */
 import { besselIKScaled } from "./bessel-core.js";

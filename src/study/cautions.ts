@@ -97,9 +97,9 @@ export function heaterCautions(
     coil.shape === "solenoid"
       ? ({ kind: "solenoid", radius: coil.radius, length: coil.length, turns: coil.turns } as const)
       : ({
-          kind: "spiral",
-          innerRadius: Math.max(0, coil.innerRadius - conductorOuterDiameter(coil.conductor) / 2),
-          outerRadius: coil.outerRadius + conductorOuterDiameter(coil.conductor) / 2,
+          kind: "flatSpiral",
+          innerEdgeRadius: Math.max(0, coil.innerRadius - conductorOuterDiameter(coil.conductor) / 2),
+          outerEdgeRadius: coil.outerRadius + conductorOuterDiameter(coil.conductor) / 2,
           turns: coil.turns,
         } as const);
   // each operating point's field at its own frequency: the worst ratio to the reference level
@@ -168,10 +168,11 @@ export function heaterCautions(
     let worstRatio = 0;
     for (const p of points) {
       if (!(p.frequency > 0) || !(p.inductance > 0) || !(p.tankResistance > 0)) continue;
-      const share = harmonicPowerShare(p.frequency, p.inductance, C, p.tankResistance);
+      // the tank's inductance: coil and leads in series
+      const share = harmonicPowerShare(p.frequency, p.inductance + p.leadInductance, C, p.tankResistance);
       if (share > worstShare) {
         worstShare = share;
-        worstRatio = p.frequency * 2 * Math.PI * Math.sqrt(p.inductance * C);
+        worstRatio = p.frequency * 2 * Math.PI * Math.sqrt((p.inductance + p.leadInductance) * C);
       }
     }
     if (worstShare > HARMONIC_NOTE_THRESHOLD) {

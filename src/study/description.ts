@@ -196,6 +196,46 @@ export interface TubeConductorDescription {
 export type HeaterConductor = SolidConductorDescription | LitzConductorDescription | TubeConductorDescription;
 
 /**
+ * Leads that are two parallel round conductors: the coil's own conductor (tube, solid wire or
+ * litz bundle) continued side by side from the coil to the capacitor bank.
+ *
+ * @category Heater study
+ */
+export interface RoundPairLeadsDescription {
+  /** Lead shape tag. */
+  readonly shape: "round-pair";
+  /** Centre-to-centre spacing of the two conductors [m], > the conductor's outer diameter. */
+  readonly spacing: QuantityInput;
+}
+
+/**
+ * Leads that are two flat bus bars, broad faces towards each other.
+ *
+ * @category Heater study
+ */
+export interface FlatPairLeadsDescription {
+  /** Lead shape tag. */
+  readonly shape: "flat-pair";
+  /** Width of each bar (the broad face) [m], > 0. */
+  readonly width: QuantityInput;
+  /** Thickness of each bar [m], > 0. */
+  readonly thickness: QuantityInput;
+  /** Gap between the facing broad faces [m], > 0. */
+  readonly gap: QuantityInput;
+  /** Bar material id or a material set; default the coil conductor's material. */
+  readonly material?: ConductorMaterialId | ConductiveMaterial;
+}
+
+/**
+ * The cross-section of the leads between coil and capacitor bank. With it the study adds the
+ * leads' inductance in series with the coil and takes their resistance with skin and
+ * proximity effect (`leadImpedance`); the run is half of `leadLength` (which counts both leads).
+ *
+ * @category Heater study
+ */
+export type HeaterLeadsDescription = RoundPairLeadsDescription | FlatPairLeadsDescription;
+
+/**
  * A single-layer solenoid (helical work coil) around the part.
  *
  * @category Heater study
@@ -213,6 +253,11 @@ export interface SolenoidCoilDescription {
   readonly conductor: HeaterConductor;
   /** Length of the leads between coil and capacitor bank (both together) [m], ≥ 0; default 0. */
   readonly leadLength?: QuantityInput;
+  /**
+   * Cross-section of the leads; needs `leadLength` > 0. Omitted: the leads count only as
+   * resistance, an isolated conductor of `leadLength` (no inductance).
+   */
+  readonly leads?: HeaterLeadsDescription;
   /** Working temperature of the conductor [K], > 0; default 40 °C (common practice for a cooled coil). */
   readonly temperature?: QuantityInput;
 }
@@ -235,8 +280,13 @@ export interface PancakeCoilDescription {
   readonly liftOff: QuantityInput;
   /** The conductor. */
   readonly conductor: HeaterConductor;
-  /** Length of the leads [m], ≥ 0; default 0. */
+  /** Length of the leads (both together) [m], ≥ 0; default 0. */
   readonly leadLength?: QuantityInput;
+  /**
+   * Cross-section of the leads; needs `leadLength` > 0. Omitted: the leads count only as
+   * resistance, an isolated conductor of `leadLength` (no inductance).
+   */
+  readonly leads?: HeaterLeadsDescription;
   /** Working temperature of the conductor [K], > 0; default 40 °C. */
   readonly temperature?: QuantityInput;
 }

@@ -8,6 +8,7 @@
 import { InputError } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import {
+  leadImpedance,
   litzAcRatio,
   litzDcResistance,
   roundWireAcRatio,
@@ -20,7 +21,7 @@ import { sinusoidalPeakFluxDensity, steinmetzLoss } from "../coreloss/index.js";
 import { solenoidInductance, spiralCoilInductance } from "../inductance/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import { fieldNearCoil } from "../safety/index.js";
-import type { FieldSolenoid } from "../safety/index.js";
+import type { SolenoidGeometry } from "../inductance/index.js";
 import { integrateAdaptive } from "../special/index.js";
 import { andersonStep } from "../special/internal.js";
 import {
@@ -31,6 +32,7 @@ import {
   seriesTank,
   tankStresses,
 } from "../tank/index.js";
+import { currentFedWithSourceFigures } from "../tank/current-fed-figures.js";
 import { MU_0 } from "../units/index.js";
 import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, prepareWorkCoil, tubeInLongCoil } from "../workpiece/index.js";
 import { nonMagneticWeight, prepareShortPartFactor } from "../workpiece/work-coil-short-part.js";
@@ -77,8 +79,15 @@ export interface HeaterOperatingPoint {
   readonly coilInductance: number;
   /** Inductance change caused by the part [H] (workpiece module; 0 without the part). */
   readonly inductanceChange: number;
-  /** Inductance seen at the coil terminals: `coilInductance + inductanceChange` [H]. */
+  /** Inductance seen at the coil terminals: `coilInductance + inductanceChange` [H] (leads excluded). */
   readonly inductance: number;
+  /**
+   * Series inductance of the leads [H] (`leadImpedance`; 0 when the study file gives no lead
+   * cross-section). The tank resonates with `inductance + leadInductance`.
+   */
+  readonly leadInductance: number;
+  /** The leads' share of `coilResistance` [Ω] (their loss is `leadResistance × coilCurrentRms²`). */
+  readonly leadResistance: number;
   /** AC resistance of the coil conductor and leads at the operating frequency [Ω]. */
   readonly coilResistance: number;
   /** Resistance the part reflects into the coil [Ω] (workpiece module). */
@@ -105,10 +114,12 @@ export interface HeaterOperatingPoint {
   readonly supplyCurrent: number;
   /** Supply terminal voltage under load [V]. */
   readonly supplyTerminalVoltage: number;
-  /** Peak voltage across the coil (and, for the parallel tank, the capacitor bank) [V]. */
+  /** Peak voltage across the coil branch, coil and leads together (for the parallel tank also the capacitor bank's) [V]. */
   readonly tankVoltagePeak: number;
-  /** RMS voltage across the coil [V]. */
+  /** RMS voltage at the coil's terminals [V]: with lead inductance, the tank voltage less the leads' share (phasor difference). */
   readonly coilVoltageRms: number;
+  /** RMS voltage across the leads, both together [V] (`coilCurrentRms × |R_lead + jωL_lead|`). */
+  readonly leadVoltageRms: number;
   /** RMS coil current [A]. */
   readonly coilCurrentRms: number;
   /** RMS capacitor-bank voltage [V]. */
@@ -167,11 +178,11 @@ export interface CoilProperties {
   readonly impedanceTier: CoilImpedanceTier;
   /** Conductor length in the coil (turns only) [m]. */
   readonly windingLength: number;
-  /** Conductor length including the leads [m]. */
+  /** Conductor length including the leads [m] (bus-bar leads excluded: they are bars of their own). */
   readonly conductorLength: number;
   /** Resistivity of the conductor at its working temperature [Ω·m]. */
   readonly resistivity: number;
-  /** DC resistance of conductor and leads [Ω]. */
+  /** DC resistance of conductor and leads (bus bars included) [Ω]. */
   readonly dcResistance: number;
   /** Outer diameter of the conductor [m]. */
   readonly conductorDiameter: number;
@@ -215,6 +226,13 @@ export function coilProperties(d: ResolvedHeaterDescription, impedanceTier: Coil
     inductance = spiralCoilInductance({ innerRadius: coil.innerRadius, outerRadius: coil.outerRadius, turns: coil.turns, wireDiameter: conductorDiameter });
     windingLength = coil.turns * Math.PI * (coil.innerRadius + coil.outerRadius);
   }
+  const leads = coil.leads;
+  if (leads !== null && leads.shape === "flat-pair") {
+    // bus-bar leads are conductors of their own: the coil's conductor ends at the winding
+    const barDc = (resistivityAt(leads.material, coil.temperature) * coil.leadLength) / (leads.width * leads.thickness);
+    const dcResistance = conductorDcResistance(coil.conductor, resistivity, windingLength) + barDc;
+    return { inductance, impedanceTier, windingLength, conductorLength: windingLength, resistivity, dcResistance, conductorDiameter };
+  }
   const conductorLength = windingLength + coil.leadLength;
   return { inductance, impedanceTier, windingLength, conductorLength, resistivity, dcResistance: conductorDcResistance(coil.conductor, resistivity, conductorLength), conductorDiameter };
 }
@@ -237,6 +255,38 @@ function isolatedResistancePerMetre(d: ResolvedHeaterDescription, rho: number, f
 /** AC resistance of the leads at a frequency [Ω] (isolated conductor of the lead length). */
 function leadResistance(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number): number {
   return d.coil.leadLength > 0 ? isolatedResistancePerMetre(d, props.resistivity, frequency) * d.coil.leadLength : 0;
+}
+
+/**
+ * The leads' series resistance [Ω] and inductance [H] at a frequency. Without a cross-section:
+ * the isolated conductor's resistance and no inductance (as before leads had a geometry). With
+ * one: `leadImpedance` for a run of half the lead length (a round pair of the coil's conductor,
+ * or the bus bars); a litz pair carries a uniform current over its bundle, so its inductance is
+ * the exact uniform-current value (μ0ℓ/π)(ln(D/a) + 1/4) and its resistance the litz model's.
+ */
+export function leadSeriesImpedance(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number): { resistance: number; inductance: number } {
+  const leads = d.coil.leads;
+  if (leads === null || !(d.coil.leadLength > 0)) return { resistance: leadResistance(d, props, frequency), inductance: 0 };
+  const run = d.coil.leadLength / 2;
+  const c = d.coil.conductor;
+  if (leads.shape === "round-pair") {
+    if (c.kind === "litz") {
+      const inductance = (MU_0 * run / Math.PI) * (Math.log(leads.spacing / (c.outerDiameter / 2)) + 0.25);
+      return { resistance: leadResistance(d, props, frequency), inductance };
+    }
+    const lead = c.kind === "tube"
+      ? { shape: "round-pair" as const, diameter: c.outerDiameter, wallThickness: c.wallThickness, spacing: leads.spacing }
+      : { shape: "round-pair" as const, diameter: c.diameter, spacing: leads.spacing };
+    const z = leadImpedance({ lead, length: run, frequency, resistivity: props.resistivity });
+    return { resistance: z.resistance, inductance: z.inductance };
+  }
+  const z = leadImpedance({
+    lead: { shape: "flat-pair", width: leads.width, thickness: leads.thickness, gap: leads.gap },
+    length: run,
+    frequency,
+    resistivity: resistivityAt(leads.material, d.coil.temperature),
+  });
+  return { resistance: z.resistance, inductance: z.inductance };
 }
 
 /** Closed-form AC resistance of the winding (leads excluded) at a frequency, with the method's validity notes when `notes` is given. */
@@ -479,7 +529,7 @@ function couplingModel(d: ResolvedHeaterDescription, props: CoilProperties): Cou
         rod: bore > 0 ? { radius, innerRadius: bore } : { radius },
       });
       // the coil's axial field along the part surface (loops at the layer's mean radius)
-      const loops: FieldSolenoid = { kind: "solenoid", radius: 0.5 * (layer.innerRadius + layer.outerRadius), length: coil.length, turns: coil.turns };
+      const loops: SolenoidGeometry = { kind: "solenoid", radius: 0.5 * (layer.innerRadius + layer.outerRadius), length: coil.length, turns: coil.turns };
       const hz = (z: number): number => fieldNearCoil(loops, 1, { radialDistance: radius, axialPosition: z }).axial / MU_0;
       const scale = coil.length / 2 + loops.radius;
       const squared = (u: number): number => {
@@ -930,21 +980,37 @@ export function heaterOperatingPoint(
     return loss / (current * current);
   }
 
+  // the leads in series with the coil (one-entry cache: the iteration revisits a frequency)
+  let leadFrequency = Number.NaN;
+  let lead = { resistance: 0, inductance: 0 };
+  const leadAt = (f: number): { resistance: number; inductance: number } => {
+    if (f !== leadFrequency) {
+      lead = leadSeriesImpedance(d, props, f);
+      leadFrequency = f;
+    }
+    return lead;
+  };
+
   function evaluate(f: number, h: number, previousCurrent: number, previousVoltagePeak: number, part: boolean) {
     // the coil's own impedance at f, empty or with the part
     const mur = part ? relativePermeabilityAt(d.part.material, { temperature: partTemperature, fieldStrengthPeak: h }) : 1;
     const st = coilState(f, mur, part && model !== null);
-    const coilResistance = st.copper + leadResistance(d, props, f);
+    const { resistance: leadR, inductance: leadL } = leadAt(f);
+    const coilResistance = st.copper + leadR;
     const reflectedResistance = st.part;
     const inductanceChange = st.L - st.emptyL;
-    const L = st.L;
+    // the tank sees the coil and the leads in series
+    const L = st.L + leadL;
     // the capacitor's dielectric loss as its equivalent series resistance tanδ/(ωC), in the coil branch
     const capacitorResistance = capacitorSeriesResistance({ capacitance: C, dissipationFactor: cap.dissipationFactor, frequency: f });
     const coreResistance = evaluateCoreResistance(f, previousCurrent, previousVoltagePeak);
     const tankResistance = coilResistance + reflectedResistance + capacitorResistance + coreResistance;
-    return { coilResistance, mur, reflectedResistance, inductanceChange, L, emptyL: st.emptyL, capacitorResistance, coreResistance, tankResistance, f, h };
+    return { coilResistance, mur, reflectedResistance, inductanceChange, L, coilL: st.L, leadR, leadL, emptyL: st.emptyL, capacitorResistance, coreResistance, tankResistance, f, h };
   }
   type Evaluation = ReturnType<typeof evaluate>;
+  /** Peak voltage at the coil's terminals: the tank's voltage less the leads' share (the same without lead inductance). */
+  const coilVoltagePeakOf = (e: Evaluation, s: { coilCurrentRms: number; tankVoltagePeak: number }): number =>
+    e.leadL > 0 ? Math.SQRT2 * s.coilCurrentRms * Math.hypot(e.tankResistance - e.capacitorResistance - e.leadR, 2 * Math.PI * e.f * e.coilL) : s.tankVoltagePeak;
 
   function solveInverter(e: Evaluation, final: boolean) {
     const Rint = d.supply.internalResistance;
@@ -1021,16 +1087,35 @@ export function heaterOperatingPoint(
       validity: [] as readonly ValidityNote[],
     };
   }
-  type Solution = ReturnType<typeof solveInverter>;
+  /**
+   * What the fixed-point iteration reads of an inverter solution. The current-fed inverter's
+   * come from its allocation-free kernel (the same numbers as `solveInverter`, which builds the
+   * whole result with its cautions on every call); the final point is solved in full below.
+   * Its arguments must stay those of the current-fed call in `solveInverter`.
+   */
+  type Solution = Pick<ReturnType<typeof solveInverter>, "frequency" | "coilCurrentRms" | "tankVoltagePeak">;
+  const figures = new Float64Array(3);
+  const figureScratch = new Float64Array(7);
+  function solveStep(e: Evaluation): Solution {
+    if (
+      inv.kind === "current-fed-parallel" &&
+      currentFedWithSourceFigures(d.supply.voltage, d.supply.internalResistance, inv.switchOnResistance, e.L, C, e.tankResistance, inv.chokeInductance, figures, figureScratch)
+    ) {
+      return { frequency: figures[0]!, coilCurrentRms: figures[1]!, tankVoltagePeak: figures[2]! };
+    }
+    // the other inverters, and the public function's error where the kernel declines
+    return solveInverter(e, false);
+  }
   const fieldOf = (s: Solution): number => (model === null ? 0 : model.fieldPerAmpere * s.coilCurrentRms);
 
   // the starting iterate: a neighbour's solution, else the empty coil's resonance and its field
-  let f0 = fixedFrequency ?? 1 / (2 * Math.PI * Math.sqrt(L0 * C));
+  const coilResonance = 1 / (2 * Math.PI * Math.sqrt(L0 * C));
+  let f0 = fixedFrequency ?? 1 / (2 * Math.PI * Math.sqrt((L0 + leadAt(coilResonance).inductance) * C));
   let h0 = 0;
   let emptyField = 0;
   if (withPart) {
     try {
-      const empty = solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      const empty = solveStep(evaluate(f0, 0, 0, 0, false));
       f0 = fixedFrequency ?? empty.frequency;
       emptyField = fieldOf(empty);
     } catch (error) {
@@ -1052,7 +1137,7 @@ export function heaterOperatingPoint(
     let s: Solution;
     try {
       e = evaluate(frequency, field, coilCurrent, coilVoltagePeak, withPart);
-      s = solveInverter(e, false);
+      s = solveStep(e);
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       return null;
@@ -1066,7 +1151,7 @@ export function heaterOperatingPoint(
       const newField = fieldOf(s);
       const df = Math.abs(s.frequency - frequency) / frequency;
       const dh = Math.abs(newField - field) / Math.max(newField, 1);
-      const nextCore = d.concentrator === null ? 0 : evaluateCoreResistance(s.frequency, s.coilCurrentRms, s.tankVoltagePeak);
+      const nextCore = d.concentrator === null ? 0 : evaluateCoreResistance(s.frequency, s.coilCurrentRms, coilVoltagePeakOf(e, s));
       const dc = Math.abs(nextCore - e.coreResistance) / e.tankResistance;
       if (df < 1e-10 && dh < 1e-9 && dc < 1e-11 && iterations > 1) return { e, s, iterations, converged: true };
       let nextFrequency = s.frequency;
@@ -1086,14 +1171,14 @@ export function heaterOperatingPoint(
       previousG = g;
       previous = true;
       coilCurrent = s.coilCurrentRms;
-      coilVoltagePeak = s.tankVoltagePeak;
+      coilVoltagePeak = coilVoltagePeakOf(e, s);
       const good = { frequency, field };
       // damping: an iterate the inverter cannot run at is pulled back towards the last good one
       let accepted = false;
       for (let k = 0; k < 40; k++) {
         try {
           const eNext = evaluate(nextFrequency, nextField, coilCurrent, coilVoltagePeak, withPart);
-          const sNext = solveInverter(eNext, false);
+          const sNext = solveStep(eNext);
           e = eNext;
           s = sNext;
           frequency = nextFrequency;
@@ -1119,7 +1204,7 @@ export function heaterOperatingPoint(
   function bracketField(reference: number): { frequency: number; field: number } {
     if (!withPart) {
       // the empty coil has no field to iterate: its inverter failure is the design's limit
-      solveInverter(evaluate(f0, 0, 0, 0, false), false);
+      solveStep(evaluate(f0, 0, 0, 0, false));
       return { frequency: f0, field: 0 };
     }
     let lastError: InputError | null = null;
@@ -1129,11 +1214,11 @@ export function heaterOperatingPoint(
       correction = null; // the first coupling at this field is exact
       try {
         let e = evaluate(f, h, 0, 0, withPart);
-        let s = solveInverter(e, false);
+        let s = solveStep(e);
         for (let k = 0; k < 60 && Math.abs(s.frequency - f) > 1e-12 * f; k++) {
           f = s.frequency;
-          e = evaluate(f, h, s.coilCurrentRms, s.tankVoltagePeak, withPart);
-          s = solveInverter(e, false);
+          e = evaluate(f, h, s.coilCurrentRms, coilVoltagePeakOf(e, s), withPart);
+          s = solveStep(e);
         }
         return { f: s.frequency, r: Math.log(Math.max(fieldOf(s), 1e-300) / h) };
       } catch (error) {
@@ -1197,12 +1282,12 @@ export function heaterOperatingPoint(
     const g = correctionOf(exact, cheapState(at.f, at.mur, loaded));
     const agreed =
       Math.abs(exact.part - at.reflectedResistance) <= AGREEMENT * at.tankResistance &&
-      Math.abs(exact.copper + leadResistance(d, props, at.f) - at.coilResistance) <= AGREEMENT * at.tankResistance &&
-      Math.abs(exact.L - at.L) <= 0.1 * AGREEMENT * at.L;
+      Math.abs(exact.copper + at.leadR - at.coilResistance) <= AGREEMENT * at.tankResistance &&
+      Math.abs(exact.L - at.coilL) <= 0.1 * AGREEMENT * at.coilL;
     if (agreed) {
       // the reported numbers come from the exact model at this point
       correction = g;
-      result = { ...result, e: evaluate(at.f, at.h, result.s.coilCurrentRms, result.s.tankVoltagePeak, loaded) };
+      result = { ...result, e: evaluate(at.f, at.h, result.s.coilCurrentRms, coilVoltagePeakOf(at, result.s), loaded) };
       break;
     }
     const c = correction ?? g;
@@ -1295,7 +1380,9 @@ export function heaterOperatingPoint(
     frequency: s.frequency,
     coilInductance: e.emptyL,
     inductanceChange: e.inductanceChange,
-    inductance: e.L,
+    inductance: e.coilL,
+    leadInductance: e.leadL,
+    leadResistance: e.leadR,
     coilResistance: e.coilResistance,
     reflectedResistance: e.reflectedResistance,
     capacitorResistance: e.capacitorResistance,
@@ -1310,7 +1397,8 @@ export function heaterOperatingPoint(
     supplyCurrent: s.supplyCurrent,
     supplyTerminalVoltage: s.terminalVoltage,
     tankVoltagePeak: s.tankVoltagePeak,
-    coilVoltageRms: s.coilVoltageRmsStress,
+    coilVoltageRms: e.leadL > 0 ? coilVoltagePeakOf(e, s) / Math.SQRT2 : s.coilVoltageRmsStress,
+    leadVoltageRms: s.coilCurrentRms * Math.hypot(e.leadR, 2 * Math.PI * e.f * e.leadL),
     coilCurrentRms: s.coilCurrentRms,
     capacitorVoltageRms: s.capacitorVoltageRms,
     capacitorCurrentRms: s.capacitorCurrentRms,
@@ -1335,7 +1423,7 @@ export function heaterOperatingPoint(
 }
 
 /**
- * The coil's terminal inductance and resistance (conductor, leads and the part's resistance) at
+ * The coil branch's inductance and resistance (coil with the part, and the leads in series) at
  * any frequency, with the part's permeability held at the operating point's value: for
  * impedance sweeps. The closed-form surrogate carries the operating point's correction to the
  * exact model (resistances by factors, inductances by offsets), so the sweep is exact at the
@@ -1355,7 +1443,8 @@ export function coilImpedanceAt(
   }
   const stored = corrections.get(point);
   const st = stored !== undefined ? corrected(cheap, stored.correction) : cheap;
-  return { inductance: st.L, resistance: st.copper + st.part + leadResistance(d, props, frequency) };
+  const lead = leadSeriesImpedance(d, props, frequency);
+  return { inductance: st.L + lead.inductance, resistance: st.copper + st.part + lead.resistance };
 }
 
 /**

@@ -8,7 +8,7 @@ import { conductiveMaterials } from "../materials/index.js";
 import { celsius } from "../units/index.js";
 import { CONDUCTOR_IDS, limitText, MATERIAL_IDS, Reader } from "./description-reader.js";
 import { conductorOuterDiameter } from "./resolved-description.js";
-import type { ResolvedCoil, ResolvedConductor, ResolvedFieldConcentrator, ResolvedInverter, ResolvedPart, ResolvedRectangle } from "./resolved-description.js";
+import type { ResolvedCoil, ResolvedConductor, ResolvedFieldConcentrator, ResolvedInverter, ResolvedLeads, ResolvedPart, ResolvedRectangle } from "./resolved-description.js";
 
 export function readConductor(rd: Reader, path: string, value: unknown): ResolvedConductor | undefined {
   const o = rd.object(path, value, ["kind", "diameter", "strands", "strandDiameter", "outerDiameter", "wallThickness", "material"]);
@@ -47,13 +47,47 @@ export function readConductor(rd: Reader, path: string, value: unknown): Resolve
   return undefined;
 }
 
+/**
+ * The leads' cross-section (`coil.leads`), or `null` when absent; `conductor` is the coil's
+ * (a round pair continues it), `leadLength` must be > 0 when a cross-section is given.
+ */
+export function readLeads(rd: Reader, value: unknown, conductor: ResolvedConductor | undefined, leadLength: number, leadLengthInput: unknown): ResolvedLeads | null | undefined {
+  if (value === undefined) return null;
+  const o = rd.object("coil.leads", value, ["shape", "spacing", "width", "thickness", "gap", "material"]);
+  if (o === undefined) return undefined;
+  if (!(leadLength > 0)) rd.fail("coil.leadLength", leadLengthInput, "", "> 0 when coil.leads is given (the leads' total length, both together)");
+  const shape = rd.oneOf("coil.leads.shape", o.shape, ["round-pair", "flat-pair"] as const);
+  const forbid = (keys: readonly string[]): void => {
+    for (const key of keys) if (o[key] !== undefined) rd.fail(`coil.leads.${key}`, o[key], "", `absent for ${String(shape)} leads`);
+  };
+  if (shape === "round-pair") {
+    forbid(["width", "thickness", "gap", "material"]);
+    const spacing = rd.quantity("coil.leads.spacing", o.spacing, "m", "positive");
+    if (conductor !== undefined) {
+      const d = conductorOuterDiameter(conductor);
+      if (!(spacing > d)) rd.fail("coil.leads.spacing", o.spacing, "", `> the conductor's outer diameter = ${limitText(d, "m", o.spacing)} (the leads would touch)`);
+    }
+    return { shape, spacing };
+  }
+  if (shape === "flat-pair") {
+    forbid(["spacing"]);
+    const width = rd.quantity("coil.leads.width", o.width, "m", "positive");
+    const thickness = rd.quantity("coil.leads.thickness", o.thickness, "m", "positive");
+    const gap = rd.quantity("coil.leads.gap", o.gap, "m", "positive");
+    const material = o.material === undefined ? conductor?.material : rd.material("coil.leads.material", o.material, CONDUCTOR_IDS);
+    return material === undefined ? undefined : { shape, width, thickness, gap, material };
+  }
+  return undefined;
+}
+
 export function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
-  const o = rd.object("coil", value, ["shape", "radius", "length", "turns", "innerRadius", "outerRadius", "liftOff", "conductor", "leadLength", "temperature"]);
+  const o = rd.object("coil", value, ["shape", "radius", "length", "turns", "innerRadius", "outerRadius", "liftOff", "conductor", "leadLength", "leads", "temperature"]);
   if (o === undefined) return undefined;
   const shape = rd.oneOf("coil.shape", o.shape, ["solenoid", "pancake"] as const);
   const turns = rd.integer("coil.turns", o.turns, 1);
   const conductor = readConductor(rd, "coil.conductor", o.conductor);
   const leadLength = rd.optional("coil.leadLength", o.leadLength, "m", "non-negative", 0);
+  const leads = readLeads(rd, o.leads, conductor, leadLength, o.leadLength);
   const temperature = rd.optional("coil.temperature", o.temperature, "K", "positive", celsius(40));
   const d = conductor === undefined ? Number.NaN : conductorOuterDiameter(conductor);
   const forbid = (keys: readonly string[]): void => {
@@ -65,7 +99,7 @@ export function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
     const length = rd.quantity("coil.length", o.length, "m", "positive");
     if (length / turns < d * (1 - 1e-12)) rd.fail("coil.length", o.length, "", `≥ turns × conductor diameter = ${limitText(turns * d, "m", o.length)} (turns would overlap)`);
     if (radius < (d / 2) * (1 - 1e-12)) rd.fail("coil.radius", o.radius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.radius)}`);
-    return conductor === undefined ? undefined : { shape, radius, length, turns, conductor, leadLength, temperature };
+    return conductor === undefined || leads === undefined ? undefined : { shape, radius, length, turns, conductor, leadLength, leads, temperature };
   }
   if (shape === "pancake") {
     forbid(["radius", "length"]);
@@ -77,7 +111,7 @@ export function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {
       rd.fail("coil.outerRadius", o.outerRadius, "", `≥ innerRadius + (turns − 1) × conductor diameter = ${limitText(innerRadius + (turns - 1) * d, "m", o.outerRadius)} (turns would overlap)`);
     }
     if (innerRadius < (d / 2) * (1 - 1e-12)) rd.fail("coil.innerRadius", o.innerRadius, "", `≥ half the conductor diameter = ${limitText(d / 2, "m", o.innerRadius)}`);
-    return conductor === undefined ? undefined : { shape, innerRadius, outerRadius, turns, liftOff, conductor, leadLength, temperature };
+    return conductor === undefined || leads === undefined ? undefined : { shape, innerRadius, outerRadius, turns, liftOff, conductor, leadLength, leads, temperature };
   }
   return undefined;
 }

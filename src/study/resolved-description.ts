@@ -90,14 +90,41 @@ export interface ResolvedTubeConductor {
 /** A resolved conductor. @category Heater study */
 export type ResolvedConductor = ResolvedSolidConductor | ResolvedLitzConductor | ResolvedTubeConductor;
 
+/** Resolved round-pair leads (the coil conductor continued). @category Heater study */
+export interface ResolvedRoundPairLeads {
+  /** Lead shape tag. */
+  readonly shape: "round-pair";
+  /** Centre-to-centre spacing [m]. */
+  readonly spacing: number;
+}
+
+/** Resolved flat bus-bar leads. @category Heater study */
+export interface ResolvedFlatPairLeads {
+  /** Lead shape tag. */
+  readonly shape: "flat-pair";
+  /** Bar width [m]. */
+  readonly width: number;
+  /** Bar thickness [m]. */
+  readonly thickness: number;
+  /** Gap between the broad faces [m]. */
+  readonly gap: number;
+  /** Bar material. */
+  readonly material: ConductiveMaterial;
+}
+
+/** Resolved lead cross-section. @category Heater study */
+export type ResolvedLeads = ResolvedRoundPairLeads | ResolvedFlatPairLeads;
+
 /** Fields every resolved coil has. @category Heater study */
 export interface ResolvedCoilCommon {
   /** Number of turns. */
   readonly turns: number;
   /** The conductor. */
   readonly conductor: ResolvedConductor;
-  /** Lead length [m]. */
+  /** Lead length (both leads together) [m]. */
   readonly leadLength: number;
+  /** Cross-section of the leads, or `null` (leads as an isolated conductor, resistance only). */
+  readonly leads: ResolvedLeads | null;
   /** Conductor working temperature [K]. */
   readonly temperature: number;
 }

@@ -889,7 +889,7 @@ export function studyHeater(description: HeaterDescription, options: StudyHeater
     const phaseEmpty: number[] = [];
     const magnitudeLoaded: number[] = [];
     const phaseLoaded: number[] = [];
-    const empty = tankImpedanceSweep(tank(emptyCoil.coilInductance, emptyCoil.coilResistance), frequencies);
+    const empty = tankImpedanceSweep(tank(emptyCoil.coilInductance + emptyCoil.leadInductance, emptyCoil.coilResistance), frequencies);
     for (let i = 0; i < count; i++) {
       magnitudeEmpty.push(Math.hypot(empty.re[i] as number, empty.im[i] as number));
       phaseEmpty.push(Math.atan2(empty.im[i] as number, empty.re[i] as number));

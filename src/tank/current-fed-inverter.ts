@@ -5,6 +5,7 @@
  *
  * @packageDocumentation
  */
+import { FIG_COIL_CURRENT_RMS, FIG_DYNAMIC_RESISTANCE, FIG_FREQUENCY, FIG_OMEGA, FIG_SUPPLY_CURRENT, FIG_TANK_VOLTAGE_PEAK, FIG_TANK_VOLTAGE_RMS, currentFedFigures } from "./current-fed-figures.js";
 import { InputError, requireKnownKeys, requireObject, requirePositive, voltageCaution, type Caution, type ValidityNote } from "../core/index.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
@@ -83,6 +84,8 @@ const RIPPLE_FACTOR = (() => {
   return Math.PI * Math.cos(t1) - Math.PI + 2 * t1;
 })();
 
+const figures = new Float64Array(7);
+
 /** Σ over odd n ≥ 3 of n²/(n² − 1)²: the capacitor share of the drive harmonics. */
 const HARMONIC_SUM = (Math.PI * Math.PI) / 48 + 1 / 16;
 
@@ -146,21 +149,20 @@ export function currentFedParallelInverter(options: CurrentFedParallelInverterOp
   const R = requirePositive(where, "coilResistance", options.coilResistance, "Ω");
   const choke =
     options.chokeInductance === undefined ? null : requirePositive(where, "chokeInductance", options.chokeInductance, "H");
-  const z0 = Math.sqrt(L / C);
-  const a = (R / z0) * (R / z0);
-  if (!(a < 1)) {
-    throw new InputError(where, "coilResistance", R, "Ω", `a finite number < √(L/C) = ${z0} (otherwise the tank has no zero-phase frequency)`);
+  const fig = figures;
+  if (!currentFedFigures(supplyVoltage, L, C, R, fig)) {
+    throw new InputError(where, "coilResistance", R, "Ω", `a finite number < √(L/C) = ${Math.sqrt(L / C)} (otherwise the tank has no zero-phase frequency)`);
   }
-  const omega = Math.sqrt(1 - a) / Math.sqrt(L * C);
-  const frequency = omega / (2 * Math.PI);
-  const dynamicResistance = L / (R * C);
-  const tankVoltagePeak = Math.PI * supplyVoltage;
-  const supplyCurrent = (Math.PI * Math.PI * supplyVoltage) / (2 * dynamicResistance);
+  const omega = fig[FIG_OMEGA]!;
+  const frequency = fig[FIG_FREQUENCY]!;
+  const dynamicResistance = fig[FIG_DYNAMIC_RESISTANCE]!;
+  const tankVoltagePeak = fig[FIG_TANK_VOLTAGE_PEAK]!;
+  const supplyCurrent = fig[FIG_SUPPLY_CURRENT]!;
   const power = supplyVoltage * supplyCurrent;
   const capacitorCurrentRms = (omega * C * tankVoltagePeak) / Math.SQRT2;
   const harmonicMeanSquare = ((2 * supplyCurrent * supplyCurrent) / (Math.PI * Math.PI)) * HARMONIC_SUM;
   const qualityFactor = (omega * L) / R;
-  const tankVoltageRms = tankVoltagePeak / Math.SQRT2;
+  const tankVoltageRms = fig[FIG_TANK_VOLTAGE_RMS]!;
   const chokeRipple = choke === null ? null : (RIPPLE_FACTOR * supplyVoltage) / (omega * choke);
 
   const cautions: Caution[] = [];
@@ -195,7 +197,7 @@ export function currentFedParallelInverter(options: CurrentFedParallelInverterOp
     capacitorCurrentRms,
     capacitorCurrentRmsWithHarmonics: Math.sqrt(capacitorCurrentRms * capacitorCurrentRms + harmonicMeanSquare),
     circulatingCurrentRms: capacitorCurrentRms,
-    coilCurrentRms: tankVoltageRms / Math.hypot(R, omega * L),
+    coilCurrentRms: fig[FIG_COIL_CURRENT_RMS]!,
     circulatingToSupplyRatio: capacitorCurrentRms / supplyCurrent,
     qualityFactor,
     dynamicResistance,
@@ -204,3 +206,4 @@ export function currentFedParallelInverter(options: CurrentFedParallelInverterOp
     validity,
   };
 }
+

@@ -4,15 +4,17 @@
  *
  * @packageDocumentation
  */
-import { InputError, requireInRange, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { InputError } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { specificEnthalpyChange, specificHeatAt, thermalConductivityAt } from "../materials/index.js";
+import { specificEnthalpyChange } from "../materials/index.js";
 import { solveOde } from "../special/index.js";
 import type { OdeResult } from "../special/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
 import { findEquilibrium } from "./steady-state.js";
-import { checkSurface, effectiveCoefficient, powerFunction } from "./surface-loss.js";
+import { effectiveCoefficient } from "./surface-loss.js";
+import { lumpedRunNotes, readLumpedHeatUpOptions, WHERE } from "./lumped-heat-up-input.js";
+import type { LumpedHeatUpInput } from "./lumped-heat-up-input.js";
 
 /** Longest duration accepted, in time constants (about 0.3 s of work there on one core). */
 const MAX_TIME_CONSTANTS = 1e5;
@@ -20,9 +22,6 @@ const MAX_TIME_CONSTANTS = 1e5;
 function steadyText(equilibrium: number | null): string {
   return equilibrium === null ? "" : `(${equilibrium.toPrecision(6)} K)`;
 }
-
-/** Accepted fields (misspelt ones are rejected, not ignored). */
-const LUMPED_FIELDS: readonly string[] = Object.freeze(["mass", "specificHeat", "material", "power", "powerAt", "surfaceArea", "convectionCoefficient", "emissivity", "ambientTemperature", "initialTemperature", "targetTemperature", "duration", "thermalConductivity", "density", "characteristicLength", "relativeTolerance"]);
 
 /**
  * Options of {@link lumpedHeatUp}. Give `specificHeat` or `material` (or both: `specificHeat`
@@ -146,7 +145,6 @@ export interface LumpedHeatUpResult {
   readonly validity: ValidityNote[];
 }
 
-const WHERE = "lumpedHeatUp";
 
 /**
  * Heats a part of uniform temperature (lumped capacitance) with absorbed power $P(T)$ against
@@ -199,52 +197,9 @@ const WHERE = "lumpedHeatUp";
  * @category Thermal
  */
 export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
-  requireObject(WHERE, "options", options);
-  requireKnownKeys(WHERE, "", options, LUMPED_FIELDS);
-  const mass = requirePositive(WHERE, "mass", options.mass, "kg");
-  const material = options.material;
-  if (material !== undefined) requireObject(WHERE, "material", material);
-  let heatCapacityAt: (temperature: number) => number;
-  let constantSpecificHeat: number | null = null;
-  if (options.specificHeat !== undefined) {
-    const c = requirePositive(WHERE, "specificHeat", options.specificHeat, "J/(kg·K)");
-    constantSpecificHeat = c;
-    heatCapacityAt = (): number => mass * c;
-  } else if (material !== undefined) {
-    heatCapacityAt = (temperature: number): number => mass * specificHeatAt(material, temperature);
-  } else {
-    throw new InputError(WHERE, "specificHeat", options.specificHeat, "J/(kg·K)", "a finite number > 0 (or give material)");
-  }
-  if (options.powerAt === undefined && options.power !== undefined) {
-    requireInRange(WHERE, "power", options.power, "W", 0, Infinity);
-  }
-  const power = powerFunction(WHERE, options.power, options.powerAt);
-  const surface = checkSurface(WHERE, options);
+  const read = readLumpedHeatUpOptions(options);
+  const { heatCapacityAt, power, surface, initial, target, duration, rtol } = read;
   const { area, convection, emissivity, ambient } = surface;
-  const initial =
-    options.initialTemperature === undefined
-      ? ambient
-      : requirePositive(WHERE, "initialTemperature", options.initialTemperature, "K");
-  const target =
-    options.targetTemperature === undefined
-      ? null
-      : requirePositive(WHERE, "targetTemperature", options.targetTemperature, "K");
-  const duration =
-    options.duration === undefined ? null : requirePositive(WHERE, "duration", options.duration, "s");
-  const conductivityOption =
-    options.thermalConductivity === undefined
-      ? null
-      : requirePositive(WHERE, "thermalConductivity", options.thermalConductivity, "W/(m·K)");
-  const densityOption =
-    options.density === undefined ? null : requirePositive(WHERE, "density", options.density, "kg/m³");
-  const lengthOption =
-    options.characteristicLength === undefined
-      ? null
-      : requirePositive(WHERE, "characteristicLength", options.characteristicLength, "m");
-  const rtol =
-    options.relativeTolerance === undefined
-      ? 1e-10
-      : requireInRange(WHERE, "relativeTolerance", options.relativeTolerance, "", 1e-13, 1e-3);
 
   // Equilibrium and reachability (exact for a 1-D autonomous ODE).
   const equilibrium = findEquilibrium(power, surface, initial, options.powerAt === undefined);
@@ -260,25 +215,7 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
     }
   }
 
-  const sigmaA = emissivity * STEFAN_BOLTZMANN * area;
-  const hA = convection * area;
-  // The state is the rise above the initial temperature (not the temperature itself), so that a
-  // tiny rise keeps its full relative precision and the stored energy m·c·ΔT balances the
-  // integrated input to rounding; the losses use T − Ta = (T0 − Ta) + ΔT and
-  // T⁴ − Ta⁴ = (T − Ta)(T + Ta)(T² + Ta²) for the same reason.
-  const initialExcess = initial - ambient;
-  const derivative = (_t: number, y: Float64Array, dy: Float64Array): void => {
-    const rise = y[0]!;
-    const temperature = initial + rise;
-    const p = power(temperature);
-    const excess = initialExcess + rise;
-    const convective = hA * excess;
-    const radiative = sigmaA * excess * (temperature + ambient) * (temperature * temperature + ambient * ambient);
-    dy[0] = (p - convective - radiative) / heatCapacityAt(temperature);
-    dy[1] = p;
-    dy[2] = convective;
-    dy[3] = radiative;
-  };
+  const derivative = lumpedDerivative(read);
   const energyScale = heatCapacityAt(initial) * Math.max(1, Math.abs((equilibrium ?? target ?? initial) - initial));
   const absoluteTolerance = [1e-12 * Math.max(initial, ambient), 1e-13 * energyScale, 1e-13 * energyScale, 1e-13 * energyScale];
   const riseToTarget = target === null ? 0 : target - initial;
@@ -330,21 +267,9 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   // The curve: the run that stopped at the target when the span ends there (its steps merged
   // with 64 dense samples, for plotting), else a run over the span with at least 64 steps.
   const curve = eventRun !== null && end === timeToTarget ? eventRun : run(end, false);
-  let times = curve.times;
-  let temperatures = curve.states.map((s) => initial + s[0]!);
-  if (curve === eventRun) {
-    const merged: { t: number; v: number }[] = times.map((t, k) => ({ t, v: temperatures[k]! }));
-    for (let k = 1; k < 64; k++) {
-      const t = (end * k) / 64;
-      merged.push({ t, v: initial + curve.sample!(t)[0]! });
-    }
-    merged.sort((a, b) => a.t - b.t);
-    times = merged.map((p) => p.t);
-    temperatures = merged.map((p) => p.v);
-  }
+  const { times, temperatures } = curve === eventRun ? mergedCurve(curve, end, initial) : { times: curve.times, temperatures: curve.states.map((s) => initial + s[0]!) };
   const finalState = curve.finalState;
-  const finalRise = finalState[0]!;
-  const finalTemperature = initial + finalRise;
+  const finalTemperature = initial + finalState[0]!;
   const sample = curve.sample!;
   const temperatureAt = (time: number): number => {
     if (typeof time !== "number" || !(time >= 0 && time <= end)) {
@@ -353,69 +278,9 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
     return initial + sample(time)[0]!;
   };
 
-  // Stored energy m ∫c(T) dT, exact for the material's specific-heat model.
-  let stored: number;
-  if (constantSpecificHeat !== null) stored = mass * constantSpecificHeat * finalRise;
-  else stored = mass * specificEnthalpyChange(material!, { fromTemperature: initial, toTemperature: finalTemperature });
-  const input = finalState[1]!;
-  const convective = finalState[2]!;
-  const radiative = finalState[3]!;
-  const energy: LumpedEnergyBalance = {
-    input,
-    stored,
-    convection: convective,
-    radiation: radiative,
-    imbalance: input - stored - convective - radiative,
-  };
+  const energy = lumpedEnergy(read, finalState);
 
-  // Biot number at the hottest (or coldest) temperature of the curve.
-  const validity: ValidityNote[] = [];
-  let extreme = initial;
-  for (const t of temperatures) if (Math.abs(t - ambient) > Math.abs(extreme - ambient)) extreme = t;
-  const density = densityOption ?? material?.density ?? null;
-  const lc = lengthOption ?? (density !== null ? mass / density / area : null);
-  const k = conductivityOption ?? (material !== undefined ? thermalConductivityAt(material, extreme) : null);
-  let biotNumber: number | null = null;
-  if (lc !== null && k !== null) {
-    biotNumber = (effectiveCoefficient(extreme, ambient, convection, emissivity) * lc) / k;
-    if (biotNumber > 0.1) {
-      validity.push({
-        code: "lumped-biot-above-limit",
-        message: `Biot number ${biotNumber.toPrecision(3)} exceeds 0.1: the part's surface and core differ in temperature and the lumped curve is only an average; use radialHeatUp for surface and core temperatures.`,
-        value: biotNumber,
-        limit: 0.1,
-      });
-    }
-  } else {
-    validity.push({
-      code: "lumped-biot-unknown",
-      message: "The Biot number could not be checked (give material, or thermalConductivity with density or characteristicLength); the lumped model assumes a uniform part temperature.",
-    });
-  }
-  if (material !== undefined) {
-    let lowest = initial;
-    let highest = initial;
-    for (const t of temperatures) {
-      if (t < lowest) lowest = t;
-      if (t > highest) highest = t;
-    }
-    if (highest > material.temperatureRange.max || lowest < material.temperatureRange.min) {
-      validity.push({
-        code: "material-data-range",
-        message: `The curve leaves the temperature range of the material data (${material.temperatureRange.min}–${material.temperatureRange.max} K); end values are held there.`,
-        value: highest > material.temperatureRange.max ? highest : lowest,
-        limit: highest > material.temperatureRange.max ? material.temperatureRange.max : material.temperatureRange.min,
-      });
-    }
-    if (highest >= material.meltingTemperature) {
-      validity.push({
-        code: "above-melting",
-        message: "The part would reach its melting temperature; the model ignores latent heat of fusion and is not valid there.",
-        value: highest,
-        limit: material.meltingTemperature,
-      });
-    }
-  }
+  const { biotNumber, validity } = lumpedRunNotes(read, temperatures);
 
   return {
     times,
@@ -433,3 +298,54 @@ export function lumpedHeatUp(options: LumpedHeatUpOptions): LumpedHeatUpResult {
   };
 }
 
+/**
+ * The right-hand side of the run: the rise above the initial temperature and the integrated
+ * input, convective and radiative energies. The state is the rise (not the temperature itself),
+ * so that a tiny rise keeps its full relative precision and the stored energy m·c·ΔT balances the
+ * integrated input to rounding; the losses use T − Ta = (T0 − Ta) + ΔT and
+ * T⁴ − Ta⁴ = (T − Ta)(T + Ta)(T² + Ta²) for the same reason.
+ */
+function lumpedDerivative(read: LumpedHeatUpInput): (t: number, y: Float64Array, dy: Float64Array) => void {
+  const { initial, power, heatCapacityAt } = read;
+  const { area, convection, emissivity, ambient } = read.surface;
+  const sigmaA = emissivity * STEFAN_BOLTZMANN * area;
+  const hA = convection * area;
+  const initialExcess = initial - ambient;
+  return (_t: number, y: Float64Array, dy: Float64Array): void => {
+    const rise = y[0]!;
+    const temperature = initial + rise;
+    const p = power(temperature);
+    const excess = initialExcess + rise;
+    const convective = hA * excess;
+    const radiative = sigmaA * excess * (temperature + ambient) * (temperature * temperature + ambient * ambient);
+    dy[0] = (p - convective - radiative) / heatCapacityAt(temperature);
+    dy[1] = p;
+    dy[2] = convective;
+    dy[3] = radiative;
+  };
+}
+
+/** The steps of a run that stopped at the target, merged with 64 dense samples (for plotting). */
+function mergedCurve(curve: OdeResult, end: number, initial: number): { times: number[]; temperatures: number[] } {
+  const merged: { t: number; v: number }[] = curve.times.map((t, k) => ({ t, v: initial + curve.states[k]![0]! }));
+  for (let k = 1; k < 64; k++) {
+    const t = (end * k) / 64;
+    merged.push({ t, v: initial + curve.sample!(t)[0]! });
+  }
+  merged.sort((a, b) => a.t - b.t);
+  return { times: merged.map((p) => p.t), temperatures: merged.map((p) => p.v) };
+}
+
+/** Energy balance at the end of the run; stored energy m ∫c(T) dT, exact for the material's specific-heat model. */
+function lumpedEnergy(read: LumpedHeatUpInput, finalState: Float64Array): LumpedEnergyBalance {
+  const { mass, material, constantSpecificHeat, initial } = read;
+  const finalRise = finalState[0]!;
+  const stored =
+    constantSpecificHeat !== null
+      ? mass * constantSpecificHeat * finalRise
+      : mass * specificEnthalpyChange(material!, { fromTemperature: initial, toTemperature: initial + finalRise });
+  const input = finalState[1]!;
+  const convective = finalState[2]!;
+  const radiative = finalState[3]!;
+  return { input, stored, convection: convective, radiation: radiative, imbalance: input - stored - convective - radiative };
+}

@@ -8,11 +8,11 @@
 import { InputError } from "../core/index.js";
 import type { Caution, ValidityNote } from "../core/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { STEFAN_BOLTZMANN } from "../units/index.js";
-import { solveTridiagonal } from "../special/internal.js";
-import { generationShares, radialGrid } from "./radial-grid.js";
 import { readRadialHeatUpOptions, WHERE } from "./radial-heat-up-input.js";
+import type { RadialHeatUpInput } from "./radial-heat-up-input.js";
+import { RadialHistory } from "./radial-heat-up-history.js";
 import { radialRunNotes } from "./radial-heat-up-notes.js";
+import { RadialConduction } from "./radial-heat-up-step.js";
 
 /**
  * Options of {@link radialHeatUp}.
@@ -273,137 +273,23 @@ export interface RadialHeatUpResult {
  * @category Thermal
  */
 export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
-  const { cylinder, size, inner, material, density, cAt, kAt, variable, generationAt, flux, skinDepth, convection, emissivity, ambient, initial, duration, target, stopAt, soakBand, hardening, cells, tolerance, maxStep } = readRadialHeatUpOptions(options);
-
-  // Grid: nodes x_0 = inner (core or bore) … x_N = size (surface), geometric refinement toward the surface.
-  const n = cells;
-  const { span, x, faces, volume, faceArea, totalVolume } = radialGrid(inner, size, n, skinDepth, cylinder);
-  // Fixed heating: the share of the generated power in each CV (exact integral of the exponential profile).
-  const source = new Float64Array(n + 1);
-  if (generationAt === undefined) {
-    const share = generationShares(faces, n, size, skinDepth, cylinder);
-    for (let i = 0; i <= n; i++) source[i] = flux * share[i]!;
-  }
-
-  const sigmaEps = emissivity * STEFAN_BOLTZMANN;
-  const ambient4 = ambient ** 4;
-
-  // Work arrays.
-  // Temperatures are stored as offsets from the initial temperature, so rounding scales with the
-  // temperature change rather than with the absolute temperature.
+  const input = readRadialHeatUpOptions(options);
+  const { initial, duration, target, stopAt, tolerance, maxStep, cells: n } = input;
+  const conduction = new RadialConduction(input);
+  const { x, full } = conduction;
+  const history = new RadialHistory(input, x, conduction.span);
   const T = new Float64Array(n + 1);
-  const capacity = new Float64Array(n + 1);
-  const conductance = new Float64Array(n);
-  const full = new Float64Array(n + 1);
-  const half = new Float64Array(n + 1);
-  const mid = new Float64Array(n + 1);
-  const lower = new Float64Array(n + 1);
-  const diag = new Float64Array(n + 1);
-  const upper = new Float64Array(n + 1);
-  const rhs = new Float64Array(n + 1);
-  const work = new Float64Array(n + 1);
-  const peak = new Float64Array(n + 1).fill(initial);
-  const absolute = new Float64Array(n + 1);
-  const generated = new Float64Array(n + 1);
-  const request: RadialGenerationRequest = { time: 0, temperatures: absolute, faces, generation: generated };
-  const startSource = new Float64Array(n + 1);
-  let startSourceValid = false;
+  const stopValue = (temps: Float64Array): number => (stopAt === "surface" ? temps[n]! : stopAt === "core" ? temps[0]! : conduction.meanOf(temps));
 
-  // Fills `source` from the callback at offsets `temps` and time `at` (a no-op for fixed heating).
-  const evaluateSource = (temps: Float64Array, at: number, into: Float64Array): void => {
-    if (generationAt === undefined) return;
-    for (let i = 0; i <= n; i++) {
-      absolute[i] = initial + temps[i]!;
-      generated[i] = 0;
-    }
-    (request as { time: number }).time = at;
-    generationAt(request);
-    for (let i = 0; i <= n; i++) {
-      const g = generated[i]!;
-      if (typeof g !== "number" || !Number.isFinite(g)) {
-        throw new InputError(WHERE, `generationAt(…).generation[${i}]`, g, "W/m²", "a finite number");
-      }
-      into[i] = g;
-    }
-  };
-
-  const setProperties = (temps: Float64Array): void => {
-    for (let i = 0; i <= n; i++) capacity[i] = density * cAt(initial + temps[i]!) * volume[i]!;
-    for (let i = 0; i < n; i++) {
-      conductance[i] = (kAt(initial + 0.5 * (temps[i]! + temps[i + 1]!)) * faceArea[i]!) / (x[i + 1]! - x[i]!);
-    }
-  };
-  // One implicit Euler step of size tau from `from` into `to` (offsets from `initial`), radiation
-  // linearised about the absolute temperature `star`: the surface loss per unit area is
-  // lossConstant + lossSlope·θ_N. Returns the surface loss over the step [J/m²].
-  const implicitStep = (from: Float64Array, to: Float64Array, tau: number, star: number, heating: boolean): number => {
-    const star3 = star * star * star;
-    const radiationSlope = 4 * sigmaEps * star3;
-    const lossSlope = convection + radiationSlope;
-    const lossConstant =
-      convection * (initial - ambient) + sigmaEps * (star3 * star - ambient4) + radiationSlope * (initial - star);
-    for (let i = 0; i <= n; i++) {
-      const gl = i > 0 ? conductance[i - 1]! : 0;
-      const gr = i < n ? conductance[i]! : 0;
-      lower[i] = -gl;
-      upper[i] = -gr;
-      diag[i] = capacity[i]! / tau + gl + gr;
-      rhs[i] = (capacity[i]! / tau) * from[i]! + (heating ? source[i]! : 0);
-    }
-    diag[n] = diag[n]! + lossSlope;
-    rhs[n] = rhs[n]! - lossConstant;
-    solveTridiagonal(lower, diag, upper, rhs, to, work, n + 1);
-    return tau * (lossConstant + lossSlope * to[n]!);
-  };
-  const meanOf = (temps: Float64Array): number => {
-    let s = 0;
-    for (let i = 0; i <= n; i++) s += volume[i]! * temps[i]!;
-    return s / totalVolume;
-  };
-  const stopValue = (temps: Float64Array): number =>
-    stopAt === "surface" ? temps[n]! : stopAt === "core" ? temps[0]! : meanOf(temps);
-  const hardeningDepthNow = (): number => {
-    if (hardening === null || peak[n]! < hardening) return 0;
-    let j = n;
-    while (j > 0 && peak[j - 1]! >= hardening) j--;
-    if (j === 0) return span;
-    const a = peak[j - 1]!;
-    const b = peak[j]!;
-    const r = x[j - 1]! + ((x[j]! - x[j - 1]!) * (hardening - a)) / (b - a);
-    return size - r;
-  };
-
-  const times: number[] = [0];
-  const surfaceTemperatures: number[] = [initial];
-  const coreTemperatures: number[] = [initial];
-  const meanTemperatures: number[] = [initial];
-  const hardeningDepths: number[] | null = hardening === null ? null : [hardeningDepthNow()];
   let time = 0;
   let tau = Math.min(maxStep, duration * 1e-6);
-  let input = 0;
-  let lost = 0;
-  let storedTotal = 0;
   let accepted = 0;
   let rejected = 0;
-  let timeToSurfaceTarget: number | null = target !== null && initial === target ? 0 : null;
-  let timeToCoreTarget: number | null = timeToSurfaceTarget;
-  let timeToMeanTarget: number | null = timeToSurfaceTarget;
-  let hottest = initial;
-  let heating = true;
-  let heatingTime: number | null = null;
-  let differenceAtStop: number | null = null;
-  let soakTime: number | null = null;
   let landingTries = 0;
   const rising = target !== null && target >= initial;
   const landing = Math.max(tolerance, 1e-9 * (target ?? 0));
-  if (stopAt !== null && target === initial) {
-    heating = false;
-    heatingTime = 0;
-    differenceAtStop = 0;
-    if (soakBand !== null) soakTime = 0;
-  }
 
-  while (time < duration && !(heatingTime !== null && (soakBand === null || soakTime !== null))) {
+  while (time < duration && !history.done) {
     if (accepted + rejected > 2000000) {
       throw new InputError(WHERE, "temperatureTolerance", tolerance, "K", "large enough for the run to finish in 2e6 steps");
     }
@@ -412,27 +298,8 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       tau = duration - time;
       last = true;
     }
-    // Source at the start of the step (kept across rejected retries).
-    if (heating && !startSourceValid) {
-      evaluateSource(T, time, startSource);
-      startSourceValid = true;
-    }
-    if (heating && generationAt !== undefined) source.set(startSource);
-    // Predictor: a full step with properties, radiation and source at the start of the step.
-    setProperties(T);
-    let star = initial + T[n]!;
-    if (variable || sigmaEps > 0 || (heating && generationAt !== undefined)) {
-      implicitStep(T, full, tau, star, heating);
-      for (let i = 0; i <= n; i++) mid[i] = 0.5 * (T[i]! + full[i]!);
-      if (variable) setProperties(mid);
-      if (heating) evaluateSource(mid, time + 0.5 * tau, source);
-      star = initial + mid[n]!;
-    }
-    const lossFull = implicitStep(T, full, tau, star, heating);
-    const lossHalf1 = implicitStep(T, mid, 0.5 * tau, star, heating);
-    const lossHalf2 = implicitStep(mid, half, 0.5 * tau, star, heating);
-    let err = 0;
-    for (let i = 0; i <= n; i++) err = Math.max(err, Math.abs(half[i]! - full[i]!));
+    const heating = history.heating;
+    const err = conduction.trialStep(T, time, tau, heating);
     if (!Number.isFinite(err)) {
       throw new InputError(WHERE, "options", options, "", "a problem with finite temperatures");
     }
@@ -441,8 +308,7 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       tau *= Math.max(0.1, 0.9 * Math.sqrt(tolerance / err));
       continue;
     }
-    // The Richardson-extrapolated state 2·half − full (second order, conservative), in `full`.
-    for (let i = 0; i <= n; i++) full[i] = 2 * half[i]! - full[i]!;
+    conduction.extrapolate();
     // Land on the stop target: shorten the step when it overshoots by more than the tolerance.
     let stopsNow = false;
     if (heating && stopAt !== null && target !== null) {
@@ -461,91 +327,46 @@ export function radialHeatUp(options: RadialHeatUpOptions): RadialHeatUpResult {
       }
     }
     landingTries = 0;
-    let stored = 0;
-    for (let i = 0; i <= n; i++) {
-      stored += capacity[i]! * (full[i]! - T[i]!);
-      T[i] = full[i]!;
-    }
-    const stepLoss = 2 * (lossHalf1 + lossHalf2) - lossFull;
-    if (heating) {
-      let totalSource = 0;
-      for (let i = 0; i <= n; i++) totalSource += source[i]!;
-      input += totalSource * tau;
-    }
-    lost += stepLoss;
-    storedTotal += stored;
-    startSourceValid = false;
-    const previousSurface = surfaceTemperatures[surfaceTemperatures.length - 1]!;
-    const previousCore = coreTemperatures[coreTemperatures.length - 1]!;
-    const previousMean = meanTemperatures[meanTemperatures.length - 1]!;
+    conduction.accept(T, tau, heating);
     const previousTime = time;
     time = last ? duration : time + tau;
     accepted++;
-    times.push(time);
-    const surfaceNow = initial + T[n]!;
-    const coreNow = initial + T[0]!;
-    const meanNow = initial + meanOf(T);
-    surfaceTemperatures.push(surfaceNow);
-    coreTemperatures.push(coreNow);
-    meanTemperatures.push(meanNow);
-    for (let i = 0; i <= n; i++) if (initial + T[i]! > peak[i]!) peak[i] = initial + T[i]!;
-    if (hardeningDepths !== null) hardeningDepths.push(hardeningDepthNow());
-    if (Math.abs(surfaceNow - ambient) > Math.abs(hottest - ambient)) hottest = surfaceNow;
-    if (target !== null) {
-      if (timeToSurfaceTarget === null) timeToSurfaceTarget = crossing(previousTime, time, previousSurface, surfaceNow, target, initial);
-      if (timeToCoreTarget === null) timeToCoreTarget = crossing(previousTime, time, previousCore, coreNow, target, initial);
-      if (timeToMeanTarget === null) timeToMeanTarget = crossing(previousTime, time, previousMean, meanNow, target, initial);
-    }
-    if (stopsNow) {
-      heating = false;
-      heatingTime = time;
-      differenceAtStop = surfaceNow - coreNow;
-      if (soakBand !== null && Math.abs(differenceAtStop) <= soakBand) soakTime = 0;
-    } else if (!heating && soakBand !== null && soakTime === null && heatingTime !== null) {
-      const now = surfaceNow - coreNow;
-      if (Math.abs(now) <= soakBand) {
-        const before = Math.abs(previousSurface - previousCore);
-        const at = before > soakBand ? previousTime + ((time - previousTime) * (before - soakBand)) / (before - Math.abs(now)) : time;
-        soakTime = at - heatingTime;
-      }
-    }
+    history.record(previousTime, time, T, conduction.meanOf(T), stopsNow);
     const factor = err > 0 ? Math.min(3, Math.max(0.2, 0.9 * Math.sqrt(tolerance / err))) : 3;
     tau = Math.min(maxStep, tau * factor);
   }
+  return radialResult(input, conduction, history, T, { accepted, rejected });
+}
 
+/** The result of a finished run: curves, final profile, target times, energy balance and notes. */
+function radialResult(input: RadialHeatUpInput, conduction: RadialConduction, history: RadialHistory, T: Float64Array, steps: { accepted: number; rejected: number }): RadialHeatUpResult {
+  const { kAt, ambient, convection, emissivity, size, skinDepth, material, initial } = input;
+  const { x, n, span } = conduction;
+  const { hottest, peak, surfaceTemperatures, coreTemperatures, hardeningDepths } = history;
   const { biotNumber, validity, cautions } = radialRunNotes({ kAt, hottest, ambient, convection, emissivity, span, size, x, n, skinDepth, material, initial, T, peak, surfaceTemperatures, coreTemperatures });
-
+  const { input: energyIn, stored, lost } = conduction;
   return {
-    times,
+    times: history.times,
     surfaceTemperatures,
     coreTemperatures,
-    meanTemperatures,
+    meanTemperatures: history.meanTemperatures,
     positions: x,
     finalTemperatures: Float64Array.from(T, (v) => initial + v),
     finalSurfaceTemperature: initial + T[n]!,
     finalCoreTemperature: initial + T[0]!,
-    finalMeanTemperature: initial + meanOf(T),
-    timeToSurfaceTarget,
-    timeToCoreTarget,
-    timeToMeanTarget,
-    heatingTime,
-    surfaceCoreDifferenceAtStop: differenceAtStop,
-    soakTime,
+    finalMeanTemperature: initial + conduction.meanOf(T),
+    timeToSurfaceTarget: history.timeToSurfaceTarget,
+    timeToCoreTarget: history.timeToCoreTarget,
+    timeToMeanTarget: history.timeToMeanTarget,
+    heatingTime: history.heatingTime,
+    surfaceCoreDifferenceAtStop: history.differenceAtStop,
+    soakTime: history.soakTime,
     hardeningDepth: hardeningDepths === null ? null : hardeningDepths[hardeningDepths.length - 1]!,
     hardeningDepths,
-    energy: { input, stored: storedTotal, lost, imbalance: input - storedTotal - lost },
+    energy: { input: energyIn, stored, lost, imbalance: energyIn - stored - lost },
     biotNumber,
     cautions,
-    steps: { accepted, rejected },
+    steps,
     validity,
   };
-}
-
-/** Linear-interpolated time at which a curve moving away from `start` first reaches `target`. */
-function crossing(t0: number, t1: number, v0: number, v1: number, target: number, start: number): number | null {
-  const rising = target > start;
-  if (rising ? v1 >= target && v0 < target : v1 <= target && v0 > target) {
-    return t0 + ((t1 - t0) * (target - v0)) / (v1 - v0);
-  }
-  return null;
 }

@@ -15,7 +15,7 @@ import {
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import type { EncirclingCoil } from "./encircling-coil.js";
-import { readEncirclingGeometry, tubeSurfaceRatio } from "./encircling-coil.js";
+import { readEncirclingGeometry, tubeSurfaceRatioInto } from "./encircling-coil.js";
 import { gaussLegendreRule } from "../special/internal.js";
 import { besselK1MomentTailScaled } from "./kernels.js";
 
@@ -182,6 +182,7 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
     }
   }
   const windingDensity = turns / ((r2 - r1) * len);
+  const ratio = new Float64Array(2);
 
   return (frequency: number, resistivity: number, relativePermeability: number): EncirclingCoilChange => {
     const mur = relativePermeability;
@@ -245,7 +246,9 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
         rRe = (bRe * wRe + bIm * wIm) / (ww * mur);
         rIm = (bIm * wRe - bRe * wIm) / (ww * mur);
       } else {
-        [rRe, rIm] = tubeSurfaceRatio(bRe, bIm, a, a1, mur, bore[j]!);
+        tubeSurfaceRatioInto(bRe, bIm, a, a1, mur, bore[j]!, ratio);
+        rRe = ratio[0]!;
+        rIm = ratio[1]!;
       }
       const nRe = al * i0[j]! - rRe * i1[j]!;
       const nIm = -rIm * i1[j]!;

@@ -10,7 +10,6 @@ import {
   besselI0ComplexScaled,
   besselI0Scaled,
   besselI1ComplexScaled,
-  besselI1OverI0Complex,
   besselI1Scaled,
   besselK0ComplexScaled,
   besselK0Scaled,
@@ -18,7 +17,7 @@ import {
   besselK1Scaled,
 } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
-import { gaussLegendreRule } from "../special/internal.js";
+import { IK_I0I, IK_I0R, IK_I1I, IK_I1R, IK_K0I, IK_K0R, IK_K1I, IK_K1R, besselI1OverI0ComplexInto, besselIKScaledInto, gaussLegendreRule } from "../special/internal.js";
 import { besselK1MomentTailScaled } from "./kernels.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
 
@@ -282,26 +281,51 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
   const rr = Math.hypot(b2, kk);
   const bRe = Math.sqrt(0.5 * (rr + b2));
   const bIm = kk / (2 * bRe);
+  const ik = ikScratch;
   let rRe: number;
   let rIm: number;
   // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²)
   if (a1 < 1e-9 * a) {
-    const w = besselI1OverI0Complex({ re: bRe * a, im: bIm * a });
+    besselI1OverI0ComplexInto(bRe * a, bIm * a, ik);
+    const wRe = ik[0]!;
+    const wIm = ik[1]!;
     // β / (μr w)
-    const ww = w.re * w.re + w.im * w.im;
-    rRe = (bRe * w.re + bIm * w.im) / (ww * mur);
-    rIm = (bIm * w.re - bRe * w.im) / (ww * mur);
+    const ww = wRe * wRe + wIm * wIm;
+    rRe = (bRe * wRe + bIm * wIm) / (ww * mur);
+    rIm = (bIm * wRe - bRe * wIm) / (ww * mur);
   } else {
     // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
     const x1 = alpha * a1;
-    const rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
-    [rRe, rIm] = tubeSurfaceRatio(bRe, bIm, a, a1, mur, rAir);
+    let rAir: number;
+    if (x1 > 0) {
+      // one evaluation for both (the same numbers as besselI0Scaled, besselI1Scaled)
+      besselIKScaledInto(x1, 0, false, ik);
+      rAir = (alpha * ik[IK_I0R]!) / ik[IK_I1R]!;
+    } else {
+      rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
+    }
+    tubeSurfaceRatioInto(bRe, bIm, a, a1, mur, rAir, ik);
+    rRe = ik[0]!;
+    rIm = ik[1]!;
   }
   const x = alpha * a;
-  const i0 = besselI0Scaled(x);
-  const i1 = besselI1Scaled(x);
-  const k0 = besselK0Scaled(x);
-  const k1 = besselK1Scaled(x);
+  let i0: number;
+  let i1: number;
+  let k0: number;
+  let k1: number;
+  if (x > 0) {
+    // one evaluation for all four (the same numbers as the four scaled real functions)
+    besselIKScaledInto(x, 0, true, ik);
+    i0 = ik[IK_I0R]!;
+    i1 = ik[IK_I1R]!;
+    k0 = ik[IK_K0R]!;
+    k1 = ik[IK_K1R]!;
+  } else {
+    i0 = besselI0Scaled(x);
+    i1 = besselI1Scaled(x);
+    k0 = besselK0Scaled(x);
+    k1 = besselK1Scaled(x);
+  }
   // C̃ = (α I0 − R I1)/(α K0 + R K1) (scaled; true C = e^{2x} C̃)
   const nRe = alpha * i0 - rRe * i1;
   const nIm = -rIm * i1;
@@ -312,21 +336,34 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
   out[1] = (nIm * dRe - nRe * dIm) / dd;
 }
 
+/** Bessel values of the reflection kernels, reused call after call (the kernels allocate nothing). */
+const ikScratch = new Float64Array(8);
+const ratioScratch = new Float64Array(2);
+
 /**
  * Tube wall: (1/μr)(1/r) d(rA)/dr / A at the outer surface, the bore matched to the air solution
  * (num = β I0/μr − rAir I1, den = β K0/μr + rAir K1 at the bore; R = β (I0 − s K0) / (μr (I1 + s K1)) at
  * the surface, with the scale factor e^{Re z1 + z1 − z2 − Re z2}, z = β r): [Re R, Im R].
  */
 export function tubeSurfaceRatio(bRe: number, bIm: number, a: number, a1: number, mur: number, rAir: number): [number, number] {
-  const z1 = { re: bRe * a1, im: bIm * a1 };
-  const i0 = besselI0ComplexScaled(z1);
-  const i1 = besselI1ComplexScaled(z1);
-  const k0 = besselK0ComplexScaled(z1);
-  const k1 = besselK1ComplexScaled(z1);
-  const nRe = (bRe * i0.re - bIm * i0.im) / mur - rAir * i1.re;
-  const nIm = (bRe * i0.im + bIm * i0.re) / mur - rAir * i1.im;
-  const dRe = (bRe * k0.re - bIm * k0.im) / mur + rAir * k1.re;
-  const dIm = (bRe * k0.im + bIm * k0.re) / mur + rAir * k1.im;
+  tubeSurfaceRatioInto(bRe, bIm, a, a1, mur, rAir, ratioScratch);
+  return [ratioScratch[0]!, ratioScratch[1]!];
+}
+
+/**
+ * {@link tubeSurfaceRatio} without allocation: writes Re R, Im R into out[0], out[1] (out may
+ * be the 8-element Bessel scratch of the caller: it is written last). Bessel functions at
+ * z1 = β a1 and z2 = β a, one evaluation of I₀, I₁, K₀, K₁ each (the same numbers as the four
+ * complex functions, which evaluate the same engine four times); z with Re z ≤ 0 (not reached
+ * for kk > 0, where Re β > 0) goes through the public functions and their edge cases.
+ */
+export function tubeSurfaceRatioInto(bRe: number, bIm: number, a: number, a1: number, mur: number, rAir: number, out: Float64Array): void {
+  const f = tubeScratch;
+  besselIKAt(bRe * a1, bIm * a1, f);
+  const nRe = (bRe * f[IK_I0R]! - bIm * f[IK_I0I]!) / mur - rAir * f[IK_I1R]!;
+  const nIm = (bRe * f[IK_I0I]! + bIm * f[IK_I0R]!) / mur - rAir * f[IK_I1I]!;
+  const dRe = (bRe * f[IK_K0R]! - bIm * f[IK_K0I]!) / mur + rAir * f[IK_K1R]!;
+  const dIm = (bRe * f[IK_K0I]! + bIm * f[IK_K0R]!) / mur + rAir * f[IK_K1I]!;
   const dd = dRe * dRe + dIm * dIm;
   let sRe = (nRe * dRe + nIm * dIm) / dd;
   let sIm = (nIm * dRe - nRe * dIm) / dd;
@@ -337,17 +374,41 @@ export function tubeSurfaceRatio(bRe: number, bIm: number, a: number, a1: number
   const tRe = sRe * eRe - sIm * eIm;
   sIm = sRe * eIm + sIm * eRe;
   sRe = tRe;
-  const z2 = { re: bRe * a, im: bIm * a };
-  const j0 = besselI0ComplexScaled(z2);
-  const j1 = besselI1ComplexScaled(z2);
-  const m0 = besselK0ComplexScaled(z2);
-  const m1 = besselK1ComplexScaled(z2);
-  const uRe = j0.re - (sRe * m0.re - sIm * m0.im);
-  const uIm = j0.im - (sRe * m0.im + sIm * m0.re);
-  const vRe = mur * (j1.re + (sRe * m1.re - sIm * m1.im));
-  const vIm = mur * (j1.im + (sRe * m1.im + sIm * m1.re));
+  besselIKAt(bRe * a, bIm * a, f);
+  const uRe = f[IK_I0R]! - (sRe * f[IK_K0R]! - sIm * f[IK_K0I]!);
+  const uIm = f[IK_I0I]! - (sRe * f[IK_K0I]! + sIm * f[IK_K0R]!);
+  const vRe = mur * (f[IK_I1R]! + (sRe * f[IK_K1R]! - sIm * f[IK_K1I]!));
+  const vIm = mur * (f[IK_I1I]! + (sRe * f[IK_K1I]! + sIm * f[IK_K1R]!));
   const pRe = bRe * uRe - bIm * uIm;
   const pIm = bRe * uIm + bIm * uRe;
   const vv = vRe * vRe + vIm * vIm;
-  return [(pRe * vRe + pIm * vIm) / vv, (pIm * vRe - pRe * vIm) / vv];
+  out[0] = (pRe * vRe + pIm * vIm) / vv;
+  out[1] = (pIm * vRe - pRe * vIm) / vv;
+}
+
+const tubeScratch = new Float64Array(8);
+
+/**
+ * Scaled I₀, I₁, K₀, K₁ at z = zr + i·zi into out (indices `IK_*`): exactly what
+ * besselI0ComplexScaled … besselK1ComplexScaled return, from one evaluation where Re z ≥ 0 and
+ * z ≠ 0, from those functions elsewhere.
+ */
+function besselIKAt(zr: number, zi: number, out: Float64Array): void {
+  if (zr >= 0 && !(zr === 0 && zi === 0)) {
+    besselIKScaledInto(zr, zi, true, out);
+    return;
+  }
+  const z = { re: zr, im: zi };
+  const i0 = besselI0ComplexScaled(z);
+  const i1 = besselI1ComplexScaled(z);
+  const k0 = besselK0ComplexScaled(z);
+  const k1 = besselK1ComplexScaled(z);
+  out[IK_I0R] = i0.re;
+  out[IK_I0I] = i0.im;
+  out[IK_I1R] = i1.re;
+  out[IK_I1I] = i1.im;
+  out[IK_K0R] = k0.re;
+  out[IK_K0I] = k0.im;
+  out[IK_K1R] = k1.re;
+  out[IK_K1I] = k1.im;
 }

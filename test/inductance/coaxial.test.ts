@@ -6,7 +6,7 @@ import {
   loopMutualInductance,
   multilayerCoilInductance,
   solenoidInductance,
-  type CoaxialCoil,
+  type CoilGeometry,
 } from "../../src/inductance/index.js";
 import mutual from "../fixtures/inductance/loop-mutual.json" with { type: "json" };
 import multilayer from "../fixtures/inductance/multilayer.json" with { type: "json" };
@@ -28,13 +28,13 @@ describe("coaxialCoilMutualInductance", () => {
     // fixture from mpmath: Maxwell's formula averaged over both windings by nested mpmath.quad (generate.py)
     expect(coaxial.meta.rtol).toBe(1e-9);
     for (const c of coaxial.cases) {
-      const m = coaxialCoilMutualInductance(c.coilA as CoaxialCoil, c.coilB as CoaxialCoil, c.axialDistance);
+      const m = coaxialCoilMutualInductance(c.coilA as CoilGeometry, c.coilB as CoilGeometry, c.axialDistance);
       expect(rel(m, c.mutual)).toBeLessThanOrEqual(1e-9);
     }
   });
 
   it("of a current sheet with itself is its self-inductance (Nagaoka, 1e-12)", () => {
-    const coil: CoaxialCoil = { kind: "solenoid", radius: 0.03, length: 0.05, turns: 12 };
+    const coil: CoilGeometry = { kind: "solenoid", radius: 0.03, length: 0.05, turns: 12 };
     expect(rel(coaxialCoilMutualInductance(coil, coil, 0), solenoidInductance({ radius: 0.03, length: 0.05, turns: 12 }))).toBeLessThan(1e-12);
   });
 
@@ -42,7 +42,7 @@ describe("coaxialCoilMutualInductance", () => {
     // fixture from scipy/mpmath Bessel–Struve integral, generate.py
     const c = multilayer.cases[0]!;
     const geometry = { innerRadius: c.innerRadius, outerRadius: c.outerRadius, length: c.length, turns: c.turns };
-    const coil: CoaxialCoil = { kind: "multilayer", ...geometry };
+    const coil: CoilGeometry = { kind: "multilayer", ...geometry };
     expect(rel(coaxialCoilMutualInductance(coil, coil, 0), c.inductance)).toBeLessThan(1e-8);
     expect(multilayerCoilInductance(geometry)).toBe(coaxialCoilMutualInductance(coil, coil, 0));
   });
@@ -67,13 +67,13 @@ describe("coaxialCoilMutualInductance", () => {
   });
 
   it("is symmetric in its two coils", () => {
-    const a: CoaxialCoil = { kind: "solenoid", radius: 0.02, length: 0.03, turns: 10 };
-    const b: CoaxialCoil = { kind: "spiral", innerRadius: 0.01, outerRadius: 0.04, turns: 8 };
+    const a: CoilGeometry = { kind: "solenoid", radius: 0.02, length: 0.03, turns: 10 };
+    const b: CoilGeometry = { kind: "flatSpiral", innerTurnRadius: 0.01, outerTurnRadius: 0.04, turns: 8 };
     expect(rel(coaxialCoilMutualInductance(a, b, 0.02), coaxialCoilMutualInductance(b, a, 0.02))).toBeLessThan(1e-9);
   });
 
   it("throws InputError for malformed coils, negative distance and coinciding filaments", () => {
-    const loop: CoaxialCoil = { kind: "loop", radius: 0.02 };
+    const loop: CoilGeometry = { kind: "loop", radius: 0.02 };
     expect(() => coaxialCoilMutualInductance(loop, loop, 0)).toThrow(InputError);
     expect(() => coaxialCoilMutualInductance(loop, loop, -0.01)).toThrow(InputError);
     expect(() => coaxialCoilMutualInductance({ kind: "coil" } as never, loop, 0.01)).toThrow(InputError);

@@ -114,6 +114,7 @@ const DESCRIPTION_NULLS: Readonly<Record<string, string>> = {
   "capacitor.currentRatingRms": "null when not given (optional rating, documented)",
   concentrator: "null when the coil has no flux concentrator (documented)",
   "inverter.frequency": "null for a power-tracking series inverter (documented)",
+  "coil.leads": "null when the leads have no cross-section (resistance only, documented)",
 };
 const STUDY_ALLOW: readonly Allowance[] = [
   {
@@ -351,9 +352,14 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
       { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 },
       0.015,
     ],
-    variants: [() => [{ kind: "loop", radius: 0.03, turns: 2 }, { kind: "multilayer", innerRadius: 0.02, outerRadius: 0.03, length: 0.02, turns: 50 }, 0.02]],
+    variants: [
+      () => [{ kind: "loop", radius: 0.03, turns: 2 }, { kind: "multilayer", innerRadius: 0.02, outerRadius: 0.03, length: 0.02, turns: 50 }, 0.02],
+      () => [{ kind: "flatSpiral", innerTurnRadius: 0.01, outerTurnRadius: 0.04, turns: 12, position: 0.002 }, { kind: "flatSpiral", innerEdgeRadius: 0.005, outerEdgeRadius: 0.05, turns: 6, position: -0.01 }, 0.015],
+    ],
     allow: [
       { paths: ["2"], kinds: ["zero"], reason: "coplanar coils (axial distance 0) are in the domain" },
+      { paths: ["0.position", "1.position"], kinds: ["zero", "negative", "undefined"], reason: "a coil's axial position is signed and optional (default 0, documented)" },
+      { paths: ["1.innerEdgeRadius"], kinds: ["zero"], reason: "a spiral's inner edge is ≥ 0 (documented)" },
       { paths: ["0.turns"], kinds: ["undefined"], reason: OPTIONAL + " (a loop of one turn)" },
     ],
   },
@@ -436,6 +442,10 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   roundWireAcRatioSweep: { args: () => [{ diameter: 2e-3, frequencies: [1e3, 20e3, 1e6], resistivity: 1.7241e-8 }] },
   skinDepth: { args: () => [{ resistivity: 1.7241e-8, frequency: 20e3 }] },
   tubeAcResistance: { args: () => [{ outerDiameter: 6e-3, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }] },
+  leadImpedance: {
+    args: () => [{ lead: { shape: "round-pair", diameter: 6e-3, wallThickness: 1e-3, spacing: 12e-3 }, length: 0.4, frequency: 50e3, resistivity: 1.7241e-8 }],
+    allow: [{ paths: ["0.lead.wallThickness"], kinds: ["undefined"], reason: OPTIONAL + " (a solid conductor)" }],
+  },
   roundWireWindingValidity: {
     args: () => [{ wireDiameter: 1e-3, frequency: 100e3, resistivity: 1.7241e-8, layers: 4, turnsPerLayer: 8, windowBreadth: 10e-3 }],
   },
@@ -1045,13 +1055,16 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
     variants: [
       () => [{ kind: "spiral", innerRadius: 0.01, outerRadius: 0.04, turns: 12, position: 0.005 }, 20, { radialDistance: 0.1, axialPosition: 0.02 }],
       () => [[{ radius: 0.05, position: 0.01, turns: 2 }], 20, { radialDistance: 0.1, axialPosition: 0.02 }],
+      () => [{ kind: "flatSpiral", innerEdgeRadius: 0.01, outerEdgeRadius: 0.04, turns: 12, position: 0.005 }, 20, { radialDistance: 0.1, axialPosition: 0.02 }],
+      () => [{ kind: "flatSpiral", innerTurnRadius: 0.01, outerTurnRadius: 0.04, turns: 12 }, 20, { radialDistance: 0.1, axialPosition: 0.02 }],
+      () => [{ kind: "loop", radius: 0.05, turns: 3, position: -0.01 }, 20, { radialDistance: 0.1, axialPosition: 0.02 }],
     ],
     allow: [
       { paths: ["1", "2.axialPosition"], kinds: ["zero", "negative"], reason: SIGNED + " (current sense, axial position)" },
       { paths: ["2.radialDistance"], kinds: ["zero"], reason: "on the axis is in the domain (radial distance ≥ 0)" },
       { paths: ["0.position", "0.0.position"], kinds: ["zero", "negative", "undefined"], reason: "axial position of a coil or loop is signed and optional (default 0, documented)" },
-      { paths: ["0.innerRadius"], kinds: ["zero"], reason: "a spiral's inner edge is ≥ 0 (documented)" },
-      { paths: ["0.0.turns"], kinds: ["undefined"], reason: OPTIONAL + " (1 turn)" },
+      { paths: ["0.innerRadius", "0.innerEdgeRadius"], kinds: ["zero"], reason: "a spiral's inner edge is ≥ 0 (documented)" },
+      { paths: ["0.0.turns", "0.turns"], kinds: ["undefined"], reason: OPTIONAL + " (1 turn)" },
     ],
   },
   icnirpReferenceLevel: { args: () => [25000, "general-public"] },

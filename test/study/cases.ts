@@ -12,7 +12,7 @@ import type { HeaterDescription } from "../../src/index.js";
 export type StudyFileObject = HeaterDescription & Record<string, unknown>;
 
 /** Loads a demo study file from docs/examples. */
-export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json"): StudyFileObject {
+export function loadExample(name: "study-bearing-race.json" | "study-plate-warmer.json" | "study-forging-bar.json" | "study-bearing-race-leads.json"): StudyFileObject {
   return JSON.parse(readFileSync(new URL(`../../docs/examples/${name}`, import.meta.url), "utf8")) as StudyFileObject;
 }
 
