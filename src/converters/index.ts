@@ -12,3 +12,7 @@ export type { LlcGainOptions, SeriesResonantGainOptions, ParallelResonantGainOpt
 export * from "./llc-operating-point.js";
 export * from "./llc-design.js";
 export * from "./lcc-operating-point.js";
+export { parallelResonantOperatingPointCapacitiveFilter, lccOperatingPointCapacitiveFilter } from "./lcc-capacitive-filter.js";
+export type { CapacitiveFilterOperatingPoint, CapacitiveFilterFirstHarmonic } from "./lcc-capacitive-filter.js";
+export { lccFrequencySweep } from "./lcc-frequency-sweep.js";
+export type { LccFrequencySweepOptions, LccFrequencySweep, LccSweepPoint, LccSweepPointSolved, LccSweepPointUnsolved } from "./lcc-frequency-sweep.js";

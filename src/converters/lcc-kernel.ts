@@ -271,11 +271,13 @@ export const LCC_TOLERANCE = 1e-10;
 
 /**
  * Solves the steady state for a = C_p/C_s ≥ 0, ζ = Z_p/(n²R) > 0 and half period Θ > 0
- * (normalised). Returns null when no consistent periodic solution was found.
+ * (normalised), from `start` when given (continuation from a neighbouring solution), else from
+ * the first harmonic. Returns null when no consistent periodic solution was found.
  */
-export function lccSteadyState(a: number, zeta: number, theta: number): LccSteadyState | null {
+export function lccSteadyState(a: number, zeta: number, theta: number, start?: { j0: number; u0: number; v0: number; gain: number }): LccSteadyState | null {
   lccFirstHarmonic(a, zeta, theta, fhaScratch);
-  let res = tryFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta);
+  let res = start === undefined ? Infinity : tryFrom(start.j0, start.u0, start.v0, start.gain, a, zeta, theta);
+  if (!(res < LCC_TOLERANCE)) res = tryFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta);
   if (!(res < LCC_TOLERANCE)) {
     // relax: forward half periods with the gain updated from the rectified mean, then Newton
     let j = fhaScratch[0] ?? 0;

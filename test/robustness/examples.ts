@@ -607,6 +607,17 @@ export const EXAMPLES: Readonly<Record<string, Example>> = {
   lccOperatingPoint: {
     args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: 25e-9, parallelCapacitance: 25e-9, switchingFrequency: 150e3, loadResistance: 12 }],
   },
+  parallelResonantOperatingPointCapacitiveFilter: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, parallelCapacitance: 25e-9, switchingFrequency: 110e3, loadResistance: 12 }],
+  },
+  lccOperatingPointCapacitiveFilter: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: 25e-9, parallelCapacitance: 25e-9, switchingFrequency: 150e3, loadResistance: 12 }],
+  },
+  lccFrequencySweep: {
+    args: () => [{ bridge: "half", inputVoltage: 400, turnsRatio: 4, resonantInductance: 100e-6, seriesCapacitance: 25e-9, parallelCapacitance: 25e-9, loadResistance: 12, frequencies: [120e3, 150e3, 200e3], outputFilter: "capacitive" }],
+    variants: [() => [{ bridge: "full", inputVoltage: 48, turnsRatio: 0.5, resonantInductance: 8e-6, seriesCapacitance: 200e-9, parallelCapacitance: 100e-9, loadResistance: 2, frequencies: new Float64Array([130e3, 140e3]) }]],
+    allow: [{ paths: ["0.outputFilter"], kinds: ["undefined"], reason: "optional: the inductive output filter by default" }],
+  },
   inductiveLink: {
     args: () => [{ primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, compensation: "series-series", loadResistance: 5, sourceVoltage: 10 }],
     variants: [
