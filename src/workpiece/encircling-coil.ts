@@ -278,6 +278,20 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
  * Internal kernel shared by {@link encirclingCoilOverRod} and the work-coil impedance model.
  */
 export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: number, mur: number, out: Float64Array): void {
+  const x = alpha * a;
+  // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²)
+  const rAir = a1 < 1e-9 * a ? 0 : (alpha * besselI0Scaled(alpha * a1)) / besselI1Scaled(alpha * a1);
+  rodReflectionScaledFrom(alpha, a, a1, kk, mur, besselI0Scaled(x), besselI1Scaled(x), besselK0Scaled(x), besselK1Scaled(x), rAir, out);
+}
+
+/**
+ * {@link rodReflectionScaled} with the material-independent factors given: the exponentially
+ * scaled $I_0, I_1, K_0, K_1$ at $\alpha a$ (`besselI0Scaled` … of `src/special`) and, for a
+ * tube, the air bore's ratio $\alpha I_0(\alpha a_1)/I_1(\alpha a_1)$ (ignored for a bar, a1 <
+ * 1e-9·a). A caller that evaluates many materials on the same α nodes and geometry (the
+ * work-coil model's part kernel) computes them once; the result is bit-identical.
+ */
+export function rodReflectionScaledFrom(alpha: number, a: number, a1: number, kk: number, mur: number, i0: number, i1: number, k0: number, k1: number, rAir: number, out: Float64Array): void {
   const b2 = alpha * alpha;
   const rr = Math.hypot(b2, kk);
   const bRe = Math.sqrt(0.5 * (rr + b2));
@@ -292,16 +306,9 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
     rRe = (bRe * w.re + bIm * w.im) / (ww * mur);
     rIm = (bIm * w.re - bRe * w.im) / (ww * mur);
   } else {
-    // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
-    const x1 = alpha * a1;
-    const rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
+    // tube: air bore ratio α I0(α a1)/I1(α a1) (given), wall I1/K1 combination
     [rRe, rIm] = tubeSurfaceRatio(bRe, bIm, a, a1, mur, rAir);
   }
-  const x = alpha * a;
-  const i0 = besselI0Scaled(x);
-  const i1 = besselI1Scaled(x);
-  const k0 = besselK0Scaled(x);
-  const k1 = besselK1Scaled(x);
   // C̃ = (α I0 − R I1)/(α K0 + R K1) (scaled; true C = e^{2x} C̃)
   const nRe = alpha * i0 - rRe * i1;
   const nIm = -rIm * i1;
