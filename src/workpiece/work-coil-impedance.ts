@@ -6,7 +6,7 @@
  *
  * @packageDocumentation
  */
-import { SHORT_PART_FACTOR_ERROR, nonMagneticWeight, prepareShortPartFactor } from "./work-coil-short-part.js";
+import { SHORT_PART_FACTOR_ERROR, nonMagneticWeight, prepareShortPartFactor, shortPartSection, shortPartTier } from "./work-coil-short-part.js";
 import { InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { litzAcRatio, litzGeometry } from "../conductors/index.js";
@@ -818,9 +818,19 @@ function prepared(geo: CoilGeometry, design: number, refinement: number): Prepar
           const copper = empty.copper + copperFactor * (loaded.copper - empty.copper);
           const turnCopper = loaded.turnCopper.map((c, i) => (empty.turnCopper[i] ?? 0) + copperFactor * (c - (empty.turnCopper[i] ?? 0)));
           loaded = { ...loaded, re: copper + gr * zr - gi * zi, im: empty.im + gr * zi + gi * zr, copper, turnCopper };
+          const section = shortPartSection(part.radius, part.innerRadius, part.length);
+          const delta = skinDepthOf(part.resistivity, f, part.relativePermeability);
+          const tier = shortPartTier(section, delta, part.relativePermeability);
+          const bound = SHORT_PART_FACTOR_ERROR[tier];
+          const where = `its thinnest section (radial section or half its length, ${(section / delta).toPrecision(3)} δ and ${(section / (part.relativePermeability * delta)).toPrecision(2)} μr·δ)`;
           validity.push({
             code: "short-magnetic-part",
-            message: `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). Against the library's axisymmetric field solver (bars and rings 0.35–0.9 × the coil length, μr 3–300) the reflected resistance is within ${SHORT_PART_FACTOR_ERROR.thick * 100} % where the thinnest radial section w is at least 100 δ and 0.09 μr·δ, ${SHORT_PART_FACTOR_ERROR.general * 100} % where w ≥ 5 δ and ≥ 0.09 μr·δ, ${SHORT_PART_FACTOR_ERROR.thin * 100} % for thinner sections; below 0.09 μr·δ flux crosses the section, beyond the model.`,
+            message:
+              `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). ` +
+              (tier === "outside"
+                ? `Here ${where} is below 0.09 μr·δ: the flux crosses the section, beyond the model (the library's axisymmetric field solver found the reflected resistance up to ${bound.resistance} × off there); use solveAxisymmetricField.`
+                : `Against the library's axisymmetric field solver (solenoids of length/diameter 0.3–4, parts 0.3–0.9 × the coil's length, μr 20–600) the reflected resistance is within ${bound.resistance * 100} % and ΔL within ${bound.inductance * 100} % of the empty coil's inductance for ${where}` +
+                  (part.length > coilExtent(geo).zMax - coilExtent(geo).zMin ? "; this part is longer than the coil, outside the measured range." : ".")),
             value: part.length,
           });
         }
