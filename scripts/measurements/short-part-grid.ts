@@ -249,4 +249,4 @@ for (const [aspect, turns, s, ratio, offset, mur, depths] of jobs) {
   console.log(`${key} ${row.tier} f=${row.frequency.toPrecision(4)} ρ=${row.resistivity.toExponential(2)} wci ${e(row.coilImpedance, row.field.reflectedResistance)} study ${e(row.study, row.field.partLoss)} cpu ${(process.cpuUsage(started).user / 1e6).toFixed(0)} s`);
 }
 save();
-console.log(JSON.stringify(JSON.parse(readFileSync(output, "utf8")).summary, null, 1));
+console.log(JSON.stringify((JSON.parse(readFileSync(output, "utf8")) as { summary: unknown }).summary, null, 1));

@@ -599,16 +599,19 @@ export const STUDY_COIL_REFINEMENT = 0.5;
  * current (the reflected resistance the study reports), and of ΔL as a fraction of the empty
  * coil's inductance, by the tier of the part's thinnest section w — the radial section or half
  * the part's length, whichever is smaller (`shortPartSection`) — against δ and μr·δ
- * (`shortPartTier`): `thick` (w ≥ 100 δ and ≥ 0.09 μr·δ), `general` (w ≥ 5 δ), `thin`
- * (w < 5 δ), `outside` (w < 0.09 μr·δ: the flux crosses the section, which a surface impedance
- * cannot hold; the largest error seen, not a bound). Measured with the radial section alone,
- * as before, short discs landed in the `general` tier with errors up to 51 %.
+ * (`shortPartTier`): `thick` (w ≥ 100 δ and ≥ 0.15 μr·δ), `general` (w ≥ 5 δ), `thin`
+ * (w < 5 δ), `outside` (w < 0.15 μr·δ: the flux crosses the section, which a surface impedance
+ * cannot hold; the largest error seen, not a bound). Measured: thick 6.1 % and 1.09 %, general
+ * 9.2 % and 1.16 %, thin 24.2 % and 4.35 % (with scripts/measurements/short-magnetic-part.ts on
+ * the bearing-race coil, μr 3–300: the thin and general maxima are its μr 3 ring), outside up to
+ * 24 × and 78 %. Measured with the radial section alone and 0.09 μr·δ, as before, short discs
+ * landed in the `general` tier with errors up to 51 %, and sections of 0.09–0.15 μr·δ up to 21 %.
  */
 export const SHORT_PART_ERROR = {
-  thick: { resistance: 0.07, inductance: 0.003 },
-  general: { resistance: 0.08, inductance: 0.011 },
-  thin: { resistance: 0.09, inductance: 0.011 },
-  outside: { resistance: 19, inductance: 0.12 },
+  thick: { resistance: 0.065, inductance: 0.011 },
+  general: { resistance: 0.095, inductance: 0.012 },
+  thin: { resistance: 0.25, inductance: 0.044 },
+  outside: { resistance: 25, inductance: 0.79 },
 } as const;
 
 /** The validity note of a part shorter than the coil at an operating point (coil-impedance tier): the measured error bound that applies. */
@@ -624,8 +627,8 @@ function shortPartNote(d: ResolvedHeaterDescription, frequency: number, resistiv
   const tier = SHORT_PART_ERROR[tierName];
   const range =
     tierName !== "outside"
-      ? `here the part's thinnest section (radial section or half its length) is ${depths.toPrecision(3)} skin depths and ${flux.toPrecision(2)} × μr·δ, where the field solver puts it within ${tier.resistance * 100} % (the part's loss at a given coil current) and ${tier.inductance * 100} % of the empty coil's inductance (ΔL)`
-      : `here the part's thinnest section (radial section or half its length) is only ${flux.toPrecision(2)} × μr·δ (flux crosses the whole section, which a surface impedance cannot hold): outside the model's range, where the field solver found errors up to ${tier.resistance} × (the part's loss) and ${tier.inductance * 100} % of the empty coil's inductance; use the field model for this part`;
+      ? `here the part's thinnest section (radial section or half its length) is ${depths.toPrecision(3)} skin depths and ${flux.toPrecision(2)} × μr·δ, where the field solver puts it within ${+(100 * tier.resistance).toPrecision(3)} % (the part's loss at a given coil current) and ${+(100 * tier.inductance).toPrecision(3)} % of the empty coil's inductance (ΔL)`
+      : `here the part's thinnest section (radial section or half its length) is only ${flux.toPrecision(2)} × μr·δ (flux crosses the whole section, which a surface impedance cannot hold; the model needs ≥ 0.15): outside the model's range, where the field solver found errors up to ${tier.resistance} × (the part's loss) and ${+(100 * tier.inductance).toPrecision(3)} % of the empty coil's inductance; use the field model for this part`;
   return {
     ...note,
     message: `The part is shorter than the coil: the long part's exact coupling is scaled by a complex end-effect factor from a surface-impedance model of the short and the long part (Leontovich condition, ψ = p ∂ψ/∂n with p = (1 − j)μrδ/2, solved by a boundary-element method), corrected towards the coil-impedance model's own cells for the non-magnetic part (weight 1 at μr = 1 falling to 0 at μr = 20); ${range}. Measured against the library's axisymmetric field solver over solenoids of length/diameter 0.3–4, bars and rings 0.3–0.9 × the coil length, μr 1–600, 3–150 skin depths.`,

@@ -828,8 +828,8 @@ function prepared(geo: CoilGeometry, design: number, refinement: number): Prepar
             message:
               `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). ` +
               (tier === "outside"
-                ? `Here ${where} is below 0.09 μr·δ: the flux crosses the section, beyond the model (the library's axisymmetric field solver found the reflected resistance up to ${bound.resistance} × off there); use solveAxisymmetricField.`
-                : `Against the library's axisymmetric field solver (solenoids of length/diameter 0.3–4, parts 0.3–0.9 × the coil's length, μr 20–600) the reflected resistance is within ${bound.resistance * 100} % and ΔL within ${bound.inductance * 100} % of the empty coil's inductance for ${where}` +
+                ? `Here ${where} is below 0.15 μr·δ: the flux crosses the section, beyond the model (the library's axisymmetric field solver found the reflected resistance up to ${bound.resistance} × off there); use solveAxisymmetricField.`
+                : `Against the library's axisymmetric field solver (solenoids of length/diameter 0.3–4, parts 0.3–0.9 × the coil's length, μr 20–600) the reflected resistance is within ${+(100 * bound.resistance).toPrecision(3)} % and ΔL within ${+(100 * bound.inductance).toPrecision(3)} % of the empty coil's inductance for ${where}` +
                   (part.length > coilExtent(geo).zMax - coilExtent(geo).zMin ? "; this part is longer than the coil, outside the measured range." : ".")),
             value: part.length,
           });
