@@ -40,8 +40,15 @@ export interface StoredEnergyCautionOptions {
   readonly voltagePeak: number;
 }
 
-/** Energy above which stored energy is an energy hazard even at low voltage [J] (IEC 60950-1, from memory). */
+/**
+ * Energy above which a charged capacitor is at a hazardous energy level [J]: IEC 60950-1:2005,
+ * §2.1.1.5 c) 2) ("exceeds 20 J" at a voltage of 2 V or more).
+ */
 const ENERGY_HAZARD_LEVEL = 20;
+/** Voltage from which the 20 J level applies [V] (IEC 60950-1:2005, §2.1.1.5 c) 2)). */
+const ENERGY_HAZARD_MIN_VOLTAGE = 2;
+/** Where the 20 J rule comes from (clause text as quoted in product-safety discussions of the standard). */
+const ENERGY_HAZARD_SOURCE = "IEC 60950-1:2005, §2.1.1.5 c) 2): a capacitor is at a hazardous energy level when its voltage is 2 V or more and ½CU² exceeds 20 J";
 /** Discharge energy limit for accessible parts [J] (IEC 60335-1 §8.1.4). */
 const DISCHARGE_ENERGY_LIMIT = 0.35;
 /** Peak voltage below which a discharge is not considered a shock hazard [V] (IEC 60335-1 §8.1.4). */
@@ -49,8 +56,9 @@ const SHOCK_VOLTAGE_PEAK = 42.4;
 
 /**
  * A caution for the energy stored in a capacitor (or capacitor bank), $E = \tfrac12 C \hat V^2$:
- * - `"stored-energy-hazard"`, `"danger"`: $E \ge 20$ J, an energy hazard at any voltage
- *   (arcs, burns, welded tools) — the level of IEC 60950-1 §1.2.8.10 (from memory);
+ * - `"stored-energy-hazard"`, `"danger"`: $E > 20$ J at $\hat V \ge 2$ V, an energy hazard
+ *   even at low voltage (arcs, burns, welded tools) — the hazardous energy level of
+ *   IEC 60950-1:2005 §2.1.1.5 c) 2);
  * - `"stored-energy-shock"`, `"warning"`: $E > 0.35$ J with a peak voltage above 42.4 V, the
  *   discharge-energy limit that IEC 60335-1 §8.1.4 sets for accessible parts (there for peak
  *   voltages above 15 kV; used here as a conservative screen at any shock-capable voltage);
@@ -61,8 +69,8 @@ const SHOCK_VOLTAGE_PEAK = 42.4;
  * @param options - capacitance and peak voltage
  * @returns the caution, or `null`
  * @throws {@link InputError} on bad input
- * @see IEC 60335-1:2010, §8.1.4 (45 µC / 350 mJ discharge limits); IEC 60950-1:2005, §1.2.8.10
- *   (hazardous energy level 20 J; from memory).
+ * @see IEC 60335-1:2010, §8.1.4 (45 µC / 350 mJ discharge limits); IEC 60950-1:2005,
+ *   §2.1.1.5 c) 2) (hazardous energy level: more than 20 J at 2 V or more).
  * @example
  * ```ts
  * import { storedEnergyCaution } from "fluxwright";
@@ -77,7 +85,7 @@ export function storedEnergyCaution(options: StoredEnergyCautionOptions): Cautio
   const c = requirePositive(where, "capacitance", options.capacitance, "F");
   const v = Math.abs(requireFinite(where, "voltagePeak", options.voltagePeak, "V"));
   const energy = 0.5 * c * v * v;
-  if (energy >= ENERGY_HAZARD_LEVEL) {
+  if (energy > ENERGY_HAZARD_LEVEL && v >= ENERGY_HAZARD_MIN_VOLTAGE) {
     return {
       code: "stored-energy-hazard",
       severity: "danger",
@@ -85,7 +93,7 @@ export function storedEnergyCaution(options: StoredEnergyCautionOptions): Cautio
       value: energy,
       limit: ENERGY_HAZARD_LEVEL,
       unit: "J",
-      source: "IEC 60950-1:2005, §1.2.8.10, hazardous energy level 20 J (from memory)",
+      source: ENERGY_HAZARD_SOURCE,
     };
   }
   if (energy > DISCHARGE_ENERGY_LIMIT && v > SHOCK_VOLTAGE_PEAK) {
@@ -104,9 +112,12 @@ export function storedEnergyCaution(options: StoredEnergyCautionOptions): Cautio
 
 /**
  * Contact-burn thresholds for bare (uncoated) metal surfaces against contact time, as points
- * (contact time [s], surface temperature [°C]) of ISO 13732-1 (from memory): 1 s: 65 °C,
- * 10 s: 55 °C, 1 min: 51 °C, 10 min: 48 °C, 8 h: 43 °C. Between points the threshold is
- * interpolated linearly in the logarithm of time.
+ * (contact time [s], surface temperature [°C]): 1 s: 65 °C (the lower edge of the 65–70 °C
+ * band), 1 min: 51 °C, 10 min: 48 °C, 8 h: 43 °C from the burn-threshold table of EN 563:1994
+ * (the predecessor of EN ISO 13732-1), as reproduced in DGUV Vorschrift 79 (BG BAU), §12;
+ * 10 s: 55 °C read off the standard's figure (unverified, listed in
+ * docs/unverified-values.md). Between points the threshold is interpolated linearly in the
+ * logarithm of time.
  */
 const BURN_THRESHOLDS: readonly (readonly [number, number])[] = [
   [1, 65],
@@ -120,17 +131,22 @@ const BURN_THRESHOLDS: readonly (readonly [number, number])[] = [
  * The contact-burn threshold of a bare metal surface [K] for a contact time: the surface
  * temperature at which touching it for that long starts to burn the skin.
  *
- * Points (ISO 13732-1, uncoated metals; values from memory): 1 s: 65 °C, 10 s: 55 °C,
- * 1 min: 51 °C, 10 min: 48 °C, 8 h: 43 °C; linear in log(time) between them; held at the end
- * values outside 1 s … 8 h.
+ * Points for uncoated metals: 1 s: 65 °C (lower edge of the 65–70 °C band), 1 min: 51 °C,
+ * 10 min: 48 °C, 8 h: 43 °C (EN 563:1994 table, the predecessor of ISO 13732-1); 10 s:
+ * 55 °C read off the standard's figure (unverified); linear in log(time) between them; held
+ * at the end values outside 1 s … 8 h. A secondary table attributed to ISO 13732-1 gives the
+ * same 51/48/43 °C but 62–65 °C at 1 s for metal: the 1 s value may sit up to 3 °C high
+ * against the current standard (see docs/unverified-values.md).
  *
  * Hard domain (throws {@link InputError}): contact time ≤ 0 or non-finite.
  *
  * @param contactTime - duration of skin contact [s], > 0
  * @returns threshold surface temperature [K]
  * @throws {@link InputError} on bad input
- * @see ISO 13732-1:2006, Ergonomics of the thermal environment — Methods for the assessment of
- *   human responses to contact with surfaces — Part 1: Hot surfaces, §4 and Figure 1 (from memory).
+ * @see EN 563:1994, Safety of machinery — Temperatures of touchable surfaces, table of burn
+ *   thresholds (uncoated metals: 1 s 65–70 °C, 1 min 51 °C, 10 min 48 °C, 8 h 43 °C), as
+ *   reproduced in DGUV Vorschrift 79 (BG BAU), §12; its successor ISO 13732-1:2006,
+ *   Ergonomics of the thermal environment — Part 1: Hot surfaces (the current reference).
  * @example
  * ```ts
  * import { contactBurnThreshold } from "fluxwright";
@@ -181,7 +197,7 @@ export interface SurfaceTemperatureCautionOptions {
  * @param options - temperature, contact time and location
  * @returns the caution, or `null`
  * @throws {@link InputError} on bad input
- * @see ISO 13732-1:2006 (from memory), via {@link contactBurnThreshold}.
+ * @see EN 563:1994 / ISO 13732-1:2006 burn thresholds, via {@link contactBurnThreshold}.
  * @example
  * ```ts
  * import { surfaceTemperatureCaution, celsius } from "fluxwright";
@@ -207,7 +223,7 @@ export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOpti
       value: temperature,
       limit: brief,
       unit: "K",
-      source: "ISO 13732-1:2006, burn threshold of uncoated metal for 1 s contact (from memory)",
+      source: "EN 563:1994 burn threshold of uncoated metal for 1 s contact, lower edge of 65–70 °C (predecessor of ISO 13732-1:2006)",
     };
   }
   const threshold = contactBurnThreshold(contactTime);
@@ -219,7 +235,7 @@ export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOpti
       value: temperature,
       limit: threshold,
       unit: "K",
-      source: `ISO 13732-1:2006, burn threshold of uncoated metal for ${round(contactTime)} s contact (from memory)`,
+      source: `EN 563:1994 / ISO 13732-1:2006 burn threshold of uncoated metal for ${round(contactTime)} s contact (1 min 51 °C, 10 min 48 °C, 8 h 43 °C from the table; 10 s 55 °C from the figure, unverified)`,
     };
   }
   return null;

@@ -3,9 +3,11 @@
  *
  * Source: IEC 60063:2015 "Preferred number series for resistors and capacitors", Table 1
  * (E6–E24, two significant figures) and Table 2 (E48–E192, three significant figures).
- * Transcribed from memory and cross-checked in the tests: every E96 value equals
- * $\mathrm{round}(100\cdot10^{i/96})/100$, and E12/E24 equal $\mathrm{round}(10\cdot10^{i/n})/10$
- * except the historic values 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7 and 8.2 that the standard keeps.
+ * Checked in the tests against the published tables (as reproduced in the appendix "Normreihen
+ * der Bauelemente" of the RWTH Aachen MSP430 textbook) and against the rule they follow: every
+ * E96 value equals $\mathrm{round}(100\cdot10^{i/96})/100$, and E12/E24 equal
+ * $\mathrm{round}(10\cdot10^{i/n})/10$ except the historic values 2.7, 3.0, 3.3, 3.6, 3.9, 4.3,
+ * 4.7 and 8.2 that the standard keeps.
  *
  * @packageDocumentation
  */

@@ -92,7 +92,9 @@ export function diameterToAwg(diameter: number): number {
  * (the series used for cables and building wire).
  *
  * @see IEC 60228:2004, Conductors of insulated cables, Tables 1–4 (nominal cross-sectional areas).
- *   Values from the published tables (from memory).
+ *   0.5 … 1200 mm² checked against the standard's class 1 and class 2 tables as reproduced by
+ *   cable makers (e.g. KabelMetal Indonesia, "Conductor specification according to IEC 60228",
+ *   Tables A.1 and A.2); 1400 … 2500 mm² not checked (listed in docs/unverified-values.md).
  * @example
  * ```ts
  * import { METRIC_CROSS_SECTIONS } from "fluxwright";

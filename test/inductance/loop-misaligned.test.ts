@@ -43,7 +43,4 @@ describe("loopMutualInductance with a lateral offset or tilt", () => {
     expect(() => loopMutualInductance({ radius1: 0.1, radius2: 0.1, axialDistance: 0.1, offset: 0.01 } as unknown as LoopMutualInductanceOptions)).toThrow(/offset/);
   });
 
-  it("runs its documented example", () => {
-    expect(loopMutualInductance({ radius1: 0.1, radius2: 0.1, axialDistance: 0.1, lateralOffset: 0.05 }).toExponential(4)).toBe("4.1996e-8");
-  });
 });

@@ -57,8 +57,11 @@ describe("diameterToAwg", () => {
 
 describe("metric cross-sections", () => {
   it("lists the IEC 60228 nominal sizes in ascending order", () => {
-    // IEC 60228 nominal cross-sections (from memory): 0.5, 0.75, 1, 1.5, 2.5, 4, 6, 10, 16 mm², ...
+    // IEC 60228:2004 Table 1 (class 1) nominal cross-sections, as reproduced in KabelMetal's
+    // "Conductor specification according to IEC 60228": 0.5, 0.75, 1, 1.5, 2.5, 4, 6, 10, 16 mm², ...
     expect(METRIC_CROSS_SECTIONS.slice(0, 9).map((a) => Math.round(a * 1e8) / 100)).toEqual([0.5, 0.75, 1, 1.5, 2.5, 4, 6, 10, 16]);
+    // the same tables continue 25 … 400 mm² (copper) and 500 … 1200 mm² (aluminium column)
+    expect(METRIC_CROSS_SECTIONS.slice(9, 25).map((a) => Math.round(a * 1e6))).toEqual([25, 35, 50, 70, 95, 120, 150, 185, 240, 300, 400, 500, 630, 800, 1000, 1200]);
     for (let i = 1; i < METRIC_CROSS_SECTIONS.length; i++) {
       expect(METRIC_CROSS_SECTIONS[i]).toBeGreaterThan(METRIC_CROSS_SECTIONS[i - 1] ?? 0);
     }

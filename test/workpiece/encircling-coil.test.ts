@@ -16,7 +16,7 @@ describe("encirclingCoilOverRod", () => {
     }
   });
 
-  it("prints the documented example", () => {
+  it("gives an aluminium rod a positive reflected resistance and a negative inductance change (eddy currents oppose the field)", () => {
     const r = encirclingCoilOverRod({ coil, rod: aluminiumRod, frequency: 1e3 });
     expect(r.reflectedResistance > 0 && r.inductanceChange < 0).toBe(true);
   });
