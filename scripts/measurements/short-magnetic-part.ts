@@ -15,6 +15,7 @@
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { readHeaterDescription, solveAxisymmetricField } from "../../src/index.js";
 import { studyPartCoupling } from "../../src/study/operating-point.js";
+import { shortPartSection, shortPartTier } from "../../src/workpiece/work-coil-short-part.js";
 import { MU_0 } from "../../src/units/index.js";
 
 const frequency = 37_000;
@@ -69,14 +70,14 @@ for (const shape of ["bar", "ring"] as const) {
     }
   }
 }
-// the largest errors by range of the thinnest radial section w against δ and μr·δ (metal resistivities only)
+// the largest errors by tier (`shortPartTier` of `shortPartSection`: the radial section or half
+// the part's length, whichever is smaller; metal resistivities only)
 const summary: Record<string, { rows: number; resistance: number; inductance: number }> = {};
-for (const row of rows as { shape: string; relativePermeability: number; radiusOverSkinDepth: number; resistivity: number; resistanceRatio: number; inductanceErrorOfEmpty: number }[]) {
+for (const row of rows as { shape: string; lengthRatio: number; relativePermeability: number; radiusOverSkinDepth: number; resistivity: number; resistanceRatio: number; inductanceErrorOfEmpty: number }[]) {
   const outer = row.shape === "bar" ? 0.03 : 0.062;
-  const section = row.shape === "bar" ? 0.03 : 0.012;
-  const depths = section / (outer / row.radiusOverSkinDepth);
-  const flux = depths / row.relativePermeability;
-  const tier = row.resistivity < 1.5e-8 ? "below-metal-resistivity" : flux < 0.09 ? "outside" : depths < 5 ? "thin" : depths >= 100 ? "thick" : "general";
+  const inner = row.shape === "bar" ? 0 : 0.05;
+  const delta = outer / row.radiusOverSkinDepth;
+  const tier = row.resistivity < 1.5e-8 ? "below-metal-resistivity" : shortPartTier(shortPartSection(outer, inner, row.lengthRatio * 0.048), delta, row.relativePermeability);
   const t = (summary[tier] ??= { rows: 0, resistance: 0, inductance: 0 });
   t.rows++;
   t.resistance = Math.max(t.resistance, Math.abs(row.resistanceRatio - 1));

@@ -35,7 +35,7 @@ import {
 import { currentFedWithSourceFigures } from "../tank/current-fed-figures.js";
 import { MU_0 } from "../units/index.js";
 import { coilEfficiency, coilOverPlate, prepareEncirclingCoilOverRod, prepareWorkCoil, tubeInLongCoil } from "../workpiece/index.js";
-import { nonMagneticWeight, prepareShortPartFactor } from "../workpiece/work-coil-short-part.js";
+import { nonMagneticWeight, prepareShortPartFactor, shortPartSection, shortPartTier } from "../workpiece/work-coil-short-part.js";
 import type { PreparedWorkCoil, ReducedWorkCoil, WorkCoilConductor, WorkCoilPart, WorkCoilPancake, WorkCoilSolenoid } from "../workpiece/index.js";
 import { conductorOuterDiameter } from "./read-description.js";
 import type { ResolvedConductor, ResolvedHeaterDescription, ResolvedSolenoidCoil } from "./read-description.js";
@@ -639,42 +639,49 @@ export const STUDY_COIL_REFINEMENT = 0.5;
 
 /**
  * The coil-impedance tier's error for a part shorter than the coil (the long part's exact
- * coupling times the end-effect factor of `prepareShortPartFactor`), measured against the
- * library's axisymmetric field solver (scripts/measurements/short-magnetic-part.ts, written to
- * short-magnetic-part.json beside it: a bar of radius 30 mm and a ring of wall 12 mm in the
- * bearing-race example's 6-turn coil, length 0.35–0.9 × the coil's, μr 3–300, outer radius
- * 10–640 skin depths, 37 kHz, resistivity that of a metal, ≥ 1.5e-8 Ω·m): the largest relative
- * error of the reflected resistance, and of ΔL as a fraction of the empty coil's inductance, by
- * the part's thinnest radial section w (bar radius, tube or ring wall) against the skin depth δ
- * and μr·δ. Measured: `thick` (w ≥ 100 δ and w ≥ 0.09 μr δ) 1.7 % and 0.36 %; `general`
- * (w ≥ 5 δ and w ≥ 0.09 μr δ) 12.5 % and 1.4 % (short bars 10 δ in radius at μr 3–8, and 40 δ at
- * μr 300); `thin` (w < 5 δ) 24 % and 4.4 %; `outside` (w < 0.09 μr δ: flux crosses the whole
- * section, which a surface impedance cannot hold) up to 7.3 × and 17 %. The scaling by the
- * non-magnetic part's end factors it replaces read the resistance up to 474 × high on the same
- * grid (1.5 × for the bearing-race ring).
+ * coupling times the end-effect factor of `prepareShortPartFactor`, corrected towards the
+ * model's own cells for a non-magnetic part), measured against the library's axisymmetric field
+ * solver (scripts/measurements/short-part-grid.ts, table in docs/workpiece.md: tube solenoids
+ * of length/diameter 0.3, 1, 2 and 4 with 3–20 turns; bars and rings 0.3–0.9 × the coil's
+ * length, centred; μr 1, 20, 100, 600; 3–150 skin depths; metal resistivities 1.5e-8–1.5e-6
+ * Ω·m; the field solver itself within 1e-3 of scikit-fem on four of these points,
+ * test/fixtures/short-part): the largest relative error of the part's loss at a given coil
+ * current (the reflected resistance the study reports), and of ΔL as a fraction of the empty
+ * coil's inductance, by the tier of the part's thinnest section w — the radial section or half
+ * the part's length, whichever is smaller (`shortPartSection`) — against δ and μr·δ
+ * (`shortPartTier`): `thick` (w ≥ 100 δ and ≥ 0.15 μr·δ), `general` (w ≥ 5 δ), `thin`
+ * (w < 5 δ), `outside` (w < 0.15 μr·δ: the flux crosses the section, which a surface impedance
+ * cannot hold; the largest error seen, not a bound). Measured: thick 6.1 % and 1.09 %, general
+ * 9.2 % and 1.16 %, thin 24.2 % and 4.35 % (with scripts/measurements/short-magnetic-part.ts on
+ * the bearing-race coil, μr 3–300: the thin and general maxima are its μr 3 ring), outside up to
+ * 24 × and 78 %. Measured with the radial section alone and 0.09 μr·δ, as before, short discs
+ * landed in the `general` tier with errors up to 51 %, and sections of 0.09–0.15 μr·δ up to 21 %.
  */
 export const SHORT_PART_ERROR = {
-  thick: { resistance: 0.02, inductance: 0.004 },
-  general: { resistance: 0.13, inductance: 0.014 },
+  thick: { resistance: 0.065, inductance: 0.011 },
+  general: { resistance: 0.095, inductance: 0.012 },
   thin: { resistance: 0.25, inductance: 0.044 },
-  outside: { resistance: 7.3, inductance: 0.17 },
+  outside: { resistance: 25, inductance: 0.79 },
 } as const;
 
 /** The validity note of a part shorter than the coil at an operating point (coil-impedance tier): the measured error bound that applies. */
 function shortPartNote(d: ResolvedHeaterDescription, frequency: number, resistivity: number, relativePermeability: number, note: ValidityNote): ValidityNote {
   const part = d.part;
-  const section = part.shape === "bar" ? part.radius : part.shape === "tube" ? part.wallThickness : part.shape === "ring" ? part.outerRadius - part.innerRadius : part.thickness;
+  const radial = part.shape === "bar" ? part.radius : part.shape === "tube" ? part.wallThickness : part.shape === "ring" ? part.outerRadius - part.innerRadius : part.thickness;
+  const length = part.shape === "ring" ? part.height : part.shape === "plate" ? Infinity : part.length;
+  const section = shortPartSection(radial, 0, length);
   const delta = skinDepth({ resistivity, frequency, relativePermeability });
   const depths = section / delta;
   const flux = section / (relativePermeability * delta);
-  const tier = flux < 0.09 ? SHORT_PART_ERROR.outside : depths < 5 ? SHORT_PART_ERROR.thin : depths >= 100 ? SHORT_PART_ERROR.thick : SHORT_PART_ERROR.general;
+  const tierName = shortPartTier(section, delta, relativePermeability);
+  const tier = SHORT_PART_ERROR[tierName];
   const range =
-    flux >= 0.09
-      ? `here the part's section is ${depths.toPrecision(3)} skin depths and ${flux.toPrecision(2)} × μr·δ, where the field solver puts it within ${tier.resistance * 100} % (reflected resistance, so part power at a given coil current) and ${tier.inductance * 100} % of the empty coil's inductance (ΔL)`
-      : `here the part's section is only ${flux.toPrecision(2)} × μr·δ (flux crosses the whole section, which a surface impedance cannot hold): outside the model's range, where the field solver found errors up to ${tier.resistance} × (reflected resistance) and ${tier.inductance * 100} % of the empty coil's inductance; use the field model for this part`;
+    tierName !== "outside"
+      ? `here the part's thinnest section (radial section or half its length) is ${depths.toPrecision(3)} skin depths and ${flux.toPrecision(2)} × μr·δ, where the field solver puts it within ${+(100 * tier.resistance).toPrecision(3)} % (the part's loss at a given coil current) and ${+(100 * tier.inductance).toPrecision(3)} % of the empty coil's inductance (ΔL)`
+      : `here the part's thinnest section (radial section or half its length) is only ${flux.toPrecision(2)} × μr·δ (flux crosses the whole section, which a surface impedance cannot hold; the model needs ≥ 0.15): outside the model's range, where the field solver found errors up to ${tier.resistance} × (the part's loss) and ${+(100 * tier.inductance).toPrecision(3)} % of the empty coil's inductance; use the field model for this part`;
   return {
     ...note,
-    message: `The part is shorter than the coil: the long part's exact coupling is scaled by a complex end-effect factor from a surface-impedance model of the short and the long part (Leontovich condition, ψ = p ∂ψ/∂n with p = (1 − j)μrδ/2, solved by a boundary-element method), corrected towards the coil-impedance model's own cells for the non-magnetic part (weight 1 at μr = 1 falling to 0 at μr = 20); ${range}. Measured against the library's axisymmetric field solver over bars and rings 0.35–0.9 × the coil length, μr 3–300, 10–640 skin depths.`,
+    message: `The part is shorter than the coil: the long part's exact coupling is scaled by a complex end-effect factor from a surface-impedance model of the short and the long part (Leontovich condition, ψ = p ∂ψ/∂n with p = (1 − j)μrδ/2, solved by a boundary-element method), corrected towards the coil-impedance model's own cells for the non-magnetic part (weight 1 at μr = 1 falling to 0 at μr = 20); ${range}. Measured against the library's axisymmetric field solver over solenoids of length/diameter 0.3–4, bars and rings 0.3–0.9 × the coil length, μr 1–600, 3–150 skin depths.`,
     value: depths,
   };
 }

@@ -274,9 +274,46 @@ export function encirclingCoilOverRod(options: EncirclingCoilOverRodOptions): En
  * radius a1 with an air bore). kk = ωμ0μr/ρ. A filament pair (r_i, z_i), (r_j, z_j) outside the
  * rod then couples through the reflected mutual inductance
  * $\Delta M_{ij} = 2\mu_0 r_i r_j \int_0^\infty C\,K_1(\alpha r_i) K_1(\alpha r_j)\cos(\alpha(z_i - z_j))\,d\alpha$.
+ * A tube wall with $2\,\mathrm{Re}\,\beta\,(a - a_1) > 40$ is taken as a solid rod (the bore's
+ * terms are below e^{−40} of the rod's): within 1e-13 relative of the full wall formula
+ * (test/workpiece/part-kernel-cache.test.ts).
  * Internal kernel shared by {@link encirclingCoilOverRod} and the work-coil impedance model.
  */
 export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: number, mur: number, out: Float64Array): void {
+  const ik = ikScratch;
+  const x = alpha * a;
+  const x1 = alpha * a1;
+  // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²)
+  let rAir = 0;
+  if (a1 >= 1e-9 * a) {
+    if (x1 > 0) {
+      // one evaluation for both (the same numbers as besselI0Scaled, besselI1Scaled)
+      besselIKScaledInto(x1, 0, false, ik);
+      rAir = (alpha * ik[IK_I0R]!) / ik[IK_I1R]!;
+    } else {
+      rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
+    }
+  }
+  if (x > 0) {
+    // one evaluation for all four (the same numbers as the four scaled real functions)
+    besselIKScaledInto(x, 0, true, ik);
+    rodReflectionScaledFrom(alpha, a, a1, kk, mur, ik[IK_I0R]!, ik[IK_I1R]!, ik[IK_K0R]!, ik[IK_K1R]!, rAir, out);
+  } else {
+    rodReflectionScaledFrom(alpha, a, a1, kk, mur, besselI0Scaled(x), besselI1Scaled(x), besselK0Scaled(x), besselK1Scaled(x), rAir, out);
+  }
+}
+
+/** Wall thickness in units of 1/(2 Re β) beyond which a tube's bore is invisible (e^{−40} ≈ 4e-18). */
+const THICK_WALL = 40;
+
+/**
+ * {@link rodReflectionScaled} with the material-independent factors given: the exponentially
+ * scaled $I_0, I_1, K_0, K_1$ at $\alpha a$ (`besselI0Scaled` … of `src/special`) and, for a
+ * tube, the air bore's ratio $\alpha I_0(\alpha a_1)/I_1(\alpha a_1)$ (ignored for a bar, a1 <
+ * 1e-9·a). A caller that evaluates many materials on the same α nodes and geometry (the
+ * work-coil model's part kernel) computes them once; the result is bit-identical.
+ */
+export function rodReflectionScaledFrom(alpha: number, a: number, a1: number, kk: number, mur: number, i0: number, i1: number, k0: number, k1: number, rAir: number, out: Float64Array): void {
   const b2 = alpha * alpha;
   const rr = Math.hypot(b2, kk);
   const bRe = Math.sqrt(0.5 * (rr + b2));
@@ -284,8 +321,10 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
   const ik = ikScratch;
   let rRe: number;
   let rIm: number;
-  // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²)
-  if (a1 < 1e-9 * a) {
+  // a bore below 1e-9 of the radius changes nothing measurable (its effect goes as (a1/a)²); a
+  // wall with 2·Re β·(a − a1) > 40 shields the bore: the bore's terms carry e^{2 Re β (a1 − a)} <
+  // e^{−40} ≈ 4e-18 against the solid rod's, so the solid-rod ratio is the tube's to rounding
+  if (a1 < 1e-9 * a || 2 * bRe * (a - a1) > THICK_WALL) {
     besselI1OverI0ComplexInto(bRe * a, bIm * a, ik);
     const wRe = ik[0]!;
     const wIm = ik[1]!;
@@ -294,37 +333,10 @@ export function rodReflectionScaled(alpha: number, a: number, a1: number, kk: nu
     rRe = (bRe * wRe + bIm * wIm) / (ww * mur);
     rIm = (bIm * wRe - bRe * wIm) / (ww * mur);
   } else {
-    // tube: air bore ratio α I0(α a1)/I1(α a1), wall I1/K1 combination
-    const x1 = alpha * a1;
-    let rAir: number;
-    if (x1 > 0) {
-      // one evaluation for both (the same numbers as besselI0Scaled, besselI1Scaled)
-      besselIKScaledInto(x1, 0, false, ik);
-      rAir = (alpha * ik[IK_I0R]!) / ik[IK_I1R]!;
-    } else {
-      rAir = (alpha * besselI0Scaled(x1)) / besselI1Scaled(x1);
-    }
+    // tube: air bore ratio α I0(α a1)/I1(α a1) (given), wall I1/K1 combination
     tubeSurfaceRatioInto(bRe, bIm, a, a1, mur, rAir, ik);
     rRe = ik[0]!;
     rIm = ik[1]!;
-  }
-  const x = alpha * a;
-  let i0: number;
-  let i1: number;
-  let k0: number;
-  let k1: number;
-  if (x > 0) {
-    // one evaluation for all four (the same numbers as the four scaled real functions)
-    besselIKScaledInto(x, 0, true, ik);
-    i0 = ik[IK_I0R]!;
-    i1 = ik[IK_I1R]!;
-    k0 = ik[IK_K0R]!;
-    k1 = ik[IK_K1R]!;
-  } else {
-    i0 = besselI0Scaled(x);
-    i1 = besselI1Scaled(x);
-    k0 = besselK0Scaled(x);
-    k1 = besselK1Scaled(x);
   }
   // C̃ = (α I0 − R I1)/(α K0 + R K1) (scaled; true C = e^{2x} C̃)
   const nRe = alpha * i0 - rRe * i1;

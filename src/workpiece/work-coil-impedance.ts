@@ -6,7 +6,7 @@
  *
  * @packageDocumentation
  */
-import { SHORT_PART_FACTOR_ERROR, nonMagneticWeight, prepareShortPartFactor } from "./work-coil-short-part.js";
+import { SHORT_PART_FACTOR_ERROR, nonMagneticWeight, prepareShortPartFactor, shortPartSection, shortPartTier } from "./work-coil-short-part.js";
 import { InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { litzAcRatio, litzGeometry } from "../conductors/index.js";
@@ -818,9 +818,19 @@ function prepared(geo: CoilGeometry, design: number, refinement: number): Prepar
           const copper = empty.copper + copperFactor * (loaded.copper - empty.copper);
           const turnCopper = loaded.turnCopper.map((c, i) => (empty.turnCopper[i] ?? 0) + copperFactor * (c - (empty.turnCopper[i] ?? 0)));
           loaded = { ...loaded, re: copper + gr * zr - gi * zi, im: empty.im + gr * zi + gi * zr, copper, turnCopper };
+          const section = shortPartSection(part.radius, part.innerRadius, part.length);
+          const delta = skinDepthOf(part.resistivity, f, part.relativePermeability);
+          const tier = shortPartTier(section, delta, part.relativePermeability);
+          const bound = SHORT_PART_FACTOR_ERROR[tier];
+          const where = `its thinnest section (radial section or half its length, ${(section / delta).toPrecision(3)} δ and ${(section / (part.relativePermeability * delta)).toPrecision(2)} μr·δ)`;
           validity.push({
             code: "short-magnetic-part",
-            message: `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). Against the library's axisymmetric field solver (bars and rings 0.35–0.9 × the coil length, μr 3–300) the reflected resistance is within ${SHORT_PART_FACTOR_ERROR.thick * 100} % where the thinnest radial section w is at least 100 δ and 0.09 μr·δ, ${SHORT_PART_FACTOR_ERROR.general * 100} % where w ≥ 5 δ and ≥ 0.09 μr·δ, ${SHORT_PART_FACTOR_ERROR.thin * 100} % for thinner sections; below 0.09 μr·δ flux crosses the section, beyond the model.`,
+            message:
+              `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). ` +
+              (tier === "outside"
+                ? `Here ${where} is below 0.15 μr·δ: the flux crosses the section, beyond the model (the library's axisymmetric field solver found the reflected resistance up to ${bound.resistance} × off there); use solveAxisymmetricField.`
+                : `Against the library's axisymmetric field solver (solenoids of length/diameter 0.3–4, parts 0.3–0.9 × the coil's length, μr 20–600) the reflected resistance is within ${+(100 * bound.resistance).toPrecision(3)} % and ΔL within ${+(100 * bound.inductance).toPrecision(3)} % of the empty coil's inductance for ${where}` +
+                  (part.length > coilExtent(geo).zMax - coilExtent(geo).zMin ? "; this part is longer than the coil, outside the measured range." : ".")),
             value: part.length,
           });
         }
@@ -959,6 +969,68 @@ interface ReducedModel {
   readonly P: Float64Array;
   /** G (k × r, row-major). */
   readonly G: Float64Array;
+  /** Work arrays of an evaluation (sized once: evaluations allocate nothing else of their size). */
+  readonly scratch: ReducedScratch;
+}
+
+/** Work arrays of {@link reducedImpedances} for a model of sizes k, g, r. */
+interface ReducedScratch {
+  readonly coefficients: Float64Array;
+  readonly mRe: Float64Array;
+  readonly mIm: Float64Array;
+  readonly dRe: Float64Array;
+  readonly dIm: Float64Array;
+  readonly s0Re: Float64Array;
+  readonly s0Im: Float64Array;
+  readonly sRe: Float64Array;
+  readonly sIm: Float64Array;
+  readonly eRe: Float64Array;
+  readonly eIm: Float64Array;
+  readonly hRe: Float64Array;
+  readonly hIm: Float64Array;
+  readonly nRe: Float64Array;
+  readonly nIm: Float64Array;
+  readonly aRe: Float64Array;
+  readonly aIm: Float64Array;
+  readonly yRe: Float64Array;
+  readonly yIm: Float64Array;
+  readonly emptyRe: Float64Array;
+  readonly emptyIm: Float64Array;
+  readonly loadedRe: Float64Array;
+  readonly loadedIm: Float64Array;
+  readonly wRe: Float64Array;
+  readonly wIm: Float64Array;
+}
+
+function reducedScratch(k: number, g: number, r: number, nodes: number): ReducedScratch {
+  const f = (n: number): Float64Array => new Float64Array(n);
+  return {
+    coefficients: f(2 * nodes),
+    mRe: f(r * r),
+    mIm: f(r * r),
+    dRe: f(k),
+    dIm: f(k),
+    s0Re: f(g * g),
+    s0Im: f(g * g),
+    sRe: f(g * g),
+    sIm: f(g * g),
+    eRe: f(g * r),
+    eIm: f(g * r),
+    hRe: f(r * r),
+    hIm: f(r * r),
+    nRe: f(r * r),
+    nIm: f(r * r),
+    aRe: f(r * r),
+    aIm: f(r * r),
+    yRe: f(r * g),
+    yIm: f(r * g),
+    emptyRe: f(g),
+    emptyIm: f(g),
+    loadedRe: f(g),
+    loadedIm: f(g),
+    wRe: f(r),
+    wIm: f(r),
+  };
 }
 
 /**
@@ -1057,13 +1129,13 @@ function buildReduced(mesh: Mesh, kernel: PartKernel, fMin: number, fMax: number
       G[i * r + c] = sum;
     }
   }
-  return { k, g, r, lambda, P, G };
+  return { k, g, r, lambda, P, G, scratch: reducedScratch(k, g, r, kernel.rule.nodes.length) };
 }
 
-/** The solution u of S u = 1 (S g×g complex symmetric, overwritten): the turn voltages at 1 A; Σu is the impedance. */
-function turnVoltages(g: number, sRe: Float64Array, sIm: Float64Array): { uRe: Float64Array; uIm: Float64Array; zr: number; zi: number } {
-  const uRe = new Float64Array(g).fill(1);
-  const uIm = new Float64Array(g);
+/** The solution u of S u = 1 (S g×g complex symmetric, overwritten) into (uRe, uIm): the turn voltages at 1 A; returns Σu, the impedance. */
+function turnVoltages(g: number, sRe: Float64Array, sIm: Float64Array, uRe: Float64Array, uIm: Float64Array): [number, number] {
+  uRe.fill(1);
+  uIm.fill(0);
   if (!complexSymmetricFactor(g, sRe, sIm)) throw new Error("internal: the reduced turn matrix is singular");
   complexSymmetricSolve(g, sRe, sIm, uRe, uIm, 1);
   let zr = 0;
@@ -1072,7 +1144,7 @@ function turnVoltages(g: number, sRe: Float64Array, sIm: Float64Array): { uRe: F
     zr += uRe[c]!;
     zi += uIm[c]!;
   }
-  return { uRe, uIm, zr, zi };
+  return [zr, zi];
 }
 
 /**
@@ -1081,8 +1153,10 @@ function turnVoltages(g: number, sRe: Float64Array, sIm: Float64Array): { uRe: F
  */
 function reducedCopper(model: ReducedModel, dRe: Float64Array, dIm: Float64Array, uRe: Float64Array, uIm: Float64Array, yRe: Float64Array | null, yIm: Float64Array | null): number {
   const { k, g, r, P, G } = model;
-  const wRe = new Float64Array(r);
-  const wIm = new Float64Array(r);
+  const wRe = model.scratch.wRe;
+  const wIm = model.scratch.wIm;
+  wRe.fill(0);
+  wIm.fill(0);
   if (yRe !== null && yIm !== null) {
     for (let q = 0; q < r; q++) {
       let sr = 0;
@@ -1116,28 +1190,32 @@ function reducedCopper(model: ReducedModel, dRe: Float64Array, dIm: Float64Array
   return copper;
 }
 
+/** Results of {@link reducedImpedances}: empty R, X; loaded R, X; loaded copper loss at 1 A. */
+const IMPEDANCES = new Float64Array(5);
+
 /**
  * Empty and loaded terminal impedance of the reduced model at omega with the kernel core
- * M (r×r): with D = (I + jωΛ)⁻¹, S₀ = Pᵀ D P, and by the Woodbury identity
- * S = S₀ − E (I + N H)⁻¹ N Eᵀ, N = jωM, H = Gᵀ D G, E = Pᵀ D G; Z = 1ᵀ S⁻¹ 1; and the loaded
- * coil's copper loss at 1 A (the fifth entry).
+ * M (r×r, in the model's scratch): with D = (I + jωΛ)⁻¹, S₀ = Pᵀ D P, and by the Woodbury
+ * identity S = S₀ − E (I + N H)⁻¹ N Eᵀ, N = jωM, H = Gᵀ D G, E = Pᵀ D G; Z = 1ᵀ S⁻¹ 1; and the
+ * loaded coil's copper loss at 1 A. Writes [empty R, empty X, loaded R, loaded X, copper] into
+ * `out`; works in the model's scratch arrays (no allocation of the model's size).
  */
-function reducedImpedances(model: ReducedModel, omega: number, mRe: Float64Array, mIm: Float64Array): [number, number, number, number, number] {
+function reducedImpedances(model: ReducedModel, omega: number, out: Float64Array): void {
   const { k, g, r, lambda, P, G } = model;
-  const dRe = new Float64Array(k);
-  const dIm = new Float64Array(k);
+  const w = model.scratch;
+  const { mRe, mIm, dRe, dIm, s0Re, s0Im, eRe, eIm, hRe, hIm, nRe, nIm, aRe, aIm, yRe, yIm, sRe, sIm } = w;
   for (let i = 0; i < k; i++) {
     const x = omega * lambda[i]!;
     const den = 1 + x * x;
     dRe[i] = 1 / den;
     dIm[i] = -x / den;
   }
-  const s0Re = new Float64Array(g * g);
-  const s0Im = new Float64Array(g * g);
-  const eRe = new Float64Array(g * r);
-  const eIm = new Float64Array(g * r);
-  const hRe = new Float64Array(r * r);
-  const hIm = new Float64Array(r * r);
+  s0Re.fill(0);
+  s0Im.fill(0);
+  eRe.fill(0);
+  eIm.fill(0);
+  hRe.fill(0);
+  hIm.fill(0);
   for (let i = 0; i < k; i++) {
     const dr = dRe[i]!;
     const di = dIm[i]!;
@@ -1170,15 +1248,11 @@ function reducedImpedances(model: ReducedModel, omega: number, mRe: Float64Array
     }
   }
   // N = jω M
-  const nRe = new Float64Array(r * r);
-  const nIm = new Float64Array(r * r);
   for (let q = 0; q < r * r; q++) {
     nRe[q] = -omega * mIm[q]!;
     nIm[q] = omega * mRe[q]!;
   }
   // A = I + N H; RHS = N Eᵀ (r × g, column c at c·r)
-  const aRe = new Float64Array(r * r);
-  const aIm = new Float64Array(r * r);
   for (let s = 0; s < r; s++) {
     for (let t = 0; t < r; t++) {
       let sr = s === t ? 1 : 0;
@@ -1195,8 +1269,6 @@ function reducedImpedances(model: ReducedModel, omega: number, mRe: Float64Array
       aIm[s * r + t] = si;
     }
   }
-  const yRe = new Float64Array(r * g);
-  const yIm = new Float64Array(r * g);
   for (let c = 0; c < g; c++) {
     for (let s = 0; s < r; s++) {
       let sr = 0;
@@ -1214,8 +1286,8 @@ function reducedImpedances(model: ReducedModel, omega: number, mRe: Float64Array
     }
   }
   if (r > 0 && !complexGeneralSolve(r, aRe, aIm, yRe, yIm, g)) throw new Error("internal: the reduced part system is singular");
-  const sRe = Float64Array.from(s0Re);
-  const sIm = Float64Array.from(s0Im);
+  sRe.set(s0Re);
+  sIm.set(s0Im);
   for (let c = 0; c < g; c++) {
     for (let e = 0; e < g; e++) {
       let sr = 0;
@@ -1232,20 +1304,26 @@ function reducedImpedances(model: ReducedModel, omega: number, mRe: Float64Array
       sIm[c * g + e] = sIm[c * g + e]! - si;
     }
   }
-  const empty = turnVoltages(g, s0Re, s0Im);
-  const loaded = turnVoltages(g, sRe, sIm);
-  const copper = reducedCopper(model, dRe, dIm, loaded.uRe, loaded.uIm, yRe, yIm);
-  return [empty.zr, empty.zi, loaded.zr, loaded.zi, copper];
+  const [er, ei] = turnVoltages(g, s0Re, s0Im, w.emptyRe, w.emptyIm);
+  const [lr, li] = turnVoltages(g, sRe, sIm, w.loadedRe, w.loadedIm);
+  out[0] = er;
+  out[1] = ei;
+  out[2] = lr;
+  out[3] = li;
+  out[4] = reducedCopper(model, dRe, dIm, w.loadedRe, w.loadedIm, yRe, yIm);
 }
 
 function evaluateReduced(model: ReducedModel, kernel: PartKernel, omega: number, material: PartMaterial, outside: boolean): ReducedWorkCoilResult {
-  const coefficients = new Float64Array(2 * kernel.rule.nodes.length);
-  partCoefficients(kernel, material, coefficients);
-  const r = kernel.r;
-  const mRe = new Float64Array(r * r);
-  const mIm = new Float64Array(r * r);
-  kernelCore(kernel, coefficients, mRe, mIm);
-  const [e0, e1, z0, z1, copper] = reducedImpedances(model, omega, mRe, mIm);
+  const w = model.scratch;
+  partCoefficients(kernel, material, w.coefficients);
+  kernelCore(kernel, w.coefficients, w.mRe, w.mIm);
+  const out = IMPEDANCES;
+  reducedImpedances(model, omega, out);
+  const e0 = out[0]!;
+  const e1 = out[1]!;
+  const z0 = out[2]!;
+  const z1 = out[3]!;
+  const copper = out[4]!;
   return {
     resistance: z0,
     copperResistance: copper,

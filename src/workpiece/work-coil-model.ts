@@ -6,13 +6,13 @@
  *
  * @packageDocumentation
  */
-import { besselJ1, besselK1Scaled } from "../special/index.js";
+import { besselI0Scaled, besselI1Scaled, besselJ1, besselK0Scaled, besselK1Scaled } from "../special/index.js";
 import { complexSymmetricFactor, complexSymmetricSolve } from "../special/complex-symmetric-solve.js";
 import { MU_0 } from "../units/index.js";
 import type { CellSet } from "./work-coil-cells.js";
 import { reflectionInto } from "./coil-over-plate.js";
 import type { LayerArrays } from "./coil-over-plate.js";
-import { rodReflectionScaled } from "./encircling-coil.js";
+import { rodReflectionScaledFrom } from "./encircling-coil.js";
 import { gaussLegendreRule } from "./kernels.js";
 
 /** The reduced (mirror-folded) unknowns of a cell set. */
@@ -436,22 +436,70 @@ export type PartMaterial =
   | { readonly kind: "rod"; readonly innerRadius: number; readonly kk: number; readonly mur: number }
   | { readonly kind: "plate"; readonly layers: LayerArrays };
 
-/** c(α_k) times the kernel constant for every node (re, im), into out (length 2K). */
-export function partCoefficients(kernel: PartKernel, material: PartMaterial, out: Float64Array): void {
-  const cc = new Float64Array(2);
-  const K = kernel.rule.nodes.length;
+/**
+ * The material-independent Bessel factors of a rod kernel's reflection coefficient at every α
+ * node: exponentially scaled I0, I1, K0, K1 at α·a and, for a tube of bore a1, the air bore's
+ * ratio α I0(α a1)/I1(α a1) (0 for a bar).
+ */
+interface RodNodeFactors {
+  readonly innerRadius: number;
+  readonly i0: Float64Array;
+  readonly i1: Float64Array;
+  readonly k0: Float64Array;
+  readonly k1: Float64Array;
+  readonly bore: Float64Array;
+}
+
+/** The rod factors by kernel, for the bore radius last used (a part geometry keeps one bore). */
+const rodFactors = new WeakMap<PartKernel, RodNodeFactors>();
+
+function rodFactorsOf(kernel: PartKernel, radius: number, innerRadius: number): RodNodeFactors {
+  const known = rodFactors.get(kernel);
+  if (known !== undefined && known.innerRadius === innerRadius) return known;
+  const nodes = kernel.rule.nodes;
+  const K = nodes.length;
+  const f: RodNodeFactors = { innerRadius, i0: new Float64Array(K), i1: new Float64Array(K), k0: new Float64Array(K), k1: new Float64Array(K), bore: new Float64Array(K) };
+  const solid = innerRadius < 1e-9 * radius;
   for (let k = 0; k < K; k++) {
-    const alpha = kernel.rule.nodes[k]!;
-    let factor: number;
-    if (material.kind === "rod" && kernel.geometry.kind === "rod") {
-      rodReflectionScaled(alpha, kernel.geometry.radius, material.innerRadius, material.kk, material.mur, cc);
-      factor = 2 * MU_0;
-    } else if (material.kind === "plate") {
-      reflectionInto(alpha, material.layers, cc);
-      factor = Math.PI * MU_0;
-    } else {
-      throw new Error("internal: part material and kernel differ");
+    const alpha = nodes[k]!;
+    const x = alpha * radius;
+    f.i0[k] = besselI0Scaled(x);
+    f.i1[k] = besselI1Scaled(x);
+    f.k0[k] = besselK0Scaled(x);
+    f.k1[k] = besselK1Scaled(x);
+    f.bore[k] = solid ? 0 : (alpha * besselI0Scaled(alpha * innerRadius)) / besselI1Scaled(alpha * innerRadius);
+  }
+  rodFactors.set(kernel, f);
+  return f;
+}
+
+/** Scratch of {@link partCoefficients} (one reflection coefficient). */
+const COEFFICIENT = new Float64Array(2);
+
+/**
+ * c(α_k) times the kernel constant for every node (re, im), into out (length 2K). For a rod the
+ * material-independent Bessel factors are computed once per kernel and bore
+ * ({@link rodReflectionScaledFrom}: bit-identical to evaluating them each time); allocates
+ * nothing after the first call.
+ */
+export function partCoefficients(kernel: PartKernel, material: PartMaterial, out: Float64Array): void {
+  const cc = COEFFICIENT;
+  const K = kernel.rule.nodes.length;
+  if (material.kind === "rod" && kernel.geometry.kind === "rod") {
+    const a = kernel.geometry.radius;
+    const f = rodFactorsOf(kernel, a, material.innerRadius);
+    const factor = 2 * MU_0;
+    for (let k = 0; k < K; k++) {
+      rodReflectionScaledFrom(kernel.rule.nodes[k]!, a, material.innerRadius, material.kk, material.mur, f.i0[k]!, f.i1[k]!, f.k0[k]!, f.k1[k]!, f.bore[k]!, cc);
+      out[2 * k] = cc[0]! * factor;
+      out[2 * k + 1] = cc[1]! * factor;
     }
+    return;
+  }
+  if (material.kind !== "plate") throw new Error("internal: part material and kernel differ");
+  for (let k = 0; k < K; k++) {
+    reflectionInto(kernel.rule.nodes[k]!, material.layers, cc);
+    const factor = Math.PI * MU_0;
     out[2 * k] = cc[0]! * factor;
     out[2 * k + 1] = cc[1]! * factor;
   }

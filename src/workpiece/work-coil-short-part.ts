@@ -22,16 +22,58 @@ import { complexGeneralSolve } from "../special/complex-symmetric-solve.js";
 import { gaussLegendreRule } from "../special/internal.js";
 
 /**
- * Measured error of the reflected resistance of a short part from the long part's exact
- * coupling times this module's end-effect factor, against the library's axisymmetric field
- * solver (scripts/measurements/short-magnetic-part.ts: bars of radius 30 mm and rings of wall
- * 12 mm in a 6-turn coil of radius 75 mm, length 0.35–0.9 × the coil's, μr 3–300, outer radius
- * 10–640 skin depths, metal resistivities): `thick` where the part's thinnest radial section w
- * is ≥ 100 δ and ≥ 0.09·μr·δ (measured 1.7 %), `general` where w ≥ 5 δ and w ≥ 0.09·μr·δ
- * (12.5 %), `thin` where w < 5 δ (24 %). Below 0.09·μr·δ flux crosses the section and the
- * surface impedance fails (up to 7.3 ×).
+ * Where a short part's end-effect correction stands, by its thinnest section w against the skin
+ * depth δ and against μr·δ (see {@link shortPartSection}): `thick` w ≥ 100 δ and w ≥ 0.15 μr·δ;
+ * `general` 5 δ ≤ w < 100 δ and w ≥ 0.15 μr·δ; `thin` w < 5 δ and w ≥ 0.15 μr·δ; `outside`
+ * w < 0.15 μr·δ (the flux crosses the whole section, which a surface impedance cannot hold).
  */
-export const SHORT_PART_FACTOR_ERROR = { thick: 0.02, general: 0.13, thin: 0.25 } as const;
+export type ShortPartTier = "thick" | "general" | "thin" | "outside";
+
+/**
+ * The thinnest section of a bar, tube or ring that decides how well the surface-impedance end
+ * factor holds [m]: the radial section (bar radius, or wall) or half the part's length,
+ * whichever is smaller — the field enters a short part through its end faces too, and a disc
+ * thinner than a few μr·δ lets the flux through axially (measured: scripts/measurements/
+ * short-part-grid.ts, where the radial section alone left errors up to 64 % in the tiers).
+ *
+ * @internal
+ */
+export function shortPartSection(outerRadius: number, innerRadius: number, length: number): number {
+  return Math.min(outerRadius - innerRadius, length / 2);
+}
+
+/**
+ * Below this many μr·δ the part's thinnest section lets the flux through: `outside`. Measured:
+ * between 0.09 and 0.15 μr·δ the reflected resistance was still up to 21 % off (short-part grid),
+ * from 0.15 on within the `general` bound.
+ */
+const OUTSIDE_FLUX_RATIO = 0.15;
+
+/** The tier of {@link ShortPartTier} for a section w [m], skin depth δ [m] and μr. @internal */
+export function shortPartTier(section: number, skinDepth: number, relativePermeability: number): ShortPartTier {
+  if (section < OUTSIDE_FLUX_RATIO * relativePermeability * skinDepth) return "outside";
+  if (section < 5 * skinDepth) return "thin";
+  return section >= 100 * skinDepth ? "thick" : "general";
+}
+
+/**
+ * Measured error of `workCoilImpedance` for a magnetic part shorter than the coil (the long part's
+ * exact coupling times this module's end-effect factor) against the library's axisymmetric field
+ * solver (scripts/measurements/short-part-grid.ts, table in docs/workpiece.md: tube solenoids of
+ * length/diameter 0.3, 1, 2 and 4; bars and rings 0.3–0.9 × the coil's length; μr 20, 100, 600;
+ * 3–150 skin depths; metal resistivities; and scripts/measurements/short-magnetic-part.ts: the
+ * bearing-race coil, μr 3–300), by {@link ShortPartTier} of the section {@link shortPartSection}:
+ * the largest relative error of the reflected resistance, and of ΔL as a fraction of the empty
+ * coil's inductance (measured: thick 5.8 % and 1.09 %, general 9.2 % and 1.16 %, thin 24.2 % and
+ * 4.35 %, the thin and general maxima from the bearing-race coil's μr 3 ring). `outside` is beyond
+ * the model (the largest error seen, 23 × and 78 %, not a bound).
+ */
+export const SHORT_PART_FACTOR_ERROR = {
+  thick: { resistance: 0.06, inductance: 0.011 },
+  general: { resistance: 0.095, inductance: 0.012 },
+  thin: { resistance: 0.25, inductance: 0.044 },
+  outside: { resistance: 24, inductance: 0.79 },
+} as const;
 
 /**
  * Weight of the non-magnetic correction at a relative permeability: 1 at μr = 1, falling
@@ -259,10 +301,11 @@ const NODES_PER_OCTAVE = 4;
  * cubic Lagrange polynomials (within 1e-4 of the direct solve).
  *
  * Measured against the library's axisymmetric field solver (scripts/measurements/
- * short-magnetic-part.ts: a bar and a ring in a 6-turn coil, length 0.35–0.9 × the coil's,
- * μr 20–300, radius 10–640 skin depths), the long part's exact coupling times this factor
- * gives the short part's reflected resistance within the numbers stated in
- * `SHORT_PART_FACTOR_ERROR`.
+ * short-part-grid.ts: tube solenoids of length/diameter 0.3–4, bars and rings 0.3–0.9 × the
+ * coil's length, μr 20–600, 3–150 skin depths; and scripts/measurements/short-magnetic-part.ts:
+ * the bearing-race coil, μr 3–300), the long part's exact coupling times this factor gives the
+ * short part's reflected resistance within the numbers stated in `SHORT_PART_FACTOR_ERROR` for
+ * the tier of the part's thinnest section ({@link shortPartSection}, {@link shortPartTier}).
  *
  * @internal
  */
