@@ -101,6 +101,9 @@ until python3 -c "import urllib.request; urllib.request.urlopen('http://127.0.0.
   i=$((i + 1)); [ "$i" -lt 50 ] || { echo "browser-check: static server did not start" >&2; exit 1; }; sleep 0.1
 done
 
+# a killed browser's child processes may still write into its profile for a moment: retry,
+# and never fail the check on a temporary directory
+drop_profile() { rm -rf "$1" 2>/dev/null || { sleep 1; rm -rf "$1" 2>/dev/null; } || true; }
 FLAGS="--headless --no-sandbox --disable-gpu --disable-quic --disable-background-networking --disable-component-update --disable-sync --no-first-run --enable-logging=stderr --v=0"
 status=0
 for page in report bundle; do
@@ -108,7 +111,7 @@ for page in report bundle; do
   profile=$(mktemp -d)
   "$CHROMIUM" $FLAGS --user-data-dir="$profile" --virtual-time-budget=10000 --dump-dom "$url" >"$OUT/$page.dom.html" 2>"$OUT/$page.console.log" || true
   "$CHROMIUM" $FLAGS --user-data-dir="$profile" --virtual-time-budget=10000 --window-size=1100,2400 --screenshot="$OUT/$page.png" "$url" >/dev/null 2>&1 || true
-  rm -rf "$profile"
+  drop_profile "$profile"
   if grep -E "CONSOLE|Uncaught" "$OUT/$page.console.log" | grep -qiE "error|uncaught"; then
     echo "browser-check: $page: console errors:" >&2; grep -E "CONSOLE|Uncaught" "$OUT/$page.console.log" >&2; status=1
   fi
@@ -141,7 +144,7 @@ until grep -q "pool-result=" "$OUT/server.log"; do
 done
 kill "$BROWSER" 2>/dev/null || true
 wait "$BROWSER" 2>/dev/null || true
-rm -rf "$profile"
+drop_profile "$profile"
 pool=$(grep -o "pool-result=[a-z]*&text=[^ ]*" "$OUT/server.log" | head -n 1 | python3 -c "import sys, urllib.parse; q = urllib.parse.parse_qs(sys.stdin.read().strip()); print(q.get('pool-result', ['none'])[0] + ': ' + q.get('text', [''])[0])")
 case "$pool" in
   ok:*) echo "browser-check: worker pool OK (${pool#ok: })" ;;
