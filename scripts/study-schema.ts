@@ -14,7 +14,9 @@
  * - `QuantityInput` is text with a unit: the unit is the one in brackets in the member's TSDoc
  *   (`[m]`, `[V]`, `[W/(m²·K)]`), the sign from `> 0` / `≥ 0` there, and the grammar is the
  *   reader's own (src/study/quantity-text.ts), so the two cannot drift apart;
- * - `number` is a count or a ratio: `integer ≥ N`, `in [a, b]` or `in (a, b]` from the TSDoc.
+ * - `number` is a count or a ratio: `integer ≥ N`, `in [a, b]` or `in (a, b]` from the TSDoc;
+ * - "needs `other`" in an optional member's TSDoc is `dependentRequired` (the member only with
+ *   `other`; a value condition such as "> 0" stays the reader's).
  * Anything else stops the script with an error, so a new field cannot slip through unmapped.
  */
 import { readFileSync, writeFileSync } from "node:fs";
@@ -140,6 +142,7 @@ function members(d: ts.InterfaceDeclaration): ts.PropertySignature[] {
 function objectSchema(d: ts.InterfaceDeclaration): Schema {
   const properties: Record<string, Schema> = {};
   const required: string[] = [];
+  const dependentRequired: Record<string, string[]> = {};
   for (const member of members(d)) {
     const type = member.type ?? fail(member, "a member without a type");
     if (type.kind === ts.SyntaxKind.NeverKeyword) continue;
@@ -148,8 +151,12 @@ function objectSchema(d: ts.InterfaceDeclaration): Schema {
     const schema = memberSchema(member, type, doc);
     properties[name] = doc === "" ? schema : { description: doc, ...schema };
     if (member.questionToken === undefined) required.push(name);
+    // "needs `other`" in an optional member's TSDoc: the member may only appear with `other`
+    const needs = /needs `(\w+)`/u.exec(doc)?.[1];
+    if (needs !== undefined) dependentRequired[name] = [needs];
   }
-  return { type: "object", additionalProperties: false, required, properties };
+  const object: Schema = { type: "object", additionalProperties: false, required, properties };
+  return Object.keys(dependentRequired).length === 0 ? object : { ...object, dependentRequired };
 }
 
 function memberSchema(member: ts.PropertySignature, type: ts.TypeNode, doc: string): Schema {
