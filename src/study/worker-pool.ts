@@ -274,11 +274,21 @@ export async function* runPool(
   where: string,
   weight = 1,
 ): AsyncGenerator<unknown, void, undefined> {
-  const { signal, onProgress } = options;
+  const report = progressReporter(options.onProgress, total, weight);
+  if (isAborted(options.signal)) throw abortError(options.signal as AbortSignal);
+  const source = batchSource(items, total, options.workers);
+  if (options.workers === 0) yield* runOnCallingThread(job, local, source, total, options.signal, report);
+  else yield* runOnWorkers(job, source, total, options, where, report);
+}
+
+/** Reports progress after `done` items: at most every 50 ms, always when `force`. */
+type ProgressReport = (done: number, force: boolean) => void;
+
+/** The `onProgress` caller of a run of `total` items of `weight` designs each. */
+function progressReporter(onProgress: ((progress: HeaterProgress) => void) | undefined, total: number, weight: number): ProgressReport {
   const started = Date.now();
   let lastReport = -Infinity;
-  let done = 0;
-  const report = (force: boolean): void => {
+  return (done, force) => {
     if (onProgress === undefined) return;
     const now = Date.now();
     if (!force && now - lastReport < 50) return;
@@ -288,128 +298,177 @@ export async function* runPool(
     const all = total * weight;
     onProgress({ done: designs, total: all, elapsed, eta: designs === 0 ? null : (elapsed / designs) * (all - designs) });
   };
-  if (isAborted(signal)) throw abortError(signal as AbortSignal);
-  const iterator = items[Symbol.iterator]();
-  const batch = batchSize(total, options.workers);
-  let taken = 0;
-  const nextBatch = (): unknown[] => {
-    const size = options.workers === 0 ? batch : nextBatchSize(total - taken, batch, options.workers);
-    const out: unknown[] = [];
-    while (out.length < size) {
-      const r = iterator.next();
-      if (r.done === true) break;
-      out.push(r.value);
-    }
-    taken += out.length;
-    return out;
-  };
+}
 
-  if (options.workers === 0) {
-    let lastYield = Date.now();
-    for (;;) {
-      const chunk = nextBatch();
-      if (chunk.length === 0) break;
-      for (const item of chunk) {
-        if (isAborted(signal)) throw abortError(signal as AbortSignal);
-        const [result] = local(job.context, [item]);
-        done++;
-        yield result;
-        report(done === total);
-        if (Date.now() - lastYield > 20) {
-          await yieldToEventLoop();
-          lastYield = Date.now();
-        }
+/** The items cut into batches: `next()` takes the next batch (empty at the end). */
+interface BatchSource {
+  /** The full batch size. */
+  readonly batch: number;
+  next(): unknown[];
+}
+
+function batchSource(items: Iterable<unknown>, total: number, workers: number): BatchSource {
+  const iterator = items[Symbol.iterator]();
+  const batch = batchSize(total, workers);
+  let taken = 0;
+  return {
+    batch,
+    next: () => {
+      const size = workers === 0 ? batch : nextBatchSize(total - taken, batch, workers);
+      const out: unknown[] = [];
+      while (out.length < size) {
+        const r = iterator.next();
+        if (r.done === true) break;
+        out.push(r.value);
+      }
+      taken += out.length;
+      return out;
+    },
+  };
+}
+
+/** `workers: 0`: every item on this thread, checking the signal between items and yielding to the event loop at least every 20 ms. */
+async function* runOnCallingThread(
+  job: PoolJob,
+  local: TaskRunner,
+  source: BatchSource,
+  total: number,
+  signal: AbortSignal | undefined,
+  report: ProgressReport,
+): AsyncGenerator<unknown, void, undefined> {
+  let done = 0;
+  let lastYield = Date.now();
+  for (;;) {
+    const chunk = source.next();
+    if (chunk.length === 0) break;
+    for (const item of chunk) {
+      if (isAborted(signal)) throw abortError(signal as AbortSignal);
+      const [result] = local(job.context, [item]);
+      done++;
+      yield result;
+      report(done, done === total);
+      if (Date.now() - lastYield > 20) {
+        await yieldToEventLoop();
+        lastYield = Date.now();
       }
     }
-    if (isAborted(signal)) throw abortError(signal as AbortSignal);
-    return;
+  }
+  if (isAborted(signal)) throw abortError(signal as AbortSignal);
+}
+
+/** The workers of a run and what they have sent back. */
+class WorkerCrew {
+  /** Results by batch id (the index of the batch's first item), not yet yielded. */
+  readonly ready = new Map<number, unknown[]>();
+  /** The worker running each batch id. */
+  readonly busy = new Map<number, WorkerHandle>();
+  readonly idle: WorkerHandle[] = [];
+  readonly handles: WorkerHandle[] = [];
+  failure: { error: unknown } | null = null;
+  private wake: (() => void) | null = null;
+
+  /** Wakes the run's loop if it waits. */
+  notify(): void {
+    const w = this.wake;
+    this.wake = null;
+    w?.();
   }
 
+  /** Resolves at the next message, failure or abort. */
+  next(): Promise<void> {
+    return new Promise<void>((resolve) => {
+      this.wake = resolve;
+    });
+  }
+
+  /** Starts one worker on `job`, idle. */
+  async start(url: URL | string, job: PoolJob): Promise<void> {
+    let handle: WorkerHandle | null = null;
+    const mine = (m: FromWorker): void => {
+      if (m.type === "error") {
+        this.failure ??= { error: rebuildError(m.error) };
+      } else {
+        this.ready.set(m.id, m.results);
+        this.busy.delete(m.id);
+        if (handle !== null) this.idle.push(handle);
+      }
+      this.notify();
+    };
+    handle = await startWorker(url, mine, (e) => {
+      this.failure ??= { error: e };
+      this.notify();
+    });
+    this.handles.push(handle);
+    handle.post({ type: "job", kind: job.kind, context: job.context });
+    this.idle.push(handle);
+  }
+
+  terminate(): void {
+    for (const h of this.handles) h.terminate();
+  }
+}
+
+/** `workers ≥ 1`: batches handed to idle workers within a window of `4 × workers` batches, results yielded in item order. */
+async function* runOnWorkers(
+  job: PoolJob,
+  source: BatchSource,
+  total: number,
+  options: CheckedPoolOptions,
+  where: string,
+  report: ProgressReport,
+): AsyncGenerator<unknown, void, undefined> {
+  const { signal } = options;
   const url = options.workerUrl ?? (await defaultWorkerUrl(where));
-  const workerCount = Math.min(options.workers, Math.max(1, Math.ceil(total / batch)));
-  const ready = new Map<number, unknown[]>();
-  let failure: { error: unknown } | null = null;
-  let wake: (() => void) | null = null;
-  const notify = (): void => {
-    const w = wake;
-    wake = null;
-    w?.();
-  };
-  const idle: WorkerHandle[] = [];
-  const busy = new Map<number, WorkerHandle>();
-  const handles: WorkerHandle[] = [];
+  const workerCount = Math.min(options.workers, Math.max(1, Math.ceil(total / source.batch)));
+  const crew = new WorkerCrew();
   const onAbort = (): void => {
-    for (const h of handles) h.terminate();
-    notify();
+    crew.terminate();
+    crew.notify();
   };
   signal?.addEventListener("abort", onAbort, { once: true });
   try {
-    for (let k = 0; k < workerCount; k++) {
-      let handle: WorkerHandle | null = null;
-      const mine = (m: FromWorker): void => {
-        if (m.type === "error") {
-          failure ??= { error: rebuildError(m.error) };
-        } else {
-          ready.set(m.id, m.results);
-          busy.delete(m.id);
-          if (handle !== null) idle.push(handle);
-        }
-        notify();
-      };
-      handle = await startWorker(
-        url,
-        mine,
-        (e) => {
-          failure ??= { error: e };
-          notify();
-        },
-      );
-      handles.push(handle);
-      handle.post({ type: "job", kind: job.kind, context: job.context });
-      idle.push(handle);
-    }
+    for (let k = 0; k < workerCount; k++) await crew.start(url, job);
+    let done = 0;
     let nextId = 0; // id of a batch = index of its first item
     let nextYield = 0;
     let exhausted = false;
-    const window = workerCount * batch * 4;
+    const window = workerCount * source.batch * 4;
     for (;;) {
       if (isAborted(signal)) throw abortError(signal as AbortSignal);
-      if (failure !== null) throw (failure as { error: unknown }).error;
+      if (crew.failure !== null) throw crew.failure.error;
       // hand out batches while workers are idle and the window has room
-      while (!exhausted && idle.length > 0 && nextId - nextYield < window) {
-        const chunk = nextBatch();
+      while (!exhausted && crew.idle.length > 0 && nextId - nextYield < window) {
+        const chunk = source.next();
         if (chunk.length === 0) {
           exhausted = true;
           break;
         }
-        const h = idle.pop() as WorkerHandle;
-        busy.set(nextId, h);
+        const h = crew.idle.pop() as WorkerHandle;
+        crew.busy.set(nextId, h);
         h.post({ type: "run", id: nextId, items: chunk });
         nextId += chunk.length;
       }
       // deliver what is ready, in order
-      let results = ready.get(nextYield);
+      let results = crew.ready.get(nextYield);
       if (results !== undefined) {
         while (results !== undefined) {
-          ready.delete(nextYield);
+          crew.ready.delete(nextYield);
           for (const r of results) {
             if (isAborted(signal)) throw abortError(signal as AbortSignal);
             done++;
             nextYield++;
             yield r;
           }
-          report(done === total);
-          results = ready.get(nextYield);
+          report(done, done === total);
+          results = crew.ready.get(nextYield);
         }
         continue;
       }
-      if (exhausted && busy.size === 0 && ready.size === 0) break;
-      await new Promise<void>((resolve) => {
-        wake = resolve;
-      });
+      if (exhausted && crew.busy.size === 0 && crew.ready.size === 0) break;
+      await crew.next();
     }
   } finally {
     signal?.removeEventListener("abort", onAbort);
-    for (const h of handles) h.terminate();
+    crew.terminate();
   }
 }
