@@ -130,37 +130,70 @@ const GAUSS = gaussLegendreRule(GAUSS_ORDER);
 const COARSE = gaussLegendreRule(2);
 const FINE = gaussLegendreRule(8);
 
+/**
+ * A growable column of numbers: a Float64Array that doubles when full. Every column of the
+ * builder has the same element kind and shape from the first cell on (plain arrays would change
+ * their elements kind from small integers to doubles at the first fraction, which the optimised
+ * code of the cell builders would then have to handle).
+ */
+class Column {
+  data = new Float64Array(256);
+  length = 0;
+  push(x: number): void {
+    if (this.length === this.data.length) {
+      const grown = new Float64Array(2 * this.data.length);
+      grown.set(this.data);
+      this.data = grown;
+    }
+    this.data[this.length++] = x;
+  }
+  /** The value at index i (< length). */
+  at(i: number): number {
+    return this.data[i]!;
+  }
+  toFloat64(): Float64Array {
+    return this.data.slice(0, this.length);
+  }
+  toInt32(): Int32Array {
+    return Int32Array.from(this.data.subarray(0, this.length));
+  }
+}
+
 interface Builder {
-  turn: number[];
-  r: number[];
-  z: number[];
-  area: number[];
-  inverseRadius: number[];
-  size: number[];
-  polyStart: number[];
-  polyR: number[];
-  polyZ: number[];
-  polyArea: number[];
-  gaussStart: number[];
-  gaussR: number[];
-  gaussZ: number[];
-  gaussW: number[];
-  coarseR: number[];
-  coarseZ: number[];
-  coarseW: number[];
+  readonly turn: Column;
+  readonly r: Column;
+  readonly z: Column;
+  readonly area: Column;
+  readonly inverseRadius: Column;
+  readonly size: Column;
+  readonly polyStart: Column;
+  readonly polyR: Column;
+  readonly polyZ: Column;
+  readonly polyArea: Column;
+  readonly gaussStart: Column;
+  readonly gaussR: Column;
+  readonly gaussZ: Column;
+  readonly gaussW: Column;
+  readonly coarseR: Column;
+  readonly coarseZ: Column;
+  readonly coarseW: Column;
   /** local (u, v) centroid of each cell, to find mirror images */
-  localU: number[];
-  localV: number[];
+  readonly localU: Column;
+  readonly localV: Column;
 }
 
 function newBuilder(): Builder {
-  return {
-    turn: [], r: [], z: [], area: [], inverseRadius: [], size: [],
-    polyStart: [0], polyR: [], polyZ: [], polyArea: [],
-    gaussStart: [0], gaussR: [], gaussZ: [], gaussW: [],
-    coarseR: [], coarseZ: [], coarseW: [],
-    localU: [], localV: [],
+  const c = (): Column => new Column();
+  const b: Builder = {
+    turn: c(), r: c(), z: c(), area: c(), inverseRadius: c(), size: c(),
+    polyStart: c(), polyR: c(), polyZ: c(), polyArea: c(),
+    gaussStart: c(), gaussR: c(), gaussZ: c(), gaussW: c(),
+    coarseR: c(), coarseZ: c(), coarseW: c(),
+    localU: c(), localV: c(),
   };
+  b.polyStart.push(0);
+  b.gaussStart.push(0);
+  return b;
 }
 
 /** Signed area of a polygon (counter-clockwise positive). */
@@ -404,71 +437,87 @@ export function buildCells(
     addTurn(b, t, centresR[t]!, centresZ[t]!, section, ctl);
   }
   const coilCells = b.r.length;
-  if (part !== undefined) {
-    const { rBounds, zBounds } = part;
-    for (let i = 0; i + 1 < rBounds.length; i++) {
-      for (let k = 0; k + 1 < zBounds.length; k++) {
-        addRectangle(b, -1, 0, 0, rBounds[i]!, rBounds[i + 1]!, zBounds[k]!, zBounds[k + 1]!);
-      }
-    }
-  }
+  if (part !== undefined) addPartBlock(b, part);
   const n = b.r.length;
-  const perTurn = coilCells / turns;
   const mirror = new Int32Array(n).fill(-1);
   if (mirrorSymmetric) {
-    // turn t mirrors to turn T−1−t (its centre at −z); within the turn, cell with local (u, v) ↔ (u, −v)
-    for (let t = 0; t < turns; t++) {
-      const tm = turns - 1 - t;
-      for (let i = firstCell[t]!; i < firstCell[t]! + perTurn; i++) {
-        const u = b.localU[i]!;
-        const v = b.localV[i]!;
-        let best = -1;
-        let bestD = Infinity;
-        for (let j = firstCell[tm]!; j < firstCell[tm]! + perTurn; j++) {
-          const d = Math.abs(b.localU[j]! - u) + Math.abs(b.localV[j]! + v);
-          if (d < bestD) {
-            bestD = d;
-            best = j;
-          }
-        }
-        mirror[i] = bestD <= 1e-9 * b.size[i]! ? best : -1;
-      }
+    mirrorTurnCells(b, firstCell, coilCells / turns, mirror);
+    mirrorPartCells(b, coilCells, mirror);
+    if (mirror.some((m) => m < 0)) mirror.fill(-1);
+  }
+  return cellSetOf(b, turns, mirror);
+}
+
+/** The cells of a part block (turn −1). */
+function addPartBlock(b: Builder, { rBounds, zBounds }: PartBlock): void {
+  for (let i = 0; i + 1 < rBounds.length; i++) {
+    for (let k = 0; k + 1 < zBounds.length; k++) {
+      addRectangle(b, -1, 0, 0, rBounds[i]!, rBounds[i + 1]!, zBounds[k]!, zBounds[k + 1]!);
     }
-    for (let i = coilCells; i < n; i++) {
+  }
+}
+
+/** Turn t mirrors to turn T−1−t (its centre at −z); within the turn, the cell with local (u, v) to (u, −v); −1 where none is found. */
+function mirrorTurnCells(b: Builder, firstCell: readonly number[], perTurn: number, mirror: Int32Array): void {
+  const turns = firstCell.length;
+  for (let t = 0; t < turns; t++) {
+    const tm = turns - 1 - t;
+    for (let i = firstCell[t]!; i < firstCell[t]! + perTurn; i++) {
+      const u = b.localU.at(i);
+      const v = b.localV.at(i);
       let best = -1;
       let bestD = Infinity;
-      for (let j = coilCells; j < n; j++) {
-        const d = Math.abs(b.r[j]! - b.r[i]!) + Math.abs(b.z[j]! + b.z[i]!);
+      for (let j = firstCell[tm]!; j < firstCell[tm]! + perTurn; j++) {
+        const d = Math.abs(b.localU.at(j) - u) + Math.abs(b.localV.at(j) + v);
         if (d < bestD) {
           bestD = d;
           best = j;
         }
       }
-      mirror[i] = bestD <= 1e-9 * b.size[i]! ? best : -1;
+      mirror[i] = bestD <= 1e-9 * b.size.at(i) ? best : -1;
     }
-    if (mirror.some((m) => m < 0)) mirror.fill(-1);
   }
+}
+
+/** The part cells' images under z → −z; −1 where none is found. */
+function mirrorPartCells(b: Builder, coilCells: number, mirror: Int32Array): void {
+  const n = b.r.length;
+  for (let i = coilCells; i < n; i++) {
+    let best = -1;
+    let bestD = Infinity;
+    for (let j = coilCells; j < n; j++) {
+      const d = Math.abs(b.r.at(j) - b.r.at(i)) + Math.abs(b.z.at(j) + b.z.at(i));
+      if (d < bestD) {
+        bestD = d;
+        best = j;
+      }
+    }
+    mirror[i] = bestD <= 1e-9 * b.size.at(i) ? best : -1;
+  }
+}
+
+function cellSetOf(b: Builder, turns: number, mirror: Int32Array): CellSet {
   return {
-    n,
+    n: b.r.length,
     turns,
-    turn: Int32Array.from(b.turn),
-    r: Float64Array.from(b.r),
-    z: Float64Array.from(b.z),
-    area: Float64Array.from(b.area),
-    inverseRadius: Float64Array.from(b.inverseRadius),
-    size: Float64Array.from(b.size),
+    turn: b.turn.toInt32(),
+    r: b.r.toFloat64(),
+    z: b.z.toFloat64(),
+    area: b.area.toFloat64(),
+    inverseRadius: b.inverseRadius.toFloat64(),
+    size: b.size.toFloat64(),
     mirror,
-    polyStart: Int32Array.from(b.polyStart),
-    polyR: Float64Array.from(b.polyR),
-    polyZ: Float64Array.from(b.polyZ),
-    polyArea: Float64Array.from(b.polyArea),
-    gaussStart: Int32Array.from(b.gaussStart),
-    gaussR: Float64Array.from(b.gaussR),
-    gaussZ: Float64Array.from(b.gaussZ),
-    gaussW: Float64Array.from(b.gaussW),
-    coarseR: Float64Array.from(b.coarseR),
-    coarseZ: Float64Array.from(b.coarseZ),
-    coarseW: Float64Array.from(b.coarseW),
+    polyStart: b.polyStart.toInt32(),
+    polyR: b.polyR.toFloat64(),
+    polyZ: b.polyZ.toFloat64(),
+    polyArea: b.polyArea.toFloat64(),
+    gaussStart: b.gaussStart.toInt32(),
+    gaussR: b.gaussR.toFloat64(),
+    gaussZ: b.gaussZ.toFloat64(),
+    gaussW: b.gaussW.toFloat64(),
+    coarseR: b.coarseR.toFloat64(),
+    coarseZ: b.coarseZ.toFloat64(),
+    coarseW: b.coarseW.toFloat64(),
   };
 }
 

@@ -497,30 +497,40 @@ function solveMesh(geo: CoilGeometry, mesh: Mesh, frequency: number, kernelPart?
   const { red, cells } = mesh;
   const m = red.m;
   const omega = 2 * Math.PI * frequency;
+  const rDiag = Float64Array.from(mesh.R);
+  if (geo.conductor.kind === "litz") addLitzResistances(geo, mesh, frequency, rDiag);
   const zRe = new Float64Array(m * m);
   const zIm = new Float64Array(m * m);
-  for (let k = 0; k < m * m; k++) zIm[k] = omega * mesh.L[k]!;
-  const rDiag = Float64Array.from(mesh.R);
-  if (geo.conductor.kind === "litz") {
-    // one cell per turn: its resistance is the homogenised litz turn resistance
-    for (let a = 0; a < m; a++) {
-      if (red.group[a]! < 0) continue;
-      const cell = red.members[red.memberStart[a]!]!;
-      const count = red.memberStart[a + 1]! - red.memberStart[a]!;
-      rDiag[a] = rDiag[a]! + count * litzTurnResistance(geo, frequency, cells.turn[cell]!);
-    }
-  }
-  for (let a = 0; a < m; a++) zRe[a * m + a] = rDiag[a]!;
-  if (kernelPart !== undefined) {
-    const { kernel, material } = kernelPart;
-    const coefficients = new Float64Array(2 * kernel.rule.nodes.length);
-    partCoefficients(kernel, material, coefficients);
-    const mRe = new Float64Array(kernel.r * kernel.r);
-    const mIm = new Float64Array(kernel.r * kernel.r);
-    kernelCore(kernel, coefficients, mRe, mIm);
-    addKernel(m, kernel, mRe, mIm, omega, zRe, zIm);
-  }
+  emptyImpedanceInto(m, mesh.L, rDiag, omega, zRe, zIm);
+  if (kernelPart !== undefined) addPartCoupling(m, kernelPart, omega, zRe, zIm);
   return solveSeries(red, cells, zRe, zIm, rDiag);
+}
+
+/** The folded cell impedance of the empty coil, diag(rDiag) + jωL, into zeroed zRe, zIm (m × m). */
+function emptyImpedanceInto(m: number, l: Float64Array, rDiag: Float64Array, omega: number, zRe: Float64Array, zIm: Float64Array): void {
+  for (let a = 0; a < m; a++) zRe[a * m + a] = rDiag[a]!;
+  for (let k = 0; k < m * m; k++) zIm[k] = omega * l[k]!;
+}
+
+/** Litz: one cell per turn, whose resistance is the homogenised litz turn resistance (added to rDiag). */
+function addLitzResistances(geo: CoilGeometry, mesh: Mesh, frequency: number, rDiag: Float64Array): void {
+  const { red, cells } = mesh;
+  for (let a = 0; a < red.m; a++) {
+    if (red.group[a]! < 0) continue;
+    const cell = red.members[red.memberStart[a]!]!;
+    const count = red.memberStart[a + 1]! - red.memberStart[a]!;
+    rDiag[a] = rDiag[a]! + count * litzTurnResistance(geo, frequency, cells.turn[cell]!);
+  }
+}
+
+/** Adds the kernel part's reflected coupling jω Q M Qᵀ at omega to (zRe, zIm). */
+function addPartCoupling(m: number, { kernel, material }: KernelPart, omega: number, zRe: Float64Array, zIm: Float64Array): void {
+  const coefficients = new Float64Array(2 * kernel.rule.nodes.length);
+  partCoefficients(kernel, material, coefficients);
+  const mRe = new Float64Array(kernel.r * kernel.r);
+  const mIm = new Float64Array(kernel.r * kernel.r);
+  kernelCore(kernel, coefficients, mRe, mIm);
+  addKernel(m, kernel, mRe, mIm, omega, zRe, zIm);
 }
 
 /** Kernel cache of one mesh: reuses a kernel whose rule reaches down to the needed α scale. */
@@ -713,208 +723,280 @@ export function prepareWorkCoil(options: PrepareWorkCoilOptions): PreparedWorkCo
 }
 
 function prepared(geo: CoilGeometry, design: number, refinement: number): PreparedWorkCoil {
-  const delta = skinDepthOf(geo.resistivity, design);
-  const ctl = controlsFor(geo, delta, refinement);
-  let coilMesh: Mesh | undefined;
-  let coilMeshNoMirror: Mesh | undefined;
-  const kernels = new Map<Mesh, KernelCache>();
-  const kernelFor = (mesh: Mesh, geometry: PartGeometry, floor: number): PartKernel => {
-    let cache = kernels.get(mesh);
-    if (cache === undefined) {
-      cache = new KernelCache(mesh);
-      kernels.set(mesh, cache);
-    }
-    return cache.get(geometry, floor);
-  };
-  const emptyCache = new Map<number, Solved>();
-  const shortFactors = new Map<string, (t: number) => [number, number]>();
-  const getMesh = (mirror: boolean): Mesh => {
-    if (mirror) return (coilMesh ??= buildMesh(geo, ctl, geo.shape === "solenoid"));
-    if (geo.shape === "pancake") return (coilMesh ??= buildMesh(geo, ctl, false));
-    return (coilMeshNoMirror ??= buildMesh(geo, ctl, false));
-  };
-  const dc = dcResistanceOf(geo);
-  const impedance = (frequency: number, partInput?: WorkCoilPart): WorkCoilImpedanceResult => {
-    const where = "workCoilImpedance";
-    const f = requirePositive(where, "frequency", frequency, "Hz");
-    const part = partInput === undefined ? undefined : checkPart(where, partInput, geo);
-    let empty = emptyCache.get(f);
-    if (empty === undefined) {
-      empty = solveMesh(geo, getMesh(true), f);
-      if (emptyCache.size > 64) emptyCache.clear();
-      emptyCache.set(f, empty);
-    }
-    const validity: ValidityNote[] = [];
-    let loaded = empty;
-    let partModel: WorkCoilImpedanceResult["partModel"] = "none";
-    let cellCount = getMesh(true).cells.n;
-    if (part !== undefined) {
-      if (part.relativePermeability > 1) validity.push(constantPermeabilityNote(part.relativePermeability));
-      if (part.shape === "plate") {
-        const { zMin, rOuter } = coilExtent(geo);
-        const top = zMin - part.gap;
-        const omega = 2 * Math.PI * f;
-        const layers = layerArrays([{ thickness: part.thickness, resistivity: part.resistivity, relativePermeability: part.relativePermeability }], omega);
-        const mesh = getMesh(false);
-        const kernel = kernelFor(mesh, { kind: "plate", top }, plateScale(layers));
-        loaded = solveMesh(geo, mesh, f, { kernel, material: { kind: "plate", layers } });
-        partModel = "plate-kernel";
-        cellCount = getMesh(false).cells.n;
-        if (part.radius < rOuter + 4 * (part.gap + part.thickness)) {
-          validity.push({
-            code: "finite-plate",
-            message: "The plate is modelled as laterally infinite; it ends within a few gaps of the coil's outer radius, so its edge (not modelled) changes the coupling.",
-            value: part.radius,
-            limit: rOuter + 4 * (part.gap + part.thickness),
-          });
-        }
-      } else if (part.relativePermeability === 1 && isShortPart(geo, part)) {
-        const block = partBlock(part, f, refinement);
-        const mirror = geo.shape === "solenoid";
-        const mesh = buildMesh(geo, ctl, mirror, block, part.resistivity);
-        loaded = solveMesh(geo, mesh, f);
-        partModel = "part-cells";
-        cellCount = mesh.cells.n;
-      } else {
-        const mirror = geo.shape === "solenoid";
-        const kk = (2 * Math.PI * f * MU_0 * part.relativePermeability) / part.resistivity;
-        const material: PartMaterial = { kind: "rod", innerRadius: part.innerRadius, kk, mur: part.relativePermeability };
-        const mesh = getMesh(mirror);
-        const floor = rodScale({ kind: "rod", radius: part.radius, innerRadius: part.innerRadius, kk, mur: part.relativePermeability }, coilExtent(geo).rOuter);
-        const kernel = kernelFor(mesh, { kind: "rod", radius: part.radius }, floor);
-        loaded = solveMesh(geo, mesh, f, { kernel, material });
-        partModel = "long-rod-kernel";
-        if (isShortPart(geo, part) && geo.shape === "solenoid") {
-          // the long part's change times the end-effect factor: the exact non-magnetic short part
-          // over the long one (own cells) blended with the surface-impedance factor at μrδ/2
-          const nonMagnetic = { ...part, relativePermeability: 1 };
-          const shortCells = solveMesh(geo, buildMesh(geo, ctl, true, partBlock(nonMagnetic, f, refinement), part.resistivity), f);
-          const kkLong = (2 * Math.PI * f * MU_0) / part.resistivity;
-          const longFloor = rodScale({ kind: "rod", radius: part.radius, innerRadius: part.innerRadius, kk: kkLong, mur: 1 }, coilExtent(geo).rOuter);
-          const longCells = solveMesh(geo, mesh, f, { kernel: kernelFor(mesh, { kind: "rod", radius: part.radius }, longFloor), material: { kind: "rod", innerRadius: part.innerRadius, kk: kkLong, mur: 1 } });
-          const change = (x: Solved): [number, number] => [x.re - x.copper, x.im - empty.im];
-          const [kr, ki] = complexQuotient(change(shortCells), change(longCells));
-          const factorKey = `${part.radius}|${part.innerRadius}|${part.length}`;
-          let factor = shortFactors.get(factorKey);
-          if (factor === undefined) {
-            factor = prepareShortPartFactor({ coilRadius: geo.centresR[0]!, turnPositions: geo.centresZ, outerRadius: part.radius, innerRadius: part.innerRadius, length: part.length });
-            shortFactors.set(factorKey, factor);
-          }
-          const [fr, fi] = factor((part.relativePermeability * skinDepthOf(part.resistivity, f, part.relativePermeability)) / 2);
-          // the surface-impedance factor, corrected towards the exact non-magnetic part by weight
-          const weight = nonMagneticWeight(part.relativePermeability);
-          let gr = fr;
-          let gi = fi;
-          if (weight > 0) {
-            const [nr, ni] = factor(skinDepthOf(part.resistivity, f) / 2);
-            const [cr, ci] = complexQuotient([kr, ki], [nr, ni]);
-            const magnitude = Math.hypot(cr, ci) ** weight;
-            const phase = weight * Math.atan2(ci, cr);
-            [gr, gi] = [fr * magnitude * Math.cos(phase) - fi * magnitude * Math.sin(phase), fr * magnitude * Math.sin(phase) + fi * magnitude * Math.cos(phase)];
-          }
-          const [zr, zi] = change(loaded);
-          const copperDenominator = longCells.copper - empty.copper;
-          const copperFactor = Math.abs(copperDenominator) > 1e-3 * empty.copper ? Math.min(2, Math.max(0, (shortCells.copper - empty.copper) / copperDenominator)) : 1;
-          const copper = empty.copper + copperFactor * (loaded.copper - empty.copper);
-          const turnCopper = loaded.turnCopper.map((c, i) => (empty.turnCopper[i] ?? 0) + copperFactor * (c - (empty.turnCopper[i] ?? 0)));
-          loaded = { ...loaded, re: copper + gr * zr - gi * zi, im: empty.im + gr * zi + gi * zr, copper, turnCopper };
-          const section = shortPartSection(part.radius, part.innerRadius, part.length);
-          const delta = skinDepthOf(part.resistivity, f, part.relativePermeability);
-          const tier = shortPartTier(section, delta, part.relativePermeability);
-          const bound = SHORT_PART_FACTOR_ERROR[tier];
-          const where = `its thinnest section (radial section or half its length, ${(section / delta).toPrecision(3)} δ and ${(section / (part.relativePermeability * delta)).toPrecision(2)} μr·δ)`;
-          validity.push({
-            code: "short-magnetic-part",
-            message:
-              `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). ` +
-              (tier === "outside"
-                ? `Here ${where} is below 0.15 μr·δ: the flux crosses the section, beyond the model (the library's axisymmetric field solver found the reflected resistance up to ${bound.resistance} × off there); use solveAxisymmetricField.`
-                : `Against the library's axisymmetric field solver (solenoids of length/diameter 0.3–4, parts 0.3–0.9 × the coil's length, μr 20–600) the reflected resistance is within ${+(100 * bound.resistance).toPrecision(3)} % and ΔL within ${+(100 * bound.inductance).toPrecision(3)} % of the empty coil's inductance for ${where}` +
-                  (part.length > coilExtent(geo).zMax - coilExtent(geo).zMin ? "; this part is longer than the coil, outside the measured range." : ".")),
-            value: part.length,
-          });
-        }
-      }
-    }
-    const omega = 2 * Math.PI * f;
-    if (f > 1.5 * design) {
-      validity.push({
-        code: "mesh-below-skin-depth",
-        message: "Evaluated above 1.5 × the design frequency of the mesh: the skin depth is resolved more coarsely than the stated accuracy assumes.",
-        value: f,
-        limit: 1.5 * design,
-      });
-    }
-    if (geo.conductor.kind === "litz") {
-      validity.push({
-        code: "litz-homogenised",
-        message: "Litz turns carry a uniform current over the bundle; strand skin and proximity losses come from litzAcRatio with the winding's own field (the part's field on the strands is not counted).",
-      });
-    }
-    const partLoss = loaded.re - loaded.copper;
-    return {
-      resistance: loaded.re,
-      inductance: loaded.im / omega,
-      reflectedResistance: loaded.re - empty.re,
-      inductanceChange: (loaded.im - empty.im) / omega,
-      emptyResistance: empty.re,
-      emptyInductance: empty.im / omega,
-      dcResistance: dc,
-      copperResistance: loaded.copper,
-      partResistance: partLoss,
-      turnResistances: Array.from(loaded.turnCopper),
-      skinDepth: skinDepthOf(geo.resistivity, f),
-      cellCount,
-      partModel,
-      validity,
-    };
-  };
-  const reduce = (options: ReduceWorkCoilOptions): ReducedWorkCoil => {
-    const where = "PreparedWorkCoil.reduce";
-    requireKnownKeys(where, "", options, ["part", "minFrequency", "maxFrequency"]);
-    const part = checkPart(where, options.part, geo);
-    const fMin = requirePositive(where, "minFrequency", options.minFrequency, "Hz");
-    const fMax = requirePositive(where, "maxFrequency", options.maxFrequency, "Hz");
-    if (!(fMax >= fMin)) throw new InputError(where, "maxFrequency", fMax, "Hz", `a finite number ≥ minFrequency (${fMin})`);
-    if (geo.conductor.kind === "litz" || (part.shape !== "plate" && part.relativePermeability === 1 && isShortPart(geo, part))) {
-      // litz (one cell per turn) is cheap in full; a short non-magnetic part has its own cells
-      return fullEvaluator(impedance, part, fMin, fMax);
-    }
-    const plate = part.shape === "plate";
-    const mesh = getMesh(!plate);
-    const { zMin, rOuter } = coilExtent(geo);
-    const geometry: PartGeometry = plate ? { kind: "plate", top: zMin - part.gap } : { kind: "rod", radius: part.radius };
-    const kernel = kernelFor(mesh, geometry, 1e-6 / rOuter);
-    const model = buildReduced(mesh, kernel, fMin, fMax);
-    const shape = part.shape;
-    const thickness = part.thickness;
-    const innerRadius = part.innerRadius;
-    return {
-      basisSize: model.k,
-      cellCount: mesh.cells.n,
-      impedance(frequency: number, resistivity: number, relativePermeability: number): ReducedWorkCoilResult {
-        const w = "ReducedWorkCoil.impedance";
-        const f = requirePositive(w, "frequency", frequency, "Hz");
-        const rho = requirePositive(w, "resistivity", resistivity, "Ω·m");
-        if (typeof relativePermeability !== "number" || !Number.isFinite(relativePermeability) || relativePermeability < 1) {
-          throw new InputError(w, "relativePermeability", relativePermeability, "", "a finite number ≥ 1");
-        }
-        const omega = 2 * Math.PI * f;
-        const material: PartMaterial =
-          shape === "plate"
-            ? { kind: "plate", layers: layerArrays([{ thickness, resistivity: rho, relativePermeability }], omega) }
-            : { kind: "rod", innerRadius, kk: (omega * MU_0 * relativePermeability) / rho, mur: relativePermeability };
-        return evaluateReduced(model, kernel, omega, material, f < fMin / 1.01 || f > fMax * 1.01);
-      },
-    };
-  };
+  const state = new CoilModelState(geo, design, refinement);
+  const impedance = (frequency: number, part?: WorkCoilPart): WorkCoilImpedanceResult => preparedImpedance(state, frequency, part);
   return {
     get cellCount() {
-      return getMesh(true).cells.n;
+      return state.mesh(true).cells.n;
     },
     designFrequency: design,
     impedance,
-    reduce,
+    reduce: (options: ReduceWorkCoilOptions): ReducedWorkCoil => reducedEvaluator(state, impedance, options),
+  };
+}
+
+/**
+ * A prepared coil's state: its geometry and mesh controls, the meshes (built on first use), the
+ * part kernels per mesh, the empty coil's solutions per frequency and the short-part factors.
+ */
+class CoilModelState {
+  readonly ctl: CellControls;
+  readonly dc: number;
+  readonly shortFactors = new Map<string, (t: number) => [number, number]>();
+  private coilMesh: Mesh | null = null;
+  private coilMeshNoMirror: Mesh | null = null;
+  private readonly kernels = new Map<Mesh, KernelCache>();
+  private readonly emptyCache = new Map<number, Solved>();
+
+  constructor(
+    readonly geo: CoilGeometry,
+    readonly design: number,
+    readonly refinement: number,
+  ) {
+    this.ctl = controlsFor(geo, skinDepthOf(geo.resistivity, design), refinement);
+    this.dc = dcResistanceOf(geo);
+  }
+
+  /** The coil's mesh, mirror-folded (solenoids) or not. */
+  mesh(mirror: boolean): Mesh {
+    const geo = this.geo;
+    if (mirror) return (this.coilMesh ??= buildMesh(geo, this.ctl, geo.shape === "solenoid"));
+    if (geo.shape === "pancake") return (this.coilMesh ??= buildMesh(geo, this.ctl, false));
+    return (this.coilMeshNoMirror ??= buildMesh(geo, this.ctl, false));
+  }
+
+  /** The part kernel of a mesh and part geometry, graded down to `floor` (cached). */
+  kernel(mesh: Mesh, geometry: PartGeometry, floor: number): PartKernel {
+    let cache = this.kernels.get(mesh);
+    if (cache === undefined) {
+      cache = new KernelCache(mesh);
+      this.kernels.set(mesh, cache);
+    }
+    return cache.get(geometry, floor);
+  }
+
+  /** The empty coil solved at frequency f (cached). */
+  empty(f: number): Solved {
+    let empty = this.emptyCache.get(f);
+    if (empty === undefined) {
+      empty = solveMesh(this.geo, this.mesh(true), f);
+      if (this.emptyCache.size > 64) this.emptyCache.clear();
+      this.emptyCache.set(f, empty);
+    }
+    return empty;
+  }
+}
+
+/** The loaded coil's solution, how the part was coupled and the cells of the model used. */
+interface Loaded {
+  readonly solved: Solved;
+  readonly partModel: WorkCoilImpedanceResult["partModel"];
+  readonly cellCount: number;
+}
+
+/** `PreparedWorkCoil.impedance`: checks the inputs, solves the empty and the loaded coil, assembles the result. */
+function preparedImpedance(state: CoilModelState, frequency: number, partInput?: WorkCoilPart): WorkCoilImpedanceResult {
+  const where = "workCoilImpedance";
+  const geo = state.geo;
+  const f = requirePositive(where, "frequency", frequency, "Hz");
+  const part = partInput === undefined ? undefined : checkPart(where, partInput, geo);
+  const empty = state.empty(f);
+  const validity: ValidityNote[] = [];
+  let loaded: Loaded = { solved: empty, partModel: "none", cellCount: state.mesh(true).cells.n };
+  if (part !== undefined) {
+    if (part.relativePermeability > 1) validity.push(constantPermeabilityNote(part.relativePermeability));
+    if (part.shape === "plate") loaded = plateLoaded(state, part, f, validity);
+    else if (part.relativePermeability === 1 && isShortPart(geo, part)) loaded = partCellsLoaded(state, part, f);
+    else loaded = rodLoaded(state, part, f, empty, validity);
+  }
+  if (f > 1.5 * state.design) {
+    validity.push({
+      code: "mesh-below-skin-depth",
+      message: "Evaluated above 1.5 × the design frequency of the mesh: the skin depth is resolved more coarsely than the stated accuracy assumes.",
+      value: f,
+      limit: 1.5 * state.design,
+    });
+  }
+  if (geo.conductor.kind === "litz") {
+    validity.push({
+      code: "litz-homogenised",
+      message: "Litz turns carry a uniform current over the bundle; strand skin and proximity losses come from litzAcRatio with the winding's own field (the part's field on the strands is not counted).",
+    });
+  }
+  return impedanceResult(state, f, empty, loaded, validity);
+}
+
+/** The result of `impedance` from the empty and the loaded solutions. */
+function impedanceResult(state: CoilModelState, f: number, empty: Solved, loaded: Loaded, validity: ValidityNote[]): WorkCoilImpedanceResult {
+  const omega = 2 * Math.PI * f;
+  const x = loaded.solved;
+  const partLoss = x.re - x.copper;
+  return {
+    resistance: x.re,
+    inductance: x.im / omega,
+    reflectedResistance: x.re - empty.re,
+    inductanceChange: (x.im - empty.im) / omega,
+    emptyResistance: empty.re,
+    emptyInductance: empty.im / omega,
+    dcResistance: state.dc,
+    copperResistance: x.copper,
+    partResistance: partLoss,
+    turnResistances: Array.from(x.turnCopper),
+    skinDepth: skinDepthOf(state.geo.resistivity, f),
+    cellCount: loaded.cellCount,
+    partModel: loaded.partModel,
+    validity,
+  };
+}
+
+/** A plate below the coil through the Dodd–Deeds plate kernel (laterally infinite: noted when its edge is near). */
+function plateLoaded(state: CoilModelState, part: CheckedPart, f: number, validity: ValidityNote[]): Loaded {
+  const geo = state.geo;
+  const { zMin, rOuter } = coilExtent(geo);
+  const top = zMin - part.gap;
+  const omega = 2 * Math.PI * f;
+  const layers = layerArrays([{ thickness: part.thickness, resistivity: part.resistivity, relativePermeability: part.relativePermeability }], omega);
+  const mesh = state.mesh(false);
+  const kernel = state.kernel(mesh, { kind: "plate", top }, plateScale(layers));
+  const solved = solveMesh(geo, mesh, f, { kernel, material: { kind: "plate", layers } });
+  if (part.radius < rOuter + 4 * (part.gap + part.thickness)) {
+    validity.push({
+      code: "finite-plate",
+      message: "The plate is modelled as laterally infinite; it ends within a few gaps of the coil's outer radius, so its edge (not modelled) changes the coupling.",
+      value: part.radius,
+      limit: rOuter + 4 * (part.gap + part.thickness),
+    });
+  }
+  return { solved, partModel: "plate-kernel", cellCount: state.mesh(false).cells.n };
+}
+
+/** A short non-magnetic bar or tube through its own ring cells. */
+function partCellsLoaded(state: CoilModelState, part: CheckedPart, f: number): Loaded {
+  const geo = state.geo;
+  const block = partBlock(part, f, state.refinement);
+  const mesh = buildMesh(geo, state.ctl, geo.shape === "solenoid", block, part.resistivity);
+  return { solved: solveMesh(geo, mesh, f), partModel: "part-cells", cellCount: mesh.cells.n };
+}
+
+/** A long (or short magnetic) bar or tube through the Dodd–Deeds–Luquire rod kernel. */
+function rodLoaded(state: CoilModelState, part: CheckedPart, f: number, empty: Solved, validity: ValidityNote[]): Loaded {
+  const geo = state.geo;
+  const mirror = geo.shape === "solenoid";
+  const kk = (2 * Math.PI * f * MU_0 * part.relativePermeability) / part.resistivity;
+  const material: PartMaterial = { kind: "rod", innerRadius: part.innerRadius, kk, mur: part.relativePermeability };
+  const mesh = state.mesh(mirror);
+  const floor = rodScale({ kind: "rod", radius: part.radius, innerRadius: part.innerRadius, kk, mur: part.relativePermeability }, coilExtent(geo).rOuter);
+  const kernel = state.kernel(mesh, { kind: "rod", radius: part.radius }, floor);
+  let solved = solveMesh(geo, mesh, f, { kernel, material });
+  if (isShortPart(geo, part) && geo.shape === "solenoid") {
+    solved = shortMagneticPart(state, part, f, empty, solved, mesh);
+    validity.push(shortMagneticNote(geo, part, f));
+  }
+  return { solved, partModel: "long-rod-kernel", cellCount: state.mesh(true).cells.n };
+}
+
+/**
+ * A magnetic part shorter than the coil plus a few coil radii: the long part's change times
+ * the end-effect factor — the exact non-magnetic short part over the long one (own cells)
+ * blended with the surface-impedance factor at μrδ/2.
+ */
+function shortMagneticPart(state: CoilModelState, part: CheckedPart, f: number, empty: Solved, loaded: Solved, mesh: Mesh): Solved {
+  const { geo, ctl, refinement } = state;
+  const nonMagnetic = { ...part, relativePermeability: 1 };
+  const shortCells = solveMesh(geo, buildMesh(geo, ctl, true, partBlock(nonMagnetic, f, refinement), part.resistivity), f);
+  const kkLong = (2 * Math.PI * f * MU_0) / part.resistivity;
+  const longFloor = rodScale({ kind: "rod", radius: part.radius, innerRadius: part.innerRadius, kk: kkLong, mur: 1 }, coilExtent(geo).rOuter);
+  const longCells = solveMesh(geo, mesh, f, { kernel: state.kernel(mesh, { kind: "rod", radius: part.radius }, longFloor), material: { kind: "rod", innerRadius: part.innerRadius, kk: kkLong, mur: 1 } });
+  const change = (x: Solved): [number, number] => [x.re - x.copper, x.im - empty.im];
+  const [kr, ki] = complexQuotient(change(shortCells), change(longCells));
+  const factorKey = `${part.radius}|${part.innerRadius}|${part.length}`;
+  let factor = state.shortFactors.get(factorKey);
+  if (factor === undefined) {
+    factor = prepareShortPartFactor({ coilRadius: geo.centresR[0]!, turnPositions: geo.centresZ, outerRadius: part.radius, innerRadius: part.innerRadius, length: part.length });
+    state.shortFactors.set(factorKey, factor);
+  }
+  const [fr, fi] = factor((part.relativePermeability * skinDepthOf(part.resistivity, f, part.relativePermeability)) / 2);
+  // the surface-impedance factor, corrected towards the exact non-magnetic part by weight
+  const weight = nonMagneticWeight(part.relativePermeability);
+  let gr = fr;
+  let gi = fi;
+  if (weight > 0) {
+    const [nr, ni] = factor(skinDepthOf(part.resistivity, f) / 2);
+    const [cr, ci] = complexQuotient([kr, ki], [nr, ni]);
+    const magnitude = Math.hypot(cr, ci) ** weight;
+    const phase = weight * Math.atan2(ci, cr);
+    [gr, gi] = [fr * magnitude * Math.cos(phase) - fi * magnitude * Math.sin(phase), fr * magnitude * Math.sin(phase) + fi * magnitude * Math.cos(phase)];
+  }
+  const [zr, zi] = change(loaded);
+  const copperDenominator = longCells.copper - empty.copper;
+  const copperFactor = Math.abs(copperDenominator) > 1e-3 * empty.copper ? Math.min(2, Math.max(0, (shortCells.copper - empty.copper) / copperDenominator)) : 1;
+  const copper = empty.copper + copperFactor * (loaded.copper - empty.copper);
+  const turnCopper = loaded.turnCopper.map((c, i) => (empty.turnCopper[i] ?? 0) + copperFactor * (c - (empty.turnCopper[i] ?? 0)));
+  return { ...loaded, re: copper + gr * zr - gi * zi, im: empty.im + gr * zi + gi * zr, copper, turnCopper };
+}
+
+/** The validity note of a short magnetic part: its section against the skin depth, and the measured error bound of that tier. */
+function shortMagneticNote(geo: CoilGeometry, part: CheckedPart, f: number): ValidityNote {
+  const section = shortPartSection(part.radius, part.innerRadius, part.length);
+  const delta = skinDepthOf(part.resistivity, f, part.relativePermeability);
+  const tier = shortPartTier(section, delta, part.relativePermeability);
+  const bound = SHORT_PART_FACTOR_ERROR[tier];
+  const where = `its thinnest section (radial section or half its length, ${(section / delta).toPrecision(3)} δ and ${(section / (part.relativePermeability * delta)).toPrecision(2)} μr·δ)`;
+  return {
+    code: "short-magnetic-part",
+    message:
+      `A magnetic bar or tube shorter than the coil plus a few coil radii: the long part's coupling times an end-effect factor (a surface-impedance model of the short and the long part, corrected towards the part's own cells for the non-magnetic part with a weight falling from 1 at μr = 1 to 0 at μr = 20). ` +
+      (tier === "outside"
+        ? `Here ${where} is below 0.15 μr·δ: the flux crosses the section, beyond the model (the library's axisymmetric field solver found the reflected resistance up to ${bound.resistance} × off there); use solveAxisymmetricField.`
+        : `Against the library's axisymmetric field solver (solenoids of length/diameter 0.3–4, parts 0.3–0.9 × the coil's length, μr 20–600) the reflected resistance is within ${+(100 * bound.resistance).toPrecision(3)} % and ΔL within ${+(100 * bound.inductance).toPrecision(3)} % of the empty coil's inductance for ${where}` +
+          (part.length > coilExtent(geo).zMax - coilExtent(geo).zMin ? "; this part is longer than the coil, outside the measured range." : ".")),
+    value: part.length,
+  };
+}
+
+/** `PreparedWorkCoil.reduce`: the reduced (Galerkin) evaluator for one part geometry over a band, or the full solve where that is cheap. */
+function reducedEvaluator(
+  state: CoilModelState,
+  impedance: (frequency: number, part?: WorkCoilPart) => WorkCoilImpedanceResult,
+  options: ReduceWorkCoilOptions,
+): ReducedWorkCoil {
+  const where = "PreparedWorkCoil.reduce";
+  const geo = state.geo;
+  requireKnownKeys(where, "", options, ["part", "minFrequency", "maxFrequency"]);
+  const part = checkPart(where, options.part, geo);
+  const fMin = requirePositive(where, "minFrequency", options.minFrequency, "Hz");
+  const fMax = requirePositive(where, "maxFrequency", options.maxFrequency, "Hz");
+  if (!(fMax >= fMin)) throw new InputError(where, "maxFrequency", fMax, "Hz", `a finite number ≥ minFrequency (${fMin})`);
+  if (geo.conductor.kind === "litz" || (part.shape !== "plate" && part.relativePermeability === 1 && isShortPart(geo, part))) {
+    // litz (one cell per turn) is cheap in full; a short non-magnetic part has its own cells
+    return fullEvaluator(impedance, part, fMin, fMax);
+  }
+  const plate = part.shape === "plate";
+  const mesh = state.mesh(!plate);
+  const { zMin, rOuter } = coilExtent(geo);
+  const geometry: PartGeometry = plate ? { kind: "plate", top: zMin - part.gap } : { kind: "rod", radius: part.radius };
+  const kernel = state.kernel(mesh, geometry, 1e-6 / rOuter);
+  const model = buildReduced(mesh, kernel, fMin, fMax);
+  const shape = part.shape;
+  const thickness = part.thickness;
+  const innerRadius = part.innerRadius;
+  return {
+    basisSize: model.k,
+    cellCount: mesh.cells.n,
+    impedance(frequency: number, resistivity: number, relativePermeability: number): ReducedWorkCoilResult {
+      const w = "ReducedWorkCoil.impedance";
+      const f = requirePositive(w, "frequency", frequency, "Hz");
+      const rho = requirePositive(w, "resistivity", resistivity, "Ω·m");
+      if (typeof relativePermeability !== "number" || !Number.isFinite(relativePermeability) || relativePermeability < 1) {
+        throw new InputError(w, "relativePermeability", relativePermeability, "", "a finite number ≥ 1");
+      }
+      const omega = 2 * Math.PI * f;
+      const material: PartMaterial =
+        shape === "plate"
+          ? { kind: "plate", layers: layerArrays([{ thickness, resistivity: rho, relativePermeability }], omega) }
+          : { kind: "rod", innerRadius, kk: (omega * MU_0 * relativePermeability) / rho, mur: relativePermeability };
+      return evaluateReduced(model, kernel, omega, material, f < fMin / 1.01 || f > fMax * 1.01);
+    },
   };
 }
 
@@ -1042,6 +1124,49 @@ function reducedScratch(k: number, g: number, r: number, nodes: number): Reduced
  * 1e-7), and the cell system is projected on them.
  */
 function buildReduced(mesh: Mesh, kernel: PartKernel, fMin: number, fMax: number): ReducedModel {
+  const m = mesh.red.m;
+  const g = mesh.red.groups;
+  const r = kernel.r;
+  const sqrtR = new Float64Array(m);
+  for (let a = 0; a < m; a++) sqrtR[a] = Math.sqrt(mesh.R[a]!);
+  const { snapshots, columns } = snapshotColumns(mesh, kernel, sqrtR, fMin, fMax);
+  const { q: basis, r: k } = pivotedGramSchmidt(m, columns, snapshots, BASIS_TOLERANCE);
+  // V = R^(−1/2) basis; L_r = Vᵀ L V, B_r = Vᵀ B, F_r = Vᵀ Q
+  const v = new Float64Array(k * m);
+  for (let p = 0; p < k; p++) for (let a = 0; a < m; a++) v[p * m + a] = basis[p * m + a]! / sqrtR[a]!;
+  const L = projectedInductance(mesh.L, v, m, k);
+  const B = new Float64Array(k * g);
+  for (let p = 0; p < k; p++) {
+    for (let a = 0; a < m; a++) {
+      const grp = mesh.red.group[a]!;
+      if (grp >= 0) B[p * g + grp] = B[p * g + grp]! + v[p * m + a]! * mesh.red.coefficient[a]!;
+    }
+  }
+  const F = new Float64Array(k * r);
+  for (let p = 0; p < k; p++) {
+    for (let s = 0; s < r; s++) F[p * r + s] = columnDot(v, p * m, kernel.q, s * m, m);
+  }
+  const { values: lambda, vectors: u } = symmetricEigen(k, L);
+  const P = new Float64Array(k * g);
+  const G = new Float64Array(k * r);
+  rotateRows(u, k, B, g, P);
+  rotateRows(u, k, F, r, G);
+  return { k, g, r, lambda, P, G, scratch: reducedScratch(k, g, r, kernel.rule.nodes.length) };
+}
+
+/** Σ x[xo + i]·y[yo + i] over i < m, in order. */
+function columnDot(x: Float64Array, xo: number, y: Float64Array, yo: number, m: number): number {
+  let sum = 0;
+  for (let a = 0; a < m; a++) sum += x[xo + a]! * y[yo + a]!;
+  return sum;
+}
+
+/**
+ * The reduced basis's snapshots: at `count` frequencies spread geometrically over the band, the
+ * empty coil's responses Z₀(ω)⁻¹[B | Q], each normalised in the power norm and written as
+ * √R·I (real and imaginary part: two columns of length m each).
+ */
+function snapshotColumns(mesh: Mesh, kernel: PartKernel, sqrtR: Float64Array, fMin: number, fMax: number): { snapshots: Float64Array; columns: number } {
   const { red } = mesh;
   const m = red.m;
   const g = red.groups;
@@ -1049,87 +1174,79 @@ function buildReduced(mesh: Mesh, kernel: PartKernel, fMin: number, fMax: number
   const count = Math.max(3, 1 + Math.ceil(2 * Math.log2(fMax / fMin)));
   const rhs = g + r;
   const snapshots = new Float64Array(count * 2 * rhs * m);
-  const sqrtR = new Float64Array(m);
-  for (let a = 0; a < m; a++) sqrtR[a] = Math.sqrt(mesh.R[a]!);
   let col = 0;
   for (let s = 0; s < count; s++) {
     const f = count === 1 ? fMin : fMin * Math.pow(fMax / fMin, s / (count - 1));
-    const omega = 2 * Math.PI * f;
-    const zRe = new Float64Array(m * m);
-    const zIm = new Float64Array(m * m);
-    for (let q = 0; q < m * m; q++) zIm[q] = omega * mesh.L[q]!;
-    for (let a = 0; a < m; a++) zRe[a * m + a] = mesh.R[a]!;
-    if (!complexSymmetricFactor(m, zRe, zIm)) throw new Error("internal: the coil impedance matrix is singular");
-    const xRe = new Float64Array(m * rhs);
-    const xIm = new Float64Array(m * rhs);
-    for (let a = 0; a < m; a++) if (red.group[a]! >= 0) xRe[red.group[a]! * m + a] = red.coefficient[a]!;
-    for (let p = 0; p < r; p++) for (let a = 0; a < m; a++) xRe[(g + p) * m + a] = kernel.q[p * m + a]!;
-    complexSymmetricSolve(m, zRe, zIm, xRe, xIm, rhs);
+    const { xRe, xIm } = emptyResponses(mesh, kernel, 2 * Math.PI * f);
     for (let c = 0; c < rhs; c++) {
-      // each response normalised (real and imaginary part together), so that the basis
-      // tolerance is relative to every response, large or small
-      let norm = 0;
-      for (let a = 0; a < m; a++) norm += mesh.R[a]! * (xRe[c * m + a]! ** 2 + xIm[c * m + a]! ** 2);
-      const inv = norm > 0 ? 1 / Math.sqrt(norm) : 0;
-      for (let a = 0; a < m; a++) {
-        snapshots[col * m + a] = inv * sqrtR[a]! * xRe[c * m + a]!;
-        snapshots[(col + 1) * m + a] = inv * sqrtR[a]! * xIm[c * m + a]!;
-      }
+      normalisedSnapshot(mesh.R, sqrtR, xRe, xIm, c * m, m, snapshots, col * m);
       col += 2;
     }
   }
-  const { q: basis, r: k } = pivotedGramSchmidt(m, col, snapshots, BASIS_TOLERANCE);
-  // V = R^(−1/2) basis; L_r = Vᵀ L V, B_r = Vᵀ B, F_r = Vᵀ Q
-  const v = new Float64Array(k * m);
-  for (let p = 0; p < k; p++) for (let a = 0; a < m; a++) v[p * m + a] = basis[p * m + a]! / sqrtR[a]!;
+  return { snapshots, columns: col };
+}
+
+/**
+ * One response x (at xo, length m) as two snapshot columns at so (real part, then imaginary
+ * part): √R·x normalised in the power norm Σ R|x|² (every response, large or small, counts
+ * alike against the basis tolerance).
+ */
+function normalisedSnapshot(resistance: Float64Array, sqrtR: Float64Array, xRe: Float64Array, xIm: Float64Array, xo: number, m: number, snapshots: Float64Array, so: number): void {
+  let norm = 0;
+  for (let a = 0; a < m; a++) norm += resistance[a]! * (xRe[xo + a]! ** 2 + xIm[xo + a]! ** 2);
+  const inv = norm > 0 ? 1 / Math.sqrt(norm) : 0;
+  for (let a = 0; a < m; a++) {
+    snapshots[so + a] = inv * sqrtR[a]! * xRe[xo + a]!;
+    snapshots[so + m + a] = inv * sqrtR[a]! * xIm[xo + a]!;
+  }
+}
+
+/** The empty coil's cell currents Z₀(ω)⁻¹[B | Q] for unit turn voltages and the kernel's modes (m × (g + r), column-major). */
+function emptyResponses(mesh: Mesh, kernel: PartKernel, omega: number): { xRe: Float64Array; xIm: Float64Array } {
+  const { red } = mesh;
+  const m = red.m;
+  const rhs = red.groups + kernel.r;
+  const zRe = new Float64Array(m * m);
+  const zIm = new Float64Array(m * m);
+  emptyImpedanceInto(m, mesh.L, mesh.R, omega, zRe, zIm);
+  if (!complexSymmetricFactor(m, zRe, zIm)) throw new Error("internal: the coil impedance matrix is singular");
+  const xRe = new Float64Array(m * rhs);
+  const xIm = new Float64Array(m * rhs);
+  sourceColumnsInto(red, kernel, xRe);
+  complexSymmetricSolve(m, zRe, zIm, xRe, xIm, rhs);
+  return { xRe, xIm };
+}
+
+/** The right-hand sides [B | Q] (m × (g + r), column-major) into the zeroed x: unit turn voltages, then the kernel's modes. */
+function sourceColumnsInto(red: Reduction, kernel: PartKernel, x: Float64Array): void {
+  const m = red.m;
+  const g = red.groups;
+  for (let a = 0; a < m; a++) if (red.group[a]! >= 0) x[red.group[a]! * m + a] = red.coefficient[a]!;
+  for (let p = 0; p < kernel.r; p++) for (let a = 0; a < m; a++) x[(g + p) * m + a] = kernel.q[p * m + a]!;
+}
+
+/** Vᵀ L V (k × k, symmetric) for the m × m matrix L and the k columns of V (column p at p·m). */
+function projectedInductance(l: Float64Array, v: Float64Array, m: number, k: number): Float64Array {
   const lv = new Float64Array(k * m); // L V, column p at p·m
   for (let p = 0; p < k; p++) {
-    for (let a = 0; a < m; a++) {
-      let sum = 0;
-      const row = a * m;
-      for (let b = 0; b < m; b++) sum += mesh.L[row + b]! * v[p * m + b]!;
-      lv[p * m + a] = sum;
-    }
+    for (let a = 0; a < m; a++) lv[p * m + a] = columnDot(l, a * m, v, p * m, m);
   }
-  const L = new Float64Array(k * k);
+  const out = new Float64Array(k * k);
   for (let p = 0; p < k; p++) {
-    for (let q = 0; q <= p; q++) {
-      let sum = 0;
-      for (let a = 0; a < m; a++) sum += v[p * m + a]! * lv[q * m + a]!;
-      L[p * k + q] = L[q * k + p] = sum;
-    }
+    for (let q = 0; q <= p; q++) out[p * k + q] = out[q * k + p] = columnDot(v, p * m, lv, q * m, m);
   }
-  const B = new Float64Array(k * g);
-  for (let p = 0; p < k; p++) {
-    for (let a = 0; a < m; a++) {
-      const grp = red.group[a]!;
-      if (grp >= 0) B[p * g + grp] = B[p * g + grp]! + v[p * m + a]! * red.coefficient[a]!;
-    }
-  }
-  const F = new Float64Array(k * r);
-  for (let p = 0; p < k; p++) {
-    for (let s = 0; s < r; s++) {
-      let sum = 0;
-      for (let a = 0; a < m; a++) sum += v[p * m + a]! * kernel.q[s * m + a]!;
-      F[p * r + s] = sum;
-    }
-  }
-  const { values: lambda, vectors: u } = symmetricEigen(k, L);
-  const P = new Float64Array(k * g);
-  const G = new Float64Array(k * r);
+  return out;
+}
+
+/** out = Uᵀ-rotated rows: out[i, c] = Σ_p u[i, p]·x[p, c] (u k × k, x and out k × w, row-major). */
+function rotateRows(u: Float64Array, k: number, x: Float64Array, w: number, out: Float64Array): void {
   for (let i = 0; i < k; i++) {
-    for (let c = 0; c < g; c++) {
+    for (let c = 0; c < w; c++) {
       let sum = 0;
-      for (let p = 0; p < k; p++) sum += u[i * k + p]! * B[p * g + c]!;
-      P[i * g + c] = sum;
-    }
-    for (let c = 0; c < r; c++) {
-      let sum = 0;
-      for (let p = 0; p < k; p++) sum += u[i * k + p]! * F[p * r + c]!;
-      G[i * r + c] = sum;
+      for (let p = 0; p < k; p++) sum += u[i * k + p]! * x[p * w + c]!;
+      out[i * w + c] = sum;
     }
   }
-  return { k, g, r, lambda, P, G, scratch: reducedScratch(k, g, r, kernel.rule.nodes.length) };
 }
 
 /** The solution u of S u = 1 (S g×g complex symmetric, overwritten) into (uRe, uIm): the turn voltages at 1 A; returns Σu, the impedance. */
@@ -1201,9 +1318,24 @@ const IMPEDANCES = new Float64Array(5);
  * `out`; works in the model's scratch arrays (no allocation of the model's size).
  */
 function reducedImpedances(model: ReducedModel, omega: number, out: Float64Array): void {
-  const { k, g, r, lambda, P, G } = model;
   const w = model.scratch;
-  const { mRe, mIm, dRe, dIm, s0Re, s0Im, eRe, eIm, hRe, hIm, nRe, nIm, aRe, aIm, yRe, yIm, sRe, sIm } = w;
+  emptyProjections(model, omega);
+  woodburySystem(model, omega);
+  if (model.r > 0 && !complexGeneralSolve(model.r, w.aRe, w.aIm, w.yRe, w.yIm, model.g)) throw new Error("internal: the reduced part system is singular");
+  loadedTurnMatrix(model);
+  const [er, ei] = turnVoltages(model.g, w.s0Re, w.s0Im, w.emptyRe, w.emptyIm);
+  const [lr, li] = turnVoltages(model.g, w.sRe, w.sIm, w.loadedRe, w.loadedIm);
+  out[0] = er;
+  out[1] = ei;
+  out[2] = lr;
+  out[3] = li;
+  out[4] = reducedCopper(model, w.dRe, w.dIm, w.loadedRe, w.loadedIm, w.yRe, w.yIm);
+}
+
+/** D = (I + jωΛ)⁻¹, S₀ = Pᵀ D P, E = Pᵀ D G and H = Gᵀ D G into the model's scratch. */
+function emptyProjections(model: ReducedModel, omega: number): void {
+  const { k, g, r, lambda, P, G } = model;
+  const { dRe, dIm, s0Re, s0Im, eRe, eIm, hRe, hIm } = model.scratch;
   for (let i = 0; i < k; i++) {
     const x = omega * lambda[i]!;
     const den = 1 + x * x;
@@ -1247,12 +1379,16 @@ function reducedImpedances(model: ReducedModel, omega: number, out: Float64Array
       hIm[t * r + s] = hIm[s * r + t]!;
     }
   }
-  // N = jω M
+}
+
+/** N = jωM, A = I + N H and the right-hand sides Y = N Eᵀ (r × g, column c at c·r) into the model's scratch. */
+function woodburySystem(model: ReducedModel, omega: number): void {
+  const { g, r } = model;
+  const { mRe, mIm, eRe, eIm, hRe, hIm, nRe, nIm, aRe, aIm, yRe, yIm } = model.scratch;
   for (let q = 0; q < r * r; q++) {
     nRe[q] = -omega * mIm[q]!;
     nIm[q] = omega * mRe[q]!;
   }
-  // A = I + N H; RHS = N Eᵀ (r × g, column c at c·r)
   for (let s = 0; s < r; s++) {
     for (let t = 0; t < r; t++) {
       let sr = s === t ? 1 : 0;
@@ -1285,7 +1421,12 @@ function reducedImpedances(model: ReducedModel, omega: number, out: Float64Array
       yIm[c * r + s] = si;
     }
   }
-  if (r > 0 && !complexGeneralSolve(r, aRe, aIm, yRe, yIm, g)) throw new Error("internal: the reduced part system is singular");
+}
+
+/** S = S₀ − E (I + N H)⁻¹ N Eᵀ (with Y = (I + N H)⁻¹ N Eᵀ solved) into the model's scratch. */
+function loadedTurnMatrix(model: ReducedModel): void {
+  const { g, r } = model;
+  const { s0Re, s0Im, eRe, eIm, yRe, yIm, sRe, sIm } = model.scratch;
   sRe.set(s0Re);
   sIm.set(s0Im);
   for (let c = 0; c < g; c++) {
@@ -1304,13 +1445,6 @@ function reducedImpedances(model: ReducedModel, omega: number, out: Float64Array
       sIm[c * g + e] = sIm[c * g + e]! - si;
     }
   }
-  const [er, ei] = turnVoltages(g, s0Re, s0Im, w.emptyRe, w.emptyIm);
-  const [lr, li] = turnVoltages(g, sRe, sIm, w.loadedRe, w.loadedIm);
-  out[0] = er;
-  out[1] = ei;
-  out[2] = lr;
-  out[3] = li;
-  out[4] = reducedCopper(model, dRe, dIm, w.loadedRe, w.loadedIm, yRe, yIm);
 }
 
 function evaluateReduced(model: ReducedModel, kernel: PartKernel, omega: number, material: PartMaterial, outside: boolean): ReducedWorkCoilResult {

@@ -296,56 +296,18 @@ const KERNEL_TOLERANCE = 1e-8;
  */
 export function partKernel(red: Reduction, cells: CellSet, geometry: PartGeometry, floor: number): PartKernel {
   const m = red.m;
-  const n = cells.n;
-  let rMax = 0;
-  let zMin = Infinity;
-  let zMax = -Infinity;
-  let gapMin = Infinity;
-  for (let i = 0; i < n; i++) {
-    if (cells.turn[i]! < 0) continue;
-    rMax = Math.max(rMax, cells.r[i]! + cells.size[i]!);
-    zMin = Math.min(zMin, cells.z[i]!);
-    zMax = Math.max(zMax, cells.z[i]!);
-    const d = geometry.kind === "rod" ? cells.r[i]! - geometry.radius : cells.z[i]! - geometry.top;
-    gapMin = Math.min(gapMin, d);
-  }
+  const { rMax, zExt, gapMin } = coilReach(cells, geometry);
   const folded = red.members.length !== red.m; // mirror folding: the sin part cancels
   // the grading stops at 1e-6/rMax at the lowest (kernel columns grow as α^(−1/2) towards 0)
   floor = Math.max(floor, 1e-6 / rMax);
-  let rule: AlphaRule;
-  if (geometry.kind === "rod") {
-    const zExt = Math.max(zMax - zMin, gapMin);
-    rule = alphaRule(Math.min((2 * Math.PI) / zExt, 2 / gapMin), Math.min(floor, 1 / rMax) / 8, TOP / gapMin);
-  } else {
-    rule = alphaRule(Math.min((2 * Math.PI) / rMax, 2 / gapMin), Math.min(floor, 1 / rMax) / 8, TOP / gapMin);
-  }
+  const width = geometry.kind === "rod" ? Math.min((2 * Math.PI) / zExt, 2 / gapMin) : Math.min((2 * Math.PI) / rMax, 2 / gapMin);
+  const rule = alphaRule(width, Math.min(floor, 1 / rMax) / 8, TOP / gapMin);
   const K = rule.nodes.length;
   const perNode = geometry.kind === "rod" && !folded ? 2 : 1;
   const cols = perNode * K;
   const f = new Float64Array(cols * m); // column-major
-  const ms = red.memberStart;
-  for (let k = 0; k < K; k++) {
-    const alpha = rule.nodes[k]!;
-    const sw = Math.sqrt(rule.weights[k]!);
-    for (let a = 0; a < m; a++) {
-      let sc = 0;
-      let ss = 0;
-      for (let x = ms[a]!; x < ms[a + 1]!; x++) {
-        const i = red.members[x]!;
-        const r = cells.r[i]!;
-        if (geometry.kind === "rod") {
-          const g = r * besselK1Scaled(alpha * r) * Math.exp(-alpha * (r - geometry.radius));
-          const z = cells.z[i]!;
-          sc += g * Math.cos(alpha * z);
-          ss += g * Math.sin(alpha * z);
-        } else {
-          sc += r * besselJ1(alpha * r) * Math.exp(-alpha * (cells.z[i]! - geometry.top));
-        }
-      }
-      f[perNode * k * m + a] = sw * sc;
-      if (perNode === 2) f[(2 * k + 1) * m + a] = sw * ss;
-    }
-  }
+  if (geometry.kind === "rod") rodColumns(red, cells, rule, geometry.radius, perNode, f);
+  else plateColumns(red, cells, rule, geometry.top, f);
   // the span is truncated in a norm that weighs each column by min(1, α r_max): the reflection
   // coefficients vanish as α² towards α = 0, where the columns themselves grow as α^(−1/2)
   const scaled = Float64Array.from(f);
@@ -356,17 +318,81 @@ export function partKernel(red: Reduction, cells: CellSet, geometry: PartGeometr
   const { q, r } = pivotedGramSchmidt(m, cols, scaled, KERNEL_TOLERANCE);
   // C = Qᵀ F (row-major r × cols), from the original columns
   const c = new Float64Array(r * cols);
-  const orig = f;
   for (let p = 0; p < r; p++) {
-    for (let col = 0; col < cols; col++) {
-      let sum = 0;
-      const qo = p * m;
-      const fo = col * m;
-      for (let a = 0; a < m; a++) sum += q[qo + a]! * orig[fo + a]!;
-      c[p * cols + col] = sum;
-    }
+    for (let col = 0; col < cols; col++) c[p * cols + col] = dot(q, p * m, f, col * m, m);
   }
   return { geometry, rule, perNode, r, q, c };
+}
+
+/**
+ * The coil cells' reach towards the part: largest outer radius, axial extent (at least the
+ * gap) and the smallest distance of a cell centre to the part's surface.
+ */
+function coilReach(cells: CellSet, geometry: PartGeometry): { rMax: number; zExt: number; gapMin: number } {
+  let rMax = 0;
+  let zMin = Infinity;
+  let zMax = -Infinity;
+  let gapMin = Infinity;
+  const rod = geometry.kind === "rod";
+  const surface = geometry.kind === "rod" ? geometry.radius : geometry.top;
+  for (let i = 0; i < cells.n; i++) {
+    if (cells.turn[i]! < 0) continue;
+    rMax = Math.max(rMax, cells.r[i]! + cells.size[i]!);
+    zMin = Math.min(zMin, cells.z[i]!);
+    zMax = Math.max(zMax, cells.z[i]!);
+    gapMin = Math.min(gapMin, (rod ? cells.r[i]! : cells.z[i]!) - surface);
+  }
+  return { rMax, zExt: Math.max(zMax - zMin, gapMin), gapMin };
+}
+
+/** Σ a[ao + i]·b[bo + i] over i < m, in order. */
+function dot(a: Float64Array, ao: number, b: Float64Array, bo: number, m: number): number {
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += a[ao + i]! * b[bo + i]!;
+  return sum;
+}
+
+/** A rod's kernel columns √w·Σ r K₁(αr) e^(−α(r−a)) (cos αz, sin αz) per α node and folded unknown, into f. */
+function rodColumns(red: Reduction, cells: CellSet, rule: AlphaRule, radius: number, perNode: number, f: Float64Array): void {
+  const m = red.m;
+  const ms = red.memberStart;
+  for (let k = 0; k < rule.nodes.length; k++) {
+    const alpha = rule.nodes[k]!;
+    const sw = Math.sqrt(rule.weights[k]!);
+    for (let a = 0; a < m; a++) {
+      let sc = 0;
+      let ss = 0;
+      for (let x = ms[a]!; x < ms[a + 1]!; x++) {
+        const i = red.members[x]!;
+        const r = cells.r[i]!;
+        const g = r * besselK1Scaled(alpha * r) * Math.exp(-alpha * (r - radius));
+        const z = cells.z[i]!;
+        sc += g * Math.cos(alpha * z);
+        ss += g * Math.sin(alpha * z);
+      }
+      f[perNode * k * m + a] = sw * sc;
+      if (perNode === 2) f[(2 * k + 1) * m + a] = sw * ss;
+    }
+  }
+}
+
+/** A plate's kernel columns √w·Σ r J₁(αr) e^(−α(z−top)) per α node and folded unknown, into f. */
+function plateColumns(red: Reduction, cells: CellSet, rule: AlphaRule, top: number, f: Float64Array): void {
+  const m = red.m;
+  const ms = red.memberStart;
+  for (let k = 0; k < rule.nodes.length; k++) {
+    const alpha = rule.nodes[k]!;
+    const sw = Math.sqrt(rule.weights[k]!);
+    for (let a = 0; a < m; a++) {
+      let sc = 0;
+      for (let x = ms[a]!; x < ms[a + 1]!; x++) {
+        const i = red.members[x]!;
+        const r = cells.r[i]!;
+        sc += r * besselJ1(alpha * r) * Math.exp(-alpha * (cells.z[i]! - top));
+      }
+      f[k * m + a] = sw * sc;
+    }
+  }
 }
 
 /**
@@ -379,56 +405,62 @@ export function pivotedGramSchmidt(m: number, cols: number, a: Float64Array, tol
   const norm2 = new Float64Array(cols);
   let largest = 0;
   for (let col = 0; col < cols; col++) {
-    let s = 0;
-    for (let i = 0; i < m; i++) s += work[col * m + i]! ** 2;
+    const s = squaredNorm(work, col * m, m);
     norm2[col] = s;
     largest = Math.max(largest, s);
   }
-  const basis: number[] = [];
   const q = new Float64Array(Math.min(m, cols) * m);
   let r = 0;
   const limit = tol * tol * largest;
   while (r < Math.min(m, cols)) {
-    let best = -1;
-    let bestN = limit;
-    for (let col = 0; col < cols; col++) {
-      if (norm2[col]! > bestN) {
-        bestN = norm2[col]!;
-        best = col;
-      }
-    }
+    const best = largestAbove(norm2, cols, limit);
     if (best < 0) break;
     // normalise, re-orthogonalise once against the basis (twice is enough)
-    const v = work.subarray(best * m, best * m + m);
+    const vo = best * m;
     for (let pass = 0; pass < 2; pass++) {
-      for (let p = 0; p < r; p++) {
-        let d = 0;
-        for (let i = 0; i < m; i++) d += q[p * m + i]! * v[i]!;
-        for (let i = 0; i < m; i++) v[i] = v[i]! - d * q[p * m + i]!;
-      }
+      for (let p = 0; p < r; p++) subtractProjection(q, p * m, work, vo, m);
     }
-    let nv = 0;
-    for (let i = 0; i < m; i++) nv += v[i]! ** 2;
-    if (!(nv > limit)) {
-      norm2[best] = 0;
-      continue;
-    }
-    const inv = 1 / Math.sqrt(nv);
-    for (let i = 0; i < m; i++) q[r * m + i] = v[i]! * inv;
+    const nv = squaredNorm(work, vo, m);
     norm2[best] = 0;
+    if (!(nv > limit)) continue;
+    const inv = 1 / Math.sqrt(nv);
+    for (let i = 0; i < m; i++) q[r * m + i] = work[vo + i]! * inv;
     // remove the new direction from the remaining columns
     for (let col = 0; col < cols; col++) {
       if (norm2[col] === 0) continue;
-      let d = 0;
-      const o = col * m;
-      for (let i = 0; i < m; i++) d += q[r * m + i]! * work[o + i]!;
-      for (let i = 0; i < m; i++) work[o + i] = work[o + i]! - d * q[r * m + i]!;
+      const d = subtractProjection(q, r * m, work, col * m, m);
       norm2[col] = Math.max(0, norm2[col]! - d * d);
     }
-    basis.push(best);
     r++;
   }
   return { q: q.subarray(0, r * m), r };
+}
+
+/** Σ x[o + i]² over i < m, in order. */
+function squaredNorm(x: Float64Array, o: number, m: number): number {
+  let s = 0;
+  for (let i = 0; i < m; i++) s += x[o + i]! ** 2;
+  return s;
+}
+
+/** Index of the largest of norm2[0 … cols) above `limit` (the first of equals), or −1. */
+function largestAbove(norm2: Float64Array, cols: number, limit: number): number {
+  let best = -1;
+  let bestN = limit;
+  for (let col = 0; col < cols; col++) {
+    if (norm2[col]! > bestN) {
+      bestN = norm2[col]!;
+      best = col;
+    }
+  }
+  return best;
+}
+
+/** v −= (qᵀv) q for the unit column q at qo and the column v at vo (length m) of x; returns qᵀv. */
+function subtractProjection(q: Float64Array, qo: number, x: Float64Array, vo: number, m: number): number {
+  const d = dot(q, qo, x, vo, m);
+  for (let i = 0; i < m; i++) x[vo + i] = x[vo + i]! - d * q[qo + i]!;
+  return d;
 }
 
 /** Material of a kernel part at one frequency (rod: bore radius a1, kk, μr; plate: layers). */
