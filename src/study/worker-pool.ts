@@ -8,6 +8,9 @@
  * inputs (numbers cross the thread boundary by structured clone, which keeps every bit), so the
  * results are identical for any pool size.
  *
+ * Size: options, messages, worker start-up for Node and browsers, and the two run loops of one
+ * pool; each a short function.
+ *
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys } from "../core/index.js";

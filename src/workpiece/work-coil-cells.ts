@@ -16,6 +16,9 @@
  * geometric mean distance (Maxwell's thin-ring form; the neglected terms are
  * $O((s/r)^2)$ of the cell's self term, s its size).
  *
+ * Size: the cell builder (sectors, rectangles, mirror images) and the partial-inductance
+ * integrals over those cells share the cell layout and its quadrature rules.
+ *
  * @packageDocumentation
  */
 import { maxwellOverMu0 } from "../inductance/kernels.js";

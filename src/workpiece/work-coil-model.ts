@@ -4,6 +4,9 @@
  * same total current; the cells of one turn are in parallel, at the turn's voltage) and the
  * part's reflected coupling $\Delta M$ from the Dodd–Deeds kernels.
  *
+ * Size: the folded cell system, its series solve and the part kernels (quadrature in α, factored
+ * kernel, reflection coefficients) are one solver; each piece is a short function.
+ *
  * @packageDocumentation
  */
 import { besselI0Scaled, besselI1Scaled, besselJ1, besselK0Scaled, besselK1Scaled } from "../special/index.js";
@@ -614,4 +617,20 @@ export function plateScale(lay: LayerArrays): number {
     if (t < Infinity) scale = Math.min(scale, (lay.k[i]! * t) / (2 * lay.mu[i]!), 1 / (lay.mu[i]! * t));
   }
   return scale;
+}
+
+/** The coil's cells and folded matrices, for one mesh. */
+export interface Mesh {
+  readonly cells: CellSet;
+  readonly red: Reduction;
+  /** Folded inductance matrix (m×m) [H]. */
+  readonly L: Float64Array;
+  /** Folded resistances (diagonal) [Ω]. */
+  readonly R: Float64Array;
+}
+
+/** The folded cell impedance of the empty coil, diag(rDiag) + jωL, into zeroed zRe, zIm (m × m). */
+export function emptyImpedanceInto(m: number, l: Float64Array, rDiag: Float64Array, omega: number, zRe: Float64Array, zIm: Float64Array): void {
+  for (let a = 0; a < m; a++) zRe[a * m + a] = rDiag[a]!;
+  for (let k = 0; k < m * m; k++) zIm[k] = omega * l[k]!;
 }
