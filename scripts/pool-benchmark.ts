@@ -1,6 +1,6 @@
 /**
  * The worker pool's speed-up, memory over a long streamed sweep, and abort latency, measured on
- * the built package (`npm run build` first): `tsx scripts/pool-benchmark.ts [speedup|scale|memory|abort]`.
+ * the built package (`npm run build` first): `tsx scripts/pool-benchmark.ts [speedup|scale|first|memory|abort]`.
  * `npm run bench:scale` builds and prints the speed-up target's line (`scale [designs]`).
  * Results are reported in docs/benchmarks.md.
  */
@@ -114,6 +114,23 @@ if (what === "scale") {
     `speed-up ${(one / two).toFixed(2)}x with 2 workers over the calling thread (target >= 1.8x): ${n} designs of ${(one / n).toFixed(0)} ms, ` +
       `${(one / 1000).toFixed(1)} s -> ${(two / 1000).toFixed(1)} s${helpers}; load average ${loadavg()[0]?.toFixed(1) ?? "?"} (needs an idle machine)`,
   );
+}
+
+if (what === "first") {
+  // a thread's fixed cost: CPU time of this thread and of V8's helpers per study, one design
+  // per sweep on the calling thread (the first study builds the coil model and compiles it)
+  const n = Number(process.argv[3] ?? 20);
+  const mainCpu = (m: Map<string, number>): number => m.get(String(process.pid)) ?? 0;
+  const rest = (m: Map<string, number>): number => [...m].reduce((s, [tid, t]) => (tid === String(process.pid) ? s : s + t), 0);
+  const first = threadCpu();
+  if (first === null) throw new Error("needs Linux /proc/self/task");
+  let prev: Map<string, number> = first;
+  for (let i = 0; i < n; i++) {
+    sweepHeater(race, { field: "capacitor.capacitance", values: [2e-6 + i * 2e-8], heatUp: true });
+    const now: Map<string, number> = threadCpu() ?? prev;
+    console.log(`study ${i + 1}: JavaScript ${(mainCpu(now) - mainCpu(prev)).toFixed(2)} s, V8 helpers ${(rest(now) - rest(prev)).toFixed(2)} s`);
+    prev = now;
+  }
 }
 
 if (what === "memory") {
