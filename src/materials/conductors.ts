@@ -14,6 +14,9 @@ const FLIR_EMISSIVITY = "FLIR T10xx series operation manual, emissivity Table 39
 /** A second instrument maker's emissivity table. */
 const OMEGA_EMISSIVITY = "Omega OS100 series manual, section 6 emissivity table";
 
+/** An open textbook's table of resistivities and temperature coefficients at 20 °C. */
+const OPENSTAX_RESISTIVITY = "S. J. Ling, J. Sanny, W. Moebs, University Physics Volume 2 (OpenStax 2016), §9.3, Table 9.1 'Resistivities and Conductivities of Various Materials at 20 °C' (silver 1.59 × 10⁻⁸ Ω·m, α = 0.0038 /°C; source text openstax/osbooks-university-physics-bundle, modules/m58731)";
+
 /** A frozen table in kelvin. */
 function kelvinTable(temperatures: readonly number[], values: readonly number[], source: string): TemperatureTable {
   return Object.freeze({ temperatures: Object.freeze([...temperatures]), values: Object.freeze([...values]), source });
@@ -105,12 +108,15 @@ const silverSpecificHeat = kelvinTable([200, 300, 400, 600, 800, 1000], [225, 23
 const silverConductivity = kelvinTable([200, 300, 400, 600, 800, 1000], [430, 429, 425, 412, 396, 379], `${INCROPERA} (pure silver)`);
 
 /**
- * Pure silver: resistivity 1.587 × 10⁻⁸ Ω·m at 20 °C and temperature coefficient
- * 0.0038 /K (CRC Handbook of Chemistry and Physics, from memory), density 10 490 kg/m³;
- * linear law over 200–1200 K. Thermal data from Incropera et al., 7th ed., Table A.1;
- * emissivity 0.02–0.1, typical 0.03 (from memory). Melting point 1234.93 K (ITS-90).
+ * Pure silver: resistivity 1.587 × 10⁻⁸ Ω·m at 20 °C (the CRC Handbook's value, its fourth
+ * digit from memory: the table read, OpenStax University Physics Vol. 2, Table 9.1, gives
+ * 1.59 × 10⁻⁸, agreeing to its three digits) and temperature coefficient 0.0038 /K (the same
+ * OpenStax table); linear law over 200–1200 K. Density 10 500 kg/m³ and thermal data from
+ * Incropera et al., 7th ed., Table A.1 (pure silver, 300 K); emissivity 0.02–0.1, typical 0.03
+ * (from memory). Melting point 1234.93 K (ITS-90).
  *
- * @see CRC Handbook of Chemistry and Physics, "Electrical resistivity of pure metals" (from memory).
+ * @see S. J. Ling, J. Sanny, W. Moebs, University Physics Volume 2, OpenStax (2016), §9.3,
+ *   Table 9.1 (resistivity and temperature coefficient at 20 °C).
  * @example
  * ```ts
  * import { silver } from "fluxwright";
@@ -123,8 +129,8 @@ export const silver: ConductiveMaterial = Object.freeze({
   id: "silver",
   resistivity20: 1.587e-8,
   temperatureCoefficient: 0.0038,
-  resistivity: Object.freeze({ kind: "linear", source: "CRC Handbook of Chemistry and Physics (from memory)" }),
-  density: 10490,
+  resistivity: Object.freeze({ kind: "linear", source: `ρ₂₀ 1.587 × 10⁻⁸ Ω·m: CRC Handbook of Chemistry and Physics, fourth digit from memory (${OPENSTAX_RESISTIVITY}: 1.59, agreeing to three digits); α₂₀ 0.0038 /K: ${OPENSTAX_RESISTIVITY}` }),
+  density: 10500,
   specificHeat20: interpolateTemperatureTable(silverSpecificHeat, 293.15),
   specificHeat: Object.freeze({ kind: "table", table: silverSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(silverConductivity, 293.15),
@@ -134,8 +140,8 @@ export const silver: ConductiveMaterial = Object.freeze({
   temperatureRange: Object.freeze({ min: 200, max: 1200 }),
   magnetic: false,
   sources: Object.freeze([
-    "resistivity, temperature coefficient and density: CRC Handbook of Chemistry and Physics (from memory)",
-    `specific heat and thermal conductivity: ${INCROPERA} (pure silver)`,
+    `resistivity: CRC Handbook value 1.587 × 10⁻⁸ Ω·m, fourth digit from memory; 1.59 × 10⁻⁸ Ω·m and temperature coefficient 0.0038 /K: ${OPENSTAX_RESISTIVITY}`,
+    `density (10 500 kg/m³ at 300 K), specific heat and thermal conductivity: ${INCROPERA} (pure silver)`,
     "melting point: ITS-90 fixed point of silver, 961.78 °C",
   ]),
 } as const);

@@ -22,8 +22,17 @@ const AA_6061 = "Aluminum Association typical values for 6061-T6, as in the BTI 
 const OLIN_C26000 = "Olin Brass C26000 (ASTM B36) alloy data (28 % IACS annealed, 6.16 µΩ·cm; 8.53 g/cm³)";
 const TI64 = "BTI Metals Ti-6Al-4V data sheet (4.43 g/cm³; 526 J/(kg·K) at 25 °C; 6.70 W/(m·K) over 100–300 °C; 1780 nΩ·m at 25 °C; melting range 1604–1660 °C) and ASM/MatWeb Ti-6Al-4V (Grade 5) annealed bar (178 µΩ·cm)";
 const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.1.3 eq. (3.3) (thermal conductivity)";
+/**
+ * The AISI 304 row of Incropera's Table A.1 (5th edition), read in a transcription: the
+ * comments of package AnFPs in Regions.mo of the FCSys Modelica library
+ * (github.com/kdavies4/FCSys), which quote c_p and k of AISI 302, 304, 316 and 347 at
+ * 100–1000 K "from [Incropera2002, pp. 905 & 907]".
+ */
+const INCROPERA_304 = "F. P. Incropera, D. P. DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (Wiley 2002), Table A.1, pp. 905 and 907, AISI 304 at 200–1000 K, as transcribed in the FCSys Modelica library (github.com/kdavies4/FCSys, Regions.mo, package AnFPs)";
 const KUZMIN_IRON = "magnetisation curve: M. D. Kuz'min, Phys. Rev. Lett. 94, 107204 (2005), s = 0.35, p = 4 for iron (from memory)";
 
+/** Resistivity and temperature coefficient of brasses from a data page. */
+const TOOLBOX_BRASS = "The Engineering ToolBox, 'Resistivity and Conductivity - Temperature Coefficients Common Materials' (engineeringtoolbox.com/resistivity-conductivity-d_418.html): brass 58 % Cu 5.9 × 10⁻⁸ Ω·m and brass 63 % Cu 7.1 × 10⁻⁸ Ω·m, both α = 1.5 × 10⁻³ /°C";
 /** Curie temperature of carbon steel as stated by a steel maker (and of iron in a foundry glossary). */
 const CURIE_CARBON_STEEL = "Curie temperature 768 °C (A2 of iron): Atlas Steels technical note 'Magnetic response of stainless steels' (about 768 °C for carbon steel); Giesserei-Lexikon, 'Curiepunkt' (769 °C for iron)";
 
@@ -182,23 +191,25 @@ const austeniticResistivity = tableFromCelsius(
 const austeniticSpecificHeat: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([402, 477, 515, 557, 582, 611, 640, 682]),
-  source: `${INCROPERA} (AISI 304; from memory)`,
+  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
 });
 const austeniticConductivity: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([12.6, 14.9, 16.6, 19.8, 22.6, 25.4, 28.0, 31.7]),
-  source: `${INCROPERA} (AISI 304; from memory)`,
+  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
 });
 
 /**
  * Austenitic stainless steel (18Cr–8Ni, AISI 304 class), non-magnetic. Resistivity
  * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 1.22 µΩ·m at 1000 °C
  * (typical, from memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
- * specific heat and thermal conductivity of AISI 304 from Incropera & DeWitt Table A.1
- * (from memory); emissivity 0.1–0.85, typical 0.4 (from memory). Documented range
- * 200–1500 K.
+ * specific heat and thermal conductivity of AISI 304 at 200–1000 K from Incropera & DeWitt,
+ * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K; read in a
+ * transcription, see the sources); their 1200 and 1500 K points and the emissivity 0.1–0.85,
+ * typical 0.4, from memory. Documented range 200–1500 K.
  *
- * @see Incropera & DeWitt, Table A.1 (AISI 304).
+ * @see Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (2002), Table A.1,
+ *   pp. 905 and 907 (AISI 304).
  * @example
  * ```ts
  * import { austeniticStainless } from "fluxwright";
@@ -224,7 +235,7 @@ export const austeniticStainless: ConductiveMaterial = Object.freeze({
   sources: Object.freeze([
     `resistivity: ${austeniticResistivity.source}`,
     "density: typical, from memory",
-    `specific heat and thermal conductivity: ${INCROPERA} (AISI 304; from memory)`,
+    `specific heat and thermal conductivity: ${austeniticConductivity.source}`,
     "solidus 1400 °C: ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel'",
   ]),
 });
@@ -362,8 +373,8 @@ const brassConductivity: TemperatureTable = Object.freeze({
 
 /**
  * Brass (70Cu–30Zn cartridge brass class). Resistivity 28 % IACS ≈ 6.16 × 10⁻⁸ Ω·m at
- * 20 °C (Olin Brass C26000 data), temperature coefficient 0.0015 /K (typical, from memory),
- * linear; density 8530 kg/m³; specific heat and conductivity from Incropera et al., 7th ed.,
+ * 20 °C (Olin Brass C26000 data), temperature coefficient 0.0015 /K (the Engineering
+ * ToolBox's value for 58 % and 63 % Cu brasses; no figure for 70/30 brass was found), linear; density 8530 kg/m³; specific heat and conductivity from Incropera et al., 7th ed.,
  * Table A.1, p. 983, which ends at 600 K (values held above); emissivity 0.03–0.6, typical
  * 0.2 (from memory); melting point 1188 K (Incropera, Table A.1). Documented range 293–1100 K.
  *
@@ -381,7 +392,7 @@ export const brass: ConductiveMaterial = Object.freeze({
   id: "brass",
   resistivity20: ANNEALED_COPPER_RESISTIVITY / 0.28,
   temperatureCoefficient: 0.0015,
-  resistivity: Object.freeze({ kind: "linear", source: `28 % IACS (${OLIN_C26000}); 0.0015 /K typical, from memory` }),
+  resistivity: Object.freeze({ kind: "linear", source: `28 % IACS (${OLIN_C26000}); 0.0015 /K as for 58 % and 63 % Cu brasses in ${TOOLBOX_BRASS}` }),
   density: 8530,
   specificHeat20: interpolateTemperatureTable(brassSpecificHeat, T20),
   specificHeat: Object.freeze({ kind: "table", table: brassSpecificHeat }),
@@ -392,7 +403,7 @@ export const brass: ConductiveMaterial = Object.freeze({
   temperatureRange: Object.freeze({ min: 293.15, max: 1100 }),
   magnetic: false,
   sources: Object.freeze([
-    `resistivity: ${OLIN_C26000}; temperature coefficient 0.0015 /K typical, from memory`,
+    `resistivity: ${OLIN_C26000}; temperature coefficient 0.0015 /K: ${TOOLBOX_BRASS} (not given for 70/30 brass)`,
     `density, specific heat, conductivity, melting point 1188 K: ${INCROPERA} (cartridge brass, p. 983)`,
   ]),
 });
