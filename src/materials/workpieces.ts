@@ -36,6 +36,15 @@ const TOOLBOX_BRASS = "The Engineering ToolBox, 'Resistivity and Conductivity - 
 /** Curie temperature of carbon steel as stated by a steel maker (and of iron in a foundry glossary). */
 const CURIE_CARBON_STEEL = "Curie temperature 768 °C (A2 of iron): Atlas Steels technical note 'Magnetic response of stainless steels' (about 768 °C for carbon steel); Giesserei-Lexikon, 'Curiepunkt' (769 °C for iron)";
 
+/** Instrument makers' emissivity tables read for the alloys (band or total, as each says). */
+const RAYTEK_EMISSIVITY = "Raytek, 'Emissivity Table for Metals' (raytek.com, IR Education; columns 1.0 µm, 1.6 µm, 8–14 µm)";
+const RAYTEK_MI3_EMISSIVITY = "Raytek MI3 manual, appendix emissivity table for metals (3.9 µm, 5 µm, 8–14 µm)";
+const OMEGA_EMISSIVITY = "Omega OS100 series manual, section 6 emissivity table";
+const FLIR_EMISSIVITY_22 = "FLIR camera manual emissivity Table 22.1 (total spectrum 'T' rows; the table of the T10xx manual's Table 39.1), as posted at scribd.com/document/430717570";
+const IDEAL_EMISSIVITY = "Ideal Industries HeatSeeker 160 manual, Appendix A1 emissivity look-up tables";
+/** Emissivity of the stainless steels: endpoints read in two instrument makers' tables. */
+const STAINLESS_EMISSIVITY = `0.1–0.8 for stainless steel in the 8–14 µm column of ${RAYTEK_EMISSIVITY}; 0.85 for stainless steel oxidised at 800 °C in ${IDEAL_EMISSIVITY}; typical 0.4 a choice of ours within that range`;
+
 /** Emissivity of the carbon steels: a rounded range inside the instrument maker's table. */
 const STEEL_EMISSIVITY = `polished to heavily scaled; inside ${FLIR_EMISSIVITY} for iron and steel (polished 0.07, rough plate 0.95–0.98); typical 0.8 = its oxidised steel at 200–600 °C`;
 
@@ -205,8 +214,9 @@ const austeniticConductivity: TemperatureTable = Object.freeze({
  * (typical, from memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
  * specific heat and thermal conductivity of AISI 304 at 200–1000 K from Incropera & DeWitt,
  * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K; read in a
- * transcription, see the sources); their 1200 and 1500 K points and the emissivity 0.1–0.85,
- * typical 0.4, from memory. Documented range 200–1500 K.
+ * transcription, see the sources); their 1200 and 1500 K points from memory. Emissivity
+ * 0.1–0.85 (Raytek's 8–14 µm table: 0.1–0.8; 0.85 oxidised at 800 °C in an Ideal Industries
+ * table), typical 0.4 (a choice within that range). Documented range 200–1500 K.
  *
  * @see Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (2002), Table A.1,
  *   pp. 905 and 907 (AISI 304).
@@ -228,7 +238,7 @@ export const austeniticStainless: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: austeniticSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(austeniticConductivity, T20),
   thermalConductivityTable: austeniticConductivity,
-  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: STAINLESS_EMISSIVITY }),
   meltingTemperature: 1673,
   temperatureRange: Object.freeze({ min: 200, max: 1500 }),
   magnetic: false,
@@ -265,7 +275,8 @@ const ferriticConductivity = tableFromCelsius(
  * alike for heating purposes). Resistivity 0.60 µΩ·m at 20 °C, density 7750 kg/m³, specific
  * heat 460 J/(kg·K) near 20 °C and conductivity 26.1 W/(m·K) at 100 °C, 26.3 at 500 °C (AK
  * Steel and Atlas Steels type 430 data sheets); the other table points typical, from memory
- * (the Curie anomaly of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4. Curie
+ * (the Curie anomaly of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4 (as
+ * for austenitic stainless). Curie
  * temperature 943 K (670 °C, from memory), low-field relative permeability 750, saturation
  * 1.5 T at 20 °C (typical, from memory), transition width 40 K. Documented range
  * 293–1473 K.
@@ -290,7 +301,7 @@ export const ferriticStainless: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: ferriticSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(ferriticConductivity, T20),
   thermalConductivityTable: ferriticConductivity,
-  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: STAINLESS_EMISSIVITY }),
   meltingTemperature: 1698,
   temperatureRange: Object.freeze({ min: 293.15, max: 1473.15 }),
   magnetic: true,
@@ -327,7 +338,9 @@ const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 
  * α₂₀ ≈ 0.00284 /K); density 2700 kg/m³, conductivity 167 W/(m·K) near room temperature and
  * solidus 855 K (582 °C) as in the same data sheets; specific heat 896 J/(kg·K) at 20 °C
  * (the data sheets give 896 at 100 °C; the table above 20 °C is from memory); emissivity
- * 0.03–0.3, typical 0.1 (from memory). Documented range 200–850 K.
+ * 0.03–0.3 as aluminium's in instrument makers' tables (Omega: 0.04–0.06 highly polished,
+ * 0.20–0.31 heavily oxidised; Raytek: 0.02–0.1 polished), typical 0.1 (a choice near the 0.09
+ * of commercial sheet). Documented range 200–850 K.
  *
  * @see A. Matthiessen, C. Vogt, Ann. Phys. 198 (1864) 19 (Matthiessen's rule).
  * @example
@@ -348,7 +361,7 @@ export const aluminiumAlloy: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: alloySpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(alloyConductivity, T20),
   thermalConductivityTable: alloyConductivity,
-  emissivity: Object.freeze({ min: 0.03, max: 0.3, typical: 0.1, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.03, max: 0.3, typical: 0.1, source: `taken as aluminium's: ${OMEGA_EMISSIVITY} (0.04–0.06 highly polished, 0.09 commercial sheet, 0.20–0.31 heavily oxidised) and ${RAYTEK_MI3_EMISSIVITY} (polished 0.02–0.1 at 8–14 µm); typical 0.1 a choice of ours near commercial sheet` }),
   meltingTemperature: 855,
   temperatureRange: Object.freeze({ min: 200, max: 850 }),
   magnetic: false,
@@ -375,8 +388,9 @@ const brassConductivity: TemperatureTable = Object.freeze({
  * Brass (70Cu–30Zn cartridge brass class). Resistivity 28 % IACS ≈ 6.16 × 10⁻⁸ Ω·m at
  * 20 °C (Olin Brass C26000 data), temperature coefficient 0.0015 /K (the Engineering
  * ToolBox's value for 58 % and 63 % Cu brasses; no figure for 70/30 brass was found), linear; density 8530 kg/m³; specific heat and conductivity from Incropera et al., 7th ed.,
- * Table A.1, p. 983, which ends at 600 K (values held above); emissivity 0.03–0.6, typical
- * 0.2 (from memory); melting point 1188 K (Incropera, Table A.1). Documented range 293–1100 K.
+ * Table A.1, p. 983, which ends at 600 K (values held above); emissivity 0.03 (highly polished,
+ * Omega table) to 0.6 (oxidised: 0.61 in the FLIR table), typical 0.2 (a choice near the 0.22
+ * of dull brass); melting point 1188 K (Incropera, Table A.1). Documented range 293–1100 K.
  *
  * @see Incropera, DeWitt, Bergman, Lavine, Fundamentals of Heat and Mass Transfer, 7th ed.,
  *   Table A.1, p. 983 (cartridge brass).
@@ -398,7 +412,7 @@ export const brass: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: brassSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(brassConductivity, T20),
   thermalConductivityTable: brassConductivity,
-  emissivity: Object.freeze({ min: 0.03, max: 0.6, typical: 0.2, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.03, max: 0.6, typical: 0.2, source: `${OMEGA_EMISSIVITY} (highly polished 73.2Cu–26.7Zn brass 0.03, dull plate 0.22); ${FLIR_EMISSIVITY_22} (dull, tarnished 0.22; oxidised at 100 °C 0.61); typical 0.2 a choice of ours near the dull-plate value` }),
   meltingTemperature: 1188,
   temperatureRange: Object.freeze({ min: 293.15, max: 1100 }),
   magnetic: false,
@@ -424,7 +438,8 @@ const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6
  * (from memory); density 4430 kg/m³, specific heat 526 J/(kg·K) near room temperature and solidus
  * 1877 K (1604 °C) as in the BTI Metals Ti-6Al-4V data sheet; conductivity 6.7 W/(m·K) at
  * 20 °C (that data sheet gives 6.70 over 100–300 °C, where this table reads 7.6–10.2: the
- * table is from memory); emissivity 0.2–0.8, typical 0.5 (from memory). Documented range
+ * table is from memory); emissivity 0.2–0.8, typical 0.5 (0.8 as oxidised titanium in Raytek's
+ * table; 0.2 and 0.5 from memory). Documented range
  * 293–1273 K.
  *
  * @see BTI Metals, Ti-6Al-4V data sheet; ASM/MatWeb, Titanium Ti-6Al-4V (Grade 5), annealed bar.
@@ -446,7 +461,7 @@ export const titaniumAlloy: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: titaniumSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(titaniumConductivity, T20),
   thermalConductivityTable: titaniumConductivity,
-  emissivity: Object.freeze({ min: 0.2, max: 0.8, typical: 0.5, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.2, max: 0.8, typical: 0.5, source: `maximum 0.8: oxidised titanium at 1.6 µm (0.6–0.8) in ${RAYTEK_EMISSIVITY}; minimum 0.2 and typical 0.5 from memory (that table's lowest value for titanium is 0.3, polished at 1.6 µm)` }),
   meltingTemperature: 1877,
   temperatureRange: Object.freeze({ min: ZERO_CELSIUS + 20, max: ZERO_CELSIUS + 1000 }),
   magnetic: false,

@@ -36,8 +36,11 @@ describe("resistivityAt", () => {
     expect(ti).toBeLessThanOrEqual(1.78e-6); // … to 1.78 µΩ·m (ASM/MatWeb, BTI Metals)
   });
 
-  it("gives silver 1.59 × 10⁻⁸ Ω·m and 0.0038 /K at 20 °C to the table's digits (OpenStax University Physics Vol. 2, §9.3, Table 9.1)", () => {
+  it("gives silver 1.587 × 10⁻⁸ Ω·m at 293 K (CRC Handbook, Electrical Resistivity of Pure Metals) and 0.0038 /K (OpenStax University Physics Vol. 2, §9.3, Table 9.1)", () => {
+    expect(resistivityAt(silver, 293.15)).toBeCloseTo(1.587e-8, 13); // CRC Handbook 2010, p. 12-40 ff.: 1.587 at 293 K
     expect(Number(resistivityAt(silver, celsius(20)).toPrecision(3))).toBe(1.59e-8); // OpenStax Table 9.1: 1.59 × 10⁻⁸ Ω·m
+    // CRC slope between 273 and 300 K, (1.629 − 1.467)/27 per K over 1.587: 0.00378 /K
+    expect(Math.abs(silver.temperatureCoefficient - (1.629 - 1.467) / 27 / 1.587)).toBeLessThan(0.00003);
     expect(silver.temperatureCoefficient).toBe(0.0038); // OpenStax Table 9.1: α = 0.0038 /°C
     expect(silver.density).toBe(10500); // Incropera et al. 7th ed., Table A.1, pure silver at 300 K
   });
