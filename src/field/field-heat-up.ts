@@ -21,8 +21,9 @@ import type {
 import type { ConductiveMaterial } from "../materials/index.js";
 import { readProblem } from "./solve-axisymmetric-field.js";
 import type { AxisymmetricFieldCoil, FieldRectangle, FieldRegion } from "./solve-axisymmetric-field.js";
-import { bodyLosses, fieldAtProbe, probe, solveOnce } from "./solver.js";
-import type { SolverBody, SolverProblem, SolverSolution } from "./solver.js";
+import { bodyLosses, fieldAtProbe, probe } from "./field-evaluation.js";
+import { solveOnce } from "./solver.js";
+import type { SolverBody, SolverProblem, SolverSolution } from "./solver-types.js";
 
 /**
  * The heated part of {@link fieldHeatUp}: a rectangle of the r–z half-plane of one material,

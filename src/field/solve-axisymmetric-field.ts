@@ -20,9 +20,10 @@ import type { MeshShape } from "./mesh.js";
 import { MU_0 } from "../units/index.js";
 import { effectiveCurve } from "./effective-curve.js";
 import type { CurvePoint } from "./effective-curve.js";
-import { bodyLosses, fieldAtProbe, probe, solveOnce } from "./solver.js";
+import { bodyLosses, fieldAtProbe, probe } from "./field-evaluation.js";
+import { solveOnce } from "./solver.js";
 import { MAX_SATURATION_ITERATIONS, solveSaturating } from "./saturation.js";
-import type { SolverBody, SolverProblem, SolverSolution } from "./solver.js";
+import type { SolverBody, SolverProblem, SolverSolution } from "./solver-types.js";
 
 /**
  * A rectangle of the r–z half-plane (a ring of rectangular cross-section in 3-D).
