@@ -20,7 +20,7 @@ import type { ConductiveMaterial } from "../materials/index.js";
 import { checkConductiveMaterial } from "../materials/check-material.js";
 import { surfaceTemperatureCaution } from "../safety/index.js";
 import { ConductionLattice } from "./conduction-lattice.js";
-import type { FieldRectangle } from "./solve-axisymmetric-field.js";
+import type { FieldRectangle } from "./field-types.js";
 
 /**
  * The four faces of a part's r–z rectangle: `"outer"` (r = rMax, the mantle), `"inner"`

@@ -288,3 +288,13 @@ export function triangleFluxDensityPeak(
     out[t] = Math.SQRT2 * Math.sqrt(brR * brR + brI * brI + bzR * bzR + bzI * bzI);
   }
 }
+
+/** Largest relative change of any coil's self-resistance or self-reactance between two solutions. */
+export function impedanceChange(a: SolverSolution, b: SolverSolution, nc: number): number {
+  let e = 0;
+  for (let c = 0; c < nc; c++) {
+    const k = c * nc + c;
+    e = Math.max(e, Math.abs(a.zRe[k]! - b.zRe[k]!) / Math.abs(b.zRe[k]!), Math.abs(a.zIm[k]! - b.zIm[k]!) / Math.abs(b.zIm[k]!));
+  }
+  return e;
+}
