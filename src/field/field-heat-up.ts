@@ -10,15 +10,10 @@ import { requireKnownKeys, requireObject, requirePositive, InputError } from "..
 import type { ValidityNote } from "../core/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { readConductionSetup, runConduction } from "./axisymmetric-conduction.js";
-import type {
-  AxisymmetricHeatConductionResult,
-  ConductionSetup,
-  PartCells,
-  PartFace,
-  PartGenerationRequest,
-  PartSurfaceExchange,
-} from "./axisymmetric-conduction.js";
+import { runConduction } from "./conduction-run.js";
+import { readConductionSetup } from "./conduction-setup.js";
+import type { ConductionSetup } from "./conduction-setup.js";
+import type { AxisymmetricHeatConductionResult, PartCells, PartFace, PartGenerationRequest, PartSurfaceExchange } from "./conduction-types.js";
 import type { AxisymmetricFieldCoil, FieldRectangle, FieldRegion } from "./field-types.js";
 import { HeatUpCoupling } from "./heat-up-coupling.js";
 import type { FieldHeatUpSolution, HeatedCells } from "./heat-up-coupling.js";

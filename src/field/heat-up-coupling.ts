@@ -9,7 +9,7 @@
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 import { MU_0 } from "../units/index.js";
-import type { PartGenerationRequest } from "./axisymmetric-conduction.js";
+import type { PartGenerationRequest } from "./conduction-types.js";
 import { bodyLosses, fieldAtProbe, impedanceChange, probe } from "./field-evaluation.js";
 import { solveOnce } from "./solver.js";
 import type { SolverBody, SolverProblem, SolverSolution } from "./solver-types.js";
