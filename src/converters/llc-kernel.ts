@@ -60,10 +60,15 @@ export interface LlcSteadyState {
 // ---------------------------------------------------------------------------------------------
 // Segment flows. Each takes a state and a duration and writes the end state into `out`.
 
-const out = new Float64Array(3);
-/** Cosine and sine of the last forced segment's phase (ωτ), kept for the tangent pass. */
-let segCos = 1;
-let segSin = 0;
+/**
+ * End state of the last flow (0–2), then the cosine and sine of the last forced segment's
+ * phase ωτ (3, 4), kept for the tangent pass: typed-array slots, written in place (a number
+ * written to a module variable is boxed on every write).
+ */
+const out = new Float64Array(5);
+const SEG_COS = 3;
+const SEG_SIN = 4;
+out[SEG_COS] = 1;
 
 /** Advance by one segment of mode `mode` for time `tau`; `forced` = false drops the constant forcing (linear part only). */
 function flow(mode: number, tau: number, j: number, u: number, g: number, m: number, lam: number, forced: boolean): void {
@@ -75,8 +80,8 @@ function flow(mode: number, tau: number, j: number, u: number, g: number, m: num
       const s = Math.sin(w * tau);
       out[0] = j * c - (u - drive) * w * s;
       out[1] = drive + (u - drive) * c + (j / w) * s;
-      segCos = c;
-      segSin = s;
+      out[SEG_COS] = c;
+      out[SEG_SIN] = s;
     } else {
       out[0] = j;
       out[1] = u + j * tau;
@@ -105,8 +110,8 @@ function flowDiode(mode: number, tau: number, j: number, u: number, g: number, m
   out[0] = j * c + (e - u) * s;
   out[1] = e + (u - e) * c + j * s;
   out[2] = g + sign * m * lam * tau;
-  segCos = c;
-  segSin = s;
+  out[SEG_COS] = c;
+  out[SEG_SIN] = s;
   return sign * (j * s + (e - u) * (1 - c) - g * tau - 0.5 * sign * m * lam * tau * tau);
 }
 
@@ -216,8 +221,8 @@ export function sequenceResidualsAndJacobian(y: Float64Array, theta: number, lam
       charge += flowDiode(mode, tau, j, u, g, m, lam);
       const sign = mode === MODE_P ? 1 : -1;
       const e = 1 - sign * m;
-      const c = segCos;
-      const s = segSin;
+      const c = out[SEG_COS] ?? 1;
+      const s = out[SEG_SIN] ?? 0;
       const jEnd = out[0] ?? 0;
       const gEnd = out[2] ?? 0;
       const jTau = -j * s + (e - u) * c;
@@ -239,8 +244,8 @@ export function sequenceResidualsAndJacobian(y: Float64Array, theta: number, lam
     } else {
       flow(mode, tau, j, u, g, m, lam, true);
       if (lam > 0) {
-        const c = segCos;
-        const s = segSin;
+        const c = out[SEG_COS] ?? 1;
+        const s = out[SEG_SIN] ?? 0;
         const jTau = -j * w * s - (u - 1) * w * w * c;
         const uTau = -(u - 1) * w * s + j * c;
         for (let col = 0; col < size; col++) {
@@ -291,13 +296,11 @@ export function sequenceResidualsAndJacobian(y: Float64Array, theta: number, lam
   return Number.isFinite(r[3] ?? NaN) && m > 0;
 }
 
-/** Parameters of the sequence solve, read by {@link sequenceSystem} (set before each solve). */
-let sysTheta = 0;
-let sysLam = 0;
-let sysKappa = 0;
+/** Parameters (θ, λ, κ) of the sequence solve, read by {@link sequenceSystem} (set before each solve). */
+const sys = new Float64Array(3);
 const sequenceSystem: PeriodicSystem = {
-  residuals: (y, r) => sequenceResiduals(y, sysTheta, sysLam, sysKappa, r),
-  residualsAndJacobian: (y, r, jac) => sequenceResidualsAndJacobian(y, sysTheta, sysLam, sysKappa, r, jac),
+  residuals: (y, r) => sequenceResiduals(y, sys[0] ?? 0, sys[1] ?? 0, sys[2] ?? 0, r),
+  residualsAndJacobian: (y, r, jac) => sequenceResidualsAndJacobian(y, sys[0] ?? 0, sys[1] ?? 0, sys[2] ?? 0, r, jac),
 };
 
 /**
@@ -328,9 +331,9 @@ function solveSequence(theta: number, lam: number, kappa: number, j0: number, u0
   unknowns[2] = g0;
   unknowns[3] = m;
   for (let k = 0; k < seqLength - 1; k++) unknowns[k + 4] = seqTau[k] ?? 0;
-  sysTheta = theta;
-  sysLam = lam;
-  sysKappa = kappa;
+  sys[0] = theta;
+  sys[1] = lam;
+  sys[2] = kappa;
   const residual = newton.solve(sequenceSystem, seqLength + 3, SEQUENCE_NEWTON, theta);
   // the durations of the solution (the last step may have been taken without an evaluation)
   setDurations(unknowns, theta);
@@ -573,20 +576,18 @@ function attempt(lam: number, q: number, fn: number, theta: number, kappa: numbe
     const residual = verifyResidual(sj, su, sg, mm, kappa, theta);
     best = residual;
     if (residual < STEADY_STATE_TOLERANCE) {
-      solvedM = mm;
-      solvedJ = sj;
-      solvedU = su;
-      solvedG = sg;
+      solved[0] = mm;
+      solved[1] = sj;
+      solved[2] = su;
+      solved[3] = sg;
       return residual;
     }
   }
   return best;
 }
 
-let solvedM = 0;
-let solvedJ = 0;
-let solvedU = 0;
-let solvedG = 0;
+/** The last accepted solution (m, j0, u0, g0) of {@link attempt}. */
+const solved = new Float64Array(4);
 
 /**
  * Solves the steady state. `lam` = L_r/L_m (0: series resonant), `q` = Z_r/R_ac, `fn` = f_s/f_r.
@@ -611,14 +612,17 @@ export function llcSteadyState(lam: number, q: number, fn: number): LlcSteadySta
       const th = Math.PI / f;
       residual = attempt(lam, q, f, th, kappa, m, j, u, g);
       if (!(residual < STEADY_STATE_TOLERANCE)) ok = false;
-      m = solvedM;
-      j = solvedJ;
-      u = solvedU;
-      g = solvedG;
+      m = solved[0] ?? 0;
+      j = solved[1] ?? 0;
+      u = solved[2] ?? 0;
+      g = solved[3] ?? 0;
     }
     if (!ok) return null;
   }
-  const m = solvedM;
+  const m = solved[0] ?? 0;
+  const solvedJ = solved[1] ?? 0;
+  const solvedU = solved[2] ?? 0;
+  const solvedG = solved[3] ?? 0;
   // the last propagation (attempt's verifying pass at the solved state and this θ) holds the record
   const { sequence, durations } = events.summary(MODE_LETTER, theta);
   return {

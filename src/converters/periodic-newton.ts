@@ -150,15 +150,20 @@ export class PeriodicNewton {
         haveJacobian = true;
         fresh = true;
       }
+      // factor a new Jacobian once; chord steps reuse the factors. With the exact Jacobian of
+      // every trial (`exact`) the factors are made in place: that Jacobian is not read again
+      // (an accepted trial brings the next one, a rejected step ends the iteration)
+      const factors = exact ? this.jac : lu;
       if (fresh || exact) {
-        // factor a new Jacobian once; chord steps reuse the factors
-        const jac = this.jac;
-        for (let i = 0; i < size * size; i++) lu[i] = jac[i] ?? 0;
-        if (!factorDense(size, lu, pivots)) return Infinity;
+        if (!exact) {
+          const jac = this.jac;
+          for (let i = 0; i < size * size; i++) lu[i] = jac[i] ?? 0;
+        }
+        if (!factorDense(size, factors, pivots)) return Infinity;
         fresh = true;
       }
       for (let i = 0; i < size; i++) step[i] = -(r[i] ?? 0);
-      if (!solveFactored(size, lu, pivots, step)) return Infinity;
+      if (!solveFactored(size, factors, pivots, step)) return Infinity;
       if (fresh && rn < (settings.unverifiedStepBelow ?? 0)) {
         for (let i = 0; i < size; i++) x[i] = (x[i] ?? 0) + (step[i] ?? 0);
         return rn * rn;
