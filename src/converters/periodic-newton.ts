@@ -65,6 +65,22 @@ export interface NewtonSettings {
 }
 
 /**
+ * Newton settings of the topologies solved on their state and gain alone (unknowns
+ * (j0, u0, v0, M), residuals from a propagation: the LCC and parallel-resonant kernels, with an
+ * inductive or a capacitive output filter): a fresh forward-difference Jacobian each step, up to
+ * 40 halvings, stop at 1e-14 with the states scaled by max(1, |x|).
+ */
+export const STATE_AND_GAIN_NEWTON: NewtonSettings = {
+  states: 3,
+  gainFloor: 0.1,
+  scaledNorm: true,
+  reuseJacobian: false,
+  backtracks: 40,
+  tolerance: 1e-14,
+  maxIterations: 60,
+};
+
+/**
  * Damped Newton solver for a {@link PeriodicSystem}, with preallocated work arrays (no
  * allocation per solve). Difference steps: 1e-7 × max(1, |state|) for the states,
  * 1e-7 × max(|gain|, 1e-3) for the gain, 1e-7 × `durationScale` for the durations.
