@@ -5,7 +5,7 @@
  *
  * Each case runs in a timing loop of its own (one shared loop would see every function at its
  * call site, and V8 would stop inlining there: that measures the call site, not the function;
- * `llcGain` read 16–22 M/s through a shared loop and 60–67 M/s through its own). Besides the
+ * `llcGain` read 11–22 M/s through a shared loop and 60–75 M/s through its own). Besides the
  * wall-clock rate each row gives the rate in CPU time of this process (`process.cpuUsage`),
  * which a loaded machine moves less.
  *
@@ -51,11 +51,17 @@ function makeReferenceObject(a: number, b: number): { a: number; b: number; sum:
   return { a, b, sum: a + b };
 }
 
-/** A fresh timing loop per case: its call site sees one function only. */
+let loops = 0;
+/**
+ * A fresh timing loop per case: its call site sees one function only. The source text differs
+ * per loop: V8 caches the compilation of identical text, and the closures of one cached
+ * function share their type feedback (a second loop of the same text read llcGain 0.63 × the
+ * first).
+ */
 function makeLoop(): (run: (i: number) => number, calls: number) => number {
   // deliberate: a new function object per case for its own type feedback (no input is evaluated)
   // eslint-disable-next-line @typescript-eslint/no-implied-eval
-  return new Function("run", "calls", "let sink = 0; for (let i = 0; i < calls; i++) sink += run(i); return sink;") as (run: (i: number) => number, calls: number) => number;
+  return new Function("run", "calls", `/* loop ${loops++} */ let sink = 0; for (let i = 0; i < calls; i++) sink += run(i); return sink;`) as (run: (i: number) => number, calls: number) => number;
 }
 
 interface Measured {
