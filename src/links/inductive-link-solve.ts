@@ -95,39 +95,20 @@ function capacitorLocation(name: string): string {
  * $R_L \parallel 1/(j\omega C_2)$, LCC $1/(j\omega C_2) + [1/(j\omega C_{f2}) \parallel (j\omega L_{f2} + R_L)]$.
  */
 function reduceSecondary(code: number): void {
+  if ((code & 8) !== 0) {
+    reduceSecondaryLcc();
+    return;
+  }
   const w = net[W] ?? 0;
   const w2 = net[W2] ?? 0;
   const l2 = linkArguments[ARG_L2] ?? 0;
   const rl = linkArguments[ARG_RL] ?? 0;
   const givenC2 = linkArguments[ARG_C2] ?? 0;
-  const lf2 = linkArguments[ARG_LF2] ?? 0;
-  const secondaryParallel = (code & 2) !== 0;
-  const secondaryLcc = (code & 8) !== 0;
-  const c2 = givenC2 > 0 ? givenC2 : secondaryLcc ? 1 / (w2 * (l2 - lf2)) : 1 / (w2 * l2);
+  const c2 = givenC2 > 0 ? givenC2 : 1 / (w2 * l2);
   const xc2 = -1 / (w * c2);
   let extRe: number;
   let extIm: number;
-  let afterAbs = 0;
-  let branchAbs = 0;
-  const cf2 = secondaryLcc ? 1 / (w2 * lf2) : 0;
-  if (secondaryLcc) {
-    // (−j/(ωC_f2)) ∥ (R_L + jωL_f2)
-    const xf = -1 / (w * cf2);
-    const bRe = rl;
-    const bIm = w * lf2;
-    // a·b/(a + b) with a = j xf
-    const nRe = -xf * bIm;
-    const nIm = xf * bRe;
-    const dRe = bRe;
-    const dIm = bIm + xf;
-    const dd = dRe * dRe + dIm * dIm;
-    const aRe = (nRe * dRe + nIm * dIm) / dd;
-    const aIm = (nIm * dRe - nRe * dIm) / dd;
-    afterAbs = Math.sqrt(aRe * aRe + aIm * aIm);
-    branchAbs = Math.sqrt(bRe * bRe + bIm * bIm);
-    extRe = aRe;
-    extIm = aIm + xc2;
-  } else if (secondaryParallel) {
+  if ((code & 2) !== 0) {
     // (j xc2) ∥ R_L
     const d = rl * rl + xc2 * xc2;
     extRe = (rl * xc2 * xc2) / d;
@@ -137,11 +118,42 @@ function reduceSecondary(code: number): void {
     extIm = xc2;
   }
   net[C2] = c2;
-  net[CF2] = cf2;
+  net[CF2] = 0;
   net[EXT_RE] = extRe;
   net[EXT_IM] = extIm;
-  net[AFTER_ABS] = afterAbs;
-  net[BRANCH_ABS] = branchAbs;
+  net[AFTER_ABS] = 0;
+  net[BRANCH_ABS] = 0;
+}
+
+/** {@link reduceSecondary} for a secondary LCC network (a function of its own so that the series and parallel cases stay small enough to be inlined). */
+function reduceSecondaryLcc(): void {
+  const w = net[W] ?? 0;
+  const w2 = net[W2] ?? 0;
+  const l2 = linkArguments[ARG_L2] ?? 0;
+  const rl = linkArguments[ARG_RL] ?? 0;
+  const givenC2 = linkArguments[ARG_C2] ?? 0;
+  const lf2 = linkArguments[ARG_LF2] ?? 0;
+  const c2 = givenC2 > 0 ? givenC2 : 1 / (w2 * (l2 - lf2));
+  const xc2 = -1 / (w * c2);
+  const cf2 = 1 / (w2 * lf2);
+  // (−j/(ωC_f2)) ∥ (R_L + jωL_f2)
+  const xf = -1 / (w * cf2);
+  const bRe = rl;
+  const bIm = w * lf2;
+  // a·b/(a + b) with a = j xf
+  const nRe = -xf * bIm;
+  const nIm = xf * bRe;
+  const dRe = bRe;
+  const dIm = bIm + xf;
+  const dd = dRe * dRe + dIm * dIm;
+  const aRe = (nRe * dRe + nIm * dIm) / dd;
+  const aIm = (nIm * dRe - nRe * dIm) / dd;
+  net[C2] = c2;
+  net[CF2] = cf2;
+  net[EXT_RE] = aRe;
+  net[EXT_IM] = aIm + xc2;
+  net[AFTER_ABS] = Math.sqrt(aRe * aRe + aIm * aIm);
+  net[BRANCH_ABS] = Math.sqrt(bRe * bRe + bIm * bIm);
 }
 
 /**
@@ -153,13 +165,13 @@ function reduceSecondary(code: number): void {
  * @throws {@link InputError} when a given capacitance leaves no default series or parallel capacitor
  */
 function reducePrimary(code: number): void {
-  const where = "inductiveLink";
+  if ((code & 4) !== 0) {
+    reducePrimaryLcc();
+    return;
+  }
   const w = net[W] ?? 0;
-  const w2 = net[W2] ?? 0;
-  const l1 = linkArguments[ARG_L1] ?? 0;
   const v = linkArguments[ARG_V] ?? 0;
   const givenC1 = linkArguments[ARG_C1] ?? 0;
-  const lf1 = linkArguments[ARG_LF1] ?? 0;
   const coilRe = net[IN_RE] ?? 0;
   const coilIm = net[IN_IM] ?? 0;
   let c1: number;
@@ -167,34 +179,10 @@ function reducePrimary(code: number): void {
   let inIm: number;
   let i1Abs: number;
   let inCurrentAbs: number;
-  let cf1 = 0;
-  let nodeAbs = 0;
-  if ((code & 4) !== 0) {
-    c1 = givenC1 > 0 ? givenC1 : 1 / (w2 * (l1 - lf1));
-    cf1 = 1 / (w2 * lf1);
-    const xf = -1 / (w * cf1);
-    const bRe = coilRe;
-    const bIm = coilIm - 1 / (w * c1);
-    // (j xf) ∥ b
-    const nRe = -xf * bIm;
-    const nIm = xf * bRe;
-    const dIm = bIm + xf;
-    const dd = bRe * bRe + dIm * dIm;
-    inRe = (nRe * bRe + nIm * dIm) / dd;
-    inIm = (nIm * bRe - nRe * dIm) / dd + w * lf1;
-    const inSq = inRe * inRe + inIm * inIm;
-    // I_in = V/Z_in; node voltage V − jωL_f1 I_in; coil current node/(branch)
-    const iRe = (v * inRe) / inSq;
-    const iIm = (-v * inIm) / inSq;
-    const vnRe = v + w * lf1 * iIm;
-    const vnIm = -w * lf1 * iRe;
-    nodeAbs = Math.sqrt(vnRe * vnRe + vnIm * vnIm);
-    inCurrentAbs = v / Math.sqrt(inSq);
-    i1Abs = nodeAbs / Math.sqrt(bRe * bRe + bIm * bIm);
-  } else if ((code & 1) !== 0) {
+  if ((code & 1) !== 0) {
     const coilSq = coilRe * coilRe + coilIm * coilIm;
     c1 = givenC1 > 0 ? givenC1 : coilIm / (coilSq * w);
-    if (!(c1 > 0)) throw new InputError(where, "primaryCapacitance", c1, "F", "given: the branch is capacitive, so no parallel capacitor makes the input impedance real");
+    if (!(c1 > 0)) throw noDefaultCapacitor(c1, "parallel");
     // admittance jωC₁ + 1/Z_coil
     const yRe = coilRe / coilSq;
     const yIm = w * c1 - coilIm / coilSq;
@@ -205,18 +193,61 @@ function reducePrimary(code: number): void {
     i1Abs = v / Math.sqrt(coilSq);
   } else {
     c1 = givenC1 > 0 ? givenC1 : 1 / (w * coilIm);
-    if (!(c1 > 0)) throw new InputError(where, "primaryCapacitance", c1, "F", "given: the branch is capacitive, so no series capacitor makes the input impedance real");
+    if (!(c1 > 0)) throw noDefaultCapacitor(c1, "series");
     inRe = coilRe;
     inIm = coilIm - 1 / (w * c1);
     inCurrentAbs = v / Math.sqrt(inRe * inRe + inIm * inIm);
     i1Abs = inCurrentAbs;
   }
   net[C1] = c1;
-  net[CF1] = cf1;
+  net[CF1] = 0;
   net[IN_RE] = inRe;
   net[IN_IM] = inIm;
   net[I1_ABS] = i1Abs;
   net[IN_CURRENT_ABS] = inCurrentAbs;
+  net[NODE_ABS] = 0;
+}
+
+/** The error for a primary series or parallel capacitor that would have to be negative. */
+function noDefaultCapacitor(c1: number, kind: "series" | "parallel"): InputError {
+  return new InputError("inductiveLink", "primaryCapacitance", c1, "F", `given: the branch is capacitive, so no ${kind} capacitor makes the input impedance real`);
+}
+
+/** {@link reducePrimary} for a primary LCC network (a function of its own so that the series and parallel cases stay small enough to be inlined). */
+function reducePrimaryLcc(): void {
+  const w = net[W] ?? 0;
+  const w2 = net[W2] ?? 0;
+  const l1 = linkArguments[ARG_L1] ?? 0;
+  const v = linkArguments[ARG_V] ?? 0;
+  const givenC1 = linkArguments[ARG_C1] ?? 0;
+  const lf1 = linkArguments[ARG_LF1] ?? 0;
+  const coilRe = net[IN_RE] ?? 0;
+  const coilIm = net[IN_IM] ?? 0;
+  const c1 = givenC1 > 0 ? givenC1 : 1 / (w2 * (l1 - lf1));
+  const cf1 = 1 / (w2 * lf1);
+  const xf = -1 / (w * cf1);
+  const bRe = coilRe;
+  const bIm = coilIm - 1 / (w * c1);
+  // (j xf) ∥ b
+  const nRe = -xf * bIm;
+  const nIm = xf * bRe;
+  const dIm = bIm + xf;
+  const dd = bRe * bRe + dIm * dIm;
+  const inRe = (nRe * bRe + nIm * dIm) / dd;
+  const inIm = (nIm * bRe - nRe * dIm) / dd + w * lf1;
+  const inSq = inRe * inRe + inIm * inIm;
+  // I_in = V/Z_in; node voltage V − jωL_f1 I_in; coil current node/(branch)
+  const iRe = (v * inRe) / inSq;
+  const iIm = (-v * inIm) / inSq;
+  const vnRe = v + w * lf1 * iIm;
+  const vnIm = -w * lf1 * iRe;
+  const nodeAbs = Math.sqrt(vnRe * vnRe + vnIm * vnIm);
+  net[C1] = c1;
+  net[CF1] = cf1;
+  net[IN_RE] = inRe;
+  net[IN_IM] = inIm;
+  net[I1_ABS] = nodeAbs / Math.sqrt(bRe * bRe + bIm * bIm);
+  net[IN_CURRENT_ABS] = v / Math.sqrt(inSq);
   net[NODE_ABS] = nodeAbs;
 }
 
