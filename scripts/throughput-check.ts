@@ -61,13 +61,17 @@ type Timer = (run: (i: number) => number, calls: number) => number;
  * at its call site and V8 would stop inlining there (megamorphic), which measures the call site,
  * not the function. Returns seconds per call of `run`.
  */
+let timers = 0;
 function makeTimer(): Timer {
-  // A fresh function object per case gives each its own type feedback (deliberate, not eval of input).
+  // A fresh function object per case gives each its own type feedback (deliberate, not eval of
+  // input). The source differs per timer: V8 caches the compilation of identical source text,
+  // and closures of one cached function share their feedback (seen: a second loop of the same
+  // text read llcGain 0.63 × the first).
   // eslint-disable-next-line @typescript-eslint/no-implied-eval
   const loop = new Function(
     "run",
     "calls",
-    "let sink = 0; const t0 = performance.now(); for (let i = 0; i < calls; i++) sink += run(i); return [performance.now() - t0, sink];",
+    `/* timer ${timers++} */ let sink = 0; const t0 = performance.now(); for (let i = 0; i < calls; i++) sink += run(i); return [performance.now() - t0, sink];`,
   ) as (run: (i: number) => number, calls: number) => [number, number];
   return (run, calls) => {
     const [ms, sink] = loop(run, calls);

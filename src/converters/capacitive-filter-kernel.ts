@@ -23,7 +23,7 @@
  *
  * @packageDocumentation
  */
-import { HalfPeriodRecord, PeriodicNewton, type NewtonSettings, type PeriodicSystem } from "./periodic-newton.js";
+import { HalfPeriodRecord, PeriodicNewton, STATE_AND_GAIN_NEWTON, type PeriodicSystem } from "./periodic-newton.js";
 import { firstDownCrossing, rampSinusoidSquareIntegral, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 const MODE_O = 0;
@@ -204,16 +204,6 @@ const capacitiveSystem: PeriodicSystem = {
   residuals: (x, out) => residuals(x, sysA, sysZeta, sysTheta, out),
 };
 
-/** Newton on (j0, u0, v0, M): a fresh Jacobian each step, up to 40 halvings, stop at 1e-14 (states scaled by max(1, |x|)). */
-const CAPACITIVE_NEWTON: NewtonSettings = {
-  states: 3,
-  gainFloor: 0.1,
-  scaledNorm: true,
-  reuseJacobian: false,
-  backtracks: 40,
-  tolerance: 1e-14,
-  maxIterations: 60,
-};
 const newton = new PeriodicNewton(4);
 /** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
 const y = newton.x;
@@ -291,7 +281,7 @@ function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: nu
   sysA = a;
   sysZeta = zeta;
   sysTheta = theta;
-  return newton.solve(capacitiveSystem, 4, CAPACITIVE_NEWTON, theta);
+  return newton.solve(capacitiveSystem, 4, STATE_AND_GAIN_NEWTON, theta);
 }
 
 /** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */

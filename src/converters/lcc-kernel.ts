@@ -22,7 +22,7 @@
  *
  * @packageDocumentation
  */
-import { HalfPeriodRecord, PeriodicNewton, type NewtonSettings, type PeriodicSystem } from "./periodic-newton.js";
+import { HalfPeriodRecord, PeriodicNewton, STATE_AND_GAIN_NEWTON, type PeriodicSystem } from "./periodic-newton.js";
 import { firstDownCrossing, rampSinusoidPeak, rampSinusoidSquareIntegral, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 const MODE_Z = 0;
@@ -193,16 +193,6 @@ const lccSystem: PeriodicSystem = {
   residuals: (x, out) => residuals(x, sysA, sysZeta, sysTheta, out),
 };
 
-/** Newton on (j0, u0, v0, M): a fresh Jacobian each step, up to 40 halvings, stop at 1e-14 (states scaled by max(1, |x|)). */
-const LCC_NEWTON: NewtonSettings = {
-  states: 3,
-  gainFloor: 0.1,
-  scaledNorm: true,
-  reuseJacobian: false,
-  backtracks: 40,
-  tolerance: 1e-14,
-  maxIterations: 60,
-};
 const newton = new PeriodicNewton(4);
 /** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
 const y = newton.x;
@@ -263,7 +253,7 @@ function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: nu
   sysA = a;
   sysZeta = zeta;
   sysTheta = theta;
-  return newton.solve(lccSystem, 4, LCC_NEWTON, theta);
+  return newton.solve(lccSystem, 4, STATE_AND_GAIN_NEWTON, theta);
 }
 
 /** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */

@@ -1,7 +1,7 @@
 /**
  * LLC converter design: turns ratio, resonant tank and magnetising inductance from the input
  * range, the output and the resonant frequency, checked at every corner with the exact steady
- * state.
+ * state. The types are in `llc-design-types.ts`, the corner solves in `llc-design-corners.ts`.
  *
  * @packageDocumentation
  */
@@ -18,167 +18,118 @@ import {
   type Caution,
   type ValidityNote,
 } from "../core/index.js";
-import { brentRoot } from "../special/index.js";
 import { E12, E24, E96 } from "../tank/e-series.js";
-import { llcGainKernel } from "./fha.js";
-import { llcOperatingPoint, type LlcOperatingPoint } from "./llc-operating-point.js";
+import { llcPeakGain, seriesAtOrAbove, solveCorner, type CornerDesign } from "./llc-design-corners.js";
+import type { LlcDesign, LlcDesignCorner, LlcDesignOptions } from "./llc-design-types.js";
 
-/**
- * Options of {@link llcDesign}.
- *
- * @category Converters
- */
-export interface LlcDesignOptions {
-  /** DC input voltage range [V]: 0 < min ≤ nominal ≤ max. The converter runs at f_r at the nominal input. */
-  readonly inputVoltage: {
-    /** Lowest input [V], > 0. */
-    readonly min: number;
-    /** Nominal input [V] (gain 1, switching at f_r). */
-    readonly nominal: number;
-    /** Highest input [V]. */
-    readonly max: number;
-  };
-  /** Regulated output voltage [V], > 0. */
-  readonly outputVoltage: number;
-  /** Full-load output power [W], > 0. */
-  readonly outputPower: number;
-  /** Resonant frequency f_r of L_r and C_r [Hz], > 0 (kept exactly after the capacitor is picked). */
-  readonly resonantFrequency: number;
-  /** `"half"` (tank driven with ±V_in/2) or `"full"` (±V_in). */
-  readonly bridge: "half" | "full";
-  /** L_n = L_m/L_r, 3 ≤ L_n ≤ 10; default 6. */
-  readonly inductanceRatio?: number;
-  /** Required ratio of the first-harmonic peak gain to the largest gain needed (at the lowest input, full load), 1 ≤ margin ≤ 2; default 1.1. */
-  readonly gainMargin?: number;
-  /** Light-load corner as a fraction of full power, 0.05 ≤ fraction < 1; default 0.2. */
-  readonly lightLoadFraction?: number;
-  /** E-series the resonant capacitor is picked from (the nearest value at or above the ideal one); default `"E24"`. */
-  readonly capacitorSeries?: "E12" | "E24" | "E96";
-  /** Rectifier (sets the diode voltage only): default `"full-bridge"`. */
-  readonly rectifier?: "centre-tap" | "full-bridge";
-  /** Dead time [s], ≥ 0: with switchCapacitance, the ZVS test at each corner. */
-  readonly deadTime?: number;
-  /** Output capacitance of one switch [F], ≥ 0. */
-  readonly switchCapacitance?: number;
-}
-
-/**
- * One corner of the operating range of an {@link llcDesign}.
- *
- * @category Converters
- */
-export interface LlcDesignCorner {
-  /** Input voltage [V]. */
-  readonly inputVoltage: number;
-  /** Load as a fraction of full power. */
-  readonly loadFraction: number;
-  /** Load resistance [Ω]. */
-  readonly loadResistance: number;
-  /** Gain needed for the output voltage, M = nV_out/V_b. */
-  readonly requiredGain: number;
-  /** Switching frequency that gives the output voltage [Hz], from the exact steady state (the first-harmonic one when the exact solve did not settle, see `method`). */
-  readonly switchingFrequency: number;
-  /** f_s/f_r. */
-  readonly normalisedFrequency: number;
-  /** The first-harmonic estimate of the same frequency [Hz] (null when the FHA gain cannot reach the required gain). */
-  readonly switchingFrequencyFirstHarmonic: number | null;
-  /** `"exact"` (the piecewise-linear steady state) or `"first-harmonic"` (the exact solve did not settle). */
-  readonly method: "exact" | "first-harmonic";
-  /** The exact operating point at the switching frequency (null when `method` is "first-harmonic"). */
-  readonly operatingPoint: LlcOperatingPoint | null;
-  /** Zero-voltage switching at this corner (exact point; the FHA current at turn-off otherwise). */
-  readonly zeroVoltageSwitching: boolean;
-}
-
-/**
- * The result of {@link llcDesign}.
- *
- * @category Converters
- */
-export interface LlcDesign {
-  /** Transformer turns ratio n = primary/secondary turns (gain 1 at the nominal input). */
-  readonly turnsRatio: number;
-  /** Resonant inductance L_r [H] (leakage included). */
-  readonly resonantInductance: number;
-  /** Resonant capacitance C_r [F], an E-series value. */
-  readonly resonantCapacitance: number;
-  /** Magnetising inductance L_m [H]. */
-  readonly magnetisingInductance: number;
-  /** Resonant frequency 1/(2π√(L_rC_r)) [Hz] (equals the requested one). */
-  readonly resonantFrequency: number;
-  /** L_n = L_m/L_r. */
-  readonly inductanceRatio: number;
-  /** Full-load Q = √(L_r/C_r)/R_ac with the picked capacitor. */
-  readonly qualityFactor: number;
-  /** Full-load resistance V_out²/P [Ω]. */
-  readonly loadResistance: number;
-  /** First-harmonic peak gain at full load over the largest gain needed (≥ the requested margin unless a caution says otherwise). */
-  readonly gainMargin: number;
-  /** Normalised frequency of the first-harmonic peak gain at full load (the lower edge of the inductive region). */
-  readonly peakGainFrequency: number;
-  /** Switching-frequency range over all corners [Hz]. */
-  readonly frequencyRange: {
-    /** Lowest switching frequency [Hz]. */
-    readonly min: number;
-    /** Highest switching frequency [Hz]. */
-    readonly max: number;
-  };
-  /** Every corner: (min, nominal, max input) × (full, light load). */
-  readonly corners: readonly LlcDesignCorner[];
-  /** Zero-voltage switching at every corner. */
-  readonly zeroVoltageSwitching: boolean;
-  /** Hazards and shortfalls (input voltage, capacitor voltage, hard switching, uncovered range). */
-  readonly cautions: readonly Caution[];
-  /** Notes where the design leaves the domain the exact solver was checked on. */
-  readonly validity: readonly ValidityNote[];
-}
+export type { LlcDesign, LlcDesignCorner, LlcDesignOptions } from "./llc-design-types.js";
 
 const KEYS = [
   "inputVoltage", "outputVoltage", "outputPower", "resonantFrequency", "bridge", "inductanceRatio", "gainMargin",
   "lightLoadFraction", "capacitorSeries", "rectifier", "deadTime", "switchCapacitance",
 ] as const;
 const RANGE_KEYS = ["min", "nominal", "max"] as const;
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
 /** Normalised switching frequency above which a corner gets a caution. */
 const FAR_ABOVE = 2;
 
-/** First-harmonic peak gain over f_n in (1/√(1+L_n), 1] at (L_n, Q), and where it lies (golden-section search). */
-function llcPeakGain(ln: number, q: number): { gain: number; frequency: number } {
-  let a = 1 / Math.sqrt(1 + ln);
-  let b = 1;
-  let c = b - GOLDEN * (b - a);
-  let d = a + GOLDEN * (b - a);
-  let gc = llcGainKernel(ln, q, c);
-  let gd = llcGainKernel(ln, q, d);
-  for (let k = 0; k < 80 && b - a > 1e-12; k++) {
-    if (gc > gd) {
-      b = d;
-      d = c;
-      gd = gc;
-      c = b - GOLDEN * (b - a);
-      gc = llcGainKernel(ln, q, c);
-    } else {
-      a = c;
-      c = d;
-      gc = gd;
-      d = a + GOLDEN * (b - a);
-      gd = llcGainKernel(ln, q, d);
-    }
-  }
-  const frequency = 0.5 * (a + b);
-  return { gain: llcGainKernel(ln, q, frequency), frequency };
+/** The checked options of {@link llcDesign}, defaults filled in. */
+interface DesignInput {
+  readonly vMin: number;
+  readonly vNom: number;
+  readonly vMax: number;
+  readonly vOut: number;
+  readonly power: number;
+  readonly fr: number;
+  readonly bridge: "half" | "full";
+  readonly ln: number;
+  readonly margin: number;
+  readonly light: number;
+  readonly seriesName: "E12" | "E24" | "E96";
+  readonly rectifier: "centre-tap" | "full-bridge" | undefined;
+  readonly deadTime: number | undefined;
+  readonly switchCapacitance: number | undefined;
 }
 
-/** The smallest value of the series (×10^k) at or above x. */
-function seriesAtOrAbove(x: number, series: readonly number[]): number {
-  const decade = Math.pow(10, Math.floor(Math.log10(x)));
-  for (const scale of [decade, 10 * decade]) {
-    for (const v of series) {
-      const value = Number((v * scale).toPrecision(3)); // the series' own digits, without binary residue
-      if (value >= x * (1 - 1e-12)) return value;
-    }
+/** Reads and checks the options of {@link llcDesign} (each check throws {@link InputError}). */
+function readDesignOptions(options: LlcDesignOptions): DesignInput {
+  const where = "llcDesign";
+  requireObject(where, "options", options);
+  requireKnownKeys(where, "options", options, KEYS);
+  requireObject(where, "inputVoltage", options.inputVoltage);
+  requireKnownKeys(where, "inputVoltage", options.inputVoltage, RANGE_KEYS);
+  const vMin = requirePositive(where, "inputVoltage.min", options.inputVoltage.min, "V");
+  const vNom = requirePositive(where, "inputVoltage.nominal", options.inputVoltage.nominal, "V");
+  const vMax = requirePositive(where, "inputVoltage.max", options.inputVoltage.max, "V");
+  if (!(vMin <= vNom)) throw new InputError(where, "inputVoltage.min", vMin, "V", `at most inputVoltage.nominal (${vNom})`);
+  if (!(vNom <= vMax)) throw new InputError(where, "inputVoltage.max", vMax, "V", `at least inputVoltage.nominal (${vNom})`);
+  const vOut = requirePositive(where, "outputVoltage", options.outputVoltage, "V");
+  const power = requirePositive(where, "outputPower", options.outputPower, "W");
+  const fr = requirePositive(where, "resonantFrequency", options.resonantFrequency, "Hz");
+  const bridge = requireOneOf(where, "bridge", options.bridge, ["half", "full"] as const);
+  const ln = options.inductanceRatio === undefined ? 6 : requireInRange(where, "inductanceRatio", options.inductanceRatio, "", 3, 10);
+  const margin = options.gainMargin === undefined ? 1.1 : requireInRange(where, "gainMargin", options.gainMargin, "", 1, 2);
+  const light = options.lightLoadFraction === undefined ? 0.2 : requireInRange(where, "lightLoadFraction", options.lightLoadFraction, "", 0.05, 1, "[)");
+  const seriesName = options.capacitorSeries === undefined ? "E24" : requireOneOf(where, "capacitorSeries", options.capacitorSeries, ["E12", "E24", "E96"] as const);
+  const rectifier = options.rectifier === undefined ? undefined : requireOneOf(where, "rectifier", options.rectifier, ["centre-tap", "full-bridge"] as const);
+  const deadTime = options.deadTime === undefined ? undefined : requireNonNegative(where, "deadTime", options.deadTime, "s");
+  const switchCapacitance = options.switchCapacitance === undefined ? undefined : requireNonNegative(where, "switchCapacitance", options.switchCapacitance, "F");
+  return { vMin, vNom, vMax, vOut, power, fr, bridge, ln, margin, light, seriesName, rectifier, deadTime, switchCapacitance };
+}
+
+/** The largest full-load Q whose first-harmonic peak gain reaches `needed` (the peak gain falls as Q rises), at most 1. */
+function designQuality(ln: number, needed: number): number {
+  if (llcPeakGain(ln, 1).gain >= needed) return 1;
+  let lo = Math.log(1e-4);
+  let hi = 0;
+  for (let k = 0; k < 100 && hi - lo > 1e-13; k++) {
+    const mid = 0.5 * (lo + hi);
+    if (llcPeakGain(ln, Math.exp(mid)).gain >= needed) lo = mid;
+    else hi = mid;
   }
-  return 10 * decade;
+  return Math.exp(lo);
+}
+
+/** The design-level cautions: margin, uncovered corners, far-above-resonance frequency, hard switching, voltages. */
+function designCautions(
+  input: DesignInput, gainMargin: number, corners: readonly LlcDesignCorner[], uncovered: readonly string[], hard: readonly string[], capacitorPeak: number,
+): Caution[] {
+  const margin = input.margin;
+  const cautions: Caution[] = [];
+  if (gainMargin < margin * (1 - 1e-9)) {
+    cautions.push({
+      code: "gain-margin-short", severity: "warning",
+      message: `The first-harmonic gain margin is ${gainMargin.toFixed(3)}, below the requested ${margin}: even at Q = 1 the peak gain does not reach it.`,
+      value: gainMargin, limit: margin, unit: "", source: "common practice (LLC design keeps a peak-gain margin of about 10 % over the lowest-input gain)",
+    });
+  }
+  if (uncovered.length > 0) {
+    cautions.push({
+      code: "range-not-covered", severity: "warning",
+      message: `The output voltage cannot be regulated at ${uncovered.join("; ")}: the gain needed lies above the tank's peak gain, or so far below 1 that no settled steady state was found. Widen the input range assumptions, lower L_n or the quality factor, or add burst mode at light load.`,
+      value: uncovered.length, limit: 0, unit: "", source: "first-harmonic gain limits of the LLC converter (Steigerwald 1988; from memory)",
+    });
+  }
+  let fnHighest = 0;
+  for (const c of corners) fnHighest = Math.max(fnHighest, c.normalisedFrequency);
+  if (fnHighest > FAR_ABOVE) {
+    cautions.push({
+      code: "frequency-far-above-resonance", severity: "warning",
+      message: `Regulating the highest-input corners needs f_s = ${fnHighest.toPrecision(3)} f_r: switching and magnetic losses grow with frequency and the ideal model's error with them. Narrow the input range, lower L_n, or use burst mode at light load.`,
+      value: fnHighest, limit: FAR_ABOVE, unit: "", source: "common practice (LLC converters are usually kept within about twice the resonant frequency; from memory)",
+    });
+  }
+  if (hard.length > 0) {
+    cautions.push({
+      code: "hard-switching", severity: "warning",
+      message: `The switches turn on hard at ${hard.join("; ")}. Hard switching heats the switches and, with the reverse recovery of their body diodes, can destroy them. Lower L_m (a smaller L_n) to raise the magnetising current. ${DEFER_TO_CODES}`,
+      value: hard.length, limit: 0, unit: "", source: "common practice (resonant converters are run with inductive current at turn-off)",
+    });
+  }
+  const dc = voltageCaution({ voltage: input.vMax, waveform: "dc", location: "converter input" });
+  if (dc !== null) cautions.push(dc);
+  const ac = voltageCaution({ voltage: capacitorPeak / Math.SQRT2, waveform: "ac", location: "resonant capacitor (AC part, RMS of a sine of the same peak)" });
+  if (ac !== null) cautions.push(ac);
+  return cautions;
 }
 
 /**
@@ -224,51 +175,16 @@ function seriesAtOrAbove(x: number, series: readonly number[]): number {
  * @category Converters
  */
 export function llcDesign(options: LlcDesignOptions): LlcDesign {
-  const where = "llcDesign";
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "options", options, KEYS);
-  requireObject(where, "inputVoltage", options.inputVoltage);
-  requireKnownKeys(where, "inputVoltage", options.inputVoltage, RANGE_KEYS);
-  const vMin = requirePositive(where, "inputVoltage.min", options.inputVoltage.min, "V");
-  const vNom = requirePositive(where, "inputVoltage.nominal", options.inputVoltage.nominal, "V");
-  const vMax = requirePositive(where, "inputVoltage.max", options.inputVoltage.max, "V");
-  if (!(vMin <= vNom)) throw new InputError(where, "inputVoltage.min", vMin, "V", `at most inputVoltage.nominal (${vNom})`);
-  if (!(vNom <= vMax)) throw new InputError(where, "inputVoltage.max", vMax, "V", `at least inputVoltage.nominal (${vNom})`);
-  const vOut = requirePositive(where, "outputVoltage", options.outputVoltage, "V");
-  const power = requirePositive(where, "outputPower", options.outputPower, "W");
-  const fr = requirePositive(where, "resonantFrequency", options.resonantFrequency, "Hz");
-  const bridge = requireOneOf(where, "bridge", options.bridge, ["half", "full"] as const);
-  const ln = options.inductanceRatio === undefined ? 6 : requireInRange(where, "inductanceRatio", options.inductanceRatio, "", 3, 10);
-  const margin = options.gainMargin === undefined ? 1.1 : requireInRange(where, "gainMargin", options.gainMargin, "", 1, 2);
-  const light = options.lightLoadFraction === undefined ? 0.2 : requireInRange(where, "lightLoadFraction", options.lightLoadFraction, "", 0.05, 1, "[)");
-  const seriesName = options.capacitorSeries === undefined ? "E24" : requireOneOf(where, "capacitorSeries", options.capacitorSeries, ["E12", "E24", "E96"] as const);
-  const rectifier = options.rectifier === undefined ? undefined : requireOneOf(where, "rectifier", options.rectifier, ["centre-tap", "full-bridge"] as const);
-  const deadTime = options.deadTime === undefined ? undefined : requireNonNegative(where, "deadTime", options.deadTime, "s");
-  const switchCapacitance = options.switchCapacitance === undefined ? undefined : requireNonNegative(where, "switchCapacitance", options.switchCapacitance, "F");
-
+  const input = readDesignOptions(options);
+  const { vMin, vNom, vMax, vOut, power, fr, bridge, ln, margin, light, seriesName } = input;
   const share = bridge === "half" ? 0.5 : 1;
   const n = (share * vNom) / vOut;
   const mMax = vNom / vMin;
   const rLoad = (vOut * vOut) / power;
   const rac = (8 * n * n * rLoad) / (Math.PI * Math.PI);
-  const cautions: Caution[] = [];
   const validity: ValidityNote[] = [];
 
-  // the largest Q whose FHA peak gain reaches margin · M_max (peak gain falls as Q rises)
-  const needed = margin * mMax;
-  let qDesign: number;
-  if (llcPeakGain(ln, 1).gain >= needed) {
-    qDesign = 1;
-  } else {
-    let lo = Math.log(1e-4);
-    let hi = 0;
-    for (let k = 0; k < 100 && hi - lo > 1e-13; k++) {
-      const mid = 0.5 * (lo + hi);
-      if (llcPeakGain(ln, Math.exp(mid)).gain >= needed) lo = mid;
-      else hi = mid;
-    }
-    qDesign = Math.exp(lo);
-  }
+  const qDesign = designQuality(ln, margin * mMax);
   const omega = 2 * Math.PI * fr;
   const crIdeal = 1 / (omega * qDesign * rac);
   const series = seriesName === "E12" ? E12 : seriesName === "E96" ? E96 : E24;
@@ -280,6 +196,7 @@ export function llcDesign(options: LlcDesignOptions): LlcDesign {
   const peak = llcPeakGain(ln, q);
   const gainMargin = peak.gain / mMax;
 
+  const design: CornerDesign = { bridge, n, lr, cr, lm, fr, ln, vOut, share, rectifier: input.rectifier, deadTime: input.deadTime, switchCapacitance: input.switchCapacitance };
   const corners: LlcDesignCorner[] = [];
   const uncovered: string[] = [];
   const hard: string[] = [];
@@ -288,80 +205,22 @@ export function llcDesign(options: LlcDesignOptions): LlcDesign {
     const qCorner = q * fraction;
     const peakCorner = llcPeakGain(ln, qCorner);
     for (const vin of [vMin, vNom, vMax]) {
-      const required = (n * vOut) / (share * vin);
-      const rCorner = rLoad / fraction;
       const label = `${vin} V, ${Math.round(fraction * 100)} % load`;
-      // FHA frequency on the falling (inductive) branch: above its peak the gain falls towards 0
-      let fnFha = Infinity;
-      if (required <= peakCorner.gain) {
-        let b = 1;
-        while (llcGainKernel(ln, qCorner, b) > required && b < 1e6) b *= 2;
-        if (b < 1e6) fnFha = brentRoot((x) => llcGainKernel(ln, qCorner, x) - required, peakCorner.frequency, b);
-      }
-      const exact = exactCorner(bridge, vin, n, lr, cr, lm, fr, rCorner, required, fnFha === Infinity ? (required > 1 ? peakCorner.frequency : 1.5) : fnFha, peakCorner.frequency, rectifier, deadTime, switchCapacitance);
-      let corner: LlcDesignCorner;
-      if (exact !== null) {
-        corner = {
-          inputVoltage: vin, loadFraction: fraction, loadResistance: rCorner, requiredGain: required,
-          switchingFrequency: exact.normalisedFrequency * fr, normalisedFrequency: exact.normalisedFrequency,
-          switchingFrequencyFirstHarmonic: fnFha === Infinity ? null : fnFha * fr, method: "exact", operatingPoint: exact,
-          zeroVoltageSwitching: exact.zeroVoltageSwitching,
-        };
-        capacitorPeak = Math.max(capacitorPeak, exact.capacitorVoltagePeak);
-      } else if (fnFha < Infinity) {
-        const fhaPoint = fhaTurnOff(ln, qCorner, fnFha);
-        corner = {
-          inputVoltage: vin, loadFraction: fraction, loadResistance: rCorner, requiredGain: required,
-          switchingFrequency: fnFha * fr, normalisedFrequency: fnFha, switchingFrequencyFirstHarmonic: fnFha * fr,
-          method: "first-harmonic", operatingPoint: null, zeroVoltageSwitching: fhaPoint > 0,
-        };
-        validity.push({ code: "corner-first-harmonic", message: `At ${label} the exact steady state did not settle on the required gain; the corner uses the first-harmonic frequency (error up to about 16 %).` });
-      } else {
+      const corner = solveCorner(design, vin, fraction, rLoad, qCorner, peakCorner, label, validity);
+      if (corner === null) {
         uncovered.push(label);
         continue;
       }
+      const op = corner.operatingPoint;
+      if (op !== null) capacitorPeak = Math.max(capacitorPeak, op.capacitorVoltagePeak);
       if (!corner.zeroVoltageSwitching) hard.push(label);
       corners.push(corner);
-      const op = corner.operatingPoint;
       if (op !== null && op.validity.length > 0) {
         validity.push({ code: "corner-outside-tested-domain", message: `At ${label} (f_n = ${op.normalisedFrequency.toPrecision(3)}, Q = ${op.qualityFactor.toPrecision(3)}) the exact solver runs outside the domain checked against the time-domain simulation.` });
       }
     }
   }
-  if (gainMargin < margin * (1 - 1e-9)) {
-    cautions.push({
-      code: "gain-margin-short", severity: "warning",
-      message: `The first-harmonic gain margin is ${gainMargin.toFixed(3)}, below the requested ${margin}: even at Q = 1 the peak gain does not reach it.`,
-      value: gainMargin, limit: margin, unit: "", source: "common practice (LLC design keeps a peak-gain margin of about 10 % over the lowest-input gain)",
-    });
-  }
-  if (uncovered.length > 0) {
-    cautions.push({
-      code: "range-not-covered", severity: "warning",
-      message: `The output voltage cannot be regulated at ${uncovered.join("; ")}: the gain needed lies above the tank's peak gain, or so far below 1 that no settled steady state was found. Widen the input range assumptions, lower L_n or the quality factor, or add burst mode at light load.`,
-      value: uncovered.length, limit: 0, unit: "", source: "first-harmonic gain limits of the LLC converter (Steigerwald 1988; from memory)",
-    });
-  }
-  let fnHighest = 0;
-  for (const c of corners) fnHighest = Math.max(fnHighest, c.normalisedFrequency);
-  if (fnHighest > FAR_ABOVE) {
-    cautions.push({
-      code: "frequency-far-above-resonance", severity: "warning",
-      message: `Regulating the highest-input corners needs f_s = ${fnHighest.toPrecision(3)} f_r: switching and magnetic losses grow with frequency and the ideal model's error with them. Narrow the input range, lower L_n, or use burst mode at light load.`,
-      value: fnHighest, limit: FAR_ABOVE, unit: "", source: "common practice (LLC converters are usually kept within about twice the resonant frequency; from memory)",
-    });
-  }
-  if (hard.length > 0) {
-    cautions.push({
-      code: "hard-switching", severity: "warning",
-      message: `The switches turn on hard at ${hard.join("; ")}. Hard switching heats the switches and, with the reverse recovery of their body diodes, can destroy them. Lower L_m (a smaller L_n) to raise the magnetising current. ${DEFER_TO_CODES}`,
-      value: hard.length, limit: 0, unit: "", source: "common practice (resonant converters are run with inductive current at turn-off)",
-    });
-  }
-  const dc = voltageCaution({ voltage: vMax, waveform: "dc", location: "converter input" });
-  if (dc !== null) cautions.push(dc);
-  const ac = voltageCaution({ voltage: capacitorPeak / Math.SQRT2, waveform: "ac", location: "resonant capacitor (AC part, RMS of a sine of the same peak)" });
-  if (ac !== null) cautions.push(ac);
+  const cautions = designCautions(input, gainMargin, corners, uncovered, hard, capacitorPeak);
   let fMin = Infinity;
   let fMax = 0;
   let zvs = corners.length === 6;
@@ -387,75 +246,4 @@ export function llcDesign(options: LlcDesignOptions): LlcDesign {
     cautions,
     validity,
   };
-}
-
-/** FHA resonant current at the switching instant, normalised (> 0: inductive, helps ZVS). */
-function fhaTurnOff(ln: number, q: number, fn: number): number {
-  // input impedance (normalised by Z_r): j(fn − 1/fn) + (j fn L_n ∥ 1/q); the current lags the
-  // bridge fundamental when the impedance angle is positive, so it is positive at turn-off
-  const x = fn * ln;
-  const r = 1 / q;
-  const d = r * r + x * x;
-  const zRe = (r * x * x) / d;
-  const zIm = (r * r * x) / d + fn - 1 / fn;
-  return zIm / Math.hypot(zRe, zIm);
-}
-
-/** The exact corner: the switching frequency whose exact gain equals `required`, or null. */
-function exactCorner(
-  bridge: "half" | "full", vin: number, n: number, lr: number, cr: number, lm: number, fr: number, rl: number,
-  required: number, fnStart: number, fnPeak: number,
-  rectifier: "centre-tap" | "full-bridge" | undefined, deadTime: number | undefined, switchCapacitance: number | undefined,
-): LlcOperatingPoint | null {
-  const point = (fn: number): LlcOperatingPoint | null => {
-    try {
-      return llcOperatingPoint({
-        bridge, inputVoltage: vin, turnsRatio: n, resonantInductance: lr, resonantCapacitance: cr, magnetisingInductance: lm,
-        switchingFrequency: fn * fr, loadResistance: rl,
-        ...(rectifier === undefined ? {} : { rectifier }),
-        ...(deadTime === undefined ? {} : { deadTime }),
-        ...(switchCapacitance === undefined ? {} : { switchCapacitance }),
-      });
-    } catch (e) {
-      if (e instanceof InputError) return null; // no settled steady state at this frequency
-      throw e;
-    }
-  };
-  const excess = (fn: number): number => {
-    const p = point(fn);
-    return p === null ? NaN : p.gain - required;
-  };
-  // bracket on the falling branch: gain above the required one at the lower end
-  let lo = Math.max(fnStart / 1.15, fnPeak * 1.0001);
-  let hi = fnStart * 1.15;
-  let flo = excess(lo);
-  let fhi = excess(hi);
-  for (let k = 0; k < 12 && !(flo > 0); k++) {
-    const next = Math.max(fnPeak * 1.0001, lo / 1.1);
-    if (next >= lo) break;
-    hi = lo;
-    fhi = flo;
-    lo = next;
-    flo = excess(lo);
-  }
-  for (let k = 0; k < 12 && !(fhi < 0); k++) {
-    lo = hi;
-    flo = fhi;
-    hi *= 1.25;
-    fhi = excess(hi);
-  }
-  if (!(flo > 0) || !(fhi < 0)) return null;
-  let failed = false;
-  const root = brentRoot((fn) => {
-    const e = excess(fn);
-    if (Number.isNaN(e)) {
-      failed = true;
-      return 0;
-    }
-    return e;
-  }, lo, hi, { tolerance: 1e-13 });
-  if (failed) return null;
-  const result = point(root);
-  if (result === null || !(Math.abs(result.gain - required) <= 1e-9 * required)) return null;
-  return result;
 }

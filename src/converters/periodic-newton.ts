@@ -65,6 +65,22 @@ export interface NewtonSettings {
 }
 
 /**
+ * Newton settings of the topologies solved on their state and gain alone (unknowns
+ * (j0, u0, v0, M), residuals from a propagation: the LCC and parallel-resonant kernels, with an
+ * inductive or a capacitive output filter): a fresh forward-difference Jacobian each step, up to
+ * 40 halvings, stop at 1e-14 with the states scaled by max(1, |x|).
+ */
+export const STATE_AND_GAIN_NEWTON: NewtonSettings = {
+  states: 3,
+  gainFloor: 0.1,
+  scaledNorm: true,
+  reuseJacobian: false,
+  backtracks: 40,
+  tolerance: 1e-14,
+  maxIterations: 60,
+};
+
+/**
  * Damped Newton solver for a {@link PeriodicSystem}, with preallocated work arrays (no
  * allocation per solve). Difference steps: 1e-7 × max(1, |state|) for the states,
  * 1e-7 × max(|gain|, 1e-3) for the gain, 1e-7 × `durationScale` for the durations.
@@ -150,15 +166,20 @@ export class PeriodicNewton {
         haveJacobian = true;
         fresh = true;
       }
+      // factor a new Jacobian once; chord steps reuse the factors. With the exact Jacobian of
+      // every trial (`exact`) the factors are made in place: that Jacobian is not read again
+      // (an accepted trial brings the next one, a rejected step ends the iteration)
+      const factors = exact ? this.jac : lu;
       if (fresh || exact) {
-        // factor a new Jacobian once; chord steps reuse the factors
-        const jac = this.jac;
-        for (let i = 0; i < size * size; i++) lu[i] = jac[i] ?? 0;
-        if (!factorDense(size, lu, pivots)) return Infinity;
+        if (!exact) {
+          const jac = this.jac;
+          for (let i = 0; i < size * size; i++) lu[i] = jac[i] ?? 0;
+        }
+        if (!factorDense(size, factors, pivots)) return Infinity;
         fresh = true;
       }
       for (let i = 0; i < size; i++) step[i] = -(r[i] ?? 0);
-      if (!solveFactored(size, lu, pivots, step)) return Infinity;
+      if (!solveFactored(size, factors, pivots, step)) return Infinity;
       if (fresh && rn < (settings.unverifiedStepBelow ?? 0)) {
         for (let i = 0; i < size; i++) x[i] = (x[i] ?? 0) + (step[i] ?? 0);
         return rn * rn;

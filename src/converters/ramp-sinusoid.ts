@@ -11,15 +11,22 @@
 import { brentRoot } from "../special/index.js";
 import { brentBracketed } from "../special/internal.js";
 
-let hA = 0;
-let hB = 0;
-let hC = 0;
-let hD = 0;
-let hW = 1;
-let hTol = 0;
-let rootTolerance = 0;
+/**
+ * The waveform being searched, h = A cos ωt + B sin ωt + C + Dt, with the zero band and the
+ * root tolerance: slots of a typed array, not module variables (a number written to a module
+ * variable is boxed on every write; a typed-array slot is written in place).
+ */
+const H_A = 0;
+const H_B = 1;
+const H_C = 2;
+const H_D = 3;
+const H_W = 4;
+const H_TOL = 5;
+const H_ROOT_TOL = 6;
+const h = new Float64Array(7);
 function hEval(t: number): number {
-  return hA * Math.cos(hW * t) + hB * Math.sin(hW * t) + hC + hD * t;
+  const w = h[H_W] ?? 1;
+  return (h[H_A] ?? 0) * Math.cos(w * t) + (h[H_B] ?? 0) * Math.sin(w * t) + (h[H_C] ?? 0) + (h[H_D] ?? 0) * t;
 }
 
 /**
@@ -30,14 +37,14 @@ function hEval(t: number): number {
  * where the crossing only seeds a later solve). Returns Infinity when h stays positive.
  */
 export function firstDownCrossing(A: number, B: number, C: number, D: number, w: number, tmax: number, tolerance = 0): number {
-  rootTolerance = tolerance;
-  hA = A;
-  hB = B;
-  hC = C;
-  hD = D;
-  hW = w;
+  h[H_ROOT_TOL] = tolerance;
+  h[H_A] = A;
+  h[H_B] = B;
+  h[H_C] = C;
+  h[H_D] = D;
+  h[H_W] = w;
   const R = Math.hypot(A, B);
-  hTol = 1e-13 * (R + Math.abs(C) + Math.abs(D) * tmax);
+  h[H_TOL] = 1e-13 * (R + Math.abs(C) + Math.abs(D) * tmax);
   // h'(t) = wR cos(wt + β) + D, β = atan2(A, B)
   let tl = 0;
   let hl = hEval(0);
@@ -68,6 +75,8 @@ export function firstDownCrossing(A: number, B: number, C: number, D: number, w:
 
 /** The crossing inside one monotone piece; a start at zero (within rounding) counts only if h then clearly goes negative. */
 function crossIn(tl: number, hl: number, tr: number, hr: number): number {
+  const hTol = h[H_TOL] ?? 0;
+  const rootTolerance = h[H_ROOT_TOL] ?? 0;
   if (hl <= hTol) return hr < -hTol ? tl : Infinity;
   if (hr > 0) return Infinity;
   if (hr === 0) return tr;
