@@ -1,6 +1,7 @@
 /**
  * Writes docs/heater-study.schema.json, the JSON Schema (2020-12) of a study file, from the
- * description types in src/study/description.ts, read with the TypeScript compiler API.
+ * description types in src/study/description.ts (with its coil and part types beside it, in
+ * description-coil.ts and description-part.ts), read with the TypeScript compiler API.
  *
  *   npx tsx scripts/study-schema.ts           write the schema
  *   npx tsx scripts/study-schema.ts --check   exit 1 when the committed schema is stale
@@ -27,7 +28,7 @@ import { quantityTextPattern } from "../src/study/quantity-text.js";
 type Schema = Record<string, unknown>;
 
 const root = fileURLToPath(new URL("..", import.meta.url));
-const SOURCE = `${root}src/study/description.ts`;
+const SOURCES = ["description.ts", "description-coil.ts", "description-part.ts"].map((name) => `${root}src/study/${name}`);
 const OUT = `${root}docs/heater-study.schema.json`;
 const ROOT_TYPE = "HeaterDescription";
 
@@ -48,18 +49,20 @@ const QUANTITY_NAMES: Readonly<Record<string, { name: string; example: string }>
   "Ω·m": { name: "resistivity", example: `"2e-7 Ω·m"` },
 };
 
-const program = ts.createProgram([SOURCE], { strict: true, target: ts.ScriptTarget.ES2022, module: ts.ModuleKind.NodeNext, moduleResolution: ts.ModuleResolutionKind.NodeNext, noEmit: true });
+const program = ts.createProgram(SOURCES, { strict: true, target: ts.ScriptTarget.ES2022, module: ts.ModuleKind.NodeNext, moduleResolution: ts.ModuleResolutionKind.NodeNext, noEmit: true });
 const checker = program.getTypeChecker();
-const source = program.getSourceFile(SOURCE);
-if (source === undefined) throw new Error(`cannot read ${SOURCE}`);
-
 const declarations = new Map<string, ts.InterfaceDeclaration | ts.TypeAliasDeclaration>();
-for (const statement of source.statements) {
-  if (ts.isInterfaceDeclaration(statement) || ts.isTypeAliasDeclaration(statement)) declarations.set(statement.name.text, statement);
+for (const path of SOURCES) {
+  const source = program.getSourceFile(path);
+  if (source === undefined) throw new Error(`cannot read ${path}`);
+  for (const statement of source.statements) {
+    if (ts.isInterfaceDeclaration(statement) || ts.isTypeAliasDeclaration(statement)) declarations.set(statement.name.text, statement);
+  }
 }
 const fail = (node: ts.Node | undefined, why: string): never => {
-  const line = node === undefined ? "" : `:${source.getLineAndCharacterOfPosition(node.getStart(source)).line + 1}`;
-  throw new Error(`src/study/description.ts${line}: ${why}`);
+  const file = node?.getSourceFile();
+  const where = file === undefined || node === undefined ? "src/study/description.ts" : `${file.fileName.slice(root.length)}:${file.getLineAndCharacterOfPosition(node.getStart(file)).line + 1}`;
+  throw new Error(`${where}: ${why}`);
 };
 
 /** The TSDoc summary of a declaration, as plain text. */
@@ -135,8 +138,8 @@ function members(d: ts.InterfaceDeclaration): ts.PropertySignature[] {
     }),
   );
   const own = d.members.map((m) => (ts.isPropertySignature(m) ? m : fail(m, "only property members are supported")));
-  const names = new Set(own.map((m) => m.name.getText(source)));
-  return [...inherited.filter((m) => !names.has(m.name.getText(source))), ...own];
+  const names = new Set(own.map((m) => m.name.getText()));
+  return [...inherited.filter((m) => !names.has(m.name.getText())), ...own];
 }
 
 function objectSchema(d: ts.InterfaceDeclaration): Schema {
@@ -146,7 +149,7 @@ function objectSchema(d: ts.InterfaceDeclaration): Schema {
   for (const member of members(d)) {
     const type = member.type ?? fail(member, "a member without a type");
     if (type.kind === ts.SyntaxKind.NeverKeyword) continue;
-    const name = member.name.getText(source);
+    const name = member.name.getText();
     const doc = docOf(member);
     const schema = memberSchema(member, type, doc);
     properties[name] = doc === "" ? schema : { description: doc, ...schema };
@@ -181,7 +184,7 @@ function typeSchema(type: ts.TypeNode): Schema {
   // readonly T[]: an array of T; "at least one" in the member's TSDoc sets minItems (see memberSchema)
   if (ts.isTypeOperatorNode(type) && type.operator === ts.SyntaxKind.ReadonlyKeyword && ts.isArrayTypeNode(type.type)) return { type: "array", items: typeSchema(type.type.elementType) };
   if (ts.isArrayTypeNode(type)) return { type: "array", items: typeSchema(type.elementType) };
-  return fail(type, `a type the generator does not map: ${type.getText(source)}`);
+  return fail(type, `a type the generator does not map: ${type.getText()}`);
 }
 
 /** A named type as a $defs entry (built once) and a $ref to it. */

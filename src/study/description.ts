@@ -6,7 +6,33 @@
  *
  * @packageDocumentation
  */
-import type { ConductiveMaterial, CoreMaterial } from "../materials/index.js";
+import type { CoreMaterial } from "../materials/index.js";
+import type { HeaterCoil } from "./description-coil.js";
+import type { HeaterFieldConcentrator, HeaterPart } from "./description-part.js";
+
+export type {
+  SolidConductorDescription,
+  LitzConductorDescription,
+  TubeConductorDescription,
+  HeaterConductor,
+  RoundPairLeadsDescription,
+  FlatPairLeadsDescription,
+  HeaterLeadsDescription,
+  SolenoidCoilDescription,
+  PancakeCoilDescription,
+  HeaterCoil,
+} from "./description-coil.js";
+export type {
+  PartCommon,
+  BarPartDescription,
+  TubePartDescription,
+  RingPartDescription,
+  PlatePartDescription,
+  HeaterRectangle,
+  RectanglesPartDescription,
+  HeaterFieldConcentrator,
+  HeaterPart,
+} from "./description-part.js";
 
 /**
  * A quantity as written in a study file: an SI number, or text with a unit that
@@ -141,164 +167,6 @@ export type SeriesInverterDescription = FixedFrequencySeriesInverterDescription 
 export type HeaterInverter = CurrentFedParallelInverterDescription | SeriesInverterDescription;
 
 /**
- * A solid round wire.
- *
- * @category Heater study
- */
-export interface SolidConductorDescription {
-  /** Conductor type tag. */
-  readonly kind: "solid";
-  /** Wire diameter [m], > 0. */
-  readonly diameter: QuantityInput;
-  /** Conductor material id from the materials catalogue (`"copper"`, `"aluminium"`, `"silver"`) or a material set; default `"copper"`. */
-  readonly material?: ConductorMaterialId | ConductiveMaterial;
-}
-
-/**
- * A litz wire of equal round strands.
- *
- * @category Heater study
- */
-export interface LitzConductorDescription {
-  /** Conductor type tag. */
-  readonly kind: "litz";
-  /** Number of strands, integer ≥ 1. */
-  readonly strands: number;
-  /** Diameter of one strand (bare copper) [m], > 0. */
-  readonly strandDiameter: QuantityInput;
-  /** Outer diameter of the bundle [m], > 0; default from a packing factor of 0.5 (common practice). */
-  readonly outerDiameter?: QuantityInput;
-  /** Conductor material id or a material set; default `"copper"`. */
-  readonly material?: ConductorMaterialId | ConductiveMaterial;
-}
-
-/**
- * A hollow round tube (water-cooled work coils).
- *
- * @category Heater study
- */
-export interface TubeConductorDescription {
-  /** Conductor type tag. */
-  readonly kind: "tube";
-  /** Outer diameter of the tube [m], > 0. */
-  readonly outerDiameter: QuantityInput;
-  /** Wall thickness [m], > 0 and less than half the outer diameter. */
-  readonly wallThickness: QuantityInput;
-  /** Conductor material id or a material set; default `"copper"`. */
-  readonly material?: ConductorMaterialId | ConductiveMaterial;
-}
-
-/**
- * The conductor a coil is wound from.
- *
- * @category Heater study
- */
-export type HeaterConductor = SolidConductorDescription | LitzConductorDescription | TubeConductorDescription;
-
-/**
- * Leads that are two parallel round conductors: the coil's own conductor (tube, solid wire or
- * litz bundle) continued side by side from the coil to the capacitor bank.
- *
- * @category Heater study
- */
-export interface RoundPairLeadsDescription {
-  /** Lead shape tag. */
-  readonly shape: "round-pair";
-  /** Centre-to-centre spacing of the two conductors [m], > the conductor's outer diameter. */
-  readonly spacing: QuantityInput;
-}
-
-/**
- * Leads that are two flat bus bars, broad faces towards each other.
- *
- * @category Heater study
- */
-export interface FlatPairLeadsDescription {
-  /** Lead shape tag. */
-  readonly shape: "flat-pair";
-  /** Width of each bar (the broad face) [m], > 0. */
-  readonly width: QuantityInput;
-  /** Thickness of each bar [m], > 0. */
-  readonly thickness: QuantityInput;
-  /** Gap between the facing broad faces [m], > 0. */
-  readonly gap: QuantityInput;
-  /** Bar material id or a material set; default the coil conductor's material. */
-  readonly material?: ConductorMaterialId | ConductiveMaterial;
-}
-
-/**
- * The cross-section of the leads between coil and capacitor bank. With it the study adds the
- * leads' inductance in series with the coil and takes their resistance with skin and
- * proximity effect (`leadImpedance`); the run is half of `leadLength` (which counts both leads).
- *
- * @category Heater study
- */
-export type HeaterLeadsDescription = RoundPairLeadsDescription | FlatPairLeadsDescription;
-
-/**
- * A single-layer solenoid (helical work coil) around the part.
- *
- * @category Heater study
- */
-export interface SolenoidCoilDescription {
-  /** Coil shape tag. */
-  readonly shape: "solenoid";
-  /** Radius to the conductor centres [m], > 0. */
-  readonly radius: QuantityInput;
-  /** Winding length = turns × pitch [m], > 0. */
-  readonly length: QuantityInput;
-  /** Number of turns, integer ≥ 1. */
-  readonly turns: number;
-  /** The conductor. */
-  readonly conductor: HeaterConductor;
-  /** Length of the leads between coil and capacitor bank (both together) [m], ≥ 0; default 0. */
-  readonly leadLength?: QuantityInput;
-  /**
-   * Cross-section of the leads; needs `leadLength` > 0. Omitted: the leads count only as
-   * resistance, an isolated conductor of `leadLength` (no inductance).
-   */
-  readonly leads?: HeaterLeadsDescription;
-  /** Working temperature of the conductor [K], > 0; default 40 °C (common practice for a cooled coil). */
-  readonly temperature?: QuantityInput;
-}
-
-/**
- * A flat spiral (pancake) coil under or over a plate.
- *
- * @category Heater study
- */
-export interface PancakeCoilDescription {
-  /** Coil shape tag. */
-  readonly shape: "pancake";
-  /** Radius of the innermost turn's conductor centre [m], > 0. */
-  readonly innerRadius: QuantityInput;
-  /** Radius of the outermost turn's conductor centre [m], > innerRadius. */
-  readonly outerRadius: QuantityInput;
-  /** Number of turns, integer ≥ 1. */
-  readonly turns: number;
-  /** Gap from the conductor's face to the part's surface [m], ≥ 0. */
-  readonly liftOff: QuantityInput;
-  /** The conductor. */
-  readonly conductor: HeaterConductor;
-  /** Length of the leads (both together) [m], ≥ 0; default 0. */
-  readonly leadLength?: QuantityInput;
-  /**
-   * Cross-section of the leads; needs `leadLength` > 0. Omitted: the leads count only as
-   * resistance, an isolated conductor of `leadLength` (no inductance).
-   */
-  readonly leads?: HeaterLeadsDescription;
-  /** Working temperature of the conductor [K], > 0; default 40 °C. */
-  readonly temperature?: QuantityInput;
-}
-
-/**
- * The work coil.
- *
- * @category Heater study
- */
-export type HeaterCoil = SolenoidCoilDescription | PancakeCoilDescription;
-
-/**
  * The resonant capacitor bank, as one equivalent capacitor.
  *
  * @category Heater study
@@ -329,157 +197,6 @@ export interface HeaterConcentrator {
   /** Volume of magnetic material [m³], > 0. */
   readonly volume: QuantityInput;
 }
-
-/** Fields shared by every part shape. @category Heater study */
-export interface PartCommon {
-  /** Material id from the materials catalogue (`"lowCarbonSteel"`, `"mediumCarbonSteel"`, `"austeniticStainless"`, …), or in code a material set such as the exported `lowCarbonSteel`. */
-  readonly material: PartMaterialId | ConductiveMaterial;
-  /** Temperature at the start of heating [K], > 0; default the ambient temperature. */
-  readonly startTemperature?: QuantityInput;
-  /** Temperature to reach [K], > start temperature. */
-  readonly targetTemperature: QuantityInput;
-  /** Surface emissivity in (0, 1]; default the material's typical value. */
-  readonly emissivity?: number;
-  /**
-   * What `targetTemperature` applies to: `"mean"` (the lumped part temperature, default),
-   * `"surface"` or `"core"` (bars and tubes: the electro-thermal radial model).
-   */
-  readonly targetLocation?: "mean" | "surface" | "core";
-  /** Bars and tubes: after the target, soak until surface and core are within this difference [K] (e.g. `"25 K"`). */
-  readonly soakBand?: QuantityInput;
-  /** Bars and tubes: temperature whose depth of reach into the part is reported (hardening depth) [K]. */
-  readonly hardeningTemperature?: QuantityInput;
-}
-
-/**
- * A solid round bar, coaxial inside a solenoid.
- *
- * @category Heater study
- */
-export interface BarPartDescription extends PartCommon {
-  /** Part shape tag. */
-  readonly shape: "bar";
-  /** Bar radius [m], > 0. */
-  readonly radius: QuantityInput;
-  /** Bar length [m], > 0. */
-  readonly length: QuantityInput;
-}
-
-/**
- * A tube, coaxial inside a solenoid.
- *
- * @category Heater study
- */
-export interface TubePartDescription extends PartCommon {
-  /** Part shape tag. */
-  readonly shape: "tube";
-  /** Outer radius [m], > 0. */
-  readonly outerRadius: QuantityInput;
-  /** Wall thickness [m], > 0 and < outerRadius. */
-  readonly wallThickness: QuantityInput;
-  /** Tube length [m], > 0. */
-  readonly length: QuantityInput;
-}
-
-/**
- * A ring (short tube, e.g. a bearing race), coaxial inside a solenoid.
- *
- * @category Heater study
- */
-export interface RingPartDescription extends PartCommon {
-  /** Part shape tag. */
-  readonly shape: "ring";
-  /** Outer radius [m], > 0. */
-  readonly outerRadius: QuantityInput;
-  /** Inner (bore) radius [m], > 0 and < outerRadius. */
-  readonly innerRadius: QuantityInput;
-  /** Axial height (width) of the ring [m], > 0. */
-  readonly height: QuantityInput;
-  /** Only `"mean"` for a ring (surface and core targets need the radial model of bars and tubes). */
-  readonly targetLocation?: "mean";
-  /** Not for a ring (bars and tubes only). */
-  readonly soakBand?: never;
-  /** Not for a ring (bars and tubes only). */
-  readonly hardeningTemperature?: never;
-}
-
-/**
- * A flat rectangular plate, under a pancake coil.
- *
- * @category Heater study
- */
-export interface PlatePartDescription extends PartCommon {
-  /** Part shape tag. */
-  readonly shape: "plate";
-  /** Plate length [m], > 0. */
-  readonly length: QuantityInput;
-  /** Plate width [m], > 0. */
-  readonly width: QuantityInput;
-  /** Plate thickness [m], > 0. */
-  readonly thickness: QuantityInput;
-  /** Only `"mean"` for a plate (surface and core targets need the radial model of bars and tubes). */
-  readonly targetLocation?: "mean";
-  /** Not for a plate (bars and tubes only). */
-  readonly soakBand?: never;
-  /** Not for a plate (bars and tubes only). */
-  readonly hardeningTemperature?: never;
-}
-
-/**
- * A rectangle of the r–z half-plane (a ring of rectangular cross-section about the coil's
- * axis). Axial positions are measured from the middle of a solenoid's winding, or from the face
- * a pancake coil's lift-off is measured to (the pancake's turns lie above z = lift-off).
- *
- * @category Heater study
- */
-export interface HeaterRectangle {
-  /** Inner radius [m], ≥ 0 (0: reaches the axis). */
-  readonly rMin: QuantityInput;
-  /** Outer radius [m], > rMin. */
-  readonly rMax: QuantityInput;
-  /** Lower axial position [m] (may be negative). */
-  readonly zMin: QuantityInput;
-  /** Upper axial position [m], > zMin (may be negative). */
-  readonly zMax: QuantityInput;
-}
-
-/**
- * A part of any axisymmetric shape, as a set of r–z rectangles that do not overlap (a stepped
- * shaft, a flanged hub, a part with a bore). Needs the field model
- * (`studyHeater(…, { model: "field" })`).
- *
- * @category Heater study
- */
-export interface RectanglesPartDescription extends PartCommon {
-  /** Part shape tag. */
-  readonly shape: "rectangles";
-  /** The part's cross-section: at least one rectangle, none overlapping another. */
-  readonly rectangles: readonly HeaterRectangle[];
-}
-
-/**
- * A flux concentrator (or any passive magnetic or conducting body) as a set of r–z rectangles,
- * for the field model.
- *
- * @category Heater study
- */
-export interface HeaterFieldConcentrator {
-  /** A name for reports (default `concentrator1`, `concentrator2`, …). */
-  readonly name?: string;
-  /** Its cross-section, at least one rectangle. */
-  readonly rectangles: readonly HeaterRectangle[];
-  /** Relative permeability (linear), in [1, 1e6]. */
-  readonly relativePermeability: number;
-  /** Resistivity [Ω·m], > 0; omit for a non-conductor (a ferrite, a laminated or powder core). */
-  readonly resistivity?: QuantityInput;
-}
-
-/**
- * The part to heat.
- *
- * @category Heater study
- */
-export type HeaterPart = BarPartDescription | TubePartDescription | RingPartDescription | PlatePartDescription | RectanglesPartDescription;
 
 /**
  * The surroundings of the part.

@@ -7,7 +7,7 @@
 import type { AxisymmetricFieldResult, FieldShape } from "../field/index.js";
 import type { HeaterFieldGeometry } from "./field-model.js";
 import type { HeaterOperatingPoint } from "./operating-point.js";
-import type { HeaterFieldPicture } from "./study-heater.js";
+import type { HeaterFieldPicture } from "./study-heater-types.js";
 
 /** Columns of the |B| grid (rows follow from the aspect ratio, at most 2.5 × as many). */
 const COLUMNS = 56;
