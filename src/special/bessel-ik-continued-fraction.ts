@@ -93,35 +93,9 @@ export function continuedFractionRegion(zr: number, zi: number, r: number, out: 
   const k1r = k0r * gr - k0i * gi;
   const k1i = k0r * gi + k0i * gr;
 
-  // ---- CF1 (modified Lentz): f = I1/I0, left in out[IK_I1R], out[IK_I1I]
-  lentzI1OverI0(zr / rz, -zi / rz, out);
-  const fr = out[IK_I1R]!;
-  const fi = out[IK_I1I]!;
-  // e^{−Re z} I0 = e^{i Im z} / (z (K1s + f·K0s))
-  const tr = k1r + (fr * k0r - fi * k0i);
-  const ti = k1i + (fr * k0i + fi * k0r);
-  const wr = zr * tr - zi * ti;
-  const wi = zr * ti + zi * tr;
-  const cz = Math.cos(zi);
-  const sz = Math.sin(zi);
-  den = wr * wr + wi * wi;
-  const i0r = (cz * wr + sz * wi) / den;
-  const i0i = (sz * wr - cz * wi) / den;
-  out[IK_I0R] = i0r;
-  out[IK_I0I] = i0i;
-  out[IK_I1R] = fr * i0r - fi * i0i;
-  out[IK_I1I] = fr * i0i + fi * i0r;
-  out[IK_K0R] = k0r;
-  out[IK_K0I] = k0i;
-  out[IK_K1R] = k1r;
-  out[IK_K1I] = k1i;
-}
-
-/**
- * CF1 (modified Lentz) at 1/z = invr + i·invi: f = I₁/I₀ = 1/(2/z + 1/(4/z + 1/(6/z + …))),
- * written into out[IK_I1R], out[IK_I1I].
- */
-function lentzI1OverI0(invr: number, invi: number, out: Float64Array): void {
+  // ---- CF1 (modified Lentz): f = I1/I0 = 1/(2/z + 1/(4/z + 1/(6/z + …)))
+  const invr = zr / rz;
+  const invi = -zi / rz;
   let fr = TINY;
   let fi = 0;
   let cr = fr;
@@ -151,6 +125,30 @@ function lentzI1OverI0(invr: number, invi: number, out: Float64Array): void {
     fr = nf;
     if (Math.abs(delr - 1) + Math.abs(deli) < 2 * EPS_CF) break;
   }
-  out[IK_I1R] = fr;
-  out[IK_I1I] = fi;
+  fromWronskian(zr, zi, k0r, k0i, k1r, k1i, fr, fi, out);
+}
+
+/**
+ * The last step of the continued-fraction region: I₀ from the Wronskian I₀K₁ + I₁K₀ = 1/z with
+ * the scaled K₀, K₁ (k0, k1) and f = I₁/I₀, then I₁ = f·I₀; writes all eight values into out.
+ */
+function fromWronskian(zr: number, zi: number, k0r: number, k0i: number, k1r: number, k1i: number, fr: number, fi: number, out: Float64Array): void {
+  // e^{−Re z} I0 = e^{i Im z} / (z (K1s + f·K0s))
+  const tr = k1r + (fr * k0r - fi * k0i);
+  const ti = k1i + (fr * k0i + fi * k0r);
+  const wr = zr * tr - zi * ti;
+  const wi = zr * ti + zi * tr;
+  const cz = Math.cos(zi);
+  const sz = Math.sin(zi);
+  const den = wr * wr + wi * wi;
+  const i0r = (cz * wr + sz * wi) / den;
+  const i0i = (sz * wr - cz * wi) / den;
+  out[IK_I0R] = i0r;
+  out[IK_I0I] = i0i;
+  out[IK_I1R] = fr * i0r - fi * i0i;
+  out[IK_I1I] = fr * i0i + fi * i0r;
+  out[IK_K0R] = k0r;
+  out[IK_K0I] = k0i;
+  out[IK_K1R] = k1r;
+  out[IK_K1I] = k1i;
 }
