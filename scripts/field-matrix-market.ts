@@ -10,8 +10,8 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { factorComplexSymmetric } from "../src/special/index.js";
-import { assembleSystem } from "../src/field/solver.js";
-import type { SolverProblem } from "../src/field/solver.js";
+import { assembleSystem } from "../src/field/assembly.js";
+import type { SolverProblem } from "../src/field/solver-types.js";
 
 const out = process.argv[2];
 if (out === undefined) {

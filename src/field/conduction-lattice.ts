@@ -10,7 +10,7 @@ import type { ConductiveMaterial } from "../materials/index.js";
 import { specificEnthalpyChange, thermalConductivityAt } from "../materials/index.js";
 import { factorComplexSymmetric, latticeNestedDissection } from "../special/index.js";
 import { STEFAN_BOLTZMANN } from "../units/index.js";
-import type { ConductionSetup } from "./axisymmetric-conduction.js";
+import type { ConductionSetup } from "./conduction-setup.js";
 
 /** Temperature step of the material tables [K]. */
 const TABLE_STEP = 0.5;

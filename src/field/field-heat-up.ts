@@ -9,20 +9,17 @@
 import { requireKnownKeys, requireObject, requirePositive, InputError } from "../core/index.js";
 import type { ValidityNote } from "../core/index.js";
 import { relativePermeabilityAt, resistivityAt } from "../materials/index.js";
-import { MU_0 } from "../units/index.js";
-import { readConductionSetup, runConduction } from "./axisymmetric-conduction.js";
-import type {
-  AxisymmetricHeatConductionResult,
-  PartCells,
-  PartFace,
-  PartGenerationRequest,
-  PartSurfaceExchange,
-} from "./axisymmetric-conduction.js";
 import type { ConductiveMaterial } from "../materials/index.js";
-import { readProblem } from "./solve-axisymmetric-field.js";
-import type { AxisymmetricFieldCoil, FieldRectangle, FieldRegion } from "./solve-axisymmetric-field.js";
-import { bodyLosses, fieldAtProbe, probe, solveOnce } from "./solver.js";
-import type { SolverBody, SolverProblem, SolverSolution } from "./solver.js";
+import { runConduction } from "./conduction-run.js";
+import { readConductionSetup } from "./conduction-setup.js";
+import type { ConductionSetup } from "./conduction-setup.js";
+import type { AxisymmetricHeatConductionResult, PartCells, PartFace, PartGenerationRequest, PartSurfaceExchange } from "./conduction-types.js";
+import type { AxisymmetricFieldCoil, FieldRectangle, FieldRegion } from "./field-types.js";
+import { HeatUpCoupling } from "./heat-up-coupling.js";
+import type { FieldHeatUpSolution, HeatedCells } from "./heat-up-coupling.js";
+import { readProblem } from "./read-field-problem.js";
+
+export type { FieldHeatUpCoilState, FieldHeatUpSolution } from "./heat-up-coupling.js";
 
 /**
  * The heated part of {@link fieldHeatUp}: a rectangle of the r–z half-plane of one material,
@@ -83,36 +80,6 @@ export interface FieldHeatUpOptions {
 }
 
 /**
- * A coil's terminal values at one field solution of a heat-up.
- *
- * @category Field
- */
-export interface FieldHeatUpCoilState {
-  /** Self-resistance [Ω] (the coil's own conductor and the losses it induces). */
-  readonly resistance: number;
-  /** Self-inductance [H]. */
-  readonly inductance: number;
-}
-
-/**
- * One field solution of a heat-up.
- *
- * @category Field
- */
-export interface FieldHeatUpSolution {
-  /** Time of the temperatures it was solved for [s]. */
-  readonly time: number;
-  /** Power induced in the part [W]. */
-  readonly power: number;
-  /** Volume-mean temperature of the part [K]. */
-  readonly meanTemperature: number;
-  /** Hottest cell of the part [K]. */
-  readonly maximumTemperature: number;
-  /** Self-resistance [Ω] and self-inductance [H] of each coil, by name. */
-  readonly coils: Readonly<Record<string, FieldHeatUpCoilState>>;
-}
-
-/**
  * Result of {@link fieldHeatUp}: the conduction result plus the field history.
  *
  * @category Field
@@ -147,20 +114,9 @@ const KNOWN = [
   "mapTimes",
 ] as const;
 const PART_KEYS = ["name", "shape", "material", "cells"] as const;
-/** Gauss–Legendre points on [0, 1]: 3 across r, 2 along z (where a cell's field strength is sampled). */
-const GAUSS_3 = [0.5 - Math.sqrt(0.15), 0.5, 0.5 + Math.sqrt(0.15)];
-const GAUSS_2 = [0.5 - 0.5 / Math.sqrt(3), 0.5 + 0.5 / Math.sqrt(3)];
 /** Most cells of the part along r or z, and in all (each is a body of the field problem). */
 const MAX_CELLS_ALONG = 40;
 const MAX_CELLS = 400;
-/** Densest mesh the starting refinement goes to. */
-const MAX_DENSITY = 4;
-/** Largest field mesh the starting refinement goes to (lattice nodes; the next is predicted at about twice). */
-const MAX_NODES = 300_000;
-/** Finite-element solves per field solution at most (permeability iterations; the first solution gets three times as many). */
-const PERMEABILITY_ITERATIONS = 2;
-/** Stop the permeability iteration when the field-weighted relative change is below this. */
-const PERMEABILITY_TOLERANCE = 0.05;
 
 /**
  * Heats an axisymmetric part in the field of coaxial coils: the eddy-current field
@@ -228,6 +184,28 @@ const PERMEABILITY_TOLERANCE = 0.05;
  * @category Field
  */
 export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
+  const { setup, cells, accuracy } = readHeatUp(options);
+  const coupling = new HeatUpCoupling(cells);
+  coupling.start();
+  const generationAt = (request: PartGenerationRequest): void => {
+    coupling.generationAt(request);
+  };
+  const thermal = runConduction(setup, generationAt, WHERE);
+  const { solutions, fieldIterations, estimatedError } = coupling;
+  const validity: ValidityNote[] = [...thermal.validity];
+  if (estimatedError > accuracy) {
+    validity.push({
+      code: "accuracy-not-reached",
+      message: `the finest field mesh tried changes the impedance by ${estimatedError.toExponential(1)} relative, above the accuracy asked for`,
+      value: estimatedError,
+      limit: accuracy,
+    });
+  }
+  return { ...thermal, validity, solutions, fieldSolutions: solutions.length, fieldIterations, estimatedError };
+}
+
+/** Reads and checks the options: the conduction setup and the field problem with the part's cells as regions. */
+function readHeatUp(options: FieldHeatUpOptions): { setup: ConductionSetup; cells: HeatedCells; accuracy: number } {
   const o = requireKnownKeys(WHERE, "", requireObject(WHERE, "options", options), KNOWN);
   const part = requireKnownKeys(WHERE, "part", requireObject(WHERE, "part", o.part), PART_KEYS);
   if (typeof part.name !== "string" || part.name === "") throw new InputError(WHERE, "part.name", part.name, "", "a non-empty name");
@@ -243,7 +221,6 @@ export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
   const { material, rEdges, zEdges, cells, initial } = setup;
   const nr = cells.radial;
   const nz = cells.axial;
-  const n = nr * nz;
   if (o.regions !== undefined && !Array.isArray(o.regions)) throw new InputError(WHERE, "regions", o.regions, "", "an array of regions");
   const userRegions: unknown[] = o.regions === undefined ? [] : (o.regions as unknown[]);
   // the part's cells as regions of the field problem (validated with everything else)
@@ -266,178 +243,22 @@ export function fieldHeatUp(options: FieldHeatUpOptions): FieldHeatUpResult {
     regions: [...(userRegions as FieldRegion[]), ...cellRegions],
     accuracy,
   });
-  const nc = base.coilCount;
   const firstCellBody = base.bodies.findIndex((b) => b.role === "region" && b.owner === userRegions.length);
-  const I = currents.map((re) => ({ re, im: 0 }));
-
-  const rho = new Float64Array(n);
-  const mur = new Float64Array(n);
-  const hPeak = new Float64Array(n);
-  const withProperties = (): SolverProblem => {
-    const bodies: SolverBody[] = base.bodies.map((b, k) => {
-      const c = k - firstCellBody;
-      if (c < 0 || c >= n) return b;
-      return { ...b, sigma: 1 / rho[c]!, mur: mur[c]!, resistivity: rho[c]! };
-    });
-    return { ...base, bodies };
+  const cellsOut: HeatedCells = {
+    base,
+    firstCellBody,
+    coilNames,
+    currents: currents.map((re) => ({ re, im: 0 })),
+    material,
+    rEdges,
+    zEdges,
+    nr,
+    nz,
+    initial,
+    rho0,
+    mu0,
+    resolveStep,
+    accuracy,
   };
-    /**
-   * Peak field strength of each cell [A/m] from a solution: the loss-weighted mean
-   * $\sum H^3/\sum H^2$ over 3 × 2 Gauss points of the cell, so that a cell thicker than the
-   * skin depth takes the field where its power is.
-   */
-  const fieldStrengths = (problem: SolverProblem, sol: SolverSolution): void => {
-    for (let i = 0; i < nr; i++) {
-      for (let j = 0; j < nz; j++) {
-        const c = i * nz + j;
-        let s2 = 0;
-        let s3 = 0;
-        for (const fr of GAUSS_3) {
-          const r = rEdges[i]! + fr * (rEdges[i + 1]! - rEdges[i]!);
-          for (const fz of GAUSS_2) {
-            const pr = probe(sol.mesh, r, zEdges[j]! + fz * (zEdges[j + 1]! - zEdges[j]!));
-            if (pr === null) continue;
-            const f = fieldAtProbe(problem, sol, I, pr);
-            const br2 = f.dzR * f.dzR + f.dzI * f.dzI;
-            const bzr = f.drR + f.ar / r;
-            const bzi = f.drI + f.ai / r;
-            const h = (Math.SQRT2 * Math.sqrt(br2 + bzr * bzr + bzi * bzi)) / (MU_0 * murSolved[c]!);
-            s2 += h * h;
-            s3 += h * h * h;
-          }
-        }
-        hPeak[c] = s2 > 0 ? s3 / s2 : 0;
-      }
-    }
-  };
-
-  let fieldIterations = 0;
-  // starting mesh density: refine at the starting temperature until the impedance settles
-  for (let c = 0; c < n; c++) {
-    rho[c] = rho0;
-    mur[c] = mu0;
-  }
-  const impedanceChange = (a: SolverSolution, b: SolverSolution): number => {
-    let e = 0;
-    for (let c = 0; c < nc; c++) {
-      const k = c * nc + c;
-      e = Math.max(e, Math.abs(a.zRe[k]! - b.zRe[k]!) / Math.abs(b.zRe[k]!), Math.abs(a.zIm[k]! - b.zIm[k]!) / Math.abs(b.zIm[k]!));
-    }
-    return e;
-  };
-  // a first solve at the low-field permeability gives the field strengths for the starting μr
-  let density = Math.min(MAX_DENSITY / Math.SQRT2, Math.max(0.7, Math.pow(1e-3 / accuracy, 0.25)));
-  let problem = withProperties();
-  let sol = solveOnce(problem, { density });
-  const murSolved = Float64Array.from(mur);
-  fieldIterations++;
-  const solveWith = (): void => {
-    problem = withProperties();
-    sol = solveOnce(problem, { density });
-    murSolved.set(mur);
-    fieldIterations++;
-  };
-  /** μr at the field of the last solution; returns the field-weighted relative change. */
-  const permeabilityChange = (temps: Float64Array): number => {
-    fieldStrengths(problem, sol);
-    let hMax = 0;
-    for (let c = 0; c < n; c++) hMax = Math.max(hMax, hPeak[c]!);
-    let change = 0;
-    for (let c = 0; c < n; c++) {
-      const wanted = relativePermeabilityAt(material, { temperature: temps[c]!, fieldStrengthPeak: hPeak[c]! });
-      const weight = hMax > 0 ? hPeak[c]! / hMax : 0;
-      change = Math.max(change, (Math.abs(wanted - mur[c]!) / mur[c]!) * weight);
-      mur[c] = wanted;
-    }
-    return change;
-  };
-  const startTemps = new Float64Array(n).fill(initial);
-  for (let it = 0; it < 3 * PERMEABILITY_ITERATIONS; it++) {
-    if (permeabilityChange(startTemps) < PERMEABILITY_TOLERANCE) break;
-    solveWith();
-  }
-  // error estimate: the change to a mesh √2 finer; with the error falling at least by half per
-  // refinement (as solveAxisymmetricField assumes) the coarser mesh's error is at most twice it
-  let estimatedError: number;
-  for (;;) {
-    const finer = solveOnce(problem, { density: density * Math.SQRT2 });
-    fieldIterations++;
-    estimatedError = 2 * impedanceChange(sol, finer);
-    if (estimatedError <= accuracy || density * 2 > MAX_DENSITY * 1.0001 || 2.2 * finer.nodes > MAX_NODES) break;
-    density *= Math.SQRT2;
-    sol = finer;
-  }
-  const cellPower = new Float64Array(n);
-  const lastTemps = new Float64Array(n);
-  const solutions: FieldHeatUpSolution[] = [];
-  let solved = false;
-  const take = (time: number, temps: Float64Array): void => {
-    const losses = bodyLosses(problem, sol, I);
-    let total = 0;
-    let mean = 0;
-    let vol = 0;
-    let hottest = 0;
-    for (let c = 0; c < n; c++) {
-      cellPower[c] = losses[firstCellBody + c]!;
-      total += cellPower[c]!;
-      lastTemps[c] = temps[c]!;
-      hottest = Math.max(hottest, temps[c]!);
-    }
-    for (let i = 0; i < nr; i++) {
-      const ring = rEdges[i + 1]! * rEdges[i + 1]! - rEdges[i]! * rEdges[i]!;
-      for (let j = 0; j < nz; j++) {
-        const v = ring * (zEdges[j + 1]! - zEdges[j]!);
-        vol += v;
-        mean += v * temps[i * nz + j]!;
-      }
-    }
-    const coils: Record<string, { resistance: number; inductance: number }> = {};
-    coilNames.forEach((name, c) => {
-      const k = c * nc + c;
-      coils[name] = { resistance: sol.zRe[k]!, inductance: sol.zIm[k]! / sol.omega };
-    });
-    solutions.push({ time, power: total, meanTemperature: mean / vol, maximumTemperature: hottest, coils });
-  };
-
-  const generationAt = (request: PartGenerationRequest): void => {
-    const temps = request.temperatures;
-    if (!solved) {
-      take(request.time, temps);
-      solved = true;
-    } else {
-      let moved = false;
-      for (let c = 0; c < n; c++) {
-        if (Math.abs(temps[c]! - lastTemps[c]!) > resolveStep) {
-          moved = true;
-          break;
-        }
-      }
-      if (moved) {
-        // the new temperatures at the last field strengths, then iterate on the permeability
-        for (let c = 0; c < n; c++) {
-          rho[c] = resistivityAt(material, temps[c]!);
-          mur[c] = relativePermeabilityAt(material, { temperature: temps[c]!, fieldStrengthPeak: hPeak[c]! });
-        }
-        solveWith();
-        for (let it = 1; it < PERMEABILITY_ITERATIONS; it++) {
-          if (permeabilityChange(temps) < PERMEABILITY_TOLERANCE) break;
-          solveWith();
-        }
-        take(request.time, temps);
-      }
-    }
-    request.generation.set(cellPower);
-  };
-
-  const thermal = runConduction(setup, generationAt, WHERE);
-  const validity: ValidityNote[] = [...thermal.validity];
-  if (estimatedError > accuracy) {
-    validity.push({
-      code: "accuracy-not-reached",
-      message: `the finest field mesh tried changes the impedance by ${estimatedError.toExponential(1)} relative, above the accuracy asked for`,
-      value: estimatedError,
-      limit: accuracy,
-    });
-  }
-  return { ...thermal, validity, solutions, fieldSolutions: solutions.length, fieldIterations, estimatedError };
+  return { setup, cells: cellsOut, accuracy };
 }

@@ -7,8 +7,10 @@
  */
 import { MU_0 } from "../units/index.js";
 import { andersonStep } from "../special/internal.js";
-import { centroid, meshFor, probe, solveOnce, triangleFluxDensityPeak } from "./solver.js";
-import type { SolverProblem, SolverSolution } from "./solver.js";
+import { meshFor } from "./assembly.js";
+import { centroid, probe, triangleFluxDensityPeak } from "./field-evaluation.js";
+import { solveOnce } from "./solver.js";
+import type { SolverProblem, SolverSolution } from "./solver-types.js";
 
 /** Fixed-point iterations allowed per mesh for saturating regions. */
 export const MAX_SATURATION_ITERATIONS = 60;

@@ -14,6 +14,12 @@ const FLIR_EMISSIVITY = "FLIR T10xx series operation manual, emissivity Table 39
 /** A second instrument maker's emissivity table. */
 const OMEGA_EMISSIVITY = "Omega OS100 series manual, section 6 emissivity table";
 
+/** An open textbook's table of resistivities and temperature coefficients at 20 °C. */
+const OPENSTAX_RESISTIVITY = "S. J. Ling, J. Sanny, W. Moebs, University Physics Volume 2 (OpenStax 2016), §9.3, Table 9.1 'Resistivities and Conductivities of Various Materials at 20 °C' (silver 1.59 × 10⁻⁸ Ω·m, α = 0.0038 /°C; source text openstax/osbooks-university-physics-bundle, modules/m58731)";
+
+/** The CRC Handbook's resistivity of pure silver near room temperature, read in a transcription. */
+const CRC_SILVER = "CRC Handbook of Chemistry and Physics, online edition 2010, 'Electrical Resistivity of Pure Metals', pp. 12-40 ff. (silver 1.467, 1.587 and 1.629 × 10⁻⁸ Ω·m at 273, 293 and 300 K), as transcribed in a public Python script of that table";
+
 /** A frozen table in kelvin. */
 function kelvinTable(temperatures: readonly number[], values: readonly number[], source: string): TemperatureTable {
   return Object.freeze({ temperatures: Object.freeze([...temperatures]), values: Object.freeze([...values]), source });
@@ -105,12 +111,16 @@ const silverSpecificHeat = kelvinTable([200, 300, 400, 600, 800, 1000], [225, 23
 const silverConductivity = kelvinTable([200, 300, 400, 600, 800, 1000], [430, 429, 425, 412, 396, 379], `${INCROPERA} (pure silver)`);
 
 /**
- * Pure silver: resistivity 1.587 × 10⁻⁸ Ω·m at 20 °C and temperature coefficient
- * 0.0038 /K (CRC Handbook of Chemistry and Physics, from memory), density 10 490 kg/m³;
- * linear law over 200–1200 K. Thermal data from Incropera et al., 7th ed., Table A.1;
- * emissivity 0.02–0.1, typical 0.03 (from memory). Melting point 1234.93 K (ITS-90).
+ * Pure silver: resistivity 1.587 × 10⁻⁸ Ω·m at 20 °C (CRC Handbook, "Electrical Resistivity
+ * of Pure Metals", 293 K) and temperature coefficient 0.0038 /K (OpenStax University Physics
+ * Vol. 2, Table 9.1; the CRC values at 273 and 300 K give a slope of 0.00378 /K); linear law
+ * over 200–1200 K. Density 10 500 kg/m³ and thermal data from
+ * Incropera et al., 7th ed., Table A.1 (pure silver, 300 K); emissivity 0.02 (Raytek MI3
+ * table) to 0.1, typical 0.03 (these two from memory). Melting point 1234.93 K (ITS-90).
  *
- * @see CRC Handbook of Chemistry and Physics, "Electrical resistivity of pure metals" (from memory).
+ * @see CRC Handbook of Chemistry and Physics, "Electrical Resistivity of Pure Metals" (online
+ *   edition 2010, pp. 12-40 ff.); S. J. Ling, J. Sanny, W. Moebs, University Physics Volume 2,
+ *   OpenStax (2016), §9.3, Table 9.1 (resistivity and temperature coefficient at 20 °C).
  * @example
  * ```ts
  * import { silver } from "fluxwright";
@@ -123,19 +133,19 @@ export const silver: ConductiveMaterial = Object.freeze({
   id: "silver",
   resistivity20: 1.587e-8,
   temperatureCoefficient: 0.0038,
-  resistivity: Object.freeze({ kind: "linear", source: "CRC Handbook of Chemistry and Physics (from memory)" }),
-  density: 10490,
+  resistivity: Object.freeze({ kind: "linear", source: `ρ₂₀ 1.587 × 10⁻⁸ Ω·m: ${CRC_SILVER}; α₂₀ 0.0038 /K: ${OPENSTAX_RESISTIVITY}` }),
+  density: 10500,
   specificHeat20: interpolateTemperatureTable(silverSpecificHeat, 293.15),
   specificHeat: Object.freeze({ kind: "table", table: silverSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(silverConductivity, 293.15),
   thermalConductivityTable: silverConductivity,
-  emissivity: Object.freeze({ min: 0.02, max: 0.1, typical: 0.03, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.02, max: 0.1, typical: 0.03, source: "minimum 0.02: silver in the Raytek MI3 manual's emissivity table for metals (0.02 at 3.9 µm, 5 µm and 8–14 µm); maximum 0.1 and typical 0.03 from memory" }),
   meltingTemperature: 1234.93,
   temperatureRange: Object.freeze({ min: 200, max: 1200 }),
   magnetic: false,
   sources: Object.freeze([
-    "resistivity, temperature coefficient and density: CRC Handbook of Chemistry and Physics (from memory)",
-    `specific heat and thermal conductivity: ${INCROPERA} (pure silver)`,
+    `resistivity 1.587 × 10⁻⁸ Ω·m at 293 K: ${CRC_SILVER}; temperature coefficient 0.0038 /K: ${OPENSTAX_RESISTIVITY}`,
+    `density (10 500 kg/m³ at 300 K), specific heat and thermal conductivity: ${INCROPERA} (pure silver)`,
     "melting point: ITS-90 fixed point of silver, 961.78 °C",
   ]),
 } as const);

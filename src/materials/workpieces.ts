@@ -22,10 +22,28 @@ const AA_6061 = "Aluminum Association typical values for 6061-T6, as in the BTI 
 const OLIN_C26000 = "Olin Brass C26000 (ASTM B36) alloy data (28 % IACS annealed, 6.16 µΩ·cm; 8.53 g/cm³)";
 const TI64 = "BTI Metals Ti-6Al-4V data sheet (4.43 g/cm³; 526 J/(kg·K) at 25 °C; 6.70 W/(m·K) over 100–300 °C; 1780 nΩ·m at 25 °C; melting range 1604–1660 °C) and ASM/MatWeb Ti-6Al-4V (Grade 5) annealed bar (178 µΩ·cm)";
 const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.1.3 eq. (3.3) (thermal conductivity)";
+/**
+ * The AISI 304 row of Incropera's Table A.1 (5th edition), read in a transcription: the
+ * comments of package AnFPs in Regions.mo of the FCSys Modelica library
+ * (github.com/kdavies4/FCSys), which quote c_p and k of AISI 302, 304, 316 and 347 at
+ * 100–1000 K "from [Incropera2002, pp. 905 & 907]".
+ */
+const INCROPERA_304 = "F. P. Incropera, D. P. DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (Wiley 2002), Table A.1, pp. 905 and 907, AISI 304 at 200–1000 K, as transcribed in the FCSys Modelica library (github.com/kdavies4/FCSys, Regions.mo, package AnFPs)";
 const KUZMIN_IRON = "magnetisation curve: M. D. Kuz'min, Phys. Rev. Lett. 94, 107204 (2005), s = 0.35, p = 4 for iron (from memory)";
 
+/** Resistivity and temperature coefficient of brasses from a data page. */
+const TOOLBOX_BRASS = "The Engineering ToolBox, 'Resistivity and Conductivity - Temperature Coefficients Common Materials' (engineeringtoolbox.com/resistivity-conductivity-d_418.html): brass 58 % Cu 5.9 × 10⁻⁸ Ω·m and brass 63 % Cu 7.1 × 10⁻⁸ Ω·m, both α = 1.5 × 10⁻³ /°C";
 /** Curie temperature of carbon steel as stated by a steel maker (and of iron in a foundry glossary). */
 const CURIE_CARBON_STEEL = "Curie temperature 768 °C (A2 of iron): Atlas Steels technical note 'Magnetic response of stainless steels' (about 768 °C for carbon steel); Giesserei-Lexikon, 'Curiepunkt' (769 °C for iron)";
+
+/** Instrument makers' emissivity tables read for the alloys (band or total, as each says). */
+const RAYTEK_EMISSIVITY = "Raytek, 'Emissivity Table for Metals' (raytek.com, IR Education; columns 1.0 µm, 1.6 µm, 8–14 µm)";
+const RAYTEK_MI3_EMISSIVITY = "Raytek MI3 manual, appendix emissivity table for metals (3.9 µm, 5 µm, 8–14 µm)";
+const OMEGA_EMISSIVITY = "Omega OS100 series manual, section 6 emissivity table";
+const FLIR_EMISSIVITY_22 = "FLIR camera manual emissivity Table 22.1 (total spectrum 'T' rows; the table of the T10xx manual's Table 39.1), as posted at scribd.com/document/430717570";
+const IDEAL_EMISSIVITY = "Ideal Industries HeatSeeker 160 manual, Appendix A1 emissivity look-up tables";
+/** Emissivity of the stainless steels: endpoints read in two instrument makers' tables. */
+const STAINLESS_EMISSIVITY = `0.1–0.8 for stainless steel in the 8–14 µm column of ${RAYTEK_EMISSIVITY}; 0.85 for stainless steel oxidised at 800 °C in ${IDEAL_EMISSIVITY}; typical 0.4 a choice of ours within that range`;
 
 /** Emissivity of the carbon steels: a rounded range inside the instrument maker's table. */
 const STEEL_EMISSIVITY = `polished to heavily scaled; inside ${FLIR_EMISSIVITY} for iron and steel (polished 0.07, rough plate 0.95–0.98); typical 0.8 = its oxidised steel at 200–600 °C`;
@@ -182,23 +200,26 @@ const austeniticResistivity = tableFromCelsius(
 const austeniticSpecificHeat: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([402, 477, 515, 557, 582, 611, 640, 682]),
-  source: `${INCROPERA} (AISI 304; from memory)`,
+  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
 });
 const austeniticConductivity: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([12.6, 14.9, 16.6, 19.8, 22.6, 25.4, 28.0, 31.7]),
-  source: `${INCROPERA} (AISI 304; from memory)`,
+  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
 });
 
 /**
  * Austenitic stainless steel (18Cr–8Ni, AISI 304 class), non-magnetic. Resistivity
  * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 1.22 µΩ·m at 1000 °C
  * (typical, from memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
- * specific heat and thermal conductivity of AISI 304 from Incropera & DeWitt Table A.1
- * (from memory); emissivity 0.1–0.85, typical 0.4 (from memory). Documented range
- * 200–1500 K.
+ * specific heat and thermal conductivity of AISI 304 at 200–1000 K from Incropera & DeWitt,
+ * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K; read in a
+ * transcription, see the sources); their 1200 and 1500 K points from memory. Emissivity
+ * 0.1–0.85 (Raytek's 8–14 µm table: 0.1–0.8; 0.85 oxidised at 800 °C in an Ideal Industries
+ * table), typical 0.4 (a choice within that range). Documented range 200–1500 K.
  *
- * @see Incropera & DeWitt, Table A.1 (AISI 304).
+ * @see Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (2002), Table A.1,
+ *   pp. 905 and 907 (AISI 304).
  * @example
  * ```ts
  * import { austeniticStainless } from "fluxwright";
@@ -217,14 +238,14 @@ export const austeniticStainless: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: austeniticSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(austeniticConductivity, T20),
   thermalConductivityTable: austeniticConductivity,
-  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: STAINLESS_EMISSIVITY }),
   meltingTemperature: 1673,
   temperatureRange: Object.freeze({ min: 200, max: 1500 }),
   magnetic: false,
   sources: Object.freeze([
     `resistivity: ${austeniticResistivity.source}`,
     "density: typical, from memory",
-    `specific heat and thermal conductivity: ${INCROPERA} (AISI 304; from memory)`,
+    `specific heat and thermal conductivity: ${austeniticConductivity.source}`,
     "solidus 1400 °C: ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel'",
   ]),
 });
@@ -254,7 +275,8 @@ const ferriticConductivity = tableFromCelsius(
  * alike for heating purposes). Resistivity 0.60 µΩ·m at 20 °C, density 7750 kg/m³, specific
  * heat 460 J/(kg·K) near 20 °C and conductivity 26.1 W/(m·K) at 100 °C, 26.3 at 500 °C (AK
  * Steel and Atlas Steels type 430 data sheets); the other table points typical, from memory
- * (the Curie anomaly of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4. Curie
+ * (the Curie anomaly of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4 (as
+ * for austenitic stainless). Curie
  * temperature 943 K (670 °C, from memory), low-field relative permeability 750, saturation
  * 1.5 T at 20 °C (typical, from memory), transition width 40 K. Documented range
  * 293–1473 K.
@@ -279,7 +301,7 @@ export const ferriticStainless: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: ferriticSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(ferriticConductivity, T20),
   thermalConductivityTable: ferriticConductivity,
-  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.1, max: 0.85, typical: 0.4, source: STAINLESS_EMISSIVITY }),
   meltingTemperature: 1698,
   temperatureRange: Object.freeze({ min: 293.15, max: 1473.15 }),
   magnetic: true,
@@ -316,7 +338,9 @@ const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 
  * α₂₀ ≈ 0.00284 /K); density 2700 kg/m³, conductivity 167 W/(m·K) near room temperature and
  * solidus 855 K (582 °C) as in the same data sheets; specific heat 896 J/(kg·K) at 20 °C
  * (the data sheets give 896 at 100 °C; the table above 20 °C is from memory); emissivity
- * 0.03–0.3, typical 0.1 (from memory). Documented range 200–850 K.
+ * 0.03–0.3 as aluminium's in instrument makers' tables (Omega: 0.04–0.06 highly polished,
+ * 0.20–0.31 heavily oxidised; Raytek: 0.02–0.1 polished), typical 0.1 (a choice near the 0.09
+ * of commercial sheet). Documented range 200–850 K.
  *
  * @see A. Matthiessen, C. Vogt, Ann. Phys. 198 (1864) 19 (Matthiessen's rule).
  * @example
@@ -337,7 +361,7 @@ export const aluminiumAlloy: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: alloySpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(alloyConductivity, T20),
   thermalConductivityTable: alloyConductivity,
-  emissivity: Object.freeze({ min: 0.03, max: 0.3, typical: 0.1, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.03, max: 0.3, typical: 0.1, source: `taken as aluminium's: ${OMEGA_EMISSIVITY} (0.04–0.06 highly polished, 0.09 commercial sheet, 0.20–0.31 heavily oxidised) and ${RAYTEK_MI3_EMISSIVITY} (polished 0.02–0.1 at 8–14 µm); typical 0.1 a choice of ours near commercial sheet` }),
   meltingTemperature: 855,
   temperatureRange: Object.freeze({ min: 200, max: 850 }),
   magnetic: false,
@@ -362,10 +386,11 @@ const brassConductivity: TemperatureTable = Object.freeze({
 
 /**
  * Brass (70Cu–30Zn cartridge brass class). Resistivity 28 % IACS ≈ 6.16 × 10⁻⁸ Ω·m at
- * 20 °C (Olin Brass C26000 data), temperature coefficient 0.0015 /K (typical, from memory),
- * linear; density 8530 kg/m³; specific heat and conductivity from Incropera et al., 7th ed.,
- * Table A.1, p. 983, which ends at 600 K (values held above); emissivity 0.03–0.6, typical
- * 0.2 (from memory); melting point 1188 K (Incropera, Table A.1). Documented range 293–1100 K.
+ * 20 °C (Olin Brass C26000 data), temperature coefficient 0.0015 /K (the Engineering
+ * ToolBox's value for 58 % and 63 % Cu brasses; no figure for 70/30 brass was found), linear; density 8530 kg/m³; specific heat and conductivity from Incropera et al., 7th ed.,
+ * Table A.1, p. 983, which ends at 600 K (values held above); emissivity 0.03 (highly polished,
+ * Omega table) to 0.6 (oxidised: 0.61 in the FLIR table), typical 0.2 (a choice near the 0.22
+ * of dull brass); melting point 1188 K (Incropera, Table A.1). Documented range 293–1100 K.
  *
  * @see Incropera, DeWitt, Bergman, Lavine, Fundamentals of Heat and Mass Transfer, 7th ed.,
  *   Table A.1, p. 983 (cartridge brass).
@@ -381,18 +406,18 @@ export const brass: ConductiveMaterial = Object.freeze({
   id: "brass",
   resistivity20: ANNEALED_COPPER_RESISTIVITY / 0.28,
   temperatureCoefficient: 0.0015,
-  resistivity: Object.freeze({ kind: "linear", source: `28 % IACS (${OLIN_C26000}); 0.0015 /K typical, from memory` }),
+  resistivity: Object.freeze({ kind: "linear", source: `28 % IACS (${OLIN_C26000}); 0.0015 /K as for 58 % and 63 % Cu brasses in ${TOOLBOX_BRASS}` }),
   density: 8530,
   specificHeat20: interpolateTemperatureTable(brassSpecificHeat, T20),
   specificHeat: Object.freeze({ kind: "table", table: brassSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(brassConductivity, T20),
   thermalConductivityTable: brassConductivity,
-  emissivity: Object.freeze({ min: 0.03, max: 0.6, typical: 0.2, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.03, max: 0.6, typical: 0.2, source: `${OMEGA_EMISSIVITY} (highly polished 73.2Cu–26.7Zn brass 0.03, dull plate 0.22); ${FLIR_EMISSIVITY_22} (dull, tarnished 0.22; oxidised at 100 °C 0.61); typical 0.2 a choice of ours near the dull-plate value` }),
   meltingTemperature: 1188,
   temperatureRange: Object.freeze({ min: 293.15, max: 1100 }),
   magnetic: false,
   sources: Object.freeze([
-    `resistivity: ${OLIN_C26000}; temperature coefficient 0.0015 /K typical, from memory`,
+    `resistivity: ${OLIN_C26000}; temperature coefficient 0.0015 /K: ${TOOLBOX_BRASS} (not given for 70/30 brass)`,
     `density, specific heat, conductivity, melting point 1188 K: ${INCROPERA} (cartridge brass, p. 983)`,
   ]),
 });
@@ -413,7 +438,8 @@ const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6
  * (from memory); density 4430 kg/m³, specific heat 526 J/(kg·K) near room temperature and solidus
  * 1877 K (1604 °C) as in the BTI Metals Ti-6Al-4V data sheet; conductivity 6.7 W/(m·K) at
  * 20 °C (that data sheet gives 6.70 over 100–300 °C, where this table reads 7.6–10.2: the
- * table is from memory); emissivity 0.2–0.8, typical 0.5 (from memory). Documented range
+ * table is from memory); emissivity 0.2–0.8, typical 0.5 (0.8 as oxidised titanium in Raytek's
+ * table; 0.2 and 0.5 from memory). Documented range
  * 293–1273 K.
  *
  * @see BTI Metals, Ti-6Al-4V data sheet; ASM/MatWeb, Titanium Ti-6Al-4V (Grade 5), annealed bar.
@@ -435,7 +461,7 @@ export const titaniumAlloy: ConductiveMaterial = Object.freeze({
   specificHeat: Object.freeze({ kind: "table", table: titaniumSpecificHeat }),
   thermalConductivity: interpolateTemperatureTable(titaniumConductivity, T20),
   thermalConductivityTable: titaniumConductivity,
-  emissivity: Object.freeze({ min: 0.2, max: 0.8, typical: 0.5, source: "typical, from memory" }),
+  emissivity: Object.freeze({ min: 0.2, max: 0.8, typical: 0.5, source: `maximum 0.8: oxidised titanium at 1.6 µm (0.6–0.8) in ${RAYTEK_EMISSIVITY}; minimum 0.2 and typical 0.5 from memory (that table's lowest value for titanium is 0.3, polished at 1.6 µm)` }),
   meltingTemperature: 1877,
   temperatureRange: Object.freeze({ min: ZERO_CELSIUS + 20, max: ZERO_CELSIUS + 1000 }),
   magnetic: false,

@@ -44,6 +44,24 @@ describe("material sets", () => {
     expect(lowCarbonSteel.curieTemperature).toBeCloseTo(768 + 273.15, 9);
   });
 
+  it("puts the emissivity endpoints where instrument makers' tables put them", () => {
+    // Raytek 'Emissivity Table for Metals', 8–14 µm: stainless steel 0.1–0.8; Ideal HeatSeeker 160 manual: stainless oxidised at 800 °C 0.85
+    for (const m of [austeniticStainless, ferriticStainless]) {
+      expect(m.emissivity.min).toBe(0.1);
+      expect(m.emissivity.max).toBe(0.85);
+    }
+    // Omega OS100 table: highly polished brass 0.03; FLIR Table 22.1: brass oxidised at 100 °C 0.61
+    expect(brass.emissivity.min).toBe(0.03);
+    expect(brass.emissivity.max.toFixed(1)).toBe((0.61).toFixed(1)); // 0.61 to the one digit the set carries
+    // Omega OS100: aluminium 0.04–0.06 polished … 0.20–0.31 heavily oxidised; Raytek MI3: polished 0.02–0.1
+    expect(aluminiumAlloy.emissivity.min).toBeGreaterThanOrEqual(0.02);
+    expect(aluminiumAlloy.emissivity.max).toBeLessThanOrEqual(0.31);
+    expect(aluminiumAlloy.emissivity.max).toBeGreaterThanOrEqual(0.2);
+    // Raytek MI3 table: silver 0.02; Raytek metals table: oxidised titanium 0.6–0.8 at 1.6 µm
+    expect(silver.emissivity.min).toBe(0.02);
+    expect(titaniumAlloy.emissivity.max).toBe(0.8);
+  });
+
   it("keeps emissivity ranges ordered inside (0, 1]", () => {
     for (const m of conductiveMaterials) {
       const e = m.emissivity;
@@ -74,8 +92,14 @@ describe("material sets", () => {
     expect(Object.isFrozen(conductiveMaterials)).toBe(true);
   });
 
-  it("reads AISI 304 19.8 W/(m·K) at 600 K from its own table (consistency, not an outside check: the AISI 304 row is unverified, docs/unverified-values.md)", () => {
-    expect(thermalConductivityAt(austeniticStainless, 600)).toBe(19.8);
+  it("gives AISI 304 12.6, 14.9, 16.6, 19.8, 22.6, 25.4 W/(m·K) at 200, 300, 400, 600, 800, 1000 K (Incropera & DeWitt 5th ed., Table A.1, pp. 905 and 907, as transcribed in the FCSys Modelica library, Regions.mo)", () => {
+    // Incropera & DeWitt 2002, Table A.1, AISI 304 row, via github.com/kdavies4/FCSys Regions.mo
+    const row: [number, number][] = [[200, 12.6], [300, 14.9], [400, 16.6], [600, 19.8], [800, 22.6], [1000, 25.4]];
+    for (const [t, k] of row) expect(thermalConductivityAt(austeniticStainless, t)).toBe(k);
+  });
+
+  it("reads AISI 304 28.0 W/(m·K) at 1200 K from its own table (consistency, not an outside check: the 1200 and 1500 K points are unverified, docs/unverified-values.md)", () => {
+    expect(thermalConductivityAt(austeniticStainless, 1200)).toBe(28.0);
   });
 
   it("gives pure copper, aluminium and silver the conductivities of Incropera et al. 7th ed. Table A.1 (pp. 983–986)", () => {

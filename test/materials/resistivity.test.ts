@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { InputError, celsius } from "../../src/index.js";
-import { aluminium, aluminiumAlloy, brass, copper, ferriticStainless, lowCarbonSteel, resistivityAt, austeniticStainless, titaniumAlloy } from "../../src/materials/index.js";
+import { aluminium, aluminiumAlloy, brass, copper, ferriticStainless, lowCarbonSteel, resistivityAt, austeniticStainless, silver, titaniumAlloy } from "../../src/materials/index.js";
 import data from "../fixtures/materials/resistivity-linear.json" with { type: "json" };
 
 const sets = { copper, aluminium } as const;
@@ -34,6 +34,20 @@ describe("resistivityAt", () => {
     const ti = resistivityAt(titaniumAlloy, celsius(20));
     expect(ti).toBeGreaterThanOrEqual(1.68e-6); // producers' data sheets: 1.68 µΩ·m …
     expect(ti).toBeLessThanOrEqual(1.78e-6); // … to 1.78 µΩ·m (ASM/MatWeb, BTI Metals)
+  });
+
+  it("gives silver 1.587 × 10⁻⁸ Ω·m at 293 K (CRC Handbook, Electrical Resistivity of Pure Metals) and 0.0038 /K (OpenStax University Physics Vol. 2, §9.3, Table 9.1)", () => {
+    expect(resistivityAt(silver, 293.15)).toBeCloseTo(1.587e-8, 13); // CRC Handbook 2010, p. 12-40 ff.: 1.587 at 293 K
+    expect(Number(resistivityAt(silver, celsius(20)).toPrecision(3))).toBe(1.59e-8); // OpenStax Table 9.1: 1.59 × 10⁻⁸ Ω·m
+    // CRC slope between 273 and 300 K, (1.629 − 1.467)/27 per K over 1.587: 0.00378 /K
+    expect(Math.abs(silver.temperatureCoefficient - (1.629 - 1.467) / 27 / 1.587)).toBeLessThan(0.00003);
+    expect(silver.temperatureCoefficient).toBe(0.0038); // OpenStax Table 9.1: α = 0.0038 /°C
+    expect(silver.density).toBe(10500); // Incropera et al. 7th ed., Table A.1, pure silver at 300 K
+  });
+
+  it("gives brass the 1.5 × 10⁻³ /K of the Engineering ToolBox's resistivity table (brasses of 58 % and 63 % Cu)", () => {
+    expect(brass.temperatureCoefficient).toBe(1.5e-3); // Engineering ToolBox, resistivity-conductivity-d_418
+    expect(resistivityAt(brass, celsius(120)) / resistivityAt(brass, celsius(20))).toBeCloseTo(1 + 1.5e-3 * 100, 12);
   });
 
   it("holds end values outside the documented range", () => {

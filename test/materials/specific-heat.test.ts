@@ -42,8 +42,14 @@ describe("specificHeatAt", () => {
     expect(specificHeatAt(ferriticStainless, celsius(20))).toBeCloseTo(460, 9); // Atlas Steels 430
   });
 
-  it("reads AISI 304 557 J/(kg·K) at 600 K from its own table (consistency, not an outside check: the AISI 304 row is unverified, docs/unverified-values.md)", () => {
-    expect(specificHeatAt(austeniticStainless, 600)).toBe(557);
+  it("gives AISI 304 402, 477, 515, 557, 582, 611 J/(kg·K) at 200, 300, 400, 600, 800, 1000 K (Incropera & DeWitt 5th ed., Table A.1, pp. 905 and 907, as transcribed in the FCSys Modelica library, Regions.mo)", () => {
+    // Incropera & DeWitt 2002, Table A.1, AISI 304 row, via github.com/kdavies4/FCSys Regions.mo
+    const row: [number, number][] = [[200, 402], [300, 477], [400, 515], [600, 557], [800, 582], [1000, 611]];
+    for (const [t, cp] of row) expect(specificHeatAt(austeniticStainless, t)).toBe(cp);
+  });
+
+  it("reads AISI 304 640 J/(kg·K) at 1200 K from its own table (consistency, not an outside check: the 1200 and 1500 K points are unverified, docs/unverified-values.md)", () => {
+    expect(specificHeatAt(austeniticStainless, 1200)).toBe(640);
   });
 
   it("the carbon-steel peak adds about 101 kJ/kg above a 650 J/(kg·K) baseline over 600–900 °C", () => {
