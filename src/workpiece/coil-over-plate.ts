@@ -1,134 +1,35 @@
 /**
  * Coil of rectangular winding cross-section above a conducting, possibly magnetic, plate or
- * layered half-space: the Dodd & Deeds (1968) integral solution.
+ * layered half-space: the Dodd & Deeds (1968) integral solution. Its types, input reading and
+ * result assembly are in coil-over-plate-types.ts, -input.ts and -result.ts (re-exported here).
  *
  * @packageDocumentation
  */
-import { InputError, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
-import type { ValidityNote } from "../core/index.js";
-import { renamedOption } from "../core/renamed.js";
-import type { Complex } from "../special/index.js";
+import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
 import { MU_0 } from "../units/index.js";
 import { exponentialIntegralE5, gaussLegendreRule } from "../special/internal.js";
 import { besselJ1MomentOverCube } from "./kernels.js";
 import { layerArrays, reflectionInto } from "./layered-reflection.js";
 import type { LayerArrays } from "./layered-reflection.js";
+import { checkCoil, checkPlateLayers } from "./coil-over-plate-input.js";
+import { assembleResult } from "./coil-over-plate-result.js";
+import type { CoilAbovePlate, CoilOverPlateOptions, CoilOverPlateResult, PlateLayer } from "./coil-over-plate-types.js";
 
 export { layerArrays, reflectionInto } from "./layered-reflection.js";
 export type { LayerArrays } from "./layered-reflection.js";
+export { checkCoil, checkPlateLayers } from "./coil-over-plate-input.js";
+export { assembleResult } from "./coil-over-plate-result.js";
+export type {
+  CoilAbovePlate,
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- exported until 1.0
+  CoilAbovePlateWithHeight,
+  CoilOverPlateOptions,
+  CoilOverPlateResult,
+  PlateLayer,
+} from "./coil-over-plate-types.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const COIL_OVER_PLATE_FIELDS: readonly string[] = Object.freeze(["coil", "plate", "frequency"]);
-
-/** Accepted fields (misspelt ones are rejected, not ignored). */
-const LAYER_FIELDS: readonly string[] = Object.freeze(["thickness", "resistivity", "relativePermeability"]);
-
-/** Accepted fields (misspelt ones are rejected, not ignored). */
-const PLATE_COIL_FIELDS: readonly string[] = Object.freeze(["innerRadius", "outerRadius", "liftOff", "length", "turns", "height"]);
-
-/**
- * One conducting layer of a plate or layered half-space (top layer first).
- *
- * @category Workpiece
- */
-export interface PlateLayer {
-  /** Layer thickness [m], > 0; `Infinity` for a half-space (only the last layer may be). */
-  readonly thickness: number;
-  /** Resistivity [Ω·m], > 0 (a large value for a non-conducting magnetic layer). */
-  readonly resistivity: number;
-  /** Relative permeability [-], ≥ 1, constant (linear material). */
-  readonly relativePermeability: number;
-}
-
-/**
- * A coaxial coil of rectangular winding cross-section (a pancake or short multilayer coil)
- * above a plate, with uniform current density over the winding cross-section.
- *
- * @category Workpiece
- */
-export interface CoilAbovePlate {
-  /** Inner radius of the winding [m], ≥ 0 and < outerRadius. */
-  readonly innerRadius: number;
-  /** Outer radius of the winding [m], > innerRadius. */
-  readonly outerRadius: number;
-  /** Gap from the plate surface to the bottom of the winding [m], ≥ 0. */
-  readonly liftOff: number;
-  /** Axial length of the winding (its extent along the axis) [m], > 0. */
-  readonly length: number;
-  /** Number of turns, an integer ≥ 1. */
-  readonly turns: number;
-}
-
-/**
- * A {@link CoilAbovePlate} given with its former field name `height` for the axial length.
- *
- * @deprecated Give `length` instead of `height`; accepted until 1.0.
- * @category Workpiece
- */
-export type CoilAbovePlateWithHeight = Omit<CoilAbovePlate, "length"> & {
-  /**
-   * Axial length of the winding [m], > 0.
-   *
-   * @deprecated Use `length`.
-   */
-  readonly height: number;
-};
-
-/**
- * Options of {@link coilOverPlate}.
- *
- * @category Workpiece
- */
-export interface CoilOverPlateOptions {
-  /** The coil, see {@link CoilAbovePlate}. */
-  // eslint-disable-next-line @typescript-eslint/no-deprecated -- the former field name is accepted until 1.0
-  readonly coil: CoilAbovePlate | CoilAbovePlateWithHeight;
-  /**
-   * The conductor below the coil: one {@link PlateLayer} (a plate, or a half-space with
-   * `thickness: Infinity`), or an array of layers from the top down (a coated part; air below
-   * the last layer unless its thickness is `Infinity`).
-   */
-  readonly plate: PlateLayer | readonly PlateLayer[];
-  /** Frequency [Hz], > 0. */
-  readonly frequency: number;
-}
-
-/**
- * Result of {@link coilOverPlate}: the impedance at the coil terminals (winding resistance
- * not included) and its change caused by the plate.
- *
- * @category Workpiece
- */
-export interface CoilOverPlateResult {
-  /** Resistance added by the plate, the reflected resistance $\Delta R$ [Ω], ≥ 0. */
-  readonly reflectedResistance: number;
-  /**
-   * The same value as {@link CoilOverPlateResult.reflectedResistance} [Ω].
-   *
-   * @deprecated Use `reflectedResistance`; this field goes at 1.0.
-   */
-  readonly resistanceChange: number;
-  /** Reactance change $\Delta X$ [Ω] (negative when eddy currents shield, positive when magnetisation wins). */
-  readonly reactanceChange: number;
-  /** Inductance change $\Delta L = \Delta X/\omega$ [H]. */
-  readonly inductanceChange: number;
-  /** Inductance of the same coil in air, without the plate [H] (Dodd & Deeds' air-core integral). */
-  readonly emptyCoilInductance: number;
-  /**
-   * The same value as {@link CoilOverPlateResult.emptyCoilInductance} [H].
-   *
-   * @deprecated Use `emptyCoilInductance`; this field goes at 1.0.
-   */
-  readonly airCoreInductance: number;
-  /** Inductance with the plate, $L_0 + \Delta L$ [H]. */
-  readonly inductance: number;
-  /** Terminal impedance without winding resistance, $\Delta R + j\omega(L_0 + \Delta L)$ [Ω]. */
-  readonly impedance: Complex;
-  /** Skin depth of the top layer [m]. */
-  readonly skinDepth: number;
-  /** Where the model's assumptions may not hold. */
-  readonly validity: readonly ValidityNote[];
-}
 
 const PANEL_NODES = 12;
 /** The air-core sum runs to this multiple of the ΔZ sum's last wavenumber before its tail. */
@@ -136,48 +37,6 @@ const AIR_CORE_REACH = 4;
 const RULE = gaussLegendreRule(PANEL_NODES);
 const GL_NODES = RULE.nodes;
 const GL_WEIGHTS = RULE.weights;
-
-/** Checked layer list of a plate option (shared with the temperature helper). */
-export function checkPlateLayers(where: string, plate: unknown): PlateLayer[] {
-  const list: unknown[] = Array.isArray(plate) ? (plate as unknown[]) : [requireObject(where, "plate", plate)];
-  if (list.length === 0) throw new InputError(where, "plate", plate, "", "a layer or a non-empty array of layers");
-  return list.map((item, i) => {
-    const name = Array.isArray(plate) ? `plate[${i}]` : "plate";
-    const layer = requireKnownKeys(where, name, requireObject(where, name, item), LAYER_FIELDS);
-    const t = layer["thickness"];
-    const last = i === list.length - 1;
-    if (typeof t !== "number" || !(t > 0) || (t === Infinity && !last)) {
-      throw new InputError(
-        where,
-        `${name}.thickness`,
-        t,
-        "m",
-        last ? "a number > 0 (Infinity for a half-space)" : "a finite number > 0 (only the last layer may be Infinity)",
-      );
-    }
-    const resistivity = requirePositive(where, `${name}.resistivity`, layer["resistivity"], "Ω·m");
-    const mur = layer["relativePermeability"];
-    if (typeof mur !== "number" || !Number.isFinite(mur) || mur < 1) {
-      throw new InputError(where, `${name}.relativePermeability`, mur, "", "a finite number ≥ 1");
-    }
-    return { thickness: t, resistivity, relativePermeability: mur };
-  });
-}
-
-/** Checked coil of {@link coilOverPlate}. */
-export function checkCoil(where: string, coil: unknown): CoilAbovePlate {
-  const c = requireObject(where, "coil", coil);
-  requireKnownKeys(where, "coil", c, PLATE_COIL_FIELDS);
-  const innerRadius = requireNonNegative(where, "coil.innerRadius", c["innerRadius"], "m");
-  const outerRadius = requirePositive(where, "coil.outerRadius", c["outerRadius"], "m");
-  if (!(outerRadius > innerRadius)) {
-    throw new InputError(where, "coil.outerRadius", outerRadius, "m", `a finite number > coil.innerRadius (${innerRadius})`);
-  }
-  const liftOff = requireNonNegative(where, "coil.liftOff", c["liftOff"], "m");
-  const length = requirePositive(where, c["length"] === undefined && c["height"] !== undefined ? "coil.height" : "coil.length", renamedOption(where, "coil", c, "length", "height"), "m");
-  const turns = requireInteger(where, "coil.turns", c["turns"], 1);
-  return { innerRadius, outerRadius, liftOff, length, turns };
-}
 
 /** Smallest scale of α on which the integrand changes (coil length and radius, skin and thin-sheet scales). */
 export function featureScale(coil: CoilAbovePlate, lay: LayerArrays): number {
@@ -384,54 +243,3 @@ export function coilOverLayers(coil: CoilAbovePlate, layers: readonly PlateLayer
   return assembleResult(coil, layers, omega, iRe, iIm, 0, 2 * Math.PI * MU_0 * perWidth * perWidth * sheet);
 }
 
-/** Result object from the three integrals: ΔZ = jωπμ0 n² (iRe + j iIm), L0 = 2πμ0 n² (h K + j). */
-export function assembleResult(
-  coil: CoilAbovePlate,
-  layers: readonly PlateLayer[],
-  omega: number,
-  iRe: number,
-  iIm: number,
-  j: number,
-  airCore: number | null = null,
-): CoilOverPlateResult {
-  const r1 = coil.innerRadius;
-  const r2 = coil.outerRadius;
-  const n = coil.turns / ((r2 - r1) * coil.length);
-  const c = Math.PI * MU_0 * n * n;
-  const dR = -omega * c * iIm;
-  const dX = omega * c * iRe;
-  const kClosed = ((r2 ** 4 - r1 ** 4) / 4 - r1 ** 3 * (r2 - r1)) / 3;
-  const l0 = airCore ?? 2 * c * (coil.length * kClosed + j);
-  const dL = dX / omega;
-  const top = layers[0]!;
-  const skinDepth = Math.sqrt((2 * top.resistivity) / (omega * MU_0 * top.relativePermeability));
-  const validity: ValidityNote[] = [];
-  if (layers.some((layer) => layer.relativePermeability > 1)) {
-    validity.push({
-      code: "constant-permeability",
-      message:
-        "Magnetic layers are taken as linear with a constant relative permeability; steel saturates in strong fields, so use the permeability at the working field strength.",
-    });
-  }
-  if (coil.liftOff === 0) {
-    validity.push({
-      code: "zero-lift-off",
-      message: "The winding touches the plate; real coils need insulation and cooling gaps, which lower the coupling.",
-      value: 0,
-    });
-  }
-  return {
-    reflectedResistance: dR,
-    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
-    resistanceChange: dR,
-    reactanceChange: dX,
-    inductanceChange: dL,
-    emptyCoilInductance: l0,
-    // eslint-disable-next-line @typescript-eslint/no-deprecated -- kept until 1.0
-    airCoreInductance: l0,
-    inductance: l0 + dL,
-    impedance: { re: dR, im: omega * (l0 + dL) },
-    skinDepth,
-    validity,
-  };
-}

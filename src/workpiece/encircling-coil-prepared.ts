@@ -136,51 +136,8 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
   requireKnownKeys(where, "geometry", geometry, KNOWN);
   const { r1, r2, len, turns, a, a1 } = readEncirclingGeometry(where, geometry.coil, geometry.rod, ["radius", "innerRadius"]);
   const solid = a1 < 1e-9 * a;
-  const gap = r1 - a;
 
-  // nodes: graded panels towards 0, then uniform panels of the oscillation width
-  const w = Math.min(Math.PI / len, 2 / gap, Math.PI / r2);
-  const aMax = 20 / gap;
-  const panels: [number, number][] = [];
-  let lo = w;
-  for (let level = 0; level < GRADED_LEVELS; level++) {
-    panels.push([lo / 2, lo]);
-    lo /= 2;
-  }
-  panels.push([0, lo]);
-  for (let x = w; x < aMax; ) {
-    const hi = Math.min(x + w, aMax);
-    panels.push([x, hi]);
-    x = hi;
-  }
-  const count = panels.length * PANEL_NODES;
-  const alpha = new Float64Array(count);
-  const weight = new Float64Array(count); // wt e^{−2α gap} q² s²
-  const i0 = new Float64Array(count);
-  const i1 = new Float64Array(count);
-  const k0 = new Float64Array(count);
-  const k1 = new Float64Array(count);
-  const bore = new Float64Array(count); // tube: α I0(α a1)/I1(α a1)
-  let n = 0;
-  for (const [p0, p1] of panels) {
-    const half = 0.5 * (p1 - p0);
-    const mid = 0.5 * (p1 + p0);
-    for (let i = 0; i < PANEL_NODES; i++) {
-      const al = mid + half * RULE.nodes[i]!;
-      const x = al * a;
-      const kap = besselK1MomentTailScaled(al * r1) - Math.exp(-al * (r2 - r1)) * besselK1MomentTailScaled(al * r2);
-      const s = Math.sin(0.5 * al * len);
-      const q = kap / (al * al * al);
-      alpha[n] = al;
-      weight[n] = half * RULE.weights[i]! * Math.exp(-2 * al * gap) * q * q * s * s;
-      i0[n] = besselI0Scaled(x);
-      i1[n] = besselI1Scaled(x);
-      k0[n] = besselK0Scaled(x);
-      k1[n] = besselK1Scaled(x);
-      if (!solid) bore[n] = (al * besselI0Scaled(al * a1)) / besselI1Scaled(al * a1);
-      n++;
-    }
-  }
+  const { count, alpha, weight, i0, i1, k0, k1, bore } = quadratureNodes(r1, r2, len, a, a1, solid);
   const windingDensity = turns / ((r2 - r1) * len);
   const ratio = new Float64Array(2);
 
@@ -267,3 +224,71 @@ export function prepareEncirclingCoilOverRod(geometry: EncirclingCoilGeometry): 
   };
 }
 
+/** Quadrature nodes of {@link prepareEncirclingCoilOverRod} with everything that depends on geometry alone. */
+interface QuadratureNodes {
+  readonly count: number;
+  /** Node abscissae α [1/m]. */
+  readonly alpha: Float64Array;
+  /** Weight × e^{−2α gap} (κ/α³)² sin²(αℓ/2). */
+  readonly weight: Float64Array;
+  /** Scaled I₀, I₁, K₀, K₁ at α a. */
+  readonly i0: Float64Array;
+  readonly i1: Float64Array;
+  readonly k0: Float64Array;
+  readonly k1: Float64Array;
+  /** Tube: α I₀(α a₁)/I₁(α a₁) (unused for a solid rod). */
+  readonly bore: Float64Array;
+}
+
+/**
+ * The fixed quadrature of {@link prepareEncirclingCoilOverRod} for a coil r1 … r2 of length `len`
+ * around a rod of radius a (bore a1): graded panels towards α = 0, then uniform panels of the
+ * oscillation width, with the geometry-only factors at each node.
+ */
+function quadratureNodes(r1: number, r2: number, len: number, a: number, a1: number, solid: boolean): QuadratureNodes {
+  const gap = r1 - a;
+  // nodes: graded panels towards 0, then uniform panels of the oscillation width
+  const w = Math.min(Math.PI / len, 2 / gap, Math.PI / r2);
+  const aMax = 20 / gap;
+  const panels: [number, number][] = [];
+  let lo = w;
+  for (let level = 0; level < GRADED_LEVELS; level++) {
+    panels.push([lo / 2, lo]);
+    lo /= 2;
+  }
+  panels.push([0, lo]);
+  for (let x = w; x < aMax; ) {
+    const hi = Math.min(x + w, aMax);
+    panels.push([x, hi]);
+    x = hi;
+  }
+  const count = panels.length * PANEL_NODES;
+  const alpha = new Float64Array(count);
+  const weight = new Float64Array(count); // wt e^{−2α gap} q² s²
+  const i0 = new Float64Array(count);
+  const i1 = new Float64Array(count);
+  const k0 = new Float64Array(count);
+  const k1 = new Float64Array(count);
+  const bore = new Float64Array(count); // tube: α I0(α a1)/I1(α a1)
+  let n = 0;
+  for (const [p0, p1] of panels) {
+    const half = 0.5 * (p1 - p0);
+    const mid = 0.5 * (p1 + p0);
+    for (let i = 0; i < PANEL_NODES; i++) {
+      const al = mid + half * RULE.nodes[i]!;
+      const x = al * a;
+      const kap = besselK1MomentTailScaled(al * r1) - Math.exp(-al * (r2 - r1)) * besselK1MomentTailScaled(al * r2);
+      const s = Math.sin(0.5 * al * len);
+      const q = kap / (al * al * al);
+      alpha[n] = al;
+      weight[n] = half * RULE.weights[i]! * Math.exp(-2 * al * gap) * q * q * s * s;
+      i0[n] = besselI0Scaled(x);
+      i1[n] = besselI1Scaled(x);
+      k0[n] = besselK0Scaled(x);
+      k1[n] = besselK1Scaled(x);
+      if (!solid) bore[n] = (al * besselI0Scaled(al * a1)) / besselI1Scaled(al * a1);
+      n++;
+    }
+  }
+  return { count, alpha, weight, i0, i1, k0, k1, bore };
+}

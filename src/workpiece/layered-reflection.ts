@@ -5,7 +5,7 @@
  * @packageDocumentation
  */
 import { MU_0 } from "../units/index.js";
-import type { PlateLayer } from "./coil-over-plate.js";
+import type { PlateLayer } from "./coil-over-plate-types.js";
 
 /** Layer data for the reflection coefficient: k = ωμ0μr/ρ, μr, thickness. */
 export interface LayerArrays {
