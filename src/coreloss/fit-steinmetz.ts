@@ -70,45 +70,21 @@ export interface SteinmetzFit {
 
 const WHERE = "fitSteinmetz";
 
-/**
- * Fits Steinmetz coefficients to loss points by linear least squares in log space:
- * $$
- * \ln P_v = \ln k + \alpha \ln f + \beta \ln \hat B \;\bigl[ + \ln F(T) \bigr],
- * \qquad F(T) = 1 + c_1 (T - T_{\mathrm{ref}}) + c_2 (T - T_{\mathrm{ref}})^2
- * $$
- * Without temperatures the problem is linear (Householder QR). With temperatures on every
- * point (at least 3 distinct), the quadratic factor is fitted as well: a linear start with
- * $\ln F ≈ \gamma_1 d + \gamma_2 d^2$, then Gauss–Newton on the log residuals.
- *
- * Hard domain (throws {@link InputError}): fewer than 3 points (6 with temperatures); a point
- * with a non-positive or non-finite field; temperatures on some points but not all; all
- * points at one frequency or one flux density, or frequency and flux collinear in log space
- * (α and β cannot be separated). Validity (reported in `validity`, not thrown): a frequency or
- * flux span narrower than a factor of 2, strongly correlated frequency and flux, fewer than
- * 3 distinct temperatures. Accuracy: recovers the coefficients of exact synthetic data to
- * ≤ 1e-9 relative (tests); with noisy data, the statistical error of least squares.
- *
- * @param points - the data points
- * @param options - optional reference temperature [K]
- * @returns the coefficients, residuals and validity notes
- * @throws {@link InputError} on bad input or data that cannot determine α and β
- * @see Least squares in log space: common practice for Steinmetz fits; quadratic temperature
- * factor $c_{t0} - c_{t1}T + c_{t2}T^2$ of ferrite datasheets (common practice).
- * @example
- * ```ts
- * import { fitSteinmetz, steinmetzLoss } from "fluxwright";
- * // synthetic points from invented coefficients k = 2.5, α = 1.45, β = 2.55
- * const points = [];
- * for (const frequency of [25e3, 50e3, 100e3, 200e3])
- *   for (const fluxDensityPeak of [0.05, 0.1, 0.2])
- *     points.push({ frequency, fluxDensityPeak, lossDensity: steinmetzLoss({ k: 2.5, alpha: 1.45, beta: 2.55, frequency, fluxDensityPeak }) });
- * const fit = fitSteinmetz(points);
- * console.log(fit.alpha.toFixed(6), fit.beta.toFixed(6)); // 1.450000 2.550000
- * ```
- * @category Core loss
- */
-// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
-export function fitSteinmetz(points: readonly (SteinmetzDataPoint | WithPeakFluxDensity<SteinmetzDataPoint>)[], options: FitSteinmetzOptions = {}): SteinmetzFit {
+/** The points in log space (ln f, ln B̂, ln P_v) and their temperatures, checked. */
+interface LogPoints {
+  readonly n: number;
+  readonly lf: Float64Array;
+  readonly lb: Float64Array;
+  readonly lp: Float64Array;
+  readonly temps: Float64Array;
+}
+
+/** Reads and checks the points and options; throws InputError on bad ones. */
+function readPoints(
+  // eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+  points: readonly (SteinmetzDataPoint | WithPeakFluxDensity<SteinmetzDataPoint>)[],
+  options: FitSteinmetzOptions,
+): LogPoints & { readonly withT: number } {
   if (!Array.isArray(points)) throw new InputError(WHERE, "points", points, "", "an array of { frequency, fluxDensityPeak, lossDensity } points");
   requireObject(WHERE, "options", options);
   requireKnownKeys(WHERE, "options", options, FIT_FIELDS);
@@ -133,42 +109,53 @@ export function fitSteinmetz(points: readonly (SteinmetzDataPoint | WithPeakFlux
   if (withT !== 0 && withT !== n) {
     throw new InputError(WHERE, "points[].temperature", withT, "", `given on every point or on none (given on ${withT} of ${n})`);
   }
-  const validity: ValidityNote[] = [];
-  checkSpan(lf, lb, validity);
+  return { n, lf, lb, lp, temps, withT };
+}
 
-  let useT = withT === n;
-  let tRef = 0;
-  if (useT) {
-    const distinct = new Set(Array.from(temps, (t) => t.toPrecision(9))).size;
-    if (distinct < 3) {
-      useT = false;
-      validity.push({
-        code: "temperature-term-not-fitted",
-        message: `Only ${distinct} distinct temperature(s): at least 3 are needed for the quadratic temperature term, which was not fitted.`,
-        value: distinct,
-        limit: 3,
-      });
-    } else if (n < 6) {
-      throw new InputError(WHERE, "points.length", n, "", "at least 6 when temperatures are given");
-    } else {
-      let s = 0;
-      for (let i = 0; i < n; i++) s += temps[i] as number;
-      tRef = options.referenceTemperature === undefined ? s / n : requirePositive(WHERE, "options.referenceTemperature", options.referenceTemperature, "K");
-    }
+/**
+ * The reference temperature of the temperature term, or null when it is not fitted (no
+ * temperatures, or fewer than 3 distinct ones: noted in `validity`); throws with fewer than 6
+ * points.
+ */
+function temperatureReference(data: LogPoints, withT: number, options: FitSteinmetzOptions, validity: ValidityNote[]): number | null {
+  const { n, temps } = data;
+  if (withT !== n) return null;
+  const distinct = new Set(Array.from(temps, (t) => t.toPrecision(9))).size;
+  if (distinct < 3) {
+    validity.push({
+      code: "temperature-term-not-fitted",
+      message: `Only ${distinct} distinct temperature(s): at least 3 are needed for the quadratic temperature term, which was not fitted.`,
+      value: distinct,
+      limit: 3,
+    });
+    return null;
   }
+  if (n < 6) throw new InputError(WHERE, "points.length", n, "", "at least 6 when temperatures are given");
+  let s = 0;
+  for (let i = 0; i < n; i++) s += temps[i] as number;
+  return options.referenceTemperature === undefined ? s / n : requirePositive(WHERE, "options.referenceTemperature", options.referenceTemperature, "K");
+}
 
-  if (!useT) {
-    const x = solve(n, 3, (i, row) => {
-      row[0] = 1;
-      row[1] = lf[i] as number;
-      row[2] = lb[i] as number;
-    }, lp);
-    const lnk = x[0] as number;
-    const alpha = x[1] as number;
-    const beta = x[2] as number;
-    return finish(n, lp, (i) => lnk + alpha * (lf[i] as number) + beta * (lb[i] as number), { k: Math.exp(lnk), alpha, beta }, validity);
-  }
+/** The plain fit: ln P = ln k + α ln f + β ln B̂ by QR. */
+function fitWithoutTemperature(data: LogPoints, validity: ValidityNote[]): SteinmetzFit {
+  const { n, lf, lb, lp } = data;
+  const x = solve(n, 3, (i, row) => {
+    row[0] = 1;
+    row[1] = lf[i] as number;
+    row[2] = lb[i] as number;
+  }, lp);
+  const lnk = x[0] as number;
+  const alpha = x[1] as number;
+  const beta = x[2] as number;
+  return finish(n, lp, (i) => lnk + alpha * (lf[i] as number) + beta * (lb[i] as number), { k: Math.exp(lnk), alpha, beta }, validity);
+}
 
+/**
+ * The fit with the quadratic temperature factor: a linear start with ln F ≈ γ₁d + γ₂d², then
+ * Gauss–Newton with step halving on the log residuals (at most 100 steps).
+ */
+function fitWithTemperature(data: LogPoints, tRef: number, validity: ValidityNote[]): SteinmetzFit {
+  const { n, lf, lb, lp, temps } = data;
   // temperature term: scale d by 100 K for conditioning
   const scale = 100;
   const d = new Float64Array(n);
@@ -254,6 +241,52 @@ export function fitSteinmetz(points: readonly (SteinmetzDataPoint | WithPeakFlux
     { k: Math.exp(lnk), alpha, beta, temperatureTerm: term },
     validity,
   );
+}
+
+/**
+ * Fits Steinmetz coefficients to loss points by linear least squares in log space:
+ * $$
+ * \ln P_v = \ln k + \alpha \ln f + \beta \ln \hat B \;\bigl[ + \ln F(T) \bigr],
+ * \qquad F(T) = 1 + c_1 (T - T_{\mathrm{ref}}) + c_2 (T - T_{\mathrm{ref}})^2
+ * $$
+ * Without temperatures the problem is linear (Householder QR). With temperatures on every
+ * point (at least 3 distinct), the quadratic factor is fitted as well: a linear start with
+ * $\ln F ≈ \gamma_1 d + \gamma_2 d^2$, then Gauss–Newton on the log residuals.
+ *
+ * Hard domain (throws {@link InputError}): fewer than 3 points (6 with temperatures); a point
+ * with a non-positive or non-finite field; temperatures on some points but not all; all
+ * points at one frequency or one flux density, or frequency and flux collinear in log space
+ * (α and β cannot be separated). Validity (reported in `validity`, not thrown): a frequency or
+ * flux span narrower than a factor of 2, strongly correlated frequency and flux, fewer than
+ * 3 distinct temperatures. Accuracy: recovers the coefficients of exact synthetic data to
+ * ≤ 1e-9 relative (tests); with noisy data, the statistical error of least squares.
+ *
+ * @param points - the data points
+ * @param options - optional reference temperature [K]
+ * @returns the coefficients, residuals and validity notes
+ * @throws {@link InputError} on bad input or data that cannot determine α and β
+ * @see Least squares in log space: common practice for Steinmetz fits; quadratic temperature
+ * factor $c_{t0} - c_{t1}T + c_{t2}T^2$ of ferrite datasheets (common practice).
+ * @example
+ * ```ts
+ * import { fitSteinmetz, steinmetzLoss } from "fluxwright";
+ * // synthetic points from invented coefficients k = 2.5, α = 1.45, β = 2.55
+ * const points = [];
+ * for (const frequency of [25e3, 50e3, 100e3, 200e3])
+ *   for (const fluxDensityPeak of [0.05, 0.1, 0.2])
+ *     points.push({ frequency, fluxDensityPeak, lossDensity: steinmetzLoss({ k: 2.5, alpha: 1.45, beta: 2.55, frequency, fluxDensityPeak }) });
+ * const fit = fitSteinmetz(points);
+ * console.log(fit.alpha.toFixed(6), fit.beta.toFixed(6)); // 1.450000 2.550000
+ * ```
+ * @category Core loss
+ */
+// eslint-disable-next-line @typescript-eslint/no-deprecated -- the former name peakFluxDensity is accepted until 1.0
+export function fitSteinmetz(points: readonly (SteinmetzDataPoint | WithPeakFluxDensity<SteinmetzDataPoint>)[], options: FitSteinmetzOptions = {}): SteinmetzFit {
+  const data = readPoints(points, options);
+  const validity: ValidityNote[] = [];
+  checkSpan(data.lf, data.lb, validity);
+  const tRef = temperatureReference(data, data.withT, options, validity);
+  return tRef === null ? fitWithoutTemperature(data, validity) : fitWithTemperature(data, tRef, validity);
 }
 
 /** Builds the design matrix with `fill` and solves by QR; throws when rank-deficient. */

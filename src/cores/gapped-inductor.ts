@@ -2,6 +2,9 @@
  * Gapped-core inductors: reluctance of the core and of the gap with its fringing, inductance,
  * flux density and saturation current; and the gap that gives a wanted inductance.
  *
+ * The gap model (core reading, fringing factor, notes) is in `gap-model.ts`, the allocation-free
+ * fast path in `gapped-inductor-fast.ts`.
+ *
  * @packageDocumentation
  */
 import {
@@ -16,28 +19,12 @@ import {
 import type { ValidityNote } from "../core/index.js";
 import { brentRoot } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
+import { FRINGING, fringingFactorOf, notesFor, readCore, requireGapFits } from "./gap-model.js";
+import { gappedInductorFast } from "./gapped-inductor-fast.js";
 
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const FIELDS: readonly string[] = Object.freeze(["core", "turns", "gapLength", "fringing", "current"]);
 const INVERSE_FIELDS: readonly string[] = Object.freeze(["core", "turns", "inductance", "fringing"]);
-const CORE_FIELDS: readonly string[] = Object.freeze([
-  "effectiveArea",
-  "effectivePathLength",
-  "relativePermeability",
-  "gapArea",
-  "legShape",
-  "legWidth",
-  "legDepth",
-  "windowHeight",
-  "saturationFluxDensity",
-]);
-const FRINGING = ["none", "mclyman", "muhlethaler"] as const;
-const LEG_SHAPES = ["rectangular", "round"] as const;
-
-/** Largest gap, as a fraction of the leg width or window height, inside the checked range. */
-const CHECKED_GAP_TO_LEG = 0.18;
-const CHECKED_GAP_TO_WINDOW = 0.23;
-const NO_NOTES: readonly ValidityNote[] = Object.freeze([]);
 
 /**
  * The magnetic description of a gapped core. From a {@link CoreShape} `s`: `{ effectiveArea:
@@ -109,201 +96,6 @@ export interface GappedInductor {
   readonly saturationCurrent: number | null;
   /** Notes when the gap leaves the range the fringing model was checked over. */
   readonly validity: readonly ValidityNote[];
-}
-
-/** Checked core fields, shared by the forward and inverse functions. */
-interface CoreData {
-  area: number;
-  length: number;
-  mur: number;
-  gapArea: number;
-  round: boolean;
-  legWidth: number;
-  legDepth: number;
-  window: number;
-  bsat: number;
-}
-
-function readCore(where: string, core: unknown, fringing: (typeof FRINGING)[number]): CoreData {
-  requireObject(where, "core", core);
-  requireKnownKeys(where, "core", core as object, CORE_FIELDS);
-  const c = core as GappedCore;
-  const area = requirePositive(where, "core.effectiveArea", c.effectiveArea, "m²");
-  const length = requirePositive(where, "core.effectivePathLength", c.effectivePathLength, "m");
-  const mur = requirePositive(where, "core.relativePermeability", c.relativePermeability, "");
-  if (!(mur >= 1)) throw new InputError(where, "core.relativePermeability", mur, "", "a finite number ≥ 1");
-  const gapArea = c.gapArea === undefined ? area : requirePositive(where, "core.gapArea", c.gapArea, "m²");
-  const round = c.legShape === undefined ? false : requireOneOf(where, "core.legShape", c.legShape, LEG_SHAPES) === "round";
-  let legWidth = NaN;
-  let legDepth = NaN;
-  let window = NaN;
-  if (fringing === "muhlethaler") {
-    legWidth = requirePositive(where, "core.legWidth", c.legWidth, "m");
-    legDepth = round ? legWidth : requirePositive(where, "core.legDepth", c.legDepth, "m");
-  } else {
-    if (c.legWidth !== undefined) requirePositive(where, "core.legWidth", c.legWidth, "m");
-    if (c.legDepth !== undefined) requirePositive(where, "core.legDepth", c.legDepth, "m");
-  }
-  if (fringing !== "none") window = requirePositive(where, "core.windowHeight", c.windowHeight, "m");
-  else if (c.windowHeight !== undefined) requirePositive(where, "core.windowHeight", c.windowHeight, "m");
-  const bsat = c.saturationFluxDensity === undefined ? NaN : requirePositive(where, "core.saturationFluxDensity", c.saturationFluxDensity, "T");
-  return { area, length, mur, gapArea, round, legWidth, legDepth, window, bsat };
-}
-
-/** One direction's 2-D reluctance ratio σ ≤ 1 of Mühlethaler's gap model (leg width w). */
-function sigma(w: number, g: number, h: number): number {
-  const ideal = w / g;
-  return ideal / (ideal + (2 / Math.PI) * (1 + Math.log((Math.PI * h) / (2 * g))));
-}
-
-/** Fringing factor F ≥ 1 of the gap model (F = 1 with no gap). */
-function fringingFactorOf(fringing: (typeof FRINGING)[number], d: CoreData, g: number): number {
-  return fringingFactorScalar(fringing, d.gapArea, d.legWidth, d.legDepth, d.window, g);
-}
-
-function fringingFactorScalar(
-  fringing: string,
-  gapArea: number,
-  legWidth: number,
-  legDepth: number,
-  window: number,
-  g: number,
-): number {
-  if (g === 0 || fringing === "none") return 1;
-  if (fringing === "mclyman") return 1 + (g / Math.sqrt(gapArea)) * Math.log((2 * window) / g);
-  const h = (window - g) / 2;
-  return 1 / (sigma(legWidth, g, h) * sigma(legDepth, g, h));
-}
-
-/** True when every field of the options is a known one (constant comparisons: a few ns). */
-function optionFieldsKnown(options: object): boolean {
-  for (const key in options) {
-    if (key !== "core" && key !== "turns" && key !== "gapLength" && key !== "fringing" && key !== "current") return false;
-  }
-  return true;
-}
-
-/** True when every field of the core is a known one. */
-function coreFieldsKnown(core: object): boolean {
-  for (const key in core) {
-    if (
-      key !== "effectiveArea" &&
-      key !== "effectivePathLength" &&
-      key !== "relativePermeability" &&
-      key !== "gapArea" &&
-      key !== "legShape" &&
-      key !== "legWidth" &&
-      key !== "legDepth" &&
-      key !== "windowHeight" &&
-      key !== "saturationFluxDensity"
-    ) {
-      return false;
-    }
-  }
-  return true;
-}
-
-/**
- * The fast path of {@link gappedInductor} for ordinary valid input (checked inline, nothing
- * allocated but the result); `null` sends the call to the checked path, which throws or agrees.
- */
-function gappedInductorFast(options: GappedInductorOptions): GappedInductor | null {
-  const core = options.core as GappedCore | null | undefined;
-  if (typeof core !== "object" || core === null) return null;
-  const fringing = options.fringing;
-  const turns = options.turns;
-  const g = options.gapLength;
-  const area = core.effectiveArea;
-  const length = core.effectivePathLength;
-  const mur = core.relativePermeability;
-  const gapAreaIn = core.gapArea;
-  const legShape = core.legShape;
-  const legWidth = core.legWidth;
-  const legDepthIn = core.legDepth;
-  const window = core.windowHeight;
-  const bsat = core.saturationFluxDensity;
-  const current = options.current;
-  if (
-    typeof area !== "number" || !(area > 0 && area < Infinity) ||
-    typeof length !== "number" || !(length > 0 && length < Infinity) ||
-    typeof mur !== "number" || !(mur >= 1 && mur < Infinity) ||
-    typeof turns !== "number" || !(turns >= 1 && turns <= Number.MAX_SAFE_INTEGER) || Math.floor(turns) !== turns ||
-    typeof g !== "number" || !(g >= 0 && g < length)
-  ) {
-    return null;
-  }
-  const gapArea = gapAreaIn === undefined ? area : gapAreaIn;
-  if (typeof gapArea !== "number" || !(gapArea > 0 && gapArea < Infinity)) return null;
-  if (current !== undefined && (typeof current !== "number" || !(current >= 0 && current < Infinity))) return null;
-  if (bsat !== undefined && (typeof bsat !== "number" || !(bsat > 0 && bsat < Infinity))) return null;
-  if (legShape !== undefined && legShape !== "rectangular" && legShape !== "round") return null;
-  let w = NaN;
-  let dep = NaN;
-  if (fringing === "muhlethaler") {
-    if (typeof legWidth !== "number" || !(legWidth > 0 && legWidth < Infinity)) return null;
-    w = legWidth;
-    if (legShape === "round") dep = legWidth;
-    else if (typeof legDepthIn === "number" && legDepthIn > 0 && legDepthIn < Infinity) dep = legDepthIn;
-    else return null;
-  } else if (fringing !== "mclyman" && fringing !== "none") {
-    return null;
-  } else if (legWidth !== undefined || legDepthIn !== undefined) {
-    return null;
-  }
-  if (fringing === "none") {
-    if (window !== undefined) return null;
-  } else if (typeof window !== "number" || !(window > 0 && window < Infinity) || !(g < window / 2)) {
-    return null;
-  }
-  if (!optionFieldsKnown(options) || !coreFieldsKnown(core)) return null;
-  const win = window === undefined ? NaN : window;
-  const coreReluctance = (length - g) / (MU_0 * mur * area);
-  const f = fringingFactorScalar(fringing, gapArea, w, dep, win, g);
-  const gapReluctance = g / (MU_0 * gapArea * f);
-  const total = coreReluctance + gapReluctance;
-  if (fringing !== "none" && g > 0) {
-    const leg = fringing === "muhlethaler" ? Math.min(w, dep) : Math.sqrt(gapArea);
-    if (g > CHECKED_GAP_TO_LEG * leg || g > CHECKED_GAP_TO_WINDOW * win) return null;
-  }
-  return {
-    inductance: (turns * turns) / total,
-    gapReluctance,
-    coreReluctance,
-    fringingFactor: f,
-    peakFluxDensity: current === undefined ? null : (turns * current) / (total * area),
-    saturationCurrent: bsat === undefined ? null : (bsat * area * total) / turns,
-    validity: NO_NOTES,
-  };
-}
-
-function requireGapFits(where: string, name: string, g: number, d: CoreData, fringing: (typeof FRINGING)[number]): void {
-  if (!(g < d.length)) throw new InputError(where, name, g, "m", `a finite number < core.effectivePathLength (${d.length})`);
-  if (fringing !== "none" && !(g < d.window / 2)) {
-    throw new InputError(where, name, g, "m", `a finite number < core.windowHeight / 2 (${d.window / 2}) for the fringing model`);
-  }
-}
-
-function notesFor(fringing: (typeof FRINGING)[number], d: CoreData, g: number): readonly ValidityNote[] {
-  if (fringing === "none" || g === 0) return NO_NOTES;
-  const leg = fringing === "muhlethaler" ? Math.min(d.legWidth, d.legDepth) : Math.sqrt(d.gapArea);
-  const notes: ValidityNote[] = [];
-  if (g > CHECKED_GAP_TO_LEG * leg) {
-    notes.push({
-      code: "gap-beyond-checked-range",
-      message: `gap / leg width ${(g / leg).toFixed(3)} exceeds ${CHECKED_GAP_TO_LEG}, the largest checked against the field solution; fringing may be off by more than stated`,
-      value: g / leg,
-      limit: CHECKED_GAP_TO_LEG,
-    });
-  }
-  if (g > CHECKED_GAP_TO_WINDOW * d.window) {
-    notes.push({
-      code: "gap-large-for-window",
-      message: `gap / window height ${(g / d.window).toFixed(3)} exceeds ${CHECKED_GAP_TO_WINDOW}: the fringing field fills the window`,
-      value: g / d.window,
-      limit: CHECKED_GAP_TO_WINDOW,
-    });
-  }
-  return notes;
 }
 
 /**

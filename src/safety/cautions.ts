@@ -8,11 +8,17 @@ import { DEFER_TO_CODES, InputError, requireFinite, requireInRange, requireKnown
 import type { Caution } from "../core/index.js";
 import { bySeverity } from "../core/caution.js";
 import { voltageCaution } from "../core/extra-low-voltage.js";
-import { ZERO_CELSIUS, formatQuantity } from "../units/index.js";
 // The extra-low-voltage caution is shared with the tank module, so it lives in core; this
 // module re-exports it as part of the safety inventory.
 export { EXTRA_LOW_VOLTAGE_LIMITS, voltageCaution } from "../core/extra-low-voltage.js";
 export type { VoltageCautionOptions } from "../core/extra-low-voltage.js";
+export { storedEnergyCaution } from "./stored-energy-caution.js";
+export type { StoredEnergyCautionOptions } from "./stored-energy-caution.js";
+export { contactBurnThreshold, surfaceTemperatureCaution } from "./surface-temperature-caution.js";
+export type { SurfaceTemperatureCautionOptions } from "./surface-temperature-caution.js";
+import { storedEnergyCaution } from "./stored-energy-caution.js";
+import { surfaceTemperatureCaution } from "./surface-temperature-caution.js";
+import { formatTesla, qty, round } from "./caution-text.js";
 import { exposureCheck } from "./exposure.js";
 import type { ExposurePopulation } from "./exposure.js";
 
@@ -22,224 +28,6 @@ const SAFETY_FIELDS: readonly string[] = Object.freeze(["tankVoltageRms", "suppl
 /** Accepted fields (misspelt ones are rejected, not ignored). */
 const EXPOSURE_CAUTION_FIELDS: readonly string[] = Object.freeze(["fluxDensityRms", "frequency", "population"]);
 
-/** Accepted fields (misspelt ones are rejected, not ignored). */
-const SURFACE_FIELDS: readonly string[] = Object.freeze(["temperature", "contactTime", "location"]);
-
-/** Accepted fields (misspelt ones are rejected, not ignored). */
-const STORED_ENERGY_FIELDS: readonly string[] = Object.freeze(["capacitance", "voltagePeak"]);
-
-/**
- * Options of {@link storedEnergyCaution}.
- *
- * @category Cautions
- */
-export interface StoredEnergyCautionOptions {
-  /** Capacitance [F], > 0. */
-  readonly capacitance: number;
-  /** Peak voltage across it [V] (magnitude used). */
-  readonly voltagePeak: number;
-}
-
-/**
- * Energy above which a charged capacitor is at a hazardous energy level [J]: IEC 60950-1:2005,
- * §2.1.1.5 c) 2) ("exceeds 20 J" at a voltage of 2 V or more).
- */
-const ENERGY_HAZARD_LEVEL = 20;
-/** Voltage from which the 20 J level applies [V] (IEC 60950-1:2005, §2.1.1.5 c) 2)). */
-const ENERGY_HAZARD_MIN_VOLTAGE = 2;
-/** Where the 20 J rule comes from (clause text as quoted in product-safety discussions of the standard). */
-const ENERGY_HAZARD_SOURCE = "IEC 60950-1:2005, §2.1.1.5 c) 2): a capacitor is at a hazardous energy level when its voltage is 2 V or more and ½CU² exceeds 20 J";
-/** Discharge energy limit for accessible parts [J] (IEC 60335-1 §8.1.4). */
-const DISCHARGE_ENERGY_LIMIT = 0.35;
-/** Peak voltage below which a discharge is not considered a shock hazard [V] (IEC 60335-1 §8.1.4). */
-const SHOCK_VOLTAGE_PEAK = 42.4;
-
-/**
- * A caution for the energy stored in a capacitor (or capacitor bank), $E = \tfrac12 C \hat V^2$:
- * - `"stored-energy-hazard"`, `"danger"`: $E > 20$ J at $\hat V \ge 2$ V, an energy hazard
- *   even at low voltage (arcs, burns, welded tools) — the hazardous energy level of
- *   IEC 60950-1:2005 §2.1.1.5 c) 2);
- * - `"stored-energy-shock"`, `"warning"`: $E > 0.35$ J with a peak voltage above 42.4 V, the
- *   discharge-energy limit that IEC 60335-1 §8.1.4 sets for accessible parts (there for peak
- *   voltages above 15 kV; used here as a conservative screen at any shock-capable voltage);
- * - `null` otherwise.
- *
- * Hard domain (throws {@link InputError}): capacitance ≤ 0 or non-finite; non-finite voltage.
- *
- * @param options - capacitance and peak voltage
- * @returns the caution, or `null`
- * @throws {@link InputError} on bad input
- * @see IEC 60335-1:2010, §8.1.4 (45 µC / 350 mJ discharge limits); IEC 60950-1:2005,
- *   §2.1.1.5 c) 2) (hazardous energy level: more than 20 J at 2 V or more).
- * @example
- * ```ts
- * import { storedEnergyCaution } from "fluxwright";
- * console.log(storedEnergyCaution({ capacitance: 10e-6, voltagePeak: 400 })?.severity); // warning
- * ```
- * @category Cautions
- */
-export function storedEnergyCaution(options: StoredEnergyCautionOptions): Caution | null {
-  const where = "storedEnergyCaution";
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "", options, STORED_ENERGY_FIELDS);
-  const c = requirePositive(where, "capacitance", options.capacitance, "F");
-  const v = Math.abs(requireFinite(where, "voltagePeak", options.voltagePeak, "V"));
-  const energy = 0.5 * c * v * v;
-  if (energy > ENERGY_HAZARD_LEVEL && v >= ENERGY_HAZARD_MIN_VOLTAGE) {
-    return {
-      code: "stored-energy-hazard",
-      severity: "danger",
-      message: `The capacitors store ${qty(energy, "J")} at ${qty(v, "V")} peak, above the ${ENERGY_HAZARD_LEVEL} J energy-hazard level: a short circuit can arc, burn and weld, and the charge can remain after switch-off. Fit a bleeder resistor and verify discharge before work. ${DEFER_TO_CODES}`,
-      value: energy,
-      limit: ENERGY_HAZARD_LEVEL,
-      unit: "J",
-      source: ENERGY_HAZARD_SOURCE,
-    };
-  }
-  if (energy > DISCHARGE_ENERGY_LIMIT && v > SHOCK_VOLTAGE_PEAK) {
-    return {
-      code: "stored-energy-shock",
-      severity: "warning",
-      message: `The capacitors store ${qty(energy, "J")} at ${qty(v, "V")} peak, more than the ${DISCHARGE_ENERGY_LIMIT * 1000} mJ allowed to discharge through a person from an accessible part: the charge can give a painful or harmful shock after switch-off. Fit a bleeder resistor. ${DEFER_TO_CODES}`,
-      value: energy,
-      limit: DISCHARGE_ENERGY_LIMIT,
-      unit: "J",
-      source: "IEC 60335-1:2010, §8.1.4 (discharge energy 350 mJ, charge 45 µC)",
-    };
-  }
-  return null;
-}
-
-/**
- * Contact-burn thresholds for bare (uncoated) metal surfaces against contact time, as points
- * (contact time [s], surface temperature [°C]): 1 s: 65 °C (the lower edge of the 65–70 °C
- * band), 1 min: 51 °C, 10 min: 48 °C, 8 h: 43 °C from the burn-threshold table of EN 563:1994
- * (the predecessor of EN ISO 13732-1), as reproduced in DGUV Vorschrift 79 (BG BAU), §12;
- * 10 s: 55 °C read off the standard's figure (unverified, listed in
- * docs/unverified-values.md). Between points the threshold is interpolated linearly in the
- * logarithm of time.
- */
-const BURN_THRESHOLDS: readonly (readonly [number, number])[] = [
-  [1, 65],
-  [10, 55],
-  [60, 51],
-  [600, 48],
-  [28800, 43],
-];
-
-/**
- * The contact-burn threshold of a bare metal surface [K] for a contact time: the surface
- * temperature at which touching it for that long starts to burn the skin.
- *
- * Points for uncoated metals: 1 s: 65 °C (lower edge of the 65–70 °C band), 1 min: 51 °C,
- * 10 min: 48 °C, 8 h: 43 °C (EN 563:1994 table, the predecessor of ISO 13732-1); 10 s:
- * 55 °C read off the standard's figure (unverified); linear in log(time) between them; held
- * at the end values outside 1 s … 8 h. A secondary table attributed to ISO 13732-1 gives the
- * same 51/48/43 °C but 62–65 °C at 1 s for metal: the 1 s value may sit up to 3 °C high
- * against the current standard (see docs/unverified-values.md).
- *
- * Hard domain (throws {@link InputError}): contact time ≤ 0 or non-finite.
- *
- * @param contactTime - duration of skin contact [s], > 0
- * @returns threshold surface temperature [K]
- * @throws {@link InputError} on bad input
- * @see EN 563:1994, Safety of machinery — Temperatures of touchable surfaces, table of burn
- *   thresholds (uncoated metals: 1 s 65–70 °C, 1 min 51 °C, 10 min 48 °C, 8 h 43 °C), as
- *   reproduced in DGUV Vorschrift 79 (BG BAU), §12; its successor ISO 13732-1:2006,
- *   Ergonomics of the thermal environment — Part 1: Hot surfaces (the current reference).
- * @example
- * ```ts
- * import { contactBurnThreshold } from "fluxwright";
- * console.log(contactBurnThreshold(60)); // ≈ 324.15
- * ```
- * @category Cautions
- */
-export function contactBurnThreshold(contactTime: number): number {
-  const t = requirePositive("contactBurnThreshold", "contactTime", contactTime, "s");
-  const first = BURN_THRESHOLDS[0]!;
-  const last = BURN_THRESHOLDS[BURN_THRESHOLDS.length - 1]!;
-  if (t <= first[0]) return first[1] + ZERO_CELSIUS;
-  if (t >= last[0]) return last[1] + ZERO_CELSIUS;
-  for (let i = 1; i < BURN_THRESHOLDS.length; i++) {
-    const [t1, c1] = BURN_THRESHOLDS[i]!;
-    if (t <= t1) {
-      const [t0, c0] = BURN_THRESHOLDS[i - 1]!;
-      const w = Math.log(t / t0) / Math.log(t1 / t0);
-      return c0 + w * (c1 - c0) + ZERO_CELSIUS;
-    }
-  }
-  return last[1] + ZERO_CELSIUS;
-}
-
-/**
- * Options of {@link surfaceTemperatureCaution}.
- *
- * @category Cautions
- */
-export interface SurfaceTemperatureCautionOptions {
-  /** Surface temperature of the part, coil or enclosure [K], > 0. */
-  readonly temperature: number;
-  /** Contact time to assess [s], > 0 (default 1 s: a brief, accidental touch). */
-  readonly contactTime?: number;
-  /** What is hot, for the message (default `"part"`). */
-  readonly location?: string;
-}
-
-/**
- * A caution when a surface is hot enough to burn on contact (ISO 13732-1 thresholds for bare
- * metal, see {@link contactBurnThreshold}):
- * - `"hot-surface-burn"`, `"danger"`: above the 1 s threshold (65 °C): even a brief touch burns;
- * - `"hot-surface-contact"`, `"warning"`: above the threshold for the given `contactTime` only;
- * - `null` otherwise.
- *
- * Hard domain (throws {@link InputError}): temperature or contact time ≤ 0 or non-finite.
- *
- * @param options - temperature, contact time and location
- * @returns the caution, or `null`
- * @throws {@link InputError} on bad input
- * @see EN 563:1994 / ISO 13732-1:2006 burn thresholds, via {@link contactBurnThreshold}.
- * @example
- * ```ts
- * import { surfaceTemperatureCaution, celsius } from "fluxwright";
- * console.log(surfaceTemperatureCaution({ temperature: celsius(200) })?.code); // hot-surface-burn
- * ```
- * @category Cautions
- */
-export function surfaceTemperatureCaution(options: SurfaceTemperatureCautionOptions): Caution | null {
-  const where = "surfaceTemperatureCaution";
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "", options, SURFACE_FIELDS);
-  const temperature = requirePositive(where, "temperature", options.temperature, "K");
-  const contactTime =
-    options.contactTime === undefined ? 1 : requirePositive(where, "contactTime", options.contactTime, "s");
-  const location = optionalText(where, "location", options.location, "part");
-  const brief = contactBurnThreshold(1);
-  const celsiusText = `${round(temperature - ZERO_CELSIUS)} °C`;
-  if (temperature > brief) {
-    return {
-      code: "hot-surface-burn",
-      severity: "danger",
-      message: `The ${location} reaches ${celsiusText}, above the ${round(brief - ZERO_CELSIUS)} °C at which a one-second touch of bare metal burns the skin. Guard it, mark it hot, and handle it with tools or heat-resistant gloves until it has cooled. ${DEFER_TO_CODES}`,
-      value: temperature,
-      limit: brief,
-      unit: "K",
-      source: "EN 563:1994 burn threshold of uncoated metal for 1 s contact, lower edge of 65–70 °C (predecessor of ISO 13732-1:2006)",
-    };
-  }
-  const threshold = contactBurnThreshold(contactTime);
-  if (temperature > threshold) {
-    return {
-      code: "hot-surface-contact",
-      severity: "warning",
-      message: `The ${location} reaches ${celsiusText}, above the ${round(threshold - ZERO_CELSIUS)} °C at which ${round(contactTime)} s of contact with bare metal burns the skin. Keep contact short or guard the surface. ${DEFER_TO_CODES}`,
-      value: temperature,
-      limit: threshold,
-      unit: "K",
-      source: `EN 563:1994 / ISO 13732-1:2006 burn threshold of uncoated metal for ${round(contactTime)} s contact (1 min 51 °C, 10 min 48 °C, 8 h 43 °C from the table; 10 s 55 °C from the figure, unverified)`,
-    };
-  }
-  return null;
-}
 
 /** Upper limit of human hearing used for the audible-frequency caution [Hz] (common practice). */
 const AUDIBLE_LIMIT = 20000;
@@ -448,32 +236,4 @@ export function safetyCautions(options: SafetyCautionsOptions): Caution[] {
     );
   }
   return cautions.filter((c): c is Caution => c !== null).sort(bySeverity);
-}
-
-/** An optional text option: its value, or the fallback when absent; InputError when not a string. */
-function optionalText(where: string, parameter: string, value: unknown, fallback: string): string {
-  if (value === undefined) return fallback;
-  if (typeof value !== "string") throw new InputError(where, parameter, value, "", "a string");
-  return value;
-}
-
-/** Three significant digits, plain notation where sensible. */
-/** A quantity with SI prefix and 3 significant digits, as every report prints them (`30.1 kHz`, `1.48 kV`). */
-function qty(value: number, unit: string): string {
-  return formatQuantity(value, unit, { digits: 3 });
-}
-
-function round(value: number): string {
-  if (value === 0) return "0";
-  const a = Math.abs(value);
-  if (a >= 1e-3 && a < 1e6) return String(Number(value.toPrecision(3)));
-  return value.toPrecision(3);
-}
-
-/** Flux density with a µT/mT/T suffix, for messages. */
-function formatTesla(value: number): string {
-  const a = Math.abs(value);
-  if (a < 1e-3) return `${round(value * 1e6)} µT`;
-  if (a < 1) return `${round(value * 1e3)} mT`;
-  return `${round(value)} T`;
 }

@@ -17,11 +17,23 @@ import {
   voltageCaution,
 } from "../core/index.js";
 import { componentTemperatureRise } from "../cores/index.js";
-import type { AirProperties, ComponentTemperatureRise } from "../cores/index.js";
+import type { ComponentTemperatureRise } from "../cores/index.js";
 import { igseLoss, steinmetzLoss, triangularFluxWaveform } from "../coreloss/index.js";
 import type { SteinmetzCoefficients } from "../materials/index.js";
+import type { TransformerCandidate, TransformerDesign, TransformerDesignOptions, TransformerLosses } from "./design-types.js";
 import { checkConductor, stackResistance } from "./winding-resistance.js";
-import type { Layer, LayerConductor, LayerResistance, WindingResistance } from "./winding-resistance.js";
+import type { Layer } from "./winding-resistance.js";
+
+export type {
+  TransformerCore,
+  TransformerTurnCounts,
+  TransformerThermal,
+  TransformerDesignWinding,
+  TransformerDesignOptions,
+  TransformerCandidate,
+  TransformerLosses,
+  TransformerDesign,
+} from "./design-types.js";
 
 const FIELDS: readonly string[] = Object.freeze([
   "frequency", "voltSeconds", "voltageWaveform", "primaryCurrentRms", "secondaryCurrentRms", "turnsRatio", "turns",
@@ -40,152 +52,6 @@ const THERMAL_FIELDS: readonly string[] = Object.freeze(["thermalResistance", "s
 const WAVEFORMS = ["square", "sinusoidal"] as const;
 /** Largest secondary turn count the search tries. */
 const MAX_SEARCH_TURNS = 1000;
-
-/** The core as the design needs it; a core shape from `fluxwright/cores` (e.g. `potCore(...)`) fits. @category Transformers */
-export interface TransformerCore {
-  /** Effective cross-section $A_e$ [m²], finite and > 0. */
-  readonly effectiveArea: number;
-  /** Effective volume $V_e$ [m³], finite and > 0 (core loss). */
-  readonly effectiveVolume: number;
-  /** Window height: the breadth the layers span [m], finite and > 0. */
-  readonly windowHeight: number;
-  /** Window width: the build available across the window (less bobbin walls) [m], finite and > 0. */
-  readonly windowWidth: number;
-  /** Mean turn length of the winding [m], finite and > 0 (used for every layer). */
-  readonly meanTurnLength: number;
-}
-
-/** Whole turns of the two windings. @category Transformers */
-export interface TransformerTurnCounts {
-  /** Primary turns $N_0$, an integer ≥ 1. */
-  readonly primary: number;
-  /** Secondary turns $N_1$, an integer ≥ 1. */
-  readonly secondary: number;
-}
-
-/**
- * How the heat of {@link transformerDesign} leaves: a thermal resistance alone, or a surface for
- * natural convection and radiation (as {@link componentTemperatureRise}).
- *
- * @category Transformers
- */
-export interface TransformerThermal {
-  /** Thermal resistance surface-to-ambient [K/W], finite and > 0 (instead of the surface model). */
-  readonly thermalResistance?: number;
-  /** Outer surface exchanging heat [m²], finite and > 0 (e.g. a core shape's `surfaceArea`). */
-  readonly surfaceArea?: number;
-  /** Height of the component as it stands (convection length) [m], finite and > 0; with `surfaceArea`. */
-  readonly height?: number;
-  /** Total hemispherical emissivity [-], 0 … 1 (default as {@link componentTemperatureRise}). */
-  readonly emissivity?: number;
-  /** Air property override, as {@link componentTemperatureRise}. */
-  readonly air?: AirProperties;
-}
-
-/** One winding of {@link transformerDesign}. @category Transformers */
-export interface TransformerDesignWinding {
-  /** The conductor of every layer of this winding (round wire, foil or litz). */
-  readonly conductor: LayerConductor;
-}
-
-/** Options of {@link transformerDesign}. @category Transformers */
-export interface TransformerDesignOptions {
-  /** Switching frequency [Hz], finite and > 0. */
-  readonly frequency: number;
-  /** Primary volt-seconds per half-cycle λ [V·s], finite and > 0 (square wave ±V: V/(2f)). */
-  readonly voltSeconds: number;
-  /** `"square"` (default: triangular flux, core loss by iGSE) or `"sinusoidal"` (Steinmetz). */
-  readonly voltageWaveform?: "square" | "sinusoidal";
-  /** Primary RMS current [A], finite and > 0 (treated as sinusoidal at `frequency` for the winding loss). */
-  readonly primaryCurrentRms: number;
-  /** Secondary RMS current [A], finite and > 0 (default: the primary's times the turns ratio $N_0/N_1$). */
-  readonly secondaryCurrentRms?: number;
-  /** Wanted turns ratio $N_0/N_1$, finite and > 0; the secondary turns are whole and the primary's the nearest whole number. */
-  readonly turnsRatio: number;
-  /** Fixed turns (integers ≥ 1) instead of the search; the flux limit then only raises a caution. */
-  readonly turns?: TransformerTurnCounts;
-  /** The core. */
-  readonly core: TransformerCore;
-  /** Steinmetz coefficients of the core material, $p_v = k f^\alpha \hat B^\beta$ [W/m³]. */
-  readonly coreLoss: SteinmetzCoefficients;
-  /** Largest allowed peak flux density [T], finite and > 0. */
-  readonly maxFluxDensity: number;
-  /** The primary winding. */
-  readonly primary: TransformerDesignWinding;
-  /** The secondary winding. */
-  readonly secondary: TransformerDesignWinding;
-  /**
-   * Order of the winding sections across the window, 0 primary, 1 secondary (default `[0, 1]`);
-   * e.g. `[0, 1, 0]` interleaves a split primary around the secondary. Each winding's turns are
-   * shared as evenly as whole turns allow among its sections.
-   */
-  readonly sections?: readonly (0 | 1)[];
-  /** Insulation between layers of one section [m], finite and ≥ 0 (default 0). */
-  readonly layerInsulation?: number;
-  /** Insulation between sections [m], finite and ≥ 0 (default 0). */
-  readonly sectionInsulation?: number;
-  /** Conductor resistivity at the working temperature [Ω·m], finite and > 0. */
-  readonly resistivity: number;
-  /** Ambient temperature [K], finite and > 0. */
-  readonly ambientTemperature: number;
-  /**
-   * How the heat leaves: `{ thermalResistance }` [K/W], or `{ surfaceArea, height, emissivity?, air? }`
-   * for natural convection and radiation, as {@link componentTemperatureRise}.
-   */
-  readonly thermal: TransformerThermal;
-}
-
-/** A candidate turn count the search looked at. @category Transformers */
-export interface TransformerCandidate {
-  /** Primary turns tried. */
-  readonly primaryTurns: number;
-  /** Secondary turns tried. */
-  readonly secondaryTurns: number;
-  /** Peak flux density [T]. */
-  readonly peakFluxDensity: number;
-  /** Total loss [W], `null` when rejected. */
-  readonly totalLoss: number | null;
-  /** Why it was rejected: `"flux-density"` above the limit, `"window"` the layers do not fit; `null` when feasible. */
-  readonly rejected: "flux-density" | "window" | null;
-}
-
-/** Losses by place [W]. @category Transformers */
-export interface TransformerLosses {
-  /** Core loss [W]. */
-  readonly core: number;
-  /** Primary winding loss $I_0^2 R_{\mathrm{ac},0}$ [W]. */
-  readonly primaryCopper: number;
-  /** Secondary winding loss $I_1^2 R_{\mathrm{ac},1}$ [W]. */
-  readonly secondaryCopper: number;
-  /** Sum [W]. */
-  readonly total: number;
-}
-
-/** Result of {@link transformerDesign}. @category Transformers */
-export interface TransformerDesign {
-  /** Chosen (or given) whole turns. */
-  readonly turns: TransformerTurnCounts;
-  /** Peak flux density [T]. */
-  readonly peakFluxDensity: number;
-  /** Losses by place [W]. */
-  readonly losses: TransformerLosses;
-  /** Primary and secondary resistances. */
-  readonly windings: readonly [WindingResistance, WindingResistance];
-  /** The layer stack as wound, with its MMF diagram (per ampere of primary current). */
-  readonly layers: readonly LayerResistance[];
-  /** Build used across the window [m]. */
-  readonly build: number;
-  /** Leakage inductance referred to the primary [H]. */
-  readonly leakageInductance: number;
-  /** Steady temperature of the component's surface and how its heat leaves. */
-  readonly temperature: ComponentTemperatureRise;
-  /** Every candidate of the search, in order (one entry with fixed turns). */
-  readonly candidates: readonly TransformerCandidate[];
-  /** Voltage, saturation and hot-surface cautions. */
-  readonly cautions: readonly Caution[];
-  /** Where the models are stretched. */
-  readonly validity: readonly ValidityNote[];
-}
 
 interface Stack {
   layers: Layer[];
@@ -234,6 +100,166 @@ function buildStack(
     }
   }
   return { layers, spacers: Float64Array.from(gaps), build };
+}
+
+/** The checked specification: every number, the section order and one layer template per winding. */
+interface Specification {
+  readonly frequency: number;
+  readonly lambda: number;
+  readonly waveform: (typeof WAVEFORMS)[number];
+  readonly i0: number;
+  readonly i1Given: number | null;
+  readonly ratio: number;
+  readonly area: number;
+  readonly volume: number;
+  readonly breadth: number;
+  readonly width: number;
+  readonly steinmetz: SteinmetzCoefficients;
+  readonly bMax: number;
+  readonly resistivity: number;
+  readonly ambient: number;
+  readonly layerInsulation: number;
+  readonly sectionInsulation: number;
+  readonly sections: readonly (0 | 1)[];
+  readonly perLayer: [number, number];
+  readonly template: [Layer, Layer];
+  readonly thermal: object;
+}
+
+/** Reads and checks the options (all but `turns`), in the order the errors are reported. */
+function readSpecification(where: string, options: TransformerDesignOptions): Specification {
+  requireObject(where, "options", options);
+  requireKnownKeys(where, "", options, FIELDS);
+  const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
+  const lambda = requirePositive(where, "voltSeconds", options.voltSeconds, "V·s");
+  const waveform = options.voltageWaveform === undefined ? "square" : requireOneOf(where, "voltageWaveform", options.voltageWaveform, WAVEFORMS);
+  const i0 = requirePositive(where, "primaryCurrentRms", options.primaryCurrentRms, "A");
+  const i1Given = options.secondaryCurrentRms === undefined ? null : requirePositive(where, "secondaryCurrentRms", options.secondaryCurrentRms, "A");
+  const ratio = requirePositive(where, "turnsRatio", options.turnsRatio, "");
+  const core = requireObject(where, "core", options.core);
+  requireKnownKeys(where, "core", core, CORE_FIELDS);
+  const area = requirePositive(where, "core.effectiveArea", core.effectiveArea, "m²");
+  const volume = requirePositive(where, "core.effectiveVolume", core.effectiveVolume, "m³");
+  const breadth = requirePositive(where, "core.windowHeight", core.windowHeight, "m");
+  const width = requirePositive(where, "core.windowWidth", core.windowWidth, "m");
+  const mlt = requirePositive(where, "core.meanTurnLength", core.meanTurnLength, "m");
+  const sc = requireObject(where, "coreLoss", options.coreLoss);
+  requireKnownKeys(where, "coreLoss", sc, STEINMETZ_FIELDS);
+  const steinmetz: SteinmetzCoefficients = {
+    k: requirePositive(where, "coreLoss.k", sc.k, "W/m³"),
+    alpha: requirePositive(where, "coreLoss.alpha", sc.alpha, ""),
+    beta: requirePositive(where, "coreLoss.beta", sc.beta, ""),
+  };
+  const bMax = requirePositive(where, "maxFluxDensity", options.maxFluxDensity, "T");
+  const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
+  const ambient = requirePositive(where, "ambientTemperature", options.ambientTemperature, "K");
+  const layerInsulation = options.layerInsulation === undefined ? 0 : requireNonNegative(where, "layerInsulation", options.layerInsulation, "m");
+  const sectionInsulation = options.sectionInsulation === undefined ? 0 : requireNonNegative(where, "sectionInsulation", options.sectionInsulation, "m");
+  let sections: (0 | 1)[] = [0, 1];
+  if (options.sections !== undefined) {
+    const list = requireArrayLike(where, "sections", options.sections, "", 2);
+    sections = [];
+    for (let i = 0; i < list.length; i++) {
+      const s = requireInteger(where, `sections[${i}]`, list[i], 0);
+      if (s > 1) throw new InputError(where, `sections[${i}]`, s, "", "0 (primary) or 1 (secondary)");
+      sections.push(s as 0 | 1);
+    }
+    if (!sections.includes(0) || !sections.includes(1)) throw new InputError(where, "sections", list.length, "", "sections of both windings");
+  }
+  const templates: Layer[] = [];
+  const perLayer: [number, number] = [1, 1];
+  for (const [w, name] of [[0, "primary"], [1, "secondary"]] as const) {
+    const winding = requireObject(where, name, options[name]);
+    requireKnownKeys(where, name, winding, WINDING_FIELDS);
+    const layer = checkConductor(where, `${name}.conductor`, `${name}.conductor`, winding.conductor, 1, w, breadth, mlt);
+    templates.push(layer);
+    perLayer[w] = layer.kind === "foil" ? 1 : Math.max(1, Math.floor((breadth * (1 + 1e-12)) / layer.build));
+  }
+  const template = templates as [Layer, Layer];
+  const thermal = requireObject(where, "thermal", options.thermal);
+  requireKnownKeys(where, "thermal", thermal, THERMAL_FIELDS);
+  return {
+    frequency, lambda, waveform, i0, i1Given, ratio, area, volume, breadth, width, steinmetz, bMax, resistivity, ambient,
+    layerInsulation, sectionInsulation, sections, perLayer, template, thermal,
+  };
+}
+
+/** One wound candidate: its resistances and leakage, peak flux density and losses by place. */
+interface Evaluation {
+  readonly r: ReturnType<typeof stackResistance>;
+  readonly b: number;
+  readonly losses: TransformerLosses;
+}
+
+/** The chosen turns, their stack and its evaluation. */
+interface Choice {
+  readonly n0: number;
+  readonly n1: number;
+  readonly stack: Stack;
+  readonly e: Evaluation;
+}
+
+/** Resistances, flux density and losses of `n0`:`n1` turns wound as `stack`. */
+function evaluate(spec: Specification, n0: number, n1: number, stack: Stack): Evaluation {
+  const { frequency, resistivity, breadth, lambda, area, i0, i1Given, waveform, volume, steinmetz } = spec;
+  const coreLossAt = (b: number): number => {
+    if (waveform === "sinusoidal") return volume * steinmetzLoss({ ...steinmetz, frequency, peakFluxDensity: b });
+    const flux = triangularFluxWaveform({ peakFluxDensity: b, frequency });
+    return volume * igseLoss({ ...steinmetz, period: flux.period, flux });
+  };
+  const r = stackResistance({ frequency, resistivity, breadth }, stack.layers, stack.spacers, [n0, n1]);
+  const b = lambda / (2 * n0 * area);
+  const i1 = i1Given ?? (i0 * n0) / n1;
+  const core = coreLossAt(b);
+  const p0 = i0 * i0 * r.windings[0].acResistance;
+  const p1 = i1 * i1 * r.windings[1].acResistance;
+  return { r, b, losses: { core, primaryCopper: p0, secondaryCopper: p1, total: core + p0 + p1 } };
+}
+
+/** The turns the caller fixed, wound and evaluated (one feasible candidate). */
+function fixedTurns(where: string, turns: unknown, spec: Specification, candidates: TransformerCandidate[]): Choice {
+  const { sections, perLayer, template, layerInsulation, sectionInsulation } = spec;
+  const t = requireObject(where, "turns", turns);
+  requireKnownKeys(where, "turns", t, TURNS_FIELDS);
+  const n0 = requireInteger(where, "turns.primary", t.primary, 1);
+  const n1 = requireInteger(where, "turns.secondary", t.secondary, 1);
+  const stack = buildStack([n0, n1], sections, perLayer, template, layerInsulation, sectionInsulation);
+  if (stack === null) throw new InputError(where, "sections", sections.length, "", `no more sections of a winding than its turns (${n0} primary, ${n1} secondary)`);
+  const e = evaluate(spec, n0, n1, stack);
+  candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: e.b, totalLoss: e.losses.total, rejected: null });
+  return { n0, n1, stack, e };
+}
+
+/**
+ * Secondary turns 1, 2, … with the primary at the ratio: candidates over the flux limit are
+ * rejected, the search stops at the first that does not fit the window, the least loss wins.
+ */
+function searchTurns(where: string, spec: Specification, candidates: TransformerCandidate[]): Choice {
+  const { ratio, lambda, area, width, bMax, sections, perLayer, template, layerInsulation, sectionInsulation } = spec;
+  let best: Choice | null = null;
+  for (let n1 = 1; n1 <= MAX_SEARCH_TURNS; n1++) {
+    const n0 = Math.max(1, Math.round(ratio * n1));
+    const b = lambda / (2 * n0 * area);
+    const stack = buildStack([n0, n1], sections, perLayer, template, layerInsulation, sectionInsulation);
+    if (stack === null) continue;
+    if (stack.build > width * (1 + 1e-12)) {
+      candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: b, totalLoss: null, rejected: "window" });
+      break;
+    }
+    if (b > bMax * (1 + 1e-12)) {
+      candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: b, totalLoss: null, rejected: "flux-density" });
+      continue;
+    }
+    const e = evaluate(spec, n0, n1, stack);
+    candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: b, totalLoss: e.losses.total, rejected: null });
+    if (best === null || e.losses.total < best.e.losses.total) best = { n0, n1, stack, e };
+  }
+  if (best === null) {
+    const last = candidates[candidates.length - 1];
+    const why = last === undefined ? "no candidate" : `at ${last.primaryTurns}:${last.secondaryTurns} turns the peak flux density is ${last.peakFluxDensity.toPrecision(3)} T and the layers ${last.rejected === "window" ? "do not fit the window width" : "fit"}`;
+    throw new InputError(where, "core", null, "", `a core and conductors that meet maxFluxDensity with windings that fit the window (${why})`);
+  }
+  return best;
 }
 
 /**
@@ -288,112 +314,14 @@ function buildStack(
  */
 export function transformerDesign(options: TransformerDesignOptions): TransformerDesign {
   const where = "transformerDesign";
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "", options, FIELDS);
-  const frequency = requirePositive(where, "frequency", options.frequency, "Hz");
-  const lambda = requirePositive(where, "voltSeconds", options.voltSeconds, "V·s");
-  const waveform = options.voltageWaveform === undefined ? "square" : requireOneOf(where, "voltageWaveform", options.voltageWaveform, WAVEFORMS);
-  const i0 = requirePositive(where, "primaryCurrentRms", options.primaryCurrentRms, "A");
-  const i1Given = options.secondaryCurrentRms === undefined ? null : requirePositive(where, "secondaryCurrentRms", options.secondaryCurrentRms, "A");
-  const ratio = requirePositive(where, "turnsRatio", options.turnsRatio, "");
-  const core = requireObject(where, "core", options.core);
-  requireKnownKeys(where, "core", core, CORE_FIELDS);
-  const area = requirePositive(where, "core.effectiveArea", core.effectiveArea, "m²");
-  const volume = requirePositive(where, "core.effectiveVolume", core.effectiveVolume, "m³");
-  const breadth = requirePositive(where, "core.windowHeight", core.windowHeight, "m");
-  const width = requirePositive(where, "core.windowWidth", core.windowWidth, "m");
-  const mlt = requirePositive(where, "core.meanTurnLength", core.meanTurnLength, "m");
-  const sc = requireObject(where, "coreLoss", options.coreLoss);
-  requireKnownKeys(where, "coreLoss", sc, STEINMETZ_FIELDS);
-  const steinmetz: SteinmetzCoefficients = {
-    k: requirePositive(where, "coreLoss.k", sc.k, "W/m³"),
-    alpha: requirePositive(where, "coreLoss.alpha", sc.alpha, ""),
-    beta: requirePositive(where, "coreLoss.beta", sc.beta, ""),
-  };
-  const bMax = requirePositive(where, "maxFluxDensity", options.maxFluxDensity, "T");
-  const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
-  const ambient = requirePositive(where, "ambientTemperature", options.ambientTemperature, "K");
-  const layerInsulation = options.layerInsulation === undefined ? 0 : requireNonNegative(where, "layerInsulation", options.layerInsulation, "m");
-  const sectionInsulation = options.sectionInsulation === undefined ? 0 : requireNonNegative(where, "sectionInsulation", options.sectionInsulation, "m");
-  let sections: (0 | 1)[] = [0, 1];
-  if (options.sections !== undefined) {
-    const list = requireArrayLike(where, "sections", options.sections, "", 2);
-    sections = [];
-    for (let i = 0; i < list.length; i++) {
-      const s = requireInteger(where, `sections[${i}]`, list[i], 0);
-      if (s > 1) throw new InputError(where, `sections[${i}]`, s, "", "0 (primary) or 1 (secondary)");
-      sections.push(s as 0 | 1);
-    }
-    if (!sections.includes(0) || !sections.includes(1)) throw new InputError(where, "sections", list.length, "", "sections of both windings");
-  }
-  const templates: Layer[] = [];
-  const perLayer: [number, number] = [1, 1];
-  for (const [w, name] of [[0, "primary"], [1, "secondary"]] as const) {
-    const winding = requireObject(where, name, options[name]);
-    requireKnownKeys(where, name, winding, WINDING_FIELDS);
-    const layer = checkConductor(where, `${name}.conductor`, `${name}.conductor`, winding.conductor, 1, w, breadth, mlt);
-    templates.push(layer);
-    perLayer[w] = layer.kind === "foil" ? 1 : Math.max(1, Math.floor((breadth * (1 + 1e-12)) / layer.build));
-  }
-  const template = templates as [Layer, Layer];
-  const thermal = requireObject(where, "thermal", options.thermal);
-  requireKnownKeys(where, "thermal", thermal, THERMAL_FIELDS);
-
-  const coreLossAt = (b: number): number => {
-    if (waveform === "sinusoidal") return volume * steinmetzLoss({ ...steinmetz, frequency, peakFluxDensity: b });
-    const flux = triangularFluxWaveform({ peakFluxDensity: b, frequency });
-    return volume * igseLoss({ ...steinmetz, period: flux.period, flux });
-  };
-  const evaluate = (n0: number, n1: number, stack: Stack) => {
-    const r = stackResistance({ frequency, resistivity, breadth }, stack.layers, stack.spacers, [n0, n1]);
-    const b = lambda / (2 * n0 * area);
-    const i1 = i1Given ?? (i0 * n0) / n1;
-    const core = coreLossAt(b);
-    const p0 = i0 * i0 * r.windings[0].acResistance;
-    const p1 = i1 * i1 * r.windings[1].acResistance;
-    return { r, b, losses: { core, primaryCopper: p0, secondaryCopper: p1, total: core + p0 + p1 } };
-  };
-
+  const spec = readSpecification(where, options);
+  const { frequency, lambda, waveform, bMax, width, ambient, thermal } = spec;
   const candidates: TransformerCandidate[] = [];
-  let best: { n0: number; n1: number; stack: Stack; e: ReturnType<typeof evaluate> } | null = null;
-  if (options.turns !== undefined) {
-    const t = requireObject(where, "turns", options.turns);
-    requireKnownKeys(where, "turns", t, TURNS_FIELDS);
-    const n0 = requireInteger(where, "turns.primary", t.primary, 1);
-    const n1 = requireInteger(where, "turns.secondary", t.secondary, 1);
-    const stack = buildStack([n0, n1], sections, perLayer, template, layerInsulation, sectionInsulation);
-    if (stack === null) throw new InputError(where, "sections", sections.length, "", `no more sections of a winding than its turns (${n0} primary, ${n1} secondary)`);
-    const e = evaluate(n0, n1, stack);
-    candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: e.b, totalLoss: e.losses.total, rejected: null });
-    best = { n0, n1, stack, e };
-  } else {
-    for (let n1 = 1; n1 <= MAX_SEARCH_TURNS; n1++) {
-      const n0 = Math.max(1, Math.round(ratio * n1));
-      const b = lambda / (2 * n0 * area);
-      const stack = buildStack([n0, n1], sections, perLayer, template, layerInsulation, sectionInsulation);
-      if (stack === null) continue;
-      if (stack.build > width * (1 + 1e-12)) {
-        candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: b, totalLoss: null, rejected: "window" });
-        break;
-      }
-      if (b > bMax * (1 + 1e-12)) {
-        candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: b, totalLoss: null, rejected: "flux-density" });
-        continue;
-      }
-      const e = evaluate(n0, n1, stack);
-      candidates.push({ primaryTurns: n0, secondaryTurns: n1, peakFluxDensity: b, totalLoss: e.losses.total, rejected: null });
-      if (best === null || e.losses.total < best.e.losses.total) best = { n0, n1, stack, e };
-    }
-    if (best === null) {
-      const last = candidates[candidates.length - 1];
-      const why = last === undefined ? "no candidate" : `at ${last.primaryTurns}:${last.secondaryTurns} turns the peak flux density is ${last.peakFluxDensity.toPrecision(3)} T and the layers ${last.rejected === "window" ? "do not fit the window width" : "fit"}`;
-      throw new InputError(where, "core", null, "", `a core and conductors that meet maxFluxDensity with windings that fit the window (${why})`);
-    }
-  }
+  const best = options.turns !== undefined ? fixedTurns(where, options.turns, spec, candidates) : searchTurns(where, spec, candidates);
   const { n0, n1, stack, e } = best;
   let temperature: ComponentTemperatureRise;
   try {
-    temperature = componentTemperatureRise({ ...(thermal as object), power: e.losses.total, ambientTemperature: ambient });
+    temperature = componentTemperatureRise({ ...thermal, power: e.losses.total, ambientTemperature: ambient });
   } catch (error) {
     if (error instanceof InputError) throw new InputError(where, `thermal.${error.parameter}`, error.value, error.unit, error.expected);
     throw error;
