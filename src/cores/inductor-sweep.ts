@@ -99,7 +99,7 @@ export interface InductorTurnsSweep {
  * @param options - {@link InductorTurnsSweepOptions}
  * @returns {@link InductorTurnsSweep}
  * @throws {@link InputError} on bad input
- * @see {@link inductorDesign}; R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), ch. 15 "Transformer Design", §15.1 (the core-loss / copper-loss optimum; chapter opening read in a public copy, scribd.com/document/348107311).
+ * @see {@link inductorDesign}; R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), ch. 15 "Transformer Design", §15.1 (the core-loss / copper-loss optimum).
  * @example
  * ```ts
  * import { eCore, inductorTurnsSweep, inventedExampleFerrite, celsius } from "fluxwright";

@@ -40,7 +40,7 @@ const CURIE_CARBON_STEEL = "Curie temperature 768 °C (A2 of iron): Atlas Steels
 const RAYTEK_EMISSIVITY = "Raytek, 'Emissivity Table for Metals' (raytek.com, IR Education; columns 1.0 µm, 1.6 µm, 8–14 µm)";
 const RAYTEK_MI3_EMISSIVITY = "Raytek MI3 manual, appendix emissivity table for metals (3.9 µm, 5 µm, 8–14 µm)";
 const OMEGA_EMISSIVITY = "Omega OS100 series manual, section 6 emissivity table";
-const FLIR_EMISSIVITY_22 = "FLIR camera manual emissivity Table 22.1 (total spectrum 'T' rows; the table of the T10xx manual's Table 39.1), as posted at scribd.com/document/430717570";
+const FLIR_EMISSIVITY_22 = "FLIR camera manual emissivity Table 22.1 (total spectrum 'T' rows; the table of the T10xx manual's Table 39.1)";
 const IDEAL_EMISSIVITY = "Ideal Industries HeatSeeker 160 manual, Appendix A1 emissivity look-up tables";
 /** Emissivity of the stainless steels: endpoints read in two instrument makers' tables. */
 const STAINLESS_EMISSIVITY = `0.1–0.8 for stainless steel in the 8–14 µm column of ${RAYTEK_EMISSIVITY}; 0.85 for stainless steel oxidised at 800 °C in ${IDEAL_EMISSIVITY}; typical 0.4 a choice of ours within that range`;

@@ -169,7 +169,7 @@ const SERIES_KEYS = [
  * @returns the operating point and the source side (V, A, W, Hz)
  * @throws {@link InputError} for values outside the hard domain or an impossible target power
  * @see R. W. Erickson and D. Maksimović, Fundamentals of Power Electronics, 2nd ed., Kluwer 2001,
- *   Ch. 19 "Resonant Conversion", Fig. 19.1 (tank tuned to the fundamental, sinusoidal waveforms; chapter opening read at studylib.net/doc/18077466); the source side is Ohm's law.
+ *   Ch. 19 "Resonant Conversion", Fig. 19.1 (tank tuned to the fundamental, sinusoidal waveforms); the source side is Ohm's law.
  * @example
  * ```ts
  * import { seriesInverterWithSource } from "fluxwright";

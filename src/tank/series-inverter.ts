@@ -203,7 +203,7 @@ export interface FrequencyForPowerOptions {
  * Validity and accuracy: as {@link seriesInverter} (closed form; {@link seriesInverter} at the
  * returned frequency gives back the target power to ≤ 1e-9 relative).
  * @see R. W. Erickson and D. Maksimović, Fundamentals of Power Electronics, 2nd ed., Kluwer 2001,
- * Ch. 19 "Resonant Conversion" (chapter opening read at studylib.net/doc/18077466).
+ * Ch. 19 "Resonant Conversion".
  * @example
  * ```ts
  * import { frequencyForPower, seriesInverter } from "fluxwright";

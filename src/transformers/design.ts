@@ -296,7 +296,7 @@ function searchTurns(where: string, spec: Specification, candidates: Transformer
  * @param options - {@link TransformerDesignOptions}
  * @returns {@link TransformerDesign}
  * @throws {@link InputError} on bad input or when no candidate meets the specification
- * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), ch. 15 "Transformer Design", §15.1 (the flux density that minimises core plus copper loss; chapter opening read in a public copy, scribd.com/document/348107311).
+ * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), ch. 15 "Transformer Design", §15.1 (the flux density that minimises core plus copper loss).
  * @see P. L. Dowell, Proc. IEE 113(8), 1387–1394 (1966) (winding loss per layer).
  * @example
  * ```ts

@@ -162,7 +162,7 @@ function checkSteinmetz(where: string, value: unknown): SteinmetzCoefficients {
  * @param options - {@link TransformerFluxOptimumOptions}
  * @returns {@link TransformerFluxOptimum}: flux density [T], turns, losses [W]
  * @throws {@link InputError} on bad input
- * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §15.1 "Transformer design: basic constraints" (core loss, copper loss and the loss-minimising flux density; read in a public copy of ch. 15, scribd.com/document/348107311).
+ * @see R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed. (2001), §15.1 "Transformer design: basic constraints" (core loss, copper loss and the loss-minimising flux density).
  * @see W. G. Hurley, W. H. Wölfle, Transformers and Inductors for Power Electronics (Wiley, 2013), ch. 4 (the same optimum, core loss = (2/β) × copper loss; chapter from memory).
  * @example
  * ```ts
