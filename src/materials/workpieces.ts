@@ -2,6 +2,9 @@
  * Workpiece metals: carbon steels, stainless steels, an aluminium alloy, brass and a
  * titanium alloy (copper workpieces use {@link copper}).
  *
+ * Size: data tables, one block per metal with the source of every row beside it; splitting them
+ * would separate values that are read and checked together.
+ *
  * @packageDocumentation
  */
 import { ANNEALED_COPPER_RESISTIVITY, ZERO_CELSIUS } from "../units/index.js";
