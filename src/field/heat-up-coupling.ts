@@ -11,16 +11,13 @@ import type { ConductiveMaterial } from "../materials/index.js";
 import { MU_0 } from "../units/index.js";
 import type { PartGenerationRequest } from "./conduction-types.js";
 import { bodyLosses, fieldAtProbe, impedanceChange, probe } from "./field-evaluation.js";
+import { MAX_DENSITY, MAX_NODES } from "./solve-axisymmetric-field.js";
 import { solveOnce } from "./solver.js";
 import type { SolverBody, SolverProblem, SolverSolution } from "./solver-types.js";
 
 /** Gauss–Legendre points on [0, 1]: 3 across r, 2 along z (where a cell's field strength is sampled). */
 const GAUSS_3 = [0.5 - Math.sqrt(0.15), 0.5, 0.5 + Math.sqrt(0.15)];
 const GAUSS_2 = [0.5 - 0.5 / Math.sqrt(3), 0.5 + 0.5 / Math.sqrt(3)];
-/** Densest mesh the starting refinement goes to. */
-const MAX_DENSITY = 4;
-/** Largest field mesh the starting refinement goes to (lattice nodes; the next is predicted at about twice). */
-const MAX_NODES = 300_000;
 /** Finite-element solves per field solution at most (permeability iterations; the first solution gets three times as many). */
 const PERMEABILITY_ITERATIONS = 2;
 /** Stop the permeability iteration when the field-weighted relative change is below this. */

@@ -44,10 +44,10 @@ export type {
 /** The fixed point of the saturating regions stops at a residual of accuracy / this. */
 const SATURATION_TOLERANCE_DIVISOR = 10;
 const POINT_KEYS = ["r", "z"] as const;
-/** Densest mesh tried (element sizes ∝ 1/density). */
-const MAX_DENSITY = 4;
+/** Densest mesh tried (element sizes ∝ 1/density); the heat-up's starting refinement uses it too. */
+export const MAX_DENSITY = 4;
 /** Largest mesh the refinement goes to (lattice nodes; a mesh about twice the last one is predicted). */
-const MAX_NODES = 300_000;
+export const MAX_NODES = 300_000;
 /** Ratio of element sizes between successive meshes. */
 const REFINE = Math.SQRT2;
 

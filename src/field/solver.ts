@@ -9,6 +9,7 @@
  */
 import { factorComplexSymmetric } from "../special/index.js";
 import type { ComplexSymmetricFactor } from "../special/index.js";
+import { factorComplexDense, solveComplexFactored } from "../special/internal.js";
 import { assembleSystem } from "./assembly.js";
 import type { AssembledSystem, Discretisation, SolverProblem, SolverSolution } from "./solver-types.js";
 
@@ -285,86 +286,15 @@ interface DenseComplexLu {
   solve(br: Float64Array, bi: Float64Array): void;
 }
 
-/** Dense complex LU with partial pivoting (small Schur systems). */
+/** Dense complex LU with partial pivoting (small Schur systems), from the shared toolkit. */
 function complexLu(mr: Float64Array, mi: Float64Array, n: number): DenseComplexLu {
   const ar = Float64Array.from(mr);
   const ai = Float64Array.from(mi);
   const piv = new Int32Array(n);
-  for (let k = 0; k < n; k++) {
-    let p = k;
-    let best = -1;
-    for (let i = k; i < n; i++) {
-      const m = Math.hypot(ar[i * n + k]!, ai[i * n + k]!);
-      if (m > best) {
-        best = m;
-        p = i;
-      }
-    }
-    piv[k] = p;
-    if (p !== k) {
-      for (let j = 0; j < n; j++) {
-        const tr = ar[k * n + j]!;
-        const ti = ai[k * n + j]!;
-        ar[k * n + j] = ar[p * n + j]!;
-        ai[k * n + j] = ai[p * n + j]!;
-        ar[p * n + j] = tr;
-        ai[p * n + j] = ti;
-      }
-    }
-    const dr = ar[k * n + k]!;
-    const di = ai[k * n + k]!;
-    const den = dr * dr + di * di;
-    for (let i = k + 1; i < n; i++) {
-      const xr = ar[i * n + k]!;
-      const xi = ai[i * n + k]!;
-      const lr = (xr * dr + xi * di) / den;
-      const li = (xi * dr - xr * di) / den;
-      ar[i * n + k] = lr;
-      ai[i * n + k] = li;
-      for (let j = k + 1; j < n; j++) {
-        const ur = ar[k * n + j]!;
-        const ui = ai[k * n + j]!;
-        ar[i * n + j] = ar[i * n + j]! - (lr * ur - li * ui);
-        ai[i * n + j] = ai[i * n + j]! - (lr * ui + li * ur);
-      }
-    }
-  }
+  factorComplexDense(n, ar, ai, piv);
   return {
-    solve(br: Float64Array, bi: Float64Array): void {
-      for (let k = 0; k < n; k++) {
-        const p = piv[k]!;
-        if (p !== k) {
-          const tr = br[k]!;
-          const ti = bi[k]!;
-          br[k] = br[p]!;
-          bi[k] = bi[p]!;
-          br[p] = tr;
-          bi[p] = ti;
-        }
-      }
-      for (let i = 0; i < n; i++) {
-        let sr = br[i]!;
-        let si = bi[i]!;
-        for (let j = 0; j < i; j++) {
-          sr -= ar[i * n + j]! * br[j]! - ai[i * n + j]! * bi[j]!;
-          si -= ar[i * n + j]! * bi[j]! + ai[i * n + j]! * br[j]!;
-        }
-        br[i] = sr;
-        bi[i] = si;
-      }
-      for (let i = n - 1; i >= 0; i--) {
-        let sr = br[i]!;
-        let si = bi[i]!;
-        for (let j = i + 1; j < n; j++) {
-          sr -= ar[i * n + j]! * br[j]! - ai[i * n + j]! * bi[j]!;
-          si -= ar[i * n + j]! * bi[j]! + ai[i * n + j]! * br[j]!;
-        }
-        const dr = ar[i * n + i]!;
-        const di = ai[i * n + i]!;
-        const den = dr * dr + di * di;
-        br[i] = (sr * dr + si * di) / den;
-        bi[i] = (si * dr - sr * di) / den;
-      }
+    solve: (br, bi) => {
+      solveComplexFactored(n, ar, ai, piv, br, bi);
     },
   };
 }

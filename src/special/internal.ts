@@ -31,6 +31,7 @@ export {
   polynomialRootBound,
 } from "./polynomial.js";
 export { factorDense, solveFactored } from "./dense-solve.js";
+export { factorComplexDense, solveComplexFactored } from "./complex-dense-lu.js";
 export { brentBracketed } from "./brent-root.js";
 export { besselIKRatiosComplex } from "./bessel-orders.js";
 export { besselIKScaledInto, IK_I0R, IK_I0I, IK_I1R, IK_I1I, IK_K0R, IK_K0I, IK_K1R, IK_K1I } from "./bessel-core.js";
