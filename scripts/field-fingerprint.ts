@@ -11,10 +11,8 @@
  *   npx tsx scripts/field-fingerprint.ts [distDir]            print the fingerprints
  *   npx tsx scripts/field-fingerprint.ts distDir otherDistDir  compare two builds, case by case
  */
-import { createHash } from "node:crypto";
 import { readFileSync } from "node:fs";
-import { resolve } from "node:path";
-import { pathToFileURL } from "node:url";
+import { fingerprintBuilds } from "./fingerprint-compare.js";
 
 type Lib = typeof import("../src/index.js");
 type FieldOptions = Parameters<Lib["solveAxisymmetricField"]>[0];
@@ -227,31 +225,4 @@ function cases(lib: Lib): Map<string, string> {
   return out;
 }
 
-async function load(dir: string): Promise<Lib> {
-  return (await import(pathToFileURL(resolve(dir, "index.js")).href)) as Lib;
-}
-
-const [first = new URL("../dist", import.meta.url).pathname, second] = process.argv.slice(2);
-const a = cases(await load(first));
-const b = second === undefined ? null : cases(await load(second));
-let differ = 0;
-for (const [name, text] of a) {
-  const hash = createHash("sha256").update(text).digest("hex").slice(0, 16);
-  if (b === null) {
-    console.log(`${hash}  ${name} (${text.length} characters)`);
-    continue;
-  }
-  const other = b.get(name) ?? "";
-  if (other === text) {
-    console.log(`same       ${name} (${hash}, ${text.length} characters)`);
-  } else {
-    differ++;
-    let i = 0;
-    while (i < text.length && text[i] === other[i]) i++;
-    console.log(`DIFFERENT  ${name}: first difference at character ${i}: …${text.slice(Math.max(0, i - 60), i + 40)}… vs …${other.slice(Math.max(0, i - 60), i + 40)}…`);
-  }
-}
-if (b !== null) {
-  console.log(differ === 0 ? "all cases bit-identical" : `${differ} case(s) differ`);
-  if (differ > 0) process.exitCode = 1;
-}
+await fingerprintBuilds(cases);
