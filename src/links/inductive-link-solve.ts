@@ -264,12 +264,11 @@ function linkCautions(capacitors: readonly LinkCapacitor[], coilVoltage: number)
   }
   // the limit is checked here first so a safe link builds no message text and shares one empty list
   if (!(worst > ELV_AC_RMS || coilVoltage > ELV_AC_RMS)) return NO_CAUTIONS;
-  const list: Caution[] = [];
+  // the list built at its final length (a push onto an empty array allocates room for 17)
   const caution = worst > ELV_AC_RMS ? extraLowVoltageCaution(worst, "ac", capacitorLocation(worstName)) : null;
-  if (caution !== null) list.push(caution);
   const coilCaution = coilVoltage > ELV_AC_RMS ? extraLowVoltageCaution(coilVoltage, "ac", "primary coil") : null;
-  if (coilCaution !== null) list.push(coilCaution);
-  return list;
+  if (caution === null) return coilCaution === null ? [] : [coilCaution];
+  return coilCaution === null ? [caution] : [caution, coilCaution];
 }
 
 /**
