@@ -53,7 +53,7 @@ const z = table(N, () => logUniform(1e-4, 10));
 const delta = table(N, () => logUniform(1e-3, 1e2));
 const layers = table(N, () => 1 + Math.floor(random() * 12));
 const freq = table(N, () => logUniform(1e2, 1e7));
-const solenoids = Array.from({ length: N }, (_, i) => ({ radius: r[i]!, length: len[i]!, turns: turns[i]! }));
+export const solenoids = Array.from({ length: N }, (_, i) => ({ radius: r[i]!, length: len[i]!, turns: turns[i]! }));
 const loops = Array.from({ length: N }, (_, i) => ({ radius1: r[i]!, radius2: len[i]!, axialDistance: z[i]! * r[i]! }));
 const dowell = Array.from({ length: N }, (_, i) => ({ penetrationRatio: delta[i]!, layers: layers[i]! }));
 const wires = Array.from({ length: N }, (_, i) => ({ diameter: 1e-3 * x[i]! ** 0.3, frequency: freq[i]!, resistivity: 1.7241e-8 }));
@@ -91,7 +91,7 @@ const llcPoints = Array.from({ length: 1024 }, () => {
   };
 });
 const compensations = ["series-series", "series-parallel", "parallel-series", "parallel-parallel", "lcc-series", "double-lcc"] as const;
-const linkCases = Array.from({ length: N }, (_, i) => {
+export const linkCases = Array.from({ length: N }, (_, i) => {
   const primaryInductance = logUniform(5e-6, 500e-6);
   const secondaryInductance = logUniform(5e-6, 500e-6);
   const compensation = compensations[i % 6] ?? "series-series";
