@@ -101,11 +101,43 @@ export function extraLowVoltageCaution(v: number, waveform: "ac" | "dc", locatio
   return {
     code: "voltage-above-extra-low",
     severity: "danger",
-    message: "The " + location + " reaches " + round(v) + (waveform === "ac" ? AC_MESSAGE_END : DC_MESSAGE_END),
+    message: voltageMessageStart(location) + round(v) + (waveform === "ac" ? AC_MESSAGE_END : DC_MESSAGE_END),
     value: v,
     limit,
     unit: "V",
-    source: "IEC 61140:2016, extra-low voltage limits (50 V AC RMS, 120 V ripple-free DC; voltage band I of IEC 60449)",
+    source: ELV_SOURCE,
+  };
+}
+
+/** The source of the extra-low-voltage caution. */
+const ELV_SOURCE = "IEC 61140:2016, extra-low voltage limits (50 V AC RMS, 120 V ripple-free DC; voltage band I of IEC 60449)";
+
+/**
+ * The start of the message of {@link extraLowVoltageCaution} for a location, up to the voltage
+ * ("The tank capacitor reaches "): library code with fixed locations makes it once and passes it
+ * to {@link acVoltageCautionAbove}. Internal.
+ */
+export function voltageMessageStart(location: string): string {
+  return "The " + location + " reaches ";
+}
+
+/**
+ * The AC caution of {@link extraLowVoltageCaution} for a voltage already known to be above
+ * 50 V RMS, with the message start made once by {@link voltageMessageStart}: the same caution,
+ * one concatenation and no comparison fewer per call. Internal.
+ *
+ * @param v - the RMS voltage [V], > 50
+ * @param start - {@link voltageMessageStart} of the location
+ */
+export function acVoltageCautionAbove(v: number, start: string): Caution {
+  return {
+    code: "voltage-above-extra-low",
+    severity: "danger",
+    message: start + round(v) + AC_MESSAGE_END,
+    value: v,
+    limit: EXTRA_LOW_VOLTAGE_LIMITS.acRms,
+    unit: "V",
+    source: ELV_SOURCE,
   };
 }
 

@@ -8,7 +8,7 @@
  * @packageDocumentation
  */
 import { InputError, EXTRA_LOW_VOLTAGE_LIMITS, type Caution } from "../core/index.js";
-import { extraLowVoltageCaution } from "../core/extra-low-voltage.js";
+import { acVoltageCautionAbove, voltageMessageStart } from "../core/extra-low-voltage.js";
 import type { InductiveLink, LinkCapacitor } from "./inductive-link-types.js";
 
 /** Extra-low-voltage limit (AC RMS) read once: the cautions are built only above it. */
@@ -78,14 +78,21 @@ const NODE_ABS = 12;
 /** Results of the network reductions (written in place: no objects, no boxed numbers). */
 const net = new Float64Array(15);
 
-/** Where a capacitor's voltage caution points (constant text: no concatenation per call). */
-function capacitorLocation(name: string): string {
+/** The start of each capacitor's voltage caution message, made once (no concatenation per call). */
+const PRIMARY_START = voltageMessageStart("primary compensating capacitor");
+const SECONDARY_START = voltageMessageStart("secondary compensating capacitor");
+const PRIMARY_FILTER_START = voltageMessageStart("primary-filter compensating capacitor");
+const SECONDARY_FILTER_START = voltageMessageStart("secondary-filter compensating capacitor");
+const COIL_START = voltageMessageStart("primary coil");
+
+/** The start of the voltage caution message of a capacitor, by its name. */
+function capacitorMessageStart(name: string): string {
   switch (name) {
-    case "primary": return "primary compensating capacitor";
-    case "secondary": return "secondary compensating capacitor";
-    case "primary-filter": return "primary-filter compensating capacitor";
-    case "secondary-filter": return "secondary-filter compensating capacitor";
-    default: return `${name} compensating capacitor`;
+    case "primary": return PRIMARY_START;
+    case "secondary": return SECONDARY_START;
+    case "primary-filter": return PRIMARY_FILTER_START;
+    case "secondary-filter": return SECONDARY_FILTER_START;
+    default: return voltageMessageStart(`${name} compensating capacitor`);
   }
 }
 
@@ -265,8 +272,8 @@ function linkCautions(capacitors: readonly LinkCapacitor[], coilVoltage: number)
   // the limit is checked here first so a safe link builds no message text and shares one empty list
   if (!(worst > ELV_AC_RMS || coilVoltage > ELV_AC_RMS)) return NO_CAUTIONS;
   // the list built at its final length (a push onto an empty array allocates room for 17)
-  const caution = worst > ELV_AC_RMS ? extraLowVoltageCaution(worst, "ac", capacitorLocation(worstName)) : null;
-  const coilCaution = coilVoltage > ELV_AC_RMS ? extraLowVoltageCaution(coilVoltage, "ac", "primary coil") : null;
+  const caution = worst > ELV_AC_RMS ? acVoltageCautionAbove(worst, capacitorMessageStart(worstName)) : null;
+  const coilCaution = coilVoltage > ELV_AC_RMS ? acVoltageCautionAbove(coilVoltage, COIL_START) : null;
   if (caution === null) return coilCaution === null ? [] : [coilCaution];
   return coilCaution === null ? [caution] : [caution, coilCaution];
 }
