@@ -32,16 +32,17 @@ const MODE_N = 2;
 const LETTER = ["O", "P", "N"] as const;
 const MAX_SEGMENTS = 64;
 
-/**
- * The solved steady state, normalised: the shared figures (clampedFraction is the fraction of
- * the period with the rectifier conducting, modes P and N; the sequence reads "NOP", "OPO", …)
- * and the rectifier current's.
- */
-export interface CapacitiveSteadyState extends StateAndGainSteadyState {
+/** The solved steady state, normalised: the shared figures and the rectifier current's. */
+export interface CapacitiveSteadyState {
+  /**
+   * The figures every state-and-gain kernel reports (here clampedFraction is the fraction of
+   * the period with the rectifier conducting, modes P and N; the sequence reads "NOP", "OPO", …).
+   */
+  readonly state: StateAndGainSteadyState;
   /** RMS over the period of the rectifier current (primary side, units V_b/Z_p). */
-  rectifierRms: number;
+  readonly rectifierRms: number;
   /** Peak of the rectifier current (primary side). */
-  rectifierPeak: number;
+  readonly rectifierPeak: number;
 }
 
 const st = new Float64Array(3);
@@ -287,6 +288,6 @@ export function capacitiveSteadyState(a: number, zeta: number, theta: number, st
   if (!(res < CAPACITIVE_TOLERANCE)) res = continuation(a, zeta, theta);
   if (!(res < CAPACITIVE_TOLERANCE)) return null;
   const m = y[3] ?? 0;
-  const solution = solver.steadyState(a, zeta, theta, Math.min(m, Math.max(-m, y[2] ?? 0)), res);
-  return { ...solution, rectifierRms: Math.sqrt(evRect2 / theta), rectifierPeak: evPeakRect };
+  const state = solver.steadyState(a, zeta, theta, Math.min(m, Math.max(-m, y[2] ?? 0)), res);
+  return { state, rectifierRms: Math.sqrt(evRect2 / theta), rectifierPeak: evPeakRect };
 }

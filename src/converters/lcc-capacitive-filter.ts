@@ -6,7 +6,7 @@
  * @packageDocumentation
  */
 import { voltageCaution, type Caution, type ValidityNote } from "../core/index.js";
-import { capacitiveFirstHarmonic, capacitiveSteadyState, type CapacitiveSteadyState } from "./capacitive-filter-kernel.js";
+import { capacitiveFirstHarmonic, capacitiveSteadyState } from "./capacitive-filter-kernel.js";
 import type { LccOperatingPointOptions, ParallelResonantOperatingPointOptions } from "./lcc-operating-point.js";
 import {
   normalisedParallelPoint,
@@ -16,7 +16,7 @@ import {
   testedDomainValidity,
   type ParallelConverterCircuit,
 } from "./parallel-converter.js";
-import type { StateAndGainStart } from "./periodic-newton.js";
+import type { StateAndGainStart, StateAndGainSteadyState } from "./periodic-newton.js";
 import { hardSwitchingCaution, noSteadyStateError } from "./steady-state-notes.js";
 
 /**
@@ -125,11 +125,12 @@ const fha = new Float64Array(9);
  */
 export function capacitiveOperatingPointOf(
   c: ParallelConverterCircuit, fs: number, start?: StateAndGainStart,
-): { point: CapacitiveFilterOperatingPoint; solution: CapacitiveSteadyState } | null {
+): { point: CapacitiveFilterOperatingPoint; solution: StateAndGainSteadyState } | null {
   const { lcc, bridgeVoltage: vb, turnsRatio: n, loadResistance: rl } = c;
   const { a, zp, theta, zeta, resonantImpedance, fr, fn } = normalisedParallelPoint(c, fs);
-  const solution = capacitiveSteadyState(a, zeta, theta, start);
-  if (solution === null) return null;
+  const solved = capacitiveSteadyState(a, zeta, theta, start);
+  if (solved === null) return null;
+  const solution = solved.state;
   const rac = (8 * n * n * rl) / (Math.PI * Math.PI);
   const q = resonantImpedance / rac;
   const ib = vb / zp;
@@ -137,7 +138,7 @@ export function capacitiveOperatingPointOf(
   const vout = (m * vb) / n;
   const iout = vout / rl;
   const turnOffCurrent = -solution.j0 * ib;
-  const rectRms = solution.rectifierRms * ib * n;
+  const rectRms = solved.rectifierRms * ib * n;
 
   capacitiveFirstHarmonic(a, zeta, theta, fha);
   const fhaGain = fha[3] ?? 0;
@@ -183,7 +184,7 @@ export function capacitiveOperatingPointOf(
     parallelCapacitorVoltageRms: solution.parallelRms * vb,
     diodeVoltagePeak: vout,
     rectifierCurrentRms: rectRms,
-    rectifierCurrentPeak: solution.rectifierPeak * ib * n,
+    rectifierCurrentPeak: solved.rectifierPeak * ib * n,
     outputCapacitorCurrentRms: Math.sqrt(Math.max(0, rectRms * rectRms - iout * iout)),
     conductionFraction: solution.clampedFraction,
     zeroVoltageSwitching: turnOffCurrent > 0,

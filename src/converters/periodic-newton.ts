@@ -19,7 +19,14 @@
  * A third topology uses it so: implement {@link PeriodicSystem} (an object whose `residuals`
  * reads the topology's parameters from its own fields, so no closure is made per call), fill
  * {@link PeriodicNewton.x}, call {@link PeriodicNewton.solve} with its {@link NewtonSettings},
- * and read the solution back from `x`.
+ * and read the solution back from `x`. A topology solved on its state and gain alone (the
+ * LCC and parallel-resonant kernels) gives its propagation and load balance to
+ * {@link StateAndGainSolver} instead, which holds the residuals, the starts (continuation,
+ * first harmonic, relaxation) and the figures of the solution.
+ *
+ * Size: the generic Newton solver, the half-period record and the state-and-gain scaffolding
+ * built on both are one family, each part short; the LCC kernels and the LLC sequence solve
+ * read them from this one place.
  *
  * @packageDocumentation
  */
