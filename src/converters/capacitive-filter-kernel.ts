@@ -71,9 +71,10 @@ function startMode(j: number, u: number, v: number, m: number): number {
 /**
  * Propagates the positive half period from (j, u, v) with gain m; fills the event record and,
  * with `record`, the waveform integrals. End state in `st`. The start voltage is clamped to the
- * rectifier's band |v| ≤ m (a Newton trial may step outside it).
+ * rectifier's band |v| ≤ m (a Newton trial may step outside it). ζ is not read (the load
+ * enters through the balance only); it keeps the shared signature of {@link StateAndGainTopology}.
  */
-function propagate(j0: number, u0: number, v0: number, m: number, a: number, theta: number, record: boolean): void {
+function propagate(j0: number, u0: number, v0: number, m: number, a: number, _zeta: number, theta: number, record: boolean): void {
   let j = j0;
   let u = u0;
   let v = Math.min(m, Math.max(-m, v0));
@@ -187,9 +188,7 @@ const topology: StateAndGainTopology = {
   letters: LETTER,
   events,
   end: st,
-  propagate: (j, u, v, m, a, _zeta, theta, record) => {
-    propagate(j, u, v, m, a, theta, record);
-  },
+  propagate,
   // the rectified charge per half period against the load's ζm
   loadResidual: (m, zeta, theta) => events.loadIntegral / (theta * zeta * m) - 1,
   relaxedGain: (m, zeta, theta) => {
