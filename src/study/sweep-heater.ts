@@ -11,6 +11,9 @@ import { studyHeater } from "./study-heater.js";
 import { checkPoolOptions, runPool } from "./worker-pool.js";
 import type { HeaterPoolOptions } from "./worker-pool.js";
 import { summarise } from "./summary.js";
+import { exportCellModels, importCellModels } from "./operating-point-cells.js";
+import type { CellModelData } from "./operating-point-cells.js";
+import { coilProperties } from "./operating-point-coil.js";
 import type { HeaterSummary } from "./summary.js";
 
 /**
@@ -148,7 +151,25 @@ interface SweepContext {
   readonly field: string;
   readonly heatUp: boolean;
   readonly requireUnits: boolean;
+  /** The coil-impedance models the calling thread built for the base design (for workers: none on the calling thread). */
+  readonly models?: readonly CellModelData[];
 }
+
+/**
+ * The context of a sweep's rows; for workers, with the coil-impedance model of the base
+ * design, which the calling thread built when it checked the sweep: each worker starts from it
+ * instead of building it again (a cold thread spends most of its first study there), and
+ * computes the same numbers it would have built itself.
+ */
+function sweepContext(description: HeaterDescription, c: CheckedSweep, workers: number): SweepContext {
+  const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
+  if (workers === 0) return context;
+  const d = readHeaterDescription(description, { requireUnits: c.requireUnits });
+  return { ...context, models: exportCellModels(d, coilProperties(d)) };
+}
+
+/** Contexts whose models this thread has taken into its cache. */
+const imported = new WeakSet<SweepContext>();
 
 /** One row: the variant studied, or its problem. */
 function sweepRow(c: SweepContext, value: QuantityInput): HeaterSweepRow {
@@ -165,7 +186,12 @@ function sweepRow(c: SweepContext, value: QuantityInput): HeaterSweepRow {
 
 /** The pool's task runner for sweeps: one row per value. */
 export function sweepTask(context: unknown, items: readonly unknown[]): unknown[] {
-  return items.map((v) => sweepRow(context as SweepContext, v as QuantityInput));
+  const c = context as SweepContext;
+  if (c.models !== undefined && !imported.has(c)) {
+    importCellModels(c.models);
+    imported.add(c);
+  }
+  return items.map((v) => sweepRow(c, v as QuantityInput));
 }
 
 /**
@@ -267,7 +293,7 @@ export function sweepHeaterStream(description: HeaterDescription, sweep: HeaterS
   const shard = checkShard(where, options.shard);
   const c = checkSweep(where, description, sweep);
   const [start, end] = shardRange(c.values.length, shard);
-  const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
+  const context = sweepContext(description, c, pool.workers);
   function* values(): Generator<QuantityInput> {
     for (let i = start; i < end; i++) yield c.values[i] as QuantityInput;
   }
@@ -339,7 +365,7 @@ export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSp
   if (options !== undefined) {
     const pool = checkPoolOptions(where, options);
     const c = checkSweep(where, description, sweep);
-    const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
+    const context = sweepContext(description, c, pool.workers);
     return (async () => {
       const rows: HeaterSweepRow[] = [];
       for await (const row of runPool({ kind: "sweep", context }, c.values, c.values.length, sweepTask, pool, where)) rows.push(row as HeaterSweepRow);

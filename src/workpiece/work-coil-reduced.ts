@@ -135,6 +135,14 @@ export function buildReduced(mesh: Mesh, kernel: PartKernel, fMin: number, fMax:
   return { k, g, r, lambda, P, G, scratch: reducedScratch(k, g, r, kernel.rule.nodes.length) };
 }
 
+/** A reduced model without its work arrays: numbers and typed arrays only, which cross a thread boundary by structured clone bit for bit. */
+export type ReducedModelData = Omit<ReducedModel, "scratch">;
+
+/** A reduced model from its data (another thread's {@link buildReduced}), with fresh work arrays for a kernel rule of `nodes` nodes. */
+export function reducedModelFrom(d: ReducedModelData, nodes: number): ReducedModel {
+  return { k: d.k, g: d.g, r: d.r, lambda: d.lambda, P: d.P, G: d.G, scratch: reducedScratch(d.k, d.g, d.r, nodes) };
+}
+
 /** Σ x[xo + i]·y[yo + i] over i < m, in order. */
 function columnDot(x: Float64Array, xo: number, y: Float64Array, yo: number, m: number): number {
   let sum = 0;
