@@ -123,7 +123,14 @@ if (what === "scale") {
   const before = threadCpu();
   let after: Map<string, number> | null = null;
   const t2 = performance.now();
-  await sweepHeater(race, spec, { workers: 2, onProgress: (p) => { if (p.done === p.total) after = threadCpu(); } });
+  let rss = 0;
+  await sweepHeater(race, spec, {
+    workers: 2,
+    onProgress: (p) => {
+      if (p.done === p.total) after = threadCpu();
+      rss = Math.max(rss, process.memoryUsage.rss());
+    },
+  });
   const two = performance.now() - t2;
   let helpers = "";
   if (before !== null && after !== null) {
@@ -138,6 +145,9 @@ if (what === "scale") {
       helpers += `; CPU time: calling thread ${mainOne.toFixed(2)} s, workers ${two.each.map((t) => t.toFixed(2)).join(" + ")} s, helpers ${h.toFixed(2)} s, main ${two.main.toFixed(2)} s (estimate on two free cores ${cpuSpeedup({ workers: mainOne }, two).toFixed(2)}x)`;
     }
   }
+  const mb = (b: number): string => (b / 2 ** 20).toFixed(0);
+  const m = process.memoryUsage();
+  helpers += `; at the end: rss ${mb(rss)} MiB during the run (workers alive), ${mb(m.rss)} MiB after, main heap ${mb(m.heapUsed)} MiB`;
   console.log(
     `speed-up ${(one / two).toFixed(2)}x with 2 workers over the calling thread (target >= 1.8x): ${n} designs of ${(one / n).toFixed(0)} ms, ` +
       `${(one / 1000).toFixed(1)} s -> ${(two / 1000).toFixed(1)} s${helpers}; load average ${loadavg()[0]?.toFixed(1) ?? "?"} (needs an idle machine)`,
