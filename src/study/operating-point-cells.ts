@@ -121,6 +121,11 @@ function cellKey(d: ResolvedHeaterDescription, props: CoilProperties): { coil: W
   return { coil, part, fMin, fMax, key: JSON.stringify([coil, part, fMin, fMax]) };
 }
 
+/** The cache key of the coil-impedance model a description's studies use (coil, part geometry and band). */
+export function cellModelKey(d: ResolvedHeaterDescription, props: CoilProperties): string {
+  return cellKey(d, props).key;
+}
+
 /**
  * A coil-impedance model built on one thread, as plain data for another (a worker of the pool):
  * the reduced model and, for a part shorter than the coil, the end-effect factors with their
