@@ -16,14 +16,14 @@
  * O ends when $v$ reaches $\pm m$, P and N when $j$ returns to zero. The load balance is
  * $\frac1\Theta\int_{P,N}|j|\,d\theta = \zeta m$ with $\zeta = Z_p/(n^2R_\mathrm{load})$. The
  * half-wave antisymmetric steady state $x(\Theta) = -x(0)$, $\Theta = \pi f_p/f_s$, is solved
- * by Newton's method on $(j_0, u_0, v_0, m)$ (the shared {@link PeriodicNewton}) through an
+ * by Newton's method on $(j_0, u_0, v_0, m)$ (the shared {@link StateAndGainSolver}) through an
  * exact event-driven propagation recorded in a {@link HalfPeriodRecord}: each
  * mode has a closed-form solution (a sinusoid, or a ramp for $a = 0$) and each mode change is
  * the first crossing of such a function ({@link firstDownCrossing}).
  *
  * @packageDocumentation
  */
-import { HalfPeriodRecord, PeriodicNewton, STATE_AND_GAIN_NEWTON, type PeriodicSystem } from "./periodic-newton.js";
+import { HalfPeriodRecord, StateAndGainSolver, type StateAndGainStart, type StateAndGainSteadyState, type StateAndGainTopology } from "./periodic-newton.js";
 import { firstDownCrossing, rampSinusoidSquareIntegral, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 const MODE_O = 0;
@@ -32,30 +32,17 @@ const MODE_N = 2;
 const LETTER = ["O", "P", "N"] as const;
 const MAX_SEGMENTS = 64;
 
-/** The solved steady state, normalised. */
+/** The solved steady state, normalised: the shared figures and the rectifier current's. */
 export interface CapacitiveSteadyState {
-  gain: number;
-  j0: number;
-  u0: number;
-  v0: number;
-  /** Mode sequence of the positive half period ("NOP", "OPO", …). */
-  sequence: string;
-  durations: number[];
-  resonantRms: number;
-  resonantPeak: number;
-  seriesPeak: number;
-  parallelPeak: number;
-  parallelRms: number;
+  /**
+   * The figures every state-and-gain kernel reports (here clampedFraction is the fraction of
+   * the period with the rectifier conducting, modes P and N; the sequence reads "NOP", "OPO", …).
+   */
+  readonly state: StateAndGainSteadyState;
   /** RMS over the period of the rectifier current (primary side, units V_b/Z_p). */
-  rectifierRms: number;
+  readonly rectifierRms: number;
   /** Peak of the rectifier current (primary side). */
-  rectifierPeak: number;
-  /** Fraction of the period with the rectifier conducting (modes P and N). */
-  conductionFraction: number;
-  /** Mean of j over the positive half period (input current, units V_b/Z_p). */
-  inputMean: number;
-  /** Boundary-condition residual of the accepted solution. */
-  residual: number;
+  readonly rectifierPeak: number;
 }
 
 const st = new Float64Array(3);
@@ -84,9 +71,10 @@ function startMode(j: number, u: number, v: number, m: number): number {
 /**
  * Propagates the positive half period from (j, u, v) with gain m; fills the event record and,
  * with `record`, the waveform integrals. End state in `st`. The start voltage is clamped to the
- * rectifier's band |v| ≤ m (a Newton trial may step outside it).
+ * rectifier's band |v| ≤ m (a Newton trial may step outside it). ζ is not read (the load
+ * enters through the balance only); it keeps the shared signature of {@link StateAndGainTopology}.
  */
-function propagate(j0: number, u0: number, v0: number, m: number, a: number, theta: number, record: boolean): void {
+function propagate(j0: number, u0: number, v0: number, m: number, a: number, _zeta: number, theta: number, record: boolean): void {
   let j = j0;
   let u = u0;
   let v = Math.min(m, Math.max(-m, v0));
@@ -196,29 +184,21 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, the
 // ---------------------------------------------------------------------------------------------
 // Newton on (j0, u0, v0, m), with the shared solver.
 
-/** Parameters of the solve, read by {@link capacitiveSystem} (set before each solve). */
-let sysA = 0;
-let sysZeta = 0;
-let sysTheta = 0;
-const capacitiveSystem: PeriodicSystem = {
-  residuals: (x, out) => residuals(x, sysA, sysZeta, sysTheta, out),
+const topology: StateAndGainTopology = {
+  letters: LETTER,
+  events,
+  end: st,
+  propagate,
+  // the rectified charge per half period against the load's ζm
+  loadResidual: (m, zeta, theta) => events.loadIntegral / (theta * zeta * m) - 1,
+  relaxedGain: (m, zeta, theta) => {
+    const delivered = events.loadIntegral / (theta * zeta);
+    return delivered > 0 ? 0.7 * m + 0.3 * delivered : m;
+  },
 };
-
-const newton = new PeriodicNewton(4);
+const solver = new StateAndGainSolver(topology);
 /** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
-const y = newton.x;
-
-function residuals(x: Float64Array, a: number, zeta: number, theta: number, out: Float64Array): boolean {
-  const m = x[3] ?? 0;
-  if (!(m > 0)) return false;
-  propagate(x[0] ?? 0, x[1] ?? 0, x[2] ?? 0, m, a, theta, false);
-  if (events.overflow) return false;
-  out[0] = (st[0] ?? 0) + (x[0] ?? 0);
-  out[1] = (st[1] ?? 0) + (x[1] ?? 0);
-  out[2] = (st[2] ?? 0) + (x[2] ?? 0);
-  out[3] = events.loadIntegral / (theta * zeta * m) - 1;
-  return Number.isFinite(out[0] + out[1] + out[2] + out[3]);
-}
+const y = solver.x;
 
 // ---------------------------------------------------------------------------------------------
 // First harmonic with the RC load model of the rectifier and C_p.
@@ -273,17 +253,6 @@ export function capacitiveFirstHarmonic(a: number, zeta: number, theta: number, 
 
 const fhaScratch = new Float64Array(9);
 
-function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: number, theta: number): number {
-  y[0] = j;
-  y[1] = u;
-  y[2] = v;
-  y[3] = m;
-  sysA = a;
-  sysZeta = zeta;
-  sysTheta = theta;
-  return newton.solve(capacitiveSystem, 4, STATE_AND_GAIN_NEWTON, theta);
-}
-
 /** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */
 export const CAPACITIVE_TOLERANCE = 1e-10;
 
@@ -296,78 +265,28 @@ function continuation(a: number, zeta: number, theta: number): number {
   const theta0 = Math.PI / Math.sqrt(1 + a);
   for (const steps of [16, 64]) {
     capacitiveFirstHarmonic(a, zeta, theta0, fhaScratch);
-    let res = tryFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta0);
+    let res = solver.solveFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta0);
     for (let s = 1; s <= steps && res < CAPACITIVE_TOLERANCE; s++) {
       const th = theta0 * Math.pow(theta / theta0, s / steps);
-      res = tryFrom(y[0] ?? 0, y[1] ?? 0, Math.min(y[3] ?? 0, Math.max(-(y[3] ?? 0), y[2] ?? 0)), y[3] ?? 1, a, zeta, th);
+      res = solver.solveFrom(y[0] ?? 0, y[1] ?? 0, Math.min(y[3] ?? 0, Math.max(-(y[3] ?? 0), y[2] ?? 0)), y[3] ?? 1, a, zeta, th);
     }
     if (res < CAPACITIVE_TOLERANCE) return res;
   }
   return Infinity;
 }
 
-/** A start for {@link capacitiveSteadyState}: a previous solution (continuation). */
-export interface CapacitiveStart {
-  j0: number;
-  u0: number;
-  v0: number;
-  gain: number;
-}
-
 /**
  * Solves the steady state for a = C_p/C_s ≥ 0, ζ = Z_p/(n²R) > 0 and half period Θ > 0
  * (normalised), from `start` when given (continuation), else from the first harmonic; falls
- * back to relaxation over half periods. Returns null when no consistent periodic solution was
- * found.
+ * back to relaxation over half periods, then to continuation in frequency. Returns null when
+ * no consistent periodic solution was found.
  */
-export function capacitiveSteadyState(a: number, zeta: number, theta: number, start?: CapacitiveStart): CapacitiveSteadyState | null {
-  let res = Infinity;
-  if (start !== undefined) res = tryFrom(start.j0, start.u0, start.v0, start.gain, a, zeta, theta);
+export function capacitiveSteadyState(a: number, zeta: number, theta: number, start?: StateAndGainStart): CapacitiveSteadyState | null {
   capacitiveFirstHarmonic(a, zeta, theta, fhaScratch);
-  if (!(res < CAPACITIVE_TOLERANCE)) {
-    res = tryFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta);
-  }
-  if (!(res < CAPACITIVE_TOLERANCE)) {
-    // relax: forward half periods with the gain updated from the delivered charge, then Newton
-    let j = fhaScratch[0] ?? 0;
-    let u = fhaScratch[1] ?? 0;
-    let v = fhaScratch[2] ?? 0;
-    let m = fhaScratch[3] ?? 1;
-    for (let i = 0; i < 400; i++) {
-      propagate(j, u, v, m, a, theta, false);
-      if (events.overflow) break;
-      j = -(st[0] ?? 0);
-      u = -(st[1] ?? 0);
-      v = -(st[2] ?? 0);
-      const delivered = events.loadIntegral / (theta * zeta);
-      if (delivered > 0) m = 0.7 * m + 0.3 * delivered;
-    }
-    res = tryFrom(j, u, v, m, a, zeta, theta);
-  }
+  let res = solver.solveFromStarts(start, fhaScratch, a, zeta, theta, CAPACITIVE_TOLERANCE);
   if (!(res < CAPACITIVE_TOLERANCE)) res = continuation(a, zeta, theta);
   if (!(res < CAPACITIVE_TOLERANCE)) return null;
   const m = y[3] ?? 0;
-  const j0 = y[0] ?? 0;
-  const u0 = y[1] ?? 0;
-  const v0 = Math.min(m, Math.max(-m, y[2] ?? 0));
-  propagate(j0, u0, v0, m, a, theta, true);
-  const { sequence, durations } = events.summary(LETTER, theta);
-  return {
-    gain: m,
-    j0,
-    u0,
-    v0,
-    sequence,
-    durations,
-    resonantRms: Math.sqrt(events.currentSquareIntegral / theta),
-    resonantPeak: events.currentPeak,
-    seriesPeak: events.capacitorPeak,
-    parallelPeak: events.thirdStatePeak,
-    parallelRms: Math.sqrt(Math.max(0, events.rectifierSquareIntegral) / theta),
-    rectifierRms: Math.sqrt(evRect2 / theta),
-    rectifierPeak: evPeakRect,
-    conductionFraction: events.clampedTime / theta,
-    inputMean: events.currentIntegral / theta,
-    residual: res,
-  };
+  const state = solver.steadyState(a, zeta, theta, Math.min(m, Math.max(-m, y[2] ?? 0)), res);
+  return { state, rectifierRms: Math.sqrt(evRect2 / theta), rectifierPeak: evPeakRect };
 }

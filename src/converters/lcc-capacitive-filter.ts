@@ -5,18 +5,19 @@
  *
  * @packageDocumentation
  */
-import {
-  requireKnownKeys,
-  requireObject,
-  requireOneOf,
-  requirePositive,
-  voltageCaution,
-  type Caution,
-  type ValidityNote,
-} from "../core/index.js";
-import { capacitiveFirstHarmonic, capacitiveSteadyState, type CapacitiveStart, type CapacitiveSteadyState } from "./capacitive-filter-kernel.js";
+import { voltageCaution, type Caution, type ValidityNote } from "../core/index.js";
+import { capacitiveFirstHarmonic, capacitiveSteadyState } from "./capacitive-filter-kernel.js";
 import type { LccOperatingPointOptions, ParallelResonantOperatingPointOptions } from "./lcc-operating-point.js";
-import { hardSwitchingCaution, noSteadyStateError, outsideTestedDomainNote } from "./steady-state-notes.js";
+import {
+  normalisedParallelPoint,
+  readParallelConverterOptions,
+  tankVoltageCautions,
+  testedDomainText,
+  testedDomainValidity,
+  type ParallelConverterCircuit,
+} from "./parallel-converter.js";
+import type { StateAndGainStart, StateAndGainSteadyState } from "./periodic-newton.js";
+import { hardSwitchingCaution, noSteadyStateError } from "./steady-state-notes.js";
 
 /**
  * First-harmonic values beside the exact ones ({@link CapacitiveFilterOperatingPoint.firstHarmonic}),
@@ -108,46 +109,12 @@ export interface CapacitiveFilterOperatingPoint {
   readonly validity: readonly ValidityNote[];
 }
 
-const PRC_KEYS = [
-  "bridge", "inputVoltage", "turnsRatio", "resonantInductance", "parallelCapacitance", "switchingFrequency", "loadResistance",
-] as const;
-const LCC_KEYS = [...PRC_KEYS, "seriesCapacitance"] as const;
-
 /** Domains checked against the time-domain simulation (fixture prc-lcc-capacitive-steady-state.json). */
 const PRC_TESTED = { fnMin: 0.7, fnMax: 1.8, qMin: 0.2, qMax: 3, aMin: 0, aMax: 0 } as const;
 const LCC_TESTED = { fnMin: 0.55, fnMax: 2.4, qMin: 0.4, qMax: 2.5, aMin: 0.25, aMax: 2 } as const;
 
 function testedDomain(lcc: boolean): string {
-  const t = lcc ? LCC_TESTED : PRC_TESTED;
-  return `${t.fnMin} ≤ f_n ≤ ${t.fnMax}, ${t.qMin} ≤ Q ≤ ${t.qMax}${lcc ? `, ${t.aMin} ≤ A ≤ ${t.aMax}` : ""}`;
-}
-
-/** Checked circuit of a PRC (cs = Infinity) or LCC. Internal. */
-export interface ParallelConverterCircuit {
-  readonly lcc: boolean;
-  readonly inputVoltage: number;
-  readonly bridgeVoltage: number;
-  readonly turnsRatio: number;
-  readonly resonantInductance: number;
-  readonly parallelCapacitance: number;
-  readonly seriesCapacitance: number;
-  readonly loadResistance: number;
-}
-
-/** Validates the circuit part of the options (not the frequency, not the keys). Internal. */
-export function checkParallelConverterCircuit(where: string, options: Partial<LccOperatingPointOptions>, lcc: boolean): ParallelConverterCircuit {
-  const bridge = requireOneOf(where, "bridge", options.bridge, ["half", "full"] as const);
-  const vin = requirePositive(where, "inputVoltage", options.inputVoltage, "V");
-  return {
-    lcc,
-    inputVoltage: vin,
-    bridgeVoltage: bridge === "half" ? vin / 2 : vin,
-    turnsRatio: requirePositive(where, "turnsRatio", options.turnsRatio, ""),
-    resonantInductance: requirePositive(where, "resonantInductance", options.resonantInductance, "H"),
-    parallelCapacitance: requirePositive(where, "parallelCapacitance", options.parallelCapacitance, "F"),
-    seriesCapacitance: lcc ? requirePositive(where, "seriesCapacitance", options.seriesCapacitance, "F") : Infinity,
-    loadResistance: requirePositive(where, "loadResistance", options.loadResistance, "Ω"),
-  };
+  return testedDomainText(lcc ? LCC_TESTED : PRC_TESTED, lcc);
 }
 
 const fha = new Float64Array(9);
@@ -157,27 +124,21 @@ const fha = new Float64Array(9);
  * solution; `start` continues from a previous solution. Internal (used by the sweep).
  */
 export function capacitiveOperatingPointOf(
-  c: ParallelConverterCircuit, fs: number, start?: CapacitiveStart,
-): { point: CapacitiveFilterOperatingPoint; solution: CapacitiveSteadyState } | null {
-  const { lcc, bridgeVoltage: vb, turnsRatio: n, resonantInductance: lr, parallelCapacitance: cp, seriesCapacitance: cs, loadResistance: rl } = c;
-  const a = lcc ? cp / cs : 0;
-  const zp = Math.sqrt(lr / cp);
-  const fp = 1 / (2 * Math.PI * Math.sqrt(lr * cp));
-  const theta = (Math.PI * fp) / fs;
-  const zeta = zp / (n * n * rl);
-  const solution = capacitiveSteadyState(a, zeta, theta, start);
-  if (solution === null) return null;
-  const cr = lcc ? cs : cp;
-  const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cr));
-  const fn = fs / fr;
+  c: ParallelConverterCircuit, fs: number, start?: StateAndGainStart,
+): { point: CapacitiveFilterOperatingPoint; solution: StateAndGainSteadyState } | null {
+  const { lcc, bridgeVoltage: vb, turnsRatio: n, loadResistance: rl } = c;
+  const { a, zp, theta, zeta, resonantImpedance, fr, fn } = normalisedParallelPoint(c, fs);
+  const solved = capacitiveSteadyState(a, zeta, theta, start);
+  if (solved === null) return null;
+  const solution = solved.state;
   const rac = (8 * n * n * rl) / (Math.PI * Math.PI);
-  const q = Math.sqrt(lr / cr) / rac;
+  const q = resonantImpedance / rac;
   const ib = vb / zp;
   const m = solution.gain;
   const vout = (m * vb) / n;
   const iout = vout / rl;
   const turnOffCurrent = -solution.j0 * ib;
-  const rectRms = solution.rectifierRms * ib * n;
+  const rectRms = solved.rectifierRms * ib * n;
 
   capacitiveFirstHarmonic(a, zeta, theta, fha);
   const fhaGain = fha[3] ?? 0;
@@ -197,28 +158,14 @@ export function capacitiveOperatingPointOf(
   const seriesPeak = lcc ? solution.seriesPeak * vb : 0;
   const parallelPeak = solution.parallelPeak * vb;
 
-  const cautions: Caution[] = [];
-  const dc = voltageCaution({ voltage: c.inputVoltage, waveform: "dc", location: "converter input" });
-  if (dc !== null) cautions.push(dc);
-  const acP = voltageCaution({ voltage: solution.parallelRms * vb, waveform: "ac", location: "parallel capacitor and transformer primary (RMS)" });
-  if (acP !== null) cautions.push(acP);
-  if (lcc) {
-    const acS = voltageCaution({ voltage: seriesPeak / Math.SQRT2, waveform: "ac", location: "series capacitor (AC part, RMS of a sine of the same peak)" });
-    if (acS !== null) cautions.push(acS);
-  }
+  const cautions: Caution[] = tankVoltageCautions(c.inputVoltage, solution.parallelRms * vb, lcc ? seriesPeak : null);
   const out = voltageCaution({ voltage: vout, waveform: "dc", location: "converter output" });
   if (out !== null) cautions.push(out);
   if (!(turnOffCurrent > 0)) {
     cautions.push(hardSwitchingCaution(turnOffCurrent, " (capacitive operation)", "Raise the switching frequency."));
   }
-  const validity: ValidityNote[] = [];
-  const t = lcc ? LCC_TESTED : PRC_TESTED;
   // the fixture's edge points sit on the limits: compare with a rounding margin
-  const lo = 1 - 1e-9;
-  const hi = 1 + 1e-9;
-  if (fn < t.fnMin * lo || fn > t.fnMax * hi || q < t.qMin * lo || q > t.qMax * hi || (lcc && (a < t.aMin * lo || a > t.aMax * hi))) {
-    validity.push(outsideTestedDomainNote(testedDomain(lcc), "1e-10"));
-  }
+  const validity = testedDomainValidity(lcc ? LCC_TESTED : PRC_TESTED, lcc, 1e-9, fn, q, a);
   const point: CapacitiveFilterOperatingPoint = {
     outputVoltage: vout,
     gain: m,
@@ -237,9 +184,9 @@ export function capacitiveOperatingPointOf(
     parallelCapacitorVoltageRms: solution.parallelRms * vb,
     diodeVoltagePeak: vout,
     rectifierCurrentRms: rectRms,
-    rectifierCurrentPeak: solution.rectifierPeak * ib * n,
+    rectifierCurrentPeak: solved.rectifierPeak * ib * n,
     outputCapacitorCurrentRms: Math.sqrt(Math.max(0, rectRms * rectRms - iout * iout)),
-    conductionFraction: solution.conductionFraction,
+    conductionFraction: solution.clampedFraction,
     zeroVoltageSwitching: turnOffCurrent > 0,
     conductionMode: solution.sequence,
     firstHarmonic,
@@ -250,14 +197,11 @@ export function capacitiveOperatingPointOf(
 }
 
 function operatingPoint(where: string, options: LccOperatingPointOptions | ParallelResonantOperatingPointOptions, lcc: boolean): CapacitiveFilterOperatingPoint {
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "options", options, lcc ? LCC_KEYS : PRC_KEYS);
-  const circuit = checkParallelConverterCircuit(where, options, lcc);
-  const fs = requirePositive(where, "switchingFrequency", options.switchingFrequency, "Hz");
+  const { circuit, switchingFrequency: fs } = readParallelConverterOptions(where, options, lcc, "after-load");
   const solved = capacitiveOperatingPointOf(circuit, fs);
   if (solved === null) {
-    const fr = 1 / (2 * Math.PI * Math.sqrt(circuit.resonantInductance * (lcc ? circuit.seriesCapacitance : circuit.parallelCapacitance)));
-    throw noSteadyStateError(where, fs, `f_n = ${(fs / fr).toPrecision(4)} with a capacitive output filter`, testedDomain(lcc));
+    const { fn } = normalisedParallelPoint(circuit, fs);
+    throw noSteadyStateError(where, fs, `f_n = ${fn.toPrecision(4)} with a capacitive output filter`, testedDomain(lcc));
   }
   return solved.point;
 }

@@ -10,14 +10,20 @@ import {
   requireObject,
   requireOneOf,
   requirePositive,
-  voltageCaution,
   type Caution,
   type ValidityNote,
 } from "../core/index.js";
-import type { CapacitiveStart } from "./capacitive-filter-kernel.js";
-import { capacitiveOperatingPointOf, checkParallelConverterCircuit, type ParallelConverterCircuit } from "./lcc-capacitive-filter.js";
+import { capacitiveOperatingPointOf } from "./lcc-capacitive-filter.js";
 import { lccFirstHarmonic, lccSteadyState } from "./lcc-kernel.js";
-import { hardSwitchingCaution, outsideTestedDomainNote } from "./steady-state-notes.js";
+import {
+  checkParallelConverterCircuit,
+  INDUCTIVE_TESTED,
+  tankVoltageCautions,
+  testedDomainValidity,
+  type ParallelConverterCircuit,
+} from "./parallel-converter.js";
+import type { StateAndGainStart } from "./periodic-newton.js";
+import { hardSwitchingCaution } from "./steady-state-notes.js";
 
 /**
  * Options of {@link lccFrequencySweep}: the components of {@link LccOperatingPointOptions}
@@ -189,7 +195,7 @@ export function lccFrequencySweep(options: LccFrequencySweepOptions): LccFrequen
   requireObject(where, "options", options);
   requireKnownKeys(where, "options", options, KEYS);
   const filter = options.outputFilter === undefined ? "inductive" : requireOneOf(where, "outputFilter", options.outputFilter, ["inductive", "capacitive"] as const);
-  const circuit = checkParallelConverterCircuit(where, options, true);
+  const { circuit } = checkParallelConverterCircuit(where, options, true, "none");
   const list = requireArrayLike(where, "frequencies", options.frequencies, "Hz", 1);
   const frequencies = new Float64Array(list.length);
   for (let i = 0; i < list.length; i++) frequencies[i] = requirePositive(where, `frequencies[${i}]`, list[i], "Hz");
@@ -208,7 +214,7 @@ export function lccFrequencySweep(options: LccFrequencySweepOptions): LccFrequen
   let outside = 0;
   let outsideNote: ValidityNote | null = null;
   let unsolved = 0;
-  const continued: { start?: CapacitiveStart } = {};
+  const continued: { start?: StateAndGainStart } = {};
   for (let i = 0; i < frequencies.length; i++) {
     const fs = frequencies[i] ?? 0;
     const values = filter === "capacitive" ? capacitivePoint(circuit, fs, continued) : inductivePoint(circuit, fs, continued);
@@ -258,7 +264,7 @@ export function lccFrequencySweep(options: LccFrequencySweepOptions): LccFrequen
   return { outputFilter: filter, resonantFrequency: fr, qualityFactor: q, capacitanceRatio: cp / cs, points, unsolvedCount: unsolved, cautions, validity };
 }
 
-function capacitivePoint(circuit: ParallelConverterCircuit, fs: number, continued: { start?: CapacitiveStart }): PointValues | null {
+function capacitivePoint(circuit: ParallelConverterCircuit, fs: number, continued: { start?: StateAndGainStart }): PointValues | null {
   const solved = capacitiveOperatingPointOf(circuit, fs, continued.start);
   if (solved === null) return null;
   continued.start = solved.solution;
@@ -285,15 +291,10 @@ function capacitivePoint(circuit: ParallelConverterCircuit, fs: number, continue
   };
 }
 
-/**
- * The domain of {@link lccOperatingPoint} checked against its time-domain simulation (the same
- * numbers; a test compares this sweep's notes with that function's).
- */
-const INDUCTIVE_TESTED = { fnMin: 0.6, fnMax: 1.6, qMin: 0.2, qMax: 2.5, aMin: 0.25, aMax: 2 } as const;
 const fha = new Float64Array(8);
 
 /** The inductive-filter point from the kernel, scaled as {@link lccOperatingPoint} scales it. */
-function inductivePoint(circuit: ParallelConverterCircuit, fs: number, continued: { start?: CapacitiveStart }): PointValues | null {
+function inductivePoint(circuit: ParallelConverterCircuit, fs: number, continued: { start?: StateAndGainStart }): PointValues | null {
   const { bridgeVoltage: vb, turnsRatio: n, resonantInductance: lr, parallelCapacitance: cp, seriesCapacitance: cs, loadResistance: rl } = circuit;
   const a = cp / cs;
   const zp = Math.sqrt(lr / cp);
@@ -310,18 +311,9 @@ function inductivePoint(circuit: ParallelConverterCircuit, fs: number, continued
   const turnOffCurrent = -solution.j0 * ib;
   const seriesPeak = solution.seriesPeak * vb;
   lccFirstHarmonic(a, zeta, theta, fha);
-  const cautions: Caution[] = [];
-  const dc = voltageCaution({ voltage: circuit.inputVoltage, waveform: "dc", location: "converter input" });
-  if (dc !== null) cautions.push(dc);
-  const acP = voltageCaution({ voltage: solution.parallelRms * vb, waveform: "ac", location: "parallel capacitor and transformer primary (RMS)" });
-  if (acP !== null) cautions.push(acP);
-  const acS = voltageCaution({ voltage: seriesPeak / Math.SQRT2, waveform: "ac", location: "series capacitor (AC part, RMS of a sine of the same peak)" });
-  if (acS !== null) cautions.push(acS);
+  const cautions = tankVoltageCautions(circuit.inputVoltage, solution.parallelRms * vb, seriesPeak);
   if (!(turnOffCurrent > 0)) cautions.push(hardSwitchingCaution(turnOffCurrent, " (capacitive operation, below the tank's zero-phase frequency)", "Raise the switching frequency."));
-  const t = INDUCTIVE_TESTED;
-  const validity = fn < t.fnMin || fn > t.fnMax || q < t.qMin || q > t.qMax || a < t.aMin || a > t.aMax
-    ? [outsideTestedDomainNote(`${t.fnMin} ≤ f_n ≤ ${t.fnMax}, ${t.qMin} ≤ Q ≤ ${t.qMax}, ${t.aMin} ≤ A ≤ ${t.aMax}`, "1e-10")]
-    : [];
+  const validity = testedDomainValidity(INDUCTIVE_TESTED, true, 0, fn, q, a);
   return {
     point: {
       switchingFrequency: fs,

@@ -16,13 +16,14 @@
  * $\zeta = Z_p/(n^2R_\mathrm{load})$. The half-wave antisymmetric steady state
  * $x(\Theta) = -x(0)$, $\Theta = \pi f_p/f_s$, $f_p = 1/(2\pi\sqrt{L_rC_p})$, with
  * $\frac1\Theta\int_0^\Theta|v|\,d\theta = M$ is solved by Newton's method (finite-difference
- * Jacobian, backtracking) on $(j_0, u_0, v_0, M)$ through an exact event-driven propagation:
+ * Jacobian, backtracking: the shared {@link StateAndGainSolver}) on $(j_0, u_0, v_0, M)$
+ * through an exact event-driven propagation:
  * each mode has a closed-form solution (sinusoid plus ramp) and each mode change is the first
  * crossing of such a function, found by {@link firstDownCrossing}.
  *
  * @packageDocumentation
  */
-import { HalfPeriodRecord, PeriodicNewton, STATE_AND_GAIN_NEWTON, type PeriodicSystem } from "./periodic-newton.js";
+import { HalfPeriodRecord, StateAndGainSolver, type StateAndGainStart, type StateAndGainSteadyState, type StateAndGainTopology } from "./periodic-newton.js";
 import { firstDownCrossing, rampSinusoidPeak, rampSinusoidSquareIntegral, sinusoidPeak, squareIntegral } from "./ramp-sinusoid.js";
 
 const MODE_Z = 0;
@@ -31,26 +32,11 @@ const MODE_N = 2;
 const LETTER = ["Z", "P", "N"] as const;
 const MAX_SEGMENTS = 64;
 
-/** The solved steady state, normalised. */
-export interface LccSteadyState {
-  gain: number;
-  j0: number;
-  u0: number;
-  v0: number;
-  /** Mode sequence of the positive half period ("NP", "ZP", "NZP", …). */
-  sequence: string;
-  durations: number[];
-  resonantRms: number;
-  resonantPeak: number;
-  seriesPeak: number;
-  parallelPeak: number;
-  parallelRms: number;
-  /** Fraction of the period with C_p clamped (mode Z). */
-  clampedFraction: number;
-  /** Mean of j over the positive half period (input current, units V_b/Z_p). */
-  inputMean: number;
-  residual: number;
-}
+/**
+ * The solved steady state, normalised (clampedFraction is the fraction of the period with C_p
+ * clamped, mode Z; the sequence reads "NP", "ZP", "NZP", …).
+ */
+export type LccSteadyState = StateAndGainSteadyState;
 
 const st = new Float64Array(3);
 /** The segments of the last propagation. */
@@ -185,29 +171,19 @@ function propagate(j0: number, u0: number, v0: number, m: number, a: number, zet
   st[2] = v;
 }
 
-/** Parameters of the solve, read by {@link lccSystem} (set before each solve). */
-let sysA = 0;
-let sysZeta = 0;
-let sysTheta = 0;
-const lccSystem: PeriodicSystem = {
-  residuals: (x, out) => residuals(x, sysA, sysZeta, sysTheta, out),
+const topology: StateAndGainTopology = {
+  letters: LETTER,
+  events,
+  end: st,
+  propagate,
+  // the rectified mean ⟨|v|⟩ against the gain
+  loadResidual: (m, _zeta, theta) => events.loadIntegral / theta / m - 1,
+  relaxedGain: (m, _zeta, theta) => {
+    const mean = events.loadIntegral / theta;
+    return mean > 0 ? 0.5 * m + 0.5 * mean : m;
+  },
 };
-
-const newton = new PeriodicNewton(4);
-/** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
-const y = newton.x;
-
-function residuals(x: Float64Array, a: number, zeta: number, theta: number, out: Float64Array): boolean {
-  const m = x[3] ?? 0;
-  if (!(m > 0)) return false;
-  propagate(x[0] ?? 0, x[1] ?? 0, x[2] ?? 0, m, a, zeta, theta, false);
-  if (events.overflow) return false;
-  out[0] = (st[0] ?? 0) + (x[0] ?? 0);
-  out[1] = (st[1] ?? 0) + (x[1] ?? 0);
-  out[2] = (st[2] ?? 0) + (x[2] ?? 0);
-  out[3] = events.loadIntegral / theta / m - 1;
-  return Number.isFinite(out[0] + out[1] + out[2] + out[3]);
-}
+const solver = new StateAndGainSolver(topology);
 
 /**
  * First-harmonic solution (phasors, bridge fundamental (4/π) sin(νθ), ν = π/Θ), normalised:
@@ -245,67 +221,18 @@ export function lccFirstHarmonic(a: number, zeta: number, theta: number, out: Fl
 
 const fhaScratch = new Float64Array(8);
 
-function tryFrom(j: number, u: number, v: number, m: number, a: number, zeta: number, theta: number): number {
-  y[0] = j;
-  y[1] = u;
-  y[2] = v;
-  y[3] = m;
-  sysA = a;
-  sysZeta = zeta;
-  sysTheta = theta;
-  return newton.solve(lccSystem, 4, STATE_AND_GAIN_NEWTON, theta);
-}
-
 /** Residual below which a solution is accepted (normalised; the Newton target is 1e-14). */
 export const LCC_TOLERANCE = 1e-10;
 
 /**
  * Solves the steady state for a = C_p/C_s ≥ 0, ζ = Z_p/(n²R) > 0 and half period Θ > 0
  * (normalised), from `start` when given (continuation from a neighbouring solution), else from
- * the first harmonic. Returns null when no consistent periodic solution was found.
+ * the first harmonic, else from the first harmonic relaxed over half periods. Returns null
+ * when no consistent periodic solution was found.
  */
-export function lccSteadyState(a: number, zeta: number, theta: number, start?: { j0: number; u0: number; v0: number; gain: number }): LccSteadyState | null {
+export function lccSteadyState(a: number, zeta: number, theta: number, start?: StateAndGainStart): LccSteadyState | null {
   lccFirstHarmonic(a, zeta, theta, fhaScratch);
-  let res = start === undefined ? Infinity : tryFrom(start.j0, start.u0, start.v0, start.gain, a, zeta, theta);
-  if (!(res < LCC_TOLERANCE)) res = tryFrom(fhaScratch[0] ?? 0, fhaScratch[1] ?? 0, fhaScratch[2] ?? 0, fhaScratch[3] ?? 1, a, zeta, theta);
-  if (!(res < LCC_TOLERANCE)) {
-    // relax: forward half periods with the gain updated from the rectified mean, then Newton
-    let j = fhaScratch[0] ?? 0;
-    let u = fhaScratch[1] ?? 0;
-    let v = fhaScratch[2] ?? 0;
-    let m = fhaScratch[3] ?? 1;
-    for (let i = 0; i < 400; i++) {
-      propagate(j, u, v, m, a, zeta, theta, false);
-      if (events.overflow) break;
-      j = -(st[0] ?? 0);
-      u = -(st[1] ?? 0);
-      v = -(st[2] ?? 0);
-      const mean = events.loadIntegral / theta;
-      if (mean > 0) m = 0.5 * m + 0.5 * mean;
-    }
-    res = tryFrom(j, u, v, m, a, zeta, theta);
-    if (!(res < LCC_TOLERANCE)) return null;
-  }
-  const m = y[3] ?? 0;
-  const j0 = y[0] ?? 0;
-  const u0 = y[1] ?? 0;
-  const v0 = y[2] ?? 0;
-  propagate(j0, u0, v0, m, a, zeta, theta, true);
-  const { sequence, durations } = events.summary(LETTER, theta);
-  return {
-    gain: m,
-    j0,
-    u0,
-    v0,
-    sequence,
-    durations,
-    resonantRms: Math.sqrt(events.currentSquareIntegral / theta),
-    resonantPeak: events.currentPeak,
-    seriesPeak: events.capacitorPeak,
-    parallelPeak: events.thirdStatePeak,
-    parallelRms: Math.sqrt(Math.max(0, events.rectifierSquareIntegral) / theta),
-    clampedFraction: events.clampedTime / theta,
-    inputMean: events.currentIntegral / theta,
-    residual: res,
-  };
+  const res = solver.solveFromStarts(start, fhaScratch, a, zeta, theta, LCC_TOLERANCE);
+  if (!(res < LCC_TOLERANCE)) return null;
+  return solver.steadyState(a, zeta, theta, solver.x[2] ?? 0, res);
 }

@@ -4,17 +4,17 @@
  *
  * @packageDocumentation
  */
-import {
-  requireKnownKeys,
-  requireObject,
-  requireOneOf,
-  requirePositive,
-  voltageCaution,
-  type Caution,
-  type ValidityNote,
-} from "../core/index.js";
+import type { ValidityNote, Caution } from "../core/index.js";
 import { lccFirstHarmonic, lccSteadyState } from "./lcc-kernel.js";
-import { hardSwitchingCaution, noSteadyStateError, outsideTestedDomainNote } from "./steady-state-notes.js";
+import {
+  INDUCTIVE_TESTED,
+  normalisedParallelPoint,
+  readParallelConverterOptions,
+  tankVoltageCautions,
+  testedDomainText,
+  testedDomainValidity,
+} from "./parallel-converter.js";
+import { hardSwitchingCaution, noSteadyStateError } from "./steady-state-notes.js";
 
 /**
  * Options of {@link parallelResonantOperatingPoint}.
@@ -128,42 +128,17 @@ export interface ParallelConverterOperatingPoint {
   readonly validity: readonly ValidityNote[];
 }
 
-const PRC_KEYS = [
-  "bridge", "inputVoltage", "turnsRatio", "resonantInductance", "parallelCapacitance", "switchingFrequency", "loadResistance",
-] as const;
-const LCC_KEYS = [...PRC_KEYS, "seriesCapacitance"] as const;
-
-/** Domain checked against the time-domain simulation (fixture prc-lcc-steady-state.json). */
-const TESTED = { fnMin: 0.6, fnMax: 1.6, qMin: 0.2, qMax: 2.5, aMin: 0.25, aMax: 2 };
-
 const fha = new Float64Array(8);
 
 function operatingPoint(where: string, options: LccOperatingPointOptions | ParallelResonantOperatingPointOptions, lcc: boolean): ParallelConverterOperatingPoint {
-  requireObject(where, "options", options);
-  requireKnownKeys(where, "options", options, lcc ? LCC_KEYS : PRC_KEYS);
-  const bridge = requireOneOf(where, "bridge", options.bridge, ["half", "full"] as const);
-  const vin = requirePositive(where, "inputVoltage", options.inputVoltage, "V");
-  const n = requirePositive(where, "turnsRatio", options.turnsRatio, "");
-  const lr = requirePositive(where, "resonantInductance", options.resonantInductance, "H");
-  const cp = requirePositive(where, "parallelCapacitance", options.parallelCapacitance, "F");
-  const cs = lcc ? requirePositive(where, "seriesCapacitance", (options as LccOperatingPointOptions).seriesCapacitance, "F") : Infinity;
-  const fs = requirePositive(where, "switchingFrequency", options.switchingFrequency, "Hz");
-  const rl = requirePositive(where, "loadResistance", options.loadResistance, "Ω");
-
-  const vb = bridge === "half" ? vin / 2 : vin;
-  const a = lcc ? cp / cs : 0;
-  const zp = Math.sqrt(lr / cp);
-  const fp = 1 / (2 * Math.PI * Math.sqrt(lr * cp));
-  const theta = (Math.PI * fp) / fs;
-  const zeta = zp / (n * n * rl);
-  const cr = lcc ? cs : cp;
-  const fr = 1 / (2 * Math.PI * Math.sqrt(lr * cr));
-  const fn = fs / fr;
+  const { circuit, switchingFrequency: fs } = readParallelConverterOptions(where, options, lcc, "before-load");
+  const { inputVoltage: vin, bridgeVoltage: vb, turnsRatio: n, loadResistance: rl } = circuit;
+  const { a, zp, theta, zeta, resonantImpedance, fr, fn } = normalisedParallelPoint(circuit, fs);
   const rac = (Math.PI * Math.PI * n * n * rl) / 8;
-  const q = Math.sqrt(lr / cr) / rac;
+  const q = resonantImpedance / rac;
   const solution = lccSteadyState(a, zeta, theta);
   if (solution === null) {
-    throw noSteadyStateError(where, fs, `f_n = ${fn.toPrecision(4)}, Q = ${q.toPrecision(4)}${lcc ? `, A = ${a.toPrecision(4)}` : ""}`, `${TESTED.fnMin} ≤ f_n ≤ ${TESTED.fnMax}, ${TESTED.qMin} ≤ Q ≤ ${TESTED.qMax}`);
+    throw noSteadyStateError(where, fs, `f_n = ${fn.toPrecision(4)}, Q = ${q.toPrecision(4)}${lcc ? `, A = ${a.toPrecision(4)}` : ""}`, testedDomainText(INDUCTIVE_TESTED, false));
   }
   const ib = vb / zp;
   const m = solution.gain;
@@ -185,22 +160,11 @@ function operatingPoint(where: string, options: LccOperatingPointOptions | Paral
   const seriesPeak = lcc ? solution.seriesPeak * vb : 0;
   const parallelPeak = solution.parallelPeak * vb;
 
-  const cautions: Caution[] = [];
-  const dc = voltageCaution({ voltage: vin, waveform: "dc", location: "converter input" });
-  if (dc !== null) cautions.push(dc);
-  const acP = voltageCaution({ voltage: solution.parallelRms * vb, waveform: "ac", location: "parallel capacitor and transformer primary (RMS)" });
-  if (acP !== null) cautions.push(acP);
-  if (lcc) {
-    const acS = voltageCaution({ voltage: seriesPeak / Math.SQRT2, waveform: "ac", location: "series capacitor (AC part, RMS of a sine of the same peak)" });
-    if (acS !== null) cautions.push(acS);
-  }
+  const cautions: Caution[] = tankVoltageCautions(vin, solution.parallelRms * vb, lcc ? seriesPeak : null);
   if (!(turnOffCurrent > 0)) {
     cautions.push(hardSwitchingCaution(turnOffCurrent, " (capacitive operation, below the tank's zero-phase frequency)", "Raise the switching frequency."));
   }
-  const validity: ValidityNote[] = [];
-  if (fn < TESTED.fnMin || fn > TESTED.fnMax || q < TESTED.qMin || q > TESTED.qMax || (lcc && (a < TESTED.aMin || a > TESTED.aMax))) {
-    validity.push(outsideTestedDomainNote(`${TESTED.fnMin} ≤ f_n ≤ ${TESTED.fnMax}, ${TESTED.qMin} ≤ Q ≤ ${TESTED.qMax}${lcc ? `, ${TESTED.aMin} ≤ A ≤ ${TESTED.aMax}` : ""}`, "1e-10"));
-  }
+  const validity = testedDomainValidity(INDUCTIVE_TESTED, lcc, 0, fn, q, a);
   return {
     outputVoltage: vout,
     gain: m,

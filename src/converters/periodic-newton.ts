@@ -19,7 +19,14 @@
  * A third topology uses it so: implement {@link PeriodicSystem} (an object whose `residuals`
  * reads the topology's parameters from its own fields, so no closure is made per call), fill
  * {@link PeriodicNewton.x}, call {@link PeriodicNewton.solve} with its {@link NewtonSettings},
- * and read the solution back from `x`.
+ * and read the solution back from `x`. A topology solved on its state and gain alone (the
+ * LCC and parallel-resonant kernels) gives its propagation and load balance to
+ * {@link StateAndGainSolver} instead, which holds the residuals, the starts (continuation,
+ * first harmonic, relaxation) and the figures of the solution.
+ *
+ * Size: the generic Newton solver, the half-period record and the state-and-gain scaffolding
+ * built on both are one family, each part short; the LCC kernels and the LLC sequence solve
+ * read them from this one place.
  *
  * @packageDocumentation
  */
@@ -323,5 +330,163 @@ export class HalfPeriodRecord {
       durations.push(tau);
     }
     return { sequence, durations };
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// Topologies solved on their state and gain alone (the LCC and parallel-resonant kernels).
+
+/** A start of a state-and-gain solve: a previous solution (continuation). */
+export interface StateAndGainStart {
+  readonly j0: number;
+  readonly u0: number;
+  readonly v0: number;
+  readonly gain: number;
+}
+
+/**
+ * What a topology solved on its state and gain alone gives {@link StateAndGainSolver}: its
+ * exact propagation of the positive half period from the states (j, u, v) with the gain m,
+ * for the capacitance ratio a = C_p/C_s, the load ζ = Z_p/(n²R_load) and the half period Θ
+ * (normalised), and its load balance.
+ */
+export interface StateAndGainTopology {
+  /** Letter of each mode code (for {@link HalfPeriodRecord.summary}). */
+  readonly letters: readonly string[];
+  /** The record the propagation fills: segments and load integral, with `record` the waveform totals. */
+  readonly events: HalfPeriodRecord;
+  /** End state (j, u, v) of the last propagation. */
+  readonly end: Float64Array;
+  /** Propagates the positive half period from (j, u, v) with gain m into `events` and `end`. */
+  propagate(j: number, u: number, v: number, m: number, a: number, zeta: number, theta: number, record: boolean): void;
+  /** Load-balance residual of the last propagation at gain m (0 at the steady state). */
+  loadResidual(m: number, zeta: number, theta: number): number;
+  /** The relaxation's gain for the next half period, from the last propagation's load integral. */
+  relaxedGain(m: number, zeta: number, theta: number): number;
+}
+
+/** The figures every state-and-gain kernel reports, normalised (its kernel states the units). */
+export interface StateAndGainSteadyState {
+  gain: number;
+  j0: number;
+  u0: number;
+  v0: number;
+  /** Mode sequence of the positive half period. */
+  sequence: string;
+  durations: number[];
+  resonantRms: number;
+  resonantPeak: number;
+  seriesPeak: number;
+  parallelPeak: number;
+  parallelRms: number;
+  /** Fraction of the period in the clamped modes. */
+  clampedFraction: number;
+  /** Mean of j over the positive half period (input current). */
+  inputMean: number;
+  /** Boundary-condition residual of the accepted solution. */
+  residual: number;
+}
+
+/**
+ * Newton's method on x = (j0, u0, v0, M) for a {@link StateAndGainTopology}: the residuals are
+ * the half-wave antisymmetry x(Θ) + x(0) of the states and the topology's load balance, solved
+ * with {@link STATE_AND_GAIN_NEWTON}; the starts, and the figures of the solution.
+ */
+export class StateAndGainSolver implements PeriodicSystem {
+  private readonly newton = new PeriodicNewton(4);
+  /** The unknowns (j0, u0, v0, M): the starting point, then the solution. */
+  readonly x: Float64Array = this.newton.x;
+  private readonly topology: StateAndGainTopology;
+  private a = 0;
+  private zeta = 0;
+  private theta = 0;
+
+  constructor(topology: StateAndGainTopology) {
+    this.topology = topology;
+  }
+
+  residuals(x: Float64Array, out: Float64Array): boolean {
+    const m = x[3] ?? 0;
+    if (!(m > 0)) return false;
+    const t = this.topology;
+    t.propagate(x[0] ?? 0, x[1] ?? 0, x[2] ?? 0, m, this.a, this.zeta, this.theta, false);
+    if (t.events.overflow) return false;
+    const end = t.end;
+    out[0] = (end[0] ?? 0) + (x[0] ?? 0);
+    out[1] = (end[1] ?? 0) + (x[1] ?? 0);
+    out[2] = (end[2] ?? 0) + (x[2] ?? 0);
+    out[3] = t.loadResidual(m, this.zeta, this.theta);
+    return Number.isFinite(out[0] + out[1] + out[2] + out[3]);
+  }
+
+  /** Newton from (j, u, v, m) for (a, ζ, Θ); leaves the last iterate in `x` and returns its residual norm. */
+  solveFrom(j: number, u: number, v: number, m: number, a: number, zeta: number, theta: number): number {
+    const x = this.x;
+    x[0] = j;
+    x[1] = u;
+    x[2] = v;
+    x[3] = m;
+    this.a = a;
+    this.zeta = zeta;
+    this.theta = theta;
+    return this.newton.solve(this, 4, STATE_AND_GAIN_NEWTON, theta);
+  }
+
+  /**
+   * Newton from `start` when given; where that does not reach `tolerance`, from `seed` (j, u,
+   * v, m in its first four entries: the first harmonic); where that does not either, from the
+   * seed relaxed over up to 400 half periods (each from the negated end state of the last, the
+   * gain from {@link StateAndGainTopology.relaxedGain}). Returns the last residual norm.
+   */
+  solveFromStarts(start: StateAndGainStart | undefined, seed: Float64Array, a: number, zeta: number, theta: number, tolerance: number): number {
+    let res = start === undefined ? Infinity : this.solveFrom(start.j0, start.u0, start.v0, start.gain, a, zeta, theta);
+    if (!(res < tolerance)) res = this.solveFrom(seed[0] ?? 0, seed[1] ?? 0, seed[2] ?? 0, seed[3] ?? 1, a, zeta, theta);
+    if (res < tolerance) return res;
+    const t = this.topology;
+    const end = t.end;
+    let j = seed[0] ?? 0;
+    let u = seed[1] ?? 0;
+    let v = seed[2] ?? 0;
+    let m = seed[3] ?? 1;
+    for (let i = 0; i < 400; i++) {
+      t.propagate(j, u, v, m, a, zeta, theta, false);
+      if (t.events.overflow) break;
+      j = -(end[0] ?? 0);
+      u = -(end[1] ?? 0);
+      v = -(end[2] ?? 0);
+      m = t.relaxedGain(m, zeta, theta);
+    }
+    return this.solveFrom(j, u, v, m, a, zeta, theta);
+  }
+
+  /**
+   * The figures of the solution in `x`, with the start voltage v0 (a kernel may clamp it):
+   * one more propagation that records the waveforms (the topology's `events` keep its totals).
+   */
+  steadyState(a: number, zeta: number, theta: number, v0: number, residual: number): StateAndGainSteadyState {
+    const x = this.x;
+    const m = x[3] ?? 0;
+    const j0 = x[0] ?? 0;
+    const u0 = x[1] ?? 0;
+    const t = this.topology;
+    t.propagate(j0, u0, v0, m, a, zeta, theta, true);
+    const events = t.events;
+    const { sequence, durations } = events.summary(t.letters, theta);
+    return {
+      gain: m,
+      j0,
+      u0,
+      v0,
+      sequence,
+      durations,
+      resonantRms: Math.sqrt(events.currentSquareIntegral / theta),
+      resonantPeak: events.currentPeak,
+      seriesPeak: events.capacitorPeak,
+      parallelPeak: events.thirdStatePeak,
+      parallelRms: Math.sqrt(Math.max(0, events.rectifierSquareIntegral) / theta),
+      clampedFraction: events.clampedTime / theta,
+      inputMean: events.currentIntegral / theta,
+      residual,
+    };
   }
 }

@@ -8,6 +8,13 @@
  * largest solution component) against numpy.linalg.solve (LAPACK zgesv) on the systems of
  * `test/fixtures/toolkit/complex-dense-lu.json` (orders 1–12, condition numbers up to about 1e4).
  *
+ * `complexGeneralSolve` (complex-symmetric-solve.ts) runs the same elimination for the reduced
+ * models, with squared-modulus pivots, reciprocal multipliers and the right-hand sides carried
+ * along. The two are kept apart on purpose: basing either on the other changes rounding in its
+ * callers by more than 1e-14 relative (measured on 2026-12-04: the field solver's results by up
+ * to 2.3e-11 with this file on the other's arithmetic; workCoilImpedance by up to 1.8e-13 the
+ * other way round).
+ *
  * @see G. H. Golub and C. F. Van Loan, Matrix Computations, 4th ed., Johns Hopkins 2013,
  *   Algorithm 3.4.1 (Gaussian elimination with partial pivoting).
  * @packageDocumentation
