@@ -45,6 +45,18 @@ function threadCpu(): Map<string, number> | null {
   return out;
 }
 
+/**
+ * Steal time so far [s] (Linux `/proc/stat`, summed over the cores): time the host gave this
+ * virtual machine's CPUs to others while they had work; `null` elsewhere. A wall-clock ratio
+ * under its CPU-time estimate with steal time growing during the run measures the host.
+ */
+function stealTime(): number | null {
+  if (!existsSync("/proc/stat")) return null;
+  const f = readFileSync("/proc/stat", "utf8").split("\n")[0]?.trim().split(/\s+/) ?? [];
+  const steal = Number(f[8]);
+  return Number.isFinite(steal) ? steal / 100 : null;
+}
+
 /** CPU used since `before` [s]: main thread, the `k` busiest other threads (the workers), the rest (V8's helpers). */
 function cpuSplit(before: Map<string, number>, after: Map<string, number>, k: number): { main: number; workers: number; helpers: number; each: number[] } {
   const used = [...after].map(([tid, t]) => [tid, t - (before.get(tid) ?? 0)] as const);
@@ -117,9 +129,11 @@ if (what === "scale") {
   const values = Array.from({ length: n }, (_, i) => 2e-6 + i * 2e-8);
   const spec = { field: "capacitor.capacitance", values, heatUp: true };
   const start = threadCpu();
+  const steal0 = stealTime();
   const t1 = performance.now();
   sweepHeater(race, spec);
   const one = performance.now() - t1;
+  const steal1 = stealTime();
   const before = threadCpu();
   let after: Map<string, number> | null = null;
   const t2 = performance.now();
@@ -132,6 +146,7 @@ if (what === "scale") {
     },
   });
   const two = performance.now() - t2;
+  const steal2 = stealTime();
   let helpers = "";
   if (before !== null && after !== null) {
     const two = cpuSplit(before, after, 2);
@@ -144,6 +159,9 @@ if (what === "scale") {
       const mainOne = (before.get(String(process.pid)) ?? 0) - (start.get(String(process.pid)) ?? 0);
       helpers += `; CPU time: calling thread ${mainOne.toFixed(2)} s, workers ${two.each.map((t) => t.toFixed(2)).join(" + ")} s, helpers ${h.toFixed(2)} s, main ${two.main.toFixed(2)} s (estimate on two free cores ${cpuSpeedup({ workers: mainOne }, two).toFixed(2)}x)`;
     }
+  }
+  if (steal0 !== null && steal1 !== null && steal2 !== null) {
+    helpers += `; host steal time ${(steal1 - steal0).toFixed(1)} s (calling thread), ${(steal2 - steal1).toFixed(1)} s (two workers)`;
   }
   const mb = (b: number): string => (b / 2 ** 20).toFixed(0);
   const m = process.memoryUsage();
