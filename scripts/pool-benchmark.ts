@@ -6,15 +6,22 @@
  */
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
+import { pathToFileURL } from "node:url";
 import type { HeaterDescription } from "../src/index.js";
+
+// `--dist=<folder>` measures another build (e.g. an older one kept aside, for before/after
+// rounds run alternately); the other arguments are positional
+const distArg = process.argv.find((a) => a.startsWith("--dist="));
+const args = process.argv.filter((a) => !a.startsWith("--dist="));
+const distUrl = distArg === undefined ? new URL("../dist/", import.meta.url) : pathToFileURL(`${distArg.slice("--dist=".length).replace(/\/$/, "")}/`);
 
 // the built package (its worker script lives in dist), typed by the sources so that the type
 // check passes on a clean clone before the build
-const { sweepHeater, sweepHeaterStream } = (await import(new URL("../dist/index.js", import.meta.url).href)) as typeof import("../src/index.js");
+const { sweepHeater, sweepHeaterStream } = (await import(new URL("index.js", distUrl).href)) as typeof import("../src/index.js");
 
 const race = JSON.parse(readFileSync(new URL("../docs/examples/study-bearing-race.json", import.meta.url), "utf8")) as HeaterDescription;
-const what = process.argv[2] ?? "speedup";
-console.log(`node ${process.version}, ${availableParallelism()} cores, load average ${loadavg().map((l) => l.toFixed(2)).join(" ")}`);
+const what = args[2] ?? "speedup";
+console.log(`${distArg ?? "dist"}: node ${process.version}, ${availableParallelism()} cores, load average ${loadavg().map((l) => l.toFixed(2)).join(" ")}`);
 
 /**
  * CPU time [s] of each thread of this process (Linux: /proc/self/task), keyed by thread id; null
@@ -38,29 +45,52 @@ function threadCpu(): Map<string, number> | null {
   return out;
 }
 
+/**
+ * Steal time so far [s] (Linux `/proc/stat`, summed over the cores): time the host gave this
+ * virtual machine's CPUs to others while they had work; `null` elsewhere. A wall-clock ratio
+ * under its CPU-time estimate with steal time growing during the run measures the host.
+ */
+function stealTime(): number | null {
+  if (!existsSync("/proc/stat")) return null;
+  const f = readFileSync("/proc/stat", "utf8").split("\n")[0]?.trim().split(/\s+/) ?? [];
+  const steal = Number(f[8]);
+  return Number.isFinite(steal) ? steal / 100 : null;
+}
+
 /** CPU used since `before` [s]: main thread, the `k` busiest other threads (the workers), the rest (V8's helpers). */
-function cpuSplit(before: Map<string, number>, after: Map<string, number>, k: number): { main: number; workers: number; helpers: number } {
+function cpuSplit(before: Map<string, number>, after: Map<string, number>, k: number): { main: number; workers: number; helpers: number; each: number[] } {
   const used = [...after].map(([tid, t]) => [tid, t - (before.get(tid) ?? 0)] as const);
   const main = used.find(([tid]) => tid === String(process.pid))?.[1] ?? 0;
   const others = used.filter(([tid]) => tid !== String(process.pid)).map(([, t]) => t).sort((a, b) => b - a);
-  const workers = others.slice(0, k).reduce((a, b) => a + b, 0);
+  const each = others.slice(0, k);
+  const workers = each.reduce((a, b) => a + b, 0);
   const helpers = others.slice(k).reduce((a, b) => a + b, 0);
-  return { main, workers, helpers };
+  return { main, workers, helpers, each };
+}
+
+/**
+ * The speed-up that the CPU times of two runs predict for two free cores: the one-worker run
+ * takes its worker's JavaScript time (its helpers use the other core), the two-worker run the
+ * larger of its busiest worker and half of all its threads' time (helpers included).
+ */
+function cpuSpeedup(one: { workers: number }, two: { main: number; workers: number; helpers: number; each: number[] }): number {
+  return one.workers / Math.max(two.each[0] ?? 0, (two.main + two.workers + two.helpers) / 2);
 }
 
 if (what === "speedup") {
   // studies with the electro-thermal heat-up: several milliseconds each
-  const n = Number(process.argv[3] ?? 120);
+  const n = Number(args[3] ?? 120);
   const values = Array.from({ length: n }, (_, i) => 2e-6 + i * 2e-8);
   const spec = { field: "capacitor.capacitance", values, heatUp: true };
   const t0 = performance.now();
   sweepHeater(race, { ...spec, values: values.slice(0, 10) });
   const perDesign = (performance.now() - t0) / 10;
   console.log(`one design: ${perDesign.toFixed(2)} ms (calling thread)`);
-  for (let round = 0; round < Number(process.argv[4] ?? 3); round++) {
+  for (let round = 0; round < Number(args[4] ?? 3); round++) {
     const times: Record<string, number> = {};
     const cores: Record<string, number> = {};
     const split: Record<string, string> = {};
+    const parts: Record<string, ReturnType<typeof cpuSplit>> = {};
     for (const workers of [1, 2]) {
       const before = threadCpu();
       const t = performance.now();
@@ -74,8 +104,9 @@ if (what === "speedup") {
       // CPU time of all threads over wall time: how many cores the run actually got
       cores[workers] = (used.user + used.system) / 1000 / (times[workers] ?? NaN);
       if (before !== null && after !== null) {
-        const { main, workers: js, helpers } = cpuSplit(before, after, workers);
-        split[workers] = `main ${main.toFixed(2)} s, workers ${js.toFixed(2)} s, V8 helpers ${helpers.toFixed(2)} s`;
+        const part = cpuSplit(before, after, workers);
+        parts[workers] = part;
+        split[workers] = `main ${part.main.toFixed(2)} s, workers ${part.each.map((t) => t.toFixed(2)).join(" + ")} s, V8 helpers ${part.helpers.toFixed(2)} s`;
       }
     }
     const one = times[1] ?? NaN;
@@ -86,30 +117,55 @@ if (what === "speedup") {
         `load average ${loadavg()[0]?.toFixed(1) ?? "?"}`,
     );
     if (split[1] !== undefined && split[2] !== undefined) console.log(`  CPU by thread: 1 worker: ${split[1]}; 2 workers: ${split[2]}`);
+    const [p1, p2] = [parts[1], parts[2]];
+    if (p1 !== undefined && p2 !== undefined) console.log(`  CPU-time estimate of the speed-up on two free cores: ${cpuSpeedup(p1, p2).toFixed(2)}x`);
   }
 }
 
 if (what === "scale") {
   // the target in one line: a sweep on the calling thread (one thread, as a script runs it,
   // starting cold) against the same sweep on two workers; studies with the heat-up
-  const n = Number(process.argv[3] ?? 120);
+  const n = Number(args[3] ?? 120);
   const values = Array.from({ length: n }, (_, i) => 2e-6 + i * 2e-8);
   const spec = { field: "capacitor.capacitance", values, heatUp: true };
+  const start = threadCpu();
+  const steal0 = stealTime();
   const t1 = performance.now();
   sweepHeater(race, spec);
   const one = performance.now() - t1;
+  const steal1 = stealTime();
   const before = threadCpu();
   let after: Map<string, number> | null = null;
   const t2 = performance.now();
-  await sweepHeater(race, spec, { workers: 2, onProgress: (p) => { if (p.done === p.total) after = threadCpu(); } });
+  let rss = 0;
+  await sweepHeater(race, spec, {
+    workers: 2,
+    onProgress: (p) => {
+      if (p.done === p.total) after = threadCpu();
+      rss = Math.max(rss, process.memoryUsage.rss());
+    },
+  });
   const two = performance.now() - t2;
+  const steal2 = stealTime();
   let helpers = "";
   if (before !== null && after !== null) {
-    const { workers: js, helpers: h } = cpuSplit(before, after, 2);
+    const two = cpuSplit(before, after, 2);
+    const { workers: js, helpers: h } = two;
     // V8's helper threads (compilation, garbage collection) over the workers' JavaScript time:
     // with both cores busy they take turns with the workers, so 2 / (1 + h) bounds the speed-up
     helpers = `; V8 helpers ${((100 * h) / js).toFixed(1)} % of the workers' CPU (bound 2/(1+h) = ${(2 / (1 + h / js)).toFixed(2)}x)`;
+    if (start !== null) {
+      // the calling thread's own CPU time for the one-thread sweep, against the two-worker run's
+      const mainOne = (before.get(String(process.pid)) ?? 0) - (start.get(String(process.pid)) ?? 0);
+      helpers += `; CPU time: calling thread ${mainOne.toFixed(2)} s, workers ${two.each.map((t) => t.toFixed(2)).join(" + ")} s, helpers ${h.toFixed(2)} s, main ${two.main.toFixed(2)} s (estimate on two free cores ${cpuSpeedup({ workers: mainOne }, two).toFixed(2)}x)`;
+    }
   }
+  if (steal0 !== null && steal1 !== null && steal2 !== null) {
+    helpers += `; host steal time ${(steal1 - steal0).toFixed(1)} s (calling thread), ${(steal2 - steal1).toFixed(1)} s (two workers)`;
+  }
+  const mb = (b: number): string => (b / 2 ** 20).toFixed(0);
+  const m = process.memoryUsage();
+  helpers += `; at the end: rss ${mb(rss)} MiB during the run (workers alive), ${mb(m.rss)} MiB after, main heap ${mb(m.heapUsed)} MiB`;
   console.log(
     `speed-up ${(one / two).toFixed(2)}x with 2 workers over the calling thread (target >= 1.8x): ${n} designs of ${(one / n).toFixed(0)} ms, ` +
       `${(one / 1000).toFixed(1)} s -> ${(two / 1000).toFixed(1)} s${helpers}; load average ${loadavg()[0]?.toFixed(1) ?? "?"} (needs an idle machine)`,
@@ -119,7 +175,7 @@ if (what === "scale") {
 if (what === "first") {
   // a thread's fixed cost: CPU time of this thread and of V8's helpers per study, one design
   // per sweep on the calling thread (the first study builds the coil model and compiles it)
-  const n = Number(process.argv[3] ?? 20);
+  const n = Number(args[3] ?? 20);
   const mainCpu = (m: Map<string, number>): number => m.get(String(process.pid)) ?? 0;
   const rest = (m: Map<string, number>): number => [...m].reduce((s, [tid, t]) => (tid === String(process.pid) ? s : s + t), 0);
   const first = threadCpu();
@@ -136,8 +192,8 @@ if (what === "first") {
 if (what === "memory") {
   // "rows": designs whose value the reader rejects (a negative capacitance): each row is cheap,
   // so a 10⁶-row run exercises the pool, the transfer and the ordering at full length
-  const n = Number(process.argv[3] ?? 100_000);
-  const cheap = process.argv[4] === "rows";
+  const n = Number(args[3] ?? 100_000);
+  const cheap = args[4] === "rows";
   const values = Array.from({ length: n }, (_, i) => (cheap ? -1e-6 - (i % 1000) * 1e-9 : 1e-6 + (i % 1000) * 1e-8));
   const mb = (b: number): string => (b / 2 ** 20).toFixed(1);
   let count = 0;

@@ -12,7 +12,10 @@ import { skinDepth } from "../conductors/index.js";
 import { resistivityAt } from "../materials/index.js";
 import { MU_0 } from "../units/index.js";
 import { prepareWorkCoil } from "../workpiece/index.js";
-import { nonMagneticWeight, prepareShortPartFactor, shortPartSection, shortPartTier } from "../workpiece/work-coil-short-part.js";
+import { nonMagneticWeight, prepareShortPartFactor, shortPartFactorData, shortPartSection, shortPartTier } from "../workpiece/work-coil-short-part.js";
+import type { ShortPartFactorData } from "../workpiece/work-coil-short-part.js";
+import { reducedWorkCoilData, reducedWorkCoilFromData } from "../workpiece/work-coil-impedance.js";
+import type { ReducedWorkCoilData } from "../workpiece/work-coil-impedance.js";
 import type { PreparedWorkCoil, ReducedWorkCoil, WorkCoilConductor, WorkCoilPart, WorkCoilPancake, WorkCoilSolenoid } from "../workpiece/index.js";
 import { SHORT_PART_ERROR, STUDY_COIL_REFINEMENT } from "./operating-point-accuracy.js";
 import type { CoilProperties, CoilState } from "./operating-point-types.js";
@@ -110,6 +113,73 @@ export function studyBand(d: ResolvedHeaterDescription, props: CoilProperties): 
   return [2 ** Math.floor(Math.log2(lo)), 2 ** Math.ceil(Math.log2(hi))];
 }
 
+/** The study's coil and part as model inputs, the band, and the cache key of their model. */
+function cellKey(d: ResolvedHeaterDescription, props: CoilProperties): { coil: WorkCoilSolenoid | WorkCoilPancake; part: WorkCoilPart; fMin: number; fMax: number; key: string } {
+  const coil = workCoilOf(d, props);
+  const part = workPartOf(d);
+  const [fMin, fMax] = studyBand(d, props);
+  return { coil, part, fMin, fMax, key: JSON.stringify([coil, part, fMin, fMax]) };
+}
+
+/** The cache key of the coil-impedance model a description's studies use (coil, part geometry and band). */
+export function cellModelKey(d: ResolvedHeaterDescription, props: CoilProperties): string {
+  return cellKey(d, props).key;
+}
+
+/**
+ * A coil-impedance model built on one thread, as plain data for another (a worker of the pool):
+ * the reduced model and, for a part shorter than the coil, the end-effect factors with their
+ * tables so far. Every number in it is a pure function of the cache key, so a thread that
+ * starts from it computes what it would have built itself, bit for bit.
+ */
+export interface CellModelData {
+  readonly key: string;
+  readonly coil: WorkCoilSolenoid | WorkCoilPancake;
+  readonly part: WorkCoilPart;
+  readonly fMin: number;
+  readonly fMax: number;
+  readonly reduced: ReducedWorkCoilData;
+  readonly ends: readonly { readonly key: string; readonly copper: number; readonly factor: ShortPartFactorData; readonly cells: readonly (readonly [number, number, number])[] }[];
+}
+
+/**
+ * The model this thread has built for a description (its coil, part and band), as data for
+ * {@link importCellModels} on another thread; empty when there is none (not built yet, outside
+ * the model's domain, or a model that calls the full solve).
+ */
+export function exportCellModels(d: ResolvedHeaterDescription, props: CoilProperties): CellModelData[] {
+  const { coil, part, fMin, fMax, key } = cellKey(d, props);
+  const slot = cellCache.get(key);
+  const entry = slot?.entry ?? null;
+  if (slot === undefined || slot.failed || entry === null) return [];
+  const reduced = reducedWorkCoilData(entry.reduced);
+  if (reduced === null) return [];
+  const ends: CellModelData["ends"][number][] = [];
+  for (const [k, e] of slot.ends) {
+    const factor = shortPartFactorData(e.factor);
+    if (factor === null) return [];
+    ends.push({ key: k, copper: e.copper, factor, cells: Array.from(e.cells, ([n, [a, p]]) => [n, a, p] as const) });
+  }
+  return [{ key, coil, part, fMin, fMax, reduced, ends }];
+}
+
+/** Takes models built on another thread ({@link exportCellModels}) into this thread's cache (keys already there are kept). */
+export function importCellModels(models: readonly CellModelData[]): void {
+  for (const m of models) {
+    if (cellCache.has(m.key)) continue;
+    // the prepared coil builds its mesh only when first used (here: a short part's exact factor
+    // at a table node not handed over)
+    const prepared = prepareWorkCoil({ coil: m.coil, frequency: m.fMax, refinement: STUDY_COIL_REFINEMENT });
+    const ends = new Map<string, EndFactors>();
+    for (const e of m.ends) {
+      const factor = prepareShortPartFactor(e.factor.geometry, e.factor.nodes);
+      ends.set(e.key, { copper: e.copper, factor, cells: new Map(e.cells.map(([n, a, p]) => [n, [a, p]])) });
+    }
+    if (cellCache.size >= 64) cellCache.delete(cellCache.keys().next().value as string);
+    cellCache.set(m.key, { coil: m.coil, part: m.part, entry: { prepared, reduced: reducedWorkCoilFromData(m.reduced), fMin: m.fMin, fMax: m.fMax }, failed: false, ends });
+  }
+}
+
 /**
  * End effects of a part shorter than the coil: the copper change's factor (exact short
  * non-magnetic part over the long one at the start resistivity), the surface-impedance model's
@@ -143,10 +213,7 @@ function complexRatio(a: number, b: number, c: number, d: number): [number, numb
  * is scaled by the non-magnetic factor. Errors: {@link SHORT_PART_ERROR}.
  */
 export function cellState(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number, resistivity: number, relativePermeability: number, withPart: boolean): CoilState | null {
-  const coil = workCoilOf(d, props);
-  const part = workPartOf(d);
-  const [fMin, fMax] = studyBand(d, props);
-  const key = JSON.stringify([coil, part, fMin, fMax]);
+  const { coil, part, fMin, fMax, key } = cellKey(d, props);
   let slot = cellCache.get(key);
   if (slot === undefined) {
     slot = { coil, part, entry: null, failed: false, ends: new Map() };

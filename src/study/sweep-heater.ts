@@ -1,6 +1,9 @@
 /**
  * Sweeping one field of a heater description.
  *
+ * Size: the sweep's checks, the rows' context for a pool (with the coil models handed to the
+ * workers) and the public forms (table, promise, stream) with their documentation.
+ *
  * @packageDocumentation
  */
 import { InputError, nearestName, requireKnownKeys } from "../core/index.js";
@@ -11,6 +14,9 @@ import { studyHeater } from "./study-heater.js";
 import { checkPoolOptions, runPool } from "./worker-pool.js";
 import type { HeaterPoolOptions } from "./worker-pool.js";
 import { summarise } from "./summary.js";
+import { cellModelKey, exportCellModels, importCellModels } from "./operating-point-cells.js";
+import type { CellModelData } from "./operating-point-cells.js";
+import { coilProperties } from "./operating-point-coil.js";
 import type { HeaterSummary } from "./summary.js";
 
 /**
@@ -148,7 +154,71 @@ interface SweepContext {
   readonly field: string;
   readonly heatUp: boolean;
   readonly requireUnits: boolean;
+  /** The coil-impedance models the calling thread built for the base design (for workers: none on the calling thread). */
+  readonly models?: readonly CellModelData[];
 }
+
+/**
+ * The context of a sweep's rows; for workers, with the coil-impedance model of the base
+ * design, which the calling thread built when it checked the sweep: each worker starts from it
+ * instead of building it again (a cold thread spends most of its first study there), and
+ * computes the same numbers it would have built itself.
+ */
+function sweepContext(description: HeaterDescription, c: CheckedSweep, workers: number): SweepContext {
+  const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
+  if (workers === 0) return context;
+  return { ...context, models: sweepModels(description, c) };
+}
+
+/** Values sampled (evenly, first and last included) for the models a sweep shares. */
+const MODEL_SAMPLES = 16;
+/** Models the calling thread builds beyond the base design's, at most. */
+const MODEL_BUILDS = 3;
+
+/**
+ * The coil-impedance models for the workers: the base design's (built when the sweep was
+ * checked) and those that at least two of {@link MODEL_SAMPLES} sampled values share but the
+ * base does not (a capacitance sweep crossing an octave of the model's band), built here by a
+ * short study of one such value — once, instead of once per worker. A model used by a single
+ * value (a coil geometry per value) is left to the worker that needs it.
+ */
+function sweepModels(description: HeaterDescription, c: CheckedSweep): CellModelData[] {
+  const models = new Map<string, CellModelData>();
+  const take = (variant: HeaterDescription): void => {
+    const d = readHeaterDescription(variant, { requireUnits: c.requireUnits });
+    for (const m of exportCellModels(d, coilProperties(d))) models.set(m.key, m);
+  };
+  take(description);
+  const n = c.values.length;
+  const samples = Math.min(n, MODEL_SAMPLES);
+  const shared = new Map<string, { count: number; variant: HeaterDescription }>();
+  for (let s = 0; s < samples; s++) {
+    const i = samples === 1 ? 0 : Math.round((s * (n - 1)) / (samples - 1));
+    const variant = setField(description, c.field, c.values[i]) as HeaterDescription;
+    try {
+      const d = readHeaterDescription(variant, { requireUnits: c.requireUnits });
+      const key = cellModelKey(d, coilProperties(d));
+      const seen = shared.get(key);
+      shared.set(key, { count: (seen?.count ?? 0) + 1, variant: seen?.variant ?? variant });
+    } catch (e) {
+      // a value the description refuses: its row reports the problem
+      if (!(e instanceof InputError)) throw e;
+    }
+  }
+  const wanted = [...shared].filter(([key, v]) => v.count >= 2 && !models.has(key)).sort((a, b) => b[1].count - a[1].count);
+  for (const [, { variant }] of wanted.slice(0, MODEL_BUILDS)) {
+    try {
+      studyHeater(variant, { heatUp: false, temperatureScan: false, impedanceSweep: false });
+      take(variant);
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+    }
+  }
+  return [...models.values()];
+}
+
+/** Contexts whose models this thread has taken into its cache. */
+const imported = new WeakSet<SweepContext>();
 
 /** One row: the variant studied, or its problem. */
 function sweepRow(c: SweepContext, value: QuantityInput): HeaterSweepRow {
@@ -165,7 +235,12 @@ function sweepRow(c: SweepContext, value: QuantityInput): HeaterSweepRow {
 
 /** The pool's task runner for sweeps: one row per value. */
 export function sweepTask(context: unknown, items: readonly unknown[]): unknown[] {
-  return items.map((v) => sweepRow(context as SweepContext, v as QuantityInput));
+  const c = context as SweepContext;
+  if (c.models !== undefined && !imported.has(c)) {
+    importCellModels(c.models);
+    imported.add(c);
+  }
+  return items.map((v) => sweepRow(c, v as QuantityInput));
 }
 
 /**
@@ -267,7 +342,7 @@ export function sweepHeaterStream(description: HeaterDescription, sweep: HeaterS
   const shard = checkShard(where, options.shard);
   const c = checkSweep(where, description, sweep);
   const [start, end] = shardRange(c.values.length, shard);
-  const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
+  const context = sweepContext(description, c, pool.workers);
   function* values(): Generator<QuantityInput> {
     for (let i = start; i < end; i++) yield c.values[i] as QuantityInput;
   }
@@ -339,7 +414,7 @@ export function sweepHeater(description: HeaterDescription, sweep: HeaterSweepSp
   if (options !== undefined) {
     const pool = checkPoolOptions(where, options);
     const c = checkSweep(where, description, sweep);
-    const context: SweepContext = { description, field: c.field, heatUp: c.heatUp, requireUnits: c.requireUnits };
+    const context = sweepContext(description, c, pool.workers);
     return (async () => {
       const rows: HeaterSweepRow[] = [];
       for await (const row of runPool({ kind: "sweep", context }, c.values, c.values.length, sweepTask, pool, where)) rows.push(row as HeaterSweepRow);

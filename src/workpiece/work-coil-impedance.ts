@@ -32,7 +32,8 @@ import {
   solveSeries,
 } from "./work-coil-model.js";
 import type { Mesh, PartGeometry, PartKernel, PartMaterial } from "./work-coil-model.js";
-import { buildReduced, evaluateReduced } from "./work-coil-reduced.js";
+import { buildReduced, evaluateReduced, reducedModelFrom } from "./work-coil-reduced.js";
+import type { ReducedModel, ReducedModelData } from "./work-coil-reduced.js";
 import { constantPermeabilityNote } from "./validity-notes.js";
 
 /**
@@ -965,12 +966,68 @@ function reducedEvaluator(
   const geometry: PartGeometry = plate ? { kind: "plate", top: zMin - part.gap } : { kind: "rod", radius: part.radius };
   const kernel = state.kernel(mesh, geometry, 1e-6 / rOuter);
   const model = buildReduced(mesh, kernel, fMin, fMax);
-  const shape = part.shape;
-  const thickness = part.thickness;
-  const innerRadius = part.innerRadius;
+  const { k, g, r, lambda, P, G } = model;
+  const data: ReducedWorkCoilData = { model: { k, g, r, lambda, P, G }, kernel, shape: part.shape, thickness: part.thickness, innerRadius: part.innerRadius, fMin, fMax, cellCount: mesh.cells.n };
+  const reduced = galerkinEvaluator(model, data);
+  reducedData.set(reduced, data);
+  return reduced;
+}
+
+/**
+ * What a reduced (Galerkin) evaluator is made of: the reduced model without its work arrays,
+ * the part kernel, the part's fixed geometry and the band. Numbers and typed arrays only, so it
+ * crosses a thread boundary by structured clone bit for bit, and
+ * {@link reducedWorkCoilFromData} on the other side evaluates exactly as the original.
+ *
+ * @internal
+ */
+export interface ReducedWorkCoilData {
+  readonly model: ReducedModelData;
+  readonly kernel: PartKernel;
+  readonly shape: CheckedPart["shape"];
+  readonly thickness: number;
+  readonly innerRadius: number;
+  readonly fMin: number;
+  readonly fMax: number;
+  readonly cellCount: number;
+}
+
+/** The data of each reduced evaluator built here by the Galerkin path. */
+const reducedData = new WeakMap<ReducedWorkCoil, ReducedWorkCoilData>();
+
+/**
+ * The data of a reduced evaluator made by `PreparedWorkCoil.reduce` (`null` when it calls the
+ * full solve: litz coils, short non-magnetic parts).
+ *
+ * @internal
+ */
+export function reducedWorkCoilData(reduced: ReducedWorkCoil): ReducedWorkCoilData | null {
+  return reducedData.get(reduced) ?? null;
+}
+
+/**
+ * A reduced evaluator from {@link reducedWorkCoilData} of one built elsewhere (another thread):
+ * the same results, bit for bit, without building the mesh, the kernel or the basis. The
+ * objects are rebuilt as literals so that they have the shapes of locally built ones.
+ *
+ * @internal
+ */
+export function reducedWorkCoilFromData(d: ReducedWorkCoilData): ReducedWorkCoil {
+  const kd = d.kernel;
+  const geometry: PartGeometry = kd.geometry.kind === "rod" ? { kind: "rod", radius: kd.geometry.radius } : { kind: "plate", top: kd.geometry.top };
+  const kernel: PartKernel = { geometry, rule: { nodes: kd.rule.nodes, weights: kd.rule.weights }, perNode: kd.perNode, r: kd.r, q: kd.q, c: kd.c };
+  const data: ReducedWorkCoilData = { ...d, kernel };
+  const reduced = galerkinEvaluator(reducedModelFrom(d.model, kernel.rule.nodes.length), data);
+  reducedData.set(reduced, data);
+  return reduced;
+}
+
+/** The Galerkin evaluator of a reduced model. */
+function galerkinEvaluator(model: ReducedModel, data: ReducedWorkCoilData): ReducedWorkCoil {
+  const { kernel, shape, thickness, innerRadius, fMin, fMax } = data;
   return {
     basisSize: model.k,
-    cellCount: mesh.cells.n,
+    cellCount: data.cellCount,
     impedance(frequency: number, resistivity: number, relativePermeability: number): ReducedWorkCoilResult {
       const w = "ReducedWorkCoil.impedance";
       const f = requirePositive(w, "frequency", frequency, "Hz");

@@ -135,6 +135,14 @@ export function buildReduced(mesh: Mesh, kernel: PartKernel, fMin: number, fMax:
   return { k, g, r, lambda, P, G, scratch: reducedScratch(k, g, r, kernel.rule.nodes.length) };
 }
 
+/** A reduced model without its work arrays: numbers and typed arrays only, which cross a thread boundary by structured clone bit for bit. */
+export type ReducedModelData = Omit<ReducedModel, "scratch">;
+
+/** A reduced model from its data (another thread's {@link buildReduced}), with fresh work arrays for a kernel rule of `nodes` nodes. */
+export function reducedModelFrom(d: ReducedModelData, nodes: number): ReducedModel {
+  return { k: d.k, g: d.g, r: d.r, lambda: d.lambda, P: d.P, G: d.G, scratch: reducedScratch(d.k, d.g, d.r, nodes) };
+}
+
 /** Σ x[xo + i]·y[yo + i] over i < m, in order. */
 function columnDot(x: Float64Array, xo: number, y: Float64Array, yo: number, m: number): number {
   let sum = 0;
@@ -313,22 +321,42 @@ function reducedImpedances(model: ReducedModel, omega: number, out: Float64Array
   out[4] = reducedCopper(model, w.dRe, w.dIm, w.loadedRe, w.loadedIm, w.yRe, w.yIm);
 }
 
-/** D = (I + jωΛ)⁻¹, S₀ = Pᵀ D P, E = Pᵀ D G and H = Gᵀ D G into the model's scratch. */
+/**
+ * D = (I + jωΛ)⁻¹, S₀ = Pᵀ D P, E = Pᵀ D G and H = Gᵀ D G into the model's scratch. One loop
+ * nest per function: V8 compiles a long first call in the middle of its loop (on-stack
+ * replacement), and code after that loop, without type feedback yet, sent the optimised code
+ * back to the interpreter on every call until it was compiled again (up to about a hundred
+ * times per thread, `node --trace-deopt`).
+ */
 function emptyProjections(model: ReducedModel, omega: number): void {
-  const { k, g, r, lambda, P, G } = model;
-  const { dRe, dIm, s0Re, s0Im, eRe, eIm, hRe, hIm } = model.scratch;
+  const w = model.scratch;
+  resolventDiagonal(model, omega);
+  w.s0Re.fill(0);
+  w.s0Im.fill(0);
+  w.eRe.fill(0);
+  w.eIm.fill(0);
+  w.hRe.fill(0);
+  w.hIm.fill(0);
+  accumulateProjections(model);
+  mirrorLower(w.hRe, w.hIm, model.r);
+}
+
+/** D = (I + jωΛ)⁻¹ (diagonal) into the model's scratch. */
+function resolventDiagonal(model: ReducedModel, omega: number): void {
+  const { k, lambda } = model;
+  const { dRe, dIm } = model.scratch;
   for (let i = 0; i < k; i++) {
     const x = omega * lambda[i]!;
     const den = 1 + x * x;
     dRe[i] = 1 / den;
     dIm[i] = -x / den;
   }
-  s0Re.fill(0);
-  s0Im.fill(0);
-  eRe.fill(0);
-  eIm.fill(0);
-  hRe.fill(0);
-  hIm.fill(0);
+}
+
+/** S₀ += Pᵀ D P, E += Pᵀ D G and the lower triangle of H += Gᵀ D G, in the model's scratch. */
+function accumulateProjections(model: ReducedModel): void {
+  const { k, g, r, P, G } = model;
+  const { dRe, dIm, s0Re, s0Im, eRe, eIm, hRe, hIm } = model.scratch;
   for (let i = 0; i < k; i++) {
     const dr = dRe[i]!;
     const di = dIm[i]!;
@@ -354,10 +382,14 @@ function emptyProjections(model: ReducedModel, omega: number): void {
       }
     }
   }
+}
+
+/** Copies the lower triangle of the r × r matrices re, im onto the upper one. */
+function mirrorLower(re: Float64Array, im: Float64Array, r: number): void {
   for (let s = 0; s < r; s++) {
     for (let t = 0; t < s; t++) {
-      hRe[t * r + s] = hRe[s * r + t]!;
-      hIm[t * r + s] = hIm[s * r + t]!;
+      re[t * r + s] = re[s * r + t]!;
+      im[t * r + s] = im[s * r + t]!;
     }
   }
 }

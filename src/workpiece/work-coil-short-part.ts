@@ -293,12 +293,68 @@ function inductanceChange(b: Boundary, t: number, re: Float64Array, im: Float64A
 const NODES_PER_OCTAVE = 4;
 
 /**
+ * The direct solve of the end-effect factor at t (both boundaries built on the first call: a
+ * factor whose table was handed over from another thread may never need them).
+ */
+function directFactor(g: ShortPartGeometry): (t: number) => [number, number] {
+  let solve: ((t: number) => [number, number]) | null = null;
+  return (t) => {
+    if (solve === null) {
+      const coilHalf = Math.max(...g.turnPositions.map(Math.abs));
+      const short = buildBoundary(g, g.length / 2);
+      const long = buildBoundary(g, Math.max(g.length / 2, coilHalf + 3 * g.coilRadius));
+      const size = Math.max(short.n, long.n);
+      const re = new Float64Array(size * size);
+      const im = new Float64Array(size * size);
+      const bRe = new Float64Array(size);
+      const bIm = new Float64Array(size);
+      solve = (x) => {
+        const [sr, si] = inductanceChange(short, x, re, im, bRe, bIm);
+        const [lr, li] = inductanceChange(long, x, re, im, bRe, bIm);
+        const den = lr * lr + li * li;
+        return [(sr * lr + si * li) / den, (si * lr - sr * li) / den];
+      };
+    }
+    return solve(t);
+  };
+}
+
+/**
+ * An end-effect factor's geometry and the table nodes computed so far ([k, re, im]): plain
+ * numbers, so that a worker thread can start from another thread's table
+ * ({@link prepareShortPartFactor}'s `known`) and compute the same values.
+ *
+ * @internal
+ */
+export interface ShortPartFactorData {
+  readonly geometry: ShortPartGeometry;
+  readonly nodes: readonly (readonly [number, number, number])[];
+}
+
+/** The geometry and table of each factor made by {@link prepareShortPartFactor}. */
+const factorTables = new WeakMap<(t: number) => [number, number], { geometry: ShortPartGeometry; table: Map<number, [number, number]> }>();
+
+/**
+ * The geometry and table so far of a factor made by {@link prepareShortPartFactor} (`null` for
+ * another function).
+ *
+ * @internal
+ */
+export function shortPartFactorData(factor: (t: number) => [number, number]): ShortPartFactorData | null {
+  const f = factorTables.get(factor);
+  if (f === undefined) return null;
+  return { geometry: f.geometry, nodes: Array.from(f.table, ([k, [re, im]]) => [k, re, im] as const) };
+}
+
+/**
  * Prepares the end-effect factor of a part shorter than the coil (surface-impedance model):
  * returns a function of $t = \mu_r\delta/2$ [m] (> 0) giving the complex ratio
  * $F = \Delta Z_\text{short}/\Delta Z_\text{long}$ as [re, im], the long part being the same
  * section reaching three coil radii beyond the coil's ends. The function keeps a table in
- * log t (nodes a quarter octave apart, computed when first needed) and interpolates it with
- * cubic Lagrange polynomials (within 1e-4 of the direct solve).
+ * log t (nodes a quarter octave apart, computed when first needed, or taken from `known`,
+ * nodes of the same geometry's table computed elsewhere: each node is a pure function of the
+ * geometry and its index, so the result is the same) and interpolates it with cubic Lagrange
+ * polynomials (within 1e-4 of the direct solve).
  *
  * Measured against the library's axisymmetric field solver (scripts/measurements/
  * short-part-grid.ts: tube solenoids of length/diameter 0.3–4, bars and rings 0.3–0.9 × the
@@ -309,22 +365,10 @@ const NODES_PER_OCTAVE = 4;
  *
  * @internal
  */
-export function prepareShortPartFactor(g: ShortPartGeometry): (t: number) => [number, number] {
-  const coilHalf = Math.max(...g.turnPositions.map(Math.abs));
-  const short = buildBoundary(g, g.length / 2);
-  const long = buildBoundary(g, Math.max(g.length / 2, coilHalf + 3 * g.coilRadius));
-  const size = Math.max(short.n, long.n);
-  const re = new Float64Array(size * size);
-  const im = new Float64Array(size * size);
-  const bRe = new Float64Array(size);
-  const bIm = new Float64Array(size);
-  const direct = (t: number): [number, number] => {
-    const [sr, si] = inductanceChange(short, t, re, im, bRe, bIm);
-    const [lr, li] = inductanceChange(long, t, re, im, bRe, bIm);
-    const den = lr * lr + li * li;
-    return [(sr * lr + si * li) / den, (si * lr - sr * li) / den];
-  };
+export function prepareShortPartFactor(g: ShortPartGeometry, known: ShortPartFactorData["nodes"] = []): (t: number) => [number, number] {
+  const direct = directFactor(g);
   const table = new Map<number, [number, number]>();
+  for (const [k, re, im] of known) table.set(k, [re, im]);
   const node = (k: number): [number, number] => {
     let v = table.get(k);
     if (v === undefined) {
@@ -333,7 +377,7 @@ export function prepareShortPartFactor(g: ShortPartGeometry): (t: number) => [nu
     }
     return v;
   };
-  return (t: number): [number, number] => {
+  const factor = (t: number): [number, number] => {
     const x = Math.log2(t) * NODES_PER_OCTAVE;
     const k0 = Math.floor(x) - 1;
     let fr = 0;
@@ -347,4 +391,6 @@ export function prepareShortPartFactor(g: ShortPartGeometry): (t: number) => [nu
     }
     return [fr, fi];
   };
+  factorTables.set(factor, { geometry: g, table });
+  return factor;
 }
