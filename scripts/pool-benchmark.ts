@@ -1,7 +1,7 @@
 /**
  * The worker pool's speed-up, memory over a long streamed sweep, and abort latency, measured on
  * the built package (`npm run build` first): `tsx scripts/pool-benchmark.ts [speedup|scale|first|memory|abort]`.
- * `npm run bench:scale` builds and prints the speed-up target's line (`scale [designs]`).
+ * `npm run bench:scale` builds and prints the speed-up target's line (`scale [designs]`, 1000 by default).
  * Results are reported in docs/benchmarks.md.
  */
 import { existsSync, readdirSync, readFileSync } from "node:fs";
@@ -124,8 +124,10 @@ if (what === "speedup") {
 
 if (what === "scale") {
   // the target in one line: a sweep on the calling thread (one thread, as a script runs it,
-  // starting cold) against the same sweep on two workers; studies with the heat-up
-  const n = Number(args[3] ?? 120);
+  // starting cold) against the same sweep on two workers; studies with the heat-up. 1000
+  // designs by default: the sweep sizes the pool is for, where each worker's fixed warm-up
+  // (compiling the study's code, about 1 s of CPU) no longer weighs; smaller sizes by argument
+  const n = Number(args[3] ?? 1000);
   const values = Array.from({ length: n }, (_, i) => 2e-6 + i * 2e-8);
   const spec = { field: "capacitor.capacitance", values, heatUp: true };
   const start = threadCpu();
