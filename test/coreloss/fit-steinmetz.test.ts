@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { InputError } from "../../src/index.js";
 import { fitSteinmetz, steinmetzLoss, steinmetzTemperatureFactor } from "../../src/coreloss/index.js";
 import type { SteinmetzDataPoint } from "../../src/coreloss/index.js";
+import { uniform } from "../support/seeded.js";
 
 const truth = { k: 2.5, alpha: 1.45, beta: 2.55 };
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
@@ -14,19 +15,6 @@ function grid(): SteinmetzDataPoint[] {
     }
   }
   return points;
-}
-
-/** Deterministic pseudo-random numbers (xorshift32), uniform in (0, 1). */
-function uniform(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s ^= s << 13;
-    s >>>= 0;
-    s ^= s >>> 17;
-    s ^= s << 5;
-    s >>>= 0;
-    return (s + 0.5) / 4294967296;
-  };
 }
 
 describe("fitSteinmetz", () => {

@@ -15,19 +15,7 @@ import { STUDY_COIL_REFINEMENT } from "../../src/study/operating-point-accuracy.
 import { reducedWorkCoilFromData } from "../../src/workpiece/work-coil-impedance.js";
 import { prepareShortPartFactor } from "../../src/workpiece/work-coil-short-part.js";
 import { loadExample } from "./cases.js";
-
-/** A small seeded generator (xorshift32), uniform in [0, 1). */
-function random(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s ^= s << 13;
-    s >>>= 0;
-    s ^= s >>> 17;
-    s ^= s << 5;
-    s >>>= 0;
-    return s / 2 ** 32;
-  };
-}
+import { uniform as random } from "../support/seeded.js";
 
 describe("coil-impedance model handed to workers", () => {
   const race = loadExample("study-bearing-race.json");
