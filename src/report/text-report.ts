@@ -11,15 +11,28 @@ import { area, celsiusText, duration, percent, q, textTable, volume, wrap } from
 /** Rows comparing operating points side by side. */
 export function operatingRows(points: readonly HeaterOperatingPoint[]): string[][] {
   const row = (label: string, f: (p: HeaterOperatingPoint) => string): string[] => [label, ...points.map(f)];
+  // the leads' rows only when the design has leads (a study file with a lead cross-section)
+  const leads = [
+    ...(points.some((p) => p.leadInductance > 0) ? [row("lead inductance", (p) => q(p.leadInductance, "H"))] : []),
+    ...(points.some((p) => p.leadResistance > 0) ? [row("lead resistance (AC, part of it)", (p) => q(p.leadResistance, "Ω"))] : []),
+  ];
+  const leadVoltages = points.some(hasLeads)
+    ? [
+        row("coil terminal voltage (RMS)", (p) => q(p.coilVoltageRms, "V")),
+        row("voltage across the leads (RMS)", (p) => q(p.leadVoltageRms, "V")),
+      ]
+    : [];
   return [
     row("frequency", (p) => q(p.frequency, "Hz")),
     row("inductance at terminals", (p) => q(p.inductance, "H")),
     row("coil resistance (AC)", (p) => q(p.coilResistance, "Ω")),
+    ...leads,
     row("reflected resistance", (p) => (p.withPart ? q(p.reflectedResistance, "Ω") : "—")),
     row("part permeability μr", (p) => (p.withPart ? p.partRelativePermeability.toPrecision(3) : "—")),
     row("quality factor Q", (p) => p.qualityFactor.toPrecision(3)),
     row("tank voltage (peak)", (p) => q(p.tankVoltagePeak, "V")),
     row("coil current (RMS)", (p) => q(p.coilCurrentRms, "A")),
+    ...leadVoltages,
     row("capacitor voltage (RMS)", (p) => q(p.capacitorVoltageRms, "V")),
     row("capacitor current (RMS)", (p) => q(p.capacitorCurrentRms, "A")),
     row("capacitor reactive power", (p) => q(p.capacitorReactivePower, "var")),
@@ -34,17 +47,46 @@ export function operatingRows(points: readonly HeaterOperatingPoint[]): string[]
   ];
 }
 
-/** The loss breakdown as [place, power] pairs; the concentrator only when the design has one. */
+/** Whether an operating point's coil has leads modelled (a lead inductance or resistance). */
+function hasLeads(p: HeaterOperatingPoint): boolean {
+  return p.leadInductance > 0 || p.leadResistance > 0;
+}
+
+/**
+ * The loss breakdown as [place, power] pairs; the concentrator only when the design has one.
+ * With leads, the coil's loss is split into the coil conductor and the leads
+ * (`leadResistance × coilCurrentRms²`); the places still add up to the input power.
+ */
 export function lossEntries(p: HeaterOperatingPoint, withConcentrator = true): [string, number][] {
+  const leadLoss = p.leadResistance * p.coilCurrentRms * p.coilCurrentRms;
+  const coil: [string, number][] =
+    p.leadResistance > 0
+      ? [
+          ["coil conductor", p.losses.coil - leadLoss],
+          ["leads", leadLoss],
+        ]
+      : [["coil and leads", p.losses.coil]];
   const entries: [string, number][] = [
     ["part (useful heat)", p.losses.part],
-    ["coil and leads", p.losses.coil],
+    ...coil,
     ["switches (conduction)", p.losses.switches],
     ["supply internal resistance", p.losses.supply],
     ["capacitor bank", p.losses.capacitors],
   ];
   if (withConcentrator) entries.push(["concentrator core", p.losses.core]);
   return entries;
+}
+
+/** The leads of the design, when the description gives a length (both leads together). */
+function leadRows(length: number, leads: HeaterStudy["description"]["coil"]["leads"]): [string, string][] {
+  if (!(length > 0)) return [];
+  const shape =
+    leads === null
+      ? "no cross-section given (resistance only)"
+      : leads.shape === "round-pair"
+        ? `the coil conductor as a pair at ${q(leads.spacing, "m")} centres`
+        : `${leads.material.name} bars ${q(leads.width, "m")} × ${q(leads.thickness, "m")}, ${q(leads.gap, "m")} apart`;
+  return [["leads (both together)", `${q(length, "m")}, ${shape}`]];
 }
 
 /** The design as [what, value] rows (the DESIGN section of the text and HTML reports). */
@@ -78,6 +120,7 @@ export function designRows(study: HeaterStudy): [string, string][] {
       ["inverter", d.inverter.kind === "current-fed-parallel" ? "current-fed parallel (self-oscillating push-pull)" : `voltage-fed series, ${d.inverter.bridge} bridge, ${d.inverter.control === "fixed" ? `fixed ${q(d.inverter.frequency, "Hz")}` : `tracking ${q(d.inverter.targetPower, "W")}`}`],
       ["coil", coilText],
       ["conductor", conductorText],
+      ...leadRows(coil.leadLength, coil.leads),
       ["coil inductance (empty)", q(study.coil.inductance, "H")],
       ["conductor length, DC resistance", `${q(study.coil.conductorLength, "m")}, ${q(study.coil.dcResistance, "Ω")}`],
       ["capacitor bank", `${q(d.capacitor.capacitance, "F")}, tan δ ${d.capacitor.dissipationFactor}`],
