@@ -87,6 +87,26 @@ export function textTable(rows: readonly (readonly string[])[], header?: readonl
   return out.join("\n");
 }
 
+/**
+ * Lays out [label, text] rows as a two-column list: labels left-aligned, each text wrapped at
+ * word boundaries so that no line passes `columns`, its continuation lines aligned under it (a
+ * number is not parted from the word after it, e.g. its unit).
+ */
+export function definitionList(rows: readonly (readonly [string, string])[], columns = 100, indent = "  "): string {
+  const labelWidth = Math.max(0, ...rows.map(([label]) => width(label)));
+  const textColumn = width(indent) + labelWidth + 2;
+  const hanging = " ".repeat(textColumn);
+  return rows
+    .map(([label, text]) => {
+      // a number and its unit stay on one line: their space is held as a placeholder while wrapping
+      const glued = text.replace(/(\d) (?=[^\s\d])/gu, "$1\u0001");
+      const lines = wrap(glued, Math.max(20, columns - textColumn), "").replaceAll("\u0001", " ").split("\n");
+      const first = indent + label + " ".repeat(labelWidth - width(label) + 2) + (lines[0] ?? "");
+      return [first.trimEnd(), ...lines.slice(1).map((l) => hanging + l)].join("\n");
+    })
+    .join("\n");
+}
+
 /** Wraps text at `columns`, indenting continuation lines. */
 export function wrap(text: string, columns = 96, indent = "    "): string {
   const lead = /^\s*/.exec(text)?.[0] ?? "";

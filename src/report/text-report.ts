@@ -6,7 +6,7 @@ import type { HeaterOptimisation, HeaterStudy, HeaterSweep, HeaterSweepRow, Heat
 import { InputError } from "../core/index.js";
 import { reasonText } from "./design-error.js";
 import { requireStudy } from "./checks.js";
-import { area, celsiusText, duration, percent, q, textTable, volume, wrap } from "./format.js";
+import { area, celsiusText, definitionList, duration, percent, q, textTable, volume, wrap } from "./format.js";
 
 /** Rows comparing operating points side by side. */
 export function operatingRows(points: readonly HeaterOperatingPoint[]): string[][] {
@@ -185,7 +185,7 @@ export function studyTextReport(study: HeaterStudy, source?: string): string {
     out.push("");
   }
   out.push("DESIGN");
-  out.push(textTable(designRows(study), undefined, "  ", 2));
+  out.push(definitionList(designRows(study)));
   out.push("");
   out.push("OPERATING POINTS");
   out.push(
