@@ -98,10 +98,15 @@ const DC_MESSAGE_END = messageEnd("V DC", EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc)
 export function extraLowVoltageCaution(v: number, waveform: "ac" | "dc", location: string): Caution | null {
   const limit = waveform === "ac" ? EXTRA_LOW_VOLTAGE_LIMITS.acRms : EXTRA_LOW_VOLTAGE_LIMITS.rippleFreeDc;
   if (!(v > limit)) return null;
+  return cautionAbove(v, limit, voltageMessageStart(location), waveform === "ac" ? AC_MESSAGE_END : DC_MESSAGE_END);
+}
+
+/** The caution object for a voltage above `limit`: the one place its fields are written. */
+function cautionAbove(v: number, limit: number, start: string, end: string): Caution {
   return {
     code: "voltage-above-extra-low",
     severity: "danger",
-    message: voltageMessageStart(location) + round(v) + (waveform === "ac" ? AC_MESSAGE_END : DC_MESSAGE_END),
+    message: start + round(v) + end,
     value: v,
     limit,
     unit: "V",
@@ -130,15 +135,7 @@ export function voltageMessageStart(location: string): string {
  * @param start - {@link voltageMessageStart} of the location
  */
 export function acVoltageCautionAbove(v: number, start: string): Caution {
-  return {
-    code: "voltage-above-extra-low",
-    severity: "danger",
-    message: start + round(v) + AC_MESSAGE_END,
-    value: v,
-    limit: EXTRA_LOW_VOLTAGE_LIMITS.acRms,
-    unit: "V",
-    source: ELV_SOURCE,
-  };
+  return cautionAbove(v, EXTRA_LOW_VOLTAGE_LIMITS.acRms, start, AC_MESSAGE_END);
 }
 
 /** An optional text option, or the fallback when it is absent. */
