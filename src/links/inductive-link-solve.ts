@@ -21,9 +21,9 @@ const NO_CAUTIONS: readonly Caution[] = Object.freeze([]);
  * The checked arguments of {@link solveLink}, by slot, written by the caller just before the
  * call (a number passed to a call that V8 does not inline is boxed; a typed-array slot is
  * not): inductances [H], resistances [Ω], frequency [Hz], source voltage [V], the given
- * capacitances [F] (0: the default) and the filter inductances [H] (0: none).
+ * capacitances [F] (0: the default), the filter inductances [H] (0: none) and √(L₁L₂) [H].
  */
-export const linkArguments = new Float64Array(12);
+export const linkArguments = new Float64Array(13);
 export const ARG_L1 = 0;
 export const ARG_L2 = 1;
 export const ARG_M = 2;
@@ -36,10 +36,11 @@ export const ARG_C1 = 8;
 export const ARG_C2 = 9;
 export const ARG_LF1 = 10;
 export const ARG_LF2 = 11;
+export const ARG_ROOT = 12;
 
 /** Writes the arguments of {@link solveLink} (small enough to be inlined into its callers: no boxing). */
 export function setLinkArguments(
-  l1: number, l2: number, m: number, r1: number, r2: number, f: number, rl: number, v: number, givenC1: number, givenC2: number, lf1: number, lf2: number,
+  l1: number, l2: number, m: number, r1: number, r2: number, f: number, rl: number, v: number, givenC1: number, givenC2: number, lf1: number, lf2: number, root: number,
 ): void {
   linkArguments[ARG_L1] = l1;
   linkArguments[ARG_L2] = l2;
@@ -53,6 +54,7 @@ export function setLinkArguments(
   linkArguments[ARG_C2] = givenC2;
   linkArguments[ARG_LF1] = lf1;
   linkArguments[ARG_LF2] = lf2;
+  linkArguments[ARG_ROOT] = root;
 }
 
 /** Slots of {@link net}: ω, ω² … */
@@ -399,7 +401,7 @@ export function solveLink(code: number): InductiveLink {
     primaryCurrentRms: i1,
     secondaryCurrentRms: i2,
     loadVoltageRms: loadCurrent * rl,
-    couplingCoefficient: m / Math.sqrt(l1 * (linkArguments[ARG_L2] ?? 0)),
+    couplingCoefficient: m / (linkArguments[ARG_ROOT] ?? 0),
     capacitors,
     cautions: linkCautions(capacitors, i1 * w * l1),
   };

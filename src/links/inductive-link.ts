@@ -75,10 +75,12 @@ export function inductiveLink(options: InductiveLinkOptions): InductiveLink {
     const lf1 = options.primaryFilterInductance;
     const lf2 = options.secondaryFilterInductance;
     const code = compensationCode(options.compensation);
+    // √(L₁L₂) once, for the bound on M and for k (NaN unless both are numbers: nothing coerced)
+    const root = typeof l1 === "number" && typeof l2 === "number" ? Math.sqrt(l1 * l2) : NaN;
     if (
-      typeof l1 === "number" && typeof l2 === "number" && typeof m === "number" && typeof r1 === "number" &&
+      typeof m === "number" && typeof r1 === "number" &&
       typeof r2 === "number" && typeof f === "number" && typeof rl === "number" && typeof v === "number" &&
-      l1 > 0 && l1 < Infinity && l2 > 0 && l2 < Infinity && m > 0 && m < Math.sqrt(l1 * l2) &&
+      l1 > 0 && l1 < Infinity && l2 > 0 && l2 < Infinity && m > 0 && m < root &&
       r1 >= 0 && r1 < Infinity && r2 >= 0 && r2 < Infinity && f > 0 && f < Infinity &&
       rl > 0 && rl < Infinity && v > 0 && v < Infinity && code >= 0 &&
       c1 === undefined && c2 === undefined &&
@@ -86,7 +88,7 @@ export function inductiveLink(options: InductiveLinkOptions): InductiveLink {
       ((code & 8) === 0 ? lf2 === undefined : typeof lf2 === "number" && lf2 > 0 && lf2 < l2) &&
       linkFieldsKnown(options)
     ) {
-      setLinkArguments(l1, l2, m, r1, r2, f, rl, v, 0, 0, lf1 ?? 0, lf2 ?? 0);
+      setLinkArguments(l1, l2, m, r1, r2, f, rl, v, 0, 0, lf1 ?? 0, lf2 ?? 0, root);
       return solveLink(code);
     }
   }
