@@ -51,7 +51,8 @@ export function inductiveLinkChecked(options: InductiveLinkOptions): InductiveLi
   const l1 = requirePositive(where, "primaryInductance", options.primaryInductance, "H");
   const l2 = requirePositive(where, "secondaryInductance", options.secondaryInductance, "H");
   const m = requirePositive(where, "mutualInductance", options.mutualInductance, "H");
-  if (!(m < Math.sqrt(l1 * l2))) throw new InputError(where, "mutualInductance", m, "H", `less than √(L₁L₂) = ${Math.sqrt(l1 * l2)}`);
+  const root = Math.sqrt(l1 * l2);
+  if (!(m < root)) throw new InputError(where, "mutualInductance", m, "H", `less than √(L₁L₂) = ${root}`);
   const r1 = requireNonNegative(where, "primaryResistance", options.primaryResistance, "Ω");
   const r2 = requireNonNegative(where, "secondaryResistance", options.secondaryResistance, "Ω");
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
@@ -78,6 +79,6 @@ export function inductiveLinkChecked(options: InductiveLinkOptions): InductiveLi
   } else if (options.secondaryFilterInductance !== undefined) {
     throw new InputError(where, "secondaryFilterInductance", options.secondaryFilterInductance, "H", "absent (only double-LCC compensation has a secondary filter inductor)");
   }
-  setLinkArguments(l1, l2, m, r1, r2, f, rl, v, givenC1, givenC2, lf1, lf2);
+  setLinkArguments(l1, l2, m, r1, r2, f, rl, v, givenC1, givenC2, lf1, lf2, root);
   return solveLink(code);
 }

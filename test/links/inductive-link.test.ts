@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { inductiveLink, InputError, maximumLinkEfficiency, optimalLoadResistance, type InductiveLinkOptions } from "../../src/index.js";
 import fixture from "../fixtures/links/phasor.json" with { type: "json" };
+import tuned from "../fixtures/links/tuned.json" with { type: "json" };
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
 
@@ -24,6 +25,38 @@ describe("inductiveLink", () => {
     });
   }
 
+  it("matches a 40-digit mesh solve (mpmath) on 360 seeded links, default and given capacitors, to 1e-12", () => {
+    // fixture from mpmath at 40 digits, test/fixtures/links/generate_tuned.py (default capacitors by
+    // the documented tuning rules); the ranges include ill-conditioned parallel secondaries
+    const tol = tuned.meta.rtol;
+    let worst = 0;
+    let compared = 0;
+    for (const c of tuned.cases) {
+      const link = inductiveLink(c.input as InductiveLinkOptions);
+      const e = c.expected;
+      const zAbs = Math.hypot(e.inputImpedanceRe, e.inputImpedanceIm);
+      const errors = [
+        rel(link.efficiency, e.efficiency), rel(link.outputPower, e.outputPower), rel(link.inputPower, e.inputPower),
+        Math.abs(link.inputImpedance.re - e.inputImpedanceRe) / zAbs, Math.abs(link.inputImpedance.im - e.inputImpedanceIm) / zAbs,
+        rel(link.inputCurrentRms, e.inputCurrentRms), rel(link.primaryCurrentRms, e.primaryCurrentRms),
+        rel(link.secondaryCurrentRms, e.secondaryCurrentRms), rel(link.loadVoltageRms, e.loadVoltageRms),
+      ];
+      expect(link.capacitors.map((k) => k.name)).toEqual(e.capacitors.map((k) => k.name));
+      link.capacitors.forEach((k, i) => {
+        const x = e.capacitors[i];
+        if (x === undefined) throw new Error("capacitor missing from the fixture");
+        errors.push(rel(k.capacitance, x.capacitance), rel(k.voltageRms, x.voltageRms), rel(k.currentRms, x.currentRms));
+      });
+      for (const error of errors) {
+        expect(error).toBeLessThanOrEqual(tol);
+        worst = Math.max(worst, error);
+        compared++;
+      }
+    }
+    expect(compared).toBeGreaterThan(360 * 15);
+    expect(worst).toBeGreaterThan(0);
+  });
+
   it("sizes the default capacitors for a real input impedance (SS: C₁ = 1/(ω²L₁), C₂ = 1/(ω²L₂))", () => {
     const base = { primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, loadResistance: 5, sourceVoltage: 10 };
     const w = 2 * Math.PI * 140e3;
@@ -32,7 +65,8 @@ describe("inductiveLink", () => {
     expect(rel(ss.capacitors[1]?.capacitance ?? 0, 1 / (w * w * 12e-6))).toBeLessThanOrEqual(1e-12);
     for (const compensation of ["series-parallel", "parallel-series", "parallel-parallel"] as const) {
       const link = inductiveLink({ ...base, compensation });
-      expect(Math.abs(link.inputImpedance.im)).toBeLessThanOrEqual(1e-9 * link.inputImpedance.re);
+      // the cancellation the default capacitor is defined by is written exactly, not as a rounding residue
+      expect(link.inputImpedance.im).toBe(0);
     }
     // SP with R₂ = 0: the classic C₁ = 1/(ω²(L₁ − M²/L₂)) (Wang, Stielau & Covic 2005, from memory)
     const sp = inductiveLink({ ...base, secondaryResistance: 0, compensation: "series-parallel" });
