@@ -1,21 +1,16 @@
 /**
  * The phasor solve of {@link inductiveLink} on checked arguments: the secondary network reduced
  * to the impedance in series with the secondary coil, the primary network reduced around the
- * coil branch with the reflected impedance, then the capacitors' stresses and the cautions.
+ * coil branch with the reflected impedance, then the capacitors' stresses (the cautions are in
+ * `inductive-link-cautions.ts`).
  * Scalar complex arithmetic throughout (no intermediate objects); the reductions hand their
  * results on in the slots of one typed array. Internal.
  *
  * @packageDocumentation
  */
-import { InputError, EXTRA_LOW_VOLTAGE_LIMITS, type Caution } from "../core/index.js";
-import { acVoltageCautionAbove, voltageMessageStart } from "../core/extra-low-voltage.js";
+import { InputError } from "../core/index.js";
+import { linkCautions } from "./inductive-link-cautions.js";
 import type { InductiveLink, LinkCapacitor } from "./inductive-link-types.js";
-
-/** Extra-low-voltage limit (AC RMS) read once: the cautions are built only above it. */
-const ELV_AC_RMS = EXTRA_LOW_VOLTAGE_LIMITS.acRms;
-
-/** The cautions of a link below extra-low voltage: one shared, frozen empty list. */
-const NO_CAUTIONS: readonly Caution[] = Object.freeze([]);
 
 /**
  * The checked arguments of {@link solveLink}, by slot, written by the caller just before the
@@ -87,24 +82,6 @@ const CF1_VOLTS = 19;
 const CF1_AMPS = 20;
 /** Results of the network reductions (written in place: no objects, no boxed numbers). */
 const net = new Float64Array(21);
-
-/** The start of each capacitor's voltage caution message, made once (no concatenation per call). */
-const PRIMARY_START = voltageMessageStart("primary compensating capacitor");
-const SECONDARY_START = voltageMessageStart("secondary compensating capacitor");
-const PRIMARY_FILTER_START = voltageMessageStart("primary-filter compensating capacitor");
-const SECONDARY_FILTER_START = voltageMessageStart("secondary-filter compensating capacitor");
-const COIL_START = voltageMessageStart("primary coil");
-
-/** The start of the voltage caution message of a capacitor, by its name. */
-function capacitorMessageStart(name: string): string {
-  switch (name) {
-    case "primary": return PRIMARY_START;
-    case "secondary": return SECONDARY_START;
-    case "primary-filter": return PRIMARY_FILTER_START;
-    case "secondary-filter": return SECONDARY_FILTER_START;
-    default: return voltageMessageStart(`${name} compensating capacitor`);
-  }
-}
 
 /*
  * Exact cancellations. A default capacitor is defined by a reactance that cancels another one
@@ -315,26 +292,6 @@ function reducePrimaryLcc(): void {
   net[C1_AMPS] = i1;
   net[CF1_VOLTS] = nodeVolts;
   net[CF1_AMPS] = nodeVolts / wlf;
-}
-
-/** The voltage cautions of a link: its most stressed capacitor and the primary coil, when above extra-low voltage. */
-function linkCautions(capacitors: readonly LinkCapacitor[], coilVoltage: number): readonly Caution[] {
-  let worst = 0;
-  let worstName = "";
-  for (let k = 0; k < capacitors.length; k++) {
-    const c = capacitors[k];
-    if (c !== undefined && c.voltageRms > worst) {
-      worst = c.voltageRms;
-      worstName = c.name;
-    }
-  }
-  // the limit is checked here first so a safe link builds no message text and shares one empty list
-  if (!(worst > ELV_AC_RMS || coilVoltage > ELV_AC_RMS)) return NO_CAUTIONS;
-  // the list built at its final length (a push onto an empty array allocates room for 17)
-  const caution = worst > ELV_AC_RMS ? acVoltageCautionAbove(worst, capacitorMessageStart(worstName)) : null;
-  const coilCaution = coilVoltage > ELV_AC_RMS ? acVoltageCautionAbove(coilVoltage, COIL_START) : null;
-  if (caution === null) return coilCaution === null ? [] : [coilCaution];
-  return coilCaution === null ? [caution] : [caution, coilCaution];
 }
 
 /**
