@@ -24,6 +24,11 @@ const ATLAS_430 = "Atlas Steels grade 430 data (7750 kg/m³; 460 J/(kg·K) over 
 const AA_6061 = "Aluminum Association typical values for 6061-T6, as in the BTI Metals and MatWeb 6061-T6 data sheets (43 % IACS; 167 W/(m·K) at 25 °C; 896 J/(kg·K) at 100 °C; 2.70 g/cm³; melting range 582–652 °C)";
 const OLIN_C26000 = "Olin Brass C26000 (ASTM B36) alloy data (28 % IACS annealed, 6.16 µΩ·cm; 8.53 g/cm³)";
 const TI64 = "BTI Metals Ti-6Al-4V data sheet (4.43 g/cm³; 526 J/(kg·K) at 25 °C; 6.70 W/(m·K) over 100–300 °C; 1780 nΩ·m at 25 °C; melting range 1604–1660 °C) and ASM/MatWeb Ti-6Al-4V (Grade 5) annealed bar (178 µΩ·cm)";
+/**
+ * Table A.1 of Lienhard & Lienhard read in a transcription (a public materials library quoting
+ * it row by row); the book itself was not at hand, and the transcription has slips in other rows.
+ */
+const LIENHARD_A1 = "J. H. Lienhard IV, J. H. Lienhard V, A Heat Transfer Textbook (Phlogiston Press 2011), Table A.1, as transcribed in a public materials library";
 const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.1.3 eq. (3.3) (thermal conductivity)";
 /**
  * The AISI 304 row of Incropera's Table A.1 (5th edition), read in a transcription: the
@@ -32,6 +37,18 @@ const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.
  * 100–1000 K "from [Incropera2002, pp. 905 & 907]".
  */
 const INCROPERA_304 = "F. P. Incropera, D. P. DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (Wiley 2002), Table A.1, pp. 905 and 907, AISI 304 at 200–1000 K, as transcribed in the FCSys Modelica library (github.com/kdavies4/FCSys, Regions.mo, package AnFPs)";
+/**
+ * The AISI 304 row of the 7th edition's Table A.1 above 1000 K and its density, read in
+ * transcriptions: two public heat-transfer scripts that name that table give c_p 640 and
+ * 682 J/(kg·K) and k 28.0 and 31.7 W/(m·K) at 1200 and 1500 K (their 200–1000 K points are
+ * those of the FCSys transcription of the 5th edition), and one of them pairs the row with
+ * 7900 kg/m³.
+ */
+const INCROPERA_304_HOT = "F. P. Incropera, D. P. DeWitt, T. L. Bergman, A. S. Lavine, Fundamentals of Heat and Mass Transfer, 7th ed. (Wiley 2011), Table A.1, AISI 304 row (c_p 640 and 682 J/(kg·K), k 28.0 and 31.7 W/(m·K) at 1200 and 1500 K; 7900 kg/m³), as transcribed in two public heat-transfer scripts that name that table (the scan's page with that row was not at hand)";
+/** A maker's property page for type 304 with resistivity against temperature. */
+const VALLEY_304 = "Valley Design Corp., 'Type 304 and 304L Stainless Steel' property page (7.90 g/cm³; 72, 78, 86, 100, 111, 121, 126 µΩ·cm at 20, 100, 200, 400, 600, 800, 900 °C)";
+/** The same figures up to 400 °C for type 302, the base 18-8 grade. */
+const ASM_302 = "ASM/MatWeb data sheet 'AISI Type 302 Stainless Steel' (72, 78, 86, 100 µΩ·cm at 20, 100, 200, 400 °C)";
 const KUZMIN_IRON = "magnetisation curve: M. D. Kuz'min, Phys. Rev. Lett. 94, 107204 (2005), s = 0.35, p = 4 for iron (from memory)";
 
 /** Resistivity and temperature coefficient of brasses from a data page. */
@@ -198,31 +215,35 @@ const austeniticResistivity = tableFromCelsius(
   [20, 100, 200, 300, 400, 500, 600, 700, 800, 900, 1000, 1200],
   [0.72, 0.78, 0.86, 0.92, 0.98, 1.03, 1.08, 1.12, 1.16, 1.19, 1.22, 1.27],
   1e6,
-  `typical for AISI 304 class: the 20 °C value agrees with the ${ASM_304}; the rest of the table is from memory and reads 1.10 µΩ·m at 650 °C, 5 % below that data sheet`,
+  `typical for AISI 304 class: 0.72 µΩ·m at 20 °C as in the ${ASM_304}; 0.78 and 0.86 µΩ·m at 100 and 200 °C as in ${VALLEY_304} and the ${ASM_302}; 0.98 and 1.08 µΩ·m at 400 and 600 °C within 3 % of that page's 1.00 and 1.11; the points at 300, 500 °C and from 700 °C up are from memory, and from 650 °C up the table reads 4–6 % below the sources (1.10 against the ASM sheet's 1.16 at 650 °C; 1.16 and 1.19 against Valley Design's 1.21 and 1.26 at 800 and 900 °C)`,
 );
 const austeniticSpecificHeat: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([402, 477, 515, 557, 582, 611, 640, 682]),
-  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
+  source: `${INCROPERA_304}; 1200 and 1500 K: ${INCROPERA_304_HOT}`,
 });
 const austeniticConductivity: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([12.6, 14.9, 16.6, 19.8, 22.6, 25.4, 28.0, 31.7]),
-  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
+  source: `${INCROPERA_304}; 1200 and 1500 K: ${INCROPERA_304_HOT}`,
 });
 
 /**
  * Austenitic stainless steel (18Cr–8Ni, AISI 304 class), non-magnetic. Resistivity
- * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 1.22 µΩ·m at 1000 °C
- * (typical, from memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
+ * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 0.78 and 0.86 µΩ·m at 100 and
+ * 200 °C (Valley Design's type 304 page; ASM/MatWeb type 302), within 3 % of that page at 400
+ * and 600 °C; 1.22 µΩ·m at 1000 °C (typical, from memory; from 650 °C up the table reads
+ * 4–6 % below the 1.16 µΩ·m of the ASM sheet at 650 °C and Valley Design's 1.21 and 1.26 µΩ·m
+ * at 800 and 900 °C); density 7900 kg/m³ (Valley Design; Incropera et al., 7th ed., Table A.1);
  * specific heat and thermal conductivity of AISI 304 at 200–1000 K from Incropera & DeWitt,
- * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K; read in a
- * transcription, see the sources); their 1200 and 1500 K points from memory. Emissivity
+ * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K), and at 1200
+ * and 1500 K from the 7th edition's Table A.1 (all read in transcriptions, see the sources). Emissivity
  * 0.1–0.85 (Raytek's 8–14 µm table: 0.1–0.8; 0.85 oxidised at 800 °C in an Ideal Industries
  * table), typical 0.4 (a choice within that range). Documented range 200–1500 K.
  *
  * @see Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (2002), Table A.1,
- *   pp. 905 and 907 (AISI 304).
+ *   pp. 905 and 907 (AISI 304); Incropera, DeWitt, Bergman, Lavine, 7th ed. (2011), Table A.1
+ *   (AISI 304 at 1200 and 1500 K, density).
  * @example
  * ```ts
  * import { austeniticStainless } from "fluxwright";
@@ -247,7 +268,7 @@ export const austeniticStainless: ConductiveMaterial = Object.freeze({
   magnetic: false,
   sources: Object.freeze([
     `resistivity: ${austeniticResistivity.source}`,
-    "density: typical, from memory",
+    `density: 7900 kg/m³ as in ${VALLEY_304} and in ${INCROPERA_304_HOT}; the ${ASM_304} gives 8.00 g/cm³ (1.3 % higher)`,
     `specific heat and thermal conductivity: ${austeniticConductivity.source}`,
     "solidus 1400 °C: ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel'",
   ]),
@@ -332,7 +353,7 @@ const alloyResistivity20 = ANNEALED_COPPER_RESISTIVITY / 0.43;
 /** Matthiessen's rule: the same dρ/dT as IEC 60889 aluminium, 2.8264e-8 × 0.00403 Ω·m/K. */
 const alloyCoefficient = (2.8264e-8 * 0.00403) / alloyResistivity20;
 const alloySpecificHeat = tableFromCelsius([20, 100, 200, 300, 400, 500], [896, 945, 985, 1030, 1080, 1130], 1, `typical for 6061 class, from memory; the data sheets' 896 J/(kg·K) is given at 100 °C, where this table reads 945 (${AA_6061})`);
-const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 177, 186, 190, 192, 190], 1, `typical for 6061-T6 class: 167 W/(m·K) near room temperature as in the ${AA_6061}; above 20 °C from memory`);
+const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 177, 186, 190, 192, 190], 1, `typical for 6061-T6 class: 167 W/(m·K) near room temperature as in the ${AA_6061}; above 20 °C from memory, and 3–6 % above the 172, 177, 180 W/(m·K) at 100, 200, 300 °C of ${LIENHARD_A1}`);
 
 /**
  * Wrought aluminium alloy (Al–Mg–Si, 6061-T6 class). Resistivity 43 % IACS
@@ -430,10 +451,10 @@ const titaniumResistivity = tableFromCelsius(
   [20, 200, 400, 600, 800, 1000],
   [1.7, 1.8, 1.9, 1.98, 2.04, 2.06],
   1e6,
-  `typical for Ti-6Al-4V class: 1.70 µΩ·m at 20 °C lies inside the data sheets' 1.68–1.78 µΩ·m (${TI64}); above 20 °C from memory`,
+  `typical for Ti-6Al-4V class: 1.70 µΩ·m at 20 °C lies inside the data sheets' 1.68–1.78 µΩ·m (${TI64}); above 20 °C from memory (Nickel Systems' Grade 5 page gives 1143 Ω·cmil/ft = 1.90 µΩ·m at 986 °F = 530 °C, 2.7 % below the table there, and 1.75 µΩ·m at 73 °F)`,
 );
 const titaniumSpecificHeat = tableFromCelsius([20, 200, 400, 600, 800, 1000], [526, 570, 610, 650, 690, 720], 1, `typical for Ti-6Al-4V class: 526 J/(kg·K) near room temperature as in the ${TI64}; above 20 °C from memory`);
-const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6.7, 8.8, 11.5, 14.0, 17.0, 20.0], 1, "typical for Ti-6Al-4V class, from memory");
+const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6.7, 8.8, 11.5, 14.0, 17.0, 20.0], 1, `typical for Ti-6Al-4V class, from memory; ${LIENHARD_A1} gives 7.1, 7.8, 8.8, 10, 12 W/(m·K) at 20, 100, 200, 300, 400 °C (the table: 6 % lower at 20 °C, equal at 200 °C, 4 % lower at 400 °C)`);
 
 /**
  * Titanium alloy (Ti–6Al–4V class), non-magnetic. Resistivity 1.70 µΩ·m at 20 °C (inside

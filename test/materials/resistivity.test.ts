@@ -36,6 +36,16 @@ describe("resistivityAt", () => {
     expect(ti).toBeLessThanOrEqual(1.78e-6); // … to 1.78 µΩ·m (ASM/MatWeb, BTI Metals)
   });
 
+  it("gives AISI 304 the resistivity of Valley Design's type 304 page at 100 and 200 °C and within 3 % at 400 and 600 °C", () => {
+    // Valley Design 'Type 304 and 304L Stainless Steel': 78, 86, 100, 111 µΩ·cm at 100, 200, 400, 600 °C
+    // (ASM/MatWeb AISI 302: the same 78, 86, 100 µΩ·cm up to 400 °C)
+    expect(resistivityAt(austeniticStainless, celsius(100))).toBeCloseTo(0.78e-6, 15);
+    expect(resistivityAt(austeniticStainless, celsius(200))).toBeCloseTo(0.86e-6, 15);
+    for (const [t, rho] of [[400, 1.0e-6], [600, 1.11e-6]] as const) {
+      expect(Math.abs(resistivityAt(austeniticStainless, celsius(t)) - rho) / rho).toBeLessThan(0.03);
+    }
+  });
+
   it("gives silver 1.587 × 10⁻⁸ Ω·m at 293 K (CRC Handbook, Electrical Resistivity of Pure Metals) and 0.0038 /K (OpenStax University Physics Vol. 2, §9.3, Table 9.1)", () => {
     expect(resistivityAt(silver, 293.15)).toBeCloseTo(1.587e-8, 13); // CRC Handbook 2010, p. 12-40 ff.: 1.587 at 293 K
     expect(Number(resistivityAt(silver, celsius(20)).toPrecision(3))).toBe(1.59e-8); // OpenStax Table 9.1: 1.59 × 10⁻⁸ Ω·m
