@@ -103,6 +103,10 @@ describe("material sets", () => {
     expect(thermalConductivityAt(austeniticStainless, 1500)).toBe(31.7); // Incropera et al. 2011, Table A.1, AISI 304
   });
 
+  it("gives low-carbon steel the 7870 kg/m³ of AISI 1010 data sheets (MatMake; MatWeb as reproduced on a179.net)", () => {
+    expect(lowCarbonSteel.density).toBe(7870); // MatMake SAE/AISI 1010: 7870 kg/m³; MatWeb AISI 1010: 7.87 g/cm³
+  });
+
   it("gives AISI 304 a density of 7900 kg/m³ (Valley Design type 304 page, 7.90 g/cm³; Incropera et al. 7th ed., Table A.1)", () => {
     expect(austeniticStainless.density).toBe(7900); // Valley Design 'Type 304 and 304L Stainless Steel': 7.90 g/cm³
   });
