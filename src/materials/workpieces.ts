@@ -20,6 +20,7 @@ const FLIR_EMISSIVITY = "FLIR T10xx series operation manual, emissivity Table 39
 /** Data sheets of the wrought alloys (typical values at room temperature). */
 const ASM_304 = "ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel' (72 µΩ·cm at 20 °C, 116 µΩ·cm at 650 °C)";
 const AK_430 = "AK Steel Type 430 product data sheet (60 µΩ·cm at 21 °C; 0.46 kJ/(kg·K) over 0–100 °C; 26.1 W/(m·K) at 100 °C, 26.3 at 500 °C; 7.74 g/cm³)";
+const KOOZ_430 = "KOOZ special-steels data page for 1.4016 / X6Cr17 / AISI 430 (average values at ambient temperature: 25.0 W/(m·K), 0.60 Ω·mm²/m, 0.46 J/(g·K), 7.7 g/cm³)";
 const ATLAS_430 = "Atlas Steels grade 430 data (7750 kg/m³; 460 J/(kg·K) over 0–100 °C; 26.1 and 26.3 W/(m·K) at 100 and 500 °C; 600 nΩ·m)";
 const AA_6061 = "Aluminum Association typical values for 6061-T6, as in the BTI Metals and MatWeb 6061-T6 data sheets (43 % IACS; 167 W/(m·K) at 25 °C; 896 J/(kg·K) at 100 °C; 2.70 g/cm³; melting range 582–652 °C)";
 const OLIN_C26000 = "Olin Brass C26000 (ASTM B36) alloy data (28 % IACS annealed, 6.16 µΩ·cm; 8.53 g/cm³)";
@@ -297,14 +298,15 @@ const ferriticConductivity = tableFromCelsius(
   [20, 100, 500, 800, 1000],
   [25.0, 26.1, 26.3, 26.5, 27.5],
   1,
-  `typical for AISI 430 class: 26.1 W/(m·K) at 100 °C and 26.3 at 500 °C as in the ${AK_430}; 20, 800 and 1000 °C from memory`,
+  `typical for AISI 430 class: 25.0 W/(m·K) at 20 °C as in ${KOOZ_430}; 26.1 W/(m·K) at 100 °C and 26.3 at 500 °C as in the ${AK_430}; 800 and 1000 °C from memory`,
 );
 
 /**
  * Ferritic stainless steel (17Cr, AISI 430 class), ferromagnetic (martensitic grades behave
  * alike for heating purposes). Resistivity 0.60 µΩ·m at 20 °C, density 7750 kg/m³, specific
  * heat 460 J/(kg·K) near 20 °C and conductivity 26.1 W/(m·K) at 100 °C, 26.3 at 500 °C (AK
- * Steel and Atlas Steels type 430 data sheets); the other table points typical, from memory
+ * Steel and Atlas Steels type 430 data sheets), 25.0 W/(m·K) at 20 °C (KOOZ's 1.4016 data
+ * page); the other table points typical, from memory
  * (the Curie anomaly of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4 (as
  * for austenitic stainless). Curie
  * temperature 943 K (670 °C, from memory), low-field relative permeability 750, saturation
