@@ -100,7 +100,11 @@ const lowCarbonConductivity: TemperatureTable = Object.freeze({
  * AISI 1010 sheet as reproduced on a179.net), rising about eightfold to 1.15 µΩ·m at 1000 °C
  * (table above 20 °C typical, from memory); density 7870 kg/m³ (the same two AISI 1010
  * sources; Incropera's Table A.1 gives 7832, 0.5 % less); specific heat from EN 1993-1-2
- * with its peak at 735 °C; thermal conductivity 63.9 W/(m·K) at 300 K (Incropera et al., Table A.1, AISI 1010); emissivity
+ * with its peak at 735 °C; thermal conductivity 63.9 W/(m·K) at 300 K (Incropera et al.,
+ * Table A.1, AISI 1010; that row ends at 1000 K), 28.0 W/(m·K) at 1200 K (from memory; within
+ * 3 % of EN 1993-1-2's 27.3 W/(m·K) for carbon steel from 800 to 1200 °C, read as quoted in
+ * Dlubal's knowledge-base article on that standard) and 30.0 at 1500 K (from memory; at 1200 °C
+ * the table reads 29.8, 9 % above EN 1993-1-2's 27.3); emissivity
  * 0.1–0.95, typical 0.8 (inside the FLIR table's 0.07 polished … 0.95–0.98 rough plate for
  * iron and steel; 0.8 is its value for steel oxidised at 200–600 °C). Ferromagnetic: Curie
  * temperature 1041 K (768 °C, the A2 point of iron; Atlas Steels: about 768 °C for carbon
