@@ -43,9 +43,13 @@ export type { InductiveLink, InductiveLinkOptions, LinkCapacitor, LinkCompensati
  * parallel capacitor the input reactance is exactly 0. Validity: lumped, linear components at a
  * single frequency; a square-wave inverter is represented by its fundamental.
  * @see C.-S. Wang, O. H. Stielau, G. A. Covic, "Design considerations for a contactless electric
- *   vehicle battery charger", IEEE Trans. Ind. Electron. 52(5), 1308–1314 (2005) (SS, SP, PS, PP
- *   compensation; from memory); S. Li, W. Li, J. Deng, T. D. Nguyen, C. C. Mi, "A double-sided LCC
- *   compensation network…", IEEE Trans. Veh. Technol. 64(6), 2261–2273 (2015) (LCC tuning; from memory).
+ *   vehicle battery charger", IEEE Trans. Ind. Electron. 52(5), October 2005, from p. 1308 (title,
+ *   journal, issue and first page read from the paper's first page; its primary and secondary
+ *   resonant topologies SS, SP, PS, PP; the capacitor rules from memory); S. Li, W. Li, J. Deng,
+ *   T. D. Nguyen, C. C. Mi, "A Double-Sided LCC Compensation Network and Its Tuning Method for
+ *   Wireless Power Transfer", IEEE Trans. Veh. Technol., doi 10.1109/TVT.2014.2347006 (title and
+ *   DOI read from the accepted manuscript, whose abstract states the tuning that makes the
+ *   resonant frequency independent of coupling and load; volume 64(6), pp. 2261–2273 (2015) from memory).
  * @example
  * ```ts
  * import { inductiveLink } from "fluxwright";

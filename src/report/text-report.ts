@@ -77,7 +77,7 @@ export function lossEntries(p: HeaterOperatingPoint, withConcentrator = true): [
   return entries;
 }
 
-/** The leads of the design, when the description gives a length (both leads together). */
+/** The leads of the design, when the description gives a length (both leads together, or a coaxial cable's path out and back). */
 function leadRows(length: number, leads: HeaterStudy["description"]["coil"]["leads"]): [string, string][] {
   if (!(length > 0)) return [];
   const shape =
@@ -85,7 +85,9 @@ function leadRows(length: number, leads: HeaterStudy["description"]["coil"]["lea
       ? "no cross-section given (resistance only)"
       : leads.shape === "round-pair"
         ? `the coil conductor as a pair at ${q(leads.spacing, "m")} centres`
-        : `${leads.material.name} bars ${q(leads.width, "m")} × ${q(leads.thickness, "m")}, ${q(leads.gap, "m")} apart`;
+        : leads.shape === "flat-pair"
+          ? `${leads.material.name} bars ${q(leads.width, "m")} × ${q(leads.thickness, "m")}, ${q(leads.gap, "m")} apart`
+          : `${leads.material.name} coaxial, inner ${leads.innerWallThickness < leads.innerDiameter / 2 ? `tube ${q(leads.innerDiameter, "m")} × ${q(leads.innerWallThickness, "m")}` : `rod ${q(leads.innerDiameter, "m")}`} in a return tube ${q(leads.returnInnerDiameter, "m")} bore, ${q(leads.returnWallThickness, "m")} wall`;
   return [["leads (both together)", `${q(length, "m")}, ${shape}`]];
 }
 

@@ -94,13 +94,36 @@ export interface FlatPairLeadsDescription {
 }
 
 /**
- * The cross-section of the leads between coil and capacitor bank. With it the study adds the
- * leads' inductance in series with the coil and takes their resistance with skin and
- * proximity effect (`leadImpedance`); the run is half of `leadLength` (which counts both leads).
+ * A coaxial lead: a round inner conductor (rod or tube) inside a return tube, the current going
+ * out in one and back in the other. The cable is half of `leadLength` long (which counts the
+ * path out and back, as for a pair).
  *
  * @category Heater study
  */
-export type HeaterLeadsDescription = RoundPairLeadsDescription | FlatPairLeadsDescription;
+export interface CoaxialLeadsDescription {
+  /** Lead shape tag. */
+  readonly shape: "coaxial";
+  /** Outer diameter of the inner conductor [m], > 0. */
+  readonly innerDiameter: QuantityInput;
+  /** Wall thickness of the inner conductor if it is a tube [m], > 0 and ≤ innerDiameter/2; omitted: a solid rod. */
+  readonly innerWallThickness?: QuantityInput;
+  /** Inner diameter of the return tube [m], > innerDiameter. */
+  readonly returnInnerDiameter: QuantityInput;
+  /** Wall thickness of the return tube [m], > 0. */
+  readonly returnWallThickness: QuantityInput;
+  /** Material id or a material set of both conductors; default the coil conductor's material. */
+  readonly material?: ConductorMaterialId | ConductiveMaterial;
+}
+
+/**
+ * The cross-section of the leads between coil and capacitor bank. With it the study adds the
+ * leads' inductance in series with the coil and takes their resistance with skin and
+ * proximity effect (`leadImpedance`); the run is half of `leadLength` (which counts both leads,
+ * or a coaxial cable's path out and back).
+ *
+ * @category Heater study
+ */
+export type HeaterLeadsDescription = RoundPairLeadsDescription | FlatPairLeadsDescription | CoaxialLeadsDescription;
 
 /**
  * A single-layer solenoid (helical work coil) around the part.

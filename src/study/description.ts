@@ -17,6 +17,7 @@ export type {
   HeaterConductor,
   RoundPairLeadsDescription,
   FlatPairLeadsDescription,
+  CoaxialLeadsDescription,
   HeaterLeadsDescription,
   SolenoidCoilDescription,
   PancakeCoilDescription,

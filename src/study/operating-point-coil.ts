@@ -21,7 +21,7 @@ import { MU_0 } from "../units/index.js";
 import { CLOSED_FORM_COIL_INDUCTANCE_ERROR } from "./operating-point-accuracy.js";
 import type { CoilImpedanceTier, CoilProperties } from "./operating-point-types.js";
 import { conductorOuterDiameter } from "./read-description.js";
-import type { ResolvedConductor, ResolvedHeaterDescription } from "./read-description.js";
+import type { ResolvedCoaxialLeads, ResolvedConductor, ResolvedFlatPairLeads, ResolvedHeaterDescription } from "./read-description.js";
 
 /** Copper area of a resolved conductor as a round-wire equivalent diameter, for DC resistance. */
 function conductorDcResistance(conductor: ResolvedConductor, resistivity: number, length: number): number {
@@ -54,14 +54,27 @@ export function coilProperties(d: ResolvedHeaterDescription, impedanceTier: Coil
     windingLength = coil.turns * Math.PI * (coil.innerRadius + coil.outerRadius);
   }
   const leads = coil.leads;
-  if (leads !== null && leads.shape === "flat-pair") {
-    // bus-bar leads are conductors of their own: the coil's conductor ends at the winding
-    const barDc = (resistivityAt(leads.material, coil.temperature) * coil.leadLength) / (leads.width * leads.thickness);
-    const dcResistance = conductorDcResistance(coil.conductor, resistivity, windingLength) + barDc;
+  if (leads !== null && leads.shape !== "round-pair") {
+    // bus-bar and coaxial leads are conductors of their own: the coil's conductor ends at the winding
+    const dcResistance = conductorDcResistance(coil.conductor, resistivity, windingLength) + separateLeadsDcResistance(leads, coil.leadLength, coil.temperature);
     return { inductance, impedanceTier, windingLength, conductorLength: windingLength, resistivity, dcResistance, conductorDiameter };
   }
   const conductorLength = windingLength + coil.leadLength;
   return { inductance, impedanceTier, windingLength, conductorLength, resistivity, dcResistance: conductorDcResistance(coil.conductor, resistivity, conductorLength), conductorDiameter };
+}
+
+/**
+ * DC resistance of leads that are conductors of their own [Ω]: two bars of the lead length
+ * together, or a coaxial cable of half of it (inner conductor and return tube in series).
+ */
+function separateLeadsDcResistance(leads: ResolvedFlatPairLeads | ResolvedCoaxialLeads, leadLength: number, temperature: number): number {
+  const rho = resistivityAt(leads.material, temperature);
+  if (leads.shape === "flat-pair") return (rho * leadLength) / (leads.width * leads.thickness);
+  const a = leads.innerDiameter / 2;
+  const ri = a - leads.innerWallThickness;
+  const b = leads.returnInnerDiameter / 2;
+  const c = b + leads.returnWallThickness;
+  return ((rho * leadLength) / 2) * (1 / (Math.PI * (a * a - ri * ri)) + 1 / (Math.PI * (c * c - b * b)));
 }
 
 /** Conductor resistance per metre, isolated (skin effect only) [Ω/m]. */
@@ -88,7 +101,7 @@ function leadResistance(d: ResolvedHeaterDescription, props: CoilProperties, fre
  * The leads' series resistance [Ω] and inductance [H] at a frequency. Without a cross-section:
  * the isolated conductor's resistance and no inductance (as before leads had a geometry). With
  * one: `leadImpedance` for a run of half the lead length (a round pair of the coil's conductor,
- * or the bus bars); a litz pair carries a uniform current over its bundle, so its inductance is
+ * the bus bars, or the coaxial cable); a litz pair carries a uniform current over its bundle, so its inductance is
  * the exact uniform-current value (μ0ℓ/π)(ln(D/a) + 1/4) and its resistance the litz model's.
  */
 export function leadSeriesImpedance(d: ResolvedHeaterDescription, props: CoilProperties, frequency: number): { resistance: number; inductance: number } {
@@ -107,12 +120,17 @@ export function leadSeriesImpedance(d: ResolvedHeaterDescription, props: CoilPro
     const z = leadImpedance({ lead, length: run, frequency, resistivity: props.resistivity });
     return { resistance: z.resistance, inductance: z.inductance };
   }
-  const z = leadImpedance({
-    lead: { shape: "flat-pair", width: leads.width, thickness: leads.thickness, gap: leads.gap },
-    length: run,
-    frequency,
-    resistivity: resistivityAt(leads.material, d.coil.temperature),
-  });
+  const lead =
+    leads.shape === "flat-pair"
+      ? { shape: "flat-pair" as const, width: leads.width, thickness: leads.thickness, gap: leads.gap }
+      : {
+          shape: "coaxial" as const,
+          innerDiameter: leads.innerDiameter,
+          innerWallThickness: leads.innerWallThickness,
+          returnInnerDiameter: leads.returnInnerDiameter,
+          returnWallThickness: leads.returnWallThickness,
+        };
+  const z = leadImpedance({ lead, length: run, frequency, resistivity: resistivityAt(leads.material, d.coil.temperature) });
   return { resistance: z.resistance, inductance: z.inductance };
 }
 

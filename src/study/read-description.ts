@@ -26,6 +26,7 @@ export type {
   ResolvedCoilCommon,
   ResolvedRoundPairLeads,
   ResolvedFlatPairLeads,
+  ResolvedCoaxialLeads,
   ResolvedLeads,
   ResolvedSolenoidCoil,
   ResolvedPancakeCoil,

@@ -53,15 +53,16 @@ export function readConductor(rd: Reader, path: string, value: unknown): Resolve
  */
 export function readLeads(rd: Reader, value: unknown, conductor: ResolvedConductor | undefined, leadLength: number, leadLengthInput: unknown): ResolvedLeads | null | undefined {
   if (value === undefined) return null;
-  const o = rd.object("coil.leads", value, ["shape", "spacing", "width", "thickness", "gap", "material"]);
+  const o = rd.object("coil.leads", value, ["shape", "spacing", "width", "thickness", "gap", "innerDiameter", "innerWallThickness", "returnInnerDiameter", "returnWallThickness", "material"]);
   if (o === undefined) return undefined;
   if (!(leadLength > 0)) rd.fail("coil.leadLength", leadLengthInput, "", "> 0 when coil.leads is given (the leads' total length, both together)");
-  const shape = rd.oneOf("coil.leads.shape", o.shape, ["round-pair", "flat-pair"] as const);
+  const shape = rd.oneOf("coil.leads.shape", o.shape, ["round-pair", "flat-pair", "coaxial"] as const);
+  const coaxialKeys = ["innerDiameter", "innerWallThickness", "returnInnerDiameter", "returnWallThickness"];
   const forbid = (keys: readonly string[]): void => {
     for (const key of keys) if (o[key] !== undefined) rd.fail(`coil.leads.${key}`, o[key], "", `absent for ${String(shape)} leads`);
   };
   if (shape === "round-pair") {
-    forbid(["width", "thickness", "gap", "material"]);
+    forbid(["width", "thickness", "gap", "material", ...coaxialKeys]);
     const spacing = rd.quantity("coil.leads.spacing", o.spacing, "m", "positive");
     if (conductor !== undefined) {
       const d = conductorOuterDiameter(conductor);
@@ -70,14 +71,30 @@ export function readLeads(rd: Reader, value: unknown, conductor: ResolvedConduct
     return { shape, spacing };
   }
   if (shape === "flat-pair") {
-    forbid(["spacing"]);
+    forbid(["spacing", ...coaxialKeys]);
     const width = rd.quantity("coil.leads.width", o.width, "m", "positive");
     const thickness = rd.quantity("coil.leads.thickness", o.thickness, "m", "positive");
     const gap = rd.quantity("coil.leads.gap", o.gap, "m", "positive");
     const material = o.material === undefined ? conductor?.material : rd.material("coil.leads.material", o.material, CONDUCTOR_IDS);
     return material === undefined ? undefined : { shape, width, thickness, gap, material };
   }
+  if (shape === "coaxial") {
+    forbid(["spacing", "width", "thickness", "gap"]);
+    return readCoaxialLeads(rd, o, conductor);
+  }
   return undefined;
+}
+
+/** Coaxial leads (`coil.leads` with `shape: "coaxial"`): the inner conductor inside the return tube, without touching. */
+function readCoaxialLeads(rd: Reader, o: Record<string, unknown>, conductor: ResolvedConductor | undefined): ResolvedLeads | undefined {
+  const innerDiameter = rd.quantity("coil.leads.innerDiameter", o.innerDiameter, "m", "positive");
+  const innerWallThickness = o.innerWallThickness === undefined ? innerDiameter / 2 : rd.quantity("coil.leads.innerWallThickness", o.innerWallThickness, "m", "positive");
+  if (innerWallThickness > innerDiameter / 2) rd.fail("coil.leads.innerWallThickness", o.innerWallThickness, "", `≤ innerDiameter / 2 = ${limitText(innerDiameter / 2, "m", o.innerWallThickness)}`);
+  const returnInnerDiameter = rd.quantity("coil.leads.returnInnerDiameter", o.returnInnerDiameter, "m", "positive");
+  if (!(returnInnerDiameter > innerDiameter)) rd.fail("coil.leads.returnInnerDiameter", o.returnInnerDiameter, "", `> innerDiameter = ${limitText(innerDiameter, "m", o.returnInnerDiameter)} (the conductors would touch)`);
+  const returnWallThickness = rd.quantity("coil.leads.returnWallThickness", o.returnWallThickness, "m", "positive");
+  const material = o.material === undefined ? conductor?.material : rd.material("coil.leads.material", o.material, CONDUCTOR_IDS);
+  return material === undefined ? undefined : { shape: "coaxial", innerDiameter, innerWallThickness, returnInnerDiameter, returnWallThickness, material };
 }
 
 export function readCoil(rd: Reader, value: unknown): ResolvedCoil | undefined {

@@ -112,8 +112,24 @@ export interface ResolvedFlatPairLeads {
   readonly material: ConductiveMaterial;
 }
 
+/** Resolved coaxial leads. @category Heater study */
+export interface ResolvedCoaxialLeads {
+  /** Lead shape tag. */
+  readonly shape: "coaxial";
+  /** Outer diameter of the inner conductor [m]. */
+  readonly innerDiameter: number;
+  /** Wall thickness of the inner conductor [m]; innerDiameter/2 for a solid rod. */
+  readonly innerWallThickness: number;
+  /** Inner diameter of the return tube [m]. */
+  readonly returnInnerDiameter: number;
+  /** Wall thickness of the return tube [m]. */
+  readonly returnWallThickness: number;
+  /** Material of both conductors. */
+  readonly material: ConductiveMaterial;
+}
+
 /** Resolved lead cross-section. @category Heater study */
-export type ResolvedLeads = ResolvedRoundPairLeads | ResolvedFlatPairLeads;
+export type ResolvedLeads = ResolvedRoundPairLeads | ResolvedFlatPairLeads | ResolvedCoaxialLeads;
 
 /** Fields every resolved coil has. @category Heater study */
 export interface ResolvedCoilCommon {
