@@ -20,10 +20,16 @@ const FLIR_EMISSIVITY = "FLIR T10xx series operation manual, emissivity Table 39
 /** Data sheets of the wrought alloys (typical values at room temperature). */
 const ASM_304 = "ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel' (72 µΩ·cm at 20 °C, 116 µΩ·cm at 650 °C)";
 const AK_430 = "AK Steel Type 430 product data sheet (60 µΩ·cm at 21 °C; 0.46 kJ/(kg·K) over 0–100 °C; 26.1 W/(m·K) at 100 °C, 26.3 at 500 °C; 7.74 g/cm³)";
+const KOOZ_430 = "KOOZ special-steels data page for 1.4016 / X6Cr17 / AISI 430 (average values at ambient temperature: 25.0 W/(m·K), 0.60 Ω·mm²/m, 0.46 J/(g·K), 7.7 g/cm³)";
 const ATLAS_430 = "Atlas Steels grade 430 data (7750 kg/m³; 460 J/(kg·K) over 0–100 °C; 26.1 and 26.3 W/(m·K) at 100 and 500 °C; 600 nΩ·m)";
 const AA_6061 = "Aluminum Association typical values for 6061-T6, as in the BTI Metals and MatWeb 6061-T6 data sheets (43 % IACS; 167 W/(m·K) at 25 °C; 896 J/(kg·K) at 100 °C; 2.70 g/cm³; melting range 582–652 °C)";
 const OLIN_C26000 = "Olin Brass C26000 (ASTM B36) alloy data (28 % IACS annealed, 6.16 µΩ·cm; 8.53 g/cm³)";
 const TI64 = "BTI Metals Ti-6Al-4V data sheet (4.43 g/cm³; 526 J/(kg·K) at 25 °C; 6.70 W/(m·K) over 100–300 °C; 1780 nΩ·m at 25 °C; melting range 1604–1660 °C) and ASM/MatWeb Ti-6Al-4V (Grade 5) annealed bar (178 µΩ·cm)";
+/**
+ * Table A.1 of Lienhard & Lienhard read in a transcription (a public materials library quoting
+ * it row by row); the book itself was not at hand, and the transcription has slips in other rows.
+ */
+const LIENHARD_A1 = "J. H. Lienhard IV, J. H. Lienhard V, A Heat Transfer Textbook (Phlogiston Press 2011), Table A.1, as transcribed in a public materials library";
 const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.1.3 eq. (3.3) (thermal conductivity)";
 /**
  * The AISI 304 row of Incropera's Table A.1 (5th edition), read in a transcription: the
@@ -32,6 +38,18 @@ const EN1993 = "EN 1993-1-2:2005, §3.4.1.2 eq. (3.2) (specific heat) and §3.4.
  * 100–1000 K "from [Incropera2002, pp. 905 & 907]".
  */
 const INCROPERA_304 = "F. P. Incropera, D. P. DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (Wiley 2002), Table A.1, pp. 905 and 907, AISI 304 at 200–1000 K, as transcribed in the FCSys Modelica library (github.com/kdavies4/FCSys, Regions.mo, package AnFPs)";
+/**
+ * The AISI 304 row of the 7th edition's Table A.1 above 1000 K and its density, read in
+ * transcriptions: two public heat-transfer scripts that name that table give c_p 640 and
+ * 682 J/(kg·K) and k 28.0 and 31.7 W/(m·K) at 1200 and 1500 K (their 200–1000 K points are
+ * those of the FCSys transcription of the 5th edition), and one of them pairs the row with
+ * 7900 kg/m³.
+ */
+const INCROPERA_304_HOT = "F. P. Incropera, D. P. DeWitt, T. L. Bergman, A. S. Lavine, Fundamentals of Heat and Mass Transfer, 7th ed. (Wiley 2011), Table A.1, AISI 304 row (c_p 640 and 682 J/(kg·K), k 28.0 and 31.7 W/(m·K) at 1200 and 1500 K; 7900 kg/m³), as transcribed in two public heat-transfer scripts that name that table (the scan's page with that row was not at hand)";
+/** A maker's property page for type 304 with resistivity against temperature. */
+const VALLEY_304 = "Valley Design Corp., 'Type 304 and 304L Stainless Steel' property page (7.90 g/cm³; 72, 78, 86, 100, 111, 121, 126 µΩ·cm at 20, 100, 200, 400, 600, 800, 900 °C)";
+/** The same figures up to 400 °C for type 302, the base 18-8 grade. */
+const ASM_302 = "ASM/MatWeb data sheet 'AISI Type 302 Stainless Steel' (72, 78, 86, 100 µΩ·cm at 20, 100, 200, 400 °C)";
 const KUZMIN_IRON = "magnetisation curve: M. D. Kuz'min, Phys. Rev. Lett. 94, 107204 (2005), s = 0.35, p = 4 for iron (from memory)";
 
 /** Resistivity and temperature coefficient of brasses from a data page. */
@@ -77,10 +95,16 @@ const lowCarbonConductivity: TemperatureTable = Object.freeze({
 });
 
 /**
- * Low-carbon steel (about 0.1 % C, AISI 1010 class). Resistivity 0.142 µΩ·m at 20 °C,
- * rising about eightfold to 1.15 µΩ·m at 1000 °C (table, typical, from memory);
- * density 7870 kg/m³; specific heat from EN 1993-1-2 with its peak at 735 °C; thermal
- * conductivity 63.9 W/(m·K) at 300 K (Incropera et al., Table A.1, AISI 1010); emissivity
+ * Low-carbon steel (about 0.1 % C, AISI 1010 class). Resistivity 0.142 µΩ·m at 20 °C
+ * (within 1 % of the 1.43 × 10⁻⁷ Ω·m of MatMake's SAE/AISI 1010 data page and of the MatWeb
+ * AISI 1010 sheet as reproduced on a179.net), rising about eightfold to 1.15 µΩ·m at 1000 °C
+ * (table above 20 °C typical, from memory); density 7870 kg/m³ (the same two AISI 1010
+ * sources; Incropera's Table A.1 gives 7832, 0.5 % less); specific heat from EN 1993-1-2
+ * with its peak at 735 °C; thermal conductivity 63.9 W/(m·K) at 300 K (Incropera et al.,
+ * Table A.1, AISI 1010; that row ends at 1000 K), 28.0 W/(m·K) at 1200 K (from memory; within
+ * 3 % of EN 1993-1-2's 27.3 W/(m·K) for carbon steel from 800 to 1200 °C, read as quoted in
+ * Dlubal's knowledge-base article on that standard) and 30.0 at 1500 K (from memory; at 1200 °C
+ * the table reads 29.8, 9 % above EN 1993-1-2's 27.3); emissivity
  * 0.1–0.95, typical 0.8 (inside the FLIR table's 0.07 polished … 0.95–0.98 rough plate for
  * iron and steel; 0.8 is its value for steel oxidised at 200–600 °C). Ferromagnetic: Curie
  * temperature 1041 K (768 °C, the A2 point of iron; Atlas Steels: about 768 °C for carbon
@@ -146,7 +170,11 @@ const mediumCarbonConductivity = tableFromCelsius(
 
 /**
  * Medium-carbon steel (about 0.4–0.45 % C, AISI 1040/1045 class). Resistivity
- * 0.160 µΩ·m at 20 °C to 1.18 µΩ·m at 1000 °C (table, typical, from memory); density
+ * 0.160 µΩ·m at 20 °C (within 2 % of the 6.42 µΩ·in of Double Eagle Alloys' AISI 1045 page,
+ * but 6 % below the 17.1 µΩ·cm of the ASM/MatWeb AISI 1040 sheets), 0.221 and 0.296 µΩ·m at
+ * 100 and 200 °C (those 1040 sheets, as rolled and cold drawn, read in copies on steelsz.com
+ * and Scribd: 22.1 and 29.6 µΩ·cm), to 1.18 µΩ·m at 1000 °C (table above 200 °C typical, from
+ * memory); density
  * 7850 kg/m³; specific heat (with its peak at 735 °C) and thermal conductivity from
  * EN 1993-1-2; emissivity 0.1–0.95, typical 0.8 (as for low-carbon steel). Ferromagnetic:
  * Curie temperature 1041 K (768 °C, as for low-carbon steel), low-field relative permeability 600,
@@ -198,31 +226,35 @@ const austeniticResistivity = tableFromCelsius(
   [20, 100, 200, 300, 400, 500, 600, 700, 800, 900, 1000, 1200],
   [0.72, 0.78, 0.86, 0.92, 0.98, 1.03, 1.08, 1.12, 1.16, 1.19, 1.22, 1.27],
   1e6,
-  `typical for AISI 304 class: the 20 °C value agrees with the ${ASM_304}; the rest of the table is from memory and reads 1.10 µΩ·m at 650 °C, 5 % below that data sheet`,
+  `typical for AISI 304 class: 0.72 µΩ·m at 20 °C as in the ${ASM_304}; 0.78 and 0.86 µΩ·m at 100 and 200 °C as in ${VALLEY_304} and the ${ASM_302}; 0.98 and 1.08 µΩ·m at 400 and 600 °C within 3 % of that page's 1.00 and 1.11; the points at 300, 500 °C and from 700 °C up are from memory, and from 650 °C up the table reads 4–6 % below the sources (1.10 against the ASM sheet's 1.16 at 650 °C; 1.16 and 1.19 against Valley Design's 1.21 and 1.26 at 800 and 900 °C)`,
 );
 const austeniticSpecificHeat: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([402, 477, 515, 557, 582, 611, 640, 682]),
-  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
+  source: `${INCROPERA_304}; 1200 and 1500 K: ${INCROPERA_304_HOT}`,
 });
 const austeniticConductivity: TemperatureTable = Object.freeze({
   temperatures: Object.freeze([200, 300, 400, 600, 800, 1000, 1200, 1500]),
   values: Object.freeze([12.6, 14.9, 16.6, 19.8, 22.6, 25.4, 28.0, 31.7]),
-  source: `${INCROPERA_304}; the 1200 and 1500 K points lie beyond that transcription and are unverified (from memory)`,
+  source: `${INCROPERA_304}; 1200 and 1500 K: ${INCROPERA_304_HOT}`,
 });
 
 /**
  * Austenitic stainless steel (18Cr–8Ni, AISI 304 class), non-magnetic. Resistivity
- * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 1.22 µΩ·m at 1000 °C
- * (typical, from memory; 5 % below that data sheet's 1.16 µΩ·m at 650 °C); density 7900 kg/m³;
+ * 0.72 µΩ·m at 20 °C (ASM/MatWeb AISI 304 data sheet), 0.78 and 0.86 µΩ·m at 100 and
+ * 200 °C (Valley Design's type 304 page; ASM/MatWeb type 302), within 3 % of that page at 400
+ * and 600 °C; 1.22 µΩ·m at 1000 °C (typical, from memory; from 650 °C up the table reads
+ * 4–6 % below the 1.16 µΩ·m of the ASM sheet at 650 °C and Valley Design's 1.21 and 1.26 µΩ·m
+ * at 800 and 900 °C); density 7900 kg/m³ (Valley Design; Incropera et al., 7th ed., Table A.1);
  * specific heat and thermal conductivity of AISI 304 at 200–1000 K from Incropera & DeWitt,
- * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K; read in a
- * transcription, see the sources); their 1200 and 1500 K points from memory. Emissivity
+ * 5th ed., Table A.1, pp. 905 and 907 (477 J/(kg·K) and 14.9 W/(m·K) at 300 K), and at 1200
+ * and 1500 K from the 7th edition's Table A.1 (all read in transcriptions, see the sources). Emissivity
  * 0.1–0.85 (Raytek's 8–14 µm table: 0.1–0.8; 0.85 oxidised at 800 °C in an Ideal Industries
  * table), typical 0.4 (a choice within that range). Documented range 200–1500 K.
  *
  * @see Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 5th ed. (2002), Table A.1,
- *   pp. 905 and 907 (AISI 304).
+ *   pp. 905 and 907 (AISI 304); Incropera, DeWitt, Bergman, Lavine, 7th ed. (2011), Table A.1
+ *   (AISI 304 at 1200 and 1500 K, density).
  * @example
  * ```ts
  * import { austeniticStainless } from "fluxwright";
@@ -247,7 +279,7 @@ export const austeniticStainless: ConductiveMaterial = Object.freeze({
   magnetic: false,
   sources: Object.freeze([
     `resistivity: ${austeniticResistivity.source}`,
-    "density: typical, from memory",
+    `density: 7900 kg/m³ as in ${VALLEY_304} and in ${INCROPERA_304_HOT}; the ${ASM_304} gives 8.00 g/cm³ (1.3 % higher)`,
     `specific heat and thermal conductivity: ${austeniticConductivity.source}`,
     "solidus 1400 °C: ASM/MatWeb data sheet 'AISI Type 304 Stainless Steel'",
   ]),
@@ -270,14 +302,15 @@ const ferriticConductivity = tableFromCelsius(
   [20, 100, 500, 800, 1000],
   [25.0, 26.1, 26.3, 26.5, 27.5],
   1,
-  `typical for AISI 430 class: 26.1 W/(m·K) at 100 °C and 26.3 at 500 °C as in the ${AK_430}; 20, 800 and 1000 °C from memory`,
+  `typical for AISI 430 class: 25.0 W/(m·K) at 20 °C as in ${KOOZ_430}; 26.1 W/(m·K) at 100 °C and 26.3 at 500 °C as in the ${AK_430}; 800 and 1000 °C from memory`,
 );
 
 /**
  * Ferritic stainless steel (17Cr, AISI 430 class), ferromagnetic (martensitic grades behave
  * alike for heating purposes). Resistivity 0.60 µΩ·m at 20 °C, density 7750 kg/m³, specific
  * heat 460 J/(kg·K) near 20 °C and conductivity 26.1 W/(m·K) at 100 °C, 26.3 at 500 °C (AK
- * Steel and Atlas Steels type 430 data sheets); the other table points typical, from memory
+ * Steel and Atlas Steels type 430 data sheets), 25.0 W/(m·K) at 20 °C (KOOZ's 1.4016 data
+ * page); the other table points typical, from memory
  * (the Curie anomaly of the specific heat is not resolved); emissivity 0.1–0.85, typical 0.4 (as
  * for austenitic stainless). Curie
  * temperature 943 K (670 °C, from memory), low-field relative permeability 750, saturation
@@ -332,7 +365,7 @@ const alloyResistivity20 = ANNEALED_COPPER_RESISTIVITY / 0.43;
 /** Matthiessen's rule: the same dρ/dT as IEC 60889 aluminium, 2.8264e-8 × 0.00403 Ω·m/K. */
 const alloyCoefficient = (2.8264e-8 * 0.00403) / alloyResistivity20;
 const alloySpecificHeat = tableFromCelsius([20, 100, 200, 300, 400, 500], [896, 945, 985, 1030, 1080, 1130], 1, `typical for 6061 class, from memory; the data sheets' 896 J/(kg·K) is given at 100 °C, where this table reads 945 (${AA_6061})`);
-const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 177, 186, 190, 192, 190], 1, `typical for 6061-T6 class: 167 W/(m·K) near room temperature as in the ${AA_6061}; above 20 °C from memory`);
+const alloyConductivity = tableFromCelsius([20, 100, 200, 300, 400, 500], [167, 177, 186, 190, 192, 190], 1, `typical for 6061-T6 class: 167 W/(m·K) near room temperature as in the ${AA_6061}; above 20 °C from memory, and 3–6 % above the 172, 177, 180 W/(m·K) at 100, 200, 300 °C of ${LIENHARD_A1}`);
 
 /**
  * Wrought aluminium alloy (Al–Mg–Si, 6061-T6 class). Resistivity 43 % IACS
@@ -430,10 +463,10 @@ const titaniumResistivity = tableFromCelsius(
   [20, 200, 400, 600, 800, 1000],
   [1.7, 1.8, 1.9, 1.98, 2.04, 2.06],
   1e6,
-  `typical for Ti-6Al-4V class: 1.70 µΩ·m at 20 °C lies inside the data sheets' 1.68–1.78 µΩ·m (${TI64}); above 20 °C from memory`,
+  `typical for Ti-6Al-4V class: 1.70 µΩ·m at 20 °C lies inside the data sheets' 1.68–1.78 µΩ·m (${TI64}); above 20 °C from memory (Nickel Systems' Grade 5 page gives 1143 Ω·cmil/ft = 1.90 µΩ·m at 986 °F = 530 °C, 2.7 % below the table there, and 1.75 µΩ·m at 73 °F)`,
 );
 const titaniumSpecificHeat = tableFromCelsius([20, 200, 400, 600, 800, 1000], [526, 570, 610, 650, 690, 720], 1, `typical for Ti-6Al-4V class: 526 J/(kg·K) near room temperature as in the ${TI64}; above 20 °C from memory`);
-const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6.7, 8.8, 11.5, 14.0, 17.0, 20.0], 1, "typical for Ti-6Al-4V class, from memory");
+const titaniumConductivity = tableFromCelsius([20, 200, 400, 600, 800, 1000], [6.7, 8.8, 11.5, 14.0, 17.0, 20.0], 1, `typical for Ti-6Al-4V class, from memory; ${LIENHARD_A1} gives 7.1, 7.8, 8.8, 10, 12 W/(m·K) at 20, 100, 200, 300, 400 °C (the table: 6 % lower at 20 °C, equal at 200 °C, 4 % lower at 400 °C)`);
 
 /**
  * Titanium alloy (Ti–6Al–4V class), non-magnetic. Resistivity 1.70 µΩ·m at 20 °C (inside

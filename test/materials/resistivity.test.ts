@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { InputError, celsius } from "../../src/index.js";
-import { aluminium, aluminiumAlloy, brass, copper, ferriticStainless, lowCarbonSteel, resistivityAt, austeniticStainless, silver, titaniumAlloy } from "../../src/materials/index.js";
+import { aluminium, aluminiumAlloy, brass, copper, ferriticStainless, lowCarbonSteel, mediumCarbonSteel, resistivityAt, austeniticStainless, silver, titaniumAlloy } from "../../src/materials/index.js";
 import data from "../fixtures/materials/resistivity-linear.json" with { type: "json" };
 
 const sets = { copper, aluminium } as const;
@@ -34,6 +34,22 @@ describe("resistivityAt", () => {
     const ti = resistivityAt(titaniumAlloy, celsius(20));
     expect(ti).toBeGreaterThanOrEqual(1.68e-6); // producers' data sheets: 1.68 µΩ·m …
     expect(ti).toBeLessThanOrEqual(1.78e-6); // … to 1.78 µΩ·m (ASM/MatWeb, BTI Metals)
+  });
+
+  it("gives medium-carbon steel 22.1 and 29.6 µΩ·cm at 100 and 200 °C (ASM/MatWeb AISI 1040 sheets) and low-carbon steel 0.143 µΩ·m at 20 °C within 1 % (MatMake and MatWeb AISI 1010)", () => {
+    expect(resistivityAt(mediumCarbonSteel, celsius(100))).toBeCloseTo(0.221e-6, 15); // MatWeb AISI 1040: 22.1 µΩ·cm at 100 °C
+    expect(resistivityAt(mediumCarbonSteel, celsius(200))).toBeCloseTo(0.296e-6, 15); // MatWeb AISI 1040: 29.6 µΩ·cm at 200 °C
+    expect(Math.abs(resistivityAt(lowCarbonSteel, celsius(20)) - 0.143e-6) / 0.143e-6).toBeLessThan(0.01); // MatMake 1010: 1.43 × 10⁻⁷ Ω·m
+  });
+
+  it("gives AISI 304 the resistivity of Valley Design's type 304 page at 100 and 200 °C and within 3 % at 400 and 600 °C", () => {
+    // Valley Design 'Type 304 and 304L Stainless Steel': 78, 86, 100, 111 µΩ·cm at 100, 200, 400, 600 °C
+    // (ASM/MatWeb AISI 302: the same 78, 86, 100 µΩ·cm up to 400 °C)
+    expect(resistivityAt(austeniticStainless, celsius(100))).toBeCloseTo(0.78e-6, 15);
+    expect(resistivityAt(austeniticStainless, celsius(200))).toBeCloseTo(0.86e-6, 15);
+    for (const [t, rho] of [[400, 1.0e-6], [600, 1.11e-6]] as const) {
+      expect(Math.abs(resistivityAt(austeniticStainless, celsius(t)) - rho) / rho).toBeLessThan(0.03);
+    }
   });
 
   it("gives silver 1.587 × 10⁻⁸ Ω·m at 293 K (CRC Handbook, Electrical Resistivity of Pure Metals) and 0.0038 /K (OpenStax University Physics Vol. 2, §9.3, Table 9.1)", () => {
