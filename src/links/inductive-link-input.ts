@@ -80,5 +80,21 @@ export function inductiveLinkChecked(options: InductiveLinkOptions): InductiveLi
     throw new InputError(where, "secondaryFilterInductance", options.secondaryFilterInductance, "H", "absent (only double-LCC compensation has a secondary filter inductor)");
   }
   setLinkArguments(l1, l2, m, r1, r2, f, rl, v, givenC1, givenC2, lf1, lf2, root);
-  return solveLink(code);
+  return requireFiniteResults(solveLink(code), options);
+}
+
+/**
+ * The link, when every number in it is finite; else an {@link InputError}: inputs near the ends
+ * of the double range (a frequency of 1e-300 Hz, a source of 1e300 V) can make a current,
+ * power or capacitor overflow, or a power ratio 0/0, and are refused rather than answered with
+ * Infinity or NaN.
+ */
+function requireFiniteResults(link: InductiveLink, options: InductiveLinkOptions): InductiveLink {
+  let sum = link.efficiency + link.outputPower + link.inputPower + link.inputImpedance.re + Math.abs(link.inputImpedance.im) + link.inputCurrentRms;
+  sum += link.primaryCurrentRms + link.secondaryCurrentRms + link.loadVoltageRms + link.couplingCoefficient;
+  for (const c of link.capacitors) sum += c.capacitance + c.voltageRms + c.currentRms;
+  if (!(sum < Infinity)) {
+    throw new InputError("inductiveLink", "options", options, "", "values for which every result (currents, powers, input impedance, capacitors) lies within the double-precision range");
+  }
+  return link;
 }

@@ -33,7 +33,9 @@ export type { InductiveLink, InductiveLinkOptions, LinkCapacitor, LinkCompensati
  * @returns the {@link InductiveLink} (W, A, V, Ω)
  * @throws {@link InputError} for a non-finite or out-of-range value, M ≥ √(L₁L₂), an unknown
  *   option key or compensation, a missing or too large filter inductance, or a default
- *   capacitor that would have to be negative
+ *   capacitor that would have to be negative, or inputs so extreme (a frequency of 1e-300 Hz, a
+ *   source of 1e300 V) that a result would leave the double range: refused, never answered with
+ *   Infinity or NaN
  * @remarks Exact for the linear circuit (no approximation): ≤ 1e-12 relative, every result field
  * and every capacitor's capacitance, voltage and current, vs a 40-digit mpmath mesh solve of 360
  * seeded links with default and given capacitors (fixture test/fixtures/links/tuned.json; largest
@@ -79,17 +81,22 @@ export function inductiveLink(options: InductiveLinkOptions): InductiveLink {
     const lf1 = options.primaryFilterInductance;
     const lf2 = options.secondaryFilterInductance;
     const code = compensationCode(options.compensation);
-    // √(L₁L₂) once, for the bound on M and for k (NaN unless both are numbers: nothing coerced)
+    // √(L₁L₂) once, for the bound on M and for k (NaN unless both are numbers: nothing coerced,
+    // and the first test below fails before any comparison touches them)
     const root = typeof l1 === "number" && typeof l2 === "number" ? Math.sqrt(l1 * l2) : NaN;
+    // the fast path takes a box inside which every result is finite (1 pH ≤ L ≤ 1 kH, k ≥ 1e-6,
+    // R ≤ 1 MΩ, 1 mHz ≤ f ≤ 1 THz, 1 nΩ ≤ R_L ≤ 1 TΩ, 1 nV ≤ V ≤ 1 GV, 1e-9 ≤ L_f/L ≤ 1 − 1e-9, default
+    // capacitors; test/links/links.props.test.ts samples its corners); outside it the checked
+    // path solves and then verifies every result
     if (
-      typeof m === "number" && typeof r1 === "number" &&
+      root > 0 && typeof m === "number" && typeof r1 === "number" &&
       typeof r2 === "number" && typeof f === "number" && typeof rl === "number" && typeof v === "number" &&
-      l1 > 0 && l1 < Infinity && l2 > 0 && l2 < Infinity && m > 0 && m < root &&
-      r1 >= 0 && r1 < Infinity && r2 >= 0 && r2 < Infinity && f > 0 && f < Infinity &&
-      rl > 0 && rl < Infinity && v > 0 && v < Infinity && code >= 0 &&
+      l1 >= 1e-12 && l1 <= 1e3 && l2 >= 1e-12 && l2 <= 1e3 && m >= 1e-6 * root && m < root &&
+      r1 >= 0 && r1 <= 1e6 && r2 >= 0 && r2 <= 1e6 && f >= 1e-3 && f <= 1e12 &&
+      rl >= 1e-9 && rl <= 1e12 && v >= 1e-9 && v <= 1e9 && code >= 0 &&
       c1 === undefined && c2 === undefined &&
-      ((code & 4) === 0 ? lf1 === undefined : typeof lf1 === "number" && lf1 > 0 && lf1 < l1) &&
-      ((code & 8) === 0 ? lf2 === undefined : typeof lf2 === "number" && lf2 > 0 && lf2 < l2) &&
+      ((code & 4) === 0 ? lf1 === undefined : typeof lf1 === "number" && lf1 >= 1e-9 * l1 && lf1 <= 0.999999999 * l1) &&
+      ((code & 8) === 0 ? lf2 === undefined : typeof lf2 === "number" && lf2 >= 1e-9 * l2 && lf2 <= 0.999999999 * l2) &&
       linkFieldsKnown(options)
     ) {
       setLinkArguments(l1, l2, m, r1, r2, f, rl, v, 0, 0, lf1 ?? 0, lf2 ?? 0, root);

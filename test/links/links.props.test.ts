@@ -1,7 +1,18 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { inductiveLink, maximumLinkEfficiency, optimalLoadResistance } from "../../src/index.js";
+import { inductiveLink, InputError, maximumLinkEfficiency, optimalLoadResistance, type InductiveLink, type InductiveLinkOptions } from "../../src/index.js";
 import { logUniform } from "../support/arbitraries.js";
+import { uniform } from "../support/seeded.js";
+
+/** The sum of every number in a link result: finite exactly when each of them is. */
+function resultSum(r: InductiveLink): number {
+  let sum = r.efficiency + r.outputPower + r.inputPower + r.inputImpedance.re + Math.abs(r.inputImpedance.im) + r.inputCurrentRms;
+  sum += r.primaryCurrentRms + r.secondaryCurrentRms + r.loadVoltageRms + r.couplingCoefficient;
+  for (const c of r.capacitors) sum += c.capacitance + c.voltageRms + c.currentRms;
+  return sum;
+}
+
+const COMPENSATIONS = ["series-series", "series-parallel", "parallel-series", "parallel-parallel", "lcc-series", "double-lcc"] as const;
 
 describe("inductive link properties", () => {
   it("efficiency lies in (0, 1], power is conserved, and no link beats the kQ limit", () => {
@@ -22,6 +33,60 @@ describe("inductive link properties", () => {
       ),
       { seed: 18, numRuns: 300 },
     );
+  });
+
+  it("every result is finite over the whole box the fast path takes, its corners included (36 000 seeded links)", () => {
+    // the box written in inductiveLink's fast path: 1 pH ≤ L ≤ 1 kH, k ≥ 1e-6, R ≤ 1 MΩ, 1 mHz ≤ f ≤ 1 THz,
+    // 1 nΩ ≤ R_L ≤ 1 TΩ, 1 nV ≤ V ≤ 1 GV, 1e-9 ≤ L_f/L ≤ 1 − 1e-9; each draw an end of its range
+    // (80 % of the time in the first half of the draws) or a log-uniform value inside it
+    const next = uniform(61140);
+    const box: Record<string, [number, number]> = {
+      l1: [1e-12, 1e3], l2: [1e-12, 1e3], k: [1e-6, 0.999999], r1: [1e-300, 1e6], r2: [1e-300, 1e6], f: [1e-3, 1e12],
+      rl: [1e-9, 1e12], v: [1e-9, 1e9], x1: [1e-9, 0.999999999], x2: [1e-9, 0.999999999],
+    };
+    let finite = 0;
+    let refused = 0;
+    for (let t = 0; t < 36000; t++) {
+      const compensation = COMPENSATIONS[t % 6] ?? "series-series";
+      const corners = t < 18000 && next() < 0.8;
+      const draw = (key: string): number => {
+        const [lo, hi] = box[key] ?? [1, 1];
+        if (key.startsWith("r") && key !== "rl" && next() < 0.2) return 0;
+        return corners ? (next() < 0.5 ? lo : hi) : lo * (hi / lo) ** next();
+      };
+      const p = Object.fromEntries(Object.keys(box).map((key) => [key, draw(key)])) as Record<string, number>;
+      const l1 = p.l1 ?? 1;
+      const l2 = p.l2 ?? 1;
+      const options: InductiveLinkOptions = {
+        primaryInductance: l1, secondaryInductance: l2, mutualInductance: (p.k ?? 0.5) * Math.sqrt(l1 * l2), primaryResistance: p.r1 ?? 0,
+        secondaryResistance: p.r2 ?? 0, frequency: p.f ?? 1, compensation, loadResistance: p.rl ?? 1, sourceVoltage: p.v ?? 1,
+        ...(compensation === "lcc-series" || compensation === "double-lcc" ? { primaryFilterInductance: (p.x1 ?? 0.5) * l1 } : {}),
+        ...(compensation === "double-lcc" ? { secondaryFilterInductance: (p.x2 ?? 0.5) * l2 } : {}),
+      };
+      try {
+        expect(resultSum(inductiveLink(options))).toBeLessThan(Infinity);
+        finite++;
+      } catch (error) {
+        // the only refusal inside the box: a primary branch that is capacitive, so no default C₁
+        if (!(error instanceof InputError) || !/branch is capacitive/.test(error.message)) throw error;
+        refused++;
+      }
+    }
+    expect(finite + refused).toBe(36000);
+    expect(refused).toBeLessThan(0.02 * 36000); // 310 at this seed, nearly all at corners
+  });
+
+  it("refuses inputs whose results leave the double range instead of returning Infinity or NaN", () => {
+    const base = { primaryInductance: 24e-6, secondaryInductance: 12e-6, mutualInductance: 4e-6, primaryResistance: 0.1, secondaryResistance: 0.08, frequency: 140e3, loadResistance: 5, sourceVoltage: 10 };
+    const lcc = { primaryFilterInductance: 6e-6, secondaryFilterInductance: 3e-6 };
+    // 1e-300 Hz: the default capacitors 1/(ω²L) overflow; 1e300 V: the powers overflow; 1e-300 V: the powers underflow to 0/0
+    expect(() => inductiveLink({ ...base, compensation: "series-series", frequency: 1e-300 })).toThrow(/double-precision range/);
+    expect(() => inductiveLink({ ...base, compensation: "double-lcc", ...lcc, sourceVoltage: 1e300 })).toThrow(/double-precision range/);
+    expect(() => inductiveLink({ ...base, compensation: "parallel-series", sourceVoltage: 1e-300 })).toThrow(/double-precision range/);
+    // outside the fast path's box but within the double range: answered, through the checked path
+    const far = inductiveLink({ ...base, compensation: "series-series", frequency: 2e12 });
+    expect(resultSum(far)).toBeLessThan(Infinity);
+    expect(far.efficiency).toBeGreaterThan(0);
   });
 
   it("the kQ limit rises with k and with each Q, and the optimal load scales with R₂", () => {
