@@ -28,6 +28,20 @@ const FLAT_FIELDS: readonly string[] = Object.freeze(["shape", "width", "thickne
 const COAXIAL_FIELDS: readonly string[] = Object.freeze(["shape", "innerDiameter", "innerWallThickness", "returnInnerDiameter", "returnWallThickness"]);
 
 /**
+ * Largest ratio of a round conductor's radius to the skin depth evaluated: the Bessel functions
+ * of the round-pair and coaxial solutions cost time in proportion to it (about 25 ms at 1e6,
+ * seconds at 1e8). At 1e6 a 3 mm copper radius is at about 5e14 Hz, far beyond any lead.
+ */
+const MAX_RADIUS_OVER_SKIN_DEPTH = 1e6;
+
+/** Refuses a frequency at which the largest radius exceeds {@link MAX_RADIUS_OVER_SKIN_DEPTH} skin depths (bounded work). */
+function requireBoundedSkinRatio(where: string, frequency: number, resistivity: number, radius: number, delta: number): void {
+  if (radius / delta <= MAX_RADIUS_OVER_SKIN_DEPTH) return;
+  const highest = resistivity / (Math.PI * MU_0 * (radius / MAX_RADIUS_OVER_SKIN_DEPTH) ** 2);
+  throw new InputError(where, "frequency", frequency, "Hz", `at most ${highest.toPrecision(3)} (a skin depth of at least 1e-6 of the conductor radius ${radius} m)`);
+}
+
+/**
  * Two parallel round conductors (solid wire or tube) carrying the current out and back.
  *
  * @category Conductors
@@ -167,7 +181,8 @@ const FLAT_PAIR_MIN_ASPECT = 5;
  *
  * Hard domain (throws {@link InputError}): every length, the frequency and the resistivity
  * finite and > 0; round pair: spacing > diameter, wallThickness ≤ diameter/2; coaxial:
- * returnInnerDiameter > innerDiameter, innerWallThickness ≤ innerDiameter/2. Validity: straight
+ * returnInnerDiameter > innerDiameter, innerWallThickness ≤ innerDiameter/2; round pair and
+ * coaxial: a frequency at which the (outer) radius is more than 1e6 skin depths (bounded work). Validity: straight
  * parallel run much longer than its spacing (end effects ignored), non-magnetic metal, no
  * other conductors near.
  *
@@ -220,6 +235,7 @@ export function leadImpedance(options: LeadImpedanceOptions): LeadImpedance {
     const spacing = requirePositive(where, "lead.spacing", lead.spacing, "m");
     if (!(spacing > diameter)) throw new InputError(where, "lead.spacing", spacing, "m", `> diameter = ${diameter} (the conductors must not touch)`);
     const ri = Math.max(0, a - wall);
+    requireBoundedSkinRatio(where, frequency, resistivity, a, delta);
     const orders = ordersFor(spacing, a);
     if (orders >= MAX_ORDERS) {
       validity.push({
@@ -246,6 +262,7 @@ export function leadImpedance(options: LeadImpedanceOptions): LeadImpedance {
     const ri = Math.max(0, a - wall);
     const b = returnInnerDiameter / 2;
     const c = b + returnWall;
+    requireBoundedSkinRatio(where, frequency, resistivity, c, delta);
     dcPerMetre = resistivity / (Math.PI * (a * a - ri * ri)) + resistivity / (Math.PI * (c * c - b * b));
     const pa = new Float64Array(1);
     const paIm = new Float64Array(1);

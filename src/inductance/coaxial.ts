@@ -16,7 +16,9 @@ import {
 } from "../special/internal.js";
 
 /** How this module reads coil descriptions: the deprecated `kind: "spiral"` gives turn centres. */
-const RULES: CoilRules = Object.freeze({ legacySpiral: "turnCentres", multilayer: true });
+/** Most turns of a flat spiral: each pair of turns is one term of the sum (3000 turns with another 3000-turn spiral: about 0.5 s). */
+const MAX_SPIRAL_TURNS = 3000;
+const RULES: CoilRules = Object.freeze({ legacySpiral: "turnCentres", multilayer: true, spiralLimit: MAX_SPIRAL_TURNS });
 
 /**
  * A single circular filament (or `turns` filaments bunched at one place), centred on the axis.
@@ -346,8 +348,8 @@ export function multilayerShape(innerRadius: number, outerRadius: number, length
  *   `position` says [m], ≥ 0 (the centre distance when neither coil gives a `position`)
  * @returns mutual inductance [H], > 0 (coaxial windings with currents in the same sense)
  * @throws {@link InputError} for a malformed coil (non-positive or non-finite dimension,
- *   turns < 1, fractional spiral turns, outer radius not above inner radius, a flat spiral that
- *   mixes turn-centre and edge radii or uses the bare `innerRadius`/`outerRadius`), a negative or
+ *   turns < 1, fractional spiral turns or more than 3000 of them, outer radius not above inner
+ *   radius, a flat spiral that mixes turn-centre and edge radii or uses the bare `innerRadius`/`outerRadius`), a negative or
  *   non-finite `axialDistance`, or coinciding filaments
  * @remarks Accuracy: ≤ 1e-8 relative for smeared windings (verified for multilayer self-inductance
  * against a Bessel–Struve integral in mpmath) and ≤ 1e-12 relative for loops and spirals (sums of

@@ -177,6 +177,11 @@ export interface CoilRules {
    * whole and at most this many.
    */
   readonly loopLimit?: number;
+  /**
+   * Set when the caller sums one term per flat-spiral turn (and per pair of turns): spiral turns
+   * must then be at most this many, so that the work stays bounded.
+   */
+  readonly spiralLimit?: number;
   /** Whether `"multilayer"` is accepted. */
   readonly multilayer: boolean;
 }
@@ -224,6 +229,9 @@ function wholeTurns(where: string, parameter: string, value: unknown, limit: num
 function readSpiral(where: string, name: string, c: Record<string, unknown>, radiiAt: SpiralRadii, innerName: string, outerName: string, rules: CoilRules, position: number): CheckedSpiral {
   const turns =
     rules.loopLimit === undefined ? requireInteger(where, `${name}.turns`, c.turns, 1) : wholeTurns(where, `${name}.turns`, c.turns, rules.loopLimit);
+  if (rules.spiralLimit !== undefined && turns > rules.spiralLimit) {
+    throw new InputError(where, `${name}.turns`, turns, "", `an integer between 1 and ${rules.spiralLimit} for a flat spiral (one term per turn is summed, so the cost grows as turns²)`);
+  }
   let inner: number;
   let outer: number;
   if (radiiAt === "turnCentres") {

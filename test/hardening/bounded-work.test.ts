@@ -8,6 +8,8 @@
 import { describe, expect, it } from "vitest";
 import {
   InputError,
+  coaxialCoilMutualInductance,
+  leadImpedance,
   coilOverPlate,
   coilOverPlateTruncatedRegion,
   encirclingCoilOverRod,
@@ -40,6 +42,26 @@ describe("bounded work", () => {
     // Mohan et al. (1999) current-sheet expression agrees within a few per cent for dense spirals
     expect(Math.abs(value / spiralCoilInductanceMohan({ ...spiral, turns: 3000 }) - 1)).toBeLessThan(0.1);
     refusedQuickly(() => spiralCoilInductance({ ...spiral, turns: 30_000 }), /between 1 and 3000/);
+  });
+
+  it("coaxialCoilMutualInductance: two 3000-turn spirals within seconds, 3001 turns refused", () => {
+    const a = { kind: "flatSpiral" as const, innerTurnRadius: 0.01, outerTurnRadius: 0.04, turns: 3000 };
+    const b = { kind: "flatSpiral" as const, innerTurnRadius: 0.012, outerTurnRadius: 0.05, turns: 3000 };
+    const { seconds } = timed(() => coaxialCoilMutualInductance(a, b, 0.015));
+    expect(seconds).toBeLessThan(10);
+    refusedQuickly(() => coaxialCoilMutualInductance({ ...a, turns: 3001 }, b, 0.015), /between 1 and 3000/);
+    refusedQuickly(() => coaxialCoilMutualInductance({ ...a, turns: 1.2e301 }, b, 0.015), /coilA\.turns/);
+  });
+
+  it("leadImpedance: a radius of 1e6 skin depths within a second, higher frequencies refused", () => {
+    const coax = { shape: "coaxial" as const, innerDiameter: 6e-3, returnInnerDiameter: 12e-3, returnWallThickness: 1e-3 };
+    const rho = 1.7241e-8;
+    // the return tube's outer radius, 7 mm, at just under 1e6 skin depths: δ = 7e-9 m
+    const f = rho / (Math.PI * 4e-7 * Math.PI * 7.0001e-9 ** 2);
+    const { seconds } = timed(() => leadImpedance({ lead: coax, length: 0.4, frequency: f, resistivity: rho }));
+    expect(seconds).toBeLessThan(1);
+    refusedQuickly(() => leadImpedance({ lead: coax, length: 0.4, frequency: 1e300, resistivity: rho }), /frequency.*skin depth/);
+    refusedQuickly(() => leadImpedance({ lead: { shape: "round-pair", diameter: 6e-3, spacing: 12e-3 }, length: 0.4, frequency: 1e20, resistivity: rho }), /frequency.*skin depth/);
   });
 
   it("multilayerCoilInductance: length 1e-4 outer radii within seconds, thinner refused", () => {
