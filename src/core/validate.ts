@@ -314,3 +314,18 @@ export function requireArrayLike(where: string, parameter: string, value: unknow
   }
   return value as ArrayLike<unknown>;
 }
+
+/**
+ * A computed result when it is a finite number; otherwise an {@link InputError} naming the
+ * inputs: dimensions near the ends of the double range can make an exact formula overflow or
+ * give 0/0, and such inputs are refused rather than answered with Infinity or NaN. Internal.
+ *
+ * @param where - the public function
+ * @param parameter - the inputs that together set the result (for the message)
+ * @param given - a short text of their values
+ * @param result - the computed value
+ */
+export function requireFiniteResult(where: string, parameter: string, given: string, result: number): number {
+  if (Math.abs(result) < Infinity) return result;
+  throw new InputError(where, parameter, given, "", `values for which the result lies within the double-precision range (it came out ${String(result)})`);
+}

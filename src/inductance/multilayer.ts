@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { multilayerShape, shapeMutual } from "./coaxial.js";
 import { requireTurns } from "./coil-geometry.js";
 import { MU_0_HALF_PI, nagaokaKernel } from "./kernels.js";
@@ -85,12 +86,13 @@ export function multilayerCoilInductance(options: MultilayerCoilOptions): number
   if (l < MIN_LENGTH_RATIO * r2) {
     throw new InputError("multilayerCoilInductance", "length", l, "m", `at least ${MIN_LENGTH_RATIO} × outerRadius = ${MIN_LENGTH_RATIO * r2} (the integral's cost grows as outerRadius/length; a flatter winding is a flat spiral: use spiralCoilInductance)`);
   }
+  const given = `radii ${r1}–${r2} m, length ${l} m, ${n} turns`;
   if (r2 === r1) {
     const x = (2 * r1) / l;
-    return MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x);
+    return requireFiniteResult("multilayerCoilInductance", "innerRadius, outerRadius, length and turns", given, MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x));
   }
   const s = multilayerShape(r1, r2, l, n);
-  return shapeMutual(s, s, 0);
+  return requireFiniteResult("multilayerCoilInductance", "innerRadius, outerRadius, length and turns", given, shapeMutual(s, s, 0));
 }
 
 /** One inch in metres (exact). */

@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireInteger, requireKnownKeys, requireObject, requireOneOf, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { MU_0 } from "../units/index.js";
 import { checkSpiralRadii } from "./coil-geometry.js";
 import { maxwellOverMu0 } from "./kernels.js";
@@ -104,7 +105,7 @@ export function spiralCoilInductance(options: SpiralCoilOptions): number {
     self += loopSelf(ri, rho, surface);
     for (let j = i + 1; j < n; j++) mutual += maxwellOverMu0(ri, r1 + step * j, 0);
   }
-  return self + 2 * MU_0 * mutual;
+  return requireFiniteResult(where, "innerRadius, outerRadius and wireDiameter", `radii ${r1}–${r2} m, wire ${wire} m`, self + 2 * MU_0 * mutual);
 }
 
 /**

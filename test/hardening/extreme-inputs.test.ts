@@ -1,0 +1,37 @@
+/**
+ * Inputs near the ends of the double range that used to come back as NaN (found by
+ * scripts/extreme-inputs.ts, which scales every numeric input of every public function by
+ * 1e±150 and 1e±300): now an InputError naming the inputs.
+ */
+import { describe, expect, it } from "vitest";
+import { InputError, coaxialCoilMutualInductance, multilayerCoilInductance, spiralCoilInductance } from "../../src/index.js";
+
+function refused(f: () => unknown, pattern: RegExp): void {
+  let thrown: unknown;
+  try {
+    f();
+  } catch (e) {
+    thrown = e;
+  }
+  expect(thrown).toBeInstanceOf(InputError);
+  expect((thrown as Error).message).toMatch(pattern);
+}
+
+describe("extreme but finite dimensions", () => {
+  it("coaxialCoilMutualInductance: a spiral 4e298 m across is refused, not NaN", () => {
+    refused(() => coaxialCoilMutualInductance({ kind: "flatSpiral", innerTurnRadius: 0.01, outerTurnRadius: 4e298, turns: 12 }, { kind: "solenoid", radius: 0.02, length: 0.01, turns: 8 }, 0.015), /double-precision range/);
+  });
+
+  it("spiralCoilInductance: an outer radius of 6e298 m is refused, not NaN", () => {
+    refused(() => spiralCoilInductance({ innerRadius: 0.02, outerRadius: 6.2e298, turns: 15, wireDiameter: 0.002 }), /double-precision range/);
+  });
+
+  it("multilayerCoilInductance: a length of 1e298 m is refused, not NaN", () => {
+    refused(() => multilayerCoilInductance({ innerRadius: 0.01, outerRadius: 0.02, length: 1e298, turns: 100 }), /double-precision range/);
+  });
+
+  it("ordinary coils are unchanged by the check (finite, positive)", () => {
+    expect(spiralCoilInductance({ innerRadius: 0.02, outerRadius: 0.062, turns: 15, wireDiameter: 0.002 })).toBeGreaterThan(0);
+    expect(multilayerCoilInductance({ innerRadius: 0.01, outerRadius: 0.02, length: 0.03, turns: 100 })).toBeGreaterThan(0);
+  });
+});
