@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireInRange, requireInteger, requireKnownKeys, requireNonNegative, requireObject, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { MU_0 } from "../units/index.js";
 import { wireProximityFactorKernel, wireSkinFactorKernel } from "./round-wire-kernels.js";
 
@@ -117,6 +118,8 @@ function layFactorOf(c: CheckedLitz, bundleDiameter: number): number {
   const kr = (2 * Math.PI * (bundleDiameter / 2)) / c.twistPitch;
   const x = kr * kr;
   if (x < 1e-6) return 1 + x / 4;
+  // for x ≥ 1e200 the mean is (2/3)·kr·(1 + 1.5/x) − 2/(3x) = (2/3)·kr to rounding, and (1 + x)^1.5 would overflow
+  if (!(x < 1e200)) return (2 / 3) * kr;
   return (2 / (3 * x)) * (Math.pow(1 + x, 1.5) - 1);
 }
 
@@ -152,7 +155,10 @@ function layFactorOf(c: CheckedLitz, bundleDiameter: number): number {
  */
 export function litzGeometry(construction: LitzConstruction): LitzGeometry {
   const c = checkLitz("litzGeometry", construction);
-  return geometryOf(c);
+  const g = geometryOf(c);
+  const given = `${c.strands} strands of ${c.strandDiameter} m`;
+  requireFiniteResult("litzGeometry", "construction", given, g.copperArea + g.outerDiameter + g.copperFillFactor + g.layFactor);
+  return g;
 }
 
 function geometryOf(c: CheckedLitz): LitzGeometry {

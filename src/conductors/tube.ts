@@ -4,6 +4,7 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { kelvinFunctionsScaled } from "../special/index.js";
 import { MU_0 } from "../units/index.js";
 import { dowellFactorKernel } from "./dowell.js";
@@ -74,6 +75,12 @@ export interface TubeAcResistanceOptions {
  * @category Conductors
  */
 export function tubeAcResistance(options: TubeAcResistanceOptions): number {
+  const r = tubeAcResistanceOf(options);
+  return requireFiniteResult("tubeAcResistance", "outerDiameter, wallThickness, frequency and resistivity", `${options.outerDiameter} m × ${options.wallThickness} m at ${options.frequency} Hz`, r);
+}
+
+/** The computation of {@link tubeAcResistance} on its every path (the caller checks that the result is finite). */
+function tubeAcResistanceOf(options: TubeAcResistanceOptions): number {
   const where = "tubeAcResistance";
   requireObject(where, "options", options);
   requireKnownKeys(where, "", options, TUBE_FIELDS);

@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 
 /**
  * Options of {@link llcGain}.
@@ -134,7 +135,7 @@ export function seriesResonantGain(options: SeriesResonantGainOptions): number {
   requireKnownKeys(where, "options", options, ["qualityFactor", "normalisedFrequency"]);
   const q = requirePositive(where, "qualityFactor", options.qualityFactor, "");
   const fn = requirePositive(where, "normalisedFrequency", options.normalisedFrequency, "");
-  return llcGainKernel(Infinity, q, fn);
+  return requireFiniteResult(where, "normalisedFrequency", String(fn), llcGainKernel(Infinity, q, fn));
 }
 
 /**

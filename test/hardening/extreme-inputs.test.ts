@@ -4,7 +4,7 @@
  * 1e±150 and 1e±300): now an InputError naming the inputs.
  */
 import { describe, expect, it } from "vitest";
-import { InputError, coaxialCoilMutualInductance, multilayerCoilInductance, spiralCoilInductance } from "../../src/index.js";
+import { InputError, coaxialCoilMutualInductance, litzGeometry, multilayerCoilInductance, seriesResonantGain, spiralCoilInductance, tubeAcResistance } from "../../src/index.js";
 
 function refused(f: () => unknown, pattern: RegExp): void {
   let thrown: unknown;
@@ -28,6 +28,27 @@ describe("extreme but finite dimensions", () => {
 
   it("multilayerCoilInductance: a length of 1e298 m is refused, not NaN", () => {
     refused(() => multilayerCoilInductance({ innerRadius: 0.01, outerRadius: 0.02, length: 1e298, turns: 100 }), /double-precision range/);
+  });
+
+  it("tubeAcResistance: a tube 6e297 m across is refused, not NaN", () => {
+    refused(() => tubeAcResistance({ outerDiameter: 6e297, wallThickness: 1e-3, frequency: 20e3, resistivity: 1.7241e-8 }), /double-precision range/);
+  });
+
+  it("seriesResonantGain: a normalised frequency of 1e-300 is refused, not NaN", () => {
+    refused(() => seriesResonantGain({ qualityFactor: 0.5, normalisedFrequency: 1e-300 }), /double-precision range/);
+  });
+
+  it("litzGeometry: a twist pitch of 1e-300 m gives a finite lay factor ((2/3)·2πR/p to rounding) or an InputError, never NaN", () => {
+    const construction = { strands: 105, strandDiameter: 0.1e-3, strandOuterDiameter: 0.112e-3 };
+    let layFactor = Number.NaN;
+    try {
+      layFactor = litzGeometry({ ...construction, twistPitch: 1e-300 }).layFactor;
+    } catch (e) {
+      expect(e).toBeInstanceOf(InputError);
+      return;
+    }
+    const bundle = litzGeometry(construction).bundleDiameter;
+    expect(Math.abs(layFactor / ((2 / 3) * ((Math.PI * bundle) / 1e-300)) - 1)).toBeLessThan(1e-12);
   });
 
   it("ordinary coils are unchanged by the check (finite, positive)", () => {
