@@ -5,8 +5,14 @@
  * @packageDocumentation
  */
 import type { ValidityNote } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { MU_0 } from "../units/index.js";
 import type { CoilAbovePlate, CoilOverPlateResult, PlateLayer } from "./coil-over-plate-types.js";
+
+/** The public function a result is for: coilOverPlate passes its air-core inductance, the truncated region does not. */
+function where(airCore: number | null): string {
+  return airCore === null ? "coilOverPlateTruncatedRegion" : "coilOverPlate";
+}
 
 /** Result object from the three integrals: ΔZ = jωπμ0 n² (iRe + j iIm), L0 = 2πμ0 n² (h K + j). */
 export function assembleResult(
@@ -27,6 +33,9 @@ export function assembleResult(
   const kClosed = ((r2 ** 4 - r1 ** 4) / 4 - r1 ** 3 * (r2 - r1)) / 3;
   const l0 = airCore ?? 2 * c * (coil.length * kClosed + j);
   const dL = dX / omega;
+  // dimensions or frequencies near the ends of the double range can overflow the integrals or
+  // give 0/0: refused rather than answered with Infinity or NaN
+  requireFiniteResult(where(airCore), "coil and frequency", `coil radii ${r1}–${r2} m, height ${coil.length} m, ${coil.turns} turns at ${omega / (2 * Math.PI)} Hz`, dR + Math.abs(dX) + Math.abs(l0));
   const top = layers[0]!;
   const skinDepth = Math.sqrt((2 * top.resistivity) / (omega * MU_0 * top.relativePermeability));
   const validity: ValidityNote[] = [];

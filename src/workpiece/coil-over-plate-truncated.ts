@@ -18,6 +18,8 @@ const TRUNCATED_FIELDS: readonly string[] = Object.freeze(["domainRadius", "coil
 
 /** Largest lift-off / outer radius of the truncated-region series (cost about 0.2 s there). */
 const MAX_TRUNCATED_LIFT_OFF = 20;
+/** Most terms of the truncated-region series (its cost and memory grow with the count). */
+const MAX_TRUNCATED_TERMS = 200_000;
 
 /**
  * Options of {@link coilOverPlateTruncatedRegion}.
@@ -137,6 +139,11 @@ function truncatedRegionSums(coil: CoilAbovePlate, lay: LayerArrays, b: number):
   const aMax = (40 * Math.PI) / r2;
   const aExp = l1 > 0 ? 20 / l1 : Infinity;
   const count = Math.ceil((aMax * b) / Math.PI);
+  // default domains need at most about 50 000 terms (b ≤ 630 outer radii); a coil far taller
+  // than wide, or a domainRadius far beyond it, would need more: refused (bounded work)
+  if (!(count <= MAX_TRUNCATED_TERMS)) {
+    throw new InputError("coilOverPlateTruncatedRegion", "coil", `outer radius ${r2} m, height ${h} m, domain radius ${b} m`, "", `a coil and domain radius whose series needs at most ${MAX_TRUNCATED_TERMS} terms (domain radius ≤ ${(MAX_TRUNCATED_TERMS * Math.PI) / aMax} m for this outer radius)`);
+  }
   const zeros = besselJ1Zeros(count);
   let sumRe = 0;
   let sumIm = 0;

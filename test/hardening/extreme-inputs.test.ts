@@ -4,7 +4,7 @@
  * 1e±150 and 1e±300): now an InputError naming the inputs.
  */
 import { describe, expect, it } from "vitest";
-import { InputError, coaxialCoilMutualInductance, litzGeometry, multilayerCoilInductance, seriesResonantGain, spiralCoilInductance, tubeAcResistance } from "../../src/index.js";
+import { InputError, coaxialCoilMutualInductance, coilOverPlate, coilOverPlateTruncatedRegion, litzGeometry, multilayerCoilInductance, seriesResonantGain, spiralCoilInductance, tubeAcResistance } from "../../src/index.js";
 
 function refused(f: () => unknown, pattern: RegExp): void {
   let thrown: unknown;
@@ -49,6 +49,23 @@ describe("extreme but finite dimensions", () => {
     }
     const bundle = litzGeometry(construction).bundleDiameter;
     expect(Math.abs(layFactor / ((2 / 3) * ((Math.PI * bundle) / 1e-300)) - 1)).toBeLessThan(1e-12);
+  });
+
+  it("coilOverPlate and its truncated-region form: a coil 3e298 m wide or a THz-to-1e304 Hz field is refused, not NaN", () => {
+    const base = {
+      coil: { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 0.01, turns: 20 },
+      plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 },
+      frequency: 2e4,
+    };
+    const wide = { ...base, coil: { ...base.coil, outerRadius: 3e298 } };
+    refused(() => coilOverPlate(wide), /double-precision range/);
+    refused(() => coilOverPlate({ ...base, frequency: 2e304 }), /double-precision range/);
+    refused(() => coilOverPlateTruncatedRegion(wide), /double-precision range/);
+  });
+
+  it("coilOverPlateTruncatedRegion: a coil 1e298 m tall is refused by its term count, not a RangeError", () => {
+    const coil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 1e298, turns: 20 };
+    refused(() => coilOverPlateTruncatedRegion({ coil, plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 }, frequency: 2e4 }), /terms/);
   });
 
   it("ordinary coils are unchanged by the check (finite, positive)", () => {
