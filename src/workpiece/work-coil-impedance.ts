@@ -30,6 +30,7 @@ import {
   reduction,
   rodScale,
   solveSeries,
+  SINGULAR_MATRIX_START,
 } from "./work-coil-model.js";
 import type { Mesh, PartGeometry, PartKernel, PartMaterial } from "./work-coil-model.js";
 import { buildReduced, evaluateReduced, reducedModelFrom } from "./work-coil-reduced.js";
@@ -267,11 +268,17 @@ const PART_KEYS = {
   plate: ["shape", "radius", "thickness", "gap", "resistivity", "relativePermeability"],
 } as const;
 
+/** Most turns of a work coil: each turn is meshed, and the work grows faster than the count (bounded work). */
+const MAX_WORK_COIL_TURNS = 1000;
+
 function checkCoil(where: string, value: unknown): CoilGeometry {
   const c = requireObject(where, "coil", value);
   const shape = requireOneOf(where, "coil.shape", c["shape"], ["solenoid", "pancake"] as const);
   requireKnownKeys(where, "coil", c, COIL_KEYS[shape]);
   const turns = requireInteger(where, "coil.turns", c["turns"], 1);
+  if (turns > MAX_WORK_COIL_TURNS) {
+    throw new InputError(where, "coil.turns", turns, "", `an integer between 1 and ${MAX_WORK_COIL_TURNS} (each turn is meshed; 1000 turns take about 15 s)`);
+  }
   const resistivity = requirePositive(where, "coil.resistivity", c["resistivity"], "Ω·m");
   const k = requireObject(where, "coil.conductor", c["conductor"]);
   const kind = requireOneOf(where, "coil.conductor.kind", k["kind"], ["tube", "round", "strip", "litz"] as const);
@@ -342,6 +349,28 @@ function checkCoil(where: string, value: unknown): CoilGeometry {
     }
   }
   return { shape, centresR, centresZ, section, radialHalf, axialHalf, resistivity, conductor, litzCopperArea };
+}
+
+/**
+ * Largest ratio of a conductor's or part's size to its skin depth that is meshed: the cells
+ * follow the skin depth, so beyond it their count (and the matrices over them) would grow
+ * without bound, up to exhausting memory. 1e6 is far beyond any real coil (a 1 mm copper
+ * conductor reaches it near 4e15 Hz).
+ */
+const MAX_SIZE_OVER_SKIN_DEPTH = 1e6;
+
+/** Refuses a frequency at which the coil conductor or the part is more than {@link MAX_SIZE_OVER_SKIN_DEPTH} skin depths across (bounded work). */
+function requireBoundedMesh(where: string, geo: CoilGeometry, part: CheckedPart | undefined, f: number): void {
+  const coilRatio = Math.max(geo.radialHalf, geo.axialHalf) / skinDepthOf(geo.resistivity, f);
+  if (!(coilRatio <= MAX_SIZE_OVER_SKIN_DEPTH)) {
+    throw new InputError(where, "frequency", f, "Hz", `a frequency (with the coil's resistivity ${geo.resistivity} Ω·m) at which the conductor is at most ${MAX_SIZE_OVER_SKIN_DEPTH} skin depths across (it is ${coilRatio.toPrecision(3)})`);
+  }
+  if (part === undefined) return;
+  const size = Math.max(part.radius, part.length, part.thickness);
+  const partRatio = size / skinDepthOf(part.resistivity, f, part.relativePermeability);
+  if (!(partRatio <= MAX_SIZE_OVER_SKIN_DEPTH)) {
+    throw new InputError(where, "frequency", f, "Hz", `a frequency (with the part's resistivity and permeability) at which the part is at most ${MAX_SIZE_OVER_SKIN_DEPTH} skin depths across (it is ${partRatio.toPrecision(3)})`);
+  }
 }
 
 /** Checked part. */
@@ -1187,6 +1216,16 @@ export function workCoilImpedance(options: WorkCoilImpedanceOptions): WorkCoilIm
   const geo = checkCoil(where, options.coil);
   const f = requirePositive(where, "frequency", options.frequency, "Hz");
   const refinement = checkRefinement(where, options.refinement);
-  if (options.part !== undefined) checkPart(where, options.part, geo);
-  return prepared(geo, f, refinement).impedance(f, options.part);
+  const part = options.part === undefined ? undefined : checkPart(where, options.part, geo);
+  requireBoundedMesh(where, geo, part, f);
+  try {
+    return prepared(geo, f, refinement).impedance(f, options.part);
+  } catch (e) {
+    // the impedance matrix of a sound coil is far from singular; it breaks down only when
+    // dimensions or resistivity near the ends of the double range over- or underflow its entries
+    if (e instanceof Error && e.message.startsWith(SINGULAR_MATRIX_START) && e.message.endsWith("matrix is singular")) {
+      throw new InputError(where, "coil", `${geo.shape} of ${geo.centresR.length} turns, resistivity ${geo.resistivity} Ω·m at ${f} Hz`, "", "dimensions, resistivity and frequency for which the coil's impedance matrix can be factored in double precision (it came out singular)");
+    }
+    throw e;
+  }
 }

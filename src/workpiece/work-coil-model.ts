@@ -12,6 +12,11 @@
 import { besselI0Scaled, besselI1Scaled, besselJ1, besselK0Scaled, besselK1Scaled } from "../special/index.js";
 import { complexSymmetricFactor, complexSymmetricSolve } from "../special/complex-symmetric-solve.js";
 import { MU_0 } from "../units/index.js";
+
+/** Message of the internal error for a coil impedance matrix that cannot be factored (workCoilImpedance turns it into an InputError). */
+export const SINGULAR_COIL_MATRIX = "internal: the coil impedance matrix is singular";
+/** Start of every "… matrix is singular" internal error of the coil model (workCoilImpedance turns them into an InputError). */
+export const SINGULAR_MATRIX_START = "internal: the ";
 import type { CellSet } from "./work-coil-cells.js";
 import { reflectionInto } from "./coil-over-plate.js";
 import type { LayerArrays } from "./coil-over-plate.js";
@@ -136,7 +141,7 @@ export function solveSeries(red: Reduction, cells: CellSet, zRe: Float64Array, z
   const m = red.m;
   const g = red.groups;
   // keep the diagonal resistances for the copper loss
-  if (!complexSymmetricFactor(m, zRe, zIm)) throw new Error("internal: the coil impedance matrix is singular");
+  if (!complexSymmetricFactor(m, zRe, zIm)) throw new Error(SINGULAR_COIL_MATRIX);
   const xRe = new Float64Array(m * g);
   const xIm = new Float64Array(m * g);
   for (let a = 0; a < m; a++) if (red.group[a]! >= 0) xRe[red.group[a]! * m + a] = red.coefficient[a]!;

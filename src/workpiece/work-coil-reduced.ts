@@ -11,7 +11,7 @@
 import { complexGeneralSolve, complexSymmetricFactor, complexSymmetricSolve } from "../special/complex-symmetric-solve.js";
 import { symmetricEigen } from "../special/symmetric-eigen.js";
 import type { ReducedWorkCoilResult } from "./work-coil-impedance.js";
-import { emptyImpedanceInto, kernelCore, partCoefficients, pivotedGramSchmidt } from "./work-coil-model.js";
+import { SINGULAR_COIL_MATRIX, emptyImpedanceInto, kernelCore, partCoefficients, pivotedGramSchmidt } from "./work-coil-model.js";
 import type { Mesh, PartKernel, PartMaterial, Reduction } from "./work-coil-model.js";
 
 /** Relative truncation of the reduced basis, per normalised response (measured: R, L, ΔL within 2e-4 and ΔR within 1e-3 of the full solve on the scenario coils). */
@@ -198,7 +198,7 @@ function emptyResponses(mesh: Mesh, kernel: PartKernel, omega: number): { xRe: F
   const zRe = new Float64Array(m * m);
   const zIm = new Float64Array(m * m);
   emptyImpedanceInto(m, mesh.L, mesh.R, omega, zRe, zIm);
-  if (!complexSymmetricFactor(m, zRe, zIm)) throw new Error("internal: the coil impedance matrix is singular");
+  if (!complexSymmetricFactor(m, zRe, zIm)) throw new Error(SINGULAR_COIL_MATRIX);
   const xRe = new Float64Array(m * rhs);
   const xIm = new Float64Array(m * rhs);
   sourceColumnsInto(red, kernel, xRe);

@@ -4,7 +4,7 @@
  * 1e±150 and 1e±300): now an InputError naming the inputs.
  */
 import { describe, expect, it } from "vitest";
-import { InputError, coaxialCoilMutualInductance, coilOverPlate, coilOverPlateTruncatedRegion, litzGeometry, multilayerCoilInductance, seriesResonantGain, spiralCoilInductance, tubeAcResistance } from "../../src/index.js";
+import { InputError, coaxialCoilMutualInductance, coilOverPlate, coilOverPlateTruncatedRegion, litzGeometry, workCoilImpedance, multilayerCoilInductance, seriesResonantGain, spiralCoilInductance, tubeAcResistance } from "../../src/index.js";
 
 function refused(f: () => unknown, pattern: RegExp): void {
   let thrown: unknown;
@@ -66,6 +66,13 @@ describe("extreme but finite dimensions", () => {
   it("coilOverPlateTruncatedRegion: a coil 1e298 m tall is refused by its term count, not a RangeError", () => {
     const coil = { innerRadius: 0.01, outerRadius: 0.03, liftOff: 0.004, length: 1e298, turns: 20 };
     refused(() => coilOverPlateTruncatedRegion({ coil, plate: { thickness: 0.003, resistivity: 3e-8, relativePermeability: 1 }, frequency: 2e4 }), /terms/);
+  });
+
+  it("workCoilImpedance: extreme turns, resistivities and walls are refused with an InputError (they had exhausted memory or thrown an internal error)", () => {
+    const coil = { shape: "solenoid" as const, radius: 0.02, length: 0.012, turns: 2, conductor: { kind: "round" as const, diameter: 0.002 }, resistivity: 1.75e-8 };
+    refused(() => workCoilImpedance({ coil: { ...coil, turns: 1001 }, frequency: 1e3 }), /coil\.turns.*between 1 and 1000/);
+    refused(() => workCoilImpedance({ coil: { ...coil, resistivity: 1.75e-308 }, frequency: 1e3 }), /skin depths/);
+    refused(() => workCoilImpedance({ coil: { ...coil, conductor: { kind: "tube" as const, outerDiameter: 0.003, wallThickness: 1e-303 } }, frequency: 1e3 }), /impedance matrix can be factored|skin depths|wallThickness/);
   });
 
   it("ordinary coils are unchanged by the check (finite, positive)", () => {
