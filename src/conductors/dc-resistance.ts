@@ -4,6 +4,7 @@
  * @packageDocumentation
  */
 import { requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { resistivityAt } from "../materials/index.js";
 import type { ConductiveMaterial } from "../materials/index.js";
 
@@ -53,7 +54,7 @@ export function wireDcResistance(options: WireDcResistanceOptions): number {
   const resistivity = requirePositive("wireDcResistance", "resistivity", options.resistivity, "Ω·m");
   const length = requirePositive("wireDcResistance", "length", options.length, "m");
   const diameter = requirePositive("wireDcResistance", "diameter", options.diameter, "m");
-  return (4 * resistivity * length) / (Math.PI * diameter * diameter);
+  return requireFiniteResult("wireDcResistance", "resistivity, length and diameter", (4 * resistivity * length) / (Math.PI * diameter * diameter));
 }
 
 /** Options of {@link wireDcResistanceAt}. @category Conductors */
@@ -98,5 +99,5 @@ export function wireDcResistanceAt(options: WireDcResistanceAtOptions): number {
   const length = requirePositive("wireDcResistanceAt", "length", options.length, "m");
   const diameter = requirePositive("wireDcResistanceAt", "diameter", options.diameter, "m");
   const resistivity = resistivityAt(material, temperature);
-  return (4 * resistivity * length) / (Math.PI * diameter * diameter);
+  return requireFiniteResult("wireDcResistanceAt", "length and diameter", (4 * resistivity * length) / (Math.PI * diameter * diameter));
 }

@@ -156,8 +156,7 @@ function layFactorOf(c: CheckedLitz, bundleDiameter: number): number {
 export function litzGeometry(construction: LitzConstruction): LitzGeometry {
   const c = checkLitz("litzGeometry", construction);
   const g = geometryOf(c);
-  const given = `${c.strands} strands of ${c.strandDiameter} m`;
-  requireFiniteResult("litzGeometry", "construction", given, g.copperArea + g.outerDiameter + g.copperFillFactor + g.layFactor);
+  requireFiniteResult("litzGeometry", "construction", g.copperArea + g.outerDiameter + g.copperFillFactor + g.layFactor);
   return g;
 }
 
@@ -212,7 +211,7 @@ export function litzDcResistance(options: LitzDcResistanceOptions): number {
   const resistivity = requirePositive(where, "resistivity", options.resistivity, "Ω·m");
   const length = requirePositive(where, "length", options.length, "m");
   const g = geometryOf(c);
-  return (resistivity * length * g.layFactor) / g.copperArea;
+  return requireFiniteResult("litzDcResistance", "construction, resistivity and length", (resistivity * length * g.layFactor) / g.copperArea);
 }
 
 /** Options of {@link litzAcRatio}. @category Conductors */

@@ -76,7 +76,7 @@ export interface TubeAcResistanceOptions {
  */
 export function tubeAcResistance(options: TubeAcResistanceOptions): number {
   const r = tubeAcResistanceOf(options);
-  return requireFiniteResult("tubeAcResistance", "outerDiameter, wallThickness, frequency and resistivity", `${options.outerDiameter} m × ${options.wallThickness} m at ${options.frequency} Hz`, r);
+  return requireFiniteResult("tubeAcResistance", "outerDiameter, wallThickness, frequency and resistivity", r);
 }
 
 /** The computation of {@link tubeAcResistance} on its every path (the caller checks that the result is finite). */

@@ -135,7 +135,7 @@ export function seriesResonantGain(options: SeriesResonantGainOptions): number {
   requireKnownKeys(where, "options", options, ["qualityFactor", "normalisedFrequency"]);
   const q = requirePositive(where, "qualityFactor", options.qualityFactor, "");
   const fn = requirePositive(where, "normalisedFrequency", options.normalisedFrequency, "");
-  return requireFiniteResult(where, "normalisedFrequency", String(fn), llcGainKernel(Infinity, q, fn));
+  return requireFiniteResult(where, "normalisedFrequency", llcGainKernel(Infinity, q, fn));
 }
 
 /**

@@ -318,14 +318,14 @@ export function requireArrayLike(where: string, parameter: string, value: unknow
 /**
  * A computed result when it is a finite number; otherwise an {@link InputError} naming the
  * inputs: dimensions near the ends of the double range can make an exact formula overflow or
- * give 0/0, and such inputs are refused rather than answered with Infinity or NaN. Internal.
+ * give 0/0, and such inputs are refused rather than answered with Infinity or NaN. Nothing is
+ * built unless it throws (it sits on hot paths). Internal.
  *
  * @param where - the public function
  * @param parameter - the inputs that together set the result (for the message)
- * @param given - a short text of their values
  * @param result - the computed value
  */
-export function requireFiniteResult(where: string, parameter: string, given: string, result: number): number {
+export function requireFiniteResult(where: string, parameter: string, result: number): number {
   if (Math.abs(result) < Infinity) return result;
-  throw new InputError(where, parameter, given, "", `values for which the result lies within the double-precision range (it came out ${String(result)})`);
+  throw new InputError(where, parameter, result, "", "values for which the result lies within the double-precision range");
 }

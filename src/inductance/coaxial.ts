@@ -382,5 +382,5 @@ export function coaxialCoilMutualInductance(coilA: CoilGeometry | CoaxialSpiralC
   if (filamentsCoincide(a, b, d)) {
     throw new InputError(where, "axialDistance", d, "", "> 0 m when a filament of coilA and one of coilB share a radius (coinciding filaments have infinite mutual inductance)");
   }
-  return requireFiniteResult(where, "coilA, coilB and axialDistance", `coil radii ${a.r1}–${a.r2} m and ${b.r1}–${b.r2} m at ${d} m`, shapeMutual(a, b, d));
+  return requireFiniteResult(where, "coilA, coilB and axialDistance", shapeMutual(a, b, d));
 }

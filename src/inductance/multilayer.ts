@@ -86,13 +86,12 @@ export function multilayerCoilInductance(options: MultilayerCoilOptions): number
   if (l < MIN_LENGTH_RATIO * r2) {
     throw new InputError("multilayerCoilInductance", "length", l, "m", `at least ${MIN_LENGTH_RATIO} × outerRadius = ${MIN_LENGTH_RATIO * r2} (the integral's cost grows as outerRadius/length; a flatter winding is a flat spiral: use spiralCoilInductance)`);
   }
-  const given = `radii ${r1}–${r2} m, length ${l} m, ${n} turns`;
   if (r2 === r1) {
     const x = (2 * r1) / l;
-    return requireFiniteResult("multilayerCoilInductance", "innerRadius, outerRadius, length and turns", given, MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x));
+    return requireFiniteResult("multilayerCoilInductance", "innerRadius, outerRadius, length and turns", MU_0_HALF_PI * n * n * r1 * x * nagaokaKernel(x));
   }
   const s = multilayerShape(r1, r2, l, n);
-  return requireFiniteResult("multilayerCoilInductance", "innerRadius, outerRadius, length and turns", given, shapeMutual(s, s, 0));
+  return requireFiniteResult("multilayerCoilInductance", "innerRadius, outerRadius, length and turns", shapeMutual(s, s, 0));
 }
 
 /** One inch in metres (exact). */
@@ -124,7 +123,7 @@ export function multilayerCoilInductanceWheeler(options: MultilayerCoilOptions):
   const [r1, r2, l, n] = readMultilayer("multilayerCoilInductanceWheeler", options);
   const a = 0.5 * (r1 + r2);
   const c = r2 - r1;
-  return (0.8e-6 * a * a * n * n) / (INCH * (6 * a + 9 * l + 10 * c));
+  return requireFiniteResult("multilayerCoilInductanceWheeler", "radii, length and turns", (0.8e-6 * a * a * n * n) / (INCH * (6 * a + 9 * l + 10 * c)));
 }
 
 /**
@@ -175,5 +174,5 @@ export function brooksCoilInductance(options: BrooksCoilOptions): number {
   }
   const a = hasSide ? 1.5 * requirePositive(where, "sideLength", options.sideLength, "m") : requirePositive(where, "meanRadius", options.meanRadius, "m");
   const n = requireTurns(where, "turns", options.turns);
-  return 1.6994e-6 * a * n * n;
+  return requireFiniteResult("brooksCoilInductance", "meanRadius and turns", 1.6994e-6 * a * n * n);
 }

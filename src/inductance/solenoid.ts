@@ -5,6 +5,7 @@
  * @packageDocumentation
  */
 import { InputError, requireKnownKeys, requireObject, requirePositive } from "../core/index.js";
+import { requireFiniteResult } from "../core/validate.js";
 import { MU_0 } from "../units/index.js";
 import { requireTurns } from "./coil-geometry.js";
 import { MU_0_HALF_PI, nagaokaKernel, nagaokaLong, nagaokaShort } from "./kernels.js";
@@ -214,5 +215,5 @@ export function solenoidInductanceWheeler(options: SolenoidInductanceWheelerOpti
   const r = requirePositive(where, "radius", options.radius, "m");
   const l = requirePositive(where, "length", options.length, "m");
   const n = requireTurns(where, "turns", options.turns);
-  return (1e-6 * n * n * r * r) / (INCH * (9 * r + 10 * l));
+  return requireFiniteResult("solenoidInductanceWheeler", "radius, length and turns", (1e-6 * n * n * r * r) / (INCH * (9 * r + 10 * l)));
 }

@@ -105,7 +105,7 @@ export function spiralCoilInductance(options: SpiralCoilOptions): number {
     self += loopSelf(ri, rho, surface);
     for (let j = i + 1; j < n; j++) mutual += maxwellOverMu0(ri, r1 + step * j, 0);
   }
-  return requireFiniteResult(where, "innerRadius, outerRadius and wireDiameter", `radii ${r1}–${r2} m, wire ${wire} m`, self + 2 * MU_0 * mutual);
+  return requireFiniteResult(where, "innerRadius, outerRadius and wireDiameter", self + 2 * MU_0 * mutual);
 }
 
 /**
@@ -154,7 +154,7 @@ function sheetOf(where: string, options: SpiralCoilApproximationOptions): [numbe
  */
 export function spiralCoilInductanceWheeler(options: SpiralCoilApproximationOptions): number {
   const [a, c, n] = sheetOf("spiralCoilInductanceWheeler", options);
-  return (1e-6 * a * a * n * n) / (INCH * (8 * a + 11 * c));
+  return requireFiniteResult("spiralCoilInductanceWheeler", "radii and turns", (1e-6 * a * a * n * n) / (INCH * (8 * a + 11 * c)));
 }
 
 /** One inch in metres (exact). */
@@ -188,5 +188,5 @@ const INCH = 0.0254;
 export function spiralCoilInductanceMohan(options: SpiralCoilApproximationOptions): number {
   const [a, c, n] = sheetOf("spiralCoilInductanceMohan", options);
   const rho = c / (2 * a);
-  return MU_0 * n * n * a * (Math.log(2.46 / rho) + 0.2 * rho * rho);
+  return requireFiniteResult("spiralCoilInductanceMohan", "radii and turns", MU_0 * n * n * a * (Math.log(2.46 / rho) + 0.2 * rho * rho));
 }

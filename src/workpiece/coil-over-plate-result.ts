@@ -35,7 +35,7 @@ export function assembleResult(
   const dL = dX / omega;
   // dimensions or frequencies near the ends of the double range can overflow the integrals or
   // give 0/0: refused rather than answered with Infinity or NaN
-  requireFiniteResult(where(airCore), "coil and frequency", `coil radii ${r1}–${r2} m, height ${coil.length} m, ${coil.turns} turns at ${omega / (2 * Math.PI)} Hz`, dR + Math.abs(dX) + Math.abs(l0));
+  requireFiniteResult(where(airCore), "coil and frequency", dR + Math.abs(dX) + Math.abs(l0));
   const top = layers[0]!;
   const skinDepth = Math.sqrt((2 * top.resistivity) / (omega * MU_0 * top.relativePermeability));
   const validity: ValidityNote[] = [];

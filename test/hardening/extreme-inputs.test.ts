@@ -4,6 +4,17 @@
  * 1e±150 and 1e±300): now an InputError naming the inputs.
  */
 import { describe, expect, it } from "vitest";
+import {
+  brooksCoilInductance,
+  litzDcResistance,
+  multilayerCoilInductanceWheeler,
+  solenoidInductanceWheeler,
+  spiralCoilInductanceMohan,
+  spiralCoilInductanceWheeler,
+  wireDcResistance,
+  wireDcResistanceAt,
+} from "../../src/index.js";
+import { copper } from "../../src/materials/index.js";
 import { InputError, coaxialCoilMutualInductance, coilOverPlate, coilOverPlateTruncatedRegion, litzGeometry, workCoilImpedance, multilayerCoilInductance, seriesResonantGain, spiralCoilInductance, tubeAcResistance } from "../../src/index.js";
 
 function refused(f: () => unknown, pattern: RegExp): void {
@@ -68,6 +79,18 @@ describe("extreme but finite dimensions", () => {
     refused(() => workCoilImpedance({ coil: { ...coil, turns: 1001 }, frequency: 1e3 }), /coil\.turns.*between 1 and 1000/);
     refused(() => workCoilImpedance({ coil: { ...coil, resistivity: 1.75e-308 }, frequency: 1e3 }), /skin depths/);
     refused(() => workCoilImpedance({ coil: { ...coil, conductor: { kind: "tube" as const, outerDiameter: 0.003, wallThickness: 1e-303 } }, frequency: 1e3 }), /impedance matrix can be factored|skin depths|wallThickness/);
+  });
+
+  it("closed forms whose value overflows (1e300 turns, a 1e-300 m wire) are refused, not Infinity", () => {
+    const range = /double-precision range/;
+    refused(() => wireDcResistance({ resistivity: 1.7241e-8, length: 1, diameter: 1e-300 }), range);
+    refused(() => wireDcResistanceAt({ material: copper, temperature: 373.15, length: 10, diameter: 1e-300 }), range);
+    refused(() => litzDcResistance({ construction: { strands: 105, strandDiameter: 1e-300 }, resistivity: 1.7241e-8, length: 1 }), range);
+    refused(() => brooksCoilInductance({ sideLength: 0.01, turns: 1e300 }), range);
+    refused(() => solenoidInductanceWheeler({ radius: 0.02, length: 0.05, turns: 1e300 }), range);
+    refused(() => multilayerCoilInductanceWheeler({ innerRadius: 0.01, outerRadius: 0.02, length: 0.03, turns: 1e300 }), range);
+    refused(() => spiralCoilInductanceWheeler({ innerRadius: 0.01, outerRadius: 0.05, turns: 1e300 }), range);
+    refused(() => spiralCoilInductanceMohan({ innerRadius: 0.01, outerRadius: 0.05, turns: 1e300 }), range);
   });
 
   it("ordinary coils are unchanged by the check (finite, positive)", () => {
